@@ -1,0 +1,139 @@
+// Brings up everything Mantlepiece needs on one machine, in order, and takes it down again:
+// private MariaDB → database and user → server build → migrations → demo seed → SMTP stand-in →
+// studio and kiosk builds → NestJS server. Used by `npm start` and `npm test` alike.
+import fs from 'node:fs';
+import path from 'node:path';
+import crypto from 'node:crypto';
+import { fileURLToPath } from 'node:url';
+import { phase, PhaseError } from './phase.mjs';
+import { run, startOwned, waitFor } from './processes.mjs';
+import { assertPortFree } from './ports.mjs';
+import { startPrivateMariaDb, provisionDatabase } from './mariadb.mjs';
+
+export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
+
+export function ensureDependencies() {
+  const installed = fs.existsSync(path.join(root, 'node_modules/.package-lock.json'));
+  const lock = path.join(root, 'package-lock.json');
+  if (installed && fs.statSync(path.join(root, 'node_modules/.package-lock.json')).mtimeMs >= fs.statSync(lock).mtimeMs) return;
+  phase('dependencies', 'npm ci');
+  const result = run('npm', ['ci', '--no-audit', '--no-fund'], { cwd: root });
+  if (result.status !== 0) throw new PhaseError('dependencies', 'npm ci failed');
+}
+
+function npmRun(script, workspace, phaseName, env) {
+  const result = run('npm', ['run', script, '-w', workspace], { cwd: root, quiet: true, env });
+  if (result.status !== 0) {
+    process.stderr.write(result.stdout + result.stderr);
+    throw new PhaseError(phaseName, `npm run ${script} -w ${workspace} failed`);
+  }
+}
+
+function secrets(dataDir) {
+  const file = path.join(dataDir, 'secrets.json');
+  if (!fs.existsSync(file)) {
+    fs.writeFileSync(file, JSON.stringify({ jwtSecret: crypto.randomBytes(32).toString('base64url') }), { mode: 0o600 });
+  }
+  return JSON.parse(fs.readFileSync(file, 'utf8'));
+}
+
+/** A build is skipped when its output is newer than every source file it comes from. */
+function upToDate(output, sources) {
+  if (!fs.existsSync(output)) return false;
+  const built = fs.statSync(output).mtimeMs;
+  const newest = (dir) => {
+    if (!fs.existsSync(dir)) return 0;
+    const stat = fs.statSync(dir);
+    if (!stat.isDirectory()) return stat.mtimeMs;
+    return Math.max(stat.mtimeMs, ...fs.readdirSync(dir).filter((n) => n !== 'node_modules' && n !== 'dist').map((n) => newest(path.join(dir, n))));
+  };
+  return sources.every((source) => newest(source) <= built);
+}
+
+function build(workspace, phaseName, output, sources, env) {
+  if (upToDate(path.join(root, output), sources.map((s) => path.join(root, s)))) return;
+  npmRun('build', workspace, phaseName, env);
+}
+
+export async function startStack(options) {
+  const { dataDir, dbPort, smtpPort, port, demoPassword, nodeEnv = 'development', extraDatabases = [] } = options;
+  const owned = [];
+  const stop = async () => {
+    for (const proc of owned.reverse()) await proc.stop();
+    owned.length = 0;
+  };
+  try {
+    fs.mkdirSync(dataDir, { recursive: true });
+    const external = process.env.DATABASE_URL;
+    phase('ports', `server ${port}, SMTP ${smtpPort}${external ? '' : `, MariaDB ${dbPort}`}`);
+    await assertPortFree(port, 'server');
+    await assertPortFree(smtpPort, 'SMTP stand-in');
+    if (!external) await assertPortFree(dbPort, 'MariaDB');
+
+    let databaseUrls = { mantlepiece: external };
+    if (!external) {
+      phase('database', `private MariaDB in ${path.join(dataDir, 'mariadb')}`);
+      const db = await startPrivateMariaDb({ dataDir, port: dbPort });
+      owned.push(db.server);
+      databaseUrls = provisionDatabase({ dataDir, socket: db.socket, port: dbPort, databases: ['mantlepiece', ...extraDatabases] });
+    }
+
+    const mailDir = path.resolve(dataDir, 'mail');
+    const env = {
+      ...process.env,
+      NODE_ENV: nodeEnv,
+      DATA_DIR: path.resolve(dataDir),
+      DATABASE_URL: databaseUrls.mantlepiece,
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      PUBLIC_URL: process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`,
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(smtpPort),
+      MAIL_DIR: mailDir,
+      MEDIA_DIR: process.env.MEDIA_DIR ?? path.join(root, 'media/store'),
+      JWT_SECRET: process.env.JWT_SECRET ?? secrets(dataDir).jwtSecret,
+      DEMO_PASSWORD: demoPassword,
+      STUDIO_DIST: path.join(root, 'studio/dist'),
+      KIOSK_DIST: path.join(root, 'kiosk/dist'),
+    };
+    for (const db of extraDatabases) env[`DATABASE_URL_${db.toUpperCase()}`] = databaseUrls[db];
+
+    phase('build', 'shared package and server');
+    build('shared', 'build', 'shared/dist/index.js', ['shared/src', 'shared/package.json', 'shared/tsconfig.build.json'], env);
+    build('server', 'build', 'server/dist/main.js', ['server/src', 'server/package.json', 'server/tsconfig.build.json', 'shared/src'], env);
+
+    phase('migrations');
+    const migrate = run('node', ['server/dist/cli.js', 'migrate'], { cwd: root, env, quiet: true });
+    if (migrate.status !== 0) throw new PhaseError('migrations', (migrate.stderr || migrate.stdout).trim());
+    if (nodeEnv !== 'production') {
+      phase('demo scenario', 'seeded on first start only');
+      const seed = run('node', ['server/dist/cli.js', 'seed'], { cwd: root, env, quiet: true });
+      if (seed.status !== 0) throw new PhaseError('demo scenario', (seed.stderr || seed.stdout).trim());
+    }
+
+    phase('mail', `SMTP stand-in on 127.0.0.1:${smtpPort}, messages in ${mailDir}`);
+    const smtp = startOwned('smtp-stand-in', 'node', [path.join(root, 'scripts/lib/smtp-stand-in.mjs')], { env });
+    owned.push(smtp);
+    await waitFor(() => /listening/.test(smtp.recentOutput()), {
+      what: 'SMTP stand-in', timeoutMs: 15000,
+      failIf: () => (smtp.child.exitCode !== null ? `SMTP stand-in exited: ${smtp.recentOutput().trim()}` : null),
+    }).catch((error) => { throw new PhaseError('mail', error.message); });
+
+    phase('apps', 'building studio and kiosk');
+    build('studio', 'apps', 'studio/dist/index.html', ['studio/src', 'studio/index.html', 'studio/vite.config.ts', 'shared/src'], env);
+    build('kiosk', 'apps', 'kiosk/dist/index.html', ['kiosk/src', 'kiosk/index.html', 'kiosk/vite.config.ts', 'shared/src'], env);
+
+    phase('server', `NestJS on 127.0.0.1:${port}`);
+    const server = startOwned('server', 'node', ['server/dist/main.js'], { cwd: root, env, echo: options.echoServer });
+    owned.push(server);
+    await waitFor(async () => (await fetch(`http://127.0.0.1:${port}/api/health`)).ok, {
+      what: 'server', timeoutMs: 60000,
+      failIf: () => (server.child.exitCode !== null ? `server exited: ${server.recentOutput().trim().split('\n').slice(-8).join('\n')}` : null),
+    }).catch((error) => { throw new PhaseError('server', error.message); });
+
+    return { env, url: `http://127.0.0.1:${port}`, stop, processes: owned };
+  } catch (error) {
+    await stop();
+    throw error;
+  }
+}

@@ -1,0 +1,68 @@
+// `npm test`: the same stack as `npm start` on a throwaway data folder and free ports, then every
+// workspace's suite against it, then everything stopped. Ends with "N passed, N failed".
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { phase } from './lib/phase.mjs';
+import { run } from './lib/processes.mjs';
+import { freePort } from './lib/ports.mjs';
+import { ensureDebianPackage } from './lib/debian.mjs';
+import { ensureDependencies, root, startStack } from './lib/stack.mjs';
+
+const workspaces = ['shared', 'server', 'studio', 'kiosk', 'test'];
+const only = process.argv.slice(2);
+const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'mantlepiece-test-'));
+let stack;
+let passed = 0;
+let failed = 0;
+const broken = [];
+
+async function finish(code) {
+  await stack?.stop();
+  if (!process.env.KEEP_TEST_DATA) fs.rmSync(dataDir, { recursive: true, force: true });
+  console.log(`\n${passed} passed, ${failed} failed`);
+  process.exit(code);
+}
+process.on('SIGINT', () => finish(130));
+process.on('SIGTERM', () => finish(143));
+
+try {
+  ensureDependencies();
+  ensureDebianPackage({ command: 'chromium', pkg: 'chromium', phaseName: 'browser' });
+  stack = await startStack({
+    dataDir,
+    dbPort: await freePort(),
+    smtpPort: await freePort(),
+    port: await freePort(),
+    demoPassword: 'mantlepiece-demo',
+    nodeEnv: 'test',
+    extraDatabases: ['mantlepiece_api'],
+  });
+  const env = { ...stack.env, MANTLEPIECE_URL: stack.url, CHROMIUM_PATH: '/usr/bin/chromium' };
+  for (const workspace of only.length ? only : workspaces) {
+    phase('tests', workspace);
+    const report = path.join(dataDir, `vitest-${workspace}.json`);
+    const result = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`], {
+      cwd: path.join(root, workspace), env,
+    });
+    if (!fs.existsSync(report)) {
+      broken.push(workspace);
+      failed += 1;
+      continue;
+    }
+    const summary = JSON.parse(fs.readFileSync(report, 'utf8'));
+    passed += summary.numPassedTests;
+    failed += summary.numFailedTests;
+    // A suite that fails to load counts as a failure even though none of its tests ran.
+    if (result.status !== 0 && summary.numFailedTests === 0) {
+      broken.push(workspace);
+      failed += 1;
+    }
+  }
+  if (broken.length) console.error(`Suites that did not run cleanly: ${broken.join(', ')}`);
+  await finish(failed === 0 ? 0 : 1);
+} catch (error) {
+  console.error(`\n✖ ${error.message}`);
+  failed += 1;
+  await finish(1);
+}

@@ -1,0 +1,2 @@
+export * from './auth/roles.js';
+export type * from './auth/views.js';
