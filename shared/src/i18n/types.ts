@@ -1,0 +1,51 @@
+/**
+ * Every piece of widget text a visitor or a curator reads. Each locale file is typed by this, so a
+ * new language (es, ar, …) cannot leave a string out. Templates use i18next's {{name}} placeholders,
+ * so studio and kiosk can also load these objects into their own i18next instance under the
+ * `widgets` namespace.
+ */
+export interface WidgetStrings {
+  caution: string;
+  slopeForce: {
+    title: string;
+    instructions: string;
+    angleLabel: string;
+    criticalAngle: string;
+    weight: string;
+    normal: string;
+    shear: string;
+    friction: string;
+    holds: string;
+    slides: string;
+    holdsDetail: string;
+    slidesDetail: string;
+    reset: string;
+    describeHolds: string;
+    describeSlides: string;
+  };
+  convectionCell: {
+    title: string;
+    nusselt: string;
+    vrms: string;
+    time: string;
+    timeMyr: string;
+    play: string;
+    pause: string;
+    step: string;
+    hot: string;
+    cold: string;
+    estimate: string;
+    speedUnit: string;
+    millionYears: string;
+    describeStill: string;
+    describeConvecting: string;
+    describePhysical: string;
+    describeLive: string;
+    overlays: { streamlines: string; particles: string; arrows: string; none: string };
+    ramps: { magma: string; seafloor: string; greys: string };
+  };
+}
+
+export interface WidgetResource {
+  widgets: WidgetStrings;
+}
