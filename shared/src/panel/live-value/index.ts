@@ -1,0 +1,3 @@
+export * from './live-value.js';
+export * from './live-value-format.js';
+export * from './live-value-reading.js';

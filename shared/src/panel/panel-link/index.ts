@@ -1,0 +1,2 @@
+export * from './panel-href.js';
+export * from './panel-link.js';
