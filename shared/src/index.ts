@@ -1,2 +1,4 @@
 export * from './auth/roles.js';
 export type * from './auth/views.js';
+export * from './widgets/index.js';
+export * from './i18n/index.js';

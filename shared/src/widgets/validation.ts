@@ -65,3 +65,6 @@ export function validateWith<P>(schema: z.ZodType<P>, input: unknown, widgetName
     return { ok: false, errors: [{ path: [], message: `The ${widgetName}'s settings could not be read.` }] };
   }
 }
+
+/** Cross-field rules run only once every field is valid on its own, so each problem is reported once. */
+export const whenFieldsValid = { when: (payload: { issues: unknown[] }) => payload.issues.length === 0 };

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { boundedNumber } from '../validation.js';
+import { boundedNumber, whenFieldsValid } from '../validation.js';
 
 /** Standard acceleration of gravity, g0 = 9.80665 m/s², as fixed by the 3rd CGPM (1901). */
 export const STANDARD_GRAVITY = 9.80665;
@@ -45,7 +45,7 @@ export const slopeForceSchema = z
         message: `Kinetic friction μk (${params.kineticFriction}) cannot be more than static friction μs (${params.staticFriction}): a block that slides never grips harder than one at rest. Lower μk or raise μs.`,
       });
     }
-  })
+  }, whenFieldsValid)
   .meta({ title: 'Slope force box' });
 
 export type SlopeForceParams = z.infer<typeof slopeForceSchema>;
