@@ -9,3 +9,4 @@ export * from './panel-text.js';
 export * from './reading-level.js';
 export * from './check-panel-document.js';
 export * from './example-panel.js';
+export * from './panel-presentation.js';

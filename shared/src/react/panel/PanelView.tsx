@@ -1,0 +1,61 @@
+import { useCallback, useMemo, useState } from 'react';
+import { readPanelWidgets } from '../../panel/live-value/live-value-reading.js';
+import type { PanelDocJSON } from '../../panel/panel-json.js';
+import { directionOf, PANEL_LAYOUTS, type PanelLayout, type TextDirection } from '../../panel/panel-presentation.js';
+import { widgetsIn } from '../../panel/panel-queries.js';
+import { renderPanelNode, type PanelRenderContext } from './panel-nodes.js';
+import type { ResolveMedia } from './panel-media.js';
+import { panelRootStyle } from './panel-theme.js';
+
+export interface PanelViewProps {
+  doc: PanelDocJSON;
+  /** BCP 47 tag of the document's language: numbers, lang and (unless given) direction follow it. */
+  locale: string;
+  dir?: TextDirection;
+  layout?: PanelLayout;
+  largeText?: boolean;
+  highContrast?: boolean;
+  reducedMotion?: boolean;
+  resolveMedia: ResolveMedia;
+  /** 'text' on a kiosk, where a link must not take a visitor out of the story. */
+  links?: 'anchor' | 'text';
+}
+
+interface VisitorParams {
+  doc: PanelDocJSON;
+  byWidget: ReadonlyMap<string, unknown>;
+}
+
+/**
+ * A panel as a gallery screen draws it: the Tiptap JSON walked into React elements, with no editor
+ * and no raw HTML. Widgets stay live under touch, and live values follow what the visitor sets.
+ */
+export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = false, highContrast = false, reducedMotion = false, resolveMedia, links = 'anchor' }: PanelViewProps) {
+  const [visitor, setVisitor] = useState<VisitorParams>({ doc, byWidget: new Map() });
+  // What a visitor set belongs to the document they set it on; a new panel starts from its own params.
+  const paramsById = visitor.doc === doc ? visitor.byWidget : new Map<string, unknown>();
+  const widgets = useMemo(() => widgetsIn(doc), [doc]);
+  const readings = useMemo(() => readPanelWidgets(widgets, paramsById), [widgets, paramsById]);
+  const onWidgetParamsChange = useCallback(
+    (widgetId: string, params: Record<string, unknown>) =>
+      setVisitor((current) => ({ doc, byWidget: new Map(current.doc === doc ? current.byWidget : []).set(widgetId, params) })),
+    [doc],
+  );
+
+  const { width, height } = PANEL_LAYOUTS[layout];
+  const context: PanelRenderContext = { locale, readings, paramsById, resolveMedia, links, reducedMotion, highContrast, onWidgetParamsChange };
+  return (
+    <article
+      className="mp-panel"
+      lang={locale}
+      dir={dir ?? directionOf(locale)}
+      data-layout={layout}
+      data-large-text={largeText || undefined}
+      data-high-contrast={highContrast || undefined}
+      data-reduced-motion={reducedMotion || undefined}
+      style={panelRootStyle(layout, width, height, largeText, highContrast)}
+    >
+      {renderPanelNode(doc, context, 0)}
+    </article>
+  );
+}

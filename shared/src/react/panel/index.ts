@@ -1,0 +1,11 @@
+export * from './PanelView.js';
+export * from './PanelFrame.js';
+export * from './PanelWidget.js';
+export * from './PanelImageFigure.js';
+export * from './panel-media.js';
+export * from './panel-theme.js';
+export * from './panel-editor-options.js';
+export * from './panel-editor-extensions.js';
+export { WidgetNodeView } from './WidgetNodeView.js';
+export { LiveValueNodeView } from './LiveValueNodeView.js';
+export { PanelImageNodeView } from './PanelImageNodeView.js';

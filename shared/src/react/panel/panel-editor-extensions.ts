@@ -1,0 +1,36 @@
+import type { AnyExtension, Extensions } from '@tiptap/core';
+import { ReactNodeViewRenderer, type ReactNodeViewProps } from '@tiptap/react';
+import type { ComponentType } from 'react';
+import { panelExtensions } from '../../panel/panel-extensions.js';
+import { LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE } from '../../panel/panel-json.js';
+import { LiveValueNodeView } from './LiveValueNodeView.js';
+import type { PanelEditorOptions } from './panel-editor-options.js';
+import { PanelImageNodeView } from './PanelImageNodeView.js';
+import { WidgetNodeView } from './WidgetNodeView.js';
+
+const nodeViews: Record<string, ComponentType<ReactNodeViewProps>> = {
+  [WIDGET_NODE]: WidgetNodeView,
+  [LIVE_VALUE_NODE]: LiveValueNodeView,
+  [PANEL_IMAGE_NODE]: PanelImageNodeView,
+};
+
+function withNodeView(extension: AnyExtension, options: PanelEditorOptions): AnyExtension {
+  const view = nodeViews[extension.name];
+  if (!view) return extension;
+  return extension.extend({
+    addOptions() {
+      return { ...this.parent?.(), ...options };
+    },
+    addNodeView() {
+      return ReactNodeViewRenderer(view, { as: extension.name === LIVE_VALUE_NODE ? 'span' : 'div' });
+    },
+  });
+}
+
+/**
+ * `panelExtensions` with React node views for the studio editor. Only views are added, so the
+ * editor's schema is the server's schema.
+ */
+export function panelEditorExtensions(options: PanelEditorOptions): Extensions {
+  return panelExtensions.map((extension) => withNodeView(extension, options));
+}

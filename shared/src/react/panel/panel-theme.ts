@@ -1,0 +1,33 @@
+import type { CSSProperties } from 'react';
+
+/**
+ * Panel colours: sediment-sand surface, basalt text, sea-floor-blue headings and links, and a
+ * high-contrast pair. Text pairs stay well above WCAG 2.2 AA's 4.5:1 (basalt on sand is about 12:1).
+ */
+export const PANEL_COLOURS = {
+  standard: { surface: '#f4ebdd', text: '#24282c', heading: '#0b3f5c', link: '#0a5479', liveValue: '#8a3412' },
+  highContrast: { surface: '#000000', text: '#ffffff', heading: '#ffffff', link: '#ffe16b', liveValue: '#ffe16b' },
+} as const;
+
+/** Body text size in CSS px at the station's full size; large text is the visitor's switch. */
+const BODY_SIZE = { landscape: 34, portrait: 38 } as const;
+const LARGE_TEXT_SCALE = 1.35;
+
+export function panelRootStyle(layout: keyof typeof BODY_SIZE, width: number, height: number, largeText: boolean, highContrast: boolean): CSSProperties {
+  const colours = highContrast ? PANEL_COLOURS.highContrast : PANEL_COLOURS.standard;
+  return {
+    boxSizing: 'border-box',
+    width,
+    height,
+    overflow: 'hidden',
+    padding: layout === 'landscape' ? '72px 96px' : '96px 72px',
+    background: colours.surface,
+    color: colours.text,
+    fontFamily: 'Lexend, system-ui, sans-serif',
+    fontSize: BODY_SIZE[layout] * (largeText ? LARGE_TEXT_SCALE : 1),
+    lineHeight: 1.45,
+    ['--mp-heading' as string]: colours.heading,
+    ['--mp-link' as string]: colours.link,
+    ['--mp-live-value' as string]: colours.liveValue,
+  };
+}
