@@ -1,0 +1,20 @@
+import { Module } from '@nestjs/common';
+import { AuditModule } from './audit/audit.module.js';
+import { AuthModule } from './auth/auth.module.js';
+import { ClockModule } from './clock/clock.module.js';
+import { ConfigModule } from './config/config.module.js';
+import { DatabaseModule } from './database/database.module.js';
+import { DevMailModule } from './dev-mail/dev-mail.module.js';
+import { HealthModule } from './health/health.module.js';
+import { MailModule } from './mail/mail.module.js';
+import { UsersModule } from './users/users.module.js';
+import { VenuesModule } from './venues/venues.module.js';
+import { WidgetsModule } from './widgets/widgets.module.js';
+
+@Module({
+  imports: [
+    ConfigModule, ClockModule, DatabaseModule, AuditModule, MailModule, UsersModule, AuthModule,
+    DevMailModule, HealthModule, VenuesModule, WidgetsModule,
+  ],
+})
+export class AppModule {}

@@ -1,0 +1,30 @@
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
+import { ApiExceptionFilter } from './common/api-exception.filter.js';
+import { createValidationPipe } from './common/validation.js';
+import { ConfigService } from './config/config.service.js';
+import { serveApps } from './static/serve-apps.js';
+
+/** Everything around the modules that the running server and the tests share. */
+export function configureApp(app: NestExpressApplication): void {
+  const config = app.get(ConfigService);
+  app.set('trust proxy', config.trustProxy);
+  app.disable('x-powered-by');
+  app.setGlobalPrefix('api');
+  app.use(cookieParser());
+  app.useGlobalPipes(createValidationPipe());
+  app.useGlobalFilters(new ApiExceptionFilter());
+
+  const document = new DocumentBuilder()
+    .setTitle('Mantlepiece API')
+    .setDescription('Stories for earth-science gallery touchscreens: studio, kiosks and their server.')
+    .addBearerAuth()
+    .build();
+  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, document));
+
+  serveApps(app, [
+    { prefix: '/', dir: config.studioDist },
+    { prefix: '/kiosk/', dir: config.kioskDist },
+  ]);
+}

@@ -1,0 +1,42 @@
+import { BeforeBulkDestroy, BeforeBulkUpdate, BeforeDestroy, BeforeUpdate, BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { User } from '../../users/models/user.model.js';
+import { jsonColumn } from '../../database/json-column.js';
+
+/** Append-only: the model itself refuses updates and deletes, whatever code asks. */
+@Table({ tableName: 'audit_events', updatedAt: false })
+export class AuditEvent extends Model {
+  @ForeignKey(() => User)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  actorId: number | null;
+
+  @BelongsTo(() => User)
+  actor?: User | null;
+
+  @Column({ type: DataType.STRING(64), allowNull: false })
+  action: string;
+
+  @Column({ type: DataType.STRING(32), allowNull: true })
+  targetType: string | null;
+
+  @Column({ type: DataType.STRING(64), allowNull: true })
+  targetId: string | null;
+
+  @Column(jsonColumn('detail', true))
+  detail: Record<string, unknown> | null;
+
+  @Column({ type: DataType.STRING(64), allowNull: true })
+  clientAddress: string | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: false })
+  declare createdAt: Date;
+
+  declare id: number;
+
+  @BeforeUpdate
+  @BeforeBulkUpdate
+  @BeforeDestroy
+  @BeforeBulkDestroy
+  static refuseChange(): never {
+    throw new Error('Audit events are append-only');
+  }
+}

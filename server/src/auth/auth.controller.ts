@@ -1,0 +1,104 @@
+import { Body, Controller, Get, HttpCode, HttpStatus, Ip, Param, Patch, Post, Req, Res } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { Request, Response } from 'express';
+import type { SessionView } from '@mantlepiece/shared';
+import { ConfigService } from '../config/config.service.js';
+import { InvitationsService } from '../users/invitations.service.js';
+import type { User } from '../users/models/user.model.js';
+import { toUserView } from '../users/users.presenter.js';
+import { UsersService } from '../users/users.service.js';
+import { CurrentUser, Public } from './auth.decorators.js';
+import { AuthService, type IssuedSession } from './auth.service.js';
+import { AcceptInvitationDto } from './dto/accept-invitation.dto.js';
+import { CompletePasswordResetDto } from './dto/complete-password-reset.dto.js';
+import { RequestPasswordResetDto } from './dto/request-password-reset.dto.js';
+import { SignInDto } from './dto/sign-in.dto.js';
+import { UpdateProfileDto } from './dto/update-profile.dto.js';
+import { PasswordResetsService } from './password-resets.service.js';
+
+export const REFRESH_COOKIE = 'mp_refresh';
+/** The cookie goes back only to the auth routes, never to the rest of the API. */
+const REFRESH_COOKIE_PATH = '/api/auth';
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(
+    private readonly auth: AuthService,
+    private readonly users: UsersService,
+    private readonly invitations: InvitationsService,
+    private readonly passwordResets: PasswordResetsService,
+    private readonly config: ConfigService,
+  ) {}
+
+  @Public()
+  @Post('login')
+  @HttpCode(HttpStatus.OK)
+  async login(@Body() dto: SignInDto, @Ip() ip: string, @Res({ passthrough: true }) res: Response): Promise<SessionView> {
+    return this.withCookie(res, await this.auth.signIn(dto.email, dto.password, ip));
+  }
+
+  @Public()
+  @Post('refresh')
+  @HttpCode(HttpStatus.OK)
+  async refresh(@Req() req: Request, @Ip() ip: string, @Res({ passthrough: true }) res: Response): Promise<SessionView> {
+    return this.withCookie(res, await this.auth.refresh(req.cookies?.[REFRESH_COOKIE], ip));
+  }
+
+  /** Public, so a person whose access token has lapsed can still end the session. */
+  @Public()
+  @Post('logout')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  async logout(@Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<void> {
+    await this.auth.signOut(req.cookies?.[REFRESH_COOKIE]);
+    res.clearCookie(REFRESH_COOKIE, this.cookieOptions());
+  }
+
+  @ApiBearerAuth()
+  @Get('me')
+  me(@CurrentUser() user: User) {
+    return toUserView(user);
+  }
+
+  @ApiBearerAuth()
+  @Patch('me')
+  updateMe(@CurrentUser() user: User, @Body() dto: UpdateProfileDto) {
+    return this.users.updateOwnProfile(user, dto);
+  }
+
+  @Public()
+  @Get('invitations/:token')
+  invitation(@Param('token') token: string) {
+    return this.invitations.describe(token);
+  }
+
+  @Public()
+  @Post('invitations/accept')
+  @HttpCode(HttpStatus.OK)
+  async acceptInvitation(@Body() dto: AcceptInvitationDto, @Ip() ip: string, @Res({ passthrough: true }) res: Response): Promise<SessionView> {
+    return this.withCookie(res, await this.auth.acceptInvitation(dto.token, dto.name, dto.password, ip));
+  }
+
+  @Public()
+  @Post('password-reset')
+  @HttpCode(HttpStatus.ACCEPTED)
+  async requestPasswordReset(@Body() dto: RequestPasswordResetDto): Promise<void> {
+    await this.passwordResets.requestReset(dto.email);
+  }
+
+  @Public()
+  @Post('password-reset/complete')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  async completePasswordReset(@Body() dto: CompletePasswordResetDto, @Ip() ip: string): Promise<void> {
+    await this.passwordResets.completeReset(dto.token, dto.password, ip);
+  }
+
+  private withCookie(res: Response, { session, refresh }: IssuedSession): SessionView {
+    res.cookie(REFRESH_COOKIE, refresh.token, { ...this.cookieOptions(), expires: refresh.expiresAt });
+    return session;
+  }
+
+  private cookieOptions() {
+    return { httpOnly: true, sameSite: 'strict' as const, secure: this.config.secureCookies, path: REFRESH_COOKIE_PATH };
+  }
+}

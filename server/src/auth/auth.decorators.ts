@@ -1,0 +1,17 @@
+import { createParamDecorator, SetMetadata, type ExecutionContext } from '@nestjs/common';
+import type { Role } from '@mantlepiece/shared';
+import type { AuthenticatedRequest } from './authenticated-request.js';
+
+export const IS_PUBLIC = 'mantlepiece:public';
+export const REQUIRED_ROLES = 'mantlepiece:roles';
+
+/** Reachable without signing in. Every other route needs a valid access token. */
+export const Public = () => SetMetadata(IS_PUBLIC, true);
+
+/** Reachable by a signed-in person holding any one of these roles. */
+export const Roles = (...roles: Role[]) => SetMetadata(REQUIRED_ROLES, roles);
+
+/** The signed-in person of a guarded route. */
+export const CurrentUser = createParamDecorator(
+  (_data: unknown, ctx: ExecutionContext) => ctx.switchToHttp().getRequest<AuthenticatedRequest>().user,
+);

@@ -1,0 +1,6 @@
+import { EmailField } from '../../users/dto/user-fields.js';
+
+export class RequestPasswordResetDto {
+  @EmailField()
+  email: string;
+}

@@ -1,0 +1,45 @@
+import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import type { Response } from 'express';
+import type { ApiErrorBody } from '@mantlepiece/shared';
+
+/** Shapes every error the API sends as ApiErrorBody; the details of a crash stay in the log. */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger('API');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const body = toErrorBody(exception);
+    if (body.statusCode >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    host.switchToHttp().getResponse<Response>().status(body.statusCode).json(body);
+  }
+}
+
+/** Errors raised by Express's body parser before Nest sees the request. */
+const parserMessages: Record<string, string> = {
+  'entity.parse.failed': 'The request body is not valid JSON.',
+  'entity.too.large': 'The request body is too large.',
+  'encoding.unsupported': 'The request body uses an encoding the server does not accept.',
+  'charset.unsupported': 'The request body uses a character set the server does not accept.',
+};
+
+export function toErrorBody(exception: unknown): ApiErrorBody {
+  if (exception instanceof HttpException) {
+    const statusCode = exception.getStatus();
+    const response = exception.getResponse();
+    if (typeof response === 'string') return { statusCode, message: response };
+    const { message, errors } = response as { message?: unknown; errors?: ApiErrorBody['errors'] };
+    return {
+      statusCode,
+      message: typeof message === 'string' ? message : Array.isArray(message) ? message.join('; ') : exception.message,
+      ...(errors ? { errors } : {}),
+    };
+  }
+  const parser = exception as { status?: unknown; type?: unknown };
+  if (typeof parser.status === 'number' && parser.status >= 400 && parser.status < 500) {
+    return {
+      statusCode: parser.status,
+      message: parserMessages[String(parser.type)] ?? 'The request could not be read.',
+    };
+  }
+  return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Something went wrong on the server.' };
+}

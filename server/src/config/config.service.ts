@@ -1,0 +1,65 @@
+import { Injectable } from '@nestjs/common';
+
+/** Settings from the environment, read once, each with the default a single-machine start needs. */
+@Injectable()
+export class ConfigService {
+  readonly nodeEnv = process.env.NODE_ENV ?? 'development';
+  readonly host = process.env.HOST ?? '127.0.0.1';
+  readonly port = intFromEnv('PORT', 4310);
+  readonly publicUrl = (process.env.PUBLIC_URL ?? `http://${this.host}:${this.port}`).replace(/\/+$/, '');
+  /** Express `trust proxy`: which hops may tell us the client's address (X-Forwarded-For). */
+  readonly trustProxy = process.env.TRUST_PROXY ?? 'loopback';
+
+  readonly smtpHost = process.env.SMTP_HOST ?? '127.0.0.1';
+  readonly smtpPort = intFromEnv('SMTP_PORT', 2525);
+  readonly smtpSecure = process.env.SMTP_SECURE === 'true';
+  readonly smtpUser = process.env.SMTP_USER;
+  readonly smtpPassword = process.env.SMTP_PASSWORD;
+  readonly mailFrom = process.env.MAIL_FROM ?? 'Mantlepiece <mantlepiece@localhost>';
+  readonly mailDir = process.env.MAIL_DIR;
+  /** 0 turns the outbox worker's timer off (tests drive it by hand). */
+  readonly mailPollIntervalMs = intFromEnv('MAIL_POLL_INTERVAL_MS', 2000);
+
+  readonly accessTokenTtlSeconds = Math.min(intFromEnv('ACCESS_TOKEN_TTL_SECONDS', 900), 900);
+  readonly refreshTokenTtlDays = intFromEnv('REFRESH_TOKEN_TTL_DAYS', 14);
+  readonly invitationTtlHours = intFromEnv('INVITATION_TTL_HOURS', 72);
+  readonly passwordResetTtlMinutes = intFromEnv('PASSWORD_RESET_TTL_MINUTES', 60);
+  readonly signInWindowMinutes = intFromEnv('SIGN_IN_WINDOW_MINUTES', 15);
+  readonly signInMaxFailuresPerAccount = intFromEnv('SIGN_IN_MAX_FAILURES_PER_ACCOUNT', 5);
+  readonly signInMaxFailuresPerAddress = intFromEnv('SIGN_IN_MAX_FAILURES_PER_ADDRESS', 30);
+
+  readonly studioDist = process.env.STUDIO_DIST;
+  readonly kioskDist = process.env.KIOSK_DIST;
+  readonly demoPassword = process.env.DEMO_PASSWORD ?? 'mantlepiece-demo';
+
+  get isProduction(): boolean {
+    return this.nodeEnv === 'production';
+  }
+
+  get databaseUrl(): string {
+    return required('DATABASE_URL');
+  }
+
+  get jwtSecret(): string {
+    return required('JWT_SECRET');
+  }
+
+  /** Cookies go out as Secure only when people reach us over HTTPS. */
+  get secureCookies(): boolean {
+    return this.publicUrl.startsWith('https:');
+  }
+}
+
+function required(name: string): string {
+  const value = process.env[name];
+  if (!value) throw new Error(`${name} is not set`);
+  return value;
+}
+
+function intFromEnv(name: string, fallback: number): number {
+  const raw = process.env[name];
+  if (raw === undefined || raw === '') return fallback;
+  const value = Number(raw);
+  if (!Number.isInteger(value) || value < 0) throw new Error(`${name} must be a whole number, got "${raw}"`);
+  return value;
+}

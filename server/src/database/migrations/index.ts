@@ -1,0 +1,24 @@
+import type { QueryInterface } from 'sequelize';
+import * as usersAndSignIn from './0001-users-and-sign-in.js';
+import * as mailOutbox from './0002-mail-outbox.js';
+import * as auditEvents from './0003-audit-events.js';
+import * as venues from './0004-venues.js';
+
+interface MigrationModule {
+  up(qi: QueryInterface): Promise<void>;
+  down(qi: QueryInterface): Promise<void>;
+}
+
+/** In order. Listed here rather than globbed so the built server and the tests run the same set. */
+const modules: [string, MigrationModule][] = [
+  ['0001-users-and-sign-in', usersAndSignIn],
+  ['0002-mail-outbox', mailOutbox],
+  ['0003-audit-events', auditEvents],
+  ['0004-venues', venues],
+];
+
+export const migrations = modules.map(([name, m]) => ({
+  name,
+  up: ({ context }: { context: QueryInterface }) => m.up(context),
+  down: ({ context }: { context: QueryInterface }) => m.down(context),
+}));

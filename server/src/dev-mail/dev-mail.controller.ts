@@ -1,0 +1,23 @@
+import { Controller, Get, Param, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { Roles } from '../auth/auth.decorators.js';
+import { PageQuery } from '../common/page.js';
+import { DevMailService } from './dev-mail.service.js';
+
+@ApiTags('dev')
+@ApiBearerAuth()
+@Roles('admin')
+@Controller('dev/mail')
+export class DevMailController {
+  constructor(private readonly devMail: DevMailService) {}
+
+  @Get()
+  list(@Query() query: PageQuery) {
+    return this.devMail.list(query);
+  }
+
+  @Get(':id')
+  get(@Param('id') id: string) {
+    return this.devMail.get(id);
+  }
+}

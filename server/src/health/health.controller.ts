@@ -1,0 +1,20 @@
+import { Controller, Get, HttpStatus, Res } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
+import { Public } from '../auth/auth.decorators.js';
+import { HealthService, type Health } from './health.service.js';
+
+/** For load balancers and `npm start`: 503 takes an instance out of rotation while its database is gone. */
+@ApiTags('health')
+@Controller('health')
+export class HealthController {
+  constructor(private readonly health: HealthService) {}
+
+  @Public()
+  @Get()
+  async check(@Res({ passthrough: true }) res: Response): Promise<Health> {
+    const health = await this.health.check();
+    if (health.status !== 'ok') res.status(HttpStatus.SERVICE_UNAVAILABLE);
+    return health;
+  }
+}

@@ -1,0 +1,85 @@
+import { asUiLanguage, type UiLanguage } from '../common/ui-languages.js';
+
+export type MailContent =
+  | { kind: 'invitation'; name: string; inviterName: string; link: string; expiresAt: Date }
+  | { kind: 'password-reset'; name: string; link: string; expiresAt: Date };
+
+/** A message's words: the paragraphs before its link and after it. */
+interface MailWords {
+  subject: string;
+  before: string[];
+  after: string[];
+}
+
+const when = (date: Date, language: UiLanguage) =>
+  `${new Intl.DateTimeFormat(language, { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }).format(date)} UTC`;
+
+type Templates = { [K in MailContent['kind']]: (c: Extract<MailContent, { kind: K }>, l: UiLanguage) => MailWords };
+
+const templates: Record<UiLanguage, Templates> = {
+  en: {
+    invitation: (c, l) => ({
+      subject: 'You are invited to Mantlepiece',
+      before: [
+        `Hello ${c.name},`,
+        `${c.inviterName} has invited you to Mantlepiece, where our gallery stories are written, checked and published.`,
+        'Open this link to choose your password and sign in:',
+      ],
+      after: [
+        `The link works once and expires on ${when(c.expiresAt, l)}. If you did not expect this invitation, you can ignore this message.`,
+      ],
+    }),
+    'password-reset': (c, l) => ({
+      subject: 'Reset your Mantlepiece password',
+      before: [
+        `Hello ${c.name},`,
+        'Someone asked to reset the password of your Mantlepiece account. Open this link to choose a new one:',
+      ],
+      after: [
+        `The link works once and expires on ${when(c.expiresAt, l)}. If you did not ask for this, ignore this message: your password stays as it is.`,
+      ],
+    }),
+  },
+  fr: {
+    invitation: (c, l) => ({
+      subject: 'Vous êtes invité·e sur Mantlepiece',
+      before: [
+        `Bonjour ${c.name},`,
+        `${c.inviterName} vous invite sur Mantlepiece, où nous écrivons, vérifions et publions les récits de nos galeries.`,
+        'Ouvrez ce lien pour choisir votre mot de passe et vous connecter :',
+      ],
+      after: [
+        `Le lien ne fonctionne qu’une fois et expire le ${when(c.expiresAt, l)}. Si vous n’attendiez pas cette invitation, ignorez ce message.`,
+      ],
+    }),
+    'password-reset': (c, l) => ({
+      subject: 'Réinitialisez votre mot de passe Mantlepiece',
+      before: [
+        `Bonjour ${c.name},`,
+        'Quelqu’un a demandé à réinitialiser le mot de passe de votre compte Mantlepiece. Ouvrez ce lien pour en choisir un nouveau :',
+      ],
+      after: [
+        `Le lien ne fonctionne qu’une fois et expire le ${when(c.expiresAt, l)}. Si vous n’êtes pas à l’origine de cette demande, ignorez ce message : votre mot de passe reste inchangé.`,
+      ],
+    }),
+  },
+};
+
+/** The message in the recipient's UI language (English when we do not write theirs). */
+export function renderMail(content: MailContent, uiLanguage: string): { subject: string; text: string; html: string } {
+  const language = asUiLanguage(uiLanguage);
+  const render = templates[language][content.kind] as (c: MailContent, l: UiLanguage) => MailWords;
+  const { subject, before, after } = render(content, language);
+  const text = [...before, content.link, ...after].join('\n\n');
+  const paragraph = (p: string) => `<p>${escapeHtml(p)}</p>`;
+  const html = [
+    ...before.map(paragraph),
+    `<p><a href="${escapeHtml(content.link)}">${escapeHtml(content.link)}</a></p>`,
+    ...after.map(paragraph),
+  ].join('\n');
+  return { subject, text: `${text}\n`, html: `<!doctype html>\n<html lang="${language}"><body>\n${html}\n</body></html>\n` };
+}
+
+function escapeHtml(value: string): string {
+  return value.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
+}

@@ -1,0 +1,22 @@
+import { Module } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { AuditModule } from '../audit/audit.module.js';
+import { ClockModule } from '../clock/clock.module.js';
+import { ConfigModule } from '../config/config.module.js';
+import { DatabaseModule } from '../database/database.module.js';
+import { User } from '../users/models/user.model.js';
+import { PasswordHasher } from '../users/password-hasher.js';
+import { Gallery } from '../venues/models/gallery.model.js';
+import { Station } from '../venues/models/station.model.js';
+import { Venue } from '../venues/models/venue.model.js';
+import { SeedService } from './seed.service.js';
+
+/** What the CLI's seed and create-admin need: the database, no HTTP and no mail worker. */
+@Module({
+  imports: [
+    ConfigModule, ClockModule, DatabaseModule, AuditModule,
+    SequelizeModule.forFeature([User, Venue, Gallery, Station]),
+  ],
+  providers: [SeedService, PasswordHasher],
+})
+export class SeedModule {}

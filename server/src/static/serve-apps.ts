@@ -1,0 +1,48 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import type { NextFunction, Request, Response } from 'express';
+
+/** Vite names built assets after their content, so a name never changes meaning. */
+const HASHED_ASSET = /[.-][A-Za-z0-9_-]{8,}\.(js|css|woff2?|png|jpe?g|svg|webp|avif|wasm|map)$/;
+const IMMUTABLE = 'public, max-age=31536000, immutable';
+const REVALIDATE = 'no-cache';
+
+interface SinglePageApp {
+  /** URL prefix, ending in a slash. */
+  prefix: string;
+  dir: string | undefined;
+}
+
+/**
+ * Serves the built studio at `/` and kiosk at `/kiosk/`, each falling back to its index.html for
+ * page URLs so client-side routes survive a reload. An app whose build folder is missing is skipped.
+ */
+export function serveApps(app: NestExpressApplication, apps: SinglePageApp[]): void {
+  const present = apps
+    .filter((spa): spa is SinglePageApp & { dir: string } => !!spa.dir && fs.existsSync(path.join(spa.dir, 'index.html')))
+    // Longest prefix first, so /kiosk/... is not taken by the studio at /.
+    .sort((a, b) => b.prefix.length - a.prefix.length);
+
+  for (const spa of present) {
+    if (spa.prefix !== '/') {
+      const bare = spa.prefix.slice(0, -1);
+      app.use(bare, (req: Request, res: Response, next: NextFunction) =>
+        req.originalUrl === bare ? res.redirect(301, spa.prefix) : next());
+    }
+    app.useStaticAssets(spa.dir, {
+      prefix: spa.prefix,
+      index: false,
+      setHeaders: (res, file) => res.setHeader('Cache-Control', HASHED_ASSET.test(file) ? IMMUTABLE : REVALIDATE),
+    });
+  }
+
+  app.use((req: Request, res: Response, next: NextFunction) => {
+    const isPage = (req.method === 'GET' || req.method === 'HEAD') && !req.path.startsWith('/api/') && req.path !== '/api'
+      && !path.posix.basename(req.path).includes('.');
+    const spa = isPage ? present.find((candidate) => req.path.startsWith(candidate.prefix)) : undefined;
+    if (!spa) return next();
+    res.setHeader('Cache-Control', REVALIDATE);
+    res.sendFile(path.join(spa.dir, 'index.html'));
+  });
+}

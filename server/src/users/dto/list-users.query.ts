@@ -1,0 +1,30 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { ROLES, type Role } from '@mantlepiece/shared';
+import { PageQuery } from '../../common/page.js';
+
+export const USER_SORT_KEYS = ['name', 'email', 'createdAt', 'lastSignInAt'] as const;
+export const USER_SORTS = USER_SORT_KEYS.flatMap((key) => [key, `-${key}`]);
+
+export class ListUsersQuery extends PageQuery {
+  @ApiPropertyOptional({ description: 'Part of a name or an e-mail address' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(120)
+  q?: string;
+
+  @ApiPropertyOptional({ enum: ROLES })
+  @IsOptional()
+  @IsIn(ROLES)
+  role?: Role;
+
+  @ApiPropertyOptional({ enum: ['true', 'false'] })
+  @IsOptional()
+  @IsIn(['true', 'false'])
+  active?: 'true' | 'false';
+
+  @ApiPropertyOptional({ enum: USER_SORTS, default: 'name' })
+  @IsOptional()
+  @IsIn(USER_SORTS)
+  sort: string = 'name';
+}

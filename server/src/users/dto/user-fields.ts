@@ -1,0 +1,56 @@
+import { applyDecorators } from '@nestjs/common';
+import { ApiProperty } from '@nestjs/swagger';
+import { Transform } from 'class-transformer';
+import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsEmail, IsIn, IsString, Matches, MaxLength, MinLength } from 'class-validator';
+import { ROLES } from '@mantlepiece/shared';
+import { BCP47, UI_LANGUAGES } from '../../common/ui-languages.js';
+
+/** Field rules that several DTOs share, so an e-mail or a role list is checked the same everywhere. */
+export const EmailField = () =>
+  applyDecorators(
+    ApiProperty({ example: 'someone@example.org' }),
+    Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value)),
+    IsEmail({}, { message: 'Enter a valid e-mail address.' }),
+    MaxLength(254),
+  );
+
+export const PersonNameField = () =>
+  applyDecorators(
+    ApiProperty({ example: 'Noor Haddad' }),
+    Transform(({ value }) => (typeof value === 'string' ? value.trim() : value)),
+    IsString(),
+    MinLength(1, { message: 'Enter a name.' }),
+    MaxLength(120),
+  );
+
+export const RolesField = () =>
+  applyDecorators(
+    ApiProperty({ enum: ROLES, isArray: true }),
+    IsArray(),
+    ArrayMinSize(1, { message: 'Choose at least one role.' }),
+    ArrayUnique(),
+    IsIn(ROLES, { each: true, message: `Each role must be one of ${ROLES.join(', ')}.` }),
+  );
+
+export const LocalesField = () =>
+  applyDecorators(
+    ApiProperty({ type: [String], example: ['fr', 'es'], description: 'BCP 47 tags a translator may translate into' }),
+    IsArray(),
+    ArrayUnique(),
+    ArrayMaxSize(20),
+    Matches(BCP47, { each: true, message: 'Each locale must be a BCP 47 tag such as fr or pt-BR.' }),
+  );
+
+export const UiLanguageField = () =>
+  applyDecorators(
+    ApiProperty({ enum: UI_LANGUAGES }),
+    IsIn(UI_LANGUAGES, { message: `The UI language must be one of ${UI_LANGUAGES.join(', ')}.` }),
+  );
+
+export const NewPasswordField = () =>
+  applyDecorators(
+    ApiProperty({ minLength: 12 }),
+    IsString(),
+    MinLength(12, { message: 'Use at least 12 characters.' }),
+    MaxLength(256),
+  );

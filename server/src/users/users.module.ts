@@ -1,0 +1,17 @@
+import { Module } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { MailModule } from '../mail/mail.module.js';
+import { Invitation } from './models/invitation.model.js';
+import { User } from './models/user.model.js';
+import { InvitationsService } from './invitations.service.js';
+import { PasswordHasher } from './password-hasher.js';
+import { UsersController } from './users.controller.js';
+import { UsersService } from './users.service.js';
+
+@Module({
+  imports: [SequelizeModule.forFeature([User, Invitation]), MailModule],
+  controllers: [UsersController],
+  providers: [UsersService, InvitationsService, PasswordHasher],
+  exports: [UsersService, InvitationsService, PasswordHasher],
+})
+export class UsersModule {}

@@ -1,0 +1,108 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import type { Page, Role, UserView } from '@mantlepiece/shared';
+import { AuditService } from '../audit/audit.service.js';
+import { pageWindow, toPage } from '../common/page.js';
+import type { ListUsersQuery } from './dto/list-users.query.js';
+import type { UpdateUserDto } from './dto/update-user.dto.js';
+import { User } from './models/user.model.js';
+import { toUserView } from './users.presenter.js';
+
+export interface NewAccount {
+  email: string;
+  name: string;
+  passwordHash: string;
+  roles: Role[];
+  locales: string[];
+  uiLanguage: string;
+}
+
+const sameSet = (a: string[], b: string[]) => a.length === b.length && a.every((x) => b.includes(x));
+const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, '\\$&')}%`;
+
+@Injectable()
+export class UsersService {
+  constructor(
+    @InjectModel(User) private readonly users: typeof User,
+    private readonly sequelize: Sequelize,
+    private readonly audit: AuditService,
+  ) {}
+
+  findActive(id: number): Promise<User | null> {
+    return this.users.findOne({ where: { id, active: true } });
+  }
+
+  findByEmail(email: string, transaction?: Transaction): Promise<User | null> {
+    return this.users.findOne({ where: { email: email.trim().toLowerCase() }, transaction });
+  }
+
+  count(): Promise<number> {
+    return this.users.count();
+  }
+
+  /** Creates an account; refuses an address that already has one. */
+  async createAccount(account: NewAccount, transaction?: Transaction): Promise<User> {
+    if (await this.findByEmail(account.email, transaction)) {
+      throw new ConflictException('This address already has an account.');
+    }
+    return this.users.create({ ...account, email: account.email.toLowerCase(), active: true }, { transaction });
+  }
+
+  /** The People table: filtered, sorted and paged by the database. */
+  async list(query: ListUsersQuery): Promise<Page<UserView>> {
+    const conditions: WhereOptions<User>[] = [];
+    if (query.q) {
+      const pattern = likePattern(query.q.trim());
+      conditions.push({ [Op.or]: [{ name: { [Op.like]: pattern } }, { email: { [Op.like]: pattern } }] });
+    }
+    if (query.role) {
+      conditions.push(Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('roles'), JSON.stringify(query.role)), 1));
+    }
+    if (query.active) conditions.push({ active: query.active === 'true' });
+
+    const descending = query.sort.startsWith('-');
+    const key = descending ? query.sort.slice(1) : query.sort;
+    const order: Order = [[key, descending ? 'DESC' : 'ASC'], ['id', 'ASC']];
+    const { rows, count } = await this.users.findAndCountAll({ where: { [Op.and]: conditions }, order, ...pageWindow(query) });
+    return toPage(rows.map(toUserView), count, query);
+  }
+
+  /** An admin changes a person's name, roles, locales or whether the account is active. */
+  async updateUser(actor: User, id: number, changes: UpdateUserDto, clientAddress: string): Promise<UserView> {
+    if (actor.id === id && (changes.active === false || (changes.roles && !changes.roles.includes('admin')))) {
+      throw new ConflictException('You cannot remove your own admin access; ask another admin.');
+    }
+    return this.sequelize.transaction(async (transaction) => {
+      const user = await this.users.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!user) throw new NotFoundException('There is no such person.');
+      const record = (action: Parameters<AuditService['record']>[0]['action'], detail: Record<string, unknown>) =>
+        this.audit.record({ actorId: actor.id, action, targetType: 'user', targetId: user.id, detail, clientAddress }, transaction);
+
+      if (changes.roles && !sameSet(changes.roles, user.roles)) {
+        await record('user.roles-changed', { from: user.roles, to: changes.roles });
+        user.roles = changes.roles;
+      }
+      if (changes.locales && !sameSet(changes.locales, user.locales)) {
+        await record('user.locales-changed', { from: user.locales, to: changes.locales });
+        user.locales = changes.locales;
+      }
+      // A deactivated account fails the guard and refresh at once; its sessions need no other revoking.
+      if (changes.active !== undefined && changes.active !== user.active) {
+        await record(changes.active ? 'user.activated' : 'user.deactivated', {});
+        user.active = changes.active;
+      }
+      if (changes.name !== undefined) user.name = changes.name;
+      await user.save({ transaction });
+      return toUserView(user);
+    });
+  }
+
+  async updateOwnProfile(user: User, changes: { name?: string; uiLanguage?: string }): Promise<UserView> {
+    if (changes.name !== undefined) user.name = changes.name;
+    if (changes.uiLanguage !== undefined) user.uiLanguage = changes.uiLanguage;
+    await user.save();
+    return toUserView(user);
+  }
+}

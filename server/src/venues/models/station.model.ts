@@ -1,0 +1,34 @@
+import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { Gallery } from './gallery.model.js';
+
+export const ORIENTATIONS = ['landscape', 'portrait'] as const;
+export type Orientation = (typeof ORIENTATIONS)[number];
+
+/** One fixed screen position in a gallery. */
+@Table({ tableName: 'stations' })
+export class Station extends Model {
+  @ForeignKey(() => Gallery)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  galleryId: number;
+
+  @BelongsTo(() => Gallery)
+  gallery?: Gallery;
+
+  @Column({ type: DataType.STRING(160), allowNull: false })
+  name: string;
+
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  screenWidthPx: number;
+
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  screenHeightPx: number;
+
+  @Column({ type: DataType.ENUM(...ORIENTATIONS), allowNull: false })
+  orientation: Orientation;
+
+  /** Height of the screen's centre above the floor; reach ranges follow local accessibility codes. */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  mountingHeightMm: number;
+
+  declare id: number;
+}

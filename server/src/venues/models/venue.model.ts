@@ -1,0 +1,21 @@
+import { Column, DataType, Model, Table } from 'sequelize-typescript';
+import { jsonColumn } from '../../database/json-column.js';
+
+@Table({ tableName: 'venues' })
+export class Venue extends Model {
+  @Column({ type: DataType.STRING(160), allowNull: false })
+  name: string;
+
+  @Column({ type: DataType.STRING(80), allowNull: false, unique: true })
+  slug: string;
+
+  /** BCP 47 tag of the language stories are written in. */
+  @Column({ type: DataType.STRING(35), allowNull: false })
+  sourceLocale: string;
+
+  /** BCP 47 tags the venue's stories are translated into. */
+  @Column(jsonColumn('targetLocales'))
+  targetLocales: string[];
+
+  declare id: number;
+}
