@@ -127,6 +127,11 @@ class SpectralConvection implements ConvectionSimulation {
 
   private readonly courant: number;
   private readonly maxTimeStep: number;
+  /**
+   * While the flow is still slow, the CFL limit allows long steps, but a perturbation can grow at
+   * up to Ra kx²/K⁴ ≤ Ra/(4π²) per unit time; this bound keeps that growth under ~20 % a step.
+   */
+  private readonly growthLimitedStep: number;
   private readonly dx: number;
   private readonly dz: number;
   private readonly rows: GridLines;
@@ -171,6 +176,7 @@ class SpectralConvection implements ConvectionSimulation {
     this.nz = nz;
     this.courant = courant;
     this.maxTimeStep = maxTimeStep;
+    this.growthLimitedStep = rayleigh > 0 ? (0.2 * 4 * Math.PI ** 2) / rayleigh : Infinity;
     this.dx = aspectRatio / nx;
     this.dz = 1 / nz;
     this.rows = new GridLines(nx);
@@ -278,7 +284,8 @@ class SpectralConvection implements ConvectionSimulation {
     const { ux, wz } = this;
     faceVelocities(this.psi, this.nx, this.nz, this.dx, this.dz, ux, wz);
     const rate = this.advection.courantRate(ux, wz);
-    const dt = rate > 0 ? Math.min(this.maxTimeStep, this.courant / rate) : this.maxTimeStep;
+    const longest = Math.min(this.maxTimeStep, this.growthLimitedStep);
+    const dt = rate > 0 ? Math.min(longest, this.courant / rate) : longest;
 
     // Mid-step ψ, extrapolated linearly from this step and the last; a steady flow is unchanged.
     const r = this.lastTimeStep > 0 ? Math.min(1, dt / (2 * this.lastTimeStep)) : 0;
