@@ -1,0 +1,119 @@
+import type { ApiErrorBody, SessionView } from '@mantlepiece/shared';
+
+/** An API answer other than 2xx, with the server's field-by-field `errors` kept for forms. */
+export class ApiError extends Error {
+  readonly status: number;
+  readonly errors: NonNullable<ApiErrorBody['errors']>;
+
+  constructor(status: number, body: Pick<ApiErrorBody, 'message' | 'errors'>) {
+    super(body.message);
+    this.name = 'ApiError';
+    this.status = status;
+    this.errors = body.errors ?? [];
+  }
+
+  /** The server's message for one form field (the first segment of each error's path). */
+  fieldMessage(field: string): string | undefined {
+    return this.errors.find((error) => String(error.path[0]) === field)?.message;
+  }
+}
+
+/** Status 0 stands for "no answer at all" (offline, server down, proxy refused). */
+export const NETWORK_FAILURE = 0;
+
+type SessionListener = (session: SessionView | null) => void;
+
+// The access token lives in memory only; the refresh token is an httpOnly cookie the page never sees.
+let accessToken: string | null = null;
+let refreshing: Promise<SessionView | null> | null = null;
+const listeners = new Set<SessionListener>();
+
+export function onSessionChange(listener: SessionListener): () => void {
+  listeners.add(listener);
+  return () => listeners.delete(listener);
+}
+
+export function setSession(session: SessionView | null): void {
+  accessToken = session?.accessToken ?? null;
+  for (const listener of listeners) listener(session);
+}
+
+export type Query = Record<string, string | number | boolean | undefined | null>;
+
+interface RequestOptions {
+  method?: 'GET' | 'POST' | 'PATCH' | 'DELETE';
+  body?: unknown;
+  query?: Query;
+}
+
+function url(path: string, query?: Query): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query ?? {})) {
+    if (value !== undefined && value !== null && value !== '') params.set(key, String(value));
+  }
+  const search = params.toString();
+  return `/api${path}${search ? `?${search}` : ''}`;
+}
+
+async function send(path: string, options: RequestOptions): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
+  try {
+    return await fetch(url(path, options.query), {
+      method: options.method ?? 'GET',
+      headers,
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      credentials: 'same-origin',
+    });
+  } catch {
+    throw new ApiError(NETWORK_FAILURE, { message: 'network' });
+  }
+}
+
+async function read<T>(response: Response): Promise<T> {
+  const text = await response.text();
+  const body: unknown = text ? safeJson(text) : undefined;
+  if (response.ok) return body as T;
+  const error = body && typeof body === 'object' && 'message' in body ? (body as ApiErrorBody) : { message: response.statusText };
+  throw new ApiError(response.status, error);
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+/**
+ * Trades the refresh cookie for a new session. Concurrent callers share one request, because the
+ * server rotates the cookie on every refresh and a second refresh with the old one would fail.
+ */
+export function refreshSession(): Promise<SessionView | null> {
+  refreshing ??= send('/auth/refresh', { method: 'POST' })
+    .then(async (response) => (response.status === 401 ? null : read<SessionView>(response)))
+    .then((session) => {
+      setSession(session);
+      return session;
+    })
+    .finally(() => {
+      refreshing = null;
+    });
+  return refreshing;
+}
+
+// A 401 from these means the credentials themselves were refused; refreshing cannot help.
+const CREDENTIAL_PATHS = new Set(['/auth/login', '/auth/refresh', '/auth/logout']);
+
+/** Calls the API; a 401 on a signed-in call gets one retry after a refresh. */
+export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  const signedIn = accessToken !== null;
+  const response = await send(path, options);
+  if (response.status === 401 && signedIn && !CREDENTIAL_PATHS.has(path)) {
+    const session = await refreshSession();
+    if (session) return read<T>(await send(path, options));
+  }
+  return read<T>(response);
+}

@@ -1,0 +1,69 @@
+import { lazy, type ReactNode } from 'react';
+import { createBrowserRouter, Outlet, useParams } from 'react-router-dom';
+import { AppShell } from '../components/AppShell';
+import { AuthLayout } from '../components/AuthLayout';
+import { RequireSession } from '../components/RequireSession';
+import { AreaLaterPage, RequireArea } from '../routes/area';
+import { HomePage } from '../routes/home';
+import { NotFoundPage } from '../routes/not-found';
+import { SignInPage } from '../routes/sign-in';
+import { BUILT_AREAS, isArea } from './areas';
+
+// Pages most people never open load on demand, keeping the first download small.
+const named = <K extends string>(load: () => Promise<Record<K, () => ReactNode>>, name: K) =>
+  lazy(() => load().then((module) => ({ default: module[name] })));
+const InvitationPage = named(() => import('../routes/invitation'), 'InvitationPage');
+const RequestPasswordResetPage = named(() => import('../routes/reset-password'), 'RequestPasswordResetPage');
+const CompletePasswordResetPage = named(() => import('../routes/reset-password/token'), 'CompletePasswordResetPage');
+const PeoplePage = named(() => import('../routes/people'), 'PeoplePage');
+const CapturedMailPage = named(() => import('../routes/dev/mail'), 'CapturedMailPage');
+
+/** `/:area` for the areas that are planned but not built yet. */
+function PlannedArea() {
+  const { area } = useParams();
+  if (!isArea(area) || BUILT_AREAS.has(area)) return <NotFoundPage />;
+  return (
+    <RequireArea area={area}>
+      <AreaLaterPage area={area} />
+    </RequireArea>
+  );
+}
+
+function AdminOnly() {
+  return (
+    <RequireArea area="people">
+      <Outlet />
+    </RequireArea>
+  );
+}
+
+export const router = createBrowserRouter([
+  {
+    element: <AuthLayout />,
+    children: [
+      { path: '/sign-in', element: <SignInPage /> },
+      { path: '/invitation/:token', element: <InvitationPage /> },
+      { path: '/reset-password', element: <RequestPasswordResetPage /> },
+      { path: '/reset-password/:token', element: <CompletePasswordResetPage /> },
+    ],
+  },
+  {
+    element: (
+      <RequireSession>
+        <AppShell />
+      </RequireSession>
+    ),
+    children: [
+      { index: true, element: <HomePage /> },
+      {
+        element: <AdminOnly />,
+        children: [
+          { path: '/people', element: <PeoplePage /> },
+          { path: '/dev/mail', element: <CapturedMailPage /> },
+        ],
+      },
+      { path: '/:area', element: <PlannedArea /> },
+      { path: '*', element: <NotFoundPage /> },
+    ],
+  },
+]);

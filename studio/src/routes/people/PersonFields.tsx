@@ -1,0 +1,86 @@
+import { Checkbox, Field, Input, makeStyles, tokens } from '@fluentui/react-components';
+import { ROLES, type Role } from '@mantlepiece/shared';
+import type { TFunction } from 'i18next';
+import { useTranslation } from 'react-i18next';
+import { ApiError } from '../../api/client';
+import { serverFieldMessage } from '../../components/forms/describe-error';
+import { emailProblem, parseLocales, requiredProblem, type FieldProblems } from '../../components/forms/validation';
+
+export interface PersonValues {
+  email: string;
+  name: string;
+  roles: Role[];
+  locales: string;
+}
+
+export type PersonField = keyof PersonValues;
+export const PERSON_FIELDS: readonly PersonField[] = ['email', 'name', 'roles', 'locales'];
+
+const useStyles = makeStyles({
+  roles: { display: 'grid', gridTemplateColumns: 'repeat(auto-fill, minmax(10rem, 1fr))', columnGap: tokens.spacingHorizontalM },
+});
+
+/** Checks a person's details the way the server will, so most mistakes never make a round trip. */
+export function personProblems(t: TFunction, values: PersonValues, { withEmail }: { withEmail: boolean }): FieldProblems<PersonField> {
+  const { locales, invalid } = parseLocales(values.locales);
+  const translator = values.roles.includes('translator');
+  return {
+    email: withEmail ? emailProblem(t, values.email) : undefined,
+    name: requiredProblem(t, values.name),
+    roles: values.roles.length ? undefined : t('validation.rolesRequired'),
+    locales: invalid
+      ? t('validation.localeInvalid', { tag: invalid })
+      : translator && locales.length === 0 ? t('validation.localesRequired') : undefined,
+  };
+}
+
+/** The locales to send: a person who does not translate has none. */
+export const localesToSend = (values: PersonValues) => (values.roles.includes('translator') ? parseLocales(values.locales).locales : []);
+
+/** The message next to a field: the form's own check first, then what the server said. */
+export function personFieldMessage(t: TFunction, field: PersonField, problems: FieldProblems<PersonField>, error: unknown): string | undefined {
+  if (problems[field]) return problems[field];
+  if (field === 'email' && error instanceof ApiError && error.status === 409) return t('invite.alreadyMember');
+  return serverFieldMessage(error, field);
+}
+
+/** Email (when inviting), name, roles and translator locales, shared by the invite and edit dialogs. */
+export function PersonFields({ values, onChange, messages, emailEditable }: {
+  values: PersonValues;
+  onChange: (values: PersonValues) => void;
+  messages: Partial<Record<PersonField, string>>;
+  emailEditable: boolean;
+}) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const toggleRole = (role: Role, checked: boolean) =>
+    onChange({ ...values, roles: checked ? ROLES.filter((r) => r === role || values.roles.includes(r)) : values.roles.filter((r) => r !== role) });
+
+  return (
+    <>
+      <Field label={t('personForm.email')} required={emailEditable} validationMessage={messages.email}>
+        <Input type="email" name="email" value={values.email} readOnly={!emailEditable} onChange={(_event, data) => onChange({ ...values, email: data.value })} />
+      </Field>
+      <Field label={t('personForm.name')} required validationMessage={messages.name}>
+        <Input name="name" value={values.name} onChange={(_event, data) => onChange({ ...values, name: data.value })} />
+      </Field>
+      <Field label={t('personForm.roles')} required validationMessage={messages.roles}>
+        <div role="group" aria-label={t('personForm.roles')} className={styles.roles}>
+          {ROLES.map((role) => (
+            <Checkbox
+              key={role}
+              label={t(`roles.${role}`)}
+              checked={values.roles.includes(role)}
+              onChange={(_event, data) => toggleRole(role, data.checked === true)}
+            />
+          ))}
+        </div>
+      </Field>
+      {values.roles.includes('translator') ? (
+        <Field label={t('personForm.locales')} hint={t('personForm.localesHint')} required validationMessage={messages.locales}>
+          <Input name="locales" value={values.locales} onChange={(_event, data) => onChange({ ...values, locales: data.value })} />
+        </Field>
+      ) : null}
+    </>
+  );
+}
