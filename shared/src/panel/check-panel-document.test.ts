@@ -14,6 +14,11 @@ function refusal(json: unknown) {
 }
 
 describe('checkPanelDocument', () => {
+  it('runs where there is no DOM, as on the server', () => {
+    expect(typeof document).toBe('undefined');
+    expect(checkPanelDocument(examplePanelDoc()).ok).toBe(true);
+  });
+
   it('accepts a document with every node and mark type and returns it unchanged', () => {
     const result = checkPanelDocument(examplePanelDoc());
     expect(result).toEqual({ ok: true, doc: examplePanelDoc() });
