@@ -14,7 +14,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
   }
 }
 
-/** Errors raised by Express's body parser before Nest sees the request. */
+/** Express's body parser fails before Nest sees the request; Nest hands its error on as the cause. */
 const parserMessages: Record<string, string> = {
   'entity.parse.failed': 'The request body is not valid JSON.',
   'entity.too.large': 'The request body is too large.',
@@ -26,19 +26,14 @@ export function toErrorBody(exception: unknown): ApiErrorBody {
   if (exception instanceof HttpException) {
     const statusCode = exception.getStatus();
     const response = exception.getResponse();
+    const parserType = (exception.cause as { type?: unknown } | undefined)?.type;
+    if (typeof parserType === 'string' && parserMessages[parserType]) return { statusCode, message: parserMessages[parserType] };
     if (typeof response === 'string') return { statusCode, message: response };
     const { message, errors } = response as { message?: unknown; errors?: ApiErrorBody['errors'] };
     return {
       statusCode,
       message: typeof message === 'string' ? message : Array.isArray(message) ? message.join('; ') : exception.message,
       ...(errors ? { errors } : {}),
-    };
-  }
-  const parser = exception as { status?: unknown; type?: unknown };
-  if (typeof parser.status === 'number' && parser.status >= 400 && parser.status < 500) {
-    return {
-      statusCode: parser.status,
-      message: parserMessages[String(parser.type)] ?? 'The request could not be read.',
     };
   }
   return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Something went wrong on the server.' };
