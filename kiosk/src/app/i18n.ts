@@ -1,0 +1,37 @@
+import i18next from 'i18next';
+import { initReactI18next } from 'react-i18next';
+import { en, type KioskMessages } from './locales/en';
+import { fr } from './locales/fr';
+
+/** The languages the kiosk's own words come in; a venue's other languages fall back to English. */
+export const KIOSK_LANGUAGES = ['en', 'fr'] as const;
+export type KioskLanguage = (typeof KIOSK_LANGUAGES)[number];
+
+export const resources = {
+  en: { translation: en },
+  fr: { translation: fr },
+} satisfies Record<KioskLanguage, { translation: KioskMessages }>;
+
+declare module 'i18next' {
+  interface CustomTypeOptions {
+    resources: { translation: KioskMessages };
+  }
+}
+
+/** The venue's languages the kiosk can speak, in the venue's order; English when none match. */
+export function kioskLanguages(venueLocales: readonly string[]): KioskLanguage[] {
+  const matches = venueLocales
+    .map((tag) => tag.toLowerCase().split('-')[0])
+    .filter((code): code is KioskLanguage => KIOSK_LANGUAGES.includes(code as KioskLanguage));
+  return matches.length ? [...new Set(matches)] : ['en'];
+}
+
+void i18next.use(initReactI18next).init({
+  resources,
+  lng: 'en',
+  fallbackLng: 'en',
+  interpolation: { escapeValue: false },
+  initAsync: false,
+});
+
+export { i18next };
