@@ -38,10 +38,11 @@ export function serveApps(app: NestExpressApplication, apps: SinglePageApp[]): v
   }
 
   app.use((req: Request, res: Response, next: NextFunction) => {
-    const isPage = (req.method === 'GET' || req.method === 'HEAD') && !req.path.startsWith('/api/') && req.path !== '/api'
-      && !path.posix.basename(req.path).includes('.');
+    if (req.path === '/api' || req.path.startsWith('/api/')) return next();
+    const isPage = (req.method === 'GET' || req.method === 'HEAD') && !path.posix.basename(req.path).includes('.');
     const spa = isPage ? present.find((candidate) => req.path.startsWith(candidate.prefix)) : undefined;
-    if (!spa) return next();
+    // Outside /api, Nest's own not-found answer never runs, so a missing file gets its JSON 404 here.
+    if (!spa) return res.status(404).json({ statusCode: 404, message: `Nothing is served at ${req.path}.` });
     res.setHeader('Cache-Control', REVALIDATE);
     res.sendFile(path.join(spa.dir, 'index.html'));
   });
