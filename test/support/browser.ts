@@ -1,0 +1,41 @@
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+
+/** The running Mantlepiece that `npm test` started (or one started by hand with `npm start`). */
+export const baseUrl = (process.env.MANTLEPIECE_URL ?? 'http://127.0.0.1:4310').replace(/\/$/, '');
+export const demoPassword = process.env.DEMO_PASSWORD ?? 'mantlepiece-demo';
+
+/** Debian's chromium, headless, with everything that would reach the internet switched off. */
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+/** A fresh, cookie-less browser profile that reads English, at a desk-sized window. */
+export function newContext(browser: Browser): Promise<BrowserContext> {
+  return browser.newContext({ baseURL: baseUrl, locale: 'en-GB', viewport: { width: 1440, height: 900 } });
+}
+
+/** Fills in and sends the real studio sign-in form, whatever the server then answers. */
+export async function submitSignIn(page: Page, email: string, password: string): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('Email').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** Signs in as a demo account and waits until the studio's navigation is there. */
+export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
+  await submitSignIn(page, email, password);
+  await page.getByRole('navigation', { name: 'Studio areas' }).waitFor();
+}
