@@ -150,8 +150,6 @@ class SpectralConvection implements ConvectionSimulation {
   private psi: Float64Array;
   private psiPrevious: Float64Array;
   private readonly psiMid: Float64Array;
-  private readonly ux: Float64Array;
-  private readonly wz: Float64Array;
   private readonly work: Float64Array;
   private readonly temperatureView: Float64Array;
   private readonly streamView: Float64Array;
@@ -200,8 +198,6 @@ class SpectralConvection implements ConvectionSimulation {
     this.psi = new Float64Array(corners);
     this.psiPrevious = new Float64Array(corners);
     this.psiMid = new Float64Array(corners);
-    this.ux = new Float64Array(nz * (nx + 1));
-    this.wz = new Float64Array((nz + 1) * nx);
     this.work = new Float64Array(cells);
     this.temperatureView = new Float64Array(cells);
     this.streamView = new Float64Array(cells);
@@ -281,9 +277,8 @@ class SpectralConvection implements ConvectionSimulation {
   }
 
   private advance(): void {
-    const { ux, wz } = this;
-    faceVelocities(this.psi, this.nx, this.nz, this.dx, this.dz, ux, wz);
-    const rate = this.advection.courantRate(ux, wz);
+    this.advection.setStreamFunction(this.psi);
+    const rate = this.advection.courantRate();
     const longest = Math.min(this.maxTimeStep, this.growthLimitedStep);
     const dt = rate > 0 ? Math.min(longest, this.courant / rate) : longest;
 
@@ -293,14 +288,14 @@ class SpectralConvection implements ConvectionSimulation {
     const now = this.psi;
     const before = this.psiPrevious;
     for (let k = 0; k < mid.length; k++) mid[k] = now[k] + r * (now[k] - before[k]);
-    faceVelocities(mid, this.nx, this.nz, this.dx, this.dz, ux, wz);
+    this.advection.setStreamFunction(mid);
 
     this.setDecay(0.5 * dt);
     const t = this.work;
     t.set(this.coefficients);
     this.applyDecay(t);
     this.synthesiseTemperature(t, t);
-    this.advection.advance(t, ux, wz, dt);
+    this.advection.advance(t, dt);
     this.analyseTemperature(t, this.coefficients);
     this.applyDecay(this.coefficients);
 
@@ -404,17 +399,6 @@ function resampleCoefficients(field: TemperatureField): Float64Array {
   new GridLines(nx).rows(c, nz, nx, nx, cosineAnalysis);
   new GridLines(nz).columns(c, nx, nx, nz, sineAnalysis);
   return c;
-}
-
-/** Face velocities from corner ψ: exact differences, so the discrete divergence is zero. */
-function faceVelocities(psi: Float64Array, nx: number, nz: number, dx: number, dz: number, ux: Float64Array, wz: Float64Array): void {
-  const stride = nx + 1;
-  for (let j = 0; j < nz; j++) {
-    for (let i = 0; i <= nx; i++) ux[j * stride + i] = (psi[(j + 1) * stride + i] - psi[j * stride + i]) / dz;
-  }
-  for (let j = 0; j <= nz; j++) {
-    for (let i = 0; i < nx; i++) wz[j * nx + i] = -(psi[j * stride + i + 1] - psi[j * stride + i]) / dx;
-  }
 }
 
 /** Lower sample index and fraction for a position in sample units, clamped to [0, last]. */
