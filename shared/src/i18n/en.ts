@@ -16,6 +16,7 @@ export const en: WidgetStrings = {
     slides: 'Slides',
     holdsDetail: 'Friction is strong enough to hold the block.',
     slidesDetail: 'The pull down the slope is more than friction can hold.',
+    step: 'Step forward',
     reset: 'Put the block back',
     describeHolds:
       'A block of {{mass}} rests on a slope tilted at {{angle}}. Its weight of {{weight}} presses into the slope with {{normal}} and pulls it down the slope with {{shear}}. Friction can hold up to {{maxFriction}}, so the block holds still. It would start to slide above {{critical}}.',

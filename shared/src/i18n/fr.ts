@@ -16,6 +16,7 @@ export const fr: WidgetStrings = {
     slides: 'Glisse',
     holdsDetail: 'Le frottement suffit à retenir le bloc.',
     slidesDetail: 'La traction vers le bas dépasse ce que le frottement peut retenir.',
+    step: 'Avancer d’un pas',
     reset: 'Remettre le bloc en place',
     describeHolds:
       'Un bloc de {{mass}} repose sur une pente inclinée de {{angle}}. Son poids de {{weight}} appuie sur la pente avec {{normal}} et le tire vers le bas de la pente avec {{shear}}. Le frottement peut retenir jusqu’à {{maxFriction}} : le bloc tient. Il commencerait à glisser au-delà de {{critical}}.',

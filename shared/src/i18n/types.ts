@@ -19,6 +19,7 @@ export interface WidgetStrings {
     slides: string;
     holdsDetail: string;
     slidesDetail: string;
+    step: string;
     reset: string;
     describeHolds: string;
     describeSlides: string;

@@ -23,13 +23,18 @@ export function hexToRgb(hex: string): Rgb {
   return [(value >> 16) & 0xff, (value >> 8) & 0xff, value & 0xff];
 }
 
-/** CIE 1976 L* of an sRGB colour (D65), from the sRGB transfer curve (IEC 61966-2-1) and CIE's L* formula. */
-export function lightness([r, g, b]: Rgb): number {
+/** Relative luminance of an sRGB colour (the sRGB transfer curve, IEC 61966-2-1; the same Y as WCAG 2.2 uses). */
+export function relativeLuminance([r, g, b]: Rgb): number {
   const linear = (channel: number) => {
     const c = channel / 255;
     return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
   };
-  const y = 0.2126 * linear(r) + 0.7152 * linear(g) + 0.0722 * linear(b);
+  return 0.2126 * linear(r) + 0.7152 * linear(g) + 0.0722 * linear(b);
+}
+
+/** CIE 1976 L* (D65) of an sRGB colour, from its relative luminance. */
+export function lightness(rgb: Rgb): number {
+  const y = relativeLuminance(rgb);
   return y > 216 / 24389 ? 116 * Math.cbrt(y) - 16 : (24389 / 27) * y;
 }
 
