@@ -71,11 +71,11 @@ export class MailOutboxWorker implements OnApplicationBootstrap, OnApplicationSh
     const attempts = message.attempts + 1;
     try {
       await this.transport.send({ to: message.recipient, subject: message.subject, text: message.textBody, html: message.htmlBody });
-      await message.update({ attempts, sentAt: this.clock.now(), lockedUntil: null, lastError: null });
+      await this.settle(message, { attempts, sentAt: this.clock.now(), lockedUntil: null, lastError: null });
       report.sent.push(message.id);
     } catch (error) {
       const reason = error instanceof Error ? error.message : String(error);
-      await message.update({
+      await this.settle(message, {
         attempts,
         nextAttemptAt: this.clock.fromNow(retryDelayMs(attempts)),
         lockedUntil: null,
@@ -84,6 +84,11 @@ export class MailOutboxWorker implements OnApplicationBootstrap, OnApplicationSh
       report.failed.push(message.id);
       this.logger.warn(`message ${message.id} to ${message.recipient} not sent (try ${attempts}): ${reason}`);
     }
+  }
+
+  /** By id, not through the instance: the instance never saw the claim, so it would skip clearing it. */
+  private async settle(message: OutboxMessage, outcome: Partial<OutboxMessage>): Promise<void> {
+    await this.outbox.update(outcome, { where: { id: message.id } });
   }
 
   private async poll(): Promise<void> {

@@ -1,0 +1,30 @@
+import fs from 'node:fs';
+import net from 'node:net';
+import path from 'node:path';
+import mailparser, { type ParsedMail } from 'mailparser';
+
+/** The stand-in's folder; `npm test` sets it, and SMTP_PORT, for the stand-in it starts. */
+export function mailDir(): string {
+  const dir = process.env.MAIL_DIR;
+  if (!dir || !process.env.SMTP_PORT) throw new Error('MAIL_DIR and SMTP_PORT must point at the running SMTP stand-in');
+  return dir;
+}
+
+/** A port nothing listens on: SMTP that is down. */
+export function closedPort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = net.createServer().once('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address() as net.AddressInfo;
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+/** The messages the stand-in captured for one recipient (it records the envelope's RCPT TO). */
+export async function capturedMailTo(recipient: string): Promise<ParsedMail[]> {
+  const dir = mailDir();
+  const files = fs.readdirSync(dir).filter((name) => name.endsWith('.eml') && !name.startsWith('.'));
+  const parsed = await Promise.all(files.map((name) => mailparser.simpleParser(fs.readFileSync(path.join(dir, name)))));
+  return parsed.filter((mail) => mail.headers.get('x-envelope-to') === recipient);
+}
