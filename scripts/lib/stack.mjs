@@ -12,10 +12,17 @@ import { startPrivateMariaDb, provisionDatabase } from './mariadb.mjs';
 
 export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
+/** Every non-optional package the lock file names is on disk (content, not mtimes: an
+ *  `npm install` elsewhere in the tree must not make a running suite's node_modules vanish). */
+function dependenciesInstalled() {
+  const lock = JSON.parse(fs.readFileSync(path.join(root, 'package-lock.json'), 'utf8'));
+  return Object.entries(lock.packages)
+    .filter(([key, entry]) => key.includes('node_modules/') && !entry.optional && !entry.link)
+    .every(([key]) => fs.existsSync(path.join(root, key)));
+}
+
 export function ensureDependencies() {
-  const installed = fs.existsSync(path.join(root, 'node_modules/.package-lock.json'));
-  const lock = path.join(root, 'package-lock.json');
-  if (installed && fs.statSync(path.join(root, 'node_modules/.package-lock.json')).mtimeMs >= fs.statSync(lock).mtimeMs) return;
+  if (dependenciesInstalled()) return;
   phase('dependencies', 'npm ci');
   const result = run('npm', ['ci', '--no-audit', '--no-fund'], { cwd: root });
   if (result.status !== 0) throw new PhaseError('dependencies', 'npm ci failed');
