@@ -57,8 +57,16 @@ describe('PanelView', () => {
     expect(render(doc)).toMatch(/<span class="mp-live-value"[^>]*>—<\/span>/);
   });
 
-  it('draws the widget block through the widget registry', () => {
-    expect(html).toMatch(/<figure[^>]*class="mp-widget"[^>]*data-widget-type="slope-force"/);
+  it('draws a widget block with the shared widget component', () => {
+    expect(html).toMatch(/<div[^>]*class="mp-widget" data-widget-type="slope-force"><figure class="mp-slope-force-box"/);
+    expect(html).toContain('role="slider"');
+  });
+
+  it('draws a widget whose params fail validation as a visible problem, not a simulation', () => {
+    const doc: PanelDocJSON = { type: 'doc', content: [{ type: 'widget', attrs: { widgetType: 'slope-force', widgetId: 'w1', params: { massKg: -1 } } }] };
+    const out = render(doc);
+    expect(out).toContain('data-widget-problem="invalid-params"');
+    expect(out).not.toContain('mp-slope-force-box');
   });
 
   it('draws images from the app\'s media with alt text and credit, and nothing for unknown media', () => {

@@ -5,7 +5,7 @@ import { directionOf, PANEL_LAYOUTS, type PanelLayout, type TextDirection } from
 import { widgetsIn } from '../../panel/panel-queries.js';
 import { renderPanelNode, type PanelRenderContext } from './panel-nodes.js';
 import type { ResolveMedia } from './panel-media.js';
-import { panelRootStyle } from './panel-theme.js';
+import { panelRootStyle, WIDGET_MAX_WIDTH } from './panel-theme.js';
 
 export interface PanelViewProps {
   doc: PanelDocJSON;
@@ -43,7 +43,17 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
   );
 
   const { width, height } = PANEL_LAYOUTS[layout];
-  const context: PanelRenderContext = { locale, readings, paramsById, resolveMedia, links, reducedMotion, highContrast, onWidgetParamsChange };
+  const context: PanelRenderContext = {
+    locale,
+    readings,
+    paramsById,
+    resolveMedia,
+    links,
+    reducedMotion,
+    highContrast,
+    widgetMaxWidth: WIDGET_MAX_WIDTH[layout],
+    onWidgetParamsChange,
+  };
   return (
     <article
       className="mp-panel"

@@ -1,5 +1,7 @@
 import type { CSSProperties } from 'react';
-import { isWidgetType, widgetModule } from '../../widgets/index.js';
+import { isWidgetType, widgetModule, type ConvectionCellParams, type SlopeForceParams, type WidgetType } from '../../widgets/index.js';
+import { ConvectionCell } from '../convection-cell.js';
+import { SlopeForceBox } from '../slope-force-box.js';
 
 export interface PanelWidgetProps {
   widgetType: string;
@@ -7,33 +9,61 @@ export interface PanelWidgetProps {
   locale: string;
   reducedMotion: boolean;
   highContrast: boolean;
+  /** In the studio editor the widget says it is a simplified model, next to where its params are set. */
+  editing?: boolean;
+  /** Widest the drawing may be, in CSS px at the station's full size. */
+  maxWidth?: number;
   onParamsChange: (params: Record<string, unknown>) => void;
 }
 
-const figureStyle: CSSProperties = { margin: '0.75em 0' };
-const problemStyle: CSSProperties = { ...figureStyle, padding: '1em', border: '2px dashed currentColor' };
+const blockStyle: CSSProperties = { margin: '0.75em 0' };
+const problemStyle: CSSProperties = { ...blockStyle, padding: '1em', border: '2px dashed currentColor' };
 
-/** One widget block: its simulation, and its plain-language description for screen readers. */
-export function PanelWidget({ widgetType, params, locale }: PanelWidgetProps) {
+interface DrawingProps extends Omit<PanelWidgetProps, 'widgetType' | 'params'> {
+  widgetType: WidgetType;
+  params: unknown;
+}
+
+/** The shared component of each widget type, given params the registry has already accepted. */
+function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, onParamsChange }: DrawingProps) {
+  switch (widgetType) {
+    case 'slope-force':
+      return (
+        <SlopeForceBox
+          params={params as SlopeForceParams}
+          locale={locale}
+          reducedMotion={reducedMotion}
+          showCaution={editing}
+          maxWidth={maxWidth}
+          onParamsChange={(next) => onParamsChange({ ...next })}
+        />
+      );
+    case 'convection-cell':
+      return <ConvectionCell params={params as ConvectionCellParams} locale={locale} reducedMotion={reducedMotion} showCaution={editing} width={maxWidth} />;
+  }
+}
+
+/** One widget block, checked against the registry before it is drawn, as the server checks it. */
+export function PanelWidget(props: PanelWidgetProps) {
+  const { widgetType, params } = props;
   if (!isWidgetType(widgetType)) {
     return (
-      <figure style={problemStyle} className="mp-widget" data-widget-problem="unknown-type">
+      <div style={problemStyle} className="mp-widget" data-widget-problem="unknown-type">
         {`Unknown widget "${widgetType}".`}
-      </figure>
+      </div>
     );
   }
-  const widget = widgetModule(widgetType);
-  const checked = widget.validate(params);
+  const checked = widgetModule(widgetType).validate(params);
   if (!checked.ok) {
     return (
-      <figure style={problemStyle} className="mp-widget" data-widget-type={widgetType} data-widget-problem="invalid-params">
+      <div style={problemStyle} className="mp-widget" data-widget-type={widgetType} data-widget-problem="invalid-params">
         {checked.errors.map((error) => error.message).join(' ')}
-      </figure>
+      </div>
     );
   }
   return (
-    <figure style={figureStyle} className="mp-widget" data-widget-type={widgetType}>
-      <figcaption>{widget.describe(checked.params, locale)}</figcaption>
-    </figure>
+    <div style={blockStyle} className="mp-widget" data-widget-type={widgetType}>
+      <WidgetDrawing {...props} widgetType={widgetType} params={checked.params} />
+    </div>
   );
 }

@@ -6,6 +6,6 @@ export * from './panel-media.js';
 export * from './panel-theme.js';
 export * from './panel-editor-options.js';
 export * from './panel-editor-extensions.js';
-export { WidgetNodeView } from './WidgetNodeView.js';
+export { isWidgetDrawingEvent, WidgetNodeView } from './WidgetNodeView.js';
 export { LiveValueNodeView } from './LiveValueNodeView.js';
 export { PanelImageNodeView } from './PanelImageNodeView.js';

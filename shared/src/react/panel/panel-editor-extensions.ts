@@ -6,7 +6,7 @@ import { LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE } from '../../panel/pane
 import { LiveValueNodeView } from './LiveValueNodeView.js';
 import type { PanelEditorOptions } from './panel-editor-options.js';
 import { PanelImageNodeView } from './PanelImageNodeView.js';
-import { WidgetNodeView } from './WidgetNodeView.js';
+import { isWidgetDrawingEvent, WidgetNodeView } from './WidgetNodeView.js';
 
 const nodeViews: Record<string, ComponentType<ReactNodeViewProps>> = {
   [WIDGET_NODE]: WidgetNodeView,
@@ -22,7 +22,10 @@ function withNodeView(extension: AnyExtension, options: PanelEditorOptions): Any
       return { ...this.parent?.(), ...options };
     },
     addNodeView() {
-      return ReactNodeViewRenderer(view, { as: extension.name === LIVE_VALUE_NODE ? 'span' : 'div' });
+      return ReactNodeViewRenderer(view, {
+        as: extension.name === LIVE_VALUE_NODE ? 'span' : 'div',
+        stopEvent: extension.name === WIDGET_NODE ? isWidgetDrawingEvent : null,
+      });
     },
   });
 }

@@ -16,6 +16,7 @@ export interface PanelRenderContext {
   links: 'anchor' | 'text';
   reducedMotion: boolean;
   highContrast: boolean;
+  widgetMaxWidth: number;
   onWidgetParamsChange: (widgetId: string, params: Record<string, unknown>) => void;
 }
 
@@ -108,6 +109,7 @@ export function renderPanelNode(node: PanelNodeJSON, context: PanelRenderContext
           locale={context.locale}
           reducedMotion={context.reducedMotion}
           highContrast={context.highContrast}
+          maxWidth={context.widgetMaxWidth}
           onParamsChange={(params) => context.onWidgetParamsChange(widgetId, params)}
         />
       );

@@ -31,3 +31,6 @@ export function panelRootStyle(layout: keyof typeof BODY_SIZE, width: number, he
     ['--mp-live-value' as string]: colours.liveValue,
   };
 }
+
+/** Widest a widget is drawn on each screen, in CSS px: a portrait screen's full text width, half a landscape one. */
+export const WIDGET_MAX_WIDTH = { landscape: 1100, portrait: 936 } as const;
