@@ -5,8 +5,12 @@ import { ClockModule } from './clock/clock.module.js';
 import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { DevMailModule } from './dev-mail/dev-mail.module.js';
+import { ExhibitsModule } from './exhibits/exhibits.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { MediaModule } from './media/media.module.js';
+import { PanelsModule } from './panels/panels.module.js';
+import { StoriesModule } from './stories/stories.module.js';
 import { UsersModule } from './users/users.module.js';
 import { VenuesModule } from './venues/venues.module.js';
 import { WidgetsModule } from './widgets/widgets.module.js';
@@ -15,6 +19,7 @@ import { WidgetsModule } from './widgets/widgets.module.js';
   imports: [
     ConfigModule, ClockModule, DatabaseModule, AuditModule, MailModule, UsersModule, AuthModule,
     DevMailModule, HealthModule, VenuesModule, WidgetsModule,
+    ExhibitsModule, StoriesModule, PanelsModule, MediaModule,
   ],
 })
 export class AppModule {}

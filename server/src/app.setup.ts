@@ -1,9 +1,11 @@
+import { RequestMethod } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
 import { ApiExceptionFilter } from './common/api-exception.filter.js';
 import { createValidationPipe } from './common/validation.js';
 import { ConfigService } from './config/config.service.js';
+import { MEDIA_FILES_PATH } from './media/media-files.controller.js';
 import { serveApps } from './static/serve-apps.js';
 
 /** Everything around the modules that the running server and the tests share. */
@@ -11,7 +13,7 @@ export function configureApp(app: NestExpressApplication): void {
   const config = app.get(ConfigService);
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
-  app.setGlobalPrefix('api');
+  app.setGlobalPrefix('api', { exclude: [{ path: MEDIA_FILES_PATH, method: RequestMethod.GET }] });
   app.use(cookieParser());
   app.useGlobalPipes(createValidationPipe());
   app.useGlobalFilters(new ApiExceptionFilter());

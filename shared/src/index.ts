@@ -2,3 +2,5 @@ export * from './auth/roles.js';
 export type * from './auth/views.js';
 export * from './widgets/index.js';
 export * from './i18n/index.js';
+export * from './panel/index.js';
+export * from './authoring/views.js';

@@ -10,10 +10,10 @@ export const likePattern = (text: string) => `%${text.trim().replace(/[\\%_]/g, 
 export const sortValues = (keys: readonly string[]) => keys.flatMap((key) => [key, `-${key}`]);
 
 /** `?sort=-updatedAt` as an ORDER BY, with the id as tie-break so pages never overlap. */
-export function orderOf(sort: string, columns: Record<string, OrderItem[0] | string> = {}): OrderItem[] {
+export function orderOf(sort: string, columns: Record<string, string> = {}): OrderItem[] {
   const descending = sort.startsWith('-');
   const key = descending ? sort.slice(1) : sort;
-  return [[columns[key] ?? key, descending ? 'DESC' : 'ASC'] as OrderItem, ['id', 'ASC']];
+  return [[columns[key] ?? key, descending ? 'DESC' : 'ASC'], ['id', 'ASC']];
 }
 
 export const SortField = (keys: readonly string[], fallback: string) =>

@@ -1,3 +1,4 @@
+import path from 'node:path';
 import { Injectable } from '@nestjs/common';
 
 /** Settings from the environment, read once, each with the default a single-machine start needs. */
@@ -31,6 +32,12 @@ export class ConfigService {
   readonly studioDist = process.env.STUDIO_DIST;
   readonly kioskDist = process.env.KIOSK_DIST;
   readonly demoPassword = process.env.DEMO_PASSWORD ?? 'mantlepiece-demo';
+
+  /** Uploaded images and their renditions, content-addressed; git-ignored. */
+  readonly mediaDir = path.resolve(process.env.MEDIA_DIR ?? 'media/store');
+  readonly mediaMaxBytes = intFromEnv('MEDIA_MAX_BYTES', 25 * 1024 * 1024);
+  /** Width × height above which an upload is refused before it is decoded (decompression bombs). */
+  readonly mediaMaxPixels = intFromEnv('MEDIA_MAX_PIXELS', 100_000_000);
 
   get isProduction(): boolean {
     return this.nodeEnv === 'production';

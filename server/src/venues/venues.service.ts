@@ -1,10 +1,16 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
+import type { VenueView } from '@mantlepiece/shared';
+import type { CreateVenueDto, UpdateVenueDto } from './dto/venue.dto.js';
 import { Venue } from './models/venue.model.js';
+import { SettingsService } from './settings.service.js';
+import { toVenueView } from './venues.presenter.js';
 
 @Injectable()
-export class VenuesService {
-  constructor(@InjectModel(Venue) private readonly venues: typeof Venue) {}
+export class VenuesService extends SettingsService<Venue, VenueView> {
+  constructor(@InjectModel(Venue) private readonly venues: typeof Venue) {
+    super(venues, { label: 'venue', toView: toVenueView, inUse: 'This venue still has galleries; delete or move them first.' });
+  }
 
   /** The venue a kiosk shows before it is paired: the first one set up. */
   async kioskVenue() {
@@ -12,6 +18,28 @@ export class VenuesService {
     if (!venue) throw new NotFoundException('No venue has been set up yet.');
     return toKioskVenueView(venue);
   }
+
+  override create(dto: CreateVenueDto) {
+    assertLocales(dto.sourceLocale, dto.targetLocales);
+    return super.create(dto);
+  }
+
+  override async update(id: number, dto: UpdateVenueDto) {
+    const venue = await this.find(id);
+    assertLocales(dto.sourceLocale ?? venue.sourceLocale, dto.targetLocales ?? venue.targetLocales);
+    return super.update(id, dto);
+  }
+}
+
+/** Translating into the language a story is written in would be a copy, not a translation. */
+function assertLocales(sourceLocale: string, targetLocales: string[]) {
+  const index = targetLocales.indexOf(sourceLocale);
+  if (index === -1) return;
+  throw new BadRequestException({
+    statusCode: 400,
+    message: 'Some fields are not valid.',
+    errors: [{ path: ['targetLocales', index], message: 'The source locale cannot also be a target locale.' }],
+  });
 }
 
 export function toKioskVenueView(venue: Venue) {

@@ -3,6 +3,8 @@ import * as usersAndSignIn from './0001-users-and-sign-in.js';
 import * as mailOutbox from './0002-mail-outbox.js';
 import * as auditEvents from './0003-audit-events.js';
 import * as venues from './0004-venues.js';
+import * as exhibitsStoriesPanels from './0100-exhibits-stories-panels.js';
+import * as media from './0101-media.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -15,6 +17,8 @@ const modules: [string, MigrationModule][] = [
   ['0002-mail-outbox', mailOutbox],
   ['0003-audit-events', auditEvents],
   ['0004-venues', venues],
+  ['0100-exhibits-stories-panels', exhibitsStoriesPanels],
+  ['0101-media', media],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

@@ -1,0 +1,25 @@
+import { OmitType, PartialType } from '@nestjs/swagger';
+import { OptionalDateOnlyField } from '../../common/date-only.js';
+import { ParentFilterField, ParentIdField, SettingsNameField } from '../../venues/dto/settings-fields.js';
+import { ListSettingsQuery } from '../../venues/settings.service.js';
+
+export class CreateExhibitDto {
+  @ParentIdField('gallery')
+  galleryId: number;
+
+  @SettingsNameField()
+  name: string;
+
+  @OptionalDateOnlyField('First day the exhibit is planned to open')
+  plannedStart?: string | null;
+
+  @OptionalDateOnlyField('Last day it is planned to run; media licences should outlast it')
+  plannedEnd?: string | null;
+}
+
+export class UpdateExhibitDto extends PartialType(OmitType(CreateExhibitDto, ['galleryId'] as const)) {}
+
+export class ListExhibitsQuery extends ListSettingsQuery {
+  @ParentFilterField()
+  galleryId?: number;
+}

@@ -1,0 +1,40 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import type { ExhibitView } from '@mantlepiece/shared';
+import { SettingsService } from '../venues/settings.service.js';
+import type { CreateExhibitDto, UpdateExhibitDto } from './dto/exhibit.dto.js';
+import { toExhibitView } from './exhibits.presenter.js';
+import { Exhibit } from './models/exhibit.model.js';
+
+@Injectable()
+export class ExhibitsService extends SettingsService<Exhibit, ExhibitView> {
+  constructor(@InjectModel(Exhibit) exhibits: typeof Exhibit) {
+    super(exhibits, {
+      label: 'exhibit',
+      toView: toExhibitView,
+      inUse: 'Stories still belong to this exhibit; move or delete them first.',
+      parentKey: 'galleryId',
+    });
+  }
+
+  override create(dto: CreateExhibitDto) {
+    assertPlannedDates(dto.plannedStart, dto.plannedEnd);
+    return super.create(dto);
+  }
+
+  override async update(id: number, dto: UpdateExhibitDto) {
+    const exhibit = await this.find(id);
+    assertPlannedDates(dto.plannedStart === undefined ? exhibit.plannedStart : dto.plannedStart, dto.plannedEnd === undefined ? exhibit.plannedEnd : dto.plannedEnd);
+    return super.update(id, dto);
+  }
+}
+
+// 'YYYY-MM-DD' strings order as their dates do.
+function assertPlannedDates(start: string | null | undefined, end: string | null | undefined) {
+  if (!start || !end || start <= end) return;
+  throw new BadRequestException({
+    statusCode: 400,
+    message: 'Some fields are not valid.',
+    errors: [{ path: ['plannedEnd'], message: 'The planned end comes after the planned start.' }],
+  });
+}

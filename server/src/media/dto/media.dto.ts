@@ -1,0 +1,90 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min, registerDecorator, ValidateIf } from 'class-validator';
+import { createRequire } from 'node:module';
+import { MEDIA_MISSING_FILTERS, type MediaLicence, type MediaMissingFilter } from '@mantlepiece/shared';
+import { OptionalDateOnlyField } from '../../common/date-only.js';
+import { SearchField, SortField } from '../../common/list-query.js';
+import { PageQuery } from '../../common/page.js';
+import { canonicalLocale } from '../../venues/dto/locale-tag.js';
+
+export const MEDIA_SORT_KEYS = ['createdAt', 'filename', 'bytes', 'licenceExpiresOn'] as const;
+// The SPDX list as a JSON array, kept current by its package rather than by us.
+const SPDX_IDS = new Set<string>(createRequire(import.meta.url)('spdx-license-ids') as string[]);
+const MAX_ALT_LENGTH = 1000;
+
+export class ListMediaQuery extends PageQuery {
+  @SearchField()
+  q?: string;
+
+  @ApiPropertyOptional({ enum: MEDIA_MISSING_FILTERS, description: 'Only assets without alt text, or without a credit line' })
+  @IsOptional()
+  @IsIn(MEDIA_MISSING_FILTERS)
+  missing?: MediaMissingFilter;
+
+  @ApiPropertyOptional({ description: 'Only assets whose licence ends within this many days (or has ended)' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(0)
+  @Max(3650)
+  expiringWithinDays?: number;
+
+  @SortField(MEDIA_SORT_KEYS, '-createdAt')
+  sort: string = '-createdAt';
+}
+
+/** Why a licence value is refused, or null when it is one of the two shapes of MediaLicence. */
+export function licenceProblem(value: unknown): string | null {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) return 'A licence is {kind: "spdx", id} or {kind: "all-rights-reserved", holder}.';
+  const { kind, ...rest } = value as Record<string, unknown>;
+  const keys = Object.keys(rest);
+  if (kind === 'spdx') {
+    if (keys.length !== 1 || typeof rest.id !== 'string' || !SPDX_IDS.has(rest.id)) return 'Use an SPDX licence identifier such as CC-BY-4.0 or CC0-1.0.';
+    return null;
+  }
+  if (kind === 'all-rights-reserved') {
+    const holder = rest.holder;
+    if (keys.length !== 1 || typeof holder !== 'string' || holder.trim().length === 0 || holder.length > 200) return 'Name who holds the rights (up to 200 characters).';
+    return null;
+  }
+  return 'A licence is {kind: "spdx", id} or {kind: "all-rights-reserved", holder}.';
+}
+
+export function altTextsProblem(value: unknown): string | null {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) return 'Alt text is an object of texts by locale, such as {"en": "…"}.';
+  for (const [locale, text] of Object.entries(value)) {
+    if (canonicalLocale(locale) !== locale) return `"${locale}" is not a BCP 47 language tag in canonical form, such as en or pt-BR.`;
+    if (typeof text !== 'string' || text.length > MAX_ALT_LENGTH) return `The ${locale} alt text must be text of at most ${MAX_ALT_LENGTH} characters.`;
+  }
+  return null;
+}
+
+const ValidWith = (problem: (value: unknown) => string | null) => (target: object, propertyName: string | symbol) =>
+  registerDecorator({
+    name: `valid-${String(propertyName)}`,
+    target: target.constructor,
+    propertyName: String(propertyName),
+    validator: { validate: (value: unknown) => problem(value) === null, defaultMessage: (args) => problem(args?.value) ?? '' },
+  });
+
+export class UpdateMediaDto {
+  @ApiPropertyOptional({ nullable: true, example: 'Illustration: Basalt Point Earth Science Centre' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(500)
+  credit?: string | null;
+
+  @ApiPropertyOptional({ nullable: true, example: { kind: 'spdx', id: 'CC-BY-4.0' } })
+  @ValidateIf((_dto, value) => value !== undefined && value !== null)
+  @ValidWith(licenceProblem)
+  licence?: MediaLicence | null;
+
+  @OptionalDateOnlyField('Last day the licence allows showing the image')
+  licenceExpiresOn?: string | null;
+
+  @ApiPropertyOptional({ example: { en: 'A pan of soup with arrows rising in the middle' }, description: 'Per locale; an empty text removes that locale' })
+  @IsOptional()
+  @ValidWith(altTextsProblem)
+  alt?: Record<string, string>;
+}

@@ -1,0 +1,212 @@
+import { BadRequestException, ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { ForeignKeyConstraintError, Op, UniqueConstraintError, type Transaction, type WhereOptions } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import type { MediaUsageView, MediaView, Page } from '@mantlepiece/shared';
+import { Clock } from '../clock/clock.service.js';
+import { dateOnlyOf } from '../common/date-only.js';
+import { likePattern, orderOf } from '../common/list-query.js';
+import { pageWindow, toPage } from '../common/page.js';
+import { PanelMediaUsage } from '../panels/models/panel-media-usage.model.js';
+import { Panel } from '../panels/models/panel.model.js';
+import { Story } from '../stories/models/story.model.js';
+import type { User } from '../users/models/user.model.js';
+import type { ListMediaQuery, UpdateMediaDto } from './dto/media.dto.js';
+import { ImageProcessing, MIME_TYPES, type InspectedImage } from './image-processing.js';
+import { toMediaView } from './media.presenter.js';
+import { MEDIA_STORE, originalKey, renditionKey, type MediaStore } from './media-store.js';
+import { MediaAltText } from './models/media-alt-text.model.js';
+import { MediaAsset } from './models/media-asset.model.js';
+import { MediaRendition } from './models/media-rendition.model.js';
+
+const DAY_MS = 86_400_000;
+
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+}
+
+/** Multer reads the name in a multipart header as Latin-1; browsers send UTF-8. Path parts and control characters go. */
+function filenameOf(file: UploadedFile): string {
+  const decoded = Buffer.from(file.originalname, 'latin1').toString('utf8');
+  const name = (decoded.includes('\ufffd') ? file.originalname : decoded).split(/[\\/]/).pop() ?? '';
+  return name.replace(/[\u0000-\u001f\u007f]/g, '').trim().slice(0, 255) || 'image';
+}
+
+@Injectable()
+export class MediaService {
+  constructor(
+    @InjectModel(MediaAsset) private readonly assets: typeof MediaAsset,
+    @InjectModel(MediaRendition) private readonly renditions: typeof MediaRendition,
+    @InjectModel(MediaAltText) private readonly altTexts: typeof MediaAltText,
+    @InjectModel(PanelMediaUsage) private readonly usages: typeof PanelMediaUsage,
+    @Inject(MEDIA_STORE) private readonly store: MediaStore,
+    private readonly images: ImageProcessing,
+    private readonly clock: Clock,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  /** Every file is checked before any is stored, so a refused upload leaves nothing behind. */
+  async upload(uploader: User | null, files: UploadedFile[]): Promise<MediaView[]> {
+    if (!files?.length) {
+      throw new BadRequestException({ statusCode: 400, message: 'Some fields are not valid.', errors: [{ path: ['file'], message: 'Choose at least one image to upload.' }] });
+    }
+    const inspected: InspectedImage[] = [];
+    for (const file of files) inspected.push(await this.images.inspect(file.buffer, filenameOf(file)));
+    const ids: number[] = [];
+    for (const [index, file] of files.entries()) ids.push(await this.storeImage(uploader, file, inspected[index]!));
+    return this.viewsOf(ids);
+  }
+
+  /** The Media library: searched, filtered, sorted and paged by the database. */
+  async list(query: ListMediaQuery): Promise<Page<MediaView>> {
+    const conditions: WhereOptions<MediaAsset>[] = [];
+    if (query.q) {
+      const pattern = likePattern(query.q);
+      conditions.push({ [Op.or]: [{ originalFilename: { [Op.like]: pattern } }, { credit: { [Op.like]: pattern } }] });
+    }
+    if (query.missing === 'alt') {
+      conditions.push(Sequelize.literal("NOT EXISTS (SELECT 1 FROM `media_alt_texts` AS `alt` WHERE `alt`.`media_asset_id` = `MediaAsset`.`id` AND `alt`.`text` <> '')"));
+    }
+    if (query.missing === 'credit') conditions.push({ [Op.or]: [{ credit: null }, { credit: '' }] });
+    if (query.expiringWithinDays !== undefined) {
+      conditions.push({ licenceExpiresOn: { [Op.ne]: null, [Op.lte]: dateOnlyOf(this.clock.fromNow(query.expiringWithinDays * DAY_MS)) } });
+    }
+    const { rows, count } = await this.assets.findAndCountAll({
+      where: { [Op.and]: conditions },
+      attributes: ['id'],
+      order: orderOf(query.sort, { filename: 'originalFilename' }),
+      ...pageWindow(query),
+    });
+    return toPage(await this.viewsOf(rows.map((row) => row.id)), count, query);
+  }
+
+  async get(id: number): Promise<MediaView> {
+    const [view] = await this.viewsOf([id]);
+    if (!view) throw new NotFoundException('There is no such image.');
+    return view;
+  }
+
+  /** Credit, licence, expiry and alt text; an alt text set to "" removes that locale's. */
+  async updateDetails(id: number, dto: UpdateMediaDto): Promise<MediaView> {
+    await this.sequelize.transaction(async (transaction) => {
+      const asset = await this.lockAsset(id, transaction);
+      if (dto.credit !== undefined) asset.credit = dto.credit?.trim() || null;
+      if (dto.licence !== undefined) {
+        asset.licenceKind = dto.licence?.kind ?? null;
+        asset.licenceSpdxId = dto.licence?.kind === 'spdx' ? dto.licence.id : null;
+        asset.licenceHolder = dto.licence?.kind === 'all-rights-reserved' ? dto.licence.holder.trim() : null;
+      }
+      if (dto.licenceExpiresOn !== undefined) asset.licenceExpiresOn = dto.licenceExpiresOn;
+      await asset.save({ transaction });
+      if (dto.alt) await this.setAltTexts(id, dto.alt, transaction);
+    });
+    return this.get(id);
+  }
+
+  /** Refused while any panel shows the image; the answer says where. */
+  async deleteAsset(id: number): Promise<void> {
+    const asset = await this.sequelize.transaction(async (transaction) => {
+      const found = await this.lockAsset(id, transaction);
+      const usedIn = await this.usageOf([id], transaction);
+      if (usedIn.length > 0) throw inUse(usedIn);
+      const keys = (await this.renditions.findAll({ where: { mediaAssetId: id }, transaction })).map((rendition) => rendition.storeKey);
+      try {
+        await found.destroy({ transaction });
+      } catch (error) {
+        if (error instanceof ForeignKeyConstraintError) throw inUse(await this.usageOf([id]));
+        throw error;
+      }
+      return { sha256: found.sha256, keys };
+    });
+    // After the commit: a rolled-back delete must not lose files. A licence that ended must stop being served.
+    for (const key of [originalKey(asset.sha256), ...asset.keys]) await this.store.remove(key);
+  }
+
+  /** Stored once per content: the same bytes uploaded again return the asset that exists. */
+  private async storeImage(uploader: User | null, file: UploadedFile, { kind, sha256 }: InspectedImage): Promise<number> {
+    const existing = await this.assets.findOne({ where: { sha256 }, attributes: ['id'] });
+    if (existing) return existing.id;
+    const processed = await this.images.process(file.buffer);
+    await this.store.put(originalKey(sha256), file.buffer);
+    for (const rendition of processed.renditions) await this.store.put(renditionKey(sha256, rendition.width), rendition.data);
+    try {
+      return await this.sequelize.transaction(async (transaction) => {
+        const asset = await this.assets.create(
+          {
+            sha256,
+            originalFilename: filenameOf(file),
+            mime: MIME_TYPES[kind],
+            width: processed.width,
+            height: processed.height,
+            bytes: file.buffer.length,
+            placeholder: processed.placeholder,
+            uploadedById: uploader?.id ?? null,
+          },
+          { transaction },
+        );
+        await this.renditions.bulkCreate(
+          processed.renditions.map((rendition) => ({
+            mediaAssetId: asset.id,
+            width: rendition.width,
+            height: rendition.height,
+            sha256: rendition.sha256,
+            storeKey: renditionKey(sha256, rendition.width),
+            bytes: rendition.data.length,
+          })),
+          { transaction },
+        );
+        return asset.id;
+      });
+    } catch (error) {
+      // The same file uploaded twice at once: the first row stands and both uploads get it.
+      if (error instanceof UniqueConstraintError) return (await this.assets.findOne({ where: { sha256 }, attributes: ['id'] }))!.id;
+      throw error;
+    }
+  }
+
+  private async setAltTexts(mediaAssetId: number, alt: Record<string, string>, transaction: Transaction): Promise<void> {
+    const entries = Object.entries(alt).map(([locale, text]) => ({ mediaAssetId, locale, text: text.trim() }));
+    const cleared = entries.filter((entry) => entry.text === '').map((entry) => entry.locale);
+    if (cleared.length > 0) await this.altTexts.destroy({ where: { mediaAssetId, locale: cleared }, transaction });
+    const kept = entries.filter((entry) => entry.text !== '');
+    if (kept.length > 0) await this.altTexts.bulkCreate(kept, { updateOnDuplicate: ['text', 'updatedAt'], transaction });
+  }
+
+  private async lockAsset(id: number, transaction: Transaction): Promise<MediaAsset> {
+    const asset = await this.assets.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!asset) throw new NotFoundException('There is no such image.');
+    return asset;
+  }
+
+  /** Views of these assets in this order, each with renditions, alt texts and where it is used. */
+  private async viewsOf(ids: number[]): Promise<MediaView[]> {
+    if (ids.length === 0) return [];
+    const assets = await this.assets.findAll({ where: { id: ids }, include: [MediaRendition, MediaAltText] });
+    const usage = await this.usageOf(ids);
+    const byId = new Map(assets.map((asset) => [asset.id, asset]));
+    return ids
+      .map((id) => byId.get(id))
+      .filter((asset): asset is MediaAsset => asset !== undefined)
+      .map((asset) => toMediaView(asset, usage.filter((use) => use.mediaAssetId === asset.id).map(({ mediaAssetId: _, ...use }) => use)));
+  }
+
+  private async usageOf(ids: number[], transaction?: Transaction): Promise<(MediaUsageView & { mediaAssetId: number })[]> {
+    const rows = await this.usages.findAll({
+      where: { mediaAssetId: ids },
+      include: [{ model: Panel, attributes: ['id', 'storyId', 'position'], include: [{ model: Story, attributes: ['id', 'title'] }] }],
+      order: [[Panel, Story, 'title', 'ASC'], [Panel, 'position', 'ASC']],
+      transaction,
+    });
+    return rows.map((row) => ({ mediaAssetId: row.mediaAssetId, storyId: row.panel!.storyId, storyTitle: row.panel!.story!.title, panelId: row.panelId }));
+  }
+}
+
+function inUse(usedIn: MediaUsageView[]): ConflictException {
+  const stories = [...new Set(usedIn.map((use) => `"${use.storyTitle}"`))];
+  return new ConflictException({
+    statusCode: 409,
+    message: `This image is used on ${usedIn.length} panel${usedIn.length === 1 ? '' : 's'} of ${stories.join(', ')}; take it off them first.`,
+    errors: usedIn.map((use, index) => ({ path: ['usedIn', index], message: `Story ${use.storyId} "${use.storyTitle}", panel ${use.panelId}` })),
+  });
+}

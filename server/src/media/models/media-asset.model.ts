@@ -1,0 +1,61 @@
+import { Column, DataType, HasMany, Model, Table } from 'sequelize-typescript';
+import { MediaAltText } from './media-alt-text.model.js';
+import { MediaRendition } from './media-rendition.model.js';
+
+export const LICENCE_KINDS = ['spdx', 'all-rights-reserved'] as const;
+export type LicenceKind = (typeof LICENCE_KINDS)[number];
+
+/** An uploaded image, stored once per content (sha256), with its rights and alt text. */
+@Table({ tableName: 'media_assets' })
+export class MediaAsset extends Model {
+  @Column({ type: DataType.CHAR(64), allowNull: false, unique: true })
+  sha256: string;
+
+  @Column({ type: DataType.STRING(255), allowNull: false })
+  originalFilename: string;
+
+  /** As detected from the bytes, never as the client said. */
+  @Column({ type: DataType.STRING(40), allowNull: false })
+  mime: string;
+
+  /** After auto-orientation: what a visitor sees. */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  width: number;
+
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  height: number;
+
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  bytes: number;
+
+  /** data: URI of a tiny blurred WebP. */
+  @Column({ type: DataType.TEXT, allowNull: false })
+  placeholder: string;
+
+  @Column({ type: DataType.STRING(500), allowNull: true })
+  credit: string | null;
+
+  @Column({ type: DataType.ENUM(...LICENCE_KINDS), allowNull: true })
+  licenceKind: LicenceKind | null;
+
+  @Column({ type: DataType.STRING(100), allowNull: true })
+  licenceSpdxId: string | null;
+
+  @Column({ type: DataType.STRING(200), allowNull: true })
+  licenceHolder: string | null;
+
+  @Column({ type: DataType.DATEONLY, allowNull: true })
+  licenceExpiresOn: string | null;
+
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  uploadedById: number | null;
+
+  @HasMany(() => MediaRendition)
+  renditions?: MediaRendition[];
+
+  @HasMany(() => MediaAltText)
+  altTexts?: MediaAltText[];
+
+  declare id: number;
+  declare createdAt: Date;
+}

@@ -1,0 +1,163 @@
+import { ConflictException, HttpStatus, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op, type Transaction } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import {
+  checkPanelDocument, emptyPanelDoc, PANEL_IMAGE_NODE, visitPanelNodes,
+  type PanelDocJSON, type PanelIssue, type PanelView,
+} from '@mantlepiece/shared';
+import { MediaAsset } from '../media/models/media-asset.model.js';
+import { Story } from '../stories/models/story.model.js';
+import type { CreatePanelDto, SavePanelDocumentDto, UpdatePanelDto } from './dto/panel.dto.js';
+import { PanelDocument } from './models/panel-document.model.js';
+import { PanelMediaUsage } from './models/panel-media-usage.model.js';
+import { Panel } from './models/panel.model.js';
+import { PanelConflictException } from './panel-conflict.js';
+import { toPanelView } from './panels.presenter.js';
+
+/** Museum practice: a panel holds tens of words, not hundreds. The curator sets each panel's own. */
+export const DEFAULT_WORD_BUDGET = 60;
+
+const MEDIA_ID = /^[1-9]\d{0,9}$/;
+
+function unprocessable(message: string, errors: PanelIssue[]): UnprocessableEntityException {
+  return new UnprocessableEntityException({ statusCode: HttpStatus.UNPROCESSABLE_ENTITY, message, errors });
+}
+
+@Injectable()
+export class PanelsService {
+  constructor(
+    @InjectModel(Panel) private readonly panels: typeof Panel,
+    @InjectModel(PanelDocument) private readonly documents: typeof PanelDocument,
+    @InjectModel(PanelMediaUsage) private readonly usages: typeof PanelMediaUsage,
+    @InjectModel(Story) private readonly stories: typeof Story,
+    @InjectModel(MediaAsset) private readonly media: typeof MediaAsset,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  /** A story's panels in order, each with its source-locale document. */
+  async listForStory(story: Story, transaction?: Transaction): Promise<PanelView[]> {
+    const panels = await this.panels.findAll({
+      where: { storyId: story.id },
+      include: [{ model: PanelDocument, where: { locale: story.sourceLocale } }],
+      order: [['position', 'ASC'], ['id', 'ASC']],
+      transaction,
+    });
+    return panels.map((panel) => toPanelView(panel, panel.documents![0]!));
+  }
+
+  async addPanel(storyId: number, dto: CreatePanelDto): Promise<PanelView> {
+    const doc = await this.checkDocument(dto.doc ?? emptyPanelDoc());
+    return this.sequelize.transaction(async (transaction) => {
+      const story = await this.lockStory(storyId, transaction);
+      const count = await this.panels.count({ where: { storyId }, transaction });
+      const position = Math.min(dto.position ?? count, count);
+      await this.panels.increment('position', { by: 1, where: { storyId, position: { [Op.gte]: position } }, transaction });
+      const panel = await this.panels.create({ storyId, position, wordBudget: dto.wordBudget ?? DEFAULT_WORD_BUDGET }, { transaction });
+      const source = await this.documents.create({ panelId: panel.id, locale: story.sourceLocale, doc, version: 1 }, { transaction });
+      await this.recordMediaUsage(panel.id, doc, transaction);
+      await this.touchStory(storyId, transaction);
+      return toPanelView(panel, source);
+    });
+  }
+
+  /**
+   * Saves the source document by compare-and-set on its version: of two editors who started from
+   * the same version, the second gets a 409 with what the first saved, never a silent overwrite.
+   */
+  async saveDocument(panelId: number, { doc: json, version }: SavePanelDocumentDto): Promise<{ version: number }> {
+    const doc = await this.checkDocument(json);
+    return this.sequelize.transaction(async (transaction) => {
+      const { panel, story } = await this.findPanel(panelId, transaction);
+      const where = { panelId, locale: story.sourceLocale };
+      const [saved] = await this.documents.update({ doc, version: version + 1 }, { where: { ...where, version }, transaction });
+      if (saved === 0) {
+        // A locking read: a plain one would answer from this transaction's snapshot, which may predate the winning save.
+        const current = await this.documents.findOne({ where, transaction, lock: transaction.LOCK.UPDATE });
+        throw new PanelConflictException(current!.version, current!.doc);
+      }
+      await this.recordMediaUsage(panel.id, doc, transaction);
+      await this.touchStory(story.id, transaction);
+      return { version: version + 1 };
+    });
+  }
+
+  async updatePanel(panelId: number, dto: UpdatePanelDto): Promise<PanelView> {
+    return this.sequelize.transaction(async (transaction) => {
+      const { panel, story } = await this.findPanel(panelId, transaction);
+      await panel.update({ wordBudget: dto.wordBudget }, { transaction });
+      const source = await this.documents.findOne({ where: { panelId, locale: story.sourceLocale }, transaction });
+      return toPanelView(panel, source!);
+    });
+  }
+
+  /** Puts every panel of the story in the order given, all in one transaction. */
+  async reorder(storyId: number, panelIds: number[]): Promise<PanelView[]> {
+    return this.sequelize.transaction(async (transaction) => {
+      const story = await this.lockStory(storyId, transaction);
+      const current = new Set((await this.panels.findAll({ where: { storyId }, attributes: ['id'], transaction })).map((panel) => panel.id));
+      if (panelIds.length !== current.size || !panelIds.every((id) => current.has(id))) {
+        throw new ConflictException("The list does not match this story's panels; someone may have added or deleted one. Reload and try again.");
+      }
+      for (const [position, id] of panelIds.entries()) await this.panels.update({ position }, { where: { id }, transaction });
+      await this.touchStory(storyId, transaction);
+      return this.listForStory(story, transaction);
+    });
+  }
+
+  async deletePanel(panelId: number): Promise<void> {
+    await this.sequelize.transaction(async (transaction) => {
+      const { panel, story } = await this.findPanel(panelId, transaction);
+      await panel.destroy({ transaction });
+      await this.panels.decrement('position', { by: 1, where: { storyId: story.id, position: { [Op.gt]: panel.position } }, transaction });
+      await this.touchStory(story.id, transaction);
+    });
+  }
+
+  /** The shared check (schema from panelExtensions, links, widget params), then: every image is in the library. */
+  private async checkDocument(json: unknown): Promise<PanelDocJSON> {
+    const check = checkPanelDocument(json);
+    if (!check.ok) throw unprocessable('This panel cannot be saved as it is.', check.errors);
+    const images: { path: PanelIssue['path']; mediaId: string }[] = [];
+    visitPanelNodes(check.doc, (node, path) => {
+      if (node.type === PANEL_IMAGE_NODE) images.push({ path: [...path, 'attrs', 'mediaId'], mediaId: String(node.attrs?.mediaId) });
+    });
+    const wanted = [...new Set(images.map((image) => image.mediaId).filter((id) => MEDIA_ID.test(id)))].map(Number);
+    const known = new Set((await this.media.findAll({ where: { id: wanted }, attributes: ['id'] })).map((asset) => String(asset.id)));
+    const missing = images.filter((image) => !known.has(image.mediaId));
+    if (missing.length > 0) {
+      throw unprocessable('This panel cannot be saved as it is.', missing.map(({ path, mediaId }) => ({ path, message: `There is no image ${mediaId} in the media library.` })));
+    }
+    return check.doc;
+  }
+
+  private async recordMediaUsage(panelId: number, doc: PanelDocJSON, transaction: Transaction): Promise<void> {
+    await this.usages.destroy({ where: { panelId }, transaction });
+    const ids = new Set<number>();
+    visitPanelNodes(doc, (node) => {
+      if (node.type === PANEL_IMAGE_NODE) ids.add(Number(node.attrs?.mediaId));
+    });
+    await this.usages.bulkCreate([...ids].map((mediaAssetId) => ({ panelId, mediaAssetId })), { transaction });
+  }
+
+  /** Every change to a story's panels goes through its row lock, so positions never interleave. */
+  private async lockStory(storyId: number, transaction: Transaction): Promise<Story> {
+    const story = await this.stories.findByPk(storyId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!story) throw new NotFoundException('There is no such story.');
+    return story;
+  }
+
+  private async findPanel(panelId: number, transaction: Transaction): Promise<{ panel: Panel; story: Story }> {
+    const found = await this.panels.findByPk(panelId, { attributes: ['storyId'], transaction });
+    if (!found) throw new NotFoundException('There is no such panel.');
+    const story = await this.lockStory(found.storyId, transaction);
+    const panel = await this.panels.findByPk(panelId, { transaction });
+    if (!panel) throw new NotFoundException('There is no such panel.');
+    return { panel, story };
+  }
+
+  /** A story's "updated" is when anything in it last changed, panels included. */
+  private async touchStory(storyId: number, transaction: Transaction): Promise<void> {
+    await this.stories.update({ updatedAt: new Date() }, { where: { id: storyId }, transaction });
+  }
+}

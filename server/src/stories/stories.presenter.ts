@@ -1,0 +1,17 @@
+import type { StoryView } from '@mantlepiece/shared';
+import type { Story } from './models/story.model.js';
+
+/** `story` as read by StoriesService, with its exhibit, author and the panelCount column. */
+export const toStoryView = (story: Story): StoryView => ({
+  id: story.id,
+  title: story.title,
+  audience: story.audience,
+  sourceLocale: story.sourceLocale,
+  state: story.state,
+  exhibitId: story.exhibitId ?? null,
+  exhibitName: story.exhibit?.name ?? null,
+  panelCount: Number(story.get('panelCount') ?? 0),
+  createdAt: story.createdAt.toISOString(),
+  updatedAt: story.updatedAt.toISOString(),
+  createdBy: story.createdBy ? { id: story.createdBy.id, name: story.createdBy.name } : null,
+});

@@ -1,0 +1,138 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op, UniqueConstraintError, type FindOptions, type Transaction, type WhereOptions } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import type { Page, StoryDetailView, StoryView } from '@mantlepiece/shared';
+import { likePattern, orderOf } from '../common/list-query.js';
+import { pageWindow, toPage } from '../common/page.js';
+import { Exhibit } from '../exhibits/models/exhibit.model.js';
+import { PanelDocument } from '../panels/models/panel-document.model.js';
+import { Panel } from '../panels/models/panel.model.js';
+import { PanelsService } from '../panels/panels.service.js';
+import { User } from '../users/models/user.model.js';
+import { Gallery } from '../venues/models/gallery.model.js';
+import { Venue } from '../venues/models/venue.model.js';
+import type { CreateStoryDto, ListStoriesQuery, UpdateStoryDto } from './dto/story.dto.js';
+import { Story } from './models/story.model.js';
+import { toStoryView } from './stories.presenter.js';
+
+/** Used when there is neither an exhibit nor a venue to take the language from. */
+const FALLBACK_SOURCE_LOCALE = 'en';
+
+/** What every StoryView needs: the exhibit's name, the author and the number of panels, in one query. */
+const storyColumns: FindOptions<Story> = {
+  attributes: { include: [[Sequelize.literal('(SELECT COUNT(*) FROM `panels` WHERE `panels`.`story_id` = `Story`.`id`)'), 'panelCount']] },
+  include: [
+    { model: Exhibit, attributes: ['id', 'name'] },
+    { model: User, attributes: ['id', 'name'] },
+  ],
+};
+
+@Injectable()
+export class StoriesService {
+  constructor(
+    @InjectModel(Story) private readonly stories: typeof Story,
+    @InjectModel(Exhibit) private readonly exhibits: typeof Exhibit,
+    @InjectModel(Venue) private readonly venues: typeof Venue,
+    @InjectModel(Panel) private readonly panelRows: typeof Panel,
+    @InjectModel(PanelDocument) private readonly documents: typeof PanelDocument,
+    private readonly panels: PanelsService,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  /** The Stories table: filtered, sorted and paged by the database. */
+  async list(query: ListStoriesQuery): Promise<Page<StoryView>> {
+    const conditions: WhereOptions<Story>[] = [];
+    if (query.q) conditions.push({ title: { [Op.like]: likePattern(query.q) } });
+    if (query.state) conditions.push({ state: query.state });
+    if (query.exhibitId) conditions.push({ exhibitId: query.exhibitId });
+    if (query.audience) conditions.push({ audience: query.audience });
+    const { rows, count } = await this.stories.findAndCountAll({
+      ...storyColumns,
+      where: { [Op.and]: conditions },
+      order: orderOf(query.sort),
+      distinct: true,
+      ...pageWindow(query),
+    });
+    return toPage(rows.map(toStoryView), count, query);
+  }
+
+  async get(id: number): Promise<StoryDetailView> {
+    const story = await this.find(id);
+    return { ...toStoryView(story), panels: await this.panels.listForStory(story) };
+  }
+
+  async createStory(author: User, dto: CreateStoryDto): Promise<StoryView> {
+    const exhibitId = dto.exhibitId ?? null;
+    const sourceLocale = dto.sourceLocale ?? (await this.defaultSourceLocale(exhibitId));
+    const story = await this.stories.create({
+      title: dto.title,
+      audience: dto.audience ?? 'family',
+      sourceLocale,
+      exhibitId,
+      createdById: author.id,
+      state: 'draft',
+    });
+    return toStoryView(await this.find(story.id));
+  }
+
+  /**
+   * Changing the source locale relabels the panels' source documents, so the studio keeps editing
+   * the same text; it is refused if a translation into that locale already exists.
+   */
+  async updateStory(id: number, dto: UpdateStoryDto): Promise<StoryView> {
+    await this.sequelize.transaction(async (transaction) => {
+      const story = await this.lock(id, transaction);
+      if (dto.exhibitId) await this.findExhibit(dto.exhibitId, transaction);
+      if (dto.sourceLocale && dto.sourceLocale !== story.sourceLocale) {
+        await this.relabelSourceDocuments(story, dto.sourceLocale, transaction);
+      }
+      await story.update(dto, { transaction });
+    });
+    return toStoryView(await this.find(id));
+  }
+
+  /** Once a release has carried the story, kiosks may be playing it: it can be retired, not deleted. */
+  async deleteStory(id: number): Promise<void> {
+    await this.sequelize.transaction(async (transaction) => {
+      const story = await this.lock(id, transaction);
+      if (story.releasedAt) throw new ConflictException('This story has been released, so it cannot be deleted; retire it instead.');
+      await story.destroy({ transaction });
+    });
+  }
+
+  private async find(id: number): Promise<Story> {
+    const story = await this.stories.findByPk(id, storyColumns);
+    if (!story) throw new NotFoundException('There is no such story.');
+    return story;
+  }
+
+  private async lock(id: number, transaction: Transaction): Promise<Story> {
+    const story = await this.stories.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!story) throw new NotFoundException('There is no such story.');
+    return story;
+  }
+
+  private async findExhibit(id: number, transaction?: Transaction): Promise<Exhibit> {
+    const exhibit = await this.exhibits.findByPk(id, { include: [{ model: Gallery, include: [Venue] }], transaction });
+    if (!exhibit) throw new NotFoundException('There is no such exhibit.');
+    return exhibit;
+  }
+
+  /** The language the story's venue writes in: the exhibit's venue, or else the first venue set up. */
+  private async defaultSourceLocale(exhibitId: number | null): Promise<string> {
+    if (exhibitId) return (await this.findExhibit(exhibitId)).gallery!.venue!.sourceLocale;
+    const venue = await this.venues.findOne({ order: [['id', 'ASC']] });
+    return venue?.sourceLocale ?? FALLBACK_SOURCE_LOCALE;
+  }
+
+  private async relabelSourceDocuments(story: Story, locale: string, transaction: Transaction): Promise<void> {
+    const panelIds = (await this.panelRows.findAll({ where: { storyId: story.id }, attributes: ['id'], transaction })).map((panel) => panel.id);
+    try {
+      await this.documents.update({ locale }, { where: { panelId: panelIds, locale: story.sourceLocale }, transaction });
+    } catch (error) {
+      if (error instanceof UniqueConstraintError) throw new ConflictException(`Some panels already have a ${locale} translation; it cannot also be the source.`);
+      throw error;
+    }
+  }
+}

@@ -1,0 +1,19 @@
+import { OmitType, PartialType } from '@nestjs/swagger';
+import { ListSettingsQuery } from '../settings.service.js';
+import { ParentFilterField, ParentIdField, SettingsNameField } from './settings-fields.js';
+
+export class CreateGalleryDto {
+  @ParentIdField('venue')
+  venueId: number;
+
+  @SettingsNameField()
+  name: string;
+}
+
+/** A gallery stays in its venue: its stations and exhibits are set up for that building. */
+export class UpdateGalleryDto extends PartialType(OmitType(CreateGalleryDto, ['venueId'] as const)) {}
+
+export class ListGalleriesQuery extends ListSettingsQuery {
+  @ParentFilterField()
+  venueId?: number;
+}

@@ -1,0 +1,92 @@
+import { ConflictException, NotFoundException } from '@nestjs/common';
+import { ForeignKeyConstraintError, Op, UniqueConstraintError } from 'sequelize';
+import type { Model, ModelCtor } from 'sequelize-typescript';
+import type { Page } from '@mantlepiece/shared';
+import { likePattern, orderOf, SearchField, SortField } from '../common/list-query.js';
+import { PageQuery, pageWindow, toPage } from '../common/page.js';
+
+export const SETTINGS_SORT_KEYS = ['name', 'createdAt'] as const;
+
+/** `?page&pageSize&q&sort` of every Settings list; q looks in the name. */
+export class ListSettingsQuery extends PageQuery {
+  @SearchField()
+  q?: string;
+
+  @SortField(SETTINGS_SORT_KEYS, 'name')
+  sort: string = 'name';
+}
+
+export interface SettingsKind<M, V> {
+  /** For messages: "There is no such gallery." */
+  label: string;
+  toView: (record: M) => V;
+  /** Why a delete is refused while other records point at this one. */
+  inUse: string;
+  /** The column a list query may narrow to one parent by (`?venueId=`). */
+  parentKey?: string;
+}
+
+/**
+ * What venues, galleries, stations and exhibits share: paged lists searched by the database,
+ * reads, writes whose constraint failures become 409/404 answers, and deletes that the schema's
+ * RESTRICT keys refuse while anything points at the record.
+ */
+export abstract class SettingsService<M extends Model & { id: number }, V> {
+  protected constructor(
+    protected readonly model: ModelCtor<M>,
+    private readonly kind: SettingsKind<M, V>,
+  ) {}
+
+  async list(query: ListSettingsQuery): Promise<Page<V>> {
+    const parent = this.kind.parentKey ? (query as unknown as Record<string, unknown>)[this.kind.parentKey] : undefined;
+    const where = {
+      [Op.and]: [
+        ...(parent !== undefined ? [{ [this.kind.parentKey!]: parent }] : []),
+        ...(query.q ? [{ name: { [Op.like]: likePattern(query.q) } }] : []),
+      ],
+    };
+    const { rows, count } = await this.model.findAndCountAll({ where, order: orderOf(query.sort), ...pageWindow(query) });
+    return toPage(rows.map(this.kind.toView), count, query);
+  }
+
+  async find(id: number): Promise<M> {
+    const record = await this.model.findByPk(id);
+    if (!record) throw new NotFoundException(`There is no such ${this.kind.label}.`);
+    return record;
+  }
+
+  async get(id: number): Promise<V> {
+    return this.kind.toView(await this.find(id));
+  }
+
+  create(values: object): Promise<V> {
+    return this.write(() => this.model.create({ ...values } as never));
+  }
+
+  async update(id: number, changes: object): Promise<V> {
+    const record = await this.find(id);
+    return this.write(() => record.update(changes as never));
+  }
+
+  async delete(id: number): Promise<void> {
+    const record = await this.find(id);
+    try {
+      await record.destroy();
+    } catch (error) {
+      if (error instanceof ForeignKeyConstraintError) throw new ConflictException(this.kind.inUse);
+      throw error;
+    }
+  }
+
+  private async write(work: () => Promise<M>): Promise<V> {
+    try {
+      return this.kind.toView(await work());
+    } catch (error) {
+      if (error instanceof UniqueConstraintError) {
+        throw new ConflictException(`Another ${this.kind.label} already uses this ${Object.keys(error.fields).join(', ') || 'value'}.`);
+      }
+      if (error instanceof ForeignKeyConstraintError) throw new NotFoundException(`The ${this.kind.label} refers to something that does not exist.`);
+      throw error;
+    }
+  }
+}

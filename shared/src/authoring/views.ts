@@ -1,0 +1,121 @@
+import type { PanelDocJSON } from '../panel/panel-json.js';
+
+/** The views of issue 4 (authoring) as the API sends them; studio and server both code against these. */
+
+export const AUDIENCES = ['family', 'school', 'adult'] as const;
+export type Audience = (typeof AUDIENCES)[number];
+
+export const STORY_STATES = ['draft', 'in_review', 'changes_requested', 'approved', 'retired'] as const;
+export type StoryState = (typeof STORY_STATES)[number];
+
+export interface StoryView {
+  id: number;
+  title: string;
+  audience: Audience;
+  /** BCP 47 tag of the language the panels are written in. */
+  sourceLocale: string;
+  state: StoryState;
+  exhibitId: number | null;
+  exhibitName: string | null;
+  panelCount: number;
+  createdAt: string;
+  updatedAt: string;
+  createdBy: { id: number; name: string } | null;
+}
+
+export interface PanelView {
+  id: number;
+  storyId: number;
+  position: number;
+  /** Compare-and-set token: send it back with the next PUT. */
+  version: number;
+  /** Tiptap JSON of the story's source locale. */
+  doc: PanelDocJSON;
+  wordBudget: number;
+  updatedAt: string;
+}
+
+export type StoryDetailView = StoryView & { panels: PanelView[] };
+
+/** PUT /api/panels/:id answers 409 with this when someone else saved first. */
+export interface PanelConflictBody {
+  statusCode: 409;
+  message: string;
+  currentVersion: number;
+  doc: PanelDocJSON;
+}
+
+export type MediaLicence = { kind: 'spdx'; id: string } | { kind: 'all-rights-reserved'; holder: string };
+
+export interface MediaRenditionView {
+  width: number;
+  /** Public, immutable: `/media/<sha256>/<width>.webp`. */
+  url: string;
+}
+
+export interface MediaUsageView {
+  storyId: number;
+  storyTitle: string;
+  panelId: number;
+}
+
+export interface MediaView {
+  /** A panel image refers to the asset by `String(id)` in its `mediaId` attribute. */
+  id: number;
+  sha256: string;
+  filename: string;
+  width: number;
+  height: number;
+  mime: string;
+  bytes: number;
+  renditions: MediaRenditionView[];
+  /** A data: URI of a tiny blurred WebP, drawn while the rendition loads. */
+  placeholder: string;
+  credit: string | null;
+  licence: MediaLicence | null;
+  licenceExpiresOn: string | null;
+  /** Alt text per BCP 47 locale. */
+  alt: Record<string, string>;
+  createdAt: string;
+  usedIn: MediaUsageView[];
+}
+
+export const MEDIA_MISSING_FILTERS = ['alt', 'credit'] as const;
+export type MediaMissingFilter = (typeof MEDIA_MISSING_FILTERS)[number];
+
+export const ORIENTATIONS = ['landscape', 'portrait'] as const;
+export type Orientation = (typeof ORIENTATIONS)[number];
+
+export interface VenueView {
+  id: number;
+  name: string;
+  /** The venue's key in URLs and release bundles. */
+  slug: string;
+  sourceLocale: string;
+  targetLocales: string[];
+  createdAt: string;
+}
+
+export interface GalleryView {
+  id: number;
+  venueId: number;
+  name: string;
+}
+
+export interface StationView {
+  id: number;
+  galleryId: number;
+  name: string;
+  screenWidthPx: number;
+  screenHeightPx: number;
+  orientation: Orientation;
+  mountingHeightMm: number;
+}
+
+export interface ExhibitView {
+  id: number;
+  galleryId: number;
+  name: string;
+  plannedStart: string | null;
+  plannedEnd: string | null;
+}
