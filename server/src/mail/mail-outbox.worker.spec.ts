@@ -30,7 +30,7 @@ describe('mail outbox', () => {
       expect(message).toMatchObject({ attempts: 1, sentAt: null, lockedUntil: null, lastError: expect.stringMatching(/ECONNREFUSED/) });
       expect(message.nextAttemptAt).toEqual(new Date(clock.now().getTime() + retryDelayMs(1)));
       // Not due again until the back-off has passed.
-      expect(await worker.deliverDue()).not.toEqual(expect.objectContaining({ failed: expect.arrayContaining([message.id]) }));
+      expect((await worker.deliverDue()).failed).not.toContain(message.id);
     } finally {
       await down.close();
     }
