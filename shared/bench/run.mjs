@@ -4,8 +4,9 @@
 import { writeFile } from 'node:fs/promises';
 import os from 'node:os';
 import * as convectionNode from './convection-node.mjs';
+import * as framesChromium from './frames-chromium.mjs';
 
-const sections = [convectionNode];
+const sections = [convectionNode, framesChromium];
 
 function markdownTable({ caption, columns, rows }) {
   const line = (cells) => `| ${cells.join(' | ')} |`;

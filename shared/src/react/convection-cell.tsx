@@ -64,6 +64,7 @@ export function ConvectionCell({ params, locale, showCaution = false, reducedMot
   const latest = useRef<HostFrame | null>(null);
   const target = useRef<Float32Array>(new Float32Array(0));
   const fieldCanvas = useRef<HTMLCanvasElement | null>(null);
+  const streamlines = useRef<{ frame: HostFrame | null; segments: number[] }>({ frame: null, segments: [] });
   const awaiting = useRef(false);
   const lastReadout = useRef(0);
   const lastDemand = useRef(Number.NEGATIVE_INFINITY);
@@ -104,7 +105,11 @@ export function ConvectionCell({ params, locale, showCaution = false, reducedMot
     ctx.imageSmoothingEnabled = true;
     ctx.drawImage(field, 0, 0, canvas.width, canvas.height);
     const line = 1.5 * ratio;
-    if (params.overlay === 'streamlines') drawStreamlines(ctx, streamlineSegments(frame.streamFunction, frame.nx, frame.nz), frame.nx, frame.nz, canvas.width, canvas.height, line);
+    if (params.overlay === 'streamlines') {
+      // Contouring is the costliest part of a frame, so it runs once per solver frame, not per drawn frame.
+      if (streamlines.current.frame !== frame) streamlines.current = { frame, segments: streamlineSegments(frame.streamFunction, frame.nx, frame.nz) };
+      drawStreamlines(ctx, streamlines.current.segments, frame.nx, frame.nz, canvas.width, canvas.height, line);
+    }
     if (params.overlay === 'arrows') drawArrows(ctx, frame.arrows, frame.aspectRatio, canvas.width, canvas.height, line);
     if (params.overlay === 'particles') drawParticles(ctx, frame.particles, frame.aspectRatio, canvas.width, canvas.height, 2.5 * ratio);
     framesDrawn.current += 1;

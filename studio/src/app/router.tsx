@@ -7,7 +7,7 @@ import { AreaLaterPage, RequireArea } from '../routes/area';
 import { HomePage } from '../routes/home';
 import { NotFoundPage } from '../routes/not-found';
 import { SignInPage } from '../routes/sign-in';
-import { BUILT_AREAS, isArea } from './areas';
+import { BUILT_AREAS, isArea, type Area } from './areas';
 
 // Pages most people never open load on demand, keeping the first download small.
 const named = <K extends string>(load: () => Promise<Record<K, () => ReactNode>>, name: K) =>
@@ -17,6 +17,15 @@ const RequestPasswordResetPage = named(() => import('../routes/reset-password'),
 const CompletePasswordResetPage = named(() => import('../routes/reset-password/token'), 'CompletePasswordResetPage');
 const PeoplePage = named(() => import('../routes/people'), 'PeoplePage');
 const CapturedMailPage = named(() => import('../routes/dev/mail'), 'CapturedMailPage');
+const WidgetWorkbenchPage = named(() => import('../routes/widgets'), 'WidgetWorkbenchPage');
+const StoriesPage = named(() => import('../routes/stories'), 'StoriesPage');
+const StoryPage = named(() => import('../routes/stories/story'), 'StoryPage');
+const MediaPage = named(() => import('../routes/media'), 'MediaPage');
+const MediaAssetPage = named(() => import('../routes/media/asset'), 'MediaAssetPage');
+const SettingsPage = named(() => import('../routes/settings'), 'SettingsPage');
+
+/** The pages of one area, behind that area's role check. */
+const inArea = (area: Area, element: ReactNode) => <RequireArea area={area}>{element}</RequireArea>;
 
 /** `/:area` for the areas that are planned but not built yet. */
 function PlannedArea() {
@@ -62,6 +71,12 @@ export const router = createBrowserRouter([
           { path: '/dev/mail', element: <CapturedMailPage /> },
         ],
       },
+      { path: '/widgets', element: <WidgetWorkbenchPage /> },
+      { path: '/stories', element: inArea('stories', <StoriesPage />) },
+      { path: '/stories/:id', element: inArea('stories', <StoryPage />) },
+      { path: '/media', element: inArea('media', <MediaPage />) },
+      { path: '/media/:id', element: inArea('media', <MediaAssetPage />) },
+      { path: '/settings', element: inArea('settings', <SettingsPage />) },
       { path: '/:area', element: <PlannedArea /> },
       { path: '*', element: <NotFoundPage /> },
     ],

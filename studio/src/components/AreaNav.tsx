@@ -1,11 +1,12 @@
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
-import { HomeRegular, MailRegular } from '@fluentui/react-icons';
+import { BeakerRegular, HomeRegular, MailRegular } from '@fluentui/react-icons';
 import type { FluentIcon } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { NavLink } from 'react-router-dom';
 import { useCapturedMail } from '../api/dev-mail';
 import { useCurrentUser } from '../api/session';
-import { areasFor } from '../app/areas';
+import { areasFor, canOpen } from '../app/areas';
+import { workbenchStrings } from '../routes/widgets/workbench-strings';
 import { magma } from '../app/theme';
 import { AREA_ICONS } from './area-icons';
 
@@ -67,7 +68,7 @@ function NavItem({ to, icon: Icon, label, end }: { to: string; icon: FluentIcon;
 
 /** The areas of the signed-in person's roles, from the one role → area table. */
 export function AreaNav() {
-  const { t } = useTranslation();
+  const { t, i18n } = useTranslation();
   const styles = useStyles();
   const user = useCurrentUser();
   const isAdmin = user.roles.includes('admin');
@@ -80,6 +81,7 @@ export function AreaNav() {
         {areasFor(user.roles).map((area) => (
           <NavItem key={area} to={`/${area}`} icon={AREA_ICONS[area]} label={t(`areas.${area}.name`)} />
         ))}
+        {canOpen(user.roles, 'stories') ? <NavItem to="/widgets" icon={BeakerRegular} label={workbenchStrings(i18n.resolvedLanguage).nav} /> : null}
       </ul>
       {capturedMail.isSuccess ? (
         <>

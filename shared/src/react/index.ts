@@ -1,0 +1,5 @@
+export { SlopeForceBox, type SlopeForceBoxProps } from './slope-force-box.js';
+export { ConvectionCell, type ConvectionCellProps } from './convection-cell.js';
+export { SimulationCaution } from './simulation-caution.js';
+export { useReducedMotion } from './use-reduced-motion.js';
+export * from './panel/index.js';

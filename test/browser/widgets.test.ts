@@ -1,0 +1,54 @@
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser, newContext, signIn } from '../support/browser.js';
+
+let browser: Browser;
+let page: Page;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  page = await (await newContext(browser)).newPage();
+  await signIn(page, 'curator@demo.test');
+  await page.getByRole('navigation', { name: 'Studio areas' }).getByRole('link', { name: 'Widget workbench' }).click();
+  await page.getByRole('heading', { level: 1, name: 'Widget workbench' }).waitFor();
+});
+afterAll(() => browser?.close());
+
+describe('widget workbench', () => {
+  it('offers both widgets, with the simplified-model caution', async () => {
+    await expect.poll(() => page.getByRole('tab').allTextContents()).toEqual(['Slope force box', 'Convection cell']);
+    expect(await page.getByRole('note').first().textContent()).toMatch(/^Simplified teaching model/);
+  });
+
+  it('switches the slope force box from "Holds" to "Slides" when the slope is dragged past arctan 0.85 ≈ 40.4° (Byerlee 1978)', async () => {
+    await page.getByRole('tab', { name: 'Slope force box' }).click();
+    const slider = page.getByRole('slider', { name: 'Slope force box: Slope angle' });
+    const status = page.getByRole('status').filter({ hasText: /Holds|Slides/ });
+    await expect.poll(() => status.textContent()).toMatch(/^■Holds/);
+    const box = (await slider.boundingBox())!;
+    // The drawing is 480 × 330 with the slope's hinge at (60, 290) and its free end at 30°, (372, 110).
+    const at = (x: number, y: number) => [box.x + (x / 480) * box.width, box.y + (y / 330) * box.height] as const;
+    await page.mouse.move(...at(372, 110));
+    await page.mouse.down();
+    // 70 units right of the hinge and 260 above it: a tilt of about 75°.
+    await page.mouse.move(...at(130, 30), { steps: 12 });
+    await page.mouse.up();
+    await expect.poll(async () => Number(await slider.getAttribute('aria-valuenow'))).toBeGreaterThan(40.4);
+    await expect.poll(() => status.textContent()).toMatch(/^↘Slides/);
+    expect(await page.getByTestId('widget-description').textContent()).toContain('so the block slides');
+  });
+
+  it('keeps the convection cell’s frames coming from its worker, time moving on between reads', async () => {
+    await page.getByRole('tab', { name: 'Convection cell' }).click();
+    const picture = page.getByRole('img', { name: 'Convection cell' });
+    await picture.waitFor();
+    const time = page.locator('[data-readout="time"]');
+    const frames = async () => Number((await picture.getAttribute('data-frames')) ?? 0);
+    await expect.poll(frames).toBeGreaterThan(0);
+    const firstFrames = await frames();
+    const firstTime = Number(await time.textContent());
+    await expect.poll(frames).toBeGreaterThan(firstFrames);
+    await expect.poll(async () => Number(await time.textContent())).toBeGreaterThan(firstTime);
+    expect(Number(await page.locator('[data-readout="nusselt"]').textContent())).toBeGreaterThan(0);
+  });
+});
