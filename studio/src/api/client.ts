@@ -4,12 +4,15 @@ import type { ApiErrorBody, SessionView } from '@mantlepiece/shared';
 export class ApiError extends Error {
   readonly status: number;
   readonly errors: NonNullable<ApiErrorBody['errors']>;
+  /** The whole error body, for answers that carry more than a message (a 409 with the current version). */
+  readonly body: unknown;
 
   constructor(status: number, body: Pick<ApiErrorBody, 'message' | 'errors'>) {
     super(body.message);
     this.name = 'ApiError';
     this.status = status;
     this.errors = body.errors ?? [];
+    this.body = body;
   }
 
   /** The server's message for one form field (the first segment of each error's path). */
@@ -41,7 +44,7 @@ export function setSession(session: SessionView | null): void {
 export type Query = Record<string, string | number | boolean | undefined | null>;
 
 interface RequestOptions {
-  method?: 'GET' | 'POST' | 'PATCH' | 'DELETE';
+  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   body?: unknown;
   query?: Query;
 }
@@ -70,6 +73,9 @@ async function send(path: string, options: RequestOptions): Promise<Response> {
     throw new ApiError(NETWORK_FAILURE, { message: 'network' });
   }
 }
+
+/** The bearer header for the one request fetch cannot make: an upload that reports its progress. */
+export const authorizationHeader = (): Record<string, string> => (accessToken ? { Authorization: `Bearer ${accessToken}` } : {});
 
 async function read<T>(response: Response): Promise<T> {
   const text = await response.text();

@@ -1,5 +1,8 @@
+import { authoringEn } from './authoring.en';
+
 /** English UI strings: the reference every other language must match key for key. */
 export const en = {
+  ...authoringEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',

@@ -1,7 +1,9 @@
+import { authoringFr } from './authoring.fr';
 import type { Messages } from './en';
 
 /** Chaînes de l’interface en français. */
 export const fr: Messages = {
+  ...authoringFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',

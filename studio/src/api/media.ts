@@ -1,0 +1,122 @@
+import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { MediaLicence, MediaMissingFilter, MediaView, Page } from '@mantlepiece/shared';
+import { api, ApiError, authorizationHeader, NETWORK_FAILURE, refreshSession } from './client';
+
+export const MEDIA_SORTS = ['-createdAt', 'createdAt', 'filename', '-filename'] as const;
+export type MediaSort = (typeof MEDIA_SORTS)[number];
+
+export interface MediaListParams {
+  page: number;
+  pageSize: number;
+  q?: string;
+  missing?: MediaMissingFilter;
+  expiringWithinDays?: number;
+  sort?: MediaSort;
+}
+
+const mediaListKey = ['media-list'] as const;
+export const mediaKey = (id: number) => ['media', id] as const;
+
+export function useMediaList(params: MediaListParams, enabled = true) {
+  const queryClient = useQueryClient();
+  return useQuery({
+    queryKey: [...mediaListKey, params],
+    queryFn: async () => {
+      const page = await api<Page<MediaView>>('/media', { query: { ...params } });
+      // Each asset is also cached on its own, so the editor can draw a picked image at once.
+      for (const asset of page.items) queryClient.setQueryData(mediaKey(asset.id), asset);
+      return page;
+    },
+    placeholderData: keepPreviousData,
+    enabled,
+  });
+}
+
+export const mediaAssetQuery = (id: number) => ({ queryKey: mediaKey(id), queryFn: () => api<MediaView>(`/media/${id}`) });
+
+export function useMediaAsset(id: number) {
+  return useQuery(mediaAssetQuery(id));
+}
+
+/** Several assets at once: the images a panel shows, loaded before its editor opens. */
+export function useMediaAssets(ids: readonly number[]) {
+  return useQueries({ queries: ids.map((id) => ({ ...mediaAssetQuery(id), retry: false })) });
+}
+
+export interface MediaChanges {
+  credit?: string | null;
+  licence?: MediaLicence | null;
+  licenceExpiresOn?: string | null;
+  alt?: Record<string, string>;
+}
+
+export function useUpdateMedia(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (changes: MediaChanges) => api<MediaView>(`/media/${id}`, { method: 'PATCH', body: changes }),
+    onSuccess: (asset) => {
+      queryClient.setQueryData(mediaKey(id), asset);
+      void queryClient.invalidateQueries({ queryKey: mediaListKey });
+    },
+  });
+}
+
+export function useDeleteMedia() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api<void>(`/media/${id}`, { method: 'DELETE' }),
+    onSuccess: (_nothing, id) => {
+      queryClient.removeQueries({ queryKey: mediaKey(id) });
+      void queryClient.invalidateQueries({ queryKey: mediaListKey });
+    },
+  });
+}
+
+function parseBody(text: string): unknown {
+  try {
+    return text ? JSON.parse(text) : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
+/** One multipart POST through XMLHttpRequest, the one browser API that reports upload progress. */
+function postFile(file: File, onProgress: (fraction: number) => void): Promise<{ status: number; body: unknown }> {
+  return new Promise((resolve, reject) => {
+    const request = new XMLHttpRequest();
+    request.open('POST', '/api/media');
+    for (const [name, value] of Object.entries({ Accept: 'application/json', ...authorizationHeader() })) request.setRequestHeader(name, value);
+    request.upload.onprogress = (event) => {
+      if (event.lengthComputable) onProgress(event.loaded / event.total);
+    };
+    request.onload = () => resolve({ status: request.status, body: parseBody(request.responseText) });
+    request.onerror = () => reject(new ApiError(NETWORK_FAILURE, { message: 'network' }));
+    const form = new FormData();
+    form.append('file', file, file.name);
+    request.send(form);
+  });
+}
+
+/** Uploads one file; a 401 gets one retry after a refresh, as every other API call does. */
+export async function uploadMediaFile(file: File, onProgress: (fraction: number) => void): Promise<MediaView> {
+  let answer = await postFile(file, onProgress);
+  if (answer.status === 401 && (await refreshSession())) answer = await postFile(file, onProgress);
+  const { status, body } = answer;
+  if (status >= 200 && status < 300) {
+    const created = Array.isArray(body) ? (body as MediaView[]) : [body as MediaView];
+    return created[0]!;
+  }
+  const error = body && typeof body === 'object' && 'message' in body ? (body as { message: string }) : { message: String(status) };
+  throw new ApiError(status, error);
+}
+
+export function useUploadMedia() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ file, onProgress }: { file: File; onProgress: (fraction: number) => void }) => uploadMediaFile(file, onProgress),
+    onSuccess: (asset) => {
+      queryClient.setQueryData(mediaKey(asset.id), asset);
+      void queryClient.invalidateQueries({ queryKey: mediaListKey });
+    },
+  });
+}

@@ -1,0 +1,31 @@
+import { useMemo } from 'react';
+import { useEditor } from '@tiptap/react';
+import type { PanelDocJSON } from '@mantlepiece/shared';
+import { panelEditorExtensions, type ResolveMedia } from '@mantlepiece/shared/react';
+import { useTranslation } from 'react-i18next';
+
+/**
+ * The Tiptap editor of one panel: the shared extension list (the server checks documents against
+ * the same one) with the shared React node views, so widgets and live values draw as on the kiosk.
+ */
+export function usePanelEditor({ initialDoc, locale, resolveMedia, onChange }: {
+  initialDoc: PanelDocJSON;
+  locale: string;
+  resolveMedia: ResolveMedia;
+  onChange: (doc: PanelDocJSON) => void;
+}) {
+  const { t } = useTranslation();
+  const missingMediaLabel = t('editor.missingImage');
+  const extensions = useMemo(() => panelEditorExtensions({ locale, resolveMedia, missingMediaLabel }), [locale, resolveMedia, missingMediaLabel]);
+  return useEditor(
+    {
+      extensions,
+      content: initialDoc,
+      immediatelyRender: true,
+      shouldRerenderOnTransaction: false,
+      editorProps: { attributes: { 'aria-label': t('editor.area'), 'aria-multiline': 'true', role: 'textbox', lang: locale, spellcheck: 'true' } },
+      onUpdate: ({ editor }) => onChange(editor.getJSON() as PanelDocJSON),
+    },
+    [extensions],
+  );
+}

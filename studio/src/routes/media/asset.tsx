@@ -1,0 +1,199 @@
+import { useState, type FormEvent } from 'react';
+import {
+  Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, Field, Input, makeStyles, Radio, RadioGroup, Spinner, Text, Textarea, tokens,
+} from '@fluentui/react-components';
+import type { MediaView } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+import { useNavigate, useParams } from 'react-router-dom';
+import { ApiError } from '../../api/client';
+import { useDeleteMedia, useMediaAsset, useUpdateMedia } from '../../api/media';
+import { useCurrentUser } from '../../api/session';
+import { useVenues } from '../../api/settings';
+import { EmptyState } from '../../components/EmptyState';
+import { FormAlert } from '../../components/forms/FormAlert';
+import { describeError, serverFieldMessage } from '../../components/forms/describe-error';
+import { hasProblems } from '../../components/forms/validation';
+import { useDateFormat } from '../../components/formatting';
+import { LinkButton, TextLink } from '../../components/links';
+import { PageHeader } from '../../components/PageHeader';
+import { canWriteStories } from '../stories/permissions';
+import { ASSET_FIELDS, assetChanges, assetProblems, assetValues, type AssetValues } from './asset-form';
+import { COMMON_SPDX_IMAGE_LICENCES } from './licence';
+import { formatBytes } from './media-facts';
+import { MediaBadges } from './MediaBadges';
+
+const useStyles = makeStyles({
+  layout: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr) minmax(20rem, 32rem)', gap: tokens.spacingHorizontalXXL, alignItems: 'start', '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
+  figure: { margin: 0, display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
+  image: { width: '100%', maxHeight: '70vh', objectFit: 'contain', backgroundColor: tokens.colorNeutralBackground4, borderRadius: tokens.borderRadiusLarge, backgroundSize: 'cover' },
+  muted: { color: tokens.colorNeutralForeground3 },
+  form: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
+  fieldset: { border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusMedium, padding: tokens.spacingHorizontalM, margin: 0, display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
+  legend: { fontWeight: tokens.fontWeightSemibold, padding: `0 ${tokens.spacingHorizontalXS}` },
+  actions: { display: 'flex', justifyContent: 'space-between', gap: tokens.spacingHorizontalM },
+  usage: { margin: 0, paddingLeft: tokens.spacingHorizontalL, display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXS },
+});
+
+/** The locales alt text is written in: every venue's source and target languages, and any already written. */
+function useAltLocales(asset: MediaView): string[] {
+  const venues = useVenues({ page: 1, pageSize: 100 });
+  const fromVenues = venues.data?.items.flatMap((venue) => [venue.sourceLocale, ...venue.targetLocales]) ?? [];
+  const locales = [...new Set([...fromVenues, ...Object.keys(asset.alt)])];
+  return locales.length > 0 ? locales : ['en'];
+}
+
+export function MediaAssetPage() {
+  const { t } = useTranslation();
+  const { id } = useParams();
+  const asset = useMediaAsset(Number(id));
+  if (asset.isPending) return <Spinner label={t('common.loading')} />;
+  if (asset.isError) {
+    const missing = asset.error instanceof ApiError && asset.error.status === 404;
+    return (
+      <EmptyState title={missing ? t('asset.notFound') : t('asset.loadError')} actions={<LinkButton to="/media">{t('asset.backToMedia')}</LinkButton>}>
+        {missing ? t('asset.notFoundBody') : describeError(t, asset.error)}
+      </EmptyState>
+    );
+  }
+  return <AssetDetails key={asset.data.id} asset={asset.data} />;
+}
+
+function AssetDetails({ asset }: { asset: MediaView }) {
+  const { t, i18n } = useTranslation();
+  const styles = useStyles();
+  const navigate = useNavigate();
+  const formatDate = useDateFormat();
+  const me = useCurrentUser();
+  const writer = canWriteStories(me.roles);
+  const update = useUpdateMedia(asset.id);
+  const remove = useDeleteMedia();
+  const [values, setValues] = useState<AssetValues>(() => assetValues(asset));
+  const [problems, setProblems] = useState<ReturnType<typeof assetProblems>>({});
+  const [confirming, setConfirming] = useState(false);
+  const [saved, setSaved] = useState(false);
+  const locales = useAltLocales(asset);
+  const largest = [...asset.renditions].sort((a, b) => b.width - a.width)[0];
+  const set = (changes: Partial<AssetValues>) => {
+    setSaved(false);
+    setValues((current) => ({ ...current, ...changes }));
+  };
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    const found = assetProblems(t, values);
+    setProblems(found);
+    if (!hasProblems(found)) update.mutate(assetChanges(values), { onSuccess: (next) => { setValues(assetValues(next)); setSaved(true); } });
+  };
+  const message = (field: (typeof ASSET_FIELDS)[number]) => serverFieldMessage(update.error, field);
+  const unplaced = update.error && !ASSET_FIELDS.some((field) => message(field)) ? describeError(t, update.error) : null;
+  const deleteProblem = remove.error instanceof ApiError && remove.error.status === 409 ? t('asset.inUse') : remove.error ? describeError(t, remove.error) : null;
+
+  return (
+    <>
+      <PageHeader
+        title={asset.filename}
+        intro={<MediaBadges asset={asset} />}
+        actions={writer ? <Button onClick={() => setConfirming(true)}>{t('asset.delete')}</Button> : null}
+      />
+      <div className={styles.layout}>
+        <figure className={styles.figure}>
+          <img
+            className={styles.image}
+            src={largest?.url ?? asset.placeholder}
+            srcSet={asset.renditions.map((rendition) => `${rendition.url} ${rendition.width}w`).join(', ') || undefined}
+            sizes="(max-width: 1100px) 100vw, 60vw"
+            alt={values.alt[locales[0] ?? 'en'] ?? ''}
+            style={{ backgroundImage: `url("${asset.placeholder}")` }}
+          />
+          <Text size={200} className={styles.muted}>
+            {t('asset.facts', { width: asset.width, height: asset.height, mime: asset.mime, size: formatBytes(asset.bytes, i18n.resolvedLanguage ?? 'en'), date: formatDate(asset.createdAt) })}
+          </Text>
+          <Text size={200} className={styles.muted}>{t('asset.renditions', { widths: asset.renditions.map((rendition) => rendition.width).join(', ') })}</Text>
+          <section aria-labelledby="usage-heading">
+            <Text as="h2" size={400} weight="semibold" id="usage-heading">{t('asset.usedIn')}</Text>
+            {asset.usedIn.length === 0 ? (
+              <Text as="p" className={styles.muted}>{t('asset.unused')}</Text>
+            ) : (
+              <ul className={styles.usage}>
+                {asset.usedIn.map((usage) => (
+                  <li key={usage.panelId}>
+                    <TextLink to={`/stories/${usage.storyId}?panel=${usage.panelId}`}>{t('asset.usage', { story: usage.storyTitle, panel: usage.panelId })}</TextLink>
+                  </li>
+                ))}
+              </ul>
+            )}
+          </section>
+        </figure>
+
+        <form className={styles.form} onSubmit={submit} noValidate aria-label={t('asset.rights')}>
+          {saved ? <FormAlert intent="success">{t('asset.saved')}</FormAlert> : null}
+          {unplaced ? <FormAlert intent="error">{unplaced}</FormAlert> : null}
+          <fieldset className={styles.fieldset}>
+            <legend className={styles.legend}>{t('asset.altTitle')}</legend>
+            <Text size={200} className={styles.muted}>{t('asset.altHint')}</Text>
+            {locales.map((locale) => (
+              <Field key={locale} label={t('asset.altIn', { locale })} validationMessage={locale === locales[0] ? message('alt') : undefined}>
+                <Textarea value={values.alt[locale] ?? ''} readOnly={!writer} resize="vertical" onChange={(_event, data) => set({ alt: { ...values.alt, [locale]: data.value } })} />
+              </Field>
+            ))}
+          </fieldset>
+          <fieldset className={styles.fieldset}>
+            <legend className={styles.legend}>{t('asset.rights')}</legend>
+            <Field label={t('asset.credit')} hint={t('asset.creditHint')} validationMessage={message('credit')}>
+              <Input value={values.credit} readOnly={!writer} onChange={(_event, data) => set({ credit: data.value })} />
+            </Field>
+            <Field label={t('asset.licence')} validationMessage={message('licence')}>
+              <RadioGroup value={values.licenceKind} disabled={!writer} onChange={(_event, data) => set({ licenceKind: data.value as AssetValues['licenceKind'] })}>
+                <Radio value="spdx" label={t('asset.licenceSpdx')} />
+                <Radio value="all-rights-reserved" label={t('asset.licenceReserved')} />
+                <Radio value="none" label={t('asset.licenceNone')} />
+              </RadioGroup>
+            </Field>
+            {values.licenceKind === 'spdx' ? (
+              <Field label={t('asset.spdxId')} hint={t('asset.spdxHint')} required validationMessage={problems.spdxId}>
+                <Input value={values.spdxId} readOnly={!writer} list="spdx-licences" onChange={(_event, data) => set({ spdxId: data.value })} />
+              </Field>
+            ) : null}
+            <datalist id="spdx-licences">
+              {COMMON_SPDX_IMAGE_LICENCES.map((licence) => <option key={licence} value={licence} />)}
+            </datalist>
+            {values.licenceKind === 'all-rights-reserved' ? (
+              <Field label={t('asset.holder')} required validationMessage={problems.holder}>
+                <Input value={values.holder} readOnly={!writer} onChange={(_event, data) => set({ holder: data.value })} />
+              </Field>
+            ) : null}
+            <Field label={t('asset.expires')} hint={t('asset.expiresHint')} validationMessage={problems.licenceExpiresOn ?? message('licenceExpiresOn')}>
+              <Input type="date" value={values.licenceExpiresOn} readOnly={!writer} onChange={(_event, data) => set({ licenceExpiresOn: data.value })} />
+            </Field>
+          </fieldset>
+          {writer ? (
+            <div className={styles.actions}>
+              <LinkButton to="/media" appearance="subtle">{t('asset.backToMedia')}</LinkButton>
+              <Button type="submit" appearance="primary" disabled={update.isPending}>{update.isPending ? t('common.saving') : t('common.save')}</Button>
+            </div>
+          ) : null}
+        </form>
+      </div>
+
+      {confirming ? (
+        <Dialog open modalType="alert" onOpenChange={(_event, data) => { if (!data.open) setConfirming(false); }}>
+          <DialogSurface>
+            <DialogBody>
+              <DialogTitle>{t('asset.deleteTitle', { name: asset.filename })}</DialogTitle>
+              <DialogContent>
+                <Text as="p">{asset.usedIn.length > 0 ? t('asset.deleteUsed', { count: asset.usedIn.length }) : t('asset.deleteBody')}</Text>
+                {deleteProblem ? <FormAlert intent="error">{deleteProblem}</FormAlert> : null}
+              </DialogContent>
+              <DialogActions>
+                <Button appearance="secondary" onClick={() => setConfirming(false)}>{t('common.cancel')}</Button>
+                <Button appearance="primary" disabled={remove.isPending} onClick={() => remove.mutate(asset.id, { onSuccess: () => navigate('/media') })}>
+                  {t('asset.deleteConfirm')}
+                </Button>
+              </DialogActions>
+            </DialogBody>
+          </DialogSurface>
+        </Dialog>
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,100 @@
+import { useState, type FormEvent } from 'react';
+import { Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, Field, Input, makeStyles, Select, tokens } from '@fluentui/react-components';
+import { ORIENTATIONS } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+import { useGalleries, useSaveSetting, useVenues, type SettingsCollection, type SettingsView } from '../../api/settings';
+import { FormAlert } from '../../components/forms/FormAlert';
+import { describeError, serverFieldMessage } from '../../components/forms/describe-error';
+import { hasProblems } from '../../components/forms/validation';
+import { SETTINGS_FORMS, type SettingsInput, type SettingsValues } from './settings-forms';
+
+const useStyles = makeStyles({
+  content: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
+  unit: { color: tokens.colorNeutralForeground3 },
+});
+
+const ALL = { page: 1, pageSize: 100, sort: 'name' };
+
+/** Create or change one venue, gallery, station or exhibit; the server's answer lands by its field. */
+export function SettingsDialog<C extends SettingsCollection>({ collection, editing, onClose }: { collection: C; editing: SettingsView<C> | null; onClose: () => void }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const form = SETTINGS_FORMS[collection];
+  const save = useSaveSetting(collection);
+  const venues = useVenues(ALL);
+  const galleries = useGalleries(ALL);
+  const [values, setValues] = useState<SettingsValues>(() => (editing ? form.valuesOf(editing) : form.empty));
+  const [problems, setProblems] = useState<Record<string, string | undefined>>({});
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    const found = form.problems(t, values);
+    setProblems(found);
+    if (!hasProblems(found)) save.mutate({ id: editing?.id, fields: form.toFields(values) }, { onSuccess: onClose });
+  };
+  const message = (name: string) => problems[name] ?? serverFieldMessage(save.error, name);
+  const unplaced = save.error && !form.inputs.some((input) => serverFieldMessage(save.error, input.name)) ? describeError(t, save.error, { 409: t('settings.conflict') }) : null;
+  const set = (name: string, value: string) => setValues((current) => ({ ...current, [name]: value }));
+
+  const control = (input: SettingsInput) => {
+    const value = values[input.name] ?? '';
+    switch (input.kind) {
+      case 'venue':
+      case 'gallery': {
+        const options = (input.kind === 'venue' ? venues.data?.items : galleries.data?.items) ?? [];
+        return (
+          <Select value={value} onChange={(_event, data) => set(input.name, data.value)}>
+            <option value="">{t('settings.choose')}</option>
+            {options.map((option) => <option key={option.id} value={String(option.id)}>{option.name}</option>)}
+          </Select>
+        );
+      }
+      case 'orientation':
+        return (
+          <Select value={value} onChange={(_event, data) => set(input.name, data.value)}>
+            {ORIENTATIONS.map((orientation) => <option key={orientation} value={orientation}>{t(`settings.orientations.${orientation}`)}</option>)}
+          </Select>
+        );
+      default:
+        return (
+          <Input
+            type={input.kind === 'date' ? 'date' : 'text'}
+            inputMode={input.kind === 'number' ? 'numeric' : undefined}
+            value={value}
+            onChange={(_event, data) => set(input.name, data.value)}
+            contentAfter={input.unit ? <span className={styles.unit}>{input.unit}</span> : undefined}
+          />
+        );
+    }
+  };
+
+  return (
+    <Dialog open modalType="modal" onOpenChange={(_event, data) => { if (!data.open) onClose(); }}>
+      <DialogSurface>
+        <form onSubmit={submit} noValidate>
+          <DialogBody>
+            <DialogTitle>{editing ? t(`settings.${collection}.edit`) : t(`settings.${collection}.create`)}</DialogTitle>
+            <DialogContent className={styles.content}>
+              {unplaced ? <FormAlert intent="error">{unplaced}</FormAlert> : null}
+              {form.inputs.map((input) => (
+                <Field
+                  key={input.name}
+                  label={t(`settings.fields.${input.name as 'name'}`)}
+                  required={input.required}
+                  hint={input.hint ? t(`settings.hints.${input.hint}`) : undefined}
+                  validationMessage={message(input.name)}
+                >
+                  {control(input)}
+                </Field>
+              ))}
+            </DialogContent>
+            <DialogActions>
+              <Button appearance="secondary" onClick={onClose}>{t('common.cancel')}</Button>
+              <Button type="submit" appearance="primary" disabled={save.isPending}>{save.isPending ? t('common.saving') : t('common.save')}</Button>
+            </DialogActions>
+          </DialogBody>
+        </form>
+      </DialogSurface>
+    </Dialog>
+  );
+}

@@ -1,0 +1,199 @@
+import { useDeferredValue, useEffect, useRef, useState } from 'react';
+import { Field, makeStyles, Select, SpinButton, Spinner, Tab, TabList, Text, tokens } from '@fluentui/react-components';
+import { EditorContent, useEditorState } from '@tiptap/react';
+import { NodeSelection } from '@tiptap/pm/state';
+import { mediaIdsIn, widgetsIn, WIDGET_NODE, type MediaView, type PanelDocJSON, type PanelView, type StoryDetailView, type WidgetType } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+import { useMediaAssets } from '../../api/media';
+import { useRememberSavedPanel, useUpdatePanelBudget } from '../../api/stories';
+import { FormAlert } from '../../components/forms/FormAlert';
+import { ConflictDialog } from '../../components/editor/ConflictDialog';
+import { EditorToolbar } from '../../components/editor/EditorToolbar';
+import { LinkDialog } from '../../components/editor/LinkDialog';
+import { useResolveMedia } from '../../components/editor/media-resolver';
+import { MediaPickerDialog } from '../../components/editor/MediaPickerDialog';
+import { PanelPreview } from '../../components/editor/PanelPreview';
+import { SaveStatus } from '../../components/editor/SaveStatus';
+import { TextMeasures } from '../../components/editor/TextMeasures';
+import { usePanelAutosave } from '../../components/editor/use-panel-autosave';
+import { usePanelEditor } from '../../components/editor/use-panel-editor';
+import { WidgetSettings } from '../../components/editor/WidgetSettings';
+import { useEditorStyles } from './editor-styles';
+
+const SIDE_WIDTH = 400;
+
+const useStyles = makeStyles({
+  root: { display: 'grid', gridTemplateColumns: `minmax(0, 1fr) ${SIDE_WIDTH}px`, gap: tokens.spacingHorizontalL, alignItems: 'start', '@media (max-width: 1280px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
+  main: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS, minWidth: 0 },
+  frame: { border: `1px solid ${tokens.colorNeutralStroke1}`, borderRadius: tokens.borderRadiusLarge, backgroundColor: tokens.colorNeutralBackground1, overflow: 'hidden' },
+  toolbar: { borderBottom: `1px solid ${tokens.colorNeutralStroke2}`, backgroundColor: tokens.colorNeutralBackground2, padding: `${tokens.spacingVerticalXXS} ${tokens.spacingHorizontalS}`, position: 'sticky', top: 0, zIndex: 1 },
+  status: { display: 'flex', alignItems: 'center', justifyContent: 'space-between', gap: tokens.spacingHorizontalL, flexWrap: 'wrap' },
+  budget: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
+  budgetInput: { width: '6rem' },
+  side: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM, position: 'sticky', top: tokens.spacingVerticalL },
+  sideBody: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM, padding: tokens.spacingHorizontalM, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge, backgroundColor: tokens.colorNeutralBackground1 },
+  muted: { color: tokens.colorNeutralForeground3 },
+});
+
+/** Loads the images a panel shows into the cache first, so its editor draws them from the first frame. */
+function usePanelMedia(doc: PanelDocJSON) {
+  const [ids] = useState(() => mediaIdsIn(doc).map(Number).filter(Number.isInteger));
+  return useMediaAssets(ids).every((result) => !result.isPending);
+}
+
+/** The one panel being written: toolbar, editor, save state, measures, widget settings and preview. */
+export function PanelWorkspace({ story, panel, readOnly }: { story: StoryDetailView; panel: PanelView; readOnly: boolean }) {
+  const rememberSaved = useRememberSavedPanel(story.id);
+  const autosave = usePanelAutosave(panel, (doc, version) => rememberSaved(panel.id, doc, version));
+  const mediaReady = usePanelMedia(autosave.initialDoc);
+  const { t } = useTranslation();
+  if (!mediaReady) return <Spinner label={t('common.loading')} />;
+  return <PanelEditorArea story={story} panel={panel} autosave={autosave} readOnly={readOnly} />;
+}
+
+function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDetailView; panel: PanelView; autosave: ReturnType<typeof usePanelAutosave>; readOnly: boolean }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const editorStyles = useEditorStyles();
+  const locale = story.sourceLocale;
+  const resolveMedia = useResolveMedia(locale);
+  const [doc, setDoc] = useState<PanelDocJSON>(autosave.initialDoc);
+  const shownDoc = useDeferredValue(doc);
+  const [dialog, setDialog] = useState<'image' | 'link' | 'conflict' | null>(null);
+  const [sideTab, setSideTab] = useState<'widget' | 'preview'>('widget');
+  const [chosenWidget, setChosenWidget] = useState<string | null>(null);
+  const budget = useUpdatePanelBudget(story.id);
+  const change = useRef(autosave.change);
+  change.current = autosave.change;
+
+  const editor = usePanelEditor({
+    initialDoc: autosave.initialDoc,
+    locale,
+    resolveMedia,
+    onChange: (next) => {
+      setDoc(next);
+      change.current(next);
+    },
+  });
+
+  useEffect(() => {
+    editor.setEditable(!readOnly, false);
+  }, [editor, readOnly]);
+
+  // Selecting a widget block in the text brings up its settings beside the editor.
+  const selectedWidget = useEditorState({
+    editor,
+    selector: ({ editor: current }) => {
+      const { selection } = current.state;
+      return selection instanceof NodeSelection && selection.node.type.name === WIDGET_NODE ? String(selection.node.attrs.widgetId) : null;
+    },
+  });
+  useEffect(() => {
+    if (selectedWidget) {
+      setChosenWidget(selectedWidget);
+      setSideTab('widget');
+    }
+  }, [selectedWidget]);
+
+  useEffect(() => {
+    if (autosave.state.status === 'conflict') setDialog('conflict');
+  }, [autosave.state.status]);
+
+  const widgets = widgetsIn(doc);
+  const widget = widgets.find((candidate) => candidate.widgetId === chosenWidget) ?? widgets[0];
+
+  const pick = (asset: MediaView) => {
+    setDialog(null);
+    editor.chain().focus().insertPanelImage({ mediaId: String(asset.id) }).run();
+  };
+  const takeTheirs = () => {
+    const theirs = autosave.takeTheirs();
+    if (theirs) {
+      editor.commands.setContent(theirs, { emitUpdate: false });
+      setDoc(theirs);
+    }
+    setDialog(null);
+  };
+
+  return (
+    <div className={styles.root}>
+      <div className={styles.main}>
+        {autosave.restoredDraft ? <FormAlert intent="info">{t('editor.restoredDraft')}</FormAlert> : null}
+        {autosave.state.status === 'invalid' ? (
+          <FormAlert intent="warning">{t('editor.invalidDoc', { problems: autosave.state.issues.map((issue) => issue.message).join(' ') })}</FormAlert>
+        ) : null}
+        <div className={styles.frame}>
+          {readOnly ? null : (
+            <div className={styles.toolbar}>
+              <EditorToolbar editor={editor} onPickImage={() => setDialog('image')} onEditLink={() => setDialog('link')} />
+            </div>
+          )}
+          <EditorContent editor={editor} className={editorStyles.content} />
+        </div>
+        <div className={styles.status}>
+          <SaveStatus state={autosave.state} onRetry={autosave.saveNow} onResolve={() => setDialog('conflict')} />
+          <TextMeasures doc={shownDoc} locale={locale} wordBudget={panel.wordBudget} audience={story.audience} />
+          <div className={styles.budget}>
+            <Text id={`budget-${panel.id}`}>{t('editor.budget')}</Text>
+            <SpinButton
+              className={styles.budgetInput}
+              aria-labelledby={`budget-${panel.id}`}
+              value={panel.wordBudget}
+              min={5}
+              max={500}
+              step={5}
+              disabled={readOnly}
+              onChange={(_event, data) => {
+                const next = data.value ?? Number(data.displayValue);
+                if (Number.isInteger(next) && next > 0 && next !== panel.wordBudget) budget.mutate({ panelId: panel.id, wordBudget: next });
+              }}
+            />
+          </div>
+        </div>
+        {budget.isError ? <FormAlert intent="error">{budget.error.message}</FormAlert> : null}
+      </div>
+
+      <aside className={styles.side} aria-label={t('editor.side')}>
+        <TabList selectedValue={sideTab} onTabSelect={(_event, data) => setSideTab(data.value as 'widget' | 'preview')}>
+          <Tab value="widget">{t('editor.widget.tab')}</Tab>
+          <Tab value="preview">{t('editor.preview.title')}</Tab>
+        </TabList>
+        <div className={styles.sideBody}>
+          {sideTab === 'preview' ? (
+            <PanelPreview doc={shownDoc} locale={locale} resolveMedia={resolveMedia} width={SIDE_WIDTH - 34} />
+          ) : widget ? (
+            <>
+              {widgets.length > 1 ? (
+                <Field label={t('editor.widget.which')}>
+                  <Select value={widget.widgetId} onChange={(_event, data) => setChosenWidget(data.value)}>
+                    {widgets.map((candidate, index) => (
+                      <option key={candidate.widgetId} value={candidate.widgetId}>{`${index + 1}. ${t(`widgetTypes.${candidate.widgetType as WidgetType}`)}`}</option>
+                    ))}
+                  </Select>
+                </Field>
+              ) : (
+                <Text weight="semibold">{t(`widgetTypes.${widget.widgetType as WidgetType}`)}</Text>
+              )}
+              {readOnly ? null : <WidgetSettings key={widget.widgetId} editor={editor} widget={widget} />}
+            </>
+          ) : (
+            <Text className={styles.muted}>{t('editor.widget.none')}</Text>
+          )}
+        </div>
+      </aside>
+
+      {dialog === 'image' ? <MediaPickerDialog locale={locale} onPick={pick} onClose={() => setDialog(null)} /> : null}
+      {dialog === 'link' ? <LinkDialog editor={editor} onClose={() => setDialog(null)} /> : null}
+      {dialog === 'conflict' && autosave.state.status === 'conflict' ? (
+        <ConflictDialog
+          theirs={autosave.state.theirs}
+          mine={doc}
+          locale={locale}
+          onKeepMine={() => { setDialog(null); autosave.keepMine(); }}
+          onTakeTheirs={takeTheirs}
+          onClose={() => setDialog(null)}
+        />
+      ) : null}
+    </div>
+  );
+}

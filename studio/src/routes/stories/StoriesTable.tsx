@@ -1,0 +1,58 @@
+import { Badge, makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
+import type { StoryView } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+import type { StorySort } from '../../api/stories';
+import { useDateFormat } from '../../components/formatting';
+import { TextLink } from '../../components/links';
+import { sortableColumn } from '../../components/lists/list-search';
+import { StoryStateBadge } from './StoryStateBadge';
+
+const useStyles = makeStyles({
+  table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
+  title: { fontWeight: tokens.fontWeightSemibold },
+  muted: { color: tokens.colorNeutralForeground3 },
+  number: { fontVariantNumeric: 'tabular-nums' },
+});
+
+export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryView[]; sort: StorySort; onSort: (sort: StorySort) => void; busy: boolean }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const formatDate = useDateFormat();
+  return (
+    <Table sortable aria-label={t('stories.title')} aria-busy={busy} className={styles.table}>
+      <TableHeader>
+        <TableRow>
+          <TableHeaderCell {...sortableColumn(sort, 'title', onSort)}>{t('stories.columns.title')}</TableHeaderCell>
+          <TableHeaderCell>{t('stories.columns.exhibit')}</TableHeaderCell>
+          <TableHeaderCell>{t('stories.columns.audience')}</TableHeaderCell>
+          <TableHeaderCell>{t('stories.columns.locale')}</TableHeaderCell>
+          <TableHeaderCell {...sortableColumn(sort, 'state', onSort)}>{t('stories.columns.state')}</TableHeaderCell>
+          <TableHeaderCell>{t('stories.columns.panels')}</TableHeaderCell>
+          <TableHeaderCell {...sortableColumn(sort, 'updatedAt', onSort)}>{t('stories.columns.updated')}</TableHeaderCell>
+        </TableRow>
+      </TableHeader>
+      <TableBody>
+        {stories.map((story) => (
+          <TableRow key={story.id}>
+            <TableCell>
+              <span className={styles.title}>
+                <TextLink to={`/stories/${story.id}`}>{story.title}</TextLink>
+              </span>
+            </TableCell>
+            <TableCell>{story.exhibitName ?? <span className={styles.muted}>{t('stories.noExhibit')}</span>}</TableCell>
+            <TableCell>
+              <Badge appearance="outline" color="informative">{t(`audiences.${story.audience}`)}</Badge>
+            </TableCell>
+            <TableCell>{story.sourceLocale}</TableCell>
+            <TableCell><StoryStateBadge state={story.state} /></TableCell>
+            <TableCell className={styles.number}>{story.panelCount}</TableCell>
+            <TableCell>
+              {formatDate(story.updatedAt)}
+              {story.createdBy ? <span className={styles.muted}> · {story.createdBy.name}</span> : null}
+            </TableCell>
+          </TableRow>
+        ))}
+      </TableBody>
+    </Table>
+  );
+}

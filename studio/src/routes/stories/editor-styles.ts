@@ -1,0 +1,34 @@
+import { makeStyles, tokens } from '@fluentui/react-components';
+import { magma } from '../../app/theme';
+
+/** The writing surface: the panel's own headings and lists, and outlines on the blocks a curator selects. */
+export const useEditorStyles = makeStyles({
+  content: {
+    '& .ProseMirror': {
+      minHeight: '22rem',
+      padding: `${tokens.spacingVerticalL} ${tokens.spacingHorizontalXL}`,
+      outline: 'none',
+      fontSize: tokens.fontSizeBase400,
+      lineHeight: tokens.lineHeightBase400,
+    },
+    '& .ProseMirror:focus-visible': { boxShadow: `inset 0 0 0 2px ${tokens.colorStrokeFocus2}` },
+    '& .ProseMirror h2': { fontSize: tokens.fontSizeBase600, margin: `${tokens.spacingVerticalM} 0 ${tokens.spacingVerticalS}`, color: tokens.colorBrandForeground2 },
+    '& .ProseMirror h3': { fontSize: tokens.fontSizeBase500, margin: `${tokens.spacingVerticalM} 0 ${tokens.spacingVerticalXS}`, color: tokens.colorBrandForeground2 },
+    '& .ProseMirror p': { margin: `0 0 ${tokens.spacingVerticalS}` },
+    '& .ProseMirror blockquote': { margin: `${tokens.spacingVerticalS} 0`, paddingLeft: tokens.spacingHorizontalL, borderLeft: `3px solid ${tokens.colorNeutralStroke1}` },
+    '& .ProseMirror a': { color: tokens.colorBrandForegroundLink },
+    '& .mp-widget-node, & .mp-panel-image-node': { margin: `${tokens.spacingVerticalM} 0`, padding: tokens.spacingHorizontalS, borderRadius: tokens.borderRadiusMedium, border: `1px solid ${tokens.colorNeutralStroke2}`, cursor: 'pointer' },
+    '& .mp-widget-node[data-selected], & .mp-panel-image-node[data-selected]': { outline: `3px solid ${tokens.colorBrandStroke1}`, outlineOffset: '2px' },
+    '& .mp-panel-image-node img': { maxHeight: '18rem' },
+    '& .mp-live-value-node': {
+      padding: `0 ${tokens.spacingHorizontalXXS}`,
+      borderRadius: tokens.borderRadiusSmall,
+      backgroundColor: magma.tint,
+      color: magma.foreground,
+      fontWeight: tokens.fontWeightSemibold,
+      fontVariantNumeric: 'tabular-nums',
+    },
+    '& .mp-live-value-node[data-selected]': { outline: `2px solid ${tokens.colorBrandStroke1}` },
+    '& .mp-live-value-node[data-dangling]': { backgroundColor: tokens.colorPaletteRedBackground2, color: tokens.colorPaletteRedForeground1 },
+  },
+});

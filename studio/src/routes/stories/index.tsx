@@ -1,0 +1,110 @@
+import { useEffect, useRef, useState } from 'react';
+import { Button, Field, makeStyles, SearchBox, Select, tokens } from '@fluentui/react-components';
+import { AddRegular, BookOpenRegular } from '@fluentui/react-icons';
+import { AUDIENCES, STORY_STATES } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useCurrentUser } from '../../api/session';
+import { useStories } from '../../api/stories';
+import { EmptyState } from '../../components/EmptyState';
+import { ListStates } from '../../components/lists/ListStates';
+import { withSearchChanges } from '../../components/lists/list-search';
+import { Pager } from '../../components/lists/Pager';
+import { PageHeader } from '../../components/PageHeader';
+import { useDebounced } from '../people/use-debounced';
+import { CreateStoryDialog } from './CreateStoryDialog';
+import { readStoryListParams } from './list-params';
+import { canWriteStories } from './permissions';
+import { StoriesTable } from './StoriesTable';
+import { useExhibitChoices } from './StoryFieldsForm';
+
+const useStyles = makeStyles({
+  toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
+  search: { minWidth: '18rem' },
+});
+
+export function StoriesPage() {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const navigate = useNavigate();
+  const me = useCurrentUser();
+  const [search, setSearch] = useSearchParams();
+  const params = readStoryListParams(search);
+  const stories = useStories(params);
+  const exhibits = useExhibitChoices();
+  const [creating, setCreating] = useState(false);
+  const [query, setQuery] = useState(params.q ?? '');
+  const settledQuery = useDebounced(query.trim(), 300);
+  const urlQuery = useRef(params.q ?? '');
+  urlQuery.current = params.q ?? '';
+
+  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
+
+  useEffect(() => {
+    if (settledQuery !== urlQuery.current) setSearch((current) => withSearchChanges(current, { q: settledQuery }), { replace: true });
+  }, [settledQuery, setSearch]);
+
+  const filtered = Boolean(params.q || params.state || params.exhibitId || params.audience);
+  const writer = canWriteStories(me.roles);
+  const createButton = writer ? (
+    <Button appearance="primary" icon={<AddRegular />} onClick={() => setCreating(true)}>{t('stories.new')}</Button>
+  ) : null;
+
+  return (
+    <>
+      <PageHeader title={t('stories.title')} intro={t('stories.intro')} actions={createButton} />
+      <div className={styles.toolbar} role="search">
+        <Field label={t('stories.search')} className={styles.search}>
+          <SearchBox value={query} onChange={(_event, data) => setQuery(data.value)} />
+        </Field>
+        <Field label={t('stories.columns.state')}>
+          <Select value={params.state ?? ''} onChange={(_event, data) => change({ state: data.value || undefined })}>
+            <option value="">{t('stories.anyState')}</option>
+            {STORY_STATES.map((state) => <option key={state} value={state}>{t(`storyStates.${state}`)}</option>)}
+          </Select>
+        </Field>
+        <Field label={t('stories.columns.exhibit')}>
+          <Select value={params.exhibitId ? String(params.exhibitId) : ''} onChange={(_event, data) => change({ exhibitId: data.value || undefined })}>
+            <option value="">{t('stories.anyExhibit')}</option>
+            {exhibits.data?.items.map((exhibit) => <option key={exhibit.id} value={String(exhibit.id)}>{exhibit.name}</option>)}
+          </Select>
+        </Field>
+        <Field label={t('stories.columns.audience')}>
+          <Select value={params.audience ?? ''} onChange={(_event, data) => change({ audience: data.value || undefined })}>
+            <option value="">{t('stories.anyAudience')}</option>
+            {AUDIENCES.map((audience) => <option key={audience} value={audience}>{t(`audiences.${audience}`)}</option>)}
+          </Select>
+        </Field>
+      </div>
+
+      <ListStates
+        query={stories}
+        loadError={t('stories.loadError')}
+        empty={
+          filtered ? (
+            <EmptyState
+              icon={<BookOpenRegular />}
+              title={t('stories.noMatchTitle')}
+              actions={<Button onClick={() => { setQuery(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button>}
+            >
+              {t('stories.noMatchBody')}
+            </EmptyState>
+          ) : (
+            <EmptyState icon={<BookOpenRegular />} title={t('stories.emptyTitle')} actions={createButton}>
+              {t('stories.emptyBody')}
+            </EmptyState>
+          )
+        }
+      >
+        {(page) => (
+          <>
+            <StoriesTable stories={page.items} sort={params.sort ?? '-updatedAt'} onSort={(sort) => change({ sort })} busy={stories.isFetching} />
+            <Pager page={page} label={t('stories.pagination')} onPage={(next) => change({ page: String(next) })} />
+          </>
+        )}
+      </ListStates>
+
+      {creating ? <CreateStoryDialog onClose={() => setCreating(false)} onCreated={(story) => navigate(`/stories/${story.id}`)} /> : null}
+    </>
+  );
+}

@@ -1,0 +1,17 @@
+import { AUDIENCES, STORY_STATES } from '@mantlepiece/shared';
+import { STORY_SORTS, type StoryListParams } from '../../api/stories';
+import { oneOf, pageFrom, positiveId } from '../../components/lists/list-search';
+
+export const PAGE_SIZE = 25;
+
+export function readStoryListParams(search: URLSearchParams): StoryListParams {
+  return {
+    page: pageFrom(search),
+    pageSize: PAGE_SIZE,
+    q: search.get('q')?.trim() || undefined,
+    state: oneOf(search.get('state'), STORY_STATES),
+    exhibitId: positiveId(search.get('exhibitId')),
+    audience: oneOf(search.get('audience'), AUDIENCES),
+    sort: oneOf(search.get('sort'), STORY_SORTS) ?? '-updatedAt',
+  };
+}
