@@ -11,8 +11,9 @@ const useStyles = makeStyles({
     flexWrap: 'wrap',
     marginBottom: tokens.spacingVerticalL,
   },
-  text: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXS, maxWidth: '48rem' },
-  intro: { color: tokens.colorNeutralForeground2 },
+  text: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS, maxWidth: '48rem' },
+  title: { margin: 0 },
+  intro: { color: tokens.colorNeutralForeground2, margin: 0 },
 });
 
 /** A page's one h1, its intro and its main action; also names the browser tab. */
@@ -22,7 +23,7 @@ export function PageHeader({ title, intro, actions }: { title: string; intro?: R
   return (
     <header className={styles.root}>
       <div className={styles.text}>
-        <Text as="h1" size={700} weight="semibold">{title}</Text>
+        <Text as="h1" size={700} weight="semibold" className={styles.title}>{title}</Text>
         {intro ? <Text as="p" className={styles.intro}>{intro}</Text> : null}
       </div>
       {actions}

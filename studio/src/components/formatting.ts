@@ -12,12 +12,20 @@ export function useRoleList(): (roles: readonly Role[]) => string {
   );
 }
 
-/** Dates and times as staff read them in their language, e.g. "3 March 2026, 14:05". */
+/**
+ * The browser's own regional variant of the studio's language when it has one (en-GB, fr-CA),
+ * so dates follow local habit: "1 Dec 2026, 19:19" in Britain, "Dec 1, 2026, 7:19 PM" in the US.
+ */
+function regionalLocale(language: string): string {
+  return navigator.languages.find((tag) => tag.toLowerCase().split('-')[0] === language) ?? language;
+}
+
+/** Dates and times as staff read them in their language and region. */
 export function useDateFormat(): (iso: string) => string {
   const { i18n } = useTranslation();
-  const language = i18n.resolvedLanguage ?? 'en';
+  const locale = regionalLocale(i18n.resolvedLanguage ?? 'en');
   return useCallback(
-    (iso) => new Intl.DateTimeFormat(language, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(iso)),
-    [language],
+    (iso) => new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(iso)),
+    [locale],
   );
 }

@@ -13,7 +13,7 @@ import { PageHeader } from '../../components/PageHeader';
 import { TextLink } from '../../components/links';
 
 const useStyles = makeStyles({
-  grid: { display: 'grid', gridTemplateColumns: 'repeat(auto-fill, minmax(22rem, 1fr))', gap: tokens.spacingHorizontalXL, alignItems: 'start' },
+  grid: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(24rem, 1fr))', gap: tokens.spacingHorizontalXL, alignItems: 'start', maxWidth: '72rem' },
   card: {
     display: 'flex',
     flexDirection: 'column',
@@ -24,9 +24,18 @@ const useStyles = makeStyles({
     border: `1px solid ${tokens.colorNeutralStroke2}`,
     borderTop: `4px solid ${tokens.colorBrandBackground}`,
   },
+  heading: { margin: 0 },
   role: { color: magma.foreground, fontWeight: tokens.fontWeightSemibold, textTransform: 'uppercase', letterSpacing: '0.06em' },
   body: { color: tokens.colorNeutralForeground2, margin: 0 },
-  areas: { listStyle: 'none', margin: 0, padding: 0, display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
+  areas: {
+    listStyle: 'none',
+    margin: 0,
+    padding: `${tokens.spacingVerticalM} 0 0`,
+    borderTop: `1px solid ${tokens.colorNeutralStroke2}`,
+    display: 'grid',
+    gridTemplateColumns: 'repeat(auto-fill, minmax(16rem, 1fr))',
+    gap: tokens.spacingVerticalS,
+  },
   area: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS, flexWrap: 'wrap' },
   areaIcon: { fontSize: '20px', color: tokens.colorBrandForeground1, display: 'flex' },
   figures: { display: 'flex', gap: tokens.spacingHorizontalXXL, margin: 0 },
@@ -59,7 +68,7 @@ function RoleCard({ role, title, body, children }: { role: Role; title: string; 
   return (
     <section className={styles.card} aria-labelledby={`role-${role}`}>
       <Text size={200} className={styles.role}>{t(`roles.${role}`)}</Text>
-      <Text as="h2" size={500} weight="semibold" id={`role-${role}`}>{title}</Text>
+      <Text as="h2" size={500} weight="semibold" id={`role-${role}`} className={styles.heading}>{title}</Text>
       <Text as="p" className={styles.body}>{body}</Text>
       {children}
       <AreaLinks areas={AREAS_BY_ROLE[role]} />

@@ -13,7 +13,7 @@ const useStyles = makeStyles({
   name: { fontWeight: tokens.fontWeightSemibold },
   muted: { color: tokens.colorNeutralForeground3 },
   badges: { display: 'flex', gap: tokens.spacingHorizontalXS, flexWrap: 'wrap' },
-  actions: { display: 'flex', gap: tokens.spacingHorizontalXS, justifyContent: 'flex-end' },
+  actions: { display: 'flex', gap: tokens.spacingHorizontalXS },
   inactiveRow: { color: tokens.colorNeutralForeground3 },
 });
 
