@@ -1,0 +1,140 @@
+import type { PanelMarkJSON, PanelNodeJSON, PanelPath } from '../panel/panel-json.js';
+
+/** What a unit is on screen; the translator's table filters and the XLIFF context note use it. */
+export type UnitKind = 'heading' | 'paragraph' | 'listItem' | 'quote' | 'widgetText' | 'altText';
+
+/**
+ * A piece of unit content. Paired placeholders (bold, italic, link) open and close around text;
+ * standalone ones (live value, line break) stand for a node the translator moves but never types.
+ */
+export type UnitRun =
+  | { type: 'text'; text: string }
+  | { type: 'open'; id: string }
+  | { type: 'close'; id: string }
+  | { type: 'standalone'; id: string };
+
+export type Placeholder =
+  | { id: string; kind: 'paired'; mark: PanelMarkJSON }
+  | { id: string; kind: 'standalone'; node: PanelNodeJSON };
+
+/** Where a unit's text goes back when a translation is applied. */
+export type UnitLocation =
+  | { type: 'textBlock'; path: PanelPath }
+  | { type: 'widgetParam'; widgetId: string; param: string[] }
+  | { type: 'altText'; mediaId: string };
+
+export interface UnitContext {
+  panelId?: string;
+  /** The panel's place in its story, counted from 1, as the curator sees it in the panel strip. */
+  panelNumber?: number;
+  headingLevel?: number;
+  widgetType?: string;
+  mediaId?: string;
+}
+
+export interface TranslationUnit {
+  id: string;
+  kind: UnitKind;
+  sourceLocale: string;
+  location: UnitLocation;
+  context: UnitContext;
+  runs: UnitRun[];
+  placeholders: Placeholder[];
+  /** The source as the translator reads it: `Hot rock {1}rises{/1} at {2} cm a year`. */
+  display: string;
+  /** Characters a reader sees, placeholders counted at the width they take on screen. */
+  sourceLength: number;
+  /** SHA-256 (hex) of `canonicalSource`: equal hashes mean the translator's source has not moved. */
+  sourceHash: string;
+}
+
+/** A unit before its hash is known (hashing is asynchronous in WebCrypto). */
+export type UnhashedUnit = Omit<TranslationUnit, 'sourceHash'>;
+
+/** A literal "{" is written "{{" so it can never be read as a placeholder. */
+const escapeText = (text: string) => text.replaceAll('{', '{{');
+
+/** The plain form with numbered placeholders; the stored text of a translation uses the same form. */
+export function displayOf(runs: readonly UnitRun[]): string {
+  return runs
+    .map((run) => {
+      if (run.type === 'text') return escapeText(run.text);
+      if (run.type === 'close') return `{/${run.id}}`;
+      return `{${run.id}}`;
+    })
+    .join('');
+}
+
+const PLACEHOLDER_TOKEN = /\{\{|\{(\/?)(\d{1,4})\}/g;
+
+/**
+ * Reads translated text in the display form back into runs. Whether `{n}` opens a pair or stands
+ * alone is the source unit's placeholder kind; an id the source does not have is kept as a
+ * standalone run so `checkPlaceholders` can name it.
+ */
+export function runsFromText(unit: Pick<TranslationUnit, 'placeholders'>, text: string): UnitRun[] {
+  const kinds = new Map(unit.placeholders.map((placeholder) => [placeholder.id, placeholder.kind]));
+  const runs: UnitRun[] = [];
+  let buffer = '';
+  let last = 0;
+  for (const match of text.matchAll(PLACEHOLDER_TOKEN)) {
+    buffer += text.slice(last, match.index);
+    last = match.index + match[0].length;
+    if (match[0] === '{{') {
+      buffer += '{';
+      continue;
+    }
+    if (buffer) runs.push({ type: 'text', text: buffer });
+    buffer = '';
+    const id = match[2] as string;
+    if (match[1]) runs.push({ type: 'close', id });
+    else runs.push({ type: kinds.get(id) === 'paired' ? 'open' : 'standalone', id });
+  }
+  buffer += text.slice(last);
+  if (buffer) runs.push({ type: 'text', text: buffer });
+  return runs;
+}
+
+/** JSON with object keys sorted, so equal content always serialises (and hashes) the same. */
+export function canonicalJson(value: unknown): string {
+  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(',')}]`;
+  if (typeof value === 'object' && value !== null) {
+    const entries = Object.entries(value)
+      .filter(([, entry]) => entry !== undefined)
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
+    return `{${entries.map(([key, entry]) => `${JSON.stringify(key)}:${canonicalJson(entry)}`).join(',')}}`;
+  }
+  return JSON.stringify(value);
+}
+
+/**
+ * What a placeholder is, for the hash: the mark type, or the live value's widget and output. Left
+ * out on purpose: a link's href and a live value's rounding. They are restored from the current
+ * source whenever a translation is applied, so changing them does not call for a new translation.
+ */
+function placeholderIdentity(placeholder: Placeholder): unknown {
+  if (placeholder.kind === 'paired') return { mark: placeholder.mark.type };
+  const { type, attrs = {} } = placeholder.node;
+  return type === 'liveValue' ? { node: type, widgetId: attrs.widgetId, output: attrs.output } : { node: type };
+}
+
+/** The canonical source: the runs, each placeholder spelt out as what it is. */
+export function canonicalSource(unit: Pick<TranslationUnit, 'runs' | 'placeholders'>): string {
+  const byId = new Map(unit.placeholders.map((placeholder) => [placeholder.id, placeholder]));
+  return canonicalJson(
+    unit.runs.map((run) => {
+      if (run.type === 'text') return ['text', run.text];
+      const placeholder = byId.get(run.id);
+      return [run.type, run.id, placeholder ? placeholderIdentity(placeholder) : null];
+    }),
+  );
+}
+
+export async function sha256Hex(text: string): Promise<string> {
+  const digest = await crypto.subtle.digest('SHA-256', new TextEncoder().encode(text));
+  return Array.from(new Uint8Array(digest), (byte) => byte.toString(16).padStart(2, '0')).join('');
+}
+
+export async function withSourceHash(unit: UnhashedUnit): Promise<TranslationUnit> {
+  return { ...unit, sourceHash: await sha256Hex(canonicalSource(unit)) };
+}
