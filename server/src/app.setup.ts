@@ -6,10 +6,17 @@ import { ApiExceptionFilter } from './common/api-exception.filter.js';
 import { createValidationPipe } from './common/validation.js';
 import { ConfigService } from './config/config.service.js';
 import { MEDIA_FILES_PATH } from './media/media-files.controller.js';
-import { serveApps } from './static/serve-apps.js';
+import { answerUnknownPaths, serveApps } from './static/serve-apps.js';
 
-/** Everything around the modules that the running server and the tests share. */
-export function configureApp(app: NestExpressApplication): void {
+/** Configures and initialises the app the same way for the running server and for the tests. */
+export async function initApp(app: NestExpressApplication): Promise<void> {
+  configureApp(app);
+  await app.init();
+  answerUnknownPaths(app);
+}
+
+/** Everything around the modules, before Nest mounts its routes. */
+function configureApp(app: NestExpressApplication): void {
   const config = app.get(ConfigService);
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');

@@ -3,11 +3,11 @@ import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { AppModule } from './app.module.js';
-import { configureApp } from './app.setup.js';
+import { initApp } from './app.setup.js';
 import { ConfigService } from './config/config.service.js';
 
 const app = await NestFactory.create<NestExpressApplication>(AppModule);
-configureApp(app);
+await initApp(app);
 // SIGINT and SIGTERM close the app: the outbox worker stops and the database pool drains.
 app.enableShutdownHooks();
 const config = app.get(ConfigService);

@@ -5,7 +5,7 @@ import { getModelToken } from '@nestjs/sequelize';
 import request from 'supertest';
 import type { Role, SessionView } from '@mantlepiece/shared';
 import { AppModule } from '../src/app.module.js';
-import { configureApp } from '../src/app.setup.js';
+import { initApp } from '../src/app.setup.js';
 import { Clock } from '../src/clock/clock.service.js';
 import { OutboxMessage } from '../src/mail/models/outbox-message.model.js';
 import { User } from '../src/users/models/user.model.js';
@@ -39,8 +39,7 @@ export async function createTestApp(options: { env?: Record<string, string>; clo
   try {
     const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).overrideProvider(Clock).useValue(clock).compile();
     const app = moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'] });
-    configureApp(app);
-    await app.init();
+    await initApp(app);
     return { app, http: app.getHttpServer(), clock, close: () => app.close() };
   } finally {
     for (const [key, value] of Object.entries(saved)) {

@@ -41,9 +41,18 @@ export function serveApps(app: NestExpressApplication, apps: SinglePageApp[]): v
     if (req.path === '/api' || req.path.startsWith('/api/')) return next();
     const isPage = (req.method === 'GET' || req.method === 'HEAD') && !path.posix.basename(req.path).includes('.');
     const spa = isPage ? present.find((candidate) => req.path.startsWith(candidate.prefix)) : undefined;
-    // Outside /api, Nest's own not-found answer never runs, so a missing file gets its JSON 404 here.
-    if (!spa) return res.status(404).json({ statusCode: 404, message: `Nothing is served at ${req.path}.` });
+    if (!spa) return next();
     res.setHeader('Cache-Control', REVALIDATE);
     res.sendFile(path.join(spa.dir, 'index.html'));
+  });
+}
+
+/**
+ * Nest answers unknown paths under /api itself; this answers the rest (a missing file, say) in the
+ * same JSON shape. Registered after `init()`, so that routes Nest mounts outside /api come first.
+ */
+export function answerUnknownPaths(app: NestExpressApplication): void {
+  app.use((req: Request, res: Response) => {
+    res.status(404).json({ statusCode: 404, message: `Nothing is served at ${req.path}.` });
   });
 }
