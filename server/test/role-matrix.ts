@@ -5,6 +5,7 @@ export type Access = 'public' | 'signed-in' | readonly Role[];
 
 const STAFF = ROLES;
 const ADMIN = ['admin'] as const;
+const CURATOR = ['curator'] as const;
 
 /**
  * The declared role matrix, `METHOD /path` as Express knows the route. The role-matrix suite walks
@@ -33,7 +34,49 @@ export const ROLE_MATRIX: Record<string, Access> = {
 
   'GET /api/widgets': STAFF,
   'POST /api/widgets/validate': STAFF,
+
+  'GET /api/venues': STAFF,
+  'GET /api/venues/:id': STAFF,
+  'POST /api/venues': ADMIN,
+  'PATCH /api/venues/:id': ADMIN,
+  'DELETE /api/venues/:id': ADMIN,
+  'GET /api/galleries': STAFF,
+  'GET /api/galleries/:id': STAFF,
+  'POST /api/galleries': ADMIN,
+  'PATCH /api/galleries/:id': ADMIN,
+  'DELETE /api/galleries/:id': ADMIN,
+  'GET /api/stations': STAFF,
+  'GET /api/stations/:id': STAFF,
+  'POST /api/stations': ADMIN,
+  'PATCH /api/stations/:id': ADMIN,
+  'DELETE /api/stations/:id': ADMIN,
+  'GET /api/exhibits': STAFF,
+  'GET /api/exhibits/:id': STAFF,
+  'POST /api/exhibits': ADMIN,
+  'PATCH /api/exhibits/:id': ADMIN,
+  'DELETE /api/exhibits/:id': ADMIN,
+
+  'GET /api/stories': STAFF,
+  'GET /api/stories/:id': STAFF,
+  'POST /api/stories': CURATOR,
+  'PATCH /api/stories/:id': CURATOR,
+  'DELETE /api/stories/:id': CURATOR,
+  'POST /api/stories/:storyId/panels': CURATOR,
+  'POST /api/stories/:storyId/panels/reorder': CURATOR,
+  'PUT /api/panels/:id': CURATOR,
+  'PATCH /api/panels/:id': CURATOR,
+  'DELETE /api/panels/:id': CURATOR,
+
+  'GET /api/media': STAFF,
+  'GET /api/media/:id': STAFF,
+  'POST /api/media': CURATOR,
+  'PATCH /api/media/:id': CURATOR,
+  'DELETE /api/media/:id': CURATOR,
 };
 
-/** The OpenAPI page and its files, registered by @nestjs/swagger: public, like any documentation. */
-export const PUBLIC_PATH_PREFIXES = ['/api/docs'];
+/**
+ * The OpenAPI page and its files, registered by @nestjs/swagger: public, like any documentation.
+ * Media renditions, for <img> tags: content-addressed and immutable, outside /api (Nest also
+ * mounts an ALL not-found handler on that excluded path).
+ */
+export const PUBLIC_PATH_PREFIXES = ['/api/docs', '/media/'];

@@ -195,9 +195,9 @@ export class MediaService {
     const rows = await this.usages.findAll({
       where: { mediaAssetId: ids },
       include: [{ model: Panel, attributes: ['id', 'storyId', 'position'], include: [{ model: Story, attributes: ['id', 'title'] }] }],
-      order: [[Panel, Story, 'title', 'ASC'], [Panel, 'position', 'ASC']],
       transaction,
     });
+    rows.sort((a, b) => a.panel!.story!.title.localeCompare(b.panel!.story!.title) || a.panel!.position - b.panel!.position);
     return rows.map((row) => ({ mediaAssetId: row.mediaAssetId, storyId: row.panel!.storyId, storyTitle: row.panel!.story!.title, panelId: row.panelId }));
   }
 }
