@@ -4,3 +4,4 @@ export * from './widgets/index.js';
 export * from './i18n/index.js';
 export * from './panel/index.js';
 export * from './authoring/views.js';
+export * from './release/index.js';

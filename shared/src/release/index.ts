@@ -1,0 +1,3 @@
+export * from './manifest.js';
+export * from './verify.js';
+export * from './kiosk-api.js';
