@@ -10,36 +10,38 @@ type Outcome = StoryState | WorkflowRefusal;
 const F: Outcome = 'forbidden';
 const I: Outcome = 'illegal_move';
 
-//            draft        in_review    changes_req  approved     retired
+// Columns: draft, in_review, changes_requested, approved, retired.
 type Row = [Outcome, Outcome, Outcome, Outcome, Outcome];
+/** A role that may not take the action, whatever the state. */
+const NEVER: Row = [F, F, F, F, F];
 const EXPECTED: Record<StoryAction, Record<Role, Row>> = {
   submit: {
-    admin: [F, F, F, F, F],
+    admin: NEVER,
     curator: ['in_review', 'in_review', 'in_review', 'in_review', 'in_review'],
-    educator: [F, F, F, F, F],
-    translator: [F, F, F, F, F],
-    technician: [F, F, F, F, F],
+    educator: NEVER,
+    translator: NEVER,
+    technician: NEVER,
   },
   approve: {
-    admin: [F, F, F, F, F],
-    curator: [F, F, F, F, F],
+    admin: NEVER,
+    curator: NEVER,
     educator: [I, 'approved', I, I, I],
-    translator: [F, F, F, F, F],
-    technician: [F, F, F, F, F],
+    translator: NEVER,
+    technician: NEVER,
   },
   request_changes: {
-    admin: [F, F, F, F, F],
-    curator: [F, F, F, F, F],
+    admin: NEVER,
+    curator: NEVER,
     educator: [I, 'changes_requested', I, I, I],
-    translator: [F, F, F, F, F],
-    technician: [F, F, F, F, F],
+    translator: NEVER,
+    technician: NEVER,
   },
   retire: {
     admin: [I, I, I, 'retired', I],
     curator: [I, I, I, 'retired', I],
-    educator: [F, F, F, F, F],
-    translator: [F, F, F, F, F],
-    technician: [F, F, F, F, F],
+    educator: NEVER,
+    translator: NEVER,
+    technician: NEVER,
   },
 };
 

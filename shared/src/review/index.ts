@@ -1,0 +1,3 @@
+export * from './story-workflow.js';
+export * from './revision-snapshot.js';
+export * from './panel-diff.js';
