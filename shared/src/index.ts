@@ -5,3 +5,5 @@ export * from './i18n/index.js';
 export * from './panel/index.js';
 export * from './authoring/views.js';
 export * from './release/index.js';
+export * from './review/index.js';
+export * from './preflight/index.js';
