@@ -7,3 +7,4 @@ export * from './authoring/views.js';
 export * from './release/index.js';
 export * from './review/index.js';
 export * from './preflight/index.js';
+export * from './translation/index.js';

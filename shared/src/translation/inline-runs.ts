@@ -1,7 +1,8 @@
 import { isNodeLike, LIVE_VALUE_NODE, type PanelMarkJSON, type PanelNodeJSON } from '../panel/panel-json.js';
 import { DEFAULT_LIVE_VALUE_FORMAT, isLiveValueFormat } from '../panel/live-value/live-value-format.js';
 import { panelSchema } from '../panel/panel-extensions.js';
-import { canonicalJson, type Placeholder, type UnitRun } from './translation-unit.js';
+import { canonicalJson } from '../review/revision-snapshot.js';
+import type { Placeholder, UnitRun } from './translation-unit.js';
 
 export interface InlineSource {
   runs: UnitRun[];

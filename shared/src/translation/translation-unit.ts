@@ -1,4 +1,5 @@
 import type { PanelMarkJSON, PanelNodeJSON, PanelPath } from '../panel/panel-json.js';
+import { canonicalJson, sha256Hex } from '../review/revision-snapshot.js';
 
 /** What a unit is on screen; the translator's table filters and the XLIFF context note use it. */
 export type UnitKind = 'heading' | 'paragraph' | 'listItem' | 'quote' | 'widgetText' | 'altText';
@@ -95,18 +96,6 @@ export function runsFromText(unit: Pick<TranslationUnit, 'placeholders'>, text: 
   return runs;
 }
 
-/** JSON with object keys sorted, so equal content always serialises (and hashes) the same. */
-export function canonicalJson(value: unknown): string {
-  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(',')}]`;
-  if (typeof value === 'object' && value !== null) {
-    const entries = Object.entries(value)
-      .filter(([, entry]) => entry !== undefined)
-      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
-    return `{${entries.map(([key, entry]) => `${JSON.stringify(key)}:${canonicalJson(entry)}`).join(',')}}`;
-  }
-  return JSON.stringify(value);
-}
-
 /**
  * What a placeholder is, for the hash: the mark type, or the live value's widget and output. Left
  * out on purpose: a link's href and a live value's rounding. They are restored from the current
@@ -128,11 +117,6 @@ export function canonicalSource(unit: Pick<TranslationUnit, 'runs' | 'placeholde
       return [run.type, run.id, placeholder ? placeholderIdentity(placeholder) : null];
     }),
   );
-}
-
-export async function sha256Hex(text: string): Promise<string> {
-  const digest = await crypto.subtle.digest('SHA-256', new TextEncoder().encode(text));
-  return Array.from(new Uint8Array(digest), (byte) => byte.toString(16).padStart(2, '0')).join('');
 }
 
 export async function withSourceHash(unit: UnhashedUnit): Promise<TranslationUnit> {

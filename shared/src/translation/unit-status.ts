@@ -35,7 +35,8 @@ export function localeCompleteness(locale: string, units: readonly Pick<Translat
  * Keys translations to a panel's new units after an edit. A unit keeps the translation under its
  * own id when that was made from its current source; otherwise it takes one made from exactly its
  * current source under another id (a paragraph renumbered by an insertion above it); failing both,
- * it keeps its own, now stale. Each stored translation goes to one unit at most.
+ * it keeps its own, now stale, unless that one moved with its text. Each stored translation goes
+ * to one unit at most.
  */
 export function carryTranslations<T extends StoredTranslation>(units: readonly Pick<TranslationUnit, 'id' | 'sourceHash'>[], translationsById: Readonly<Record<string, T>>): Record<string, T> {
   const own = (id: string) => (Object.hasOwn(translationsById, id) ? translationsById[id] : undefined);
