@@ -14,7 +14,8 @@ const useStyles = makeStyles({
     maxWidth: '44rem',
   },
   icon: { fontSize: '40px', color: tokens.colorBrandForeground1, display: 'flex' },
-  body: { color: tokens.colorNeutralForeground2, maxWidth: '38rem' },
+  heading: { margin: 0 },
+  body: { color: tokens.colorNeutralForeground2, maxWidth: '38rem', margin: 0 },
   actions: { display: 'flex', gap: tokens.spacingHorizontalS, flexWrap: 'wrap' },
 });
 
@@ -31,7 +32,7 @@ export function EmptyState({ icon, title, children, actions, headingLevel = 2 }:
   return (
     <section className={styles.root}>
       {icon ? <span className={styles.icon} aria-hidden="true">{icon}</span> : null}
-      <Text as={Heading} size={500} weight="semibold">{title}</Text>
+      <Text as={Heading} size={500} weight="semibold" className={styles.heading}>{title}</Text>
       {children ? <Text as="p" className={styles.body}>{children}</Text> : null}
       {actions ? <div className={styles.actions}>{actions}</div> : null}
     </section>

@@ -33,7 +33,7 @@ const useStyles = makeStyles({
     padding: `${tokens.spacingVerticalM} 0 0`,
     borderTop: `1px solid ${tokens.colorNeutralStroke2}`,
     display: 'grid',
-    gridTemplateColumns: 'repeat(auto-fill, minmax(16rem, 1fr))',
+    gridTemplateColumns: 'repeat(auto-fill, minmax(20rem, 1fr))',
     gap: tokens.spacingVerticalS,
   },
   area: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS, flexWrap: 'wrap' },

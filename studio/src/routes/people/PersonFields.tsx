@@ -1,4 +1,4 @@
-import { Checkbox, Field, Input, makeStyles, tokens } from '@fluentui/react-components';
+import { Checkbox, Field, Input, makeStyles, Text, tokens, useId } from '@fluentui/react-components';
 import { ROLES, type Role } from '@mantlepiece/shared';
 import type { TFunction } from 'i18next';
 import { useTranslation } from 'react-i18next';
@@ -17,7 +17,10 @@ export type PersonField = keyof PersonValues;
 export const PERSON_FIELDS: readonly PersonField[] = ['email', 'name', 'roles', 'locales'];
 
 const useStyles = makeStyles({
+  fieldset: { border: 0, margin: 0, padding: 0, minWidth: 0 },
+  legend: { padding: 0, marginBottom: tokens.spacingVerticalXXS, fontSize: tokens.fontSizeBase300, lineHeight: tokens.lineHeightBase300, color: tokens.colorNeutralForeground1 },
   roles: { display: 'grid', gridTemplateColumns: 'repeat(auto-fill, minmax(10rem, 1fr))', columnGap: tokens.spacingHorizontalM },
+  error: { display: 'block', color: tokens.colorPaletteRedForeground1, marginTop: tokens.spacingVerticalXXS },
 });
 
 /** Checks a person's details the way the server will, so most mistakes never make a round trip. */
@@ -53,6 +56,7 @@ export function PersonFields({ values, onChange, messages, emailEditable }: {
 }) {
   const { t } = useTranslation();
   const styles = useStyles();
+  const rolesMessageId = useId('roles-message');
   const toggleRole = (role: Role, checked: boolean) =>
     onChange({ ...values, roles: checked ? ROLES.filter((r) => r === role || values.roles.includes(r)) : values.roles.filter((r) => r !== role) });
 
@@ -64,8 +68,10 @@ export function PersonFields({ values, onChange, messages, emailEditable }: {
       <Field label={t('personForm.name')} required validationMessage={messages.name}>
         <Input name="name" value={values.name} onChange={(_event, data) => onChange({ ...values, name: data.value })} />
       </Field>
-      <Field label={t('personForm.roles')} required validationMessage={messages.roles}>
-        <div role="group" aria-label={t('personForm.roles')} className={styles.roles}>
+      {/* A fieldset, not a Field: Fluent's Field hands its one id to every checkbox inside it. */}
+      <fieldset className={styles.fieldset} aria-describedby={messages.roles ? rolesMessageId : undefined}>
+        <legend className={styles.legend}>{t('personForm.roles')}</legend>
+        <div className={styles.roles}>
           {ROLES.map((role) => (
             <Checkbox
               key={role}
@@ -75,7 +81,8 @@ export function PersonFields({ values, onChange, messages, emailEditable }: {
             />
           ))}
         </div>
-      </Field>
+        {messages.roles ? <Text id={rolesMessageId} role="alert" size={200} className={styles.error}>{messages.roles}</Text> : null}
+      </fieldset>
       {values.roles.includes('translator') ? (
         <Field label={t('personForm.locales')} hint={t('personForm.localesHint')} required validationMessage={messages.locales}>
           <Input name="locales" value={values.locales} onChange={(_event, data) => onChange({ ...values, locales: data.value })} />
