@@ -1,6 +1,7 @@
 import type { Audience } from '../authoring/views.js';
 import type { PanelDocJSON } from '../panel/panel-json.js';
 import { mediaIdsIn, widgetsIn } from '../panel/panel-queries.js';
+import { sha256HexOfBytes } from '../release/verify.js';
 
 /** A panel as the server holds it when a story is submitted: its document in every locale. */
 export interface SnapshotPanelInput {
@@ -94,10 +95,7 @@ export function canonicalJson(value: unknown): string {
 }
 
 /** SHA-256 of the UTF-8 bytes of a text, as lower-case hex, through WebCrypto (Node 20 and browsers alike). */
-export async function sha256Hex(text: string): Promise<string> {
-  const digest = await crypto.subtle.digest('SHA-256', new TextEncoder().encode(text));
-  return Array.from(new Uint8Array(digest), (byte) => byte.toString(16).padStart(2, '0')).join('');
-}
+export const sha256Hex = (text: string): Promise<string> => sha256HexOfBytes(new TextEncoder().encode(text));
 
 /** The revision's content hash: SHA-256 over the snapshot's canonical JSON. */
 export const revisionHash = (snapshot: RevisionSnapshot): Promise<string> => sha256Hex(canonicalJson(snapshot));
