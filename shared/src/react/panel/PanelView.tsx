@@ -19,6 +19,8 @@ export interface PanelViewProps {
   resolveMedia: ResolveMedia;
   /** 'text' on a kiosk, where a link must not take a visitor out of the story. */
   links?: 'anchor' | 'text';
+  /** Told each time a visitor moves a widget's params (the kiosk counts widget use from it). */
+  onVisitorParamsChange?: (widgetId: string, params: Record<string, unknown>) => void;
 }
 
 interface VisitorParams {
@@ -30,16 +32,18 @@ interface VisitorParams {
  * A panel as a gallery screen draws it: the Tiptap JSON walked into React elements, with no editor
  * and no raw HTML. Widgets stay live under touch, and live values follow what the visitor sets.
  */
-export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = false, highContrast = false, reducedMotion = false, resolveMedia, links = 'anchor' }: PanelViewProps) {
+export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = false, highContrast = false, reducedMotion = false, resolveMedia, links = 'anchor', onVisitorParamsChange }: PanelViewProps) {
   const [visitor, setVisitor] = useState<VisitorParams>({ doc, byWidget: new Map() });
   // What a visitor set belongs to the document they set it on; a new panel starts from its own params.
   const paramsById = visitor.doc === doc ? visitor.byWidget : new Map<string, unknown>();
   const widgets = useMemo(() => widgetsIn(doc), [doc]);
   const readings = useMemo(() => readPanelWidgets(widgets, paramsById), [widgets, paramsById]);
   const onWidgetParamsChange = useCallback(
-    (widgetId: string, params: Record<string, unknown>) =>
-      setVisitor((current) => ({ doc, byWidget: new Map(current.doc === doc ? current.byWidget : []).set(widgetId, params) })),
-    [doc],
+    (widgetId: string, params: Record<string, unknown>) => {
+      setVisitor((current) => ({ doc, byWidget: new Map(current.doc === doc ? current.byWidget : []).set(widgetId, params) }));
+      onVisitorParamsChange?.(widgetId, params);
+    },
+    [doc, onVisitorParamsChange],
   );
 
   const { width, height } = PANEL_LAYOUTS[layout];

@@ -1,0 +1,92 @@
+import type { EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, ManifestResponse, PairCompleteWaiting, PairStartResponse } from '@mantlepiece/shared';
+
+/** The public view of the default venue, for the attract loop before the kiosk is paired. */
+export interface KioskVenue {
+  name: string;
+  locales: string[];
+}
+
+/** A server answer the kiosk did not expect; `status` 0 when the server could not be reached. */
+export class KioskApiError extends Error {
+  constructor(readonly status: number, message: string) {
+    super(message);
+  }
+}
+
+export type ManifestAnswer =
+  | { status: 'unchanged' }
+  | { status: 'none' }
+  | { status: 'release'; body: ManifestResponse; etag: string | null };
+
+export type PairAnswer = { status: 'waiting' } | { status: 'expired' } | { status: 'paired'; credential: KioskCredential };
+
+export type Fetch = typeof fetch;
+
+/** Every route the kiosk calls (issue 7 contract), in one place: nothing else calls fetch. */
+export class KioskApi {
+  private deviceToken: string | null = null;
+
+  constructor(private readonly fetchImpl: Fetch = (input, init) => fetch(input, init), private readonly origin = '') {}
+
+  useDeviceToken(token: string | null): void {
+    this.deviceToken = token;
+  }
+
+  private async send(path: string, init: RequestInit = {}): Promise<Response> {
+    const headers = new Headers(init.headers);
+    if (this.deviceToken && !path.startsWith('/api/kiosk/pair/')) headers.set('Authorization', `Bearer ${this.deviceToken}`);
+    if (init.body !== undefined) headers.set('Content-Type', 'application/json');
+    try {
+      return await this.fetchImpl(`${this.origin}${path}`, { ...init, headers, cache: 'no-store' });
+    } catch (error) {
+      throw new KioskApiError(0, `${init.method ?? 'GET'} ${path} could not reach the server (${(error as Error).message}).`);
+    }
+  }
+
+  private async json<T>(path: string, init: RequestInit = {}, expected: number[] = [200]): Promise<{ status: number; body: T }> {
+    const response = await this.send(path, { ...init, headers: { Accept: 'application/json', ...init.headers } });
+    if (!expected.includes(response.status)) throw new KioskApiError(response.status, `${init.method ?? 'GET'} ${path} answered ${response.status}.`);
+    return { status: response.status, body: (await response.json()) as T };
+  }
+
+  async venue(): Promise<KioskVenue> {
+    return (await this.json<KioskVenue>('/api/kiosk/venue')).body;
+  }
+
+  async startPairing(): Promise<PairStartResponse> {
+    return (await this.json<PairStartResponse>('/api/kiosk/pair/start', { method: 'POST', body: '{}' }, [200, 201])).body;
+  }
+
+  async completePairing(pollToken: string): Promise<PairAnswer> {
+    const response = await this.send('/api/kiosk/pair/complete', { method: 'POST', body: JSON.stringify({ pollToken }) });
+    if (response.status === 202) return { status: 'waiting' };
+    if (response.status === 410) return { status: 'expired' };
+    if (response.status !== 200) throw new KioskApiError(response.status, `POST /api/kiosk/pair/complete answered ${response.status}.`);
+    const body = (await response.json()) as KioskCredential | PairCompleteWaiting;
+    return 'deviceToken' in body ? { status: 'paired', credential: body } : { status: 'waiting' };
+  }
+
+  async manifest(etag: string | null): Promise<ManifestAnswer> {
+    const response = await this.send('/api/kiosk/manifest', { headers: etag ? { 'If-None-Match': etag } : {} });
+    if (response.status === 304) return { status: 'unchanged' };
+    if (response.status === 404) return { status: 'none' };
+    if (response.status !== 200) throw new KioskApiError(response.status, `GET /api/kiosk/manifest answered ${response.status}.`);
+    return { status: 'release', body: (await response.json()) as ManifestResponse, etag: response.headers.get('ETag') };
+  }
+
+  /** A release file from byte `from` on (a Range request when resuming). */
+  async file(sha256: string, from: number): Promise<Response> {
+    const response = await this.send(`/api/kiosk/files/${sha256}`, { headers: from > 0 ? { Range: `bytes=${from}-` } : {} });
+    if (response.status !== 200 && response.status !== 206) throw new KioskApiError(response.status, `GET /api/kiosk/files/${sha256} answered ${response.status}.`);
+    return response;
+  }
+
+  async heartbeat(body: HeartbeatBody): Promise<void> {
+    const response = await this.send('/api/kiosk/heartbeat', { method: 'POST', body: JSON.stringify(body) });
+    if (!response.ok) throw new KioskApiError(response.status, `POST /api/kiosk/heartbeat answered ${response.status}.`);
+  }
+
+  async events(events: KioskEvent[]): Promise<EventsResponse> {
+    return (await this.json<EventsResponse>('/api/kiosk/events', { method: 'POST', body: JSON.stringify({ events }) })).body;
+  }
+}

@@ -1,0 +1,147 @@
+import { beforeEach, describe, expect, it } from 'vitest';
+import { KioskApi } from '../app/kiosk-api';
+import type { KioskStore } from '../storage/kiosk-store';
+import { FakeKioskServer } from '../test-support/fake-server';
+import { fixtureCredential, fixtureRelease, sha256Of, venueKey } from '../test-support/release-fixture';
+import { testStore } from '../test-support/test-store';
+import { CHUNK_BYTES } from './file-download';
+import { bootRelease } from './playable-release';
+import { promotePendingRelease, syncRelease } from './release-sync';
+
+const key = venueKey();
+const credential = fixtureCredential(key);
+
+let server: FakeKioskServer;
+let api: KioskApi;
+let store: KioskStore;
+
+beforeEach(async () => {
+  server = new FakeKioskServer();
+  api = new KioskApi(server.fetch);
+  api.useDeviceToken(credential.deviceToken);
+  store = await testStore();
+});
+
+async function playRelease(releaseId: number, options = {}) {
+  server.live = fixtureRelease(key, releaseId, options);
+  expect(await syncRelease(api, store, credential)).toEqual({ kind: 'ready', releaseId });
+  expect(await promotePendingRelease(store)).toBe(releaseId);
+}
+
+describe('release sync', () => {
+  it('downloads every file, checks it, and holds the release until the attract loop asks for it', async () => {
+    server.live = fixtureRelease(key, 1);
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'ready', releaseId: 1 });
+    expect(await store.meta('pending')).toBe(1);
+    expect(await store.meta('current')).toBeNull();
+    expect(await store.fileHashes()).toEqual(new Set(server.live.files.keys()));
+    expect(server.requestsTo('/api/kiosk/manifest')[0]!.headers.get('Authorization')).toBe('Bearer device-token-1');
+  });
+
+  it('asks with If-None-Match and does nothing on 304', async () => {
+    await playRelease(1);
+    const before = server.requests.length;
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'unchanged' });
+    expect(server.requests.slice(before).map((request) => request.path)).toEqual(['/api/kiosk/manifest']);
+    expect(server.requests.at(-1)!.headers.get('If-None-Match')).toBe('"release-1"');
+  });
+
+  it('refuses a file whose hash does not match, keeps the current release and remembers why', async () => {
+    await playRelease(1);
+    server.live = fixtureRelease(key, 2, { imageSeed: 9 });
+    const bad = server.live.manifest.files[1]!.sha256;
+    server.tampered.add(bad);
+    const outcome = await syncRelease(api, store, credential);
+    expect(outcome.kind).toBe('rejected');
+    expect(await store.meta('lastError')).toMatch(new RegExp(`^Release 2 refused: File ${bad} came as 700000 bytes hashing to [0-9a-f]{64}, not`));
+    expect(await store.meta('current')).toBe(1);
+    expect(await store.meta('pending')).toBeNull();
+    expect((await store.fileHashes()).has(bad)).toBe(false);
+    expect((await bootRelease(store, credential.publicKey))?.releaseId).toBe(1);
+  });
+
+  it('refuses a manifest whose signature does not verify', async () => {
+    await playRelease(1);
+    const release = fixtureRelease(key, 2);
+    server.live = { ...release, response: { ...release.response, manifest: release.response.manifest.replace('"number":2', '"number":20') } };
+    const before = server.requests.length;
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'rejected', reason: 'The release manifest is not signed by this venue’s key.' });
+    expect(await store.meta('current')).toBe(1);
+    expect(server.requests.slice(before).some((request) => request.path.startsWith('/api/kiosk/files/'))).toBe(false);
+  });
+
+  it('refuses a release signed by another venue', async () => {
+    server.live = fixtureRelease(venueKey(), 1);
+    expect((await syncRelease(api, store, credential)).kind).toBe('rejected');
+  });
+
+  it('resumes a broken download with a Range request from the bytes it kept', async () => {
+    server.live = fixtureRelease(key, 1);
+    const large = server.live.manifest.files.find((file) => file.size === 700_000)!;
+    server.cutAfter.set(large.sha256, 2 * CHUNK_BYTES + 1000);
+    await expect(syncRelease(api, store, credential)).rejects.toThrow('network error');
+    const kept = (await store.chunks(large.sha256)).reduce((sum, chunk) => sum + chunk.bytes.byteLength, 0);
+    expect(kept).toBe(2 * CHUNK_BYTES + 1000);
+
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'ready', releaseId: 1 });
+    const fileRequests = server.requestsTo(`/api/kiosk/files/${large.sha256}`);
+    expect(fileRequests.map((request) => request.headers.get('Range'))).toEqual([null, `bytes=${kept}-`]);
+    expect(await store.chunks(large.sha256)).toEqual([]);
+    expect(sha256Of(new Uint8Array((await store.file(large.sha256))!.bytes))).toBe(large.sha256);
+  });
+
+  it('downloads only the files a new release does not share with the one playing', async () => {
+    await playRelease(1);
+    server.live = fixtureRelease(key, 2, { storyTitle: 'Plates move' });
+    const before = server.requests.length;
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'ready', releaseId: 2 });
+    expect(server.requests.slice(before).filter((request) => request.path.startsWith('/api/kiosk/files/'))).toEqual([]);
+  });
+
+  it('keeps the release it replaced, so a rollback needs no download', async () => {
+    await playRelease(1);
+    const first = server.live!;
+    await playRelease(2, { imageSeed: 5 });
+    expect(await store.meta('previous')).toBe(1);
+    server.live = first;
+    const before = server.requests.length;
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'known', releaseId: 1 });
+    expect(server.requests.slice(before).filter((request) => request.path.startsWith('/api/kiosk/files/'))).toEqual([]);
+    expect(await promotePendingRelease(store)).toBe(1);
+    expect(await store.meta('previous')).toBe(2);
+  });
+
+  it('drops files no kept release lists once a third release is played', async () => {
+    await playRelease(1);
+    const firstFiles = [...server.live!.files.keys()];
+    await playRelease(2, { imageSeed: 5 });
+    await playRelease(3, { imageSeed: 6 });
+    const stored = await store.fileHashes();
+    expect(firstFiles.filter((sha256) => stored.has(sha256))).toEqual([]);
+    expect(await store.release(1)).toBeUndefined();
+    expect(stored.size).toBe(4);
+  });
+});
+
+describe('boot', () => {
+  it('boots into the last good release from storage when the server cannot be reached', async () => {
+    await playRelease(1);
+    server.reachable = false;
+    await expect(syncRelease(api, store, credential)).rejects.toThrow('could not reach the server');
+    const release = await bootRelease(store, credential.publicKey);
+    expect(release?.releaseId).toBe(1);
+    expect(release?.manifest.stories.map((story) => story.title.en)).toEqual(['Why rock slides', 'Mantle overturn (en)']);
+    expect(release?.imageUrls.get('m1')).toMatch(/^blob:/);
+  });
+
+  it('switches at boot to a release that became ready while the kiosk was off', async () => {
+    await playRelease(1);
+    server.live = fixtureRelease(key, 2, { imageSeed: 4 });
+    await syncRelease(api, store, credential);
+    expect((await bootRelease(store, credential.publicKey))?.releaseId).toBe(2);
+  });
+
+  it('has nothing to play before its first release', async () => {
+    expect(await bootRelease(store, credential.publicKey)).toBeNull();
+  });
+});

@@ -1,0 +1,76 @@
+import { missingFiles, parseManifest, verifyManifest, type KioskCredential } from '@mantlepiece/shared';
+import type { KioskApi } from '../app/kiosk-api';
+import type { KioskStore } from '../storage/kiosk-store';
+import { downloadFile } from './file-download';
+
+export type SyncOutcome =
+  | { kind: 'unchanged' }
+  | { kind: 'no-release' }
+  /** Already stored: playing, kept or waiting for the attract loop. */
+  | { kind: 'known'; releaseId: number }
+  /** Every file checked and the signature verified: waiting for the attract loop. */
+  | { kind: 'ready'; releaseId: number }
+  | { kind: 'rejected'; reason: string };
+
+async function reject(store: KioskStore, reason: string): Promise<SyncOutcome> {
+  // The current release keeps playing; the reason goes out with the next heartbeat.
+  await store.setMeta('lastError', reason);
+  return { kind: 'rejected', reason };
+}
+
+/**
+ * One round of release sync: ask for the gallery's live manifest, and when it is new, verify it,
+ * download what is missing and mark it pending. Network failures throw (the caller tries later);
+ * a release that fails its checks is rejected and never becomes pending.
+ */
+export async function syncRelease(api: KioskApi, store: KioskStore, credential: KioskCredential): Promise<SyncOutcome> {
+  const answer = await api.manifest(await store.meta('manifestEtag'));
+  if (answer.status === 'unchanged') return { kind: 'unchanged' };
+  if (answer.status === 'none') return { kind: 'no-release' };
+
+  const { manifest: manifestJson, signature } = answer.body;
+  if (!(await verifyManifest(manifestJson, signature, credential.publicKey))) {
+    return reject(store, 'The release manifest is not signed by this venue’s key.');
+  }
+  const parsed = parseManifest(manifestJson);
+  if (!parsed.ok) return reject(store, parsed.message);
+  const { manifest } = parsed;
+  if (manifest.galleryId !== credential.galleryId) {
+    return reject(store, `Release ${manifest.releaseId} is for gallery ${manifest.galleryId}, not this kiosk’s gallery ${credential.galleryId}.`);
+  }
+
+  const alreadyStored = await store.release(manifest.releaseId);
+  if (!alreadyStored) {
+    for (const file of missingFiles(manifest, await store.fileHashes())) {
+      const result = await downloadFile(api, store, file);
+      if (!result.ok) return reject(store, `Release ${manifest.releaseId} refused: ${result.reason}`);
+    }
+    await store.putRelease({ releaseId: manifest.releaseId, manifestJson, signature, storedAt: new Date().toISOString() });
+  }
+  // Only a release that checked completely gets the ETag, so a refused one is asked for again.
+  await store.setMeta('manifestEtag', answer.etag);
+
+  if ((await store.meta('current')) === manifest.releaseId) {
+    // A rollback to the release playing now: nothing waits any more.
+    await store.setMeta('pending', null);
+    return { kind: 'known', releaseId: manifest.releaseId };
+  }
+  await store.setMeta('pending', manifest.releaseId);
+  await store.setMeta('lastError', null);
+  return alreadyStored ? { kind: 'known', releaseId: manifest.releaseId } : { kind: 'ready', releaseId: manifest.releaseId };
+}
+
+/**
+ * Makes the pending release the current one and keeps the one it replaces (a rollback without a
+ * download). Called only on the attract loop, when no visitor is mid-story.
+ */
+export async function promotePendingRelease(store: KioskStore): Promise<number | null> {
+  const pending = await store.meta('pending');
+  const current = await store.meta('current');
+  if (pending === null || pending === current) return null;
+  await store.setMeta('previous', current);
+  await store.setMeta('current', pending);
+  await store.setMeta('pending', null);
+  await store.keepOnly([pending, current].filter((id): id is number => id !== null));
+  return pending;
+}
