@@ -4,19 +4,25 @@ import { AuditModule } from '../audit/audit.module.js';
 import { ClockModule } from '../clock/clock.module.js';
 import { ConfigModule } from '../config/config.module.js';
 import { DatabaseModule } from '../database/database.module.js';
+import { Exhibit } from '../exhibits/models/exhibit.model.js';
+import { MediaModule } from '../media/media.module.js';
+import { PanelsModule } from '../panels/panels.module.js';
+import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
 import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { DemoStories } from './demo-stories.js';
 import { SeedService } from './seed.service.js';
 
 /** What the CLI's seed and create-admin need: the database, no HTTP and no mail worker. */
 @Module({
   imports: [
     ConfigModule, ClockModule, DatabaseModule, AuditModule,
-    SequelizeModule.forFeature([User, Venue, Gallery, Station]),
+    SequelizeModule.forFeature([User, Venue, Gallery, Station, Exhibit, Story]),
+    MediaModule, PanelsModule,
   ],
-  providers: [SeedService, PasswordHasher],
+  providers: [SeedService, PasswordHasher, DemoStories],
 })
 export class SeedModule {}

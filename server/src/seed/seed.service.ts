@@ -7,6 +7,7 @@ import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { DemoStories } from './demo-stories.js';
 import { DEMO_ACCOUNTS, DEMO_GALLERY, DEMO_STATION, DEMO_VENUE } from './demo-scenario.js';
 
 @Injectable()
@@ -19,6 +20,7 @@ export class SeedService {
     private readonly sequelize: Sequelize,
     private readonly hasher: PasswordHasher,
     private readonly audit: AuditService,
+    private readonly demoStories: DemoStories,
   ) {}
 
   /** Seeds the demo on a database that has nobody in it yet; returns false when it left it alone. */
@@ -34,6 +36,7 @@ export class SeedService {
         { transaction },
       );
     });
+    await this.demoStories.seed('curator@demo.test');
     return true;
   }
 

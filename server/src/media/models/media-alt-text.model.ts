@@ -1,4 +1,4 @@
-import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import { MediaAsset } from './media-asset.model.js';
 
 @Table({ tableName: 'media_alt_texts' })
@@ -6,9 +6,6 @@ export class MediaAltText extends Model {
   @ForeignKey(() => MediaAsset)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
   mediaAssetId: number;
-
-  @BelongsTo(() => MediaAsset)
-  mediaAsset?: MediaAsset;
 
   /** BCP 47. */
   @Column({ type: DataType.STRING(35), allowNull: false })

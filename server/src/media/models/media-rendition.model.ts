@@ -1,4 +1,4 @@
-import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import { MediaAsset } from './media-asset.model.js';
 
 /** A WebP of an asset at one width, metadata stripped. */
@@ -7,9 +7,6 @@ export class MediaRendition extends Model {
   @ForeignKey(() => MediaAsset)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
   mediaAssetId: number;
-
-  @BelongsTo(() => MediaAsset)
-  mediaAsset?: MediaAsset;
 
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
   width: number;

@@ -1,4 +1,4 @@
-import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import type { PanelDocJSON } from '@mantlepiece/shared';
 import { jsonColumn } from '../../database/json-column.js';
 import { Panel } from './panel.model.js';
@@ -9,9 +9,6 @@ export class PanelDocument extends Model {
   @ForeignKey(() => Panel)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
   panelId: number;
-
-  @BelongsTo(() => Panel)
-  panel?: Panel;
 
   @Column({ type: DataType.STRING(35), allowNull: false })
   locale: string;

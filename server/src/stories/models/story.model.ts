@@ -1,7 +1,6 @@
-import { BelongsTo, Column, DataType, ForeignKey, HasMany, Model, Table } from 'sequelize-typescript';
+import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import { AUDIENCES, STORY_STATES, type Audience, type StoryState } from '@mantlepiece/shared';
 import { Exhibit } from '../../exhibits/models/exhibit.model.js';
-import { Panel } from '../../panels/models/panel.model.js';
 import { User } from '../../users/models/user.model.js';
 
 @Table({ tableName: 'stories' })
@@ -36,9 +35,6 @@ export class Story extends Model {
   /** Set by the first release that carries the story; a released story is never deleted. */
   @Column({ type: DataType.DATE(3), allowNull: true })
   releasedAt: Date | null;
-
-  @HasMany(() => Panel)
-  panels?: Panel[];
 
   declare id: number;
   declare createdAt: Date;

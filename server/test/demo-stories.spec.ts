@@ -1,0 +1,44 @@
+import { describe, expect, it } from 'vitest';
+import { checkPanelDocument, panelText, wordCount, type MediaView, type Page, type StoryDetailView, type StoryView } from '@mantlepiece/shared';
+import { DEMO_EXHIBIT } from '../src/seed/demo-stories.js';
+
+/** The server `npm test` started, on the database `seed` filled. */
+const server = process.env.MANTLEPIECE_URL;
+
+async function asCurator<T>(path: string): Promise<T> {
+  const login = await fetch(`${server}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email: 'curator@demo.test', password: process.env.DEMO_PASSWORD ?? 'mantlepiece-demo' }),
+  });
+  const { accessToken } = (await login.json()) as { accessToken: string };
+  return (await (await fetch(`${server}${path}`, { headers: { Authorization: `Bearer ${accessToken}` } })).json()) as T;
+}
+
+describe.runIf(server)('the seeded demo stories on the running server', () => {
+  it('holds three short family drafts in the demo exhibit, every panel a valid document within its word budget', async () => {
+    const stories = await asCurator<Page<StoryView>>('/api/stories?sort=title');
+    const demo = stories.items.filter((story) => story.exhibitName === DEMO_EXHIBIT.name);
+    expect(demo.map((story) => [story.audience, story.state])).toEqual([['family', 'draft'], ['family', 'draft'], ['family', 'draft']]);
+    for (const summary of demo) {
+      const story = await asCurator<StoryDetailView>(`/api/stories/${summary.id}`);
+      expect(story.panels.length).toBeGreaterThanOrEqual(2);
+      for (const panel of story.panels) {
+        expect(checkPanelDocument(panel.doc).ok).toBe(true);
+        // Museum practice (common practice): tens of words a panel, not hundreds.
+        expect(wordCount(panelText(panel.doc))).toBeLessThanOrEqual(panel.wordBudget);
+      }
+    }
+  });
+
+  it('credits every demo image, with a CC-BY-4.0 licence that outlasts the exhibit and alt text in en, fr and es', async () => {
+    const media = await asCurator<Page<MediaView>>('/api/media?q=Basalt%20Point');
+    expect(media.total).toBe(3);
+    for (const asset of media.items) {
+      expect(asset).toMatchObject({ credit: 'Illustration: Basalt Point Earth Science Centre', licence: { kind: 'spdx', id: 'CC-BY-4.0' } });
+      expect(asset.licenceExpiresOn! > DEMO_EXHIBIT.plannedEnd).toBe(true);
+      expect(Object.keys(asset.alt).sort()).toEqual(['en', 'es', 'fr']);
+      expect(asset.usedIn).toHaveLength(1);
+    }
+  });
+});
