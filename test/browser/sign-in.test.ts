@@ -73,7 +73,7 @@ describe('signing in to the studio', () => {
 
   it('lists the demo accounts on the admin People page, from the server', async () => {
     await signIn(page, 'admin@demo.test');
-    await page.getByRole('link', { name: 'People', exact: true }).click();
+    await page.getByRole('navigation', { name: 'Studio areas' }).getByRole('link', { name: 'People', exact: true }).click();
     const table = page.getByRole('table', { name: 'People' });
     await table.waitFor();
     expect(await table.getByRole('cell', { name: 'translator@demo.test' }).count()).toBe(1);
