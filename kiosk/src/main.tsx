@@ -4,13 +4,23 @@ import '@fontsource/lexend/400.css';
 import '@fontsource/lexend/600.css';
 import './app/i18n';
 import './kiosk.css';
-import { App } from './App';
+import { readKioskConfig } from './app/config';
+import { KioskApi } from './app/kiosk-api';
+import { KioskApp } from './app/KioskApp';
+import { lockDown } from './app/lockdown';
+import { registerAppCache } from './app/app-cache';
+import { openKioskDb } from './storage/kiosk-db';
+import { KioskStore } from './storage/kiosk-store';
 
-// A public screen: a long press must not open a browser menu a visitor cannot close.
-document.addEventListener('contextmenu', (event) => event.preventDefault());
+lockDown();
+if (import.meta.env.PROD) registerAppCache();
+
+const store = new KioskStore(await openKioskDb());
+// Asks the browser not to evict the releases under storage pressure: a kiosk must boot offline.
+void navigator.storage?.persist?.().catch(() => false);
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>
-    <App />
+    <KioskApp api={new KioskApi()} store={store} config={readKioskConfig(location.search)} appVersion={__KIOSK_VERSION__} />
   </StrictMode>,
 );

@@ -8,3 +8,15 @@ afterEach(() => cleanup());
 let objectUrls = 0;
 URL.createObjectURL ??= () => `blob:kiosk.test/${(objectUrls += 1)}`;
 URL.revokeObjectURL ??= () => undefined;
+
+// jsdom has no PointerEvent; a MouseEvent carries the coordinates a swipe is measured by.
+if (typeof window.PointerEvent === 'undefined') {
+  class PointerEventLike extends MouseEvent {
+    readonly pointerId: number;
+    constructor(type: string, init: PointerEventInit = {}) {
+      super(type, init);
+      this.pointerId = init.pointerId ?? 1;
+    }
+  }
+  (window as unknown as { PointerEvent: typeof PointerEventLike }).PointerEvent = PointerEventLike;
+}

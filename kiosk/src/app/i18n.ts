@@ -26,6 +26,11 @@ export function kioskLanguages(venueLocales: readonly string[]): KioskLanguage[]
   return matches.length ? [...new Set(matches)] : ['en'];
 }
 
+/** The language the kiosk's own words (buttons, warnings) take beside content in `locale`. */
+export function chromeLanguage(locale: string): KioskLanguage {
+  return kioskLanguages([locale])[0]!;
+}
+
 void i18next.use(initReactI18next).init({
   resources,
   lng: 'en',

@@ -5,13 +5,38 @@ export const en = {
   },
   notPaired: {
     title: 'Stories are on their way',
-    body: 'This screen is not yet paired with a station, so it has no stories to show yet.',
-    staff: 'For staff: pair this kiosk with a station from the studio.',
-    back: 'Back',
   },
-  offline: {
-    title: 'This screen cannot reach its server',
-    body: 'It tries again by itself every half minute.',
+  pairing: {
+    codeLabel: 'Pairing code',
+    steps: 'For staff: in the studio, open this screen’s station (Settings, Stations) and enter this code there.',
+    renew: 'When the code runs out, a new one appears here by itself.',
+    unreachable: 'Cannot reach the server to get a pairing code. Trying again.',
+  },
+  waiting: {
+    body: 'This screen is paired and is waiting for its first release from the studio.',
+  },
+  menu: {
+    title: 'Choose a story',
+    panels_one: '{{count}} screen',
+    panels_other: '{{count}} screens',
+  },
+  story: {
+    previous: 'Previous',
+    next: 'Next',
+    allStories: 'All stories',
+    position: '{{current}} of {{total}}',
+  },
+  settings: {
+    language: 'Language',
+    largeText: 'Larger text',
+    highContrast: 'High contrast',
+    reducedMotion: 'Less motion',
+  },
+  idle: {
+    title: 'Still there?',
+    body_one: 'This screen goes back to the start in {{count}} second.',
+    body_other: 'This screen goes back to the start in {{count}} seconds.',
+    stay: 'I’m still here',
   },
 };
 

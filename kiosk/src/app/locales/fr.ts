@@ -6,12 +6,37 @@ export const fr: KioskMessages = {
   },
   notPaired: {
     title: 'Les récits arrivent bientôt',
-    body: 'Cet écran n’est pas encore associé à un poste ; il n’a donc pas encore de récit à montrer.',
-    staff: 'Pour le personnel : associez cette borne à un poste depuis le studio.',
-    back: 'Retour',
   },
-  offline: {
-    title: 'Cet écran ne joint pas son serveur',
-    body: 'Il réessaie tout seul toutes les trente secondes.',
+  pairing: {
+    codeLabel: 'Code d’association',
+    steps: 'Pour le personnel : dans le studio, ouvrez le poste de cet écran (Réglages, Postes) et saisissez-y ce code.',
+    renew: 'Quand le code expire, un nouveau code s’affiche ici tout seul.',
+    unreachable: 'Impossible de joindre le serveur pour obtenir un code d’association. Nouvel essai en cours.',
+  },
+  waiting: {
+    body: 'Cet écran est associé et attend sa première version publiée depuis le studio.',
+  },
+  menu: {
+    title: 'Choisissez un récit',
+    panels_one: '{{count}} écran',
+    panels_other: '{{count}} écrans',
+  },
+  story: {
+    previous: 'Précédent',
+    next: 'Suivant',
+    allStories: 'Tous les récits',
+    position: '{{current}} sur {{total}}',
+  },
+  settings: {
+    language: 'Langue',
+    largeText: 'Texte plus grand',
+    highContrast: 'Contraste élevé',
+    reducedMotion: 'Moins de mouvement',
+  },
+  idle: {
+    title: 'Vous êtes toujours là ?',
+    body_one: 'Cet écran revient au début dans {{count}} seconde.',
+    body_other: 'Cet écran revient au début dans {{count}} secondes.',
+    stay: 'Je suis toujours là',
   },
 };

@@ -1,0 +1,29 @@
+import type { TFunction } from 'i18next';
+import type { PlayableRelease } from '../sync/playable-release';
+import { storyImage, storyTitle } from './release-content';
+
+/** Every story of the release as a large card, titled in the visitor's language. */
+export function StoryMenu({ t, release, locale, onOpen }: { t: TFunction; release: PlayableRelease; locale: string; onOpen: (storyId: number) => void }) {
+  const { manifest } = release;
+  return (
+    <main className="menu">
+      <h1>{t('menu.title')}</h1>
+      <ul className="story-cards">
+        {manifest.stories.map((story) => {
+          const title = storyTitle(story, locale, manifest);
+          const imageId = storyImage(story, manifest);
+          const image = imageId ? release.imageUrls.get(imageId) : undefined;
+          return (
+            <li key={story.id}>
+              <button type="button" className="story-card" onClick={() => onOpen(story.id)}>
+                {image ? <img src={image} alt="" /> : <span className="story-card-blank" aria-hidden="true" />}
+                <span className="story-card-title" lang={title.locale}>{title.text}</span>
+                <span className="story-card-count">{t('menu.panels', { count: story.panels.length })}</span>
+              </button>
+            </li>
+          );
+        })}
+      </ul>
+    </main>
+  );
+}

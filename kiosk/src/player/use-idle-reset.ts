@@ -1,0 +1,48 @@
+import { useCallback, useEffect, useRef, useState } from 'react';
+
+const ACTIVITY = ['pointerdown', 'keydown', 'wheel'] as const;
+
+/**
+ * Watches for a visitor who walked away: after `idleMs` without a touch it shows a warning that
+ * counts down `warningMs`, then resets. Any touch, the warning's own button included, starts over.
+ * Seconds are counted by ticks, so the countdown reads the same on a slow screen.
+ */
+export function useIdleReset({ enabled, idleMs, warningMs, onReset }: { enabled: boolean; idleMs: number; warningMs: number; onReset: () => void }) {
+  const [secondsLeft, setSecondsLeft] = useState<number | null>(null);
+  const timer = useRef<ReturnType<typeof setTimeout>>(undefined);
+  const ticker = useRef<ReturnType<typeof setInterval>>(undefined);
+  const resetRef = useRef(onReset);
+  resetRef.current = onReset;
+
+  const stop = useCallback(() => {
+    clearTimeout(timer.current);
+    clearInterval(ticker.current);
+    setSecondsLeft(null);
+  }, []);
+
+  const restart = useCallback(() => {
+    stop();
+    timer.current = setTimeout(() => {
+      let left = Math.ceil(warningMs / 1000);
+      setSecondsLeft(left);
+      ticker.current = setInterval(() => {
+        left -= 1;
+        if (left > 0) return setSecondsLeft(left);
+        stop();
+        resetRef.current();
+      }, 1000);
+    }, idleMs);
+  }, [idleMs, warningMs, stop]);
+
+  useEffect(() => {
+    if (!enabled) return stop();
+    restart();
+    for (const type of ACTIVITY) window.addEventListener(type, restart, { capture: true, passive: true });
+    return () => {
+      for (const type of ACTIVITY) window.removeEventListener(type, restart, { capture: true });
+      stop();
+    };
+  }, [enabled, restart, stop]);
+
+  return { secondsLeft, stillHere: restart };
+}
