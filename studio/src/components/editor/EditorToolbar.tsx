@@ -9,6 +9,7 @@ import { useEditorState, type Editor } from '@tiptap/react';
 import { PANEL_HEADING_LEVELS, WIDGET_TYPES, widgetRegistry, widgetsIn, type WidgetType } from '@mantlepiece/shared';
 import type { ReactElement } from 'react';
 import { useTranslation } from 'react-i18next';
+import { insertionChain } from './insert-point';
 import { useLiveValueLabel } from './live-value-labels';
 import { numericOutputs, unitOfOutput } from './widget-form';
 
@@ -43,7 +44,7 @@ export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Edi
     ].filter(Boolean) as string[],
   };
   const chain = () => editor.chain().focus();
-  const insertWidget = (type: WidgetType) => chain().insertWidget({ widgetType: type, params: { ...widgetRegistry[type].defaults } }).run();
+  const insertWidget = (type: WidgetType) => insertionChain(editor).insertWidget({ widgetType: type, params: { ...widgetRegistry[type].defaults } }).run();
   const locale = i18n.resolvedLanguage ?? 'en';
   const number = new Intl.NumberFormat(locale, { maximumSignificantDigits: 4 });
 
@@ -90,7 +91,7 @@ export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Edi
                 <MenuItem
                   key={`${widget.widgetId}.${output}`}
                   secondaryContent={number.format(value)}
-                  onClick={() => chain().insertLiveValue({ widgetId: widget.widgetId, output, format: { digits: 3, unit: unitOfOutput(output) } }).run()}
+                  onClick={() => insertionChain(editor).insertLiveValue({ widgetId: widget.widgetId, output, format: { digits: 3, unit: unitOfOutput(output) } }).run()}
                 >
                   {outputLabel(output)}
                   {state.widgets.length > 1 ? ` · ${t(`widgetTypes.${widget.widgetType as WidgetType}`)} ${index + 1}` : ''}

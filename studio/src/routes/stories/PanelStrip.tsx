@@ -1,5 +1,5 @@
 import { useState, type DragEvent, type KeyboardEvent } from 'react';
-import { shorthands, Button, makeStyles, mergeClasses, Text, tokens, Tooltip } from '@fluentui/react-components';
+import { Button, makeStyles, mergeClasses, shorthands, tokens, Tooltip } from '@fluentui/react-components';
 import { AddRegular, ArrowLeftRegular, ArrowRightRegular, DeleteRegular } from '@fluentui/react-icons';
 import { panelText, type PanelView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
@@ -110,7 +110,7 @@ export function PanelStrip({ panels, selectedId, onSelect, onReorder, onAdd, onD
             </div>
           ) : null}
           <Button className={styles.add} icon={<AddRegular />} onClick={onAdd} disabled={adding}>{t('story.addPanel')}</Button>
-          <Text id="panel-strip-help" hidden>{t('story.reorderHelp')}</Text>
+          <span id="panel-strip-help" hidden>{t('story.reorderHelp')}</span>
         </>
       )}
     </div>

@@ -9,6 +9,7 @@ import { useRememberSavedPanel, useUpdatePanelBudget } from '../../api/stories';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { ConflictDialog } from '../../components/editor/ConflictDialog';
 import { EditorToolbar } from '../../components/editor/EditorToolbar';
+import { insertionChain } from '../../components/editor/insert-point';
 import { LinkDialog } from '../../components/editor/LinkDialog';
 import { useResolveMedia } from '../../components/editor/media-resolver';
 import { MediaPickerDialog } from '../../components/editor/MediaPickerDialog';
@@ -104,7 +105,7 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
 
   const pick = (asset: MediaView) => {
     setDialog(null);
-    editor.chain().focus().insertPanelImage({ mediaId: String(asset.id) }).run();
+    insertionChain(editor).insertPanelImage({ mediaId: String(asset.id) }).run();
   };
   const takeTheirs = () => {
     const theirs = autosave.takeTheirs();
