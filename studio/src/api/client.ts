@@ -47,6 +47,8 @@ interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   body?: unknown;
   query?: Query;
+  /** A media type other than JSON, for a download (the audit trail as CSV). */
+  accept?: string;
 }
 
 function url(path: string, query?: Query): string {
@@ -59,7 +61,7 @@ function url(path: string, query?: Query): string {
 }
 
 async function send(path: string, options: RequestOptions): Promise<Response> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { Accept: options.accept ?? 'application/json' };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
   if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
   try {
@@ -113,13 +115,25 @@ export function refreshSession(): Promise<SessionView | null> {
 // A 401 from these means the credentials themselves were refused; refreshing cannot help.
 const CREDENTIAL_PATHS = new Set(['/auth/login', '/auth/refresh', '/auth/logout']);
 
-/** Calls the API; a 401 on a signed-in call gets one retry after a refresh. */
-export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {
+/** Sends a request; a 401 on a signed-in call gets one retry after a refresh. */
+async function sendSignedIn(path: string, options: RequestOptions): Promise<Response> {
   const signedIn = accessToken !== null;
   const response = await send(path, options);
   if (response.status === 401 && signedIn && !CREDENTIAL_PATHS.has(path)) {
     const session = await refreshSession();
-    if (session) return read<T>(await send(path, options));
+    if (session) return send(path, options);
   }
-  return read<T>(response);
+  return response;
+}
+
+/** Calls the API and reads its JSON answer. */
+export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  return read<T>(await sendSignedIn(path, options));
+}
+
+/** Calls the API for a file (`accept` names its type); a refusal still arrives as an ApiError. */
+export async function apiFile(path: string, options: RequestOptions & { accept: string }): Promise<Blob> {
+  const response = await sendSignedIn(path, options);
+  if (!response.ok) return read<never>(response);
+  return response.blob();
 }

@@ -23,6 +23,10 @@ const StoryPage = named(() => import('../routes/stories/story'), 'StoryPage');
 const MediaPage = named(() => import('../routes/media'), 'MediaPage');
 const MediaAssetPage = named(() => import('../routes/media/asset'), 'MediaAssetPage');
 const SettingsPage = named(() => import('../routes/settings'), 'SettingsPage');
+const ReviewsPage = named(() => import('../routes/reviews'), 'ReviewsPage');
+const RevisionPage = named(() => import('../routes/reviews/revision'), 'RevisionPage');
+const NotificationsPage = named(() => import('../routes/notifications'), 'NotificationsPage');
+const AuditPage = named(() => import('../routes/audit'), 'AuditPage');
 
 /** The pages of one area, behind that area's role check. */
 const inArea = (area: Area, element: ReactNode) => <RequireArea area={area}>{element}</RequireArea>;
@@ -69,6 +73,7 @@ export const router = createBrowserRouter([
         children: [
           { path: '/people', element: <PeoplePage /> },
           { path: '/dev/mail', element: <CapturedMailPage /> },
+          { path: '/audit', element: <AuditPage /> },
         ],
       },
       { path: '/widgets', element: <WidgetWorkbenchPage /> },
@@ -77,6 +82,9 @@ export const router = createBrowserRouter([
       { path: '/media', element: inArea('media', <MediaPage />) },
       { path: '/media/:id', element: inArea('media', <MediaAssetPage />) },
       { path: '/settings', element: inArea('settings', <SettingsPage />) },
+      { path: '/reviews', element: inArea('reviews', <ReviewsPage />) },
+      { path: '/reviews/:revisionId', element: inArea('reviews', <RevisionPage />) },
+      { path: '/notifications', element: <NotificationsPage /> },
       { path: '/:area', element: <PlannedArea /> },
       { path: '*', element: <NotFoundPage /> },
     ],

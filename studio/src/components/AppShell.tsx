@@ -6,6 +6,7 @@ import { header, sediment } from '../app/theme';
 import { AccountMenu } from './AccountMenu';
 import { AreaNav } from './AreaNav';
 import { LanguageMenu } from './LanguageMenu';
+import { NotificationBell } from './review/NotificationBell';
 import { Wordmark } from './Wordmark';
 
 const useStyles = makeStyles({
@@ -88,6 +89,7 @@ export function AppShell() {
           <Wordmark product="Studio" />
         </Link>
         <span className={styles.spacer} />
+        <NotificationBell className={styles.headerButton} />
         <LanguageMenu className={styles.headerButton} />
         <AccountMenu className={styles.headerButton} />
       </header>

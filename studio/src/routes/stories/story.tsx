@@ -11,6 +11,7 @@ import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
 import { LinkButton } from '../../components/links';
+import { StoryReview } from '../../components/review/StoryReview';
 import { canWriteStories } from './permissions';
 import { PanelStrip } from './PanelStrip';
 import { PanelWorkspace } from './PanelWorkspace';
@@ -75,6 +76,7 @@ export function StoryPage() {
   return (
     <>
       <StoryHeader story={story.data} readOnly={readOnly} />
+      <StoryReview story={story.data} />
       <div className={styles.strip}>
         <PanelStrip
           panels={panels}

@@ -1,8 +1,10 @@
 import { authoringEn } from './authoring.en';
+import { reviewEn } from './review.en';
 
 /** English UI strings: the reference every other language must match key for key. */
 export const en = {
   ...authoringEn,
+  ...reviewEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',

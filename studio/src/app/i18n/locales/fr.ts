@@ -1,9 +1,11 @@
 import { authoringFr } from './authoring.fr';
+import { reviewFr } from './review.fr';
 import type { Messages } from './en';
 
 /** Chaînes de l’interface en français. */
 export const fr: Messages = {
   ...authoringFr,
+  ...reviewFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',

@@ -1,0 +1,66 @@
+import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Page } from '@mantlepiece/shared';
+import { api } from './client';
+
+export const NOTIFICATION_KINDS = ['revision_submitted', 'verdict', 'comment_reply'] as const;
+export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
+
+export interface NotificationView {
+  id: number;
+  kind: NotificationKind;
+  title: string;
+  body: string;
+  /** A studio path, such as /reviews/12. */
+  link: string;
+  readAt: string | null;
+  createdAt: string;
+}
+
+export type NotificationPage = Page<NotificationView> & { unread: number };
+
+export type NotificationPreferences = Record<NotificationKind, { email: boolean }>;
+
+const notificationsKey = ['notifications'] as const;
+const preferencesKey = ['notification-preferences'] as const;
+
+/** How often the header's bell asks for the unread count: often enough to notice a verdict while working. */
+const UNREAD_POLL_MS = 30_000;
+
+export function useNotifications(params: { page: number; pageSize: number; unread?: boolean }) {
+  return useQuery({
+    queryKey: [...notificationsKey, params],
+    queryFn: () => api<NotificationPage>('/notifications', { query: { ...params, unread: params.unread || undefined } }),
+    placeholderData: keepPreviousData,
+  });
+}
+
+/** The unread count alone: one row is the smallest page the list gives. */
+export function useUnreadCount() {
+  return useQuery({
+    queryKey: [...notificationsKey, 'unread'],
+    queryFn: () => api<NotificationPage>('/notifications', { query: { page: 1, pageSize: 1, unread: true } }),
+    select: (page) => page.unread,
+    refetchInterval: UNREAD_POLL_MS,
+    staleTime: 0,
+  });
+}
+
+export function useMarkNotificationsRead() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (which: { ids: number[] } | { all: true }) => api<void>('/notifications/read', { method: 'POST', body: which }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: notificationsKey }),
+  });
+}
+
+export function useNotificationPreferences() {
+  return useQuery({ queryKey: preferencesKey, queryFn: () => api<NotificationPreferences>('/notifications/preferences') });
+}
+
+export function useUpdateNotificationPreferences() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (preferences: NotificationPreferences) => api<NotificationPreferences>('/notifications/preferences', { method: 'PUT', body: preferences }),
+    onSuccess: (preferences) => queryClient.setQueryData(preferencesKey, preferences),
+  });
+}

@@ -1,0 +1,141 @@
+import { useRef, useState } from 'react';
+import { Badge, type BadgeProps, makeStyles, Text, tokens } from '@fluentui/react-components';
+import type { PanelDiff, PanelDocJSON } from '@mantlepiece/shared';
+import { PanelFrame, PanelView, type ResolveMedia } from '@mantlepiece/shared/react';
+import { useTranslation } from 'react-i18next';
+import type { CommentRange, CommentView } from '../../api/comments';
+import type { RevisionPanel } from '../../api/revisions';
+import { CommentThreads } from './CommentThreads';
+import { useReviewStyles } from './review-styles';
+import { selectionRangeIn } from './text-selection';
+import { TextDiff } from './TextDiff';
+import { WidgetChanges } from './WidgetChanges';
+
+/** Each drawing's width: two side by side fit the studio's main column on a desk screen. */
+const DRAWING_WIDTH = 520;
+
+const useStyles = makeStyles({
+  top: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
+  sides: { display: 'grid', gridTemplateColumns: `repeat(auto-fit, minmax(${DRAWING_WIDTH / 2}px, ${DRAWING_WIDTH}px))`, gap: tokens.spacingHorizontalL },
+  side: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXS, minWidth: 0 },
+  stage: { padding: tokens.spacingHorizontalXS, backgroundColor: '#23282d', borderRadius: tokens.borderRadiusMedium, width: 'fit-content', maxWidth: '100%' },
+  selectable: { cursor: 'text' },
+  absent: {
+    display: 'flex',
+    alignItems: 'center',
+    justifyContent: 'center',
+    aspectRatio: '16 / 9',
+    maxWidth: `${DRAWING_WIDTH}px`,
+    border: `1px dashed ${tokens.colorNeutralStroke1}`,
+    borderRadius: tokens.borderRadiusMedium,
+    color: tokens.colorNeutralForeground3,
+    padding: tokens.spacingHorizontalM,
+    textAlign: 'center',
+  },
+  details: { display: 'grid', gridTemplateColumns: 'minmax(0, 3fr) minmax(0, 2fr)', gap: tokens.spacingHorizontalXL, '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
+  block: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXS },
+});
+
+const STATUS_COLOURS: Record<PanelDiff['status'], BadgeProps['color']> = { added: 'success', removed: 'danger', changed: 'warning', unchanged: 'subtle' };
+
+function Drawing({ doc, locale, resolveMedia }: { doc: PanelDocJSON; locale: string; resolveMedia: ResolveMedia }) {
+  const styles = useStyles();
+  return (
+    <div className={styles.stage}>
+      <PanelFrame layout="landscape" maxWidth={DRAWING_WIDTH}>
+        <PanelView doc={doc} locale={locale} layout="landscape" resolveMedia={resolveMedia} links="text" reducedMotion />
+      </PanelFrame>
+    </div>
+  );
+}
+
+export interface PanelComparisonProps {
+  diff: PanelDiff;
+  panel: RevisionPanel | undefined;
+  basePanel: RevisionPanel | undefined;
+  /** Whether there is a last approved revision at all. */
+  hasBase: boolean;
+  locale: string;
+  resolveMedia: ResolveMedia;
+  revisionId: number;
+  comments: CommentView[];
+  canComment: boolean;
+}
+
+/**
+ * One panel of the revision beside the same panel in the last approved one, both drawn by the
+ * kiosk's renderer; then the word-level text changes, the widget settings that moved, and the
+ * panel's comments. Selecting words in this revision's drawing anchors a new comment to them.
+ */
+export function PanelComparison({ diff, panel, basePanel, hasBase, locale, resolveMedia, revisionId, comments, canComment }: PanelComparisonProps) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const shared = useReviewStyles();
+  const drawing = useRef<HTMLDivElement>(null);
+  const [range, setRange] = useState<CommentRange | null>(null);
+  const number = diff.numberAfter ?? diff.numberBefore ?? 0;
+  const title = t('story.panelNumber', { number });
+  const headingId = `panel-${diff.panelId}-heading`;
+
+  const captureSelection = () => {
+    if (!drawing.current) return;
+    const selected = selectionRangeIn(drawing.current, window.getSelection());
+    if (selected) setRange(selected);
+  };
+  const baseDoc = basePanel?.docs[locale];
+  const doc = panel?.docs[locale];
+
+  return (
+    <section id={`panel-${diff.panelId}`} className={shared.card} aria-labelledby={headingId} data-panel-id={diff.panelId} data-panel-status={diff.status}>
+      <div className={styles.top}>
+        <Text as="h2" id={headingId} size={500} weight="semibold" className={shared.heading}>{title}</Text>
+        <Badge appearance="tint" color={STATUS_COLOURS[diff.status]}>{t(`diff.status.${diff.status}`)}</Badge>
+        {diff.numberBefore !== undefined && diff.numberAfter !== undefined && diff.numberBefore !== diff.numberAfter ? (
+          <Text className={shared.muted}>{t('diff.moved', { number: diff.numberBefore })}</Text>
+        ) : null}
+      </div>
+
+      <div className={styles.sides}>
+        <div className={styles.side}>
+          <Text weight="semibold">{t('diff.lastApproved')}</Text>
+          {baseDoc ? <Drawing doc={baseDoc} locale={locale} resolveMedia={resolveMedia} /> : <div className={styles.absent}>{hasBase ? t('diff.notInBase') : t('diff.noBase')}</div>}
+        </div>
+        <div className={styles.side}>
+          <Text weight="semibold">{t('diff.thisRevision')}</Text>
+          {doc ? (
+            // The drawing stays a drawing for everyone; selecting its words is a shortcut that the comment box repeats in words.
+            <div ref={drawing} className={styles.selectable} onMouseUp={captureSelection} onKeyUp={captureSelection} data-selectable-panel>
+              <Drawing doc={doc} locale={locale} resolveMedia={resolveMedia} />
+            </div>
+          ) : (
+            <div className={styles.absent}>{t('diff.removedHere')}</div>
+          )}
+          {doc && canComment ? <Text size={200} className={shared.muted}>{t('comments.selectHint')}</Text> : null}
+        </div>
+      </div>
+
+      <div className={styles.details}>
+        <div className={styles.block}>
+          <Text as="h3" weight="semibold" className={shared.heading}>{t('diff.textChanges')}</Text>
+          {diff.text.length > 0 ? <TextDiff pieces={diff.text} locale={locale} /> : <Text className={shared.muted}>{t('diff.noText')}</Text>}
+          {diff.media.added.length + diff.media.removed.length > 0 ? (
+            <Text className={shared.muted}>{t('diff.media', { added: diff.media.added.length, removed: diff.media.removed.length })}</Text>
+          ) : null}
+          <Text as="h3" weight="semibold" className={shared.heading}>{t('diff.widgetChanges')}</Text>
+          <WidgetChanges changes={diff.widgets} />
+        </div>
+        <div className={styles.block}>
+          <Text as="h3" weight="semibold" className={shared.heading}>{t('comments.title')}</Text>
+          <CommentThreads
+            revisionId={revisionId}
+            comments={comments}
+            panelId={diff.panelId}
+            canComment={canComment && doc !== undefined}
+            range={range}
+            onClearRange={() => setRange(null)}
+          />
+        </div>
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,15 @@
+import { Badge, type BadgeProps } from '@fluentui/react-components';
+import { useTranslation } from 'react-i18next';
+import type { RevisionState } from '../../api/revisions';
+
+const COLOURS: Record<RevisionState, BadgeProps['color']> = {
+  open: 'warning',
+  approved: 'success',
+  changes_requested: 'danger',
+  superseded: 'subtle',
+};
+
+export function RevisionStateBadge({ state }: { state: RevisionState }) {
+  const { t } = useTranslation();
+  return <Badge appearance="tint" color={COLOURS[state]}>{t(`revisionStates.${state}`)}</Badge>;
+}

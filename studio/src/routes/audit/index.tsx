@@ -1,0 +1,146 @@
+import { useEffect, useRef, useState } from 'react';
+import { Button, Field, Input, makeStyles, Select, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
+import { ArrowDownloadRegular, HistoryRegular } from '@fluentui/react-icons';
+import { useTranslation } from 'react-i18next';
+import { useSearchParams } from 'react-router-dom';
+import { useAuditLog, useDownloadAuditCsv, type AuditEntryView } from '../../api/audit';
+import { useUsers } from '../../api/users';
+import { EmptyState } from '../../components/EmptyState';
+import { FormAlert } from '../../components/forms/FormAlert';
+import { describeError } from '../../components/forms/describe-error';
+import { useDateFormat } from '../../components/formatting';
+import { ListStates } from '../../components/lists/ListStates';
+import { withSearchChanges } from '../../components/lists/list-search';
+import { Pager } from '../../components/lists/Pager';
+import { PageHeader } from '../../components/PageHeader';
+import { useDebounced } from '../people/use-debounced';
+import { auditFileName, readAuditFilter, readAuditParams } from './list-params';
+
+const useStyles = makeStyles({
+  toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
+  table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
+  code: { fontFamily: tokens.fontFamilyMonospace, fontSize: tokens.fontSizeBase200 },
+  details: { fontFamily: tokens.fontFamilyMonospace, fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground2, overflowWrap: 'anywhere', maxWidth: '28rem' },
+  muted: { color: tokens.colorNeutralForeground3 },
+});
+
+/** People to filter by: the first hundred by name is every account a venue's staff has. */
+const ACTOR_CHOICES = { page: 1, pageSize: 100, sort: 'name' } as const;
+
+const detailsText = (details: unknown) => (details === null || details === undefined ? '' : typeof details === 'string' ? details : JSON.stringify(details));
+
+/** Saves a file the API sent, under a name of ours. */
+function saveFile(blob: Blob, name: string) {
+  const url = URL.createObjectURL(blob);
+  const anchor = document.createElement('a');
+  anchor.href = url;
+  anchor.download = name;
+  anchor.click();
+  // The click has started the download; the URL can go once the browser has taken it.
+  setTimeout(() => URL.revokeObjectURL(url), 0);
+}
+
+function AuditTable({ entries, busy }: { entries: AuditEntryView[]; busy: boolean }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const formatDate = useDateFormat();
+  return (
+    <Table aria-label={t('audit.title')} aria-busy={busy} className={styles.table} size="small">
+      <TableHeader>
+        <TableRow>
+          <TableHeaderCell>{t('audit.columns.at')}</TableHeaderCell>
+          <TableHeaderCell>{t('audit.columns.actor')}</TableHeaderCell>
+          <TableHeaderCell>{t('audit.columns.action')}</TableHeaderCell>
+          <TableHeaderCell>{t('audit.columns.target')}</TableHeaderCell>
+          <TableHeaderCell>{t('audit.columns.details')}</TableHeaderCell>
+        </TableRow>
+      </TableHeader>
+      <TableBody>
+        {entries.map((entry) => (
+          <TableRow key={entry.id}>
+            <TableCell>{formatDate(entry.at)}</TableCell>
+            <TableCell>{entry.actor?.name ?? <span className={styles.muted}>{t('audit.system')}</span>}</TableCell>
+            <TableCell><span className={styles.code}>{entry.action}</span></TableCell>
+            <TableCell>{entry.target}</TableCell>
+            <TableCell><span className={styles.details}>{detailsText(entry.details)}</span></TableCell>
+          </TableRow>
+        ))}
+      </TableBody>
+    </Table>
+  );
+}
+
+export function AuditPage() {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const [search, setSearch] = useSearchParams();
+  const filter = readAuditFilter(search);
+  const log = useAuditLog(readAuditParams(search));
+  const people = useUsers(ACTOR_CHOICES);
+  const download = useDownloadAuditCsv();
+  const [action, setAction] = useState(filter.action ?? '');
+  const settledAction = useDebounced(action.trim(), 300);
+  const urlAction = useRef(filter.action ?? '');
+  urlAction.current = filter.action ?? '';
+
+  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
+  useEffect(() => {
+    if (settledAction !== urlAction.current) setSearch((current) => withSearchChanges(current, { action: settledAction }), { replace: true });
+  }, [settledAction, setSearch]);
+
+  const filtered = Boolean(filter.actorId || filter.action || filter.from || filter.to);
+  const today = new Date().toISOString().slice(0, 10);
+  const downloadButton = (
+    <Button
+      icon={<ArrowDownloadRegular />}
+      disabled={download.isPending}
+      onClick={() => download.mutate(filter, { onSuccess: (blob) => saveFile(blob, auditFileName(filter, today)) })}
+    >
+      {download.isPending ? t('audit.downloading') : t('audit.download')}
+    </Button>
+  );
+
+  return (
+    <>
+      <PageHeader title={t('audit.title')} intro={t('audit.intro')} actions={downloadButton} />
+      {download.isError ? <FormAlert intent="error">{describeError(t, download.error)}</FormAlert> : null}
+      <div className={styles.toolbar} role="search">
+        <Field label={t('audit.columns.actor')}>
+          <Select value={filter.actorId ? String(filter.actorId) : ''} onChange={(_event, data) => change({ actorId: data.value || undefined })}>
+            <option value="">{t('audit.anyone')}</option>
+            {people.data?.items.map((person) => <option key={person.id} value={String(person.id)}>{person.name}</option>)}
+          </Select>
+        </Field>
+        <Field label={t('audit.columns.action')} hint={t('audit.actionHint')}>
+          <Input value={action} onChange={(_event, data) => setAction(data.value)} />
+        </Field>
+        <Field label={t('audit.from')}>
+          <Input type="date" value={filter.from ?? ''} max={filter.to} onChange={(_event, data) => change({ from: data.value || undefined })} />
+        </Field>
+        <Field label={t('audit.to')}>
+          <Input type="date" value={filter.to ?? ''} min={filter.from} onChange={(_event, data) => change({ to: data.value || undefined })} />
+        </Field>
+      </div>
+      <ListStates
+        query={log}
+        loadError={t('audit.loadError')}
+        empty={
+          <EmptyState
+            icon={<HistoryRegular />}
+            title={filtered ? t('audit.noMatchTitle') : t('audit.emptyTitle')}
+            actions={filtered ? <Button onClick={() => { setAction(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button> : null}
+          >
+            {filtered ? t('audit.noMatchBody') : t('audit.emptyBody')}
+          </EmptyState>
+        }
+      >
+        {(page) => (
+          <>
+            <AuditTable entries={page.items} busy={log.isFetching} />
+            <Pager page={page} label={t('audit.pagination')} onPage={(next) => change({ page: String(next) })} />
+          </>
+        )}
+      </ListStates>
+    </>
+  );
+}

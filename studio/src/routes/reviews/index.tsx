@@ -1,0 +1,77 @@
+import { useEffect, useRef, useState } from 'react';
+import { Button, Field, makeStyles, SearchBox, tokens } from '@fluentui/react-components';
+import { ClipboardTaskListLtrRegular } from '@fluentui/react-icons';
+import { useTranslation } from 'react-i18next';
+import { useSearchParams } from 'react-router-dom';
+import { useReviewQueue } from '../../api/reviews';
+import { useCurrentUser } from '../../api/session';
+import { EmptyState } from '../../components/EmptyState';
+import { ListStates } from '../../components/lists/ListStates';
+import { withSearchChanges } from '../../components/lists/list-search';
+import { Pager } from '../../components/lists/Pager';
+import { PageHeader } from '../../components/PageHeader';
+import { useDebounced } from '../people/use-debounced';
+import { DEFAULT_QUEUE_SORT, readQueueParams } from './list-params';
+import { ReviewQueueTable } from './ReviewQueueTable';
+
+const useStyles = makeStyles({
+  toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
+  search: { minWidth: '18rem' },
+});
+
+/** The revisions waiting for a verdict; a curator sees the ones they submitted. */
+export function ReviewsPage() {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const me = useCurrentUser();
+  const [search, setSearch] = useSearchParams();
+  const params = readQueueParams(search);
+  const queue = useReviewQueue(params);
+  const [query, setQuery] = useState(params.q ?? '');
+  const settledQuery = useDebounced(query.trim(), 300);
+  const urlQuery = useRef(params.q ?? '');
+  urlQuery.current = params.q ?? '';
+  const reviewer = me.roles.includes('educator') || me.roles.includes('admin');
+
+  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
+  useEffect(() => {
+    if (settledQuery !== urlQuery.current) setSearch((current) => withSearchChanges(current, { q: settledQuery }), { replace: true });
+  }, [settledQuery, setSearch]);
+
+  return (
+    <>
+      <PageHeader title={t('reviews.title')} intro={reviewer ? t('reviews.intro') : t('reviews.introCurator')} />
+      <div className={styles.toolbar} role="search">
+        <Field label={t('reviews.search')} className={styles.search}>
+          <SearchBox value={query} onChange={(_event, data) => setQuery(data.value)} />
+        </Field>
+      </div>
+      <ListStates
+        query={queue}
+        loadError={t('reviews.loadError')}
+        empty={
+          params.q ? (
+            <EmptyState
+              icon={<ClipboardTaskListLtrRegular />}
+              title={t('reviews.noMatchTitle')}
+              actions={<Button onClick={() => { setQuery(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button>}
+            >
+              {t('reviews.noMatchBody')}
+            </EmptyState>
+          ) : (
+            <EmptyState icon={<ClipboardTaskListLtrRegular />} title={t('reviews.emptyTitle')}>
+              {reviewer ? t('reviews.emptyBody') : t('reviews.emptyBodyCurator')}
+            </EmptyState>
+          )
+        }
+      >
+        {(page) => (
+          <>
+            <ReviewQueueTable items={page.items} sort={params.sort ?? DEFAULT_QUEUE_SORT} onSort={(sort) => change({ sort })} busy={queue.isFetching} />
+            <Pager page={page} label={t('reviews.pagination')} onPage={(next) => change({ page: String(next) })} />
+          </>
+        )}
+      </ListStates>
+    </>
+  );
+}

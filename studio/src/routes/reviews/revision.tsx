@@ -1,0 +1,158 @@
+import { useMemo } from 'react';
+import { Badge, Link, makeStyles, Spinner, Text, tokens } from '@fluentui/react-components';
+import { mediaIdsIn } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+import { useParams } from 'react-router-dom';
+import { ApiError } from '../../api/client';
+import { useMediaAssets } from '../../api/media';
+import { useRevision, useRevisionComparison, type RevisionView } from '../../api/revisions';
+import { useCurrentUser } from '../../api/session';
+import { useStory } from '../../api/stories';
+import { EmptyState } from '../../components/EmptyState';
+import { useResolveMedia } from '../../components/editor/media-resolver';
+import { describeError } from '../../components/forms/describe-error';
+import { useDateFormat } from '../../components/formatting';
+import { LinkButton, TextLink } from '../../components/links';
+import { PageHeader } from '../../components/PageHeader';
+import { CommentThreads } from '../../components/review/CommentThreads';
+import { PanelComparison } from '../../components/review/PanelComparison';
+import { groupPreflight } from '../../components/review/preflight-groups';
+import { PreflightList } from '../../components/review/PreflightList';
+import { useReviewStyles } from '../../components/review/review-styles';
+import { RevisionStateBadge } from '../../components/review/RevisionStateBadge';
+import { VerdictForm } from '../../components/review/VerdictForm';
+import { VerdictHistory } from '../../components/review/VerdictHistory';
+import { StoryStateBadge } from '../stories/StoryStateBadge';
+
+const useStyles = makeStyles({
+  facts: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
+  top: { display: 'grid', gridTemplateColumns: 'minmax(0, 3fr) minmax(20rem, 2fr)', gap: tokens.spacingHorizontalL, alignItems: 'start', marginBottom: tokens.spacingVerticalL, '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
+  column: { display: 'flex', flexDirection: 'column', gap: tokens.spacingHorizontalL },
+  panels: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL, marginBottom: tokens.spacingVerticalL },
+});
+
+/** Shows a content hash by its first 12 hex digits, as people read commit hashes; the whole one on hover and to screen readers. */
+const SHORT_HASH = 12;
+
+/** Every asset either side shows, loaded into the cache before the drawings ask for them. */
+function useRevisionMedia(revisions: (RevisionView | null | undefined)[]): boolean {
+  const ids = useMemo(
+    () => [...new Set(revisions.flatMap((revision) => revision?.snapshot.flatMap((panel) => Object.values(panel.docs).flatMap(mediaIdsIn)) ?? []))].map(Number).filter(Number.isInteger),
+    [revisions],
+  );
+  return useMediaAssets(ids).every((result) => !result.isPending);
+}
+
+export function RevisionPage() {
+  const { t } = useTranslation();
+  const { revisionId } = useParams();
+  const id = Number(revisionId);
+  const revision = useRevision(id);
+  const comparison = useRevisionComparison(id);
+
+  if (revision.isPending) return <Spinner label={t('common.loading')} />;
+  if (revision.isError) {
+    const missing = revision.error instanceof ApiError && revision.error.status === 404;
+    return (
+      <EmptyState title={missing ? t('revision.notFound') : t('revision.loadError')} actions={<LinkButton to="/reviews">{t('revision.backToReviews')}</LinkButton>}>
+        {missing ? t('revision.notFoundBody') : describeError(t, revision.error)}
+      </EmptyState>
+    );
+  }
+  return <RevisionReview revision={revision.data} comparison={comparison} />;
+}
+
+function RevisionReview({ revision, comparison }: { revision: RevisionView; comparison: ReturnType<typeof useRevisionComparison> }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const shared = useReviewStyles();
+  const formatDate = useDateFormat();
+  const me = useCurrentUser();
+  const story = useStory(revision.storyId);
+  const locale = story.data?.sourceLocale ?? 'en';
+  const resolveMedia = useResolveMedia(locale);
+  const mediaReady = useRevisionMedia([revision, comparison.data?.base]);
+  const { blockers } = groupPreflight(revision.preflight);
+  const isEducator = me.roles.includes('educator');
+  const canComment = me.roles.includes('educator') || me.roles.includes('curator');
+  const numberOf = (panelId: number) => revision.snapshot.findIndex((panel) => panel.panelId === panelId) + 1;
+
+  const refreshStory = () => void story.refetch();
+
+  return (
+    <>
+      <PageHeader
+        title={t('revision.title', { story: revision.storyTitle, number: revision.number })}
+        intro={
+          <span className={styles.facts}>
+            <RevisionStateBadge state={revision.state} />
+            {story.data ? <span>{t('revision.storyIs')} <StoryStateBadge state={story.data.state} /></span> : null}
+            <span>
+              {t('revision.hash')}{' '}
+              <code className={shared.hash} title={revision.hash} aria-label={revision.hash}>{revision.hash.slice(0, SHORT_HASH)}</code>
+            </span>
+            <span>{t('revision.submitted', { name: revision.submittedBy.name, date: formatDate(revision.submittedAt) })}</span>
+          </span>
+        }
+        actions={<LinkButton to={`/stories/${revision.storyId}`}>{t('revision.openStory')}</LinkButton>}
+      />
+
+      <div className={styles.top}>
+        <section className={shared.card} aria-labelledby="preflight-heading">
+          <Text as="h2" id="preflight-heading" size={500} weight="semibold" className={shared.heading}>{t('preflight.title')}</Text>
+          <PreflightList
+            entries={revision.preflight}
+            panelLink={(panelId) => (numberOf(panelId) > 0 ? <Link href={`#panel-${panelId}`}>{t('story.panelNumber', { number: numberOf(panelId) })}</Link> : null)}
+          />
+        </section>
+        <div className={styles.column}>
+          {isEducator && revision.state === 'open' ? (
+            <section className={shared.card}>
+              <VerdictForm revisionId={revision.id} storyId={revision.storyId} blockers={blockers} onSettled={refreshStory} />
+            </section>
+          ) : null}
+          <section className={shared.card} aria-labelledby="verdicts-heading">
+            <Text as="h2" id="verdicts-heading" size={500} weight="semibold" className={shared.heading}>{t('verdict.history')}</Text>
+            <VerdictHistory reviews={revision.reviews} />
+          </section>
+        </div>
+      </div>
+
+      {comparison.isPending || !mediaReady || story.isPending ? (
+        <Spinner label={t('common.loading')} />
+      ) : comparison.isError ? (
+        <EmptyState title={t('revision.compareError')} headingLevel={2}>{describeError(t, comparison.error)}</EmptyState>
+      ) : (
+        <div className={styles.panels}>
+          {comparison.data.base ? (
+            <Text>
+              {t('revision.comparedWith')}{' '}
+              <TextLink to={`/reviews/${comparison.data.base.id}`}>{t('revision.number', { number: comparison.data.base.number })}</TextLink>
+            </Text>
+          ) : (
+            <Badge appearance="outline" color="informative">{t('revision.firstReview')}</Badge>
+          )}
+          {comparison.data.diff.map((diff) => (
+            <PanelComparison
+              key={diff.panelId}
+              diff={diff}
+              panel={revision.snapshot.find((panel) => panel.panelId === diff.panelId)}
+              basePanel={comparison.data.base?.snapshot.find((panel) => panel.panelId === diff.panelId)}
+              hasBase={comparison.data.base !== null}
+              locale={locale}
+              resolveMedia={resolveMedia}
+              revisionId={revision.id}
+              comments={revision.comments}
+              canComment={canComment}
+            />
+          ))}
+        </div>
+      )}
+
+      <section className={shared.card} aria-labelledby="general-comments-heading">
+        <Text as="h2" id="general-comments-heading" size={500} weight="semibold" className={shared.heading}>{t('comments.onRevision')}</Text>
+        <CommentThreads revisionId={revision.id} comments={revision.comments} panelId={null} canComment={canComment} />
+      </section>
+    </>
+  );
+}
