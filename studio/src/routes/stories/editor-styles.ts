@@ -19,7 +19,8 @@ export const useEditorStyles = makeStyles({
     '& .ProseMirror a': { color: tokens.colorBrandForegroundLink },
     '& .mp-widget-node, & .mp-panel-image-node': { margin: `${tokens.spacingVerticalM} 0`, padding: tokens.spacingHorizontalS, borderRadius: tokens.borderRadiusMedium, border: `1px solid ${tokens.colorNeutralStroke2}`, cursor: 'pointer' },
     '& .mp-widget-node[data-selected], & .mp-panel-image-node[data-selected]': { outline: `3px solid ${tokens.colorBrandStroke1}`, outlineOffset: '2px' },
-    '& .mp-panel-image-node img': { maxHeight: '18rem' },
+    // The figure's own inline size suits a wall screen; in the editor an image only needs to be recognised.
+    '& .mp-panel-image-node img': { maxHeight: '16rem !important', maxWidth: '100%', width: 'auto !important', height: 'auto !important' },
     '& .mp-live-value-node': {
       padding: `0 ${tokens.spacingHorizontalXXS}`,
       borderRadius: tokens.borderRadiusSmall,
