@@ -8,3 +8,5 @@ export * from './release/index.js';
 export * from './review/index.js';
 export * from './preflight/index.js';
 export * from './translation/index.js';
+export * from './fleet/index.js';
+export * from './insights/index.js';

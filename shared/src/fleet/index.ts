@@ -1,0 +1,2 @@
+export * from './kiosk-state.js';
+export type * from './views.js';

@@ -1,0 +1,26 @@
+import type { KioskView } from '../release/views.js';
+import type { KioskState } from './kiosk-state.js';
+
+/** One kiosk on the Fleet page: what it reported, and what that means now. */
+export interface FleetKioskView extends KioskView {
+  state: KioskState;
+  /** Whether it plays the release that is Live for its gallery (false when either is missing). */
+  playsLiveRelease: boolean;
+}
+
+export interface HeartbeatView {
+  id: number;
+  receivedAt: string;
+  releaseId: number | null;
+  appVersion: string;
+  uptimeS: number;
+  storageUsedBytes: number | null;
+  lastError: string | null;
+}
+
+/** The thresholds the server judges states by, so the studio can explain them. */
+export interface FleetThresholdsView {
+  heartbeatIntervalS: number;
+  staleAfterS: number;
+  offlineAfterS: number;
+}

@@ -1,0 +1,3 @@
+export * from './median.js';
+export * from './figures.js';
+export type * from './views.js';
