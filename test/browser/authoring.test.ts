@@ -1,4 +1,4 @@
-import type { Browser, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newContext, signIn } from '../support/browser.js';
@@ -14,8 +14,8 @@ const altText = 'An orange square standing in for a photograph of a basalt slab'
 /** Waits for a value the page reaches by itself (an autosave after a pause, an upload), without a fixed sleep. */
 const eventually = <T>(read: () => Promise<T> | T) => expect.poll(read, { timeout: 15_000, interval: 100 });
 
-const saveStatus = () => page.locator('[data-save-status]').getAttribute('data-save-status');
-const editorText = () => page.getByRole('textbox', { name: 'Panel text' });
+const saveStatus = (on = page) => on.locator('[data-save-status]').getAttribute('data-save-status');
+const editorText = (on = page) => on.getByRole('textbox', { name: 'Panel text' });
 const field = (label: string) => page.getByRole('textbox', { name: label });
 
 /** A small PNG drawn here, so the upload needs no file from anywhere. */
@@ -88,5 +88,83 @@ describe('a curator writes a panel', () => {
     expect(await field('Kinetic (sliding) friction coefficient μk').inputValue()).toBe('0.4');
     await eventually(() => page.locator('.mp-panel-image-node img').getAttribute('alt')).toBe(altText);
     expect(await saveStatus()).toBe('saved');
+  });
+});
+
+/** The cursor after the panel's first sentence (a click on the widget would move its slope instead). */
+async function endOfFirstLine(on: Page) {
+  await editorText(on).locator('p').first().click();
+  await on.keyboard.press('End');
+}
+
+describe('two curators on one panel', () => {
+  let otherContext: BrowserContext;
+  let other: Page;
+
+  beforeAll(async () => {
+    otherContext = await newContext(browser);
+    other = await otherContext.newPage();
+    await signIn(other, 'curator@demo.test');
+    await other.goto(page.url());
+    await editorText(other).waitFor();
+  });
+  afterAll(() => otherContext?.close());
+
+  it('shows the other version line by line on a stale save, and keeps mine on request', async () => {
+    await endOfFirstLine(page);
+    await page.keyboard.type(' Theirs.');
+    await eventually(() => saveStatus()).toBe('saved');
+
+    await endOfFirstLine(other);
+    await other.keyboard.type(' Mine.');
+    const conflict = other.getByRole('alertdialog', { name: 'This panel changed while you were writing' });
+    await conflict.waitFor();
+    expect(await conflict.getByRole('list', { name: 'Differences, line by line' }).textContent()).toContain(`Theirs:${typed} Theirs.`);
+    expect(await conflict.getByRole('list', { name: 'Differences, line by line' }).textContent()).toContain(`Yours:${typed} Mine.`);
+    await conflict.getByRole('button', { name: 'Keep mine' }).click();
+    await eventually(() => saveStatus(other)).toBe('saved');
+
+    await page.reload();
+    await eventually(() => editorText().textContent()).toContain(`${typed} Mine.`);
+    expect(await editorText().textContent()).not.toContain('Theirs.');
+  });
+
+  it('keeps what was typed while the server could not be reached, and saves it after a reload', async () => {
+    await otherContext.setOffline(true);
+    await endOfFirstLine(other);
+    await other.keyboard.type(' Typed offline.');
+    await eventually(() => saveStatus(other)).toBe('error');
+    await otherContext.setOffline(false);
+    await other.reload();
+    await editorText(other).waitFor();
+    await eventually(() => other.getByText('Unsaved changes from this tab were restored').count()).toBe(1);
+    expect(await editorText(other).textContent()).toContain('Mine. Typed offline.');
+    await eventually(() => saveStatus(other)).toBe('saved');
+  });
+});
+
+describe('the panel strip', () => {
+  const cards = () => page.getByRole('list', { name: 'Panels of this story' }).getByRole('button');
+
+  it('adds a panel and moves it first with Alt+←, which survives a reload', async () => {
+    await page.getByRole('button', { name: 'Add panel' }).click();
+    await eventually(() => cards().count()).toBe(2);
+    await editorText().click();
+    await page.keyboard.type('A second screen.');
+    await eventually(() => saveStatus()).toBe('saved');
+    await cards().nth(1).focus();
+    await page.keyboard.press('Alt+ArrowLeft');
+    await eventually(() => cards().first().textContent()).toBe('Panel 1A second screen.');
+    await page.reload();
+    await eventually(() => cards().first().textContent()).toBe('Panel 1A second screen.');
+  });
+
+  it('deletes a panel only after confirmation', async () => {
+    await cards().first().click();
+    await page.getByRole('button', { name: 'Delete panel' }).click();
+    const confirm = page.getByRole('alertdialog', { name: 'Delete panel 1?' });
+    await confirm.getByRole('button', { name: 'Delete panel' }).click();
+    await eventually(() => cards().count()).toBe(1);
+    expect(await cards().first().textContent()).toContain(typed);
   });
 });
