@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { ClockModule } from './clock/clock.module.js';
+import { CommentsModule } from './comments/comments.module.js';
 import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { DevMailModule } from './dev-mail/dev-mail.module.js';
@@ -9,7 +10,10 @@ import { ExhibitsModule } from './exhibits/exhibits.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { MediaModule } from './media/media.module.js';
+import { NotificationsModule } from './notifications/notifications.module.js';
 import { PanelsModule } from './panels/panels.module.js';
+import { ReviewsModule } from './reviews/reviews.module.js';
+import { RevisionsModule } from './revisions/revisions.module.js';
 import { StoriesModule } from './stories/stories.module.js';
 import { UsersModule } from './users/users.module.js';
 import { VenuesModule } from './venues/venues.module.js';
@@ -20,6 +24,7 @@ import { WidgetsModule } from './widgets/widgets.module.js';
     ConfigModule, ClockModule, DatabaseModule, AuditModule, MailModule, UsersModule, AuthModule,
     DevMailModule, HealthModule, VenuesModule, WidgetsModule,
     ExhibitsModule, StoriesModule, PanelsModule, MediaModule,
+    NotificationsModule, CommentsModule, RevisionsModule, ReviewsModule,
   ],
 })
 export class AppModule {}

@@ -16,10 +16,10 @@ async function asCurator<T>(path: string): Promise<T> {
 }
 
 describe.runIf(server)('the seeded demo stories on the running server', () => {
-  it('holds three short family drafts in the demo exhibit, every panel a valid document within its word budget', async () => {
+  it('holds three short family stories in the demo exhibit, approved by the demo educator, every panel a valid document within its word budget', async () => {
     const stories = await asCurator<Page<StoryView>>('/api/stories?sort=title');
     const demo = stories.items.filter((story) => story.exhibitName === DEMO_EXHIBIT.name);
-    expect(demo.map((story) => [story.audience, story.state])).toEqual([['family', 'draft'], ['family', 'draft'], ['family', 'draft']]);
+    expect(demo.map((story) => [story.audience, story.state])).toEqual([['family', 'approved'], ['family', 'approved'], ['family', 'approved']]);
     for (const summary of demo) {
       const story = await asCurator<StoryDetailView>(`/api/stories/${summary.id}`);
       expect(story.panels.length).toBeGreaterThanOrEqual(2);

@@ -6,6 +6,8 @@ export type Access = 'public' | 'signed-in' | readonly Role[];
 const STAFF = ROLES;
 const ADMIN = ['admin'] as const;
 const CURATOR = ['curator'] as const;
+const EDUCATOR = ['educator'] as const;
+const REVIEW_TALK = ['curator', 'educator'] as const;
 
 /**
  * The declared role matrix, `METHOD /path` as Express knows the route. The role-matrix suite walks
@@ -72,6 +74,20 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'POST /api/media': CURATOR,
   'PATCH /api/media/:id': CURATOR,
   'DELETE /api/media/:id': CURATOR,
+
+  'POST /api/stories/:id/submit': CURATOR,
+  'POST /api/stories/:id/retire': ['curator', 'admin'],
+  'GET /api/stories/:id/revisions': STAFF,
+  'GET /api/revisions/:id': STAFF,
+  'GET /api/revisions/:id/compare': STAFF,
+  'GET /api/reviews/queue': EDUCATOR,
+  'POST /api/revisions/:id/reviews': EDUCATOR,
+  'POST /api/revisions/:id/comments': REVIEW_TALK,
+  'PATCH /api/comments/:id': REVIEW_TALK,
+  'GET /api/notifications': 'signed-in',
+  'POST /api/notifications/read': 'signed-in',
+  'GET /api/notifications/preferences': 'signed-in',
+  'PUT /api/notifications/preferences': 'signed-in',
 };
 
 /**

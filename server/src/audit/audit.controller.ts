@@ -1,5 +1,6 @@
-import { Controller, Get, Query } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { Controller, Get, Query, Req, Res } from '@nestjs/common';
+import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Request, Response } from 'express';
 import { Roles } from '../auth/auth.decorators.js';
 import { AuditService } from './audit.service.js';
 import { ListAuditEventsQuery } from './dto/list-audit-events.query.js';
@@ -11,9 +12,13 @@ import { ListAuditEventsQuery } from './dto/list-audit-events.query.js';
 export class AuditController {
   constructor(private readonly audit: AuditService) {}
 
+  /** A page of JSON, or with `Accept: text/csv` every matching event as a file. */
   @Get()
   @Roles('admin')
-  list(@Query() query: ListAuditEventsQuery) {
-    return this.audit.list(query);
+  @ApiProduces('application/json', 'text/csv')
+  list(@Query() query: ListAuditEventsQuery, @Req() request: Request, @Res({ passthrough: true }) response: Response) {
+    if (request.accepts(['application/json', 'text/csv']) !== 'text/csv') return this.audit.list(query);
+    response.attachment('audit-trail.csv').type('text/csv; charset=utf-8');
+    return this.audit.exportCsv(query);
   }
 }

@@ -1,14 +1,32 @@
+import type { AuditEventView } from '@mantlepiece/shared';
 import type { AuditEvent } from './models/audit-event.model.js';
 
-export function toAuditEventView(event: AuditEvent) {
+export function toAuditEventView(event: AuditEvent): AuditEventView {
   return {
     id: Number(event.id),
+    at: event.createdAt.toISOString(),
+    actor: event.actor ? { id: event.actor.id, name: event.actor.name } : null,
     action: event.action,
-    actor: event.actor ? { id: event.actor.id, name: event.actor.name, email: event.actor.email } : null,
-    targetType: event.targetType,
-    targetId: event.targetId,
-    detail: event.detail,
-    clientAddress: event.clientAddress,
-    createdAt: event.createdAt.toISOString(),
+    target: event.targetType ? { type: event.targetType, id: event.targetId ?? '' } : null,
+    details: event.detail,
   };
+}
+
+const CSV_COLUMNS = ['id', 'at', 'actor_id', 'actor_name', 'action', 'target_type', 'target_id', 'details'] as const;
+
+/**
+ * A spreadsheet would run a cell that starts like a formula, so such text gets a leading
+ * apostrophe (OWASP's advice on CSV injection); numbers and dates never start that way.
+ */
+const defused = (text: string) => (/^[=+\-@\t\r]/.test(text) ? `'${text}` : text);
+
+/** RFC 4180: every field quoted, quotes doubled, CRLF between records. */
+const field = (value: string | number | null) => `"${defused(value === null ? '' : String(value)).replace(/"/g, '""')}"`;
+
+export function toAuditCsv(events: readonly AuditEventView[]): string {
+  const records = events.map((event) => [
+    event.id, event.at, event.actor?.id ?? null, event.actor?.name ?? null, event.action,
+    event.target?.type ?? null, event.target?.id ?? null, event.details ? JSON.stringify(event.details) : null,
+  ]);
+  return [CSV_COLUMNS, ...records].map((record) => record.map(field).join(',')).join('\r\n') + '\r\n';
 }

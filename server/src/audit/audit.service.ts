@@ -1,12 +1,14 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import type { Transaction, WhereOptions } from 'sequelize';
+import { Op, type FindOptions, type Transaction, type WhereOptions } from 'sequelize';
+import type { AuditEventView, Page } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
-import { PageQuery, pageWindow, toPage } from '../common/page.js';
+import { isDateOnly } from '../common/date-only.js';
+import { pageWindow, toPage } from '../common/page.js';
 import { User } from '../users/models/user.model.js';
 import { AuditEvent } from './models/audit-event.model.js';
 import type { ListAuditEventsQuery } from './dto/list-audit-events.query.js';
-import { toAuditEventView } from './audit.presenter.js';
+import { toAuditCsv, toAuditEventView } from './audit.presenter.js';
 
 /** Names of the things we record. */
 export type AuditAction =
@@ -20,7 +22,11 @@ export type AuditAction =
   | 'user.roles-changed'
   | 'user.locales-changed'
   | 'user.activated'
-  | 'user.deactivated';
+  | 'user.deactivated'
+  | 'revision.submitted'
+  | 'revision.approved'
+  | 'revision.changes-requested'
+  | 'story.retired';
 
 export interface AuditEntry {
   actorId: number | null;
@@ -54,14 +60,35 @@ export class AuditService {
     );
   }
 
-  async list(query: ListAuditEventsQuery) {
-    const where: WhereOptions<AuditEvent> = query.action ? { action: query.action } : {};
-    const { rows, count } = await this.events.findAndCountAll({
-      where,
-      include: [{ model: User, attributes: ['id', 'name', 'email'] }],
-      order: [['createdAt', 'DESC'], ['id', 'DESC']],
-      ...pageWindow(query),
-    });
-    return toPage(rows.map(toAuditEventView), count, query as PageQuery);
+  async list(query: ListAuditEventsQuery): Promise<Page<AuditEventView>> {
+    const { rows, count } = await this.events.findAndCountAll({ ...filtered(query), ...pageWindow(query) });
+    return toPage(rows.map(toAuditEventView), count, query);
   }
+
+  /** Every event the filter matches, oldest first as a trail is read, up to CSV_MAX_ROWS. */
+  async exportCsv(query: ListAuditEventsQuery): Promise<string> {
+    const rows = await this.events.findAll({ ...filtered(query), order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: CSV_MAX_ROWS });
+    return toAuditCsv(rows.map(toAuditEventView));
+  }
+}
+
+/** A bound on one download; a longer trail is exported a date range at a time. */
+export const CSV_MAX_ROWS = 100_000;
+
+const DAY_MS = 86_400_000;
+
+/** `to` as a date covers that whole day (UTC); as a moment it is the moment itself. */
+const endOf = (to: string) => (isDateOnly(to) ? new Date(new Date(`${to}T00:00:00Z`).getTime() + DAY_MS) : new Date(new Date(to).getTime() + 1));
+
+function filtered(query: ListAuditEventsQuery): FindOptions<AuditEvent> {
+  const conditions: WhereOptions<AuditEvent>[] = [];
+  if (query.action) conditions.push({ action: query.action });
+  if (query.actorId) conditions.push({ actorId: query.actorId });
+  if (query.from) conditions.push({ createdAt: { [Op.gte]: new Date(query.from) } });
+  if (query.to) conditions.push({ createdAt: { [Op.lt]: endOf(query.to) } });
+  return {
+    where: { [Op.and]: conditions },
+    include: [{ model: User, attributes: ['id', 'name'] }],
+    order: [['createdAt', 'DESC'], ['id', 'DESC']],
+  };
 }

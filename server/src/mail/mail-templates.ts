@@ -2,7 +2,9 @@ import { asUiLanguage, type UiLanguage } from '../common/ui-languages.js';
 
 export type MailContent =
   | { kind: 'invitation'; name: string; inviterName: string; link: string; expiresAt: Date }
-  | { kind: 'password-reset'; name: string; link: string; expiresAt: Date };
+  | { kind: 'password-reset'; name: string; link: string; expiresAt: Date }
+  /** An in-app notification sent on by mail: its words come already in the recipient's language. */
+  | { kind: 'notification'; name: string; subject: string; body: string; link: string };
 
 /** A message's words: the paragraphs before its link and after it. */
 interface MailWords {
@@ -39,6 +41,11 @@ const templates: Record<UiLanguage, Templates> = {
         `The link works once and expires on ${when(c.expiresAt, l)}. If you did not ask for this, ignore this message: your password stays as it is.`,
       ],
     }),
+    notification: (c) => ({
+      subject: c.subject,
+      before: [`Hello ${c.name},`, c.body, 'Open it in the studio:'],
+      after: ['You can turn off e-mails of this kind in your notification settings in the studio.'],
+    }),
   },
   fr: {
     invitation: (c, l) => ({
@@ -61,6 +68,11 @@ const templates: Record<UiLanguage, Templates> = {
       after: [
         `Le lien ne fonctionne qu’une fois et expire le ${when(c.expiresAt, l)}. Si vous n’êtes pas à l’origine de cette demande, ignorez ce message : votre mot de passe reste inchangé.`,
       ],
+    }),
+    notification: (c) => ({
+      subject: c.subject,
+      before: [`Bonjour ${c.name},`, c.body, 'Ouvrez-le dans le studio :'],
+      after: ['Vous pouvez désactiver les e-mails de ce type dans vos réglages de notification, dans le studio.'],
     }),
   },
 };

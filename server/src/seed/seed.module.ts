@@ -7,12 +7,14 @@ import { DatabaseModule } from '../database/database.module.js';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { MediaModule } from '../media/media.module.js';
 import { PanelsModule } from '../panels/panels.module.js';
+import { ReviewsModule } from '../reviews/reviews.module.js';
 import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
 import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { DemoReviews } from './demo-reviews.js';
 import { DemoStories } from './demo-stories.js';
 import { SeedService } from './seed.service.js';
 
@@ -21,8 +23,8 @@ import { SeedService } from './seed.service.js';
   imports: [
     ConfigModule, ClockModule, DatabaseModule, AuditModule,
     SequelizeModule.forFeature([User, Venue, Gallery, Station, Exhibit, Story]),
-    MediaModule, PanelsModule,
+    MediaModule, PanelsModule, ReviewsModule,
   ],
-  providers: [SeedService, PasswordHasher, DemoStories],
+  providers: [SeedService, PasswordHasher, DemoStories, DemoReviews],
 })
 export class SeedModule {}

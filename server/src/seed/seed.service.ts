@@ -7,6 +7,7 @@ import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { DemoReviews } from './demo-reviews.js';
 import { DemoStories } from './demo-stories.js';
 import { DEMO_ACCOUNTS, DEMO_GALLERY, DEMO_STATION, DEMO_VENUE } from './demo-scenario.js';
 
@@ -21,6 +22,7 @@ export class SeedService {
     private readonly hasher: PasswordHasher,
     private readonly audit: AuditService,
     private readonly demoStories: DemoStories,
+    private readonly demoReviews: DemoReviews,
   ) {}
 
   /** Seeds the demo on a database that has nobody in it yet; returns false when it left it alone. */
@@ -37,6 +39,7 @@ export class SeedService {
       );
     });
     await this.demoStories.seed('curator@demo.test');
+    await this.demoReviews.seed('curator@demo.test', 'educator@demo.test');
     return true;
   }
 

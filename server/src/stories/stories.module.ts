@@ -14,5 +14,6 @@ import { StoriesService } from './stories.service.js';
   imports: [SequelizeModule.forFeature([Story, Exhibit, Gallery, Venue, Panel, PanelDocument]), PanelsModule],
   controllers: [StoriesController],
   providers: [StoriesService],
+  exports: [StoriesService],
 })
 export class StoriesModule {}

@@ -57,6 +57,11 @@ export class StoriesService {
     return toPage(rows.map(toStoryView), count, query);
   }
 
+  /** One row of the Stories table, as review moves answer with it. */
+  async view(id: number): Promise<StoryView> {
+    return toStoryView(await this.find(id));
+  }
+
   async get(id: number): Promise<StoryDetailView> {
     const story = await this.find(id);
     return { ...toStoryView(story), panels: await this.panels.listForStory(story) };

@@ -93,6 +93,8 @@ export interface VenueView {
   slug: string;
   sourceLocale: string;
   targetLocales: string[];
+  /** How many different educators must approve a revision: 1 or 2. */
+  requiredApprovals: number;
   createdAt: string;
 }
 

@@ -1,6 +1,9 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsOptional, IsString, MaxLength } from 'class-validator';
+import { Type } from 'class-transformer';
+import { IsInt, IsISO8601, IsOptional, IsString, MaxLength, Min } from 'class-validator';
 import { PageQuery } from '../../common/page.js';
+
+const WHEN = 'A date (YYYY-MM-DD, UTC) or a moment (ISO 8601)';
 
 export class ListAuditEventsQuery extends PageQuery {
   @ApiPropertyOptional({ description: 'Only events of this action, e.g. user.invited' })
@@ -8,4 +11,21 @@ export class ListAuditEventsQuery extends PageQuery {
   @IsString()
   @MaxLength(64)
   action?: string;
+
+  @ApiPropertyOptional({ description: 'Only events done by this person' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  actorId?: number;
+
+  @ApiPropertyOptional({ description: `${WHEN}: events from then on` })
+  @IsOptional()
+  @IsISO8601({ strict: true }, { message: `Use ${WHEN.toLowerCase()}.` })
+  from?: string;
+
+  @ApiPropertyOptional({ description: `${WHEN}: events up to then; a date includes that whole day` })
+  @IsOptional()
+  @IsISO8601({ strict: true }, { message: `Use ${WHEN.toLowerCase()}.` })
+  to?: string;
 }

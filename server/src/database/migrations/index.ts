@@ -5,6 +5,7 @@ import * as auditEvents from './0003-audit-events.js';
 import * as venues from './0004-venues.js';
 import * as exhibitsStoriesPanels from './0100-exhibits-stories-panels.js';
 import * as media from './0101-media.js';
+import * as review from './0200-review.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -19,6 +20,7 @@ const modules: [string, MigrationModule][] = [
   ['0004-venues', venues],
   ['0100-exhibits-stories-panels', exhibitsStoriesPanels],
   ['0101-media', media],
+  ['0200-review', review],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

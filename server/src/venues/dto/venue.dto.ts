@@ -1,5 +1,5 @@
-import { ApiProperty, PartialType } from '@nestjs/swagger';
-import { ArrayMaxSize, ArrayUnique, IsArray, Matches, MaxLength } from 'class-validator';
+import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsIn, IsOptional, Matches, MaxLength } from 'class-validator';
 import { LocaleTagField, LocaleTagsField } from './locale-tag.js';
 import { SettingsNameField } from './settings-fields.js';
 
@@ -22,6 +22,11 @@ export class CreateVenueDto {
   @ArrayUnique({ message: 'Each target locale appears once.' })
   @LocaleTagsField()
   targetLocales: string[];
+
+  @ApiPropertyOptional({ enum: [1, 2], default: 1, description: 'How many different educators must approve a revision' })
+  @IsOptional()
+  @IsIn([1, 2], { message: 'A revision needs 1 or 2 approvals.' })
+  requiredApprovals?: number;
 }
 
 export class UpdateVenueDto extends PartialType(CreateVenueDto) {}

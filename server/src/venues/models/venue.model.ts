@@ -17,5 +17,9 @@ export class Venue extends Model {
   @Column(jsonColumn('targetLocales'))
   targetLocales: string[];
 
+  /** How many different educators must approve a revision before the story is Approved. */
+  @Column({ type: DataType.TINYINT.UNSIGNED, allowNull: false, defaultValue: 1 })
+  requiredApprovals: number;
+
   declare id: number;
 }

@@ -1,0 +1,128 @@
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import type { Transaction } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import type { CommentView } from '@mantlepiece/shared';
+import { Clock } from '../clock/clock.service.js';
+import { NotificationsService } from '../notifications/notifications.service.js';
+import { Revision } from '../revisions/models/revision.model.js';
+import { User } from '../users/models/user.model.js';
+import { toCommentView } from './comments.presenter.js';
+import type { CreateCommentDto } from './dto/comment.dto.js';
+import { Comment } from './models/comment.model.js';
+
+const people = [
+  { model: User, as: 'author', attributes: ['id', 'name'] },
+  { model: User, as: 'resolvedBy', attributes: ['id', 'name'] },
+];
+
+function invalid(path: string[], message: string): BadRequestException {
+  return new BadRequestException({ statusCode: 400, message: 'Some fields are not valid.', errors: [{ path, message }] });
+}
+
+/** The studio page of a revision, where its comments are read and answered. */
+export const reviewPagePath = (revisionId: number) => `/reviews/${revisionId}`;
+
+@Injectable()
+export class CommentsService {
+  constructor(
+    @InjectModel(Comment) private readonly comments: typeof Comment,
+    @InjectModel(Revision) private readonly revisions: typeof Revision,
+    @InjectModel(User) private readonly users: typeof User,
+    private readonly notifications: NotificationsService,
+    private readonly clock: Clock,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  /** Oldest first, so threads read in order. */
+  async listForRevision(revisionId: number, transaction?: Transaction): Promise<CommentView[]> {
+    const rows = await this.comments.findAll({ where: { revisionId }, include: people, order: [['createdAt', 'ASC'], ['id', 'ASC']], transaction });
+    return rows.map(toCommentView);
+  }
+
+  /** A reply sits on its parent's panel; its parent's author is told. */
+  async addComment(revisionId: number, author: User, dto: CreateCommentDto): Promise<CommentView> {
+    return this.sequelize.transaction(async (transaction) => {
+      const revision = await this.revisions.findByPk(revisionId, { transaction });
+      if (!revision) throw new NotFoundException('There is no such revision.');
+      const parent = dto.parentId ? await this.comments.findOne({ where: { id: dto.parentId, revisionId }, transaction }) : null;
+      if (dto.parentId && !parent) throw invalid(['parentId'], 'There is no such comment on this revision to reply to.');
+      const panelId = parent ? parent.panelId : (dto.panelId ?? null);
+      if (parent && dto.panelId != null && dto.panelId !== parent.panelId) throw invalid(['panelId'], 'A reply sits on the same panel as the comment it answers.');
+      if (panelId !== null && !revision.snapshot.panels.some((panel) => panel.id === panelId)) {
+        throw invalid(['panelId'], `Revision ${revision.number} has no panel ${panelId}.`);
+      }
+      const range = dto.range ?? null;
+      if (range && panelId === null) throw invalid(['range'], 'A text range needs the panel it is in.');
+      if (range && range.from > range.to) throw invalid(['range', 'to'], 'A range ends where it starts or after.');
+
+      const comment = await this.comments.create({
+        revisionId,
+        panelId,
+        rangeFrom: range?.from ?? null,
+        rangeTo: range?.to ?? null,
+        rangeQuote: range?.quote ?? null,
+        body: dto.body,
+        authorId: author.id,
+        parentId: parent?.id ?? null,
+        carriedFromRevisionId: null,
+      }, { transaction });
+      await this.notifyParentAuthor(parent, author, revision, dto.body, transaction);
+      return this.view(comment.id, transaction);
+    });
+  }
+
+  async setResolved(id: number, person: User, resolved: boolean): Promise<CommentView> {
+    return this.sequelize.transaction(async (transaction) => {
+      const comment = await this.comments.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!comment) throw new NotFoundException('There is no such comment.');
+      await comment.update(resolved ? { resolvedAt: this.clock.now(), resolvedById: person.id } : { resolvedAt: null, resolvedById: null }, { transaction });
+      return this.view(id, transaction);
+    });
+  }
+
+  /**
+   * Copies the unresolved comments of `from` onto its successor `to`, wherever their panel is still
+   * in the story (story-wide comments always), replies with the thread they belong to.
+   */
+  async carryOver(from: Revision, to: Revision, transaction: Transaction): Promise<void> {
+    const panels = new Set(to.snapshot.panels.map((panel) => panel.id));
+    const open = await this.comments.findAll({ where: { revisionId: from.id, resolvedAt: null }, order: [['id', 'ASC']], transaction });
+    const copies = new Map<number, number>();
+    for (const comment of open) {
+      if (comment.panelId !== null && !panels.has(comment.panelId)) continue;
+      const parentId = comment.parentId === null ? null : copies.get(comment.parentId);
+      if (parentId === undefined) continue;
+      const copy = await this.comments.create({
+        revisionId: to.id,
+        panelId: comment.panelId,
+        rangeFrom: comment.rangeFrom,
+        rangeTo: comment.rangeTo,
+        rangeQuote: comment.rangeQuote,
+        body: comment.body,
+        authorId: comment.authorId,
+        parentId,
+        carriedFromRevisionId: from.id,
+        createdAt: comment.createdAt,
+      }, { transaction });
+      copies.set(comment.id, copy.id);
+    }
+  }
+
+  private async notifyParentAuthor(parent: Comment | null, replier: User, revision: Revision, body: string, transaction: Transaction): Promise<void> {
+    if (!parent?.authorId || parent.authorId === replier.id) return;
+    const recipient = await this.users.findOne({ where: { id: parent.authorId, active: true }, transaction });
+    if (!recipient) return;
+    await this.notifications.notify(
+      [recipient],
+      { kind: 'comment_reply', storyTitle: revision.snapshot.story.title, number: revision.number, replierName: replier.name, body },
+      reviewPagePath(revision.id),
+      transaction,
+    );
+  }
+
+  private async view(id: number, transaction: Transaction): Promise<CommentView> {
+    const comment = await this.comments.findByPk(id, { include: people, transaction });
+    return toCommentView(comment!);
+  }
+}

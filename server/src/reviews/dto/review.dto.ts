@@ -1,0 +1,28 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { VERDICTS, type Verdict } from '@mantlepiece/shared';
+import { SearchField, SortField } from '../../common/list-query.js';
+import { PageQuery } from '../../common/page.js';
+
+export const QUEUE_SORT_KEYS = ['submittedAt', 'storyTitle', 'blockers'] as const;
+
+export class RecordVerdictDto {
+  @ApiProperty({ enum: VERDICTS })
+  @IsIn(VERDICTS, { message: `The verdict is one of ${VERDICTS.join(', ')}.` })
+  verdict: Verdict;
+
+  @ApiPropertyOptional({ description: 'Required when asking for changes: what should change' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(5000)
+  note?: string | null;
+}
+
+/** The oldest submission first, by default: a queue. */
+export class ReviewQueueQuery extends PageQuery {
+  @SearchField()
+  q?: string;
+
+  @SortField(QUEUE_SORT_KEYS, 'submittedAt')
+  sort: string = 'submittedAt';
+}

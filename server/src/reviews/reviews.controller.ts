@@ -1,0 +1,25 @@
+import { Body, Controller, Get, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
+import { RecordVerdictDto, ReviewQueueQuery } from './dto/review.dto.js';
+import { ReviewsService } from './reviews.service.js';
+
+/** The educator's side of review: the queue and verdicts. */
+@ApiTags('reviews')
+@ApiBearerAuth()
+@Roles('educator')
+@Controller()
+export class ReviewsController {
+  constructor(private readonly reviews: ReviewsService) {}
+
+  @Get('reviews/queue')
+  queue(@Query() query: ReviewQueueQuery) {
+    return this.reviews.queue(query);
+  }
+
+  @Post('revisions/:id/reviews')
+  recordVerdict(@Param('id', ParseIntPipe) revisionId: number, @CurrentUser() educator: User, @Body() dto: RecordVerdictDto) {
+    return this.reviews.recordVerdict(revisionId, educator, dto);
+  }
+}

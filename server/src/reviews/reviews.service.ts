@@ -1,0 +1,220 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op, type Order, type OrderItem, type Transaction } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import {
+  decide, preflightBlockers, revisionHash, STORY_STATE_LABELS,
+  type Page, type ReviewQueueItem, type StoryState, type StoryView, type SubmitResult, type VerdictResult, type WorkflowRequest,
+} from '@mantlepiece/shared';
+import { AuditService } from '../audit/audit.service.js';
+import { Clock } from '../clock/clock.service.js';
+import { CommentsService, reviewPagePath } from '../comments/comments.service.js';
+import { likePattern } from '../common/list-query.js';
+import { pageWindow, toPage } from '../common/page.js';
+import { NotificationsService } from '../notifications/notifications.service.js';
+import { Revision } from '../revisions/models/revision.model.js';
+import { personRef } from '../revisions/revisions.presenter.js';
+import { APPROVALS_COLUMN, RevisionsService } from '../revisions/revisions.service.js';
+import { Story } from '../stories/models/story.model.js';
+import { StoriesService } from '../stories/stories.service.js';
+import { User } from '../users/models/user.model.js';
+import type { RecordVerdictDto, ReviewQueueQuery } from './dto/review.dto.js';
+import { Review } from './models/review.model.js';
+import { toReviewView } from './reviews.presenter.js';
+import { blockedByPreflight, workflowRefusal } from './workflow-refusal.js';
+
+/** The approvals a row's revision needs: its story's venue's setting, else the first venue's, else one. */
+const REQUIRED_APPROVALS_COLUMN = Sequelize.literal(
+  'COALESCE((SELECT `v`.`required_approvals` FROM `exhibits` AS `e` JOIN `galleries` AS `g` ON `g`.`id` = `e`.`gallery_id` ' +
+    'JOIN `venues` AS `v` ON `v`.`id` = `g`.`venue_id` WHERE `e`.`id` = `story`.`exhibit_id`), ' +
+    '(SELECT `required_approvals` FROM `venues` ORDER BY `id` LIMIT 1), 1)',
+);
+
+const REVISION_STATE_WORDS = { open: 'open', approved: 'approved', changes_requested: 'closed with changes requested', superseded: 'superseded by a newer submission' } as const;
+
+@Injectable()
+export class ReviewsService {
+  constructor(
+    @InjectModel(Revision) private readonly revisionRows: typeof Revision,
+    @InjectModel(Review) private readonly reviews: typeof Review,
+    @InjectModel(Story) private readonly stories: typeof Story,
+    @InjectModel(User) private readonly users: typeof User,
+    private readonly revisions: RevisionsService,
+    private readonly storyViews: StoriesService,
+    private readonly comments: CommentsService,
+    private readonly notifications: NotificationsService,
+    private readonly audit: AuditService,
+    private readonly clock: Clock,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  /**
+   * Freezes the story as a new revision with its preflight, supersedes the open one, carries the
+   * unresolved comments forward and tells the educators. The draft stays editable.
+   */
+  async submitForReview(storyId: number, curator: User): Promise<SubmitResult> {
+    return this.sequelize.transaction(async (transaction) => {
+      const story = await this.lockStory(storyId, transaction);
+      const state = this.allow({ state: story.state, action: 'submit', actor: curator, revision: null });
+      const snapshot = await this.revisions.snapshotOf(story, transaction);
+      if (snapshot.panels.length === 0) throw new ConflictException('This story has no panels yet; add one before submitting it for review.');
+      const preflight = await this.revisions.preflightOf(snapshot, story, transaction);
+
+      const previous = await this.revisionRows.findOne({ where: { storyId }, order: [['number', 'DESC']], transaction });
+      if (previous?.state === 'open') await previous.update({ state: 'superseded' }, { transaction });
+      const revision = await this.revisionRows.create({
+        storyId,
+        number: (previous?.number ?? 0) + 1,
+        hash: await revisionHash(snapshot),
+        state: 'open',
+        snapshot,
+        preflight,
+        blockerCount: preflightBlockers(preflight).length,
+        warningCount: preflight.filter((entry) => entry.severity === 'warning' && !entry.passed).length,
+        submittedById: curator.id,
+        submittedAt: this.clock.now(),
+      }, { transaction });
+      if (previous) await this.comments.carryOver(previous, revision, transaction);
+      await story.update({ state }, { transaction });
+
+      await this.audit.record({
+        actorId: curator.id, action: 'revision.submitted', targetType: 'revision', targetId: revision.id,
+        detail: { storyId, number: revision.number, hash: revision.hash, blockers: revision.blockerCount, supersededRevisionId: previous?.state === 'superseded' ? previous.id : null },
+      }, transaction);
+      await this.notifications.notify(
+        await this.educatorsOtherThan(curator, transaction),
+        { kind: 'revision_submitted', storyTitle: story.title, number: revision.number, submitterName: curator.name },
+        reviewPagePath(revision.id),
+        transaction,
+      );
+      return { revisionId: revision.id, number: revision.number, state, preflight };
+    });
+  }
+
+  /** An educator's verdict on the open revision; an approval counts only while preflight has no blockers. */
+  async recordVerdict(revisionId: number, educator: User, dto: RecordVerdictDto): Promise<VerdictResult> {
+    return this.sequelize.transaction(async (transaction) => {
+      const found = await this.revisionRows.findByPk(revisionId, { attributes: ['storyId'], transaction });
+      if (!found) throw new NotFoundException('There is no such revision.');
+      const story = await this.lockStory(found.storyId, transaction);
+      const revision = (await this.revisionRows.findByPk(revisionId, { transaction }))!;
+      if (revision.state !== 'open') {
+        throw new ConflictException(`Revision ${revision.number} is ${REVISION_STATE_WORDS[revision.state]}; only a story's open revision takes verdicts. This story is ${STORY_STATE_LABELS[story.state]}.`);
+      }
+      const approvals = await this.reviews.findAll({ where: { revisionId, verdict: 'approve' }, attributes: ['reviewerId'], transaction });
+      const venue = await this.revisions.venueOf(story, transaction);
+      const note = dto.note?.trim() || null;
+      const state = this.allow({
+        state: story.state,
+        action: dto.verdict,
+        actor: educator,
+        // A deleted account is nobody: 0 matches no person's id.
+        revision: { authorId: revision.submittedById ?? 0, approvals: approvals.map((approval) => ({ educatorId: approval.reviewerId ?? 0 })) },
+        requiredApprovals: venue?.requiredApprovals ?? 1,
+        note,
+      });
+      if (dto.verdict === 'approve') {
+        const blockers = preflightBlockers(revision.preflight);
+        if (blockers.length > 0) throw blockedByPreflight(blockers);
+      }
+
+      const review = await this.reviews.create({ revisionId, reviewerId: educator.id, verdict: dto.verdict, note, createdAt: this.clock.now() }, { transaction });
+      if (state !== story.state) {
+        await revision.update({ state: dto.verdict === 'approve' ? 'approved' : 'changes_requested' }, { transaction });
+        await story.update({ state }, { transaction });
+      }
+      await this.audit.record({
+        actorId: educator.id, action: dto.verdict === 'approve' ? 'revision.approved' : 'revision.changes-requested', targetType: 'revision', targetId: revisionId,
+        detail: { storyId: story.id, number: revision.number, storyState: state, ...(note ? { note } : {}) },
+      }, transaction);
+      await this.notifyAuthor(revision, story, educator, { verdict: dto.verdict, note, storyState: state }, transaction);
+      review.reviewer = educator;
+      return { review: toReviewView(review), storyState: state };
+    });
+  }
+
+  /** Takes an approved story out of future releases; bringing it back means a new review. */
+  async retireStory(storyId: number, actor: User): Promise<StoryView> {
+    await this.sequelize.transaction(async (transaction) => {
+      const story = await this.lockStory(storyId, transaction);
+      const state = this.allow({ state: story.state, action: 'retire', actor, revision: null });
+      await story.update({ state }, { transaction });
+      await this.audit.record({ actorId: actor.id, action: 'story.retired', targetType: 'story', targetId: storyId }, transaction);
+    });
+    return this.storyViews.view(storyId);
+  }
+
+  /** Open revisions waiting for verdicts, searched by story title, paged by the database. */
+  async queue(query: ReviewQueueQuery): Promise<Page<ReviewQueueItem>> {
+    const { rows, count } = await this.revisionRows.findAndCountAll({
+      attributes: { exclude: ['snapshot', 'preflight'], include: [[APPROVALS_COLUMN, 'approvals'], [REQUIRED_APPROVALS_COLUMN, 'requiredApprovals']] },
+      include: [{ model: Story, attributes: ['id', 'title', 'exhibitId'] }, { model: User, attributes: ['id', 'name'] }],
+      where: { state: 'open', ...(query.q ? { '$story.title$': { [Op.like]: likePattern(query.q) } } : {}) },
+      order: queueOrder(query.sort),
+      ...pageWindow(query),
+    });
+    return toPage(rows.map(toQueueItem), count, query);
+  }
+
+  /** Runs the shared workflow rule; a refusal becomes the contract's status code. */
+  private allow(request: WorkflowRequest): StoryState {
+    const decision = decide(request);
+    if (!decision.ok) throw workflowRefusal(decision.reason, decision.message);
+    return decision.next;
+  }
+
+  private async lockStory(id: number, transaction: Transaction): Promise<Story> {
+    const story = await this.stories.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!story) throw new NotFoundException('There is no such story.');
+    return story;
+  }
+
+  /** Mantlepiece runs one venue per install, so the venue's educators are every active educator. */
+  private educatorsOtherThan(person: User, transaction: Transaction): Promise<User[]> {
+    return this.users.findAll({
+      where: {
+        active: true,
+        id: { [Op.ne]: person.id },
+        [Op.and]: [Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('roles'), JSON.stringify('educator')), 1)],
+      },
+      transaction,
+    });
+  }
+
+  private async notifyAuthor(
+    revision: Revision, story: Story, reviewer: User,
+    verdict: { verdict: RecordVerdictDto['verdict']; note: string | null; storyState: StoryState },
+    transaction: Transaction,
+  ): Promise<void> {
+    const author = revision.submittedById ? await this.users.findOne({ where: { id: revision.submittedById, active: true }, transaction }) : null;
+    if (!author) return;
+    await this.notifications.notify(
+      [author],
+      { kind: 'verdict', storyTitle: story.title, number: revision.number, reviewerName: reviewer.name, ...verdict },
+      reviewPagePath(revision.id),
+      transaction,
+    );
+  }
+}
+
+function queueOrder(sort: string): Order {
+  const descending = sort.startsWith('-');
+  const direction = descending ? 'DESC' : 'ASC';
+  const key = descending ? sort.slice(1) : sort;
+  const first: OrderItem = key === 'storyTitle' ? [Story, 'title', direction] : [key === 'blockers' ? 'blockerCount' : 'submittedAt', direction];
+  return [first, ['id', 'ASC']];
+}
+
+/** `revision` as read by `queue`, with its story, submitter and count columns. */
+const toQueueItem = (revision: Revision): ReviewQueueItem => ({
+  revisionId: revision.id,
+  storyId: revision.storyId,
+  storyTitle: revision.story!.title,
+  number: revision.number,
+  submittedAt: revision.submittedAt.toISOString(),
+  submittedBy: personRef(revision.submittedBy),
+  blockers: revision.blockerCount,
+  warnings: revision.warningCount,
+  approvals: Number(revision.get('approvals') ?? 0),
+  requiredApprovals: Number(revision.get('requiredApprovals') ?? 1),
+});

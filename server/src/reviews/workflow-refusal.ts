@@ -1,0 +1,22 @@
+import { BadRequestException, ConflictException, ForbiddenException, HttpException, HttpStatus, UnprocessableEntityException } from '@nestjs/common';
+import type { PreflightEntry, WorkflowRefusal } from '@mantlepiece/shared';
+
+/** A refusal of the shared `decide` as the answer the review contract gives for it. */
+export function workflowRefusal(reason: WorkflowRefusal, message: string): HttpException {
+  if (reason === 'forbidden' || reason === 'self_approval') return new ForbiddenException(message);
+  if (reason === 'note_required') return new BadRequestException({ statusCode: HttpStatus.BAD_REQUEST, message, errors: [{ path: ['note'], message }] });
+  return new ConflictException(message);
+}
+
+/** An approval refused while preflight blockers stand: each blocker located by its check and panel. */
+export function blockedByPreflight(blockers: readonly PreflightEntry[]): UnprocessableEntityException {
+  const count = blockers.length === 1 ? 'a preflight blocker' : `${blockers.length} preflight blockers`;
+  return new UnprocessableEntityException({
+    statusCode: HttpStatus.UNPROCESSABLE_ENTITY,
+    message: `This revision cannot be approved while it has ${count}; ask for changes instead.`,
+    errors: blockers.map((blocker) => ({
+      path: ['preflight', blocker.check, ...(blocker.panelId === undefined ? [] : [blocker.panelId])],
+      message: blocker.message,
+    })),
+  });
+}

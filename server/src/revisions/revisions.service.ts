@@ -1,0 +1,136 @@
+import { Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op, type FindOptions, type Transaction } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import {
+  buildRevisionSnapshot, diffRevisions, runPreflight,
+  type PreflightEntry, type PreflightMedia, type RevisionComparison, type RevisionSnapshot, type RevisionSummary, type RevisionView,
+} from '@mantlepiece/shared';
+import { Clock } from '../clock/clock.service.js';
+import { CommentsService } from '../comments/comments.service.js';
+import { dateOnlyOf } from '../common/date-only.js';
+import { Exhibit } from '../exhibits/models/exhibit.model.js';
+import { MediaAltText } from '../media/models/media-alt-text.model.js';
+import { MediaAsset } from '../media/models/media-asset.model.js';
+import { licenceOf } from '../media/media.presenter.js';
+import { PanelDocument } from '../panels/models/panel-document.model.js';
+import { Panel } from '../panels/models/panel.model.js';
+import { Review } from '../reviews/models/review.model.js';
+import { toReviewView } from '../reviews/reviews.presenter.js';
+import type { Story } from '../stories/models/story.model.js';
+import { User } from '../users/models/user.model.js';
+import { Gallery } from '../venues/models/gallery.model.js';
+import { Venue } from '../venues/models/venue.model.js';
+import { Revision } from './models/revision.model.js';
+import { toRevisionSummary, toRevisionView } from './revisions.presenter.js';
+
+/** Approvals recorded on the row's revision, as a column of a Revision query. */
+export const APPROVALS_COLUMN = Sequelize.literal(
+  "(SELECT COUNT(*) FROM `reviews` WHERE `reviews`.`revision_id` = `Revision`.`id` AND `reviews`.`verdict` = 'approve')",
+);
+
+const MEDIA_ID = /^[1-9]\d{0,9}$/;
+
+const withSubmitter: FindOptions<Revision> = { include: [{ model: User, attributes: ['id', 'name'] }] };
+
+@Injectable()
+export class RevisionsService {
+  constructor(
+    @InjectModel(Revision) private readonly revisions: typeof Revision,
+    @InjectModel(Review) private readonly reviews: typeof Review,
+    @InjectModel(Panel) private readonly panels: typeof Panel,
+    @InjectModel(MediaAsset) private readonly media: typeof MediaAsset,
+    @InjectModel(Exhibit) private readonly exhibits: typeof Exhibit,
+    @InjectModel(Venue) private readonly venues: typeof Venue,
+    private readonly comments: CommentsService,
+    private readonly clock: Clock,
+  ) {}
+
+  /** Every panel of the story in every locale, frozen as the shared snapshot. */
+  async snapshotOf(story: Story, transaction: Transaction): Promise<RevisionSnapshot> {
+    const panels = await this.panels.findAll({ where: { storyId: story.id }, include: [PanelDocument], transaction });
+    return buildRevisionSnapshot({
+      id: story.id,
+      title: story.title,
+      audience: story.audience,
+      sourceLocale: story.sourceLocale,
+      panels: panels.map((panel) => ({
+        id: panel.id,
+        position: panel.position,
+        wordBudget: panel.wordBudget,
+        docs: Object.fromEntries((panel.documents ?? []).map((document) => [document.locale, document.doc])),
+      })),
+    });
+  }
+
+  /** The shared checks, given the assets' rights and alt texts, the exhibit's planned end and today's date. */
+  async preflightOf(snapshot: RevisionSnapshot, story: Story, transaction: Transaction): Promise<PreflightEntry[]> {
+    const ids = snapshot.mediaIds.filter((id) => MEDIA_ID.test(id)).map(Number);
+    const assets = await this.media.findAll({ where: { id: ids }, include: [MediaAltText], transaction });
+    const media: PreflightMedia[] = assets.map((asset) => ({
+      id: asset.id,
+      filename: asset.originalFilename,
+      credit: asset.credit,
+      licence: licenceOf(asset),
+      licenceExpiresOn: asset.licenceExpiresOn,
+      alt: Object.fromEntries((asset.altTexts ?? []).map((alt) => [alt.locale, alt.text])),
+    }));
+    const exhibit = story.exhibitId ? await this.exhibits.findByPk(story.exhibitId, { transaction }) : null;
+    return runPreflight({ snapshot, media, exhibitPlannedEnd: exhibit?.plannedEnd ?? null, today: dateOnlyOf(this.clock.now()) });
+  }
+
+  /** The story's venue: its exhibit's, or else the first venue set up (a story need not be in an exhibit yet). */
+  async venueOf(story: Story, transaction?: Transaction): Promise<Venue | null> {
+    if (story.exhibitId) {
+      const exhibit = await this.exhibits.findByPk(story.exhibitId, { include: [{ model: Gallery, include: [Venue] }], transaction });
+      if (exhibit?.gallery?.venue) return exhibit.gallery.venue;
+    }
+    return this.venues.findOne({ order: [['id', 'ASC']], transaction });
+  }
+
+  /** Newest first. */
+  async listForStory(storyId: number): Promise<RevisionSummary[]> {
+    const rows = await this.revisions.findAll({
+      ...withSubmitter,
+      attributes: { exclude: ['snapshot', 'preflight'], include: [[APPROVALS_COLUMN, 'approvals']] },
+      where: { storyId },
+      order: [['number', 'DESC']],
+    });
+    return rows.map(toRevisionSummary);
+  }
+
+  async get(id: number): Promise<RevisionView> {
+    return this.view(await this.find(id));
+  }
+
+  /** The revision against the story's last approved one before it; every panel is new when there is none. */
+  async compare(id: number): Promise<RevisionComparison> {
+    const revision = await this.find(id);
+    const base = await this.lastApprovedBefore(revision);
+    return { base: base && (await this.view(base)), diff: diffRevisions(base?.snapshot ?? null, revision.snapshot) };
+  }
+
+  private async view(revision: Revision): Promise<RevisionView> {
+    const [reviews, comments, previous] = await Promise.all([
+      this.reviews.findAll({ where: { revisionId: revision.id }, include: [{ model: User, attributes: ['id', 'name'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
+      this.comments.listForRevision(revision.id),
+      this.lastApprovedBefore(revision, ['id']),
+    ]);
+    return toRevisionView(revision, { reviews: reviews.map(toReviewView), comments, previousApprovedRevisionId: previous?.id ?? null });
+  }
+
+  private lastApprovedBefore(revision: Revision, attributes?: string[]): Promise<Revision | null> {
+    return this.revisions.findOne({
+      ...withSubmitter,
+      ...(attributes ? { attributes } : {}),
+      where: { storyId: revision.storyId, state: 'approved', number: { [Op.lt]: revision.number } },
+      order: [['number', 'DESC']],
+    });
+  }
+
+  private async find(id: number): Promise<Revision> {
+    const revision = await this.revisions.findByPk(id, withSubmitter);
+    if (!revision) throw new NotFoundException('There is no such revision.');
+    return revision;
+  }
+}

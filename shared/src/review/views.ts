@@ -1,0 +1,159 @@
+import type { Page } from '../auth/views.js';
+import type { StoryState } from '../authoring/views.js';
+import type { PanelDocJSON } from '../panel/panel-json.js';
+import type { PreflightEntry } from '../preflight/types.js';
+import type { PanelDiff } from './panel-diff.js';
+
+/** The views of issue 5 (review) as the API sends them; studio and server both code against these. */
+
+export interface PersonRef {
+  id: number;
+  name: string;
+}
+
+/**
+ * A revision is open while it waits for verdicts; a newer submission supersedes it. Approved and
+ * changes_requested are the verdicts that closed it.
+ */
+export const REVISION_STATES = ['open', 'approved', 'changes_requested', 'superseded'] as const;
+export type RevisionState = (typeof REVISION_STATES)[number];
+
+export const VERDICTS = ['approve', 'request_changes'] as const;
+export type Verdict = (typeof VERDICTS)[number];
+
+/** POST /api/stories/:id/submit answers this. */
+export interface SubmitResult {
+  revisionId: number;
+  number: number;
+  /** The story's state after the submission. */
+  state: StoryState;
+  preflight: PreflightEntry[];
+}
+
+export interface RevisionSummary {
+  id: number;
+  /** 1, 2, … per story. */
+  number: number;
+  /** SHA-256 of the snapshot's canonical JSON. */
+  hash: string;
+  state: RevisionState;
+  submittedAt: string;
+  submittedBy: PersonRef | null;
+  /** Approvals recorded on this revision. */
+  approvals: number;
+  /** Preflight blockers that failed. */
+  blockers: number;
+}
+
+/** One frozen panel of a revision. */
+export interface RevisionPanelView {
+  panelId: number;
+  position: number;
+  /** Tiptap JSON per BCP 47 locale, as submitted. */
+  docs: Record<string, PanelDocJSON>;
+  wordBudget: number;
+}
+
+export interface ReviewView {
+  id: number;
+  verdict: Verdict;
+  note: string | null;
+  reviewer: PersonRef | null;
+  createdAt: string;
+}
+
+/** Where a comment points inside its panel's source-locale text. */
+export interface CommentRange {
+  from: number;
+  to: number;
+  /** The text selected when the comment was written, so the anchor survives edits. */
+  quote: string;
+}
+
+export interface CommentView {
+  id: number;
+  revisionId: number;
+  /** Null for a comment on the story as a whole. */
+  panelId: number | null;
+  range: CommentRange | null;
+  body: string;
+  author: PersonRef | null;
+  parentId: number | null;
+  resolvedAt: string | null;
+  resolvedBy: PersonRef | null;
+  createdAt: string;
+  /** Set on an unresolved comment copied forward from an earlier revision of the story. */
+  carriedFromRevisionId: number | null;
+}
+
+export interface RevisionView {
+  id: number;
+  storyId: number;
+  storyTitle: string;
+  number: number;
+  hash: string;
+  state: RevisionState;
+  submittedAt: string;
+  submittedBy: PersonRef | null;
+  snapshot: RevisionPanelView[];
+  preflight: PreflightEntry[];
+  reviews: ReviewView[];
+  comments: CommentView[];
+  /** The story's last approved revision before this one, the base of /compare. */
+  previousApprovedRevisionId: number | null;
+}
+
+/** GET /api/revisions/:id/compare: the revision against the story's last approved one. */
+export interface RevisionComparison {
+  base: RevisionView | null;
+  diff: PanelDiff[];
+}
+
+export interface ReviewQueueItem {
+  revisionId: number;
+  storyId: number;
+  storyTitle: string;
+  number: number;
+  submittedAt: string;
+  submittedBy: PersonRef | null;
+  blockers: number;
+  warnings: number;
+  approvals: number;
+  requiredApprovals: number;
+}
+
+/** POST /api/revisions/:id/reviews answers this. */
+export interface VerdictResult {
+  review: ReviewView;
+  storyState: StoryState;
+}
+
+export const NOTIFICATION_KINDS = ['revision_submitted', 'verdict', 'comment_reply'] as const;
+export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
+
+export interface NotificationView {
+  id: number;
+  kind: NotificationKind;
+  title: string;
+  body: string;
+  /** A studio path, e.g. /reviews/12. */
+  link: string;
+  readAt: string | null;
+  createdAt: string;
+}
+
+/** GET /api/notifications: a page, and how many of the person's notifications are unread in all. */
+export type NotificationPage = Page<NotificationView> & { unread: number };
+
+/** Which kinds also come by e-mail; a kind left out is mailed. */
+export type NotificationPreferences = Record<NotificationKind, { email: boolean }>;
+
+/** One line of the audit trail. */
+export interface AuditEventView {
+  id: number;
+  at: string;
+  actor: PersonRef | null;
+  action: string;
+  target: { type: string; id: string } | null;
+  details: Record<string, unknown> | null;
+}
