@@ -15,6 +15,7 @@ import { PanelsModule } from './panels/panels.module.js';
 import { ReviewsModule } from './reviews/reviews.module.js';
 import { RevisionsModule } from './revisions/revisions.module.js';
 import { StoriesModule } from './stories/stories.module.js';
+import { TranslationsModule } from './translations/translations.module.js';
 import { UsersModule } from './users/users.module.js';
 import { VenuesModule } from './venues/venues.module.js';
 import { WidgetsModule } from './widgets/widgets.module.js';
@@ -23,7 +24,7 @@ import { WidgetsModule } from './widgets/widgets.module.js';
   imports: [
     ConfigModule, ClockModule, DatabaseModule, AuditModule, MailModule, UsersModule, AuthModule,
     DevMailModule, HealthModule, VenuesModule, WidgetsModule,
-    ExhibitsModule, StoriesModule, PanelsModule, MediaModule,
+    ExhibitsModule, StoriesModule, PanelsModule, MediaModule, TranslationsModule,
     NotificationsModule, CommentsModule, RevisionsModule, ReviewsModule,
   ],
 })

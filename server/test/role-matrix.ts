@@ -6,6 +6,9 @@ export type Access = 'public' | 'signed-in' | readonly Role[];
 const STAFF = ROLES;
 const ADMIN = ['admin'] as const;
 const CURATOR = ['curator'] as const;
+/** Translation routes: translators in their own locales (the service checks which), admins and curators reading all. */
+const TRANSLATION_READERS = ['admin', 'curator', 'translator'] as const;
+const TRANSLATOR = ['translator'] as const;
 const EDUCATOR = ['educator'] as const;
 const REVIEW_TALK = ['curator', 'educator'] as const;
 
@@ -74,6 +77,14 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'POST /api/media': CURATOR,
   'PATCH /api/media/:id': CURATOR,
   'DELETE /api/media/:id': CURATOR,
+
+  'GET /api/translations/stories': TRANSLATION_READERS,
+  'GET /api/stories/:id/translations': TRANSLATION_READERS,
+  'GET /api/stories/:id/translations/:locale/units': TRANSLATION_READERS,
+  'PUT /api/stories/:id/translations/:locale/units/:unitId': TRANSLATOR,
+  'GET /api/stories/:id/translations/:locale/preview': TRANSLATION_READERS,
+  'GET /api/stories/:id/translations/:locale/xliff': TRANSLATION_READERS,
+  'PUT /api/stories/:id/translations/:locale/xliff': TRANSLATOR,
 
   'POST /api/stories/:id/submit': CURATOR,
   'POST /api/stories/:id/retire': ['curator', 'admin'],

@@ -4,4 +4,5 @@ import { apiDatabaseUrl } from './api-database.js';
 // The app under test talks to the suites' own database, and its outbox worker is driven by hand.
 process.env.DATABASE_URL = apiDatabaseUrl();
 process.env.MAIL_POLL_INTERVAL_MS = '0';
+process.env.TRANSLATION_NOTICE_INTERVAL_MS = '0';
 process.env.JWT_SECRET ??= 'secret-for-the-server-suites';

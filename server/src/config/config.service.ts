@@ -20,6 +20,8 @@ export class ConfigService {
   readonly mailDir = process.env.MAIL_DIR;
   /** 0 turns the outbox worker's timer off (tests drive it by hand). */
   readonly mailPollIntervalMs = intFromEnv('MAIL_POLL_INTERVAL_MS', 2000);
+  /** How often assignment mail and stale-unit digests are looked for; 0 turns the timer off (tests drive it). */
+  readonly translationNoticeIntervalMs = intFromEnv('TRANSLATION_NOTICE_INTERVAL_MS', 60_000);
 
   readonly accessTokenTtlSeconds = Math.min(intFromEnv('ACCESS_TOKEN_TTL_SECONDS', 900), 900);
   readonly refreshTokenTtlDays = intFromEnv('REFRESH_TOKEN_TTL_DAYS', 14);

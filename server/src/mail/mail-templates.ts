@@ -4,7 +4,9 @@ export type MailContent =
   | { kind: 'invitation'; name: string; inviterName: string; link: string; expiresAt: Date }
   | { kind: 'password-reset'; name: string; link: string; expiresAt: Date }
   /** An in-app notification sent on by mail: its words come already in the recipient's language. */
-  | { kind: 'notification'; name: string; subject: string; body: string; link: string };
+  | { kind: 'notification'; name: string; subject: string; body: string; link: string }
+  | { kind: 'translator-assignment'; name: string; locales: string[]; link: string }
+  | { kind: 'stale-digest'; name: string; stories: { title: string; locale: string; units: number }[]; link: string };
 
 /** A message's words: the paragraphs before its link and after it. */
 interface MailWords {
@@ -15,6 +17,15 @@ interface MailWords {
 
 const when = (date: Date, language: UiLanguage) =>
   `${new Intl.DateTimeFormat(language, { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }).format(date)} UTC`;
+
+/** "French and Spanish", in the reader's language. */
+const languageList = (locales: readonly string[], language: UiLanguage) => {
+  const names = new Intl.DisplayNames(language, { type: 'language' });
+  return new Intl.ListFormat(language, { type: 'conjunction' }).format(locales.map((locale) => names.of(locale) ?? locale));
+};
+
+const staleLines = (stories: Extract<MailContent, { kind: 'stale-digest' }>['stories'], language: UiLanguage) =>
+  stories.map(({ title, locale, units }) => `• ${title} (${languageList([locale], language)}): ${units}`);
 
 type Templates = { [K in MailContent['kind']]: (c: Extract<MailContent, { kind: K }>, l: UiLanguage) => MailWords };
 
@@ -46,6 +57,23 @@ const templates: Record<UiLanguage, Templates> = {
       before: [`Hello ${c.name},`, c.body, 'Open it in the studio:'],
       after: ['You can turn off e-mails of this kind in your notification settings in the studio.'],
     }),
+    'translator-assignment': (c, l) => ({
+      subject: `You now translate into ${languageList(c.locales, l)}`,
+      before: [
+        `Hello ${c.name},`,
+        `You have been given ${languageList(c.locales, l)} as translation languages in Mantlepiece. The stories waiting for you are in your worklist:`,
+      ],
+      after: ['Each unit shows its source beside your translation, with its length budget and the panel previewed as a kiosk draws it.'],
+    }),
+    'stale-digest': (c, l) => ({
+      subject: 'Source text changed under your translations',
+      before: [
+        `Hello ${c.name},`,
+        'Curators have edited the source of units you had translated. Those translations are now marked stale, with the old and new source side by side. Units per story:',
+        ...staleLines(c.stories, l),
+      ],
+      after: ['Until a stale unit is translated again, a release shows it only if the venue allows falling back to the source.'],
+    }),
   },
   fr: {
     invitation: (c, l) => ({
@@ -73,6 +101,23 @@ const templates: Record<UiLanguage, Templates> = {
       subject: c.subject,
       before: [`Bonjour ${c.name},`, c.body, 'Ouvrez-le dans le studio :'],
       after: ['Vous pouvez désactiver les e-mails de ce type dans vos réglages de notification, dans le studio.'],
+    }),
+    'translator-assignment': (c, l) => ({
+      subject: `Vous traduisez désormais en ${languageList(c.locales, l)}`,
+      before: [
+        `Bonjour ${c.name},`,
+        `Vous avez reçu ${languageList(c.locales, l)} comme langues de traduction dans Mantlepiece. Les récits qui vous attendent sont dans votre liste de travail :`,
+      ],
+      after: ['Chaque unité montre sa source à côté de votre traduction, avec son budget de longueur et l’aperçu du panneau tel qu’une borne l’affiche.'],
+    }),
+    'stale-digest': (c, l) => ({
+      subject: 'Le texte source a changé sous vos traductions',
+      before: [
+        `Bonjour ${c.name},`,
+        'Des conservateurs ont modifié la source d’unités que vous aviez traduites. Ces traductions sont désormais marquées périmées, avec l’ancienne et la nouvelle source côte à côte. Unités par récit :',
+        ...staleLines(c.stories, l),
+      ],
+      after: ['Tant qu’une unité périmée n’est pas retraduite, une publication ne l’affiche que si le lieu permet de revenir à la source.'],
     }),
   },
 };

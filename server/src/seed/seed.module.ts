@@ -9,6 +9,7 @@ import { MediaModule } from '../media/media.module.js';
 import { PanelsModule } from '../panels/panels.module.js';
 import { ReviewsModule } from '../reviews/reviews.module.js';
 import { Story } from '../stories/models/story.model.js';
+import { TRANSLATION_MODELS, TRANSLATION_SERVICES } from '../translations/translations.module.js';
 import { User } from '../users/models/user.model.js';
 import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
@@ -16,15 +17,16 @@ import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { DemoReviews } from './demo-reviews.js';
 import { DemoStories } from './demo-stories.js';
+import { DemoTranslations } from './demo-translations.js';
 import { SeedService } from './seed.service.js';
 
 /** What the CLI's seed and create-admin need: the database, no HTTP and no mail worker. */
 @Module({
   imports: [
     ConfigModule, ClockModule, DatabaseModule, AuditModule,
-    SequelizeModule.forFeature([User, Venue, Gallery, Station, Exhibit, Story]),
+    SequelizeModule.forFeature([User, Venue, Gallery, Station, Exhibit, Story, ...TRANSLATION_MODELS]),
     MediaModule, PanelsModule, ReviewsModule,
   ],
-  providers: [SeedService, PasswordHasher, DemoStories, DemoReviews],
+  providers: [SeedService, PasswordHasher, DemoStories, DemoReviews, DemoTranslations, ...TRANSLATION_SERVICES],
 })
 export class SeedModule {}

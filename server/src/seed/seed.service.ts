@@ -9,6 +9,7 @@ import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { DemoReviews } from './demo-reviews.js';
 import { DemoStories } from './demo-stories.js';
+import { DemoTranslations } from './demo-translations.js';
 import { DEMO_ACCOUNTS, DEMO_GALLERY, DEMO_STATION, DEMO_VENUE } from './demo-scenario.js';
 
 @Injectable()
@@ -22,6 +23,7 @@ export class SeedService {
     private readonly hasher: PasswordHasher,
     private readonly audit: AuditService,
     private readonly demoStories: DemoStories,
+    private readonly demoTranslations: DemoTranslations,
     private readonly demoReviews: DemoReviews,
   ) {}
 
@@ -39,6 +41,7 @@ export class SeedService {
       );
     });
     await this.demoStories.seed('curator@demo.test');
+    await this.demoTranslations.seed('translator@demo.test');
     await this.demoReviews.seed('curator@demo.test', 'educator@demo.test');
     return true;
   }

@@ -9,6 +9,7 @@ export const toVenueView = (venue: Venue): VenueView => ({
   slug: venue.slug,
   sourceLocale: venue.sourceLocale,
   targetLocales: venue.targetLocales,
+  fallbackToSource: venue.fallbackToSource,
   requiredApprovals: venue.requiredApprovals,
   createdAt: venue.createdAt.toISOString(),
 });

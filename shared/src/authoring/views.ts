@@ -93,6 +93,8 @@ export interface VenueView {
   slug: string;
   sourceLocale: string;
   targetLocales: string[];
+  /** Whether a release may show the source text where a target locale is incomplete or stale. */
+  fallbackToSource: boolean;
   /** How many different educators must approve a revision: 1 or 2. */
   requiredApprovals: number;
   createdAt: string;

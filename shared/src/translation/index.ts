@@ -8,3 +8,4 @@ export * from './length-budget.js';
 export * from './xliff-export.js';
 export * from './xliff-parse.js';
 export * from './xliff-import.js';
+export * from './views.js';

@@ -6,6 +6,7 @@ import * as venues from './0004-venues.js';
 import * as exhibitsStoriesPanels from './0100-exhibits-stories-panels.js';
 import * as media from './0101-media.js';
 import * as review from './0200-review.js';
+import * as translations from './0300-translations.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -21,6 +22,7 @@ const modules: [string, MigrationModule][] = [
   ['0100-exhibits-stories-panels', exhibitsStoriesPanels],
   ['0101-media', media],
   ['0200-review', review],
+  ['0300-translations', translations],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
-import { ArrayMaxSize, ArrayUnique, IsArray, IsIn, IsOptional, Matches, MaxLength } from 'class-validator';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, IsOptional, Matches, MaxLength } from 'class-validator';
 import { LocaleTagField, LocaleTagsField } from './locale-tag.js';
 import { SettingsNameField } from './settings-fields.js';
 
@@ -27,6 +27,11 @@ export class CreateVenueDto {
   @IsOptional()
   @IsIn([1, 2], { message: 'A revision needs 1 or 2 approvals.' })
   requiredApprovals?: number;
+
+  @ApiPropertyOptional({ default: false, description: 'Whether a release may show the source text where a target locale is incomplete or stale' })
+  @IsOptional()
+  @IsBoolean({ message: 'Say true or false.' })
+  fallbackToSource?: boolean;
 }
 
 export class UpdateVenueDto extends PartialType(CreateVenueDto) {}

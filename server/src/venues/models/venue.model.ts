@@ -21,5 +21,9 @@ export class Venue extends Model {
   @Column({ type: DataType.TINYINT.UNSIGNED, allowNull: false, defaultValue: 1 })
   requiredApprovals: number;
 
+  /** Whether a release may show the source text where a target locale is incomplete or stale. */
+  @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: false })
+  fallbackToSource: boolean;
+
   declare id: number;
 }

@@ -1,0 +1,148 @@
+import { Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import type { Transaction } from 'sequelize';
+import { mediaIdsIn, segmentAltText, segmentPanel, type PanelDocJSON, type TranslationUnit } from '@mantlepiece/shared';
+import { Exhibit } from '../exhibits/models/exhibit.model.js';
+import { MediaAltText } from '../media/models/media-alt-text.model.js';
+import { PanelDocument } from '../panels/models/panel-document.model.js';
+import { Panel } from '../panels/models/panel.model.js';
+import { Story } from '../stories/models/story.model.js';
+import { Gallery } from '../venues/models/gallery.model.js';
+import { Venue } from '../venues/models/venue.model.js';
+
+export interface PanelSource {
+  panelId: number;
+  position: number;
+  /** Counted from 1, as the curator sees it in the panel strip. */
+  panelNumber: number;
+  /** The source document's compare-and-set version. */
+  version: number;
+  doc: PanelDocJSON;
+  units: TranslationUnit[];
+}
+
+export interface AltTextSource {
+  mediaId: number;
+  /** The first panel that shows the image. */
+  panelNumber: number;
+  unit: TranslationUnit;
+}
+
+/** A story's current source, cut into translation units, with the locales its venue translates into. */
+export interface StorySource {
+  story: Story;
+  venue: Venue | null;
+  targetLocales: string[];
+  panels: PanelSource[];
+  altTexts: AltTextSource[];
+}
+
+/** Enough for every panel of a few dozen busy stories; past it the oldest entries are cut again on demand. */
+const MEMO_LIMIT = 5000;
+
+/**
+ * Units are derived from the source documents on demand rather than stored, so they can never
+ * disagree with what the curator last saved, whoever saved it and however. Hashing is the costly
+ * part, so each panel's units are remembered under its document's id, version and locale and its
+ * position: a save bumps the version, a reorder moves the position, and either misses the memo.
+ * Nothing in the memo is shared state: another server instance simply cuts the units itself.
+ */
+@Injectable()
+export class SourceUnitsService {
+  private readonly memo = new Map<string, Promise<TranslationUnit[]>>();
+
+  constructor(
+    @InjectModel(Story) private readonly stories: typeof Story,
+    @InjectModel(Venue) private readonly venues: typeof Venue,
+    @InjectModel(Panel) private readonly panels: typeof Panel,
+    @InjectModel(MediaAltText) private readonly altTexts: typeof MediaAltText,
+  ) {}
+
+  async sourceOf(storyId: number, transaction?: Transaction): Promise<StorySource> {
+    const [source] = await this.sourcesOf([storyId], transaction);
+    if (!source) throw new NotFoundException('There is no such story.');
+    return source;
+  }
+
+  /** The sources of these stories, in the order given, skipping ids that do not exist. */
+  async sourcesOf(storyIds: readonly number[], transaction?: Transaction): Promise<StorySource[]> {
+    if (storyIds.length === 0) return [];
+    const stories = await this.stories.findAll({
+      where: { id: [...storyIds] },
+      include: [{ model: Exhibit, include: [{ model: Gallery, include: [Venue] }] }],
+      transaction,
+    });
+    const firstVenue = await this.venues.findOne({ order: [['id', 'ASC']], transaction });
+    const panels = await this.panels.findAll({
+      where: { storyId: stories.map((story) => story.id) },
+      include: [PanelDocument],
+      order: [['position', 'ASC'], ['id', 'ASC']],
+      transaction,
+    });
+    const byId = new Map(stories.map((story) => [story.id, story]));
+    return Promise.all(
+      storyIds.flatMap((id) => {
+        const story = byId.get(id);
+        if (!story) return [];
+        // A story outside any exhibit is written for the first venue set up, as the stories module decides.
+        const venue = story.exhibit?.gallery?.venue ?? firstVenue;
+        return [this.build(story, venue, panels.filter((panel) => panel.storyId === id), transaction)];
+      }),
+    );
+  }
+
+  private async build(story: Story, venue: Venue | null, panels: Panel[], transaction?: Transaction): Promise<StorySource> {
+    const panelSources = await Promise.all(
+      panels.map(async (panel, index) => {
+        const document = panel.documents?.find((each) => each.locale === story.sourceLocale);
+        const doc = document?.doc ?? { type: 'doc', content: [] };
+        const units = document ? await this.panelUnits(document, panel.id, index + 1, story.sourceLocale) : [];
+        return { panelId: panel.id, position: panel.position, panelNumber: index + 1, version: document?.version ?? 0, doc, units };
+      }),
+    );
+    return {
+      story,
+      venue,
+      targetLocales: (venue?.targetLocales ?? []).filter((locale) => locale !== story.sourceLocale),
+      panels: panelSources,
+      altTexts: await this.altTextSources(panelSources, story.sourceLocale, transaction),
+    };
+  }
+
+  private panelUnits(document: PanelDocument, panelId: number, panelNumber: number, sourceLocale: string): Promise<TranslationUnit[]> {
+    return this.remember(`panel:${document.id}:${document.version}:${document.locale}:${panelNumber}`, () =>
+      segmentPanel(document.doc, { panelId, sourceLocale, panelNumber }),
+    );
+  }
+
+  /** One unit per image the story shows that has alt text in the source locale, in order of first use. */
+  private async altTextSources(panels: PanelSource[], sourceLocale: string, transaction?: Transaction): Promise<AltTextSource[]> {
+    const firstPanel = new Map<number, number>();
+    for (const panel of panels) {
+      for (const mediaId of mediaIdsIn(panel.doc).map(Number)) if (!firstPanel.has(mediaId)) firstPanel.set(mediaId, panel.panelNumber);
+    }
+    if (firstPanel.size === 0) return [];
+    const texts = await this.altTexts.findAll({ where: { mediaAssetId: [...firstPanel.keys()], locale: sourceLocale }, transaction });
+    const textOf = new Map(texts.map((alt) => [alt.mediaAssetId, alt.text]));
+    const sources: AltTextSource[] = [];
+    for (const [mediaId, panelNumber] of firstPanel) {
+      const text = textOf.get(mediaId);
+      if (!text) continue;
+      const [unit] = await this.remember(`alt:${mediaId}:${sourceLocale}:${panelNumber}:${text}`, async () => [
+        await segmentAltText(String(mediaId), text, { sourceLocale, panelNumber }),
+      ]);
+      sources.push({ mediaId, panelNumber, unit: unit! });
+    }
+    return sources;
+  }
+
+  private remember(key: string, cut: () => Promise<TranslationUnit[]>): Promise<TranslationUnit[]> {
+    const known = this.memo.get(key);
+    if (known) return known;
+    const units = cut();
+    if (this.memo.size >= MEMO_LIMIT) this.memo.delete(this.memo.keys().next().value as string);
+    this.memo.set(key, units);
+    units.catch(() => this.memo.delete(key));
+    return units;
+  }
+}

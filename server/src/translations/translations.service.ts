@@ -1,0 +1,228 @@
+import { BadRequestException, HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import {
+  applyTranslations, checkPlaceholders, directionOf, runsFromText, unitStatus,
+  type LocaleCompleteness, type Page, type PanelDocJSON, type SavedTranslationUnit, type TranslationPreviewView,
+  type TranslationUnitView, type TranslationWorklistItem, type UnitStatus,
+} from '@mantlepiece/shared';
+import { likePattern } from '../common/list-query.js';
+import { pageWindow, toPage } from '../common/page.js';
+import { MediaAltText } from '../media/models/media-alt-text.model.js';
+import { User } from '../users/models/user.model.js';
+import type { ListUnitsQuery, ListWorklistQuery, SaveTranslationUnitDto } from './dto/translation.dto.js';
+import { Translation } from './models/translation.model.js';
+import { SourceUnitsService, type StorySource } from './source-units.service.js';
+import { assertMayRead, assertMayWrite, assertTargetLocale, readableLocales } from './translation-access.js';
+import { TranslationConflictException } from './translation-conflict.js';
+import { completenessOf, currentTranslationsOf, unitStates, type UnitState } from './translation-state.js';
+import { toTranslationUnitView } from './translations.presenter.js';
+
+/** What a release build needs to know of one story in one locale. */
+export interface ReleaseCompleteness extends LocaleCompleteness {
+  storyId: number;
+  /** True when every unit is translated from the current source. */
+  complete: boolean;
+  /** Each unit that is not: where it is and why, for the build's 422. */
+  missing: { unitId: string; panelId: number | null; mediaId: number | null; status: Exclude<UnitStatus, 'translated'> }[];
+}
+
+/** A story drawn in one locale, each unit without a current translation in the source language. */
+export interface TargetDocuments {
+  dir: 'ltr' | 'rtl';
+  panels: { panelId: number; position: number; doc: PanelDocJSON; fallbackUnitIds: string[] }[];
+  alt: Record<string, string>;
+}
+
+/**
+ * (story, target locale) pairs in SQL, so the worklist is filtered, counted and paged by the
+ * database: a story takes its exhibit's venue, or the first venue when it is in no exhibit, and
+ * one row per target locale of that venue other than the story's own language. Retired stories
+ * are off the worklist.
+ */
+const WORKLIST_FROM = `
+  FROM stories s
+  LEFT JOIN exhibits e ON e.id = s.exhibit_id
+  LEFT JOIN galleries g ON g.id = e.gallery_id
+  JOIN venues v ON v.id = COALESCE(g.venue_id, (SELECT MIN(id) FROM venues))
+  JOIN JSON_TABLE(v.target_locales, '$[*]' COLUMNS (locale VARCHAR(35) PATH '$')) AS jt
+  WHERE s.state <> 'retired' AND jt.locale <> s.source_locale`;
+
+@Injectable()
+export class TranslationsService {
+  constructor(
+    @InjectModel(Translation) private readonly translations: typeof Translation,
+    @InjectModel(MediaAltText) private readonly altTexts: typeof MediaAltText,
+    private readonly sources: SourceUnitsService,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  /** The translator's worklist: every story in each locale they translate into, with its progress. */
+  async worklist(user: User, query: ListWorklistQuery): Promise<Page<TranslationWorklistItem>> {
+    if (query.locale) assertMayRead(user, query.locale);
+    const readable = readableLocales(user);
+    const locales = query.locale ? [query.locale] : readable;
+    if (locales?.length === 0) return toPage([], 0, query);
+    const conditions = [
+      ...(locales ? ['jt.locale IN (:locales)'] : []),
+      ...(query.q ? ['s.title LIKE :q'] : []),
+    ].map((condition) => ` AND ${condition}`).join('');
+    const replacements = { locales, q: query.q ? likePattern(query.q) : undefined, ...pageWindow(query) };
+    const [{ total }] = await this.sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total ${WORKLIST_FROM}${conditions}`, { replacements, type: QueryTypes.SELECT }) as [{ total: number }];
+    const pairs = await this.sequelize.query<{ storyId: number; storyTitle: string; locale: string }>(
+      `SELECT s.id AS storyId, s.title AS storyTitle, jt.locale AS locale ${WORKLIST_FROM}${conditions} ORDER BY s.title, s.id, jt.locale LIMIT :limit OFFSET :offset`,
+      { replacements, type: QueryTypes.SELECT },
+    );
+    const sources = new Map((await this.sources.sourcesOf([...new Set(pairs.map((pair) => pair.storyId))])).map((source) => [source.story.id, source]));
+    const items = await Promise.all(
+      pairs.map(async ({ storyId, storyTitle, locale }) => ({
+        storyId, storyTitle, ...completenessOf(locale, await this.statesOf(sources.get(storyId)!, locale)),
+      })),
+    );
+    return toPage(items, Number(total), query);
+  }
+
+  /** Progress per target locale of the story's venue; a translator sees their own locales. */
+  async storyTranslations(user: User, storyId: number): Promise<LocaleCompleteness[]> {
+    const source = await this.sources.sourceOf(storyId);
+    const readable = readableLocales(user);
+    const locales = source.targetLocales.filter((locale) => readable === null || readable.includes(locale));
+    return Promise.all(locales.map(async (locale) => completenessOf(locale, await this.statesOf(source, locale))));
+  }
+
+  async listUnits(user: User, storyId: number, locale: string, query: ListUnitsQuery): Promise<Page<TranslationUnitView>> {
+    assertMayRead(user, locale);
+    const source = await this.sources.sourceOf(storyId);
+    assertTargetLocale(source.targetLocales, locale);
+    const states = (await this.statesOf(source, locale)).filter((state) => !query.status || state.status === query.status);
+    // Units are cut from the documents, not stored, so the page is cut from the story's list here.
+    const { limit, offset } = pageWindow(query);
+    return toPage(states.slice(offset, offset + limit).map((state) => toTranslationUnitView(state, locale)), states.length, query);
+  }
+
+  /**
+   * Saves one unit by compare-and-set on its version: of two translators who started from the same
+   * version, the second gets a 409 with what the first saved. A translation that breaks a
+   * placeholder is refused with each problem named.
+   */
+  async saveUnit(translator: User, storyId: number, locale: string, unitId: string, dto: SaveTranslationUnitDto): Promise<SavedTranslationUnit> {
+    assertMayWrite(translator, locale);
+    return this.sequelize.transaction(async (transaction) => {
+      const source = await this.sources.sourceOf(storyId, transaction);
+      assertTargetLocale(source.targetLocales, locale);
+      const state = (await this.statesOf(source, locale, transaction)).find((each) => each.unit.id === unitId);
+      if (!state) throw new NotFoundException(`Unit ${unitId} is not in this story; the source may have changed. Reload the units.`);
+      const problems = dto.text === '' ? [] : checkPlaceholders(state.unit, runsFromText(state.unit, dto.text));
+      if (problems.length > 0) {
+        throw new BadRequestException({
+          statusCode: HttpStatus.BAD_REQUEST,
+          message: 'The placeholders of this translation do not match the source.',
+          errors: problems.map((problem) => ({ path: ['text'], message: problem.message })),
+        });
+      }
+      const version = await this.writeTranslation(state, { storyId, locale, text: dto.text, translatorId: translator.id, expectedVersion: dto.version }, transaction);
+      return { version, status: unitStatus({ sourceHash: state.unit.sourceHash, translation: { text: dto.text, sourceHash: state.unit.sourceHash } }) };
+    });
+  }
+
+  async preview(user: User, storyId: number, locale: string): Promise<TranslationPreviewView> {
+    assertMayRead(user, locale);
+    const source = await this.sources.sourceOf(storyId);
+    assertTargetLocale(source.targetLocales, locale);
+    return { storyId, locale, ...(await this.draw(source, locale)) };
+  }
+
+  /** For the release build: the story's panels and alt texts in `locale`, the source shown where a translation is missing or stale. */
+  async targetDocuments(storyId: number, locale: string): Promise<TargetDocuments> {
+    return this.draw(await this.sources.sourceOf(storyId), locale);
+  }
+
+  /** For the release build: how complete each story is in each locale, and what is missing. */
+  async completenessForRelease(storyIds: readonly number[], locales: readonly string[]): Promise<ReleaseCompleteness[]> {
+    const sources = await this.sources.sourcesOf(storyIds);
+    const figures = await Promise.all(
+      sources.flatMap((source) =>
+        locales.map(async (locale) => {
+          const states = await this.statesOf(source, locale);
+          const missing = states.flatMap((state) =>
+            state.status === 'translated' ? [] : [{ unitId: state.unit.id, panelId: state.panelId, mediaId: state.mediaId, status: state.status }],
+          );
+          return { storyId: source.story.id, ...completenessOf(locale, states), complete: missing.length === 0, missing };
+        }),
+      ),
+    );
+    return figures;
+  }
+
+  /** Every unit of the story in the locale with the translation it shows. */
+  async statesOf(source: StorySource, locale: string, transaction?: Transaction): Promise<UnitState[]> {
+    const panelIds = source.panels.map((panel) => panel.panelId);
+    const mediaIds = source.altTexts.map((alt) => alt.mediaId);
+    const include = [{ model: User, attributes: ['id', 'name'] }];
+    const [panelRows, altRows, targetAltTexts] = await Promise.all([
+      panelIds.length ? this.translations.findAll({ where: { panelId: panelIds, locale }, include, transaction }) : [],
+      mediaIds.length ? this.translations.findAll({ where: { mediaAssetId: mediaIds, locale }, include, transaction }) : [],
+      mediaIds.length ? this.altTexts.findAll({ where: { mediaAssetId: mediaIds, locale }, transaction }) : [],
+    ]);
+    return unitStates(source, [...panelRows, ...altRows], targetAltTexts);
+  }
+
+  /**
+   * Writes one unit's translation, made from the unit's current source, under the unit's own id;
+   * an alt text also goes to the media library, where everything else reads it. Returns the new version.
+   */
+  async writeTranslation(
+    state: UnitState,
+    { storyId, locale, text, translatorId, expectedVersion }: { storyId: number; locale: string; text: string; translatorId: number; expectedVersion: number },
+    transaction: Transaction,
+  ): Promise<number> {
+    const values = { text, sourceHash: state.unit.sourceHash, sourceText: state.unit.display, sourceVersion: state.sourceVersion, translatorId, staleNotifiedHash: null };
+    const where = { unitId: state.unit.id, locale };
+    if (expectedVersion === 0) {
+      try {
+        await this.translations.create(
+          { ...where, ...values, version: 1, storyId: state.panelId === null ? null : storyId, panelId: state.panelId, mediaAssetId: state.mediaId },
+          { transaction },
+        );
+      } catch (error) {
+        if (error instanceof UniqueConstraintError) await this.conflict(where, transaction);
+        throw error;
+      }
+    } else {
+      const [saved] = await this.translations.update({ ...values, version: expectedVersion + 1 }, { where: { ...where, version: expectedVersion }, transaction });
+      if (saved === 0) await this.conflict(where, transaction);
+    }
+    if (state.mediaId !== null) await this.writeAltText(state, locale, text, transaction);
+    return expectedVersion + 1;
+  }
+
+  private async draw(source: StorySource, locale: string): Promise<TargetDocuments> {
+    const states = await this.statesOf(source, locale);
+    const translations = currentTranslationsOf(states);
+    const panels = source.panels.map((panel) => {
+      const applied = applyTranslations(panel.doc, panel.units, translations);
+      return { panelId: panel.panelId, position: panel.position, doc: applied.doc, fallbackUnitIds: [...applied.untranslated, ...applied.refused.map((each) => each.unitId)] };
+    });
+    const alt = Object.fromEntries(
+      source.altTexts.map(({ mediaId, unit }) => [String(mediaId), plainText(unit, translations[unit.id] ?? unit.display)]),
+    );
+    return { dir: directionOf(locale), panels, alt };
+  }
+
+  private async writeAltText(state: UnitState, locale: string, text: string, transaction: Transaction): Promise<void> {
+    const mediaAssetId = state.mediaId!;
+    if (text === '') await this.altTexts.destroy({ where: { mediaAssetId, locale }, transaction });
+    else await this.altTexts.bulkCreate([{ mediaAssetId, locale, text: plainText(state.unit, text) }], { updateOnDuplicate: ['text', 'updatedAt'], transaction });
+  }
+
+  /** A locking read: a plain one would answer from this transaction's snapshot, which may predate the winning save. */
+  private async conflict(where: { unitId: string; locale: string }, transaction: Transaction): Promise<never> {
+    const current = await this.translations.findOne({ where, transaction, lock: transaction.LOCK.UPDATE });
+    throw new TranslationConflictException(current?.version ?? 0, current?.text ?? null);
+  }
+}
+
+/** A unit without placeholders (alt text) from the display form back to plain text. */
+const plainText = (unit: UnitState['unit'], display: string) =>
+  runsFromText(unit, display).map((run) => (run.type === 'text' ? run.text : '')).join('');
