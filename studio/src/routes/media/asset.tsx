@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import {
-  Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, Field, Input, makeStyles, Radio, RadioGroup, Spinner, Text, Textarea, tokens,
+  Button, Field, Input, makeStyles, Radio, RadioGroup, Spinner, Text, Textarea, tokens,
 } from '@fluentui/react-components';
 import type { MediaView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
@@ -9,6 +9,7 @@ import { ApiError } from '../../api/client';
 import { useDeleteMedia, useMediaAsset, useUpdateMedia } from '../../api/media';
 import { useCurrentUser } from '../../api/session';
 import { useVenues } from '../../api/settings';
+import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError, serverFieldMessage } from '../../components/forms/describe-error';
@@ -176,23 +177,16 @@ function AssetDetails({ asset }: { asset: MediaView }) {
       </div>
 
       {confirming ? (
-        <Dialog open modalType="alert" onOpenChange={(_event, data) => { if (!data.open) setConfirming(false); }}>
-          <DialogSurface>
-            <DialogBody>
-              <DialogTitle>{t('asset.deleteTitle', { name: asset.filename })}</DialogTitle>
-              <DialogContent>
-                <Text as="p">{asset.usedIn.length > 0 ? t('asset.deleteUsed', { count: asset.usedIn.length }) : t('asset.deleteBody')}</Text>
-                {deleteProblem ? <FormAlert intent="error">{deleteProblem}</FormAlert> : null}
-              </DialogContent>
-              <DialogActions>
-                <Button appearance="secondary" onClick={() => setConfirming(false)}>{t('common.cancel')}</Button>
-                <Button appearance="primary" disabled={remove.isPending} onClick={() => remove.mutate(asset.id, { onSuccess: () => navigate('/media') })}>
-                  {t('asset.deleteConfirm')}
-                </Button>
-              </DialogActions>
-            </DialogBody>
-          </DialogSurface>
-        </Dialog>
+        <ConfirmDialog
+          title={t('asset.deleteTitle', { name: asset.filename })}
+          confirmLabel={t('asset.deleteConfirm')}
+          pending={remove.isPending}
+          problem={deleteProblem}
+          onConfirm={() => remove.mutate(asset.id, { onSuccess: () => navigate('/media') })}
+          onCancel={() => setConfirming(false)}
+        >
+          <Text as="p">{asset.usedIn.length > 0 ? t('asset.deleteUsed', { count: asset.usedIn.length }) : t('asset.deleteBody')}</Text>
+        </ConfirmDialog>
       ) : null}
     </>
   );

@@ -1,12 +1,13 @@
 import { useState, type ReactNode } from 'react';
 import {
-  Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, Field, makeStyles, Select, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
+  Button, Field, makeStyles, Select, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
 } from '@fluentui/react-components';
 import { AddRegular } from '@fluentui/react-icons';
 import type { ExhibitView, GalleryView, StationView, VenueView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { ApiError } from '../../api/client';
 import { useDeleteSetting, useGalleries, useSettingsList, useVenues, type SettingsCollection, type SettingsListParams, type SettingsView } from '../../api/settings';
+import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
@@ -20,6 +21,7 @@ const useStyles = makeStyles({
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
   actions: { display: 'flex', gap: tokens.spacingHorizontalXS, justifyContent: 'flex-end' },
   muted: { color: tokens.colorNeutralForeground3 },
+  note: { marginBottom: tokens.spacingVerticalM },
 });
 
 const PAGE_SIZE = 25;
@@ -103,7 +105,7 @@ export function SettingsSection({ collection }: { collection: SettingsCollection
         ) : <Text className={styles.muted}>{t('settings.venues.intro')}</Text>}
         <Button appearance="primary" icon={<AddRegular />} onClick={() => setDialog({ kind: 'edit', view: null })}>{t(`settings.${collection}.create`)}</Button>
       </div>
-      {collection === 'stations' ? <FormAlert intent="info">{t('settings.mountingNote')}</FormAlert> : null}
+      {collection === 'stations' ? <div className={styles.note}><FormAlert intent="info">{t('settings.mountingNote')}</FormAlert></div> : null}
       <ListStates
         query={list}
         loadError={t('settings.loadError')}
@@ -145,23 +147,16 @@ export function SettingsSection({ collection }: { collection: SettingsCollection
 
       {dialog?.kind === 'edit' ? <SettingsDialog collection={collection} editing={dialog.view} onClose={() => setDialog(null)} /> : null}
       {dialog?.kind === 'delete' ? (
-        <Dialog open modalType="alert" onOpenChange={(_event, data) => { if (!data.open) setDialog(null); }}>
-          <DialogSurface>
-            <DialogBody>
-              <DialogTitle>{t('settings.deleteTitle', { name: dialog.view.name })}</DialogTitle>
-              <DialogContent>
-                <Text as="p">{t('settings.deleteBody')}</Text>
-                {deleteProblem ? <FormAlert intent="error">{deleteProblem}</FormAlert> : null}
-              </DialogContent>
-              <DialogActions>
-                <Button appearance="secondary" onClick={() => setDialog(null)}>{t('common.cancel')}</Button>
-                <Button appearance="primary" disabled={remove.isPending} onClick={() => remove.mutate(dialog.view.id, { onSuccess: () => setDialog(null) })}>
-                  {t('settings.deleteConfirm')}
-                </Button>
-              </DialogActions>
-            </DialogBody>
-          </DialogSurface>
-        </Dialog>
+        <ConfirmDialog
+          title={t('settings.deleteTitle', { name: dialog.view.name })}
+          confirmLabel={t('settings.deleteConfirm')}
+          pending={remove.isPending}
+          problem={deleteProblem}
+          onConfirm={() => remove.mutate(dialog.view.id, { onSuccess: () => setDialog(null) })}
+          onCancel={() => setDialog(null)}
+        >
+          <Text as="p">{t('settings.deleteBody')}</Text>
+        </ConfirmDialog>
       ) : null}
     </section>
   );

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, Spinner, tokens } from '@fluentui/react-components';
+import { Button, makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { DocumentAddRegular } from '@fluentui/react-icons';
 import { emptyPanelDoc, type PanelView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
@@ -7,6 +7,7 @@ import { useParams, useSearchParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
 import { useCurrentUser } from '../../api/session';
 import { useCreatePanel, useDeletePanel, useReorderPanels, useStory } from '../../api/stories';
+import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
@@ -106,21 +107,16 @@ export function StoryPage() {
       )}
 
       {deleting ? (
-        <Dialog open modalType="alert" onOpenChange={(_event, data) => { if (!data.open) setDeleting(null); }}>
-          <DialogSurface>
-            <DialogBody>
-              <DialogTitle>{t('story.deleteTitle', { number: panels.findIndex((panel) => panel.id === deleting.id) + 1 })}</DialogTitle>
-              <DialogContent>
-                {t('story.deleteBody')}
-                {deletePanel.isError ? <FormAlert intent="error">{describeError(t, deletePanel.error)}</FormAlert> : null}
-              </DialogContent>
-              <DialogActions>
-                <Button appearance="secondary" onClick={() => setDeleting(null)}>{t('common.cancel')}</Button>
-                <Button appearance="primary" onClick={confirmDelete} disabled={deletePanel.isPending}>{t('story.deleteConfirm')}</Button>
-              </DialogActions>
-            </DialogBody>
-          </DialogSurface>
-        </Dialog>
+        <ConfirmDialog
+          title={t('story.deleteTitle', { number: panels.findIndex((panel) => panel.id === deleting.id) + 1 })}
+          confirmLabel={t('story.deleteConfirm')}
+          pending={deletePanel.isPending}
+          problem={deletePanel.isError ? describeError(t, deletePanel.error) : null}
+          onConfirm={confirmDelete}
+          onCancel={() => setDeleting(null)}
+        >
+          {t('story.deleteBody')}
+        </ConfirmDialog>
       ) : null}
     </>
   );
