@@ -64,7 +64,8 @@ function widgetChanges(before: readonly SnapshotWidget[], after: readonly Snapsh
   return changes;
 }
 
-function textPieces(before: string, after: string, locale: string): TextPiece[] {
+/** Two texts word by word (words as the locale's segmenter finds them); the translator's stale-source view uses it too. */
+export function textPieces(before: string, after: string, locale: string): TextPiece[] {
   if (before === after) return before === '' ? [] : [{ kind: 'same', text: before }];
   const intlSegmenter = new Intl.Segmenter(locale, { granularity: 'word' });
   return diffWords(before, after, { intlSegmenter }).map((change) => ({

@@ -8,4 +8,5 @@ export * from './length-budget.js';
 export * from './xliff-export.js';
 export * from './xliff-parse.js';
 export * from './xliff-import.js';
+export { characterCount, visibleLength } from './inline-runs.js';
 export * from './views.js';

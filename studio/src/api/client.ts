@@ -49,6 +49,8 @@ interface RequestOptions {
   query?: Query;
   /** A media type other than JSON, for a download (the audit trail as CSV). */
   accept?: string;
+  /** A body sent as it is under its own media type (an XLIFF file), instead of JSON. */
+  file?: { type: string; content: Blob | string };
 }
 
 function url(path: string, query?: Query): string {
@@ -63,12 +65,13 @@ function url(path: string, query?: Query): string {
 async function send(path: string, options: RequestOptions): Promise<Response> {
   const headers: Record<string, string> = { Accept: options.accept ?? 'application/json' };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (options.file) headers['Content-Type'] = options.file.type;
   if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
   try {
     return await fetch(url(path, options.query), {
       method: options.method ?? 'GET',
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.file ? options.file.content : options.body === undefined ? undefined : JSON.stringify(options.body),
       credentials: 'same-origin',
     });
   } catch {

@@ -27,6 +27,8 @@ const ReviewsPage = named(() => import('../routes/reviews'), 'ReviewsPage');
 const RevisionPage = named(() => import('../routes/reviews/revision'), 'RevisionPage');
 const NotificationsPage = named(() => import('../routes/notifications'), 'NotificationsPage');
 const AuditPage = named(() => import('../routes/audit'), 'AuditPage');
+const TranslationsPage = named(() => import('../routes/translations'), 'TranslationsPage');
+const TranslationWorkspacePage = named(() => import('../routes/translations/workspace'), 'TranslationWorkspacePage');
 
 /** The pages of one area, behind that area's role check. */
 const inArea = (area: Area, element: ReactNode) => <RequireArea area={area}>{element}</RequireArea>;
@@ -85,6 +87,8 @@ export const router = createBrowserRouter([
       { path: '/reviews', element: inArea('reviews', <ReviewsPage />) },
       { path: '/reviews/:revisionId', element: inArea('reviews', <RevisionPage />) },
       { path: '/notifications', element: <NotificationsPage /> },
+      { path: '/translations', element: inArea('translations', <TranslationsPage />) },
+      { path: '/translations/:storyId/:locale', element: inArea('translations', <TranslationWorkspacePage />) },
       { path: '/:area', element: <PlannedArea /> },
       { path: '*', element: <NotFoundPage /> },
     ],

@@ -1,10 +1,12 @@
 import { authoringEn } from './authoring.en';
 import { reviewEn } from './review.en';
+import { translationEn } from './translation.en';
 
 /** English UI strings: the reference every other language must match key for key. */
 export const en = {
   ...authoringEn,
   ...reviewEn,
+  ...translationEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',

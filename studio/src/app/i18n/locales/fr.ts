@@ -1,11 +1,13 @@
 import { authoringFr } from './authoring.fr';
 import { reviewFr } from './review.fr';
+import { translationFr } from './translation.fr';
 import type { Messages } from './en';
 
 /** Chaînes de l’interface en français. */
 export const fr: Messages = {
   ...authoringFr,
   ...reviewFr,
+  ...translationFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',

@@ -1,0 +1,102 @@
+import { useEffect, useRef, useState } from 'react';
+import { Button, Dropdown, Field, makeStyles, Option, SearchBox, tokens } from '@fluentui/react-components';
+import { TranslateRegular } from '@fluentui/react-icons';
+import { useTranslation } from 'react-i18next';
+import { useSearchParams } from 'react-router-dom';
+import { useCurrentUser } from '../../api/session';
+import { useVenues } from '../../api/settings';
+import { useTranslationWorklist } from '../../api/translations';
+import { EmptyState } from '../../components/EmptyState';
+import { ListStates } from '../../components/lists/ListStates';
+import { withSearchChanges } from '../../components/lists/list-search';
+import { Pager } from '../../components/lists/Pager';
+import { PageHeader } from '../../components/PageHeader';
+import { useLanguageName } from '../../components/translation/language-name';
+import { useDebounced } from '../people/use-debounced';
+import { readWorklistParams } from './list-params';
+import { WorklistTable } from './WorklistTable';
+
+const useStyles = makeStyles({
+  toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
+  search: { minWidth: '18rem' },
+  locale: { minWidth: '12rem' },
+});
+
+/** Every venue's target locales, for the filter; a translator's own locales narrow it. */
+function useLocaleChoices(): string[] {
+  const me = useCurrentUser();
+  const venues = useVenues({ page: 1, pageSize: 100 });
+  const all = [...new Set((venues.data?.items ?? []).flatMap((venue) => venue.targetLocales))];
+  const readsAll = me.roles.includes('admin') || me.roles.includes('curator');
+  return readsAll ? all : me.locales;
+}
+
+/** The translator's worklist: each story in each of their locales, with its progress. */
+export function TranslationsPage() {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const me = useCurrentUser();
+  const languageName = useLanguageName();
+  const [search, setSearch] = useSearchParams();
+  const params = readWorklistParams(search);
+  const worklist = useTranslationWorklist(params);
+  const locales = useLocaleChoices();
+  const [query, setQuery] = useState(params.q ?? '');
+  const settledQuery = useDebounced(query.trim(), 300);
+  const urlQuery = useRef(params.q ?? '');
+  urlQuery.current = params.q ?? '';
+  const filtered = Boolean(params.q || params.locale);
+
+  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
+  useEffect(() => {
+    if (settledQuery !== urlQuery.current) setSearch((current) => withSearchChanges(current, { q: settledQuery }), { replace: true });
+  }, [settledQuery, setSearch]);
+
+  const anyLocale = t('translations.anyLocale');
+  return (
+    <>
+      <PageHeader title={t('translations.title')} intro={me.roles.includes('translator') ? t('translations.intro') : t('translations.introAll')} />
+      <div className={styles.toolbar} role="search">
+        <Field label={t('translations.search')} className={styles.search}>
+          <SearchBox value={query} onChange={(_event, data) => setQuery(data.value)} />
+        </Field>
+        <Field label={t('translations.locale')} className={styles.locale}>
+          <Dropdown
+            value={params.locale ? languageName(params.locale) : anyLocale}
+            selectedOptions={[params.locale ?? '']}
+            onOptionSelect={(_event, data) => change({ locale: data.optionValue || undefined })}
+          >
+            <Option value="">{anyLocale}</Option>
+            {locales.map((locale) => (
+              <Option key={locale} value={locale} text={languageName(locale)}>{`${languageName(locale)} (${locale})`}</Option>
+            ))}
+          </Dropdown>
+        </Field>
+      </div>
+      <ListStates
+        query={worklist}
+        loadError={t('translations.loadError')}
+        empty={
+          filtered ? (
+            <EmptyState
+              icon={<TranslateRegular />}
+              title={t('translations.noMatchTitle')}
+              actions={<Button onClick={() => { setQuery(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button>}
+            >
+              {t('translations.noMatchBody')}
+            </EmptyState>
+          ) : (
+            <EmptyState icon={<TranslateRegular />} title={t('translations.emptyTitle')}>{t('translations.emptyBody')}</EmptyState>
+          )
+        }
+      >
+        {(page) => (
+          <>
+            <WorklistTable items={page.items} busy={worklist.isFetching} />
+            <Pager page={page} label={t('translations.pagination')} onPage={(next) => change({ page: String(next) })} />
+          </>
+        )}
+      </ListStates>
+    </>
+  );
+}
