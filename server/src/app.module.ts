@@ -8,10 +8,12 @@ import { DatabaseModule } from './database/database.module.js';
 import { DevMailModule } from './dev-mail/dev-mail.module.js';
 import { ExhibitsModule } from './exhibits/exhibits.module.js';
 import { HealthModule } from './health/health.module.js';
+import { KiosksModule } from './kiosks/kiosks.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { MediaModule } from './media/media.module.js';
 import { NotificationsModule } from './notifications/notifications.module.js';
 import { PanelsModule } from './panels/panels.module.js';
+import { ReleasesModule } from './releases/releases.module.js';
 import { ReviewsModule } from './reviews/reviews.module.js';
 import { RevisionsModule } from './revisions/revisions.module.js';
 import { StoriesModule } from './stories/stories.module.js';
@@ -26,6 +28,7 @@ import { WidgetsModule } from './widgets/widgets.module.js';
     DevMailModule, HealthModule, VenuesModule, WidgetsModule,
     ExhibitsModule, StoriesModule, PanelsModule, MediaModule, TranslationsModule,
     NotificationsModule, CommentsModule, RevisionsModule, ReviewsModule,
+    ReleasesModule, KiosksModule,
   ],
 })
 export class AppModule {}

@@ -1,11 +1,13 @@
 import { ROLES, type Role } from '@mantlepiece/shared';
 
 /** Who may call a route: anyone, anyone signed in, or people holding one of some roles. */
-export type Access = 'public' | 'signed-in' | readonly Role[];
+/** 'kiosk': a paired kiosk's device token, never a person's sign-in. */
+export type Access = 'public' | 'signed-in' | 'kiosk' | readonly Role[];
 
 const STAFF = ROLES;
 const ADMIN = ['admin'] as const;
 const CURATOR = ['curator'] as const;
+const TECHNICIAN = ['technician', 'admin'] as const;
 /** Translation routes: translators in their own locales (the service checks which), admins and curators reading all. */
 const TRANSLATION_READERS = ['admin', 'curator', 'translator'] as const;
 const TRANSLATOR = ['translator'] as const;
@@ -99,6 +101,24 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'POST /api/notifications/read': 'signed-in',
   'GET /api/notifications/preferences': 'signed-in',
   'PUT /api/notifications/preferences': 'signed-in',
+
+  'POST /api/galleries/:id/releases': TECHNICIAN,
+  'GET /api/galleries/:id/releases': STAFF,
+  'GET /api/releases/compare': STAFF,
+  'GET /api/releases/:id': STAFF,
+  'GET /api/releases/:id/manifest': STAFF,
+  'POST /api/releases/:id/publish': TECHNICIAN,
+  'GET /api/venues/:id/signing-key': STAFF,
+  'POST /api/stations/:id/pair': TECHNICIAN,
+  'GET /api/kiosks': TECHNICIAN,
+  'POST /api/kiosks/:id/revoke': TECHNICIAN,
+  'POST /api/kiosk/pair/start': 'public',
+  'POST /api/kiosk/pair/complete': 'public',
+  'GET /api/kiosk/manifest': 'kiosk',
+  'GET /api/kiosk/files/:sha256': 'kiosk',
+  'POST /api/kiosk/heartbeat': 'kiosk',
+  'POST /api/kiosk/events': 'kiosk',
+
 };
 
 /**

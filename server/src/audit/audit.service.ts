@@ -26,7 +26,12 @@ export type AuditAction =
   | 'revision.submitted'
   | 'revision.approved'
   | 'revision.changes-requested'
-  | 'story.retired';
+  | 'story.retired'
+  | 'release.requested'
+  | 'release.published'
+  | 'release.rolled-back'
+  | 'kiosk.paired'
+  | 'kiosk.revoked';
 
 export interface AuditEntry {
   actorId: number | null;

@@ -1,6 +1,7 @@
 import { CanActivate, ExecutionContext, ForbiddenException, Injectable, UnauthorizedException } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import type { Role } from '@mantlepiece/shared';
+import { isDeviceToken } from '../kiosks/device-token.js';
 import { UsersService } from '../users/users.service.js';
 import { AccessTokenService } from './access-token.service.js';
 import { IS_PUBLIC, REQUIRED_ROLES } from './auth.decorators.js';
@@ -25,6 +26,8 @@ export class AuthGuard implements CanActivate {
 
     const request = context.switchToHttp().getRequest<AuthenticatedRequest>();
     const [scheme, token] = (request.headers.authorization ?? '').split(' ');
+    // A kiosk's device token opens the kiosk routes and nothing else.
+    if (scheme === 'Bearer' && token && isDeviceToken(token)) throw new ForbiddenException('A kiosk’s device token opens only the kiosk routes.');
     const userId = scheme === 'Bearer' && token ? await this.tokens.verify(token) : null;
     const user = userId === null ? null : await this.users.findActive(userId);
     if (!user) throw new UnauthorizedException('Sign in to continue.');

@@ -41,6 +41,10 @@ export class ConfigService {
   /** Width × height above which an upload is refused before it is decoded (decompression bombs). */
   readonly mediaMaxPixels = intFromEnv('MEDIA_MAX_PIXELS', 100_000_000);
 
+  /** 0 turns the release worker's timer off (tests drive builds by hand). */
+  readonly releasePollIntervalMs = intFromEnv('RELEASE_POLL_INTERVAL_MS', 1000);
+
+
   get isProduction(): boolean {
     return this.nodeEnv === 'production';
   }
@@ -51,6 +55,17 @@ export class ConfigService {
 
   get jwtSecret(): string {
     return required('JWT_SECRET');
+  }
+
+  /**
+   * What venue signing keys are encrypted under. Outside production it falls back to JWT_SECRET,
+   * so a development machine needs no second secret; production must set its own.
+   */
+  get signingKeySecret(): string {
+    const own = process.env.SIGNING_KEY_SECRET;
+    if (own) return own;
+    if (this.isProduction) return required('SIGNING_KEY_SECRET');
+    return this.jwtSecret;
   }
 
   /** Cookies go out as Secure only when people reach us over HTTPS. */

@@ -1,6 +1,7 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { VenueView } from '@mantlepiece/shared';
+import { VenueSigningKeysService } from '../releases/venue-signing-keys.service.js';
 import type { CreateVenueDto, UpdateVenueDto } from './dto/venue.dto.js';
 import { Venue } from './models/venue.model.js';
 import { SettingsService } from './settings.service.js';
@@ -8,7 +9,10 @@ import { toVenueView } from './venues.presenter.js';
 
 @Injectable()
 export class VenuesService extends SettingsService<Venue, VenueView> {
-  constructor(@InjectModel(Venue) private readonly venues: typeof Venue) {
+  constructor(
+    @InjectModel(Venue) private readonly venues: typeof Venue,
+    private readonly signingKeys: VenueSigningKeysService,
+  ) {
     super(venues, { label: 'venue', toView: toVenueView, inUse: 'This venue still has galleries; delete or move them first.' });
   }
 
@@ -19,9 +23,12 @@ export class VenuesService extends SettingsService<Venue, VenueView> {
     return toKioskVenueView(venue);
   }
 
-  override create(dto: CreateVenueDto) {
+  /** A new venue gets its release signing key at once. */
+  override async create(dto: CreateVenueDto) {
     assertLocales(dto.sourceLocale, dto.targetLocales);
-    return super.create(dto);
+    const venue = await super.create(dto);
+    await this.signingKeys.createFor(venue.id);
+    return venue;
   }
 
   override async update(id: number, dto: UpdateVenueDto) {

@@ -1,3 +1,4 @@
 export * from './manifest.js';
 export * from './verify.js';
 export * from './kiosk-api.js';
+export type * from './views.js';

@@ -7,6 +7,9 @@ import * as exhibitsStoriesPanels from './0100-exhibits-stories-panels.js';
 import * as media from './0101-media.js';
 import * as review from './0200-review.js';
 import * as translations from './0300-translations.js';
+import * as venueSigningKeys from './0400-venue-signing-keys.js';
+import * as releases from './0401-releases.js';
+import * as kiosks from './0402-kiosks.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -23,6 +26,9 @@ const modules: [string, MigrationModule][] = [
   ['0101-media', media],
   ['0200-review', review],
   ['0300-translations', translations],
+  ['0400-venue-signing-keys', venueSigningKeys],
+  ['0401-releases', releases],
+  ['0402-kiosks', kiosks],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

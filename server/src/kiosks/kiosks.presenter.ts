@@ -1,0 +1,23 @@
+import type { KioskView } from '@mantlepiece/shared';
+import type { Release } from '../releases/models/release.model.js';
+import type { Gallery } from '../venues/models/gallery.model.js';
+import type { Station } from '../venues/models/station.model.js';
+import type { Kiosk } from './models/kiosk.model.js';
+
+const releaseRef = (release: Release | undefined) => (release ? { id: release.id, number: release.number } : null);
+
+/** `kiosk` with its station and gallery; releases by id, for what it plays and what is Live. */
+export const toKioskView = (kiosk: Kiosk & { station: Station & { gallery: Gallery } }, releases: Map<number, Release>, live: Map<number, Release>): KioskView => ({
+  id: kiosk.id,
+  station: { id: kiosk.station.id, name: kiosk.station.name },
+  gallery: { id: kiosk.station.gallery.id, name: kiosk.station.gallery.name },
+  pairedAt: kiosk.pairedAt.toISOString(),
+  revokedAt: kiosk.revokedAt?.toISOString() ?? null,
+  lastHeartbeatAt: kiosk.lastHeartbeatAt?.toISOString() ?? null,
+  appVersion: kiosk.appVersion,
+  uptimeS: kiosk.uptimeS,
+  storageUsedBytes: kiosk.storageUsedBytes === null ? null : Number(kiosk.storageUsedBytes),
+  lastError: kiosk.lastError,
+  releasePlaying: releaseRef(kiosk.lastReleaseId === null ? undefined : releases.get(kiosk.lastReleaseId)),
+  releaseLive: releaseRef(live.get(kiosk.station.galleryId)),
+});

@@ -1,0 +1,129 @@
+import { Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op, QueryTypes } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import type { EventsResponse, KioskView, ManifestResponse, Page } from '@mantlepiece/shared';
+import { AuditService } from '../audit/audit.service.js';
+import { Clock } from '../clock/clock.service.js';
+import { pageWindow, toPage } from '../common/page.js';
+import { ReleaseFile } from '../releases/models/release-file.model.js';
+import { Release } from '../releases/models/release.model.js';
+import { ReleaseFileStore } from '../releases/release-file-store.js';
+import type { User } from '../users/models/user.model.js';
+import { Gallery } from '../venues/models/gallery.model.js';
+import { Station } from '../venues/models/station.model.js';
+import type { HeartbeatDto, KioskEventsDto, ListKiosksQuery } from './dto/kiosk-report.dto.js';
+import type { KioskRequest } from './device-token.guard.js';
+import { toKioskView } from './kiosks.presenter.js';
+import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
+import { Kiosk } from './models/kiosk.model.js';
+
+type PairedKiosk = KioskRequest['kiosk'];
+
+/** Releases a kiosk may fetch from: the Live one, and those it may still hold to roll back to. */
+const SERVABLE_STATES = ['live', 'superseded'];
+
+const EVENT_COLUMNS = ['id', 'kiosk_id', 'gallery_id', 'type', 'at', 'story_id', 'panel_id', 'widget_type', 'param', 'locale', 'dwell_ms', 'switch', 'received_at'];
+
+export interface SignedManifest extends ManifestResponse {
+  etag: string;
+}
+
+@Injectable()
+export class KiosksService {
+  constructor(
+    @InjectModel(Kiosk) private readonly kiosks: typeof Kiosk,
+    @InjectModel(KioskHeartbeat) private readonly heartbeats: typeof KioskHeartbeat,
+    @InjectModel(Release) private readonly releases: typeof Release,
+    @InjectModel(ReleaseFile) private readonly releaseFiles: typeof ReleaseFile,
+    private readonly files: ReleaseFileStore,
+    private readonly audit: AuditService,
+    private readonly clock: Clock,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  /** The Live release of the kiosk's gallery, as signed; its ETag is the manifest's SHA-256. */
+  async liveManifest(kiosk: PairedKiosk): Promise<SignedManifest> {
+    const release = await this.releases.findOne({ where: { liveGalleryId: kiosk.station.galleryId } });
+    if (!release?.manifest || !release.signature) throw new NotFoundException({ statusCode: 404, message: 'No live release for this gallery' });
+    return { manifest: release.manifest, signature: release.signature, etag: `"${release.manifestSha256}"` };
+  }
+
+  /** A file of one of the gallery's servable releases; any other hash is unknown to this kiosk. */
+  async file(kiosk: PairedKiosk, sha256: string): Promise<{ data: Buffer; mime: string }> {
+    const listed = await this.releaseFiles.findOne({
+      where: { sha256 },
+      include: [{ model: Release, attributes: [], where: { galleryId: kiosk.station.galleryId, state: { [Op.in]: SERVABLE_STATES } } }],
+    });
+    const data = listed ? await this.files.get(sha256) : null;
+    if (!listed || !data) throw new NotFoundException('This gallery has no such file.');
+    return { data, mime: listed.mime };
+  }
+
+  /** The latest report on the kiosk row, where the fleet list reads it, and every report as history. */
+  async recordHeartbeat(kiosk: PairedKiosk, dto: HeartbeatDto): Promise<void> {
+    const receivedAt = this.clock.now();
+    const fields = { appVersion: dto.appVersion, uptimeS: dto.uptimeS, storageUsedBytes: dto.storageUsedBytes, lastError: dto.lastError };
+    await this.sequelize.transaction(async (transaction) => {
+      await this.heartbeats.create({ kioskId: kiosk.id, receivedAt, releaseId: dto.releaseId, ...fields }, { transaction });
+      await this.kiosks.update({ lastHeartbeatAt: receivedAt, lastReleaseId: dto.releaseId, ...fields }, { where: { id: kiosk.id }, transaction });
+    });
+  }
+
+  /** Each event once, by its id: INSERT IGNORE's affected rows are the ones new to us. */
+  async recordEvents(kiosk: PairedKiosk, { events }: KioskEventsDto): Promise<EventsResponse> {
+    if (events.length === 0) return { stored: 0, duplicates: 0 };
+    const receivedAt = this.clock.now();
+    const rows = events.map((event) => [
+      event.id.toLowerCase(), kiosk.id, kiosk.station.galleryId, event.type, new Date(event.at), event.storyId ?? null, event.panelId ?? null,
+      event.widgetType ?? null, event.param ?? null, event.locale ?? null, event.dwellMs ?? null, event.switch ?? null, receivedAt,
+    ]);
+    const [, affected] = (await this.sequelize.query(
+      `INSERT IGNORE INTO kiosk_events (${EVENT_COLUMNS.join(', ')}) VALUES ${rows.map(() => `(${EVENT_COLUMNS.map(() => '?').join(', ')})`).join(', ')}`,
+      { replacements: rows.flat(), type: QueryTypes.INSERT },
+    )) as unknown as [number, number];
+    return { stored: affected, duplicates: events.length - affected };
+  }
+
+  /** The fleet: every kiosk with its station, gallery, last heartbeat and the releases it plays and should play. */
+  async list(query: ListKiosksQuery): Promise<Page<KioskView>> {
+    const { rows, count } = await this.kiosks.findAndCountAll({
+      include: [{ model: Station, required: true, where: query.galleryId ? { galleryId: query.galleryId } : {}, include: [Gallery] }],
+      order: [['revokedAt', 'ASC'], ['id', 'ASC']],
+      ...pageWindow(query),
+    });
+    return toPage(await this.views(rows as (Kiosk & { station: Station & { gallery: Gallery } })[]), count, query);
+  }
+
+  /** Ends the kiosk's access at once: the guard reads the kiosk on every request. */
+  async revoke(id: number, technician: User): Promise<KioskView> {
+    const kiosk = await this.kiosks.findByPk(id);
+    if (!kiosk) throw new NotFoundException('There is no such kiosk.');
+    if (!kiosk.revokedAt) {
+      await this.sequelize.transaction(async (transaction) => {
+        await kiosk.update({ revokedAt: this.clock.now(), deviceTokenHash: null }, { transaction });
+        await this.audit.record({ actorId: technician.id, action: 'kiosk.revoked', targetType: 'kiosk', targetId: kiosk.id, detail: { stationId: kiosk.stationId } }, transaction);
+      });
+    }
+    return this.get(id);
+  }
+
+  async get(id: number): Promise<KioskView> {
+    const kiosk = await this.kiosks.findByPk(id, { include: [{ model: Station, include: [Gallery] }] });
+    if (!kiosk) throw new NotFoundException('There is no such kiosk.');
+    const [view] = await this.views([kiosk as Kiosk & { station: Station & { gallery: Gallery } }]);
+    return view!;
+  }
+
+  private async views(kiosks: (Kiosk & { station: Station & { gallery: Gallery } })[]): Promise<KioskView[]> {
+    const playing = kiosks.flatMap((k) => (k.lastReleaseId === null ? [] : [k.lastReleaseId]));
+    const galleryIds = [...new Set(kiosks.map((k) => k.station.galleryId))];
+    const [played, live] = await Promise.all([
+      playing.length ? this.releases.findAll({ where: { id: playing }, attributes: ['id', 'number'] }) : [],
+      galleryIds.length ? this.releases.findAll({ where: { liveGalleryId: galleryIds }, attributes: ['id', 'number', 'galleryId'] }) : [],
+    ]);
+    const byId = new Map(played.map((r) => [r.id, r]));
+    const liveByGallery = new Map(live.map((r) => [r.galleryId, r]));
+    return kiosks.map((kiosk) => toKioskView(kiosk, byId, liveByGallery));
+  }
+}

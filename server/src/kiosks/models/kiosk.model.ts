@@ -1,0 +1,47 @@
+import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { Station } from '../../venues/models/station.model.js';
+
+/** A device paired to a station; its gallery is its station's. */
+@Table({ tableName: 'kiosks' })
+export class Kiosk extends Model {
+  @ForeignKey(() => Station)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  stationId: number;
+
+  @BelongsTo(() => Station)
+  station?: Station;
+
+  /** SHA-256 of the device token; null until the kiosk collects it, and again once revoked. */
+  @Column({ type: DataType.CHAR(64), allowNull: true, unique: true })
+  deviceTokenHash: string | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: false })
+  pairedAt: Date;
+
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  pairedById: number | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: true })
+  revokedAt: Date | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: true })
+  lastHeartbeatAt: Date | null;
+
+  /** The release the kiosk last said it plays. */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  lastReleaseId: number | null;
+
+  @Column({ type: DataType.STRING(40), allowNull: true })
+  appVersion: string | null;
+
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  uptimeS: number | null;
+
+  @Column({ type: DataType.BIGINT.UNSIGNED, allowNull: true })
+  storageUsedBytes: number | null;
+
+  @Column({ type: DataType.STRING(1000), allowNull: true })
+  lastError: string | null;
+
+  declare id: number;
+}

@@ -1,0 +1,64 @@
+import { createHash } from 'node:crypto';
+import { Inject, Injectable } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op } from 'sequelize';
+import { MEDIA_STORE, type MediaStore } from '../media/media-store.js';
+import { ReleaseFile } from './models/release-file.model.js';
+
+/** Release files by hash, apart from the media library's keys, so deleting an image never breaks a release. */
+export const releaseFileKey = (sha256: string) => `releases/${sha256}`;
+
+export const sha256Of = (data: Buffer): string => createHash('sha256').update(data).digest('hex');
+
+export interface StoredFile {
+  sha256: string;
+  size: number;
+  mime: string;
+}
+
+/**
+ * The content-addressed half of releases, in the same store as media. A hash is written once and
+ * shared by every release that lists it; a file goes when the last release row naming it goes.
+ */
+@Injectable()
+export class ReleaseFileStore {
+  constructor(
+    @Inject(MEDIA_STORE) private readonly store: MediaStore,
+    @InjectModel(ReleaseFile) private readonly files: typeof ReleaseFile,
+  ) {}
+
+  /**
+   * Lists the file on the release before writing it: a clean-up running at the same moment then
+   * sees the row and keeps the bytes.
+   */
+  async add(releaseId: number, data: Buffer, mime: string): Promise<StoredFile> {
+    const file = { sha256: sha256Of(data), size: data.length, mime };
+    await this.files.bulkCreate([{ releaseId, ...file }], { ignoreDuplicates: true });
+    if (!(await this.store.exists(releaseFileKey(file.sha256)))) await this.store.put(releaseFileKey(file.sha256), data);
+    return file;
+  }
+
+  /** The hashes the release lists whose bytes are not in the store. */
+  async missing(releaseId: number): Promise<string[]> {
+    const rows = await this.files.findAll({ where: { releaseId }, attributes: ['sha256'] });
+    const present = await Promise.all(rows.map((row) => this.store.exists(releaseFileKey(row.sha256))));
+    return rows.filter((_, i) => !present[i]).map((row) => row.sha256);
+  }
+
+  get(sha256: string): Promise<Buffer | null> {
+    return this.store.get(releaseFileKey(sha256));
+  }
+
+  /** Forgets the release's files and deletes the bytes no other release lists. */
+  async discard(releaseId: number): Promise<string[]> {
+    const own = (await this.files.findAll({ where: { releaseId }, attributes: ['sha256'] })).map((row) => row.sha256);
+    await this.files.destroy({ where: { releaseId } });
+    if (own.length === 0) return [];
+    const stillListed = new Set(
+      (await this.files.findAll({ where: { sha256: { [Op.in]: own } }, attributes: ['sha256'] })).map((row) => row.sha256),
+    );
+    const orphans = own.filter((sha256) => !stillListed.has(sha256));
+    for (const sha256 of orphans) await this.store.remove(releaseFileKey(sha256));
+    return orphans;
+  }
+}

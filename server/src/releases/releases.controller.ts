@@ -1,0 +1,65 @@
+import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ROLES } from '@mantlepiece/shared';
+import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
+import { CompareReleasesQuery, ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
+import { ReleasesService } from './releases.service.js';
+import { VenueSigningKeysService } from './venue-signing-keys.service.js';
+
+const PUBLISHERS = ['technician', 'admin'] as const;
+
+@ApiTags('releases')
+@ApiBearerAuth()
+@Controller()
+export class ReleasesController {
+  constructor(
+    private readonly releases: ReleasesService,
+    private readonly keys: VenueSigningKeysService,
+  ) {}
+
+  @Roles(...PUBLISHERS)
+  @Post('galleries/:id/releases')
+  @HttpCode(HttpStatus.ACCEPTED)
+  request(@Param('id', ParseIntPipe) galleryId: number, @Body() dto: RequestReleaseDto, @CurrentUser() user: User) {
+    return this.releases.requestRelease(galleryId, dto, user);
+  }
+
+  @Roles(...ROLES)
+  @Get('galleries/:id/releases')
+  list(@Param('id', ParseIntPipe) galleryId: number, @Query() query: ListReleasesQuery) {
+    return this.releases.listForGallery(galleryId, query);
+  }
+
+  @Roles(...ROLES)
+  @Get('releases/compare')
+  compare(@Query() { a, b }: CompareReleasesQuery) {
+    return this.releases.compare(a, b);
+  }
+
+  @Roles(...ROLES)
+  @Get('releases/:id')
+  get(@Param('id', ParseIntPipe) id: number) {
+    return this.releases.get(id);
+  }
+
+  @Roles(...ROLES)
+  @Get('releases/:id/manifest')
+  manifest(@Param('id', ParseIntPipe) id: number) {
+    return this.releases.signedManifest(id);
+  }
+
+  @Roles(...PUBLISHERS)
+  @Post('releases/:id/publish')
+  @HttpCode(HttpStatus.OK)
+  publish(@Param('id', ParseIntPipe) id: number, @CurrentUser() user: User) {
+    return this.releases.publish(id, user);
+  }
+
+  /** What a kiosk checks release signatures with, for staff to compare with the one a kiosk holds. */
+  @Roles(...ROLES)
+  @Get('venues/:id/signing-key')
+  async signingKey(@Param('id', ParseIntPipe) venueId: number) {
+    return { venueId, algorithm: 'Ed25519', publicKey: await this.keys.publicKeyOf(venueId) };
+  }
+}

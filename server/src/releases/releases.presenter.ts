@@ -1,0 +1,21 @@
+import type { ReleaseStoryView, ReleaseView } from '@mantlepiece/shared';
+import type { Release } from './models/release.model.js';
+
+export const manifestUrlOf = (release: Release): string | null => (release.manifest ? `/api/releases/${release.id}/manifest` : null);
+
+export const toReleaseView = (release: Release, stories: ReleaseStoryView[]): ReleaseView => ({
+  id: release.id,
+  galleryId: release.galleryId,
+  number: release.number,
+  state: release.state,
+  progress: release.progress,
+  phase: release.phase,
+  failure: release.failure,
+  manifestUrl: manifestUrlOf(release),
+  createdAt: release.createdAt.toISOString(),
+  readyAt: release.readyAt?.toISOString() ?? null,
+  publishedAt: release.publishedAt?.toISOString() ?? null,
+  files: release.fileCount,
+  bytes: Number(release.bytes),
+  stories,
+});

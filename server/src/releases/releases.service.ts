@@ -1,0 +1,163 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op, type Transaction } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import type { ManifestResponse, Page, ReleaseComparison, ReleaseStoryView, ReleaseView } from '@mantlepiece/shared';
+import { AuditService } from '../audit/audit.service.js';
+import { Clock } from '../clock/clock.service.js';
+import { pageWindow, toPage } from '../common/page.js';
+import { Revision } from '../revisions/models/revision.model.js';
+import { Story } from '../stories/models/story.model.js';
+import type { User } from '../users/models/user.model.js';
+import { Gallery } from '../venues/models/gallery.model.js';
+import { Venue } from '../venues/models/venue.model.js';
+import type { ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
+import { ReleaseStory } from './models/release-story.model.js';
+import { Release } from './models/release.model.js';
+import { releaseRefusal, ReleaseContentService } from './release-content.service.js';
+import { toReleaseView } from './releases.presenter.js';
+import { ReleasesWorker } from './releases.worker.js';
+
+@Injectable()
+export class ReleasesService {
+  constructor(
+    @InjectModel(Release) private readonly releases: typeof Release,
+    @InjectModel(ReleaseStory) private readonly releaseStories: typeof ReleaseStory,
+    @InjectModel(Gallery) private readonly galleries: typeof Gallery,
+    @InjectModel(Story) private readonly stories: typeof Story,
+    @InjectModel(Revision) private readonly revisions: typeof Revision,
+    private readonly content: ReleaseContentService,
+    private readonly worker: ReleasesWorker,
+    private readonly audit: AuditService,
+    private readonly clock: Clock,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  /**
+   * Checks the rules on the revisions the release will carry, then queues its build: the answer
+   * comes at once, the build runs in the worker. The revisions are fixed here, so the release is
+   * exactly what was checked.
+   */
+  async requestRelease(galleryId: number, dto: RequestReleaseDto, user: User): Promise<{ id: number; state: 'building' }> {
+    const release = await this.sequelize.transaction(async (transaction) => {
+      // Locking the gallery numbers its releases one after another.
+      const gallery = await this.galleries.findByPk(galleryId, { include: [Venue], transaction, lock: transaction.LOCK.UPDATE });
+      if (!gallery?.venue) throw new NotFoundException('There is no such gallery.');
+      const chosen = await this.content.chooseRevisions(galleryId, dto.revisionIds, transaction);
+      const problems = await this.content.problemsOf(gallery.venue, chosen, transaction);
+      if (problems.length) throw releaseRefusal('This release cannot be built yet.', problems);
+
+      const last = (await this.releases.max<number, Release>('number', { where: { galleryId }, transaction })) ?? 0;
+      const created = await this.releases.create(
+        { galleryId, number: last + 1, state: 'building', progress: 0, phase: 'Waiting for the build worker', createdById: user.id },
+        { transaction },
+      );
+      await this.releaseStories.bulkCreate(
+        chosen.map(({ story, revision }, position) => ({ releaseId: created.id, storyId: story.id, revisionId: revision.id, position })),
+        { transaction },
+      );
+      await this.audit.record({
+        actorId: user.id, action: 'release.requested', targetType: 'release', targetId: created.id,
+        detail: { galleryId, number: created.number, revisionIds: chosen.map((c) => c.revision.id) },
+      }, transaction);
+      return created;
+    });
+    this.worker.kick();
+    return { id: release.id, state: 'building' };
+  }
+
+  async get(id: number): Promise<ReleaseView> {
+    const release = await this.find(id);
+    return toReleaseView(release, await this.storiesOf(release.id));
+  }
+
+  /** Newest first. */
+  async listForGallery(galleryId: number, query: ListReleasesQuery): Promise<Page<ReleaseView>> {
+    if (!(await this.galleries.findByPk(galleryId, { attributes: ['id'] }))) throw new NotFoundException('There is no such gallery.');
+    const { rows, count } = await this.releases.findAndCountAll({
+      where: { galleryId },
+      attributes: { exclude: ['manifest'] },
+      order: [['number', 'DESC']],
+      ...pageWindow(query),
+    });
+    const items = await Promise.all(rows.map(async (release) => toReleaseView(release, await this.storiesOf(release.id))));
+    return toPage(items, count, query);
+  }
+
+  /** The signed manifest as a kiosk receives it, for staff to read. */
+  async signedManifest(id: number): Promise<ManifestResponse> {
+    const release = await this.find(id);
+    if (!release.manifest || !release.signature) throw new ConflictException('This release has no signed manifest: it is still building, or it failed.');
+    return { manifest: release.manifest, signature: release.signature };
+  }
+
+  /**
+   * Makes the release Live for its gallery and the Live one before it Superseded, in one
+   * transaction. Publishing a Superseded release is the rollback.
+   */
+  async publish(id: number, user: User): Promise<ReleaseView> {
+    await this.sequelize.transaction(async (transaction) => {
+      const release = await this.releases.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!release) throw new NotFoundException('There is no such release.');
+      if (release.state !== 'ready' && release.state !== 'superseded') {
+        throw new ConflictException(`Release ${release.number} is ${release.state}; only a Ready or Superseded release can go Live.`);
+      }
+      const previous = await this.releases.findOne({ where: { liveGalleryId: release.galleryId }, transaction, lock: transaction.LOCK.UPDATE });
+      if (previous) await previous.update({ state: 'superseded', liveGalleryId: null }, { transaction });
+      const now = this.clock.now();
+      const rollback = release.state === 'superseded';
+      await release.update({ state: 'live', liveGalleryId: release.galleryId, publishedAt: now, publishedById: user.id }, { transaction });
+      await this.markStoriesReleased(release.id, now, transaction);
+      await this.audit.record({
+        actorId: user.id, action: rollback ? 'release.rolled-back' : 'release.published', targetType: 'release', targetId: release.id,
+        detail: { galleryId: release.galleryId, number: release.number, previousReleaseId: previous?.id ?? null },
+      }, transaction);
+    });
+    return this.get(id);
+  }
+
+  /** What changed from release `a` to release `b`, story by story. */
+  async compare(aId: number, bId: number): Promise<ReleaseComparison> {
+    const [a, b] = await Promise.all([this.find(aId), this.find(bId)]);
+    const [before, after] = await Promise.all([this.storiesOf(a.id), this.storiesOf(b.id)]);
+    const beforeById = new Map(before.map((s) => [s.storyId, s]));
+    const afterIds = new Set(after.map((s) => s.storyId));
+    const comparison: ReleaseComparison = {
+      a: { id: a.id, number: a.number }, b: { id: b.id, number: b.number }, added: [], removed: before.filter((s) => !afterIds.has(s.storyId)), changed: [], unchanged: [],
+    };
+    for (const story of after) {
+      const old = beforeById.get(story.storyId);
+      if (!old) comparison.added.push(story);
+      else if (old.revisionId !== story.revisionId) comparison.changed.push({ storyId: story.storyId, title: story.title, from: old, to: story });
+      else comparison.unchanged.push(story);
+    }
+    return comparison;
+  }
+
+  /** The release Live for a gallery, if any. */
+  liveFor(galleryId: number): Promise<Release | null> {
+    return this.releases.findOne({ where: { liveGalleryId: galleryId } });
+  }
+
+  private async markStoriesReleased(releaseId: number, now: Date, transaction: Transaction): Promise<void> {
+    const storyIds = (await this.releaseStories.findAll({ where: { releaseId }, attributes: ['storyId'], transaction })).map((r) => r.storyId);
+    await this.stories.update({ releasedAt: now }, { where: { id: { [Op.in]: storyIds }, releasedAt: null }, transaction });
+  }
+
+  private async storiesOf(releaseId: number): Promise<ReleaseStoryView[]> {
+    const rows = await this.releaseStories.findAll({ where: { releaseId }, order: [['position', 'ASC']] });
+    const revisions = new Map(
+      (await this.revisions.findAll({ where: { id: rows.map((r) => r.revisionId) }, attributes: ['id', 'number', 'snapshot'] })).map((r) => [r.id, r]),
+    );
+    return rows.map((row) => {
+      const revision = revisions.get(row.revisionId);
+      return { storyId: row.storyId, revisionId: row.revisionId, revisionNumber: revision?.number ?? 0, title: revision?.snapshot.story.title ?? '' };
+    });
+  }
+
+  private async find(id: number): Promise<Release> {
+    const release = await this.releases.findByPk(id);
+    if (!release) throw new NotFoundException('There is no such release.');
+    return release;
+  }
+}
