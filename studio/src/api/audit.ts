@@ -1,7 +1,6 @@
 import { keepPreviousData, useMutation, useQuery } from '@tanstack/react-query';
-import type { Page } from '@mantlepiece/shared';
+import type { AuditEventView, Page } from '@mantlepiece/shared';
 import { api, apiFile } from './client';
-import type { PersonRef } from './revisions';
 
 export interface AuditFilter {
   actorId?: number;
@@ -11,19 +10,10 @@ export interface AuditFilter {
   to?: string;
 }
 
-export interface AuditEntryView {
-  id: number;
-  at: string;
-  actor: PersonRef | null;
-  action: string;
-  target: string;
-  details: unknown;
-}
-
 export function useAuditLog(params: AuditFilter & { page: number; pageSize: number }) {
   return useQuery({
     queryKey: ['audit', params],
-    queryFn: () => api<Page<AuditEntryView>>('/audit', { query: { ...params } }),
+    queryFn: () => api<Page<AuditEventView>>('/audit', { query: { ...params } }),
     placeholderData: keepPreviousData,
   });
 }

@@ -1,27 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CommentRange, CommentView, RevisionView } from '@mantlepiece/shared';
 import { api } from './client';
-import { revisionKey, type PersonRef, type RevisionView } from './revisions';
-
-/** Character offsets into the panel's text as the revision shows it, with the words they cover. */
-export interface CommentRange {
-  from: number;
-  to: number;
-  quote: string;
-}
-
-export interface CommentView {
-  id: number;
-  revisionId: number;
-  panelId: number | null;
-  range: CommentRange | null;
-  body: string;
-  author: PersonRef;
-  parentId: number | null;
-  resolvedAt: string | null;
-  resolvedBy: PersonRef | null;
-  createdAt: string;
-  carriedFromRevisionId: number | null;
-}
+import { revisionKey } from './revisions';
 
 export interface NewComment {
   panelId?: number;

@@ -1,24 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page } from '@mantlepiece/shared';
+import type { NotificationPage, NotificationPreferences } from '@mantlepiece/shared';
 import { api } from './client';
-
-export const NOTIFICATION_KINDS = ['revision_submitted', 'verdict', 'comment_reply'] as const;
-export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
-
-export interface NotificationView {
-  id: number;
-  kind: NotificationKind;
-  title: string;
-  body: string;
-  /** A studio path, such as /reviews/12. */
-  link: string;
-  readAt: string | null;
-  createdAt: string;
-}
-
-export type NotificationPage = Page<NotificationView> & { unread: number };
-
-export type NotificationPreferences = Record<NotificationKind, { email: boolean }>;
 
 const notificationsKey = ['notifications'] as const;
 const preferencesKey = ['notification-preferences'] as const;

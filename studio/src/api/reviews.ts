@@ -1,10 +1,10 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page, StoryDetailView, StoryState } from '@mantlepiece/shared';
+import type { Page, ReviewQueueItem, StoryDetailView, Verdict, VerdictResult } from '@mantlepiece/shared';
 import { api } from './client';
-import { revisionKey, type PersonRef, type ReviewVerdictView } from './revisions';
+import { revisionKey } from './revisions';
 import { storyKey } from './stories';
 
-export const QUEUE_SORTS = ['submittedAt', '-submittedAt', 'storyTitle', '-storyTitle'] as const;
+export const QUEUE_SORTS = ['submittedAt', '-submittedAt', 'storyTitle', '-storyTitle', 'blockers', '-blockers'] as const;
 export type QueueSort = (typeof QUEUE_SORTS)[number];
 
 export interface QueueParams {
@@ -14,27 +14,12 @@ export interface QueueParams {
   sort?: QueueSort;
 }
 
-export interface QueueItem {
-  revisionId: number;
-  storyId: number;
-  storyTitle: string;
-  number: number;
-  submittedAt: string;
-  submittedBy: PersonRef;
-  blockers: number;
-  warnings: number;
-  approvals: number;
-  requiredApprovals: number;
-}
-
-export type Verdict = ReviewVerdictView['verdict'];
-
 const reviewsKey = ['reviews'] as const;
 
 export function useReviewQueue(params: QueueParams) {
   return useQuery({
     queryKey: [...reviewsKey, 'queue', params],
-    queryFn: () => api<Page<QueueItem>>('/reviews/queue', { query: { ...params } }),
+    queryFn: () => api<Page<ReviewQueueItem>>('/reviews/queue', { query: { ...params } }),
     placeholderData: keepPreviousData,
   });
 }
@@ -43,7 +28,7 @@ export function useRecordVerdict(revisionId: number, storyId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (verdict: { verdict: Verdict; note?: string }) =>
-      api<{ review: ReviewVerdictView; storyState: StoryState }>(`/revisions/${revisionId}/reviews`, { method: 'POST', body: verdict }),
+      api<VerdictResult>(`/revisions/${revisionId}/reviews`, { method: 'POST', body: verdict }),
     onSuccess: ({ storyState }) => {
       queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) => (current ? { ...current, state: storyState } : current));
       void queryClient.invalidateQueries({ queryKey: revisionKey(revisionId) });

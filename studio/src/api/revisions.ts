@@ -1,70 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { PanelDiff, PanelDocJSON, PreflightEntry, StoryDetailView, StoryState, StoryView } from '@mantlepiece/shared';
+import type { RevisionComparison, RevisionSummary, RevisionView, StoryDetailView, StoryState, StoryView, SubmitResult } from '@mantlepiece/shared';
 import { api } from './client';
-import type { CommentView } from './comments';
 import { storyKey } from './stories';
-
-export type RevisionState = 'open' | 'approved' | 'changes_requested' | 'superseded';
-
-export interface PersonRef {
-  id: number;
-  name: string;
-}
-
-export interface RevisionSummary {
-  id: number;
-  number: number;
-  hash: string;
-  state: RevisionState;
-  submittedAt: string;
-  submittedBy: PersonRef;
-  approvals: number;
-  blockers: number;
-}
-
-/** A panel as it was frozen into the revision: its document in every locale. */
-export interface RevisionPanel {
-  panelId: number;
-  position: number;
-  docs: Record<string, PanelDocJSON>;
-  wordBudget: number;
-}
-
-export interface ReviewVerdictView {
-  id: number;
-  verdict: 'approve' | 'request_changes';
-  note: string | null;
-  reviewer: PersonRef;
-  createdAt: string;
-}
-
-export interface RevisionView {
-  id: number;
-  storyId: number;
-  storyTitle: string;
-  number: number;
-  hash: string;
-  state: RevisionState;
-  submittedAt: string;
-  submittedBy: PersonRef;
-  snapshot: RevisionPanel[];
-  preflight: PreflightEntry[];
-  reviews: ReviewVerdictView[];
-  comments: CommentView[];
-  previousApprovedRevisionId: number | null;
-}
-
-export interface RevisionComparison {
-  base: RevisionView | null;
-  diff: PanelDiff[];
-}
-
-export interface SubmittedRevision {
-  revisionId: number;
-  number: number;
-  state: StoryState;
-  preflight: PreflightEntry[];
-}
 
 export const revisionKey = (id: number) => ['revision', id] as const;
 const storyRevisionsKey = (storyId: number) => ['story', storyId, 'revisions'] as const;
@@ -103,7 +40,7 @@ function useStoryStateChange(storyId: number) {
 export function useSubmitStory(storyId: number) {
   const changeState = useStoryStateChange(storyId);
   return useMutation({
-    mutationFn: () => api<SubmittedRevision>(`/stories/${storyId}/submit`, { method: 'POST' }),
+    mutationFn: () => api<SubmitResult>(`/stories/${storyId}/submit`, { method: 'POST' }),
     onSuccess: (revision) => changeState(revision.state),
   });
 }

@@ -2,7 +2,8 @@ import { useState, type FormEvent } from 'react';
 import { Button, Field, makeStyles, Textarea, tokens } from '@fluentui/react-components';
 import { DismissRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
-import { useAddComment, type CommentRange, type NewComment } from '../../api/comments';
+import type { CommentRange } from '@mantlepiece/shared';
+import { useAddComment, type NewComment } from '../../api/comments';
 import { describeError } from '../forms/describe-error';
 
 const useStyles = makeStyles({

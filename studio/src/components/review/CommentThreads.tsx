@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { Badge, Button, makeStyles, Text, tokens } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
-import { useResolveComment, type CommentRange, type CommentView } from '../../api/comments';
+import type { CommentRange, CommentView } from '@mantlepiece/shared';
+import { useResolveComment } from '../../api/comments';
 import { useDateFormat } from '../formatting';
 import { FormAlert } from '../forms/FormAlert';
 import { describeError } from '../forms/describe-error';
@@ -28,7 +29,7 @@ function CommentBody({ comment }: { comment: CommentView }) {
   return (
     <>
       <div className={styles.byline}>
-        <Text weight="semibold">{comment.author.name}</Text>
+        <Text weight="semibold">{comment.author?.name ?? t('revision.formerColleague')}</Text>
         <Text className={shared.muted}>{formatDate(comment.createdAt)}</Text>
         {comment.carriedFromRevisionId !== null ? <Badge appearance="outline" color="informative">{t('comments.carried')}</Badge> : null}
       </div>

@@ -1,10 +1,8 @@
 import { useRef, useState } from 'react';
 import { Badge, type BadgeProps, makeStyles, Text, tokens } from '@fluentui/react-components';
-import type { PanelDiff, PanelDocJSON } from '@mantlepiece/shared';
+import type { CommentRange, CommentView, PanelDiff, PanelDocJSON, RevisionPanelView } from '@mantlepiece/shared';
 import { PanelFrame, PanelView, type ResolveMedia } from '@mantlepiece/shared/react';
 import { useTranslation } from 'react-i18next';
-import type { CommentRange, CommentView } from '../../api/comments';
-import type { RevisionPanel } from '../../api/revisions';
 import { CommentThreads } from './CommentThreads';
 import { useReviewStyles } from './review-styles';
 import { selectionRangeIn } from './text-selection';
@@ -51,8 +49,8 @@ function Drawing({ doc, locale, resolveMedia }: { doc: PanelDocJSON; locale: str
 
 export interface PanelComparisonProps {
   diff: PanelDiff;
-  panel: RevisionPanel | undefined;
-  basePanel: RevisionPanel | undefined;
+  panel: RevisionPanelView | undefined;
+  basePanel: RevisionPanelView | undefined;
   /** Whether there is a last approved revision at all. */
   hasBase: boolean;
   locale: string;

@@ -1,6 +1,6 @@
 import { Badge, type BadgeProps } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
-import type { RevisionState } from '../../api/revisions';
+import type { RevisionState } from '@mantlepiece/shared';
 
 const COLOURS: Record<RevisionState, BadgeProps['color']> = {
   open: 'warning',

@@ -45,7 +45,7 @@ function RevisionList({ storyId }: { storyId: number }) {
             <li key={revision.id} className={styles.revision} data-revision-id={revision.id}>
               <TextLink to={`/reviews/${revision.id}`}>{t('revision.number', { number: revision.number })}</TextLink>
               <RevisionStateBadge state={revision.state} />
-              <Text className={shared.muted}>{t('revision.submitted', { name: revision.submittedBy.name, date: formatDate(revision.submittedAt) })}</Text>
+              <Text className={shared.muted}>{t('revision.submitted', { name: revision.submittedBy?.name ?? t('revision.formerColleague'), date: formatDate(revision.submittedAt) })}</Text>
               {revision.blockers > 0 ? <Text>{t('reviews.blockers', { count: revision.blockers })}</Text> : null}
               <code className={shared.hash} title={revision.hash}>{revision.hash.slice(0, 12)}</code>
             </li>

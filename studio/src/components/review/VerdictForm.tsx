@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
 import { Button, Field, makeStyles, Radio, RadioGroup, Text, Textarea, tokens } from '@fluentui/react-components';
-import type { PreflightEntry } from '@mantlepiece/shared';
+import type { PreflightEntry, Verdict } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { ApiError } from '../../api/client';
-import { useRecordVerdict, type Verdict } from '../../api/reviews';
+import { useRecordVerdict } from '../../api/reviews';
 import { FormAlert } from '../forms/FormAlert';
 import { describeError } from '../forms/describe-error';
 import { useReviewStyles } from './review-styles';

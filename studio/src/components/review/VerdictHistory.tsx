@@ -1,7 +1,7 @@
 import { makeStyles, Text, tokens } from '@fluentui/react-components';
 import { CheckmarkCircleRegular, ArrowUndoRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
-import type { ReviewVerdictView } from '../../api/revisions';
+import type { ReviewView } from '@mantlepiece/shared';
 import { useDateFormat } from '../formatting';
 import { useReviewStyles } from './review-styles';
 
@@ -15,7 +15,7 @@ const useStyles = makeStyles({
 });
 
 /** The verdicts recorded on a revision, oldest first, each with its note. */
-export function VerdictHistory({ reviews }: { reviews: ReviewVerdictView[] }) {
+export function VerdictHistory({ reviews }: { reviews: ReviewView[] }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const shared = useReviewStyles();
@@ -29,7 +29,7 @@ export function VerdictHistory({ reviews }: { reviews: ReviewVerdictView[] }) {
             ? <CheckmarkCircleRegular className={`${styles.icon} ${styles.approve}`} aria-hidden="true" />
             : <ArrowUndoRegular className={`${styles.icon} ${styles.changes}`} aria-hidden="true" />}
           <Text>
-            <Text weight="semibold">{t(review.verdict === 'approve' ? 'verdict.approvedBy' : 'verdict.changesBy', { name: review.reviewer.name })}</Text>
+            <Text weight="semibold">{t(review.verdict === 'approve' ? 'verdict.approvedBy' : 'verdict.changesBy', { name: review.reviewer?.name ?? t('revision.formerColleague') })}</Text>
             <span className={shared.muted}> · {formatDate(review.createdAt)}</span>
           </Text>
           {review.note ? <p className={styles.note}>{review.note}</p> : null}

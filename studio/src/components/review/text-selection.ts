@@ -1,4 +1,4 @@
-import type { CommentRange } from '../../api/comments';
+import type { CommentRange } from '@mantlepiece/shared';
 
 /**
  * Where a selection sits in an element's text, as character offsets over the element's text

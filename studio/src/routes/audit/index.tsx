@@ -3,7 +3,8 @@ import { Button, Field, Input, makeStyles, Select, Table, TableBody, TableCell, 
 import { ArrowDownloadRegular, HistoryRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { useSearchParams } from 'react-router-dom';
-import { useAuditLog, useDownloadAuditCsv, type AuditEntryView } from '../../api/audit';
+import type { AuditEventView } from '@mantlepiece/shared';
+import { useAuditLog, useDownloadAuditCsv } from '../../api/audit';
 import { useUsers } from '../../api/users';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
@@ -13,6 +14,7 @@ import { ListStates } from '../../components/lists/ListStates';
 import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
 import { PageHeader } from '../../components/PageHeader';
+import { saveFile } from '../../components/save-file';
 import { useDebounced } from '../people/use-debounced';
 import { auditFileName, readAuditFilter, readAuditParams } from './list-params';
 
@@ -29,18 +31,7 @@ const ACTOR_CHOICES = { page: 1, pageSize: 100, sort: 'name' } as const;
 
 const detailsText = (details: unknown) => (details === null || details === undefined ? '' : typeof details === 'string' ? details : JSON.stringify(details));
 
-/** Saves a file the API sent, under a name of ours. */
-function saveFile(blob: Blob, name: string) {
-  const url = URL.createObjectURL(blob);
-  const anchor = document.createElement('a');
-  anchor.href = url;
-  anchor.download = name;
-  anchor.click();
-  // The click has started the download; the URL can go once the browser has taken it.
-  setTimeout(() => URL.revokeObjectURL(url), 0);
-}
-
-function AuditTable({ entries, busy }: { entries: AuditEntryView[]; busy: boolean }) {
+function AuditTable({ entries, busy }: { entries: AuditEventView[]; busy: boolean }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const formatDate = useDateFormat();
@@ -61,7 +52,7 @@ function AuditTable({ entries, busy }: { entries: AuditEntryView[]; busy: boolea
             <TableCell>{formatDate(entry.at)}</TableCell>
             <TableCell>{entry.actor?.name ?? <span className={styles.muted}>{t('audit.system')}</span>}</TableCell>
             <TableCell><span className={styles.code}>{entry.action}</span></TableCell>
-            <TableCell>{entry.target}</TableCell>
+            <TableCell>{entry.target ? <span className={styles.code}>{`${entry.target.type} ${entry.target.id}`}</span> : null}</TableCell>
             <TableCell><span className={styles.details}>{detailsText(entry.details)}</span></TableCell>
           </TableRow>
         ))}

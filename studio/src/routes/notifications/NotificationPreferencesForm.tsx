@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { Button, Checkbox, makeStyles, Spinner, Text, tokens } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
-import { NOTIFICATION_KINDS, useNotificationPreferences, useUpdateNotificationPreferences, type NotificationPreferences } from '../../api/notifications';
+import { NOTIFICATION_KINDS, type NotificationPreferences } from '@mantlepiece/shared';
+import { useNotificationPreferences, useUpdateNotificationPreferences } from '../../api/notifications';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
 import { useReviewStyles } from '../../components/review/review-styles';

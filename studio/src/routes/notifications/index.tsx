@@ -2,7 +2,8 @@ import { Button, makeStyles, Switch, Text, tokens } from '@fluentui/react-compon
 import { AlertRegular, CheckmarkRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { useSearchParams } from 'react-router-dom';
-import { useMarkNotificationsRead, useNotifications, type NotificationView } from '../../api/notifications';
+import type { NotificationView } from '@mantlepiece/shared';
+import { useMarkNotificationsRead, useNotifications } from '../../api/notifications';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';

@@ -1,6 +1,7 @@
 import { Badge, makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
-import type { QueueItem, QueueSort } from '../../api/reviews';
+import type { ReviewQueueItem } from '@mantlepiece/shared';
+import type { QueueSort } from '../../api/reviews';
 import { useDateFormat } from '../../components/formatting';
 import { TextLink } from '../../components/links';
 import { sortableColumn } from '../../components/lists/list-search';
@@ -12,7 +13,7 @@ const useStyles = makeStyles({
   muted: { color: tokens.colorNeutralForeground3 },
 });
 
-export function ReviewQueueTable({ items, sort, onSort, busy }: { items: QueueItem[]; sort: QueueSort; onSort: (sort: QueueSort) => void; busy: boolean }) {
+export function ReviewQueueTable({ items, sort, onSort, busy }: { items: ReviewQueueItem[]; sort: QueueSort; onSort: (sort: QueueSort) => void; busy: boolean }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const formatDate = useDateFormat();
@@ -36,7 +37,7 @@ export function ReviewQueueTable({ items, sort, onSort, busy }: { items: QueueIt
               <span className={styles.title}><TextLink to={`/reviews/${item.revisionId}`}>{item.storyTitle}</TextLink></span>
             </TableCell>
             <TableCell className={styles.number}>{t('revision.number', { number: item.number })}</TableCell>
-            <TableCell>{item.submittedBy.name}</TableCell>
+            <TableCell>{item.submittedBy?.name ?? t('revision.formerColleague')}</TableCell>
             <TableCell>{formatDate(item.submittedAt)}</TableCell>
             <TableCell>
               {item.blockers > 0 ? <Badge appearance="filled" color="danger">{t('reviews.blockers', { count: item.blockers })}</Badge> : <span className={styles.muted}>{t('reviews.none')}</span>}

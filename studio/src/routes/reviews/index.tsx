@@ -13,17 +13,29 @@ import { PageHeader } from '../../components/PageHeader';
 import { useDebounced } from '../people/use-debounced';
 import { DEFAULT_QUEUE_SORT, readQueueParams } from './list-params';
 import { ReviewQueueTable } from './ReviewQueueTable';
+import { SubmittedStories } from './SubmittedStories';
 
 const useStyles = makeStyles({
   toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
   search: { minWidth: '18rem' },
 });
 
-/** The revisions waiting for a verdict; a curator sees the ones they submitted. */
+/** Educators get the queue of revisions waiting for a verdict; curators follow their stories through review. */
 export function ReviewsPage() {
   const { t } = useTranslation();
-  const styles = useStyles();
   const me = useCurrentUser();
+  if (me.roles.includes('educator')) return <ReviewQueue />;
+  return (
+    <>
+      <PageHeader title={t('reviews.title')} intro={t('reviews.introCurator')} />
+      <SubmittedStories />
+    </>
+  );
+}
+
+function ReviewQueue() {
+  const { t } = useTranslation();
+  const styles = useStyles();
   const [search, setSearch] = useSearchParams();
   const params = readQueueParams(search);
   const queue = useReviewQueue(params);
@@ -31,7 +43,6 @@ export function ReviewsPage() {
   const settledQuery = useDebounced(query.trim(), 300);
   const urlQuery = useRef(params.q ?? '');
   urlQuery.current = params.q ?? '';
-  const reviewer = me.roles.includes('educator') || me.roles.includes('admin');
 
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
   useEffect(() => {
@@ -40,7 +51,7 @@ export function ReviewsPage() {
 
   return (
     <>
-      <PageHeader title={t('reviews.title')} intro={reviewer ? t('reviews.intro') : t('reviews.introCurator')} />
+      <PageHeader title={t('reviews.title')} intro={t('reviews.intro')} />
       <div className={styles.toolbar} role="search">
         <Field label={t('reviews.search')} className={styles.search}>
           <SearchBox value={query} onChange={(_event, data) => setQuery(data.value)} />
@@ -60,7 +71,7 @@ export function ReviewsPage() {
             </EmptyState>
           ) : (
             <EmptyState icon={<ClipboardTaskListLtrRegular />} title={t('reviews.emptyTitle')}>
-              {reviewer ? t('reviews.emptyBody') : t('reviews.emptyBodyCurator')}
+              {t('reviews.emptyBody')}
             </EmptyState>
           )
         }

@@ -1,11 +1,11 @@
 import { useMemo } from 'react';
 import { Badge, Link, makeStyles, Spinner, Text, tokens } from '@fluentui/react-components';
-import { mediaIdsIn } from '@mantlepiece/shared';
+import { mediaIdsIn, type RevisionView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
 import { useMediaAssets } from '../../api/media';
-import { useRevision, useRevisionComparison, type RevisionView } from '../../api/revisions';
+import { useRevision, useRevisionComparison } from '../../api/revisions';
 import { useCurrentUser } from '../../api/session';
 import { useStory } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
@@ -91,7 +91,7 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
               {t('revision.hash')}{' '}
               <code className={shared.hash} title={revision.hash} aria-label={revision.hash}>{revision.hash.slice(0, SHORT_HASH)}</code>
             </span>
-            <span>{t('revision.submitted', { name: revision.submittedBy.name, date: formatDate(revision.submittedAt) })}</span>
+            <span>{t('revision.submitted', { name: revision.submittedBy?.name ?? t('revision.formerColleague'), date: formatDate(revision.submittedAt) })}</span>
           </span>
         }
         actions={<LinkButton to={`/stories/${revision.storyId}`}>{t('revision.openStory')}</LinkButton>}

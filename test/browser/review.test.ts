@@ -1,0 +1,147 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import mailparser, { type ParsedMail } from 'mailparser';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { baseUrl, demoPassword, launchBrowser, newContext, signIn } from '../support/browser.js';
+
+// A fresh title per run, so the test never meets a story an earlier run left behind.
+const title = `How fast plates move ${Date.now().toString(36)}`;
+// The first draft is wrong on purpose: plates move a few cm per year, about 1 to 15 (brief, facts of the trade).
+const wrongText = 'The plates under our feet move about 50 metres every year.';
+const fixedText = 'The plates under our feet move a few centimetres every year.';
+const note = 'Plates move a few centimetres a year, not 50 metres. Please fix the rate.';
+
+let browser: Browser;
+let curator: Page;
+let educator: Page;
+let storyId: number;
+
+const panelDoc = (text: string) => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text }] }] });
+
+async function apiAs(email: string) {
+  const login = await fetch(`${baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password: demoPassword }),
+  });
+  expect(login.status, `sign-in of ${email}`).toBe(200);
+  const { accessToken } = (await login.json()) as { accessToken: string };
+  return async <T>(method: string, url: string, body?: unknown): Promise<T> => {
+    const response = await fetch(`${baseUrl}/api${url}`, {
+      method,
+      headers: { Authorization: `Bearer ${accessToken}`, 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+    expect(response.ok, `${method} ${url} answered ${response.status}: ${await response.clone().text()}`).toBe(true);
+    return (await response.json()) as T;
+  };
+}
+
+const stateBadge = (page: Page) => page.locator('header').getByText(/^(Draft|In review|Changes requested|Approved|Retired)$/).first().textContent();
+
+/** Every captured message the stand-in wrote for one recipient, parsed. */
+async function mailTo(recipient: string): Promise<ParsedMail[]> {
+  const dir = process.env.MAIL_DIR;
+  if (!dir) throw new Error('MAIL_DIR must point at the SMTP stand-in’s folder');
+  const files = fs.readdirSync(dir).filter((name) => name.endsWith('.eml') && !name.startsWith('.'));
+  const parsed = await Promise.all(files.map((name) => mailparser.simpleParser(fs.readFileSync(path.join(dir, name)))));
+  // The stand-in records the envelope's RCPT TO as a header.
+  return parsed.filter((mail) => mail.headers.get('x-envelope-to') === recipient);
+}
+
+beforeAll(async () => {
+  const asCurator = await apiAs('curator@demo.test');
+  const story = await asCurator<{ id: number }>('POST', '/stories', { title, audience: 'family' });
+  storyId = story.id;
+  await asCurator('POST', `/stories/${storyId}/panels`, { doc: panelDoc(wrongText), position: 0, wordBudget: 60 });
+
+  browser = await launchBrowser();
+  curator = await (await newContext(browser)).newPage();
+  educator = await (await newContext(browser)).newPage();
+  await signIn(curator, 'curator@demo.test');
+  await signIn(educator, 'educator@demo.test');
+});
+afterAll(() => browser?.close());
+
+describe('a story goes through review in the browser', () => {
+  it('the curator submits the story and sees its preflight and the In review badge', async () => {
+    await curator.goto(`/stories/${storyId}`);
+    await curator.getByRole('heading', { level: 1, name: title }).waitFor();
+    expect(await stateBadge(curator)).toBe('Draft');
+    await curator.getByRole('button', { name: 'Submit for review' }).click();
+    await curator.getByText('Revision 1 is submitted', { exact: false }).waitFor();
+    expect(await curator.getByText(/No blockers/).count()).toBeGreaterThan(0);
+    await expect.poll(() => stateBadge(curator)).toBe('In review');
+  });
+
+  it('the educator finds it in the review queue and asks for changes with a note', async () => {
+    await educator.getByRole('navigation', { name: 'Studio areas' }).getByRole('link', { name: 'Reviews' }).click();
+    await educator.getByRole('heading', { level: 1, name: 'Reviews' }).waitFor();
+    await educator.getByRole('link', { name: title }).click();
+    await educator.getByRole('heading', { level: 1, name: `${title} · revision 1` }).waitFor();
+    await educator.getByRole('radio', { name: 'Request changes' }).check();
+    // A request for changes without a note is refused before it is sent.
+    await educator.getByRole('button', { name: 'Send back for changes' }).click();
+    await educator.getByText('a request for changes needs a note', { exact: false }).waitFor();
+    await educator.getByRole('textbox', { name: 'What should change' }).fill(note);
+    await educator.getByRole('button', { name: 'Send back for changes' }).click();
+    await educator.getByText('Sent back to the curator with your note.').waitFor();
+  });
+
+  it('the curator sees the note, fixes the panel and resubmits', async () => {
+    await curator.reload();
+    await expect.poll(() => stateBadge(curator)).toBe('Changes requested');
+    await curator.getByText(/^Revisions? \(1\)$/).click();
+    await curator.locator('[data-story-revisions]').getByRole('link', { name: 'Revision 1' }).click();
+    await curator.locator('[data-verdict="request_changes"]').getByText(note).waitFor();
+
+    await curator.getByRole('link', { name: 'Open the story' }).first().click();
+    const editor = curator.getByRole('textbox', { name: 'Panel text' });
+    await editor.waitFor();
+    await editor.click();
+    await curator.keyboard.press('ControlOrMeta+a');
+    await curator.keyboard.type(fixedText);
+    await expect.poll(() => curator.locator('[data-save-status]').getAttribute('data-save-status')).toBe('saved');
+    await curator.getByRole('button', { name: 'Submit for review' }).click();
+    await curator.getByText('Revision 2 is submitted', { exact: false }).waitFor();
+    await expect.poll(() => stateBadge(curator)).toBe('In review');
+  });
+
+  it('the educator sees the word-level change against nothing approved yet, and approves', async () => {
+    await educator.goto('/reviews');
+    await educator.getByRole('link', { name: title }).click();
+    await educator.getByRole('heading', { level: 1, name: `${title} · revision 2` }).waitFor();
+    // Nothing was approved before, so every word of the panel is new.
+    await expect.poll(() => educator.locator('[data-text-diff] ins').first().textContent()).toContain('a few centimetres');
+    await educator.getByRole('radio', { name: 'Approve' }).check();
+    await educator.getByRole('button', { name: 'Approve this revision' }).click();
+    await educator.getByText('Approved. The story can now go into a release.').waitFor();
+  });
+
+  it('the curator sees the approval: the state badge and a notification', async () => {
+    await curator.reload();
+    await expect.poll(() => stateBadge(curator)).toBe('Approved');
+    await expect.poll(async () => Number(await curator.locator('[data-unread]').first().getAttribute('data-unread')), { timeout: 40_000 }).toBeGreaterThan(0);
+    await curator.getByRole('link', { name: /^Notifications, \d+ unread$/ }).click();
+    await curator.getByRole('heading', { level: 1, name: 'Notifications' }).waitFor();
+    const approval = curator.getByRole('link', { name: `“${title}”: revision 2 approved` });
+    await approval.waitFor();
+    expect(await approval.getAttribute('href')).toMatch(/^\/reviews\/\d+$/);
+  });
+
+  it('the approval e-mail reaches the curator with the subject and a link to the revision', async () => {
+    const subject = `“${title}”: revision 2 approved`;
+    let approval: ParsedMail | undefined;
+    await expect
+      .poll(async () => {
+        approval = (await mailTo('curator@demo.test')).find((mail) => mail.subject === subject);
+        return approval?.subject;
+      }, { timeout: 30_000, interval: 500 })
+      .toBe(subject);
+    const to = Array.isArray(approval!.to) ? approval!.to.map((address) => address.text).join(', ') : approval!.to?.text;
+    expect(to).toContain('curator@demo.test');
+    const link = await curator.getByRole('link', { name: subject }).getAttribute('href');
+    expect(approval!.text, 'the mail links to the revision page the notification opens').toContain(`${(process.env.PUBLIC_URL ?? baseUrl).replace(/\/$/, '')}${link}`);
+  });
+});
