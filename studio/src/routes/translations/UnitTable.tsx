@@ -8,7 +8,9 @@ const useStyles = makeStyles({
   selected: { backgroundColor: tokens.colorBrandBackground2, ':hover': { backgroundColor: tokens.colorBrandBackground2Hover } },
   // Two lines of the source are enough to recognise a unit; the editor shows all of it.
   source: { display: 'block', maxHeight: '2.8em', lineHeight: '1.4em', overflow: 'hidden', overflowWrap: 'anywhere' },
-  narrow: { width: '6.5rem' },
+  panel: { width: '3.5rem' },
+  kind: { width: '6.5rem' },
+  status: { width: '7rem' },
   pick: {
     display: 'block', margin: 0, border: 'none', backgroundColor: 'transparent', color: 'inherit', font: 'inherit', width: '100%', cursor: 'pointer', textAlign: 'start', paddingTop: tokens.spacingVerticalXS, paddingBottom: tokens.spacingVerticalXS,
     ':focus-visible': { outline: `2px solid ${tokens.colorStrokeFocus2}`, outlineOffset: '2px', borderRadius: tokens.borderRadiusSmall },
@@ -37,10 +39,10 @@ export function UnitTable({ units, selectedId, sourceLocale, onSelect, busy }: {
     <Table aria-label={t('workspace.units')} aria-busy={busy} className={styles.table} size="small">
       <TableHeader>
         <TableRow>
-          <TableHeaderCell className={styles.narrow}>{t('workspace.columns.panel')}</TableHeaderCell>
-          <TableHeaderCell className={styles.narrow}>{t('workspace.columns.kind')}</TableHeaderCell>
+          <TableHeaderCell className={styles.panel}>{t('workspace.columns.panel')}</TableHeaderCell>
+          <TableHeaderCell className={styles.kind}>{t('workspace.columns.kind')}</TableHeaderCell>
           <TableHeaderCell>{t('workspace.columns.source')}</TableHeaderCell>
-          <TableHeaderCell className={styles.narrow}>{t('workspace.columns.status')}</TableHeaderCell>
+          <TableHeaderCell className={styles.status}>{t('workspace.columns.status')}</TableHeaderCell>
         </TableRow>
       </TableHeader>
       <TableBody>

@@ -27,7 +27,7 @@ const useStyles = makeStyles({
   top: { display: 'flex', gap: tokens.spacingHorizontalXL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
   locales: { display: 'flex', gap: tokens.spacingHorizontalL, flexWrap: 'wrap', alignItems: 'flex-end', margin: 0, padding: 0, listStyle: 'none' },
   current: { paddingBottom: tokens.spacingVerticalXS, borderBottom: `3px solid ${tokens.colorBrandStroke1}` },
-  grid: { display: 'grid', gridTemplateColumns: 'minmax(20rem, 5fr) minmax(28rem, 7fr)', gap: tokens.spacingHorizontalXL, alignItems: 'start', '@media (max-width: 1100px)': { gridTemplateColumns: '1fr' } },
+  grid: { display: 'grid', gridTemplateColumns: 'minmax(24rem, 5fr) minmax(28rem, 6fr)', gap: tokens.spacingHorizontalXL, alignItems: 'start', '@media (max-width: 1100px)': { gridTemplateColumns: '1fr' } },
   column: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL, minWidth: 0 },
   status: { minWidth: '12rem' },
   muted: { color: tokens.colorNeutralForeground3 },
@@ -126,7 +126,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
                 <LinkButton to={`/translations/${target.storyId}/${encodeURIComponent(entry.locale)}`} appearance="transparent" size="small" aria-current={entry.locale === target.locale ? 'page' : undefined}>
                   {languageName(entry.locale)}
                 </LinkButton>
-                <ProgressMeter progress={entry} label={t('workspace.progress', { language: languageName(entry.locale) })} />
+                <ProgressMeter progress={entry} />
               </li>
             ))}
         </ul>

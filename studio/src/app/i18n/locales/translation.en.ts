@@ -26,7 +26,6 @@ export const translationEn = {
     intro: 'Source in {{source}} beside the translation. Ctrl+Enter saves and moves on; Alt+↑ and Alt+↓ go to the previous or next unit.',
     back: 'All translations',
     otherLocales: 'Locales of this story',
-    progress: 'Progress in {{language}}',
     loadError: 'This story’s translation could not be loaded.',
     forbiddenTitle: 'Not one of your locales',
     forbiddenBody: 'You translate into {{locales}}. An admin can give you more locales in People.',

@@ -28,7 +28,6 @@ export const translationFr: typeof translationEn = {
     intro: 'Source en {{source}} à côté de la traduction. Ctrl+Entrée enregistre et passe à la suite ; Alt+↑ et Alt+↓ vont à l’unité précédente ou suivante.',
     back: 'Toutes les traductions',
     otherLocales: 'Langues de ce récit',
-    progress: 'Avancement en {{language}}',
     loadError: 'La traduction de ce récit n’a pas pu être chargée.',
     forbiddenTitle: 'Cette langue ne vous est pas attribuée',
     forbiddenBody: 'Vous traduisez vers : {{locales}}. Un administrateur peut vous attribuer d’autres langues dans Personnes.',
