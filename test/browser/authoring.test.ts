@@ -5,6 +5,7 @@ import { launchBrowser, newContext, signIn } from '../support/browser.js';
 
 let browser: Browser;
 let page: Page;
+let storyUrl = '';
 
 // A fresh title per run, so the test never finds a story an earlier run left behind.
 const title = `Why slopes give way ${Date.now().toString(36)}`;
@@ -39,6 +40,7 @@ describe('a curator writes a panel', () => {
     await dialog.getByRole('textbox', { name: 'Title' }).fill(title);
     await dialog.getByRole('button', { name: 'Create story' }).click();
     await page.getByRole('heading', { level: 1, name: title }).waitFor();
+    storyUrl = page.url();
     await page.getByRole('button', { name: 'Add the first panel' }).click();
     await editorText().waitFor();
   });
@@ -143,10 +145,35 @@ describe('two curators on one panel', () => {
   });
 });
 
+describe('the media library', () => {
+  it('says per file why the server refused it: an SVG is not an accepted image type (415)', async () => {
+    await page.getByRole('navigation', { name: 'Studio areas' }).getByRole('link', { name: 'Media' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Media' }).waitFor();
+    const svg = Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><script>alert(1)</script></svg>');
+    await page.getByTestId('media-file-input').setInputFiles({ name: 'drawing.svg', mimeType: 'image/svg+xml', buffer: svg });
+    const row = page.locator('[data-upload-status]').first();
+    await eventually(() => row.getAttribute('data-upload-status')).toBe('failed');
+    expect(await row.getByRole('alert').textContent()).toMatch(/^Not an image type the studio accepts/);
+  });
+
+  it('finds the uploaded image by its missing credit and shows where it is used', async () => {
+    await page.getByRole('combobox', { name: 'Show' }).selectOption('missing-credit');
+    await page.getByRole('link', { name: /basalt-slab\.png/ }).first().click();
+    await page.getByRole('heading', { level: 1, name: 'basalt-slab.png' }).waitFor();
+    await eventually(() => page.getByRole('link', { name: new RegExp(title) }).count()).toBeGreaterThan(0);
+    await page.getByRole('textbox', { name: 'Credit line' }).fill('Drawing: Basalt Point Earth Science Centre');
+    await page.getByRole('radio', { name: 'An open licence (SPDX identifier)' }).check();
+    await page.getByRole('combobox', { name: 'SPDX identifier' }).fill('CC-BY-4.0');
+    await page.getByRole('button', { name: 'Save' }).click();
+    await eventually(() => page.getByText('Saved.').count()).toBe(1);
+  });
+});
+
 describe('the panel strip', () => {
   const cards = () => page.getByRole('list', { name: 'Panels of this story' }).getByRole('button');
 
   it('adds a panel and moves it first with Alt+←, which survives a reload', async () => {
+    await page.goto(storyUrl);
     await page.getByRole('button', { name: 'Add panel' }).click();
     await eventually(() => cards().count()).toBe(2);
     await editorText().click();

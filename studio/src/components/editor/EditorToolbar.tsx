@@ -6,7 +6,7 @@ import {
   TextHeader2Regular, TextHeader3Regular, TextItalicRegular, TextNumberListLtrRegular, TextQuoteRegular, BeakerAddRegular,
 } from '@fluentui/react-icons';
 import { useEditorState, type Editor } from '@tiptap/react';
-import { PANEL_HEADING_LEVELS, WIDGET_TYPES, widgetRegistry, widgetsIn, type WidgetType } from '@mantlepiece/shared';
+import { formatLiveValue, PANEL_HEADING_LEVELS, WIDGET_TYPES, widgetRegistry, widgetsIn, type WidgetType } from '@mantlepiece/shared';
 import type { ReactElement } from 'react';
 import { useTranslation } from 'react-i18next';
 import { insertionChain } from './insert-point';
@@ -46,7 +46,6 @@ export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Edi
   const chain = () => editor.chain().focus();
   const insertWidget = (type: WidgetType) => insertionChain(editor).insertWidget({ widgetType: type, params: { ...widgetRegistry[type].defaults } }).run();
   const locale = i18n.resolvedLanguage ?? 'en';
-  const number = new Intl.NumberFormat(locale, { maximumSignificantDigits: 4 });
 
   const toggle = (name: string, value: string, label: string, icon: ReactElement, run: () => void) => (
     <Tooltip content={label} relationship="label" withArrow>
@@ -90,7 +89,7 @@ export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Edi
               numericOutputs(widget.widgetType, widget.params).map(({ output, value }) => (
                 <MenuItem
                   key={`${widget.widgetId}.${output}`}
-                  secondaryContent={number.format(value)}
+                  secondaryContent={formatLiveValue(value, { digits: 4, unit: unitOfOutput(output) }, locale)}
                   onClick={() => insertionChain(editor).insertLiveValue({ widgetId: widget.widgetId, output, format: { digits: 3, unit: unitOfOutput(output) } }).run()}
                 >
                   {outputLabel(output)}

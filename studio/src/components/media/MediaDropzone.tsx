@@ -71,8 +71,15 @@ export function MediaDropzone({ onUploaded, compact = false }: { onUploaded?: (a
     }
   };
 
-  // Every file goes to the server, even one the chooser would reject: the server's answer is the one to show.
-  const { getRootProps, getInputProps, isDragActive, open } = useDropzone({ onDrop: start, accept: ACCEPT, noClick: true, noKeyboard: true, validator: () => null, preventDropOnDocument: true });
+  // `accept` only steers the file chooser: every file still goes to the server, whose answer (415 for
+  // an SVG, say) is the one to show, because it reads the bytes rather than the name.
+  const { getRootProps, getInputProps, isDragActive, open } = useDropzone({
+    onDrop: (accepted, rejected) => start([...accepted, ...rejected.map((rejection) => rejection.file)]),
+    accept: ACCEPT,
+    noClick: true,
+    noKeyboard: true,
+    preventDropOnDocument: true,
+  });
   const rootProps = getRootProps();
 
   return (

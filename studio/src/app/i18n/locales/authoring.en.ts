@@ -170,7 +170,7 @@ export const authoringEn = {
     progress: 'Uploading {{name}}',
     done: '{{name}} uploaded',
     refused413: 'Too large to upload. {{reason}}',
-    refused415: 'Not an image type the studio accepts (JPEG, PNG, WebP, AVIF or TIFF). {{reason}}',
+    refused415: 'Not an image type the studio accepts: upload JPEG, PNG, WebP, AVIF or TIFF (SVG and other formats are refused, whatever the file is called).',
     refused422: 'The image has too many pixels to process safely. {{reason}}',
   },
   media: {

@@ -172,7 +172,7 @@ export const authoringFr: typeof authoringEn = {
     progress: 'Téléversement de {{name}}',
     done: '{{name}} téléversé',
     refused413: 'Trop volumineux pour être téléversé. {{reason}}',
-    refused415: 'Ce n’est pas un type d’image accepté (JPEG, PNG, WebP, AVIF ou TIFF). {{reason}}',
+    refused415: 'Ce type d’image n’est pas accepté : téléversez du JPEG, PNG, WebP, AVIF ou TIFF (le SVG et les autres formats sont refusés, quel que soit le nom du fichier).',
     refused422: 'L’image compte trop de pixels pour être traitée sans risque. {{reason}}',
   },
   media: {
