@@ -17,6 +17,9 @@ let curator: Page;
 let educator: Page;
 let storyId: number;
 
+// Long enough for the editor's autosave pause and a page's first requests; polling ends as soon as the state is there.
+const settled = { timeout: 10_000 };
+
 const panelDoc = (text: string) => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text }] }] });
 
 async function apiAs(email: string) {
@@ -72,7 +75,7 @@ describe('a story goes through review in the browser', () => {
     await curator.getByRole('button', { name: 'Submit for review' }).click();
     await curator.getByText('Revision 1 is submitted', { exact: false }).waitFor();
     expect(await curator.getByText(/No blockers/).count()).toBeGreaterThan(0);
-    await expect.poll(() => stateBadge(curator)).toBe('In review');
+    await expect.poll(() => stateBadge(curator), settled).toBe('In review');
   });
 
   it('the educator finds it in the review queue and asks for changes with a note', async () => {
@@ -91,7 +94,7 @@ describe('a story goes through review in the browser', () => {
 
   it('the curator sees the note, fixes the panel and resubmits', async () => {
     await curator.reload();
-    await expect.poll(() => stateBadge(curator)).toBe('Changes requested');
+    await expect.poll(() => stateBadge(curator), settled).toBe('Changes requested');
     await curator.getByText(/^Revisions? \(1\)$/).click();
     await curator.locator('[data-story-revisions]').getByRole('link', { name: 'Revision 1' }).click();
     await curator.locator('[data-verdict="request_changes"]').getByText(note).waitFor();
@@ -102,10 +105,10 @@ describe('a story goes through review in the browser', () => {
     await editor.click();
     await curator.keyboard.press('ControlOrMeta+a');
     await curator.keyboard.type(fixedText);
-    await expect.poll(() => curator.locator('[data-save-status]').getAttribute('data-save-status')).toBe('saved');
+    await expect.poll(() => curator.locator('[data-save-status]').getAttribute('data-save-status'), settled).toBe('saved');
     await curator.getByRole('button', { name: 'Submit for review' }).click();
     await curator.getByText('Revision 2 is submitted', { exact: false }).waitFor();
-    await expect.poll(() => stateBadge(curator)).toBe('In review');
+    await expect.poll(() => stateBadge(curator), settled).toBe('In review');
   });
 
   it('the educator sees the word-level change against nothing approved yet, and approves', async () => {
@@ -113,7 +116,7 @@ describe('a story goes through review in the browser', () => {
     await educator.getByRole('link', { name: title }).click();
     await educator.getByRole('heading', { level: 1, name: `${title} · revision 2` }).waitFor();
     // Nothing was approved before, so every word of the panel is new.
-    await expect.poll(() => educator.locator('[data-text-diff] ins').first().textContent()).toContain('a few centimetres');
+    await expect.poll(() => educator.locator('[data-text-diff] ins').first().textContent(), settled).toContain('a few centimetres');
     await educator.getByRole('radio', { name: 'Approve' }).check();
     await educator.getByRole('button', { name: 'Approve this revision' }).click();
     await educator.getByText('Approved. The story can now go into a release.').waitFor();
@@ -121,7 +124,7 @@ describe('a story goes through review in the browser', () => {
 
   it('the curator sees the approval: the state badge and a notification', async () => {
     await curator.reload();
-    await expect.poll(() => stateBadge(curator)).toBe('Approved');
+    await expect.poll(() => stateBadge(curator), settled).toBe('Approved');
     await expect.poll(async () => Number(await curator.locator('[data-unread]').first().getAttribute('data-unread')), { timeout: 40_000 }).toBeGreaterThan(0);
     await curator.getByRole('link', { name: /^Notifications, \d+ unread$/ }).click();
     await curator.getByRole('heading', { level: 1, name: 'Notifications' }).waitFor();
