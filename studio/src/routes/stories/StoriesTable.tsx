@@ -10,6 +10,7 @@ import { StoryStateBadge } from './StoryStateBadge';
 const useStyles = makeStyles({
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
   title: { fontWeight: tokens.fontWeightSemibold },
+  titleColumn: { width: '32%' },
   muted: { color: tokens.colorNeutralForeground3 },
   number: { fontVariantNumeric: 'tabular-nums' },
 });
@@ -22,7 +23,7 @@ export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryVi
     <Table sortable aria-label={t('stories.title')} aria-busy={busy} className={styles.table}>
       <TableHeader>
         <TableRow>
-          <TableHeaderCell {...sortableColumn(sort, 'title', onSort)}>{t('stories.columns.title')}</TableHeaderCell>
+          <TableHeaderCell className={styles.titleColumn} {...sortableColumn(sort, 'title', onSort)}>{t('stories.columns.title')}</TableHeaderCell>
           <TableHeaderCell>{t('stories.columns.exhibit')}</TableHeaderCell>
           <TableHeaderCell>{t('stories.columns.audience')}</TableHeaderCell>
           <TableHeaderCell>{t('stories.columns.locale')}</TableHeaderCell>
