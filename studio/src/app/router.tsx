@@ -29,6 +29,10 @@ const NotificationsPage = named(() => import('../routes/notifications'), 'Notifi
 const AuditPage = named(() => import('../routes/audit'), 'AuditPage');
 const TranslationsPage = named(() => import('../routes/translations'), 'TranslationsPage');
 const TranslationWorkspacePage = named(() => import('../routes/translations/workspace'), 'TranslationWorkspacePage');
+const ReleasesPage = named(() => import('../routes/releases'), 'ReleasesPage');
+const ReleaseComparePage = named(() => import('../routes/releases/compare'), 'ReleaseComparePage');
+const StationsPage = named(() => import('../routes/stations'), 'StationsPage');
+const StationPage = named(() => import('../routes/stations/station'), 'StationPage');
 
 /** The pages of one area, behind that area's role check. */
 const inArea = (area: Area, element: ReactNode) => <RequireArea area={area}>{element}</RequireArea>;
@@ -89,6 +93,10 @@ export const router = createBrowserRouter([
       { path: '/notifications', element: <NotificationsPage /> },
       { path: '/translations', element: inArea('translations', <TranslationsPage />) },
       { path: '/translations/:storyId/:locale', element: inArea('translations', <TranslationWorkspacePage />) },
+      { path: '/releases', element: inArea('releases', <ReleasesPage />) },
+      { path: '/releases/compare', element: inArea('releases', <ReleaseComparePage />) },
+      { path: '/stations', element: inArea('releases', <StationsPage />) },
+      { path: '/stations/:id', element: inArea('releases', <StationPage />) },
       { path: '/:area', element: <PlannedArea /> },
       { path: '*', element: <NotFoundPage /> },
     ],

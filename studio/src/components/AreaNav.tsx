@@ -1,5 +1,5 @@
 import { makeStyles, mergeClasses, tokens } from '@fluentui/react-components';
-import { BeakerRegular, HistoryRegular, HomeRegular, MailRegular } from '@fluentui/react-icons';
+import { BeakerRegular, HistoryRegular, HomeRegular, MailRegular, TvRegular } from '@fluentui/react-icons';
 import type { FluentIcon } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { NavLink } from 'react-router-dom';
@@ -81,6 +81,7 @@ export function AreaNav() {
         {areasFor(user.roles).map((area) => (
           <NavItem key={area} to={`/${area}`} icon={AREA_ICONS[area]} label={t(`areas.${area}.name`)} />
         ))}
+        {canOpen(user.roles, 'releases') ? <NavItem to="/stations" icon={TvRegular} label={t('stations.nav')} /> : null}
         {isAdmin ? <NavItem to="/audit" icon={HistoryRegular} label={t('audit.nav')} /> : null}
         {canOpen(user.roles, 'stories') ? <NavItem to="/widgets" icon={BeakerRegular} label={workbenchStrings(i18n.resolvedLanguage).nav} /> : null}
       </ul>

@@ -8,7 +8,7 @@ export const en = {
   },
   pairing: {
     codeLabel: 'Pairing code',
-    steps: 'For staff: in the studio, open this screen’s station (Settings, Stations) and enter this code there.',
+    steps: 'For staff: in the studio, open Stations, then this screen’s station, and enter this code there.',
     renew: 'When the code runs out, a new one appears here by itself.',
     unreachable: 'Cannot reach the server to get a pairing code. Trying again.',
   },

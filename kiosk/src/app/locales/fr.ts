@@ -9,7 +9,7 @@ export const fr: KioskMessages = {
   },
   pairing: {
     codeLabel: 'Code d’association',
-    steps: 'Pour le personnel : dans le studio, ouvrez le poste de cet écran (Réglages, Postes) et saisissez-y ce code.',
+    steps: 'Pour le personnel : dans le studio, ouvrez Postes, puis le poste de cet écran, et saisissez-y ce code.',
     renew: 'Quand le code expire, un nouveau code s’affiche ici tout seul.',
     unreachable: 'Impossible de joindre le serveur pour obtenir un code d’association. Nouvel essai en cours.',
   },

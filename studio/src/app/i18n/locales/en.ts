@@ -1,4 +1,5 @@
 import { authoringEn } from './authoring.en';
+import { releaseEn } from './release.en';
 import { reviewEn } from './review.en';
 import { translationEn } from './translation.en';
 
@@ -7,6 +8,7 @@ export const en = {
   ...authoringEn,
   ...reviewEn,
   ...translationEn,
+  ...releaseEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',

@@ -1,4 +1,5 @@
 import { authoringFr } from './authoring.fr';
+import { releaseFr } from './release.fr';
 import { reviewFr } from './review.fr';
 import { translationFr } from './translation.fr';
 import type { Messages } from './en';
@@ -8,6 +9,7 @@ export const fr: Messages = {
   ...authoringFr,
   ...reviewFr,
   ...translationFr,
+  ...releaseFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',

@@ -1,0 +1,106 @@
+import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { ExhibitView, Page, ReleaseComparison, ReleaseState, ReleaseView, RevisionSummary, StoryView } from '@mantlepiece/shared';
+import { api } from './client';
+
+export interface ReleaseListParams {
+  page: number;
+  pageSize: number;
+}
+
+/** How often a page asks after a build in progress; builds take seconds, not minutes. */
+const BUILD_POLL_MS = 1000;
+
+const releasesKey = ['releases'] as const;
+const galleryReleasesKey = (galleryId: number) => [...releasesKey, 'gallery', galleryId] as const;
+const releaseKey = (id: number) => [...releasesKey, 'one', id] as const;
+
+export const isFinished = (state: ReleaseState) => state !== 'building';
+
+/** A gallery's releases, newest first; the list keeps asking while one of them is building. */
+export function useGalleryReleases(galleryId: number | undefined, { page, pageSize }: ReleaseListParams) {
+  return useQuery({
+    queryKey: [...galleryReleasesKey(galleryId ?? 0), { page, pageSize }],
+    queryFn: () => api<Page<ReleaseView>>(`/galleries/${galleryId}/releases`, { query: { page, pageSize } }),
+    enabled: galleryId !== undefined,
+    placeholderData: keepPreviousData,
+    refetchInterval: (query) => (query.state.data?.items.some((release) => !isFinished(release.state)) ? BUILD_POLL_MS : false),
+  });
+}
+
+/** One release; followed every second while it builds, so its progress bar and phase move. */
+export function useRelease(id: number | undefined) {
+  const queryClient = useQueryClient();
+  return useQuery({
+    queryKey: releaseKey(id ?? 0),
+    enabled: id !== undefined,
+    queryFn: async () => {
+      const release = await api<ReleaseView>(`/releases/${id}`);
+      if (isFinished(release.state)) void queryClient.invalidateQueries({ queryKey: galleryReleasesKey(release.galleryId) });
+      return release;
+    },
+    refetchInterval: (query) => (query.state.status === 'error' || (query.state.data && isFinished(query.state.data.state)) ? false : BUILD_POLL_MS),
+  });
+}
+
+/** Both sides are immutable once built, so a comparison never goes stale. */
+export function useReleaseComparison(a: number | undefined, b: number | undefined) {
+  return useQuery({
+    queryKey: [...releasesKey, 'compare', a, b],
+    queryFn: () => api<ReleaseComparison>('/releases/compare', { query: { a, b } }),
+    enabled: a !== undefined && b !== undefined && a !== b,
+    staleTime: Number.POSITIVE_INFINITY,
+  });
+}
+
+/** No revisions named: the server takes the latest approved revision of each story of the gallery. */
+export function useBuildRelease(galleryId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (revisionIds?: number[]) =>
+      api<{ id: number; state: 'building' }>(`/galleries/${galleryId}/releases`, { method: 'POST', body: revisionIds ? { revisionIds } : {} }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: galleryReleasesKey(galleryId) }),
+  });
+}
+
+/** Publishing an earlier Ready or Superseded release is the rollback. */
+export function usePublishRelease() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api<ReleaseView>(`/releases/${id}/publish`, { method: 'POST' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: releasesKey }),
+  });
+}
+
+/** A story the gallery could release, with its approved revisions, newest first. */
+export interface ReleaseCandidate {
+  story: StoryView;
+  approved: RevisionSummary[];
+}
+
+/** A gallery holds a handful of exhibits and tens of stories: one page of each is all of them. */
+const WHOLE_GALLERY = { page: 1, pageSize: 100 };
+
+async function releaseCandidates(galleryId: number): Promise<ReleaseCandidate[]> {
+  const exhibits = await api<Page<ExhibitView>>('/exhibits', { query: { ...WHOLE_GALLERY, galleryId, sort: 'name' } });
+  const stories = (
+    await Promise.all(exhibits.items.map((exhibit) => api<Page<StoryView>>('/stories', { query: { ...WHOLE_GALLERY, exhibitId: exhibit.id, sort: 'title' } })))
+  ).flatMap((page) => page.items).filter((story) => story.state !== 'retired');
+  return Promise.all(stories.map(async (story) => {
+    const revisions = await api<RevisionSummary[]>(`/stories/${story.id}/revisions`);
+    return { story, approved: revisions.filter((revision) => revision.state === 'approved').sort((a, b) => b.number - a.number) };
+  }));
+}
+
+/** What the build dialog offers when a technician chooses revisions by hand. */
+export function useReleaseCandidates(galleryId: number, enabled: boolean) {
+  return useQuery({ queryKey: [...releasesKey, 'candidates', galleryId], queryFn: () => releaseCandidates(galleryId), enabled });
+}
+
+/**
+ * The gallery's Live release. The list has no state filter, so this reads the newest hundred
+ * releases: the Live one is among them unless someone rolled back a hundred builds.
+ */
+export function useLiveRelease(galleryId: number | undefined) {
+  const recent = useGalleryReleases(galleryId, WHOLE_GALLERY);
+  return { ...recent, data: recent.data?.items.find((release) => release.state === 'live') };
+}

@@ -1,0 +1,14 @@
+import type { ReleaseListParams } from '../../api/releases';
+import { pageFrom, positiveId } from '../../components/lists/list-search';
+
+export const PAGE_SIZE = 25;
+
+export interface ReleasesView extends ReleaseListParams {
+  galleryId: number | undefined;
+  /** The build the page follows, kept in the URL so a reload keeps following it. */
+  buildId: number | undefined;
+}
+
+export function readReleasesParams(search: URLSearchParams): ReleasesView {
+  return { page: pageFrom(search), pageSize: PAGE_SIZE, galleryId: positiveId(search.get('gallery')), buildId: positiveId(search.get('build')) };
+}

@@ -1,0 +1,95 @@
+import { useState } from 'react';
+import {
+  Badge, Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, Spinner, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
+} from '@fluentui/react-components';
+import type { KioskView, StationView } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+import { useRevokeKiosk, useStationKiosks } from '../../api/kiosks';
+import { EmptyState } from '../../components/EmptyState';
+import { useDateFormat } from '../../components/formatting';
+import { FormAlert } from '../../components/forms/FormAlert';
+import { describeError } from '../../components/forms/describe-error';
+
+const useStyles = makeStyles({
+  table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
+  error: { color: tokens.colorPaletteRedForeground1, overflowWrap: 'anywhere' },
+  muted: { color: tokens.colorNeutralForeground3 },
+  actions: { display: 'flex', justifyContent: 'flex-end' },
+});
+
+/** Every kiosk paired to the station, the active one first, each with what it last reported. */
+export function StationKiosks({ station }: { station: StationView }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const formatDate = useDateFormat();
+  const kiosks = useStationKiosks(station);
+  const revoke = useRevokeKiosk();
+  const [revoking, setRevoking] = useState<KioskView | null>(null);
+  const release = (ref: { number: number } | null) => (ref ? t('releases.name', { number: ref.number }) : '—');
+
+  if (kiosks.isPending) return <Spinner label={t('common.loading')} />;
+  if (kiosks.isError) return <FormAlert intent="error">{describeError(t, kiosks.error)}</FormAlert>;
+  if (kiosks.items.length === 0) return <EmptyState title={t('stations.kiosks.emptyTitle')} headingLevel={3}>{t('stations.kiosks.emptyBody')}</EmptyState>;
+  return (
+    <>
+      <Table aria-label={t('stations.kiosks.title')} aria-busy={kiosks.isFetching} className={styles.table}>
+        <TableHeader>
+          <TableRow>
+            <TableHeaderCell>{t('stations.kiosks.kiosk')}</TableHeaderCell>
+            <TableHeaderCell>{t('stations.kiosks.state')}</TableHeaderCell>
+            <TableHeaderCell>{t('stations.kiosks.pairedAt')}</TableHeaderCell>
+            <TableHeaderCell>{t('stations.kiosks.lastHeartbeat')}</TableHeaderCell>
+            <TableHeaderCell>{t('stations.kiosks.playing')}</TableHeaderCell>
+            <TableHeaderCell>{t('stations.kiosks.lastError')}</TableHeaderCell>
+            <TableHeaderCell><span className={styles.muted}>{t('settings.columns.actions')}</span></TableHeaderCell>
+          </TableRow>
+        </TableHeader>
+        <TableBody>
+          {kiosks.items.map((kiosk) => {
+            const name = t('stations.kiosks.name', { id: kiosk.id });
+            return (
+              <TableRow key={kiosk.id} data-kiosk-id={kiosk.id}>
+                <TableCell>{name}</TableCell>
+                <TableCell>
+                  {kiosk.revokedAt
+                    ? <Badge appearance="tint" color="subtle">{t('stations.kiosks.revoked', { date: formatDate(kiosk.revokedAt) })}</Badge>
+                    : <Badge appearance="tint" color="success">{t('stations.kiosks.active')}</Badge>}
+                </TableCell>
+                <TableCell>{formatDate(kiosk.pairedAt)}</TableCell>
+                <TableCell>{kiosk.lastHeartbeatAt ? formatDate(kiosk.lastHeartbeatAt) : <span className={styles.muted}>{t('stations.kiosks.never')}</span>}</TableCell>
+                <TableCell>{t('stations.kiosks.playingOf', { playing: release(kiosk.releasePlaying), live: release(kiosk.releaseLive) })}</TableCell>
+                <TableCell>{kiosk.lastError ? <span className={styles.error}>{kiosk.lastError}</span> : <span className={styles.muted}>{t('reviews.none')}</span>}</TableCell>
+                <TableCell>
+                  <span className={styles.actions}>
+                    {kiosk.revokedAt ? null : (
+                      <Button size="small" onClick={() => { revoke.reset(); setRevoking(kiosk); }} aria-label={t('stations.kiosks.revokeLabel', { name })}>{t('stations.kiosks.revoke')}</Button>
+                    )}
+                  </span>
+                </TableCell>
+              </TableRow>
+            );
+          })}
+        </TableBody>
+      </Table>
+      {revoking ? (
+        <Dialog open modalType="alert" onOpenChange={(_event, data) => { if (!data.open) setRevoking(null); }}>
+          <DialogSurface>
+            <DialogBody>
+              <DialogTitle>{t('stations.kiosks.revokeTitle', { name: t('stations.kiosks.name', { id: revoking.id }), station: station.name })}</DialogTitle>
+              <DialogContent>
+                <Text as="p">{t('stations.kiosks.revokeBody')}</Text>
+                {revoke.error ? <FormAlert intent="error">{describeError(t, revoke.error)}</FormAlert> : null}
+              </DialogContent>
+              <DialogActions>
+                <Button appearance="secondary" onClick={() => setRevoking(null)}>{t('common.cancel')}</Button>
+                <Button appearance="primary" disabled={revoke.isPending} onClick={() => revoke.mutate(revoking.id, { onSuccess: () => setRevoking(null) })}>
+                  {t('stations.kiosks.revokeConfirm')}
+                </Button>
+              </DialogActions>
+            </DialogBody>
+          </DialogSurface>
+        </Dialog>
+      ) : null}
+    </>
+  );
+}
