@@ -7,7 +7,9 @@ import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { DevMailModule } from './dev-mail/dev-mail.module.js';
 import { ExhibitsModule } from './exhibits/exhibits.module.js';
+import { FleetModule } from './fleet/fleet.module.js';
 import { HealthModule } from './health/health.module.js';
+import { InsightsModule } from './insights/insights.module.js';
 import { KiosksModule } from './kiosks/kiosks.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { MediaModule } from './media/media.module.js';
@@ -28,7 +30,7 @@ import { WidgetsModule } from './widgets/widgets.module.js';
     DevMailModule, HealthModule, VenuesModule, WidgetsModule,
     ExhibitsModule, StoriesModule, PanelsModule, MediaModule, TranslationsModule,
     NotificationsModule, CommentsModule, RevisionsModule, ReviewsModule,
-    ReleasesModule, KiosksModule,
+    ReleasesModule, KiosksModule, FleetModule, InsightsModule,
   ],
 })
 export class AppModule {}

@@ -112,6 +112,7 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'POST /api/stations/:id/pair': TECHNICIAN,
   'GET /api/kiosks': TECHNICIAN,
   'POST /api/kiosks/:id/revoke': TECHNICIAN,
+  'GET /api/kiosks/:id': TECHNICIAN,
   'POST /api/kiosk/pair/start': 'public',
   'POST /api/kiosk/pair/complete': 'public',
   'GET /api/kiosk/manifest': 'kiosk',
@@ -119,6 +120,7 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'POST /api/kiosk/heartbeat': 'kiosk',
   'POST /api/kiosk/events': 'kiosk',
 
+  'GET /api/insights': ['curator', 'educator', 'technician', 'admin'],
 };
 
 /**

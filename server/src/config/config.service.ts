@@ -44,6 +44,12 @@ export class ConfigService {
   /** 0 turns the release worker's timer off (tests drive builds by hand). */
   readonly releasePollIntervalMs = intFromEnv('RELEASE_POLL_INTERVAL_MS', 1000);
 
+  /** How often kiosks send a heartbeat; two missed make a kiosk stale on the Fleet page. */
+  readonly heartbeatIntervalS = Math.max(intFromEnv('HEARTBEAT_INTERVAL_S', 30), 1);
+  /** Silence after which a kiosk is offline and its venue's technicians get a mail. */
+  readonly kioskOfflineAfterS = intFromEnv('KIOSK_OFFLINE_AFTER_S', 300);
+  /** How often the silent-kiosk watcher looks; 0 turns its timer off (tests call it by hand). */
+  readonly fleetWatchIntervalMs = intFromEnv('FLEET_WATCH_INTERVAL_MS', 15_000);
 
   get isProduction(): boolean {
     return this.nodeEnv === 'production';

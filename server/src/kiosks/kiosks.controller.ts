@@ -2,6 +2,7 @@ import { Body, Controller, Get, HttpCode, HttpStatus, Ip, Param, ParseIntPipe, P
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
+import { KioskStates } from '../fleet/kiosk-states.service.js';
 import { ListKiosksQuery } from './dto/kiosk-report.dto.js';
 import { PairStationDto } from './dto/pairing.dto.js';
 import { KiosksService } from './kiosks.service.js';
@@ -18,6 +19,7 @@ export class KiosksController {
   constructor(
     private readonly pairing: PairingService,
     private readonly kiosks: KiosksService,
+    private readonly states: KioskStates,
   ) {}
 
   @Post('stations/:id/pair')
@@ -26,8 +28,9 @@ export class KiosksController {
   }
 
   @Get('kiosks')
-  list(@Query() query: ListKiosksQuery) {
-    return this.kiosks.list(query);
+  async list(@Query() query: ListKiosksQuery) {
+    const page = await this.kiosks.list(query);
+    return { ...page, items: page.items.map((kiosk) => this.states.present(kiosk)), thresholds: this.states.thresholds };
   }
 
   @Post('kiosks/:id/revoke')

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
+import { FleetStatesModule } from '../fleet/fleet-states.module.js';
 import { ReleaseFile } from '../releases/models/release-file.model.js';
 import { Release } from '../releases/models/release.model.js';
 import { ReleasesModule } from '../releases/releases.module.js';
@@ -20,7 +21,7 @@ import { PairingService } from './pairing.service.js';
 @Module({
   imports: [
     SequelizeModule.forFeature([Kiosk, PairingRequest, PairingFailure, KioskHeartbeat, KioskEvent, Station, Gallery, Release, ReleaseFile]),
-    ReleasesModule,
+    ReleasesModule, FleetStatesModule,
   ],
   controllers: [KioskController, KiosksController],
   providers: [PairingService, PairingAttemptsService, KiosksService, DeviceTokenGuard],

@@ -89,7 +89,8 @@ export class KiosksService {
   async list(query: ListKiosksQuery): Promise<Page<KioskView>> {
     const { rows, count } = await this.kiosks.findAndCountAll({
       include: [{ model: Station, required: true, where: query.galleryId ? { galleryId: query.galleryId } : {}, include: [Gallery] }],
-      order: [['revokedAt', 'ASC'], ['id', 'ASC']],
+      // By gallery, so the Fleet page can head each gallery's rows; revoked kiosks last within it.
+      order: [['station', 'gallery', 'name', 'ASC'], ['station', 'galleryId', 'ASC'], ['revokedAt', 'ASC'], ['station', 'name', 'ASC'], ['id', 'ASC']],
       ...pageWindow(query),
     });
     return toPage(await this.views(rows as (Kiosk & { station: Station & { gallery: Gallery } })[]), count, query);

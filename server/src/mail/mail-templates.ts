@@ -6,7 +6,9 @@ export type MailContent =
   /** An in-app notification sent on by mail: its words come already in the recipient's language. */
   | { kind: 'notification'; name: string; subject: string; body: string; link: string }
   | { kind: 'translator-assignment'; name: string; locales: string[]; link: string }
-  | { kind: 'stale-digest'; name: string; stories: { title: string; locale: string; units: number }[]; link: string };
+  | { kind: 'stale-digest'; name: string; stories: { title: string; locale: string; units: number }[]; link: string }
+  | { kind: 'kiosk-silent'; name: string; station: string; gallery: string; since: Date; link: string }
+  | { kind: 'kiosk-back'; name: string; station: string; gallery: string; backAt: Date; link: string };
 
 /** A message's words: the paragraphs before its link and after it. */
 interface MailWords {
@@ -74,6 +76,22 @@ const templates: Record<UiLanguage, Templates> = {
       ],
       after: ['Until a stale unit is translated again, a release shows it only if the venue allows falling back to the source.'],
     }),
+    'kiosk-silent': (c, l) => ({
+      subject: `Kiosk silent: ${c.station}, ${c.gallery}`,
+      before: [
+        `Hello ${c.name},`,
+        `The kiosk at ${c.station} in ${c.gallery} has sent no heartbeat since ${when(c.since, l)}. It may have lost power or its network, or its browser may have closed. Its page on the Fleet shows what it last reported:`,
+      ],
+      after: ['You will get one more message when it reports again.'],
+    }),
+    'kiosk-back': (c, l) => ({
+      subject: `Kiosk back: ${c.station}, ${c.gallery}`,
+      before: [
+        `Hello ${c.name},`,
+        `The kiosk at ${c.station} in ${c.gallery} reported again at ${when(c.backAt, l)}. Check on its page that it plays the live release:`,
+      ],
+      after: [],
+    }),
   },
   fr: {
     invitation: (c, l) => ({
@@ -118,6 +136,22 @@ const templates: Record<UiLanguage, Templates> = {
         ...staleLines(c.stories, l),
       ],
       after: ['Tant qu’une unité périmée n’est pas retraduite, une publication ne l’affiche que si le lieu permet de revenir à la source.'],
+    }),
+    'kiosk-silent': (c, l) => ({
+      subject: `Borne muette : ${c.station}, ${c.gallery}`,
+      before: [
+        `Bonjour ${c.name},`,
+        `La borne du poste ${c.station} (${c.gallery}) n’a envoyé aucun signal de vie depuis le ${when(c.since, l)}. Elle a peut-être perdu le courant ou le réseau, ou son navigateur s’est fermé. Sa page dans la Flotte montre ce qu’elle a signalé en dernier :`,
+      ],
+      after: ['Vous recevrez un seul autre message, quand elle se manifestera de nouveau.'],
+    }),
+    'kiosk-back': (c, l) => ({
+      subject: `Borne de retour : ${c.station}, ${c.gallery}`,
+      before: [
+        `Bonjour ${c.name},`,
+        `La borne du poste ${c.station} (${c.gallery}) s’est de nouveau manifestée le ${when(c.backAt, l)}. Vérifiez sur sa page qu’elle diffuse la publication en ligne :`,
+      ],
+      after: [],
     }),
   },
 };

@@ -1,3 +1,4 @@
+import type { Page } from '../auth/views.js';
 import type { KioskView } from '../release/views.js';
 import type { KioskState } from './kiosk-state.js';
 
@@ -11,7 +12,8 @@ export interface FleetKioskView extends KioskView {
 export interface HeartbeatView {
   id: number;
   receivedAt: string;
-  releaseId: number | null;
+  /** The release it said it played. */
+  release: { id: number; number: number } | null;
   appVersion: string;
   uptimeS: number;
   storageUsedBytes: number | null;
@@ -23,4 +25,14 @@ export interface FleetThresholdsView {
   heartbeatIntervalS: number;
   staleAfterS: number;
   offlineAfterS: number;
+}
+
+/** `GET /api/kiosks/:id`: the kiosk and a page of its heartbeats, newest first. */
+export interface FleetKioskDetail extends FleetKioskView {
+  heartbeats: Page<HeartbeatView>;
+}
+
+/** `GET /api/kiosks`: a page of the fleet, with the thresholds its states were judged by. */
+export interface FleetPage extends Page<FleetKioskView> {
+  thresholds: FleetThresholdsView;
 }

@@ -38,7 +38,7 @@ export interface WidgetUse {
   params: { param: string | null; touches: number }[];
 }
 
-/** Counts per (widget type, param) gathered per widget type, both levels most touched first. */
+/** Counts per (widget type, param) gathered per widget type, both levels most touched first, ties by name. */
 export function widgetUse(counts: readonly WidgetParamCount[]): WidgetUse[] {
   const byType = new Map<string, WidgetUse>();
   for (const { widgetType, param, touches } of counts) {
@@ -47,8 +47,9 @@ export function widgetUse(counts: readonly WidgetParamCount[]): WidgetUse[] {
     use.params.push({ param, touches });
     byType.set(widgetType, use);
   }
+  // Among equals, a touch that moved nothing comes after every param.
   const byParam = (a: { param: string | null; touches: number }, b: { param: string | null; touches: number }) =>
-    b.touches - a.touches || (a.param ?? '').localeCompare(b.param ?? '');
+    b.touches - a.touches || (a.param === null ? 1 : 0) - (b.param === null ? 1 : 0) || (a.param ?? '').localeCompare(b.param ?? '');
   return [...byType.values()]
     .map((use) => ({ ...use, params: use.params.sort(byParam) }))
     .sort((a, b) => b.touches - a.touches || a.widgetType.localeCompare(b.widgetType));

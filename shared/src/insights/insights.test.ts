@@ -42,16 +42,17 @@ describe('dwellByPanel', () => {
 });
 
 describe('widgetUse', () => {
-  it('sums the params of each widget type, and orders both levels by touches', () => {
+  it('sums the params of each widget type, orders both levels by touches, and puts a touch that moved nothing after its equals', () => {
     const counts = [
       { widgetType: 'convection-cell', param: 'rayleigh', touches: 2 },
       { widgetType: 'slope-force-box', param: 'angleDeg', touches: 5 },
       { widgetType: 'slope-force-box', param: null, touches: 1 },
       { widgetType: 'slope-force-box', param: 'muStatic', touches: 3 },
+      { widgetType: 'convection-cell', param: null, touches: 2 },
     ];
     expect(widgetUse(counts)).toEqual([
       { widgetType: 'slope-force-box', touches: 9, params: [{ param: 'angleDeg', touches: 5 }, { param: 'muStatic', touches: 3 }, { param: null, touches: 1 }] },
-      { widgetType: 'convection-cell', touches: 2, params: [{ param: 'rayleigh', touches: 2 }] },
+      { widgetType: 'convection-cell', touches: 4, params: [{ param: 'rayleigh', touches: 2 }, { param: null, touches: 2 }] },
     ]);
   });
 });

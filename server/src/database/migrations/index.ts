@@ -10,6 +10,7 @@ import * as translations from './0300-translations.js';
 import * as venueSigningKeys from './0400-venue-signing-keys.js';
 import * as releases from './0401-releases.js';
 import * as kiosks from './0402-kiosks.js';
+import * as fleetWatch from './0500-fleet-watch.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -29,6 +30,7 @@ const modules: [string, MigrationModule][] = [
   ['0400-venue-signing-keys', venueSigningKeys],
   ['0401-releases', releases],
   ['0402-kiosks', kiosks],
+  ['0500-fleet-watch', fleetWatch],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

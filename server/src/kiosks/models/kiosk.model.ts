@@ -43,5 +43,9 @@ export class Kiosk extends Model {
   @Column({ type: DataType.STRING(1000), allowNull: true })
   lastError: string | null;
 
+  /** When technicians were told it went silent; cleared when told it is back (the fleet watcher's). */
+  @Column({ type: DataType.DATE(3), allowNull: true })
+  silenceAlertedAt: Date | null;
+
   declare id: number;
 }

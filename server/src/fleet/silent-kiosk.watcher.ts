@@ -1,0 +1,117 @@
+import { Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Op, type Transaction } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import { Clock } from '../clock/clock.service.js';
+import { ConfigService } from '../config/config.service.js';
+import { Kiosk } from '../kiosks/models/kiosk.model.js';
+import type { MailContent } from '../mail/mail-templates.js';
+import { MailService } from '../mail/mail.service.js';
+import { User } from '../users/models/user.model.js';
+import { Gallery } from '../venues/models/gallery.model.js';
+import { Station } from '../venues/models/station.model.js';
+import { KioskStates } from './kiosk-states.service.js';
+
+type PlacedKiosk = Kiosk & { station: Station & { gallery: Gallery } };
+
+export interface WatchReport {
+  /** Kiosks whose silence was announced in this check. */
+  silent: number[];
+  /** Kiosks whose return was announced in this check. */
+  back: number[];
+}
+
+const isTechnician = Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('roles'), JSON.stringify('technician')), 1);
+
+/**
+ * Tells technicians when a kiosk has been silent past the offline threshold, and again when it
+ * reports back. The alert is claimed on the kiosk row with a conditional update before the mail
+ * is queued in the same transaction, so each goes out once however often (and on however many
+ * server instances) the check runs.
+ */
+@Injectable()
+export class SilentKioskWatcher implements OnApplicationBootstrap, OnApplicationShutdown {
+  private readonly logger = new Logger('SilentKioskWatcher');
+  private timer?: NodeJS.Timeout;
+
+  constructor(
+    @InjectModel(Kiosk) private readonly kiosks: typeof Kiosk,
+    @InjectModel(User) private readonly users: typeof User,
+    private readonly mail: MailService,
+    private readonly states: KioskStates,
+    private readonly clock: Clock,
+    private readonly config: ConfigService,
+    private readonly sequelize: Sequelize,
+  ) {}
+
+  onApplicationBootstrap(): void {
+    if (this.config.fleetWatchIntervalMs === 0) return;
+    this.timer = setInterval(() => {
+      this.check().catch((error: unknown) => this.logger.error(error instanceof Error ? error.message : String(error)));
+    }, this.config.fleetWatchIntervalMs);
+    this.timer.unref();
+  }
+
+  onApplicationShutdown(): void {
+    clearInterval(this.timer);
+  }
+
+  async check(now: Date = this.clock.now()): Promise<WatchReport> {
+    const offlineSince = new Date(now.getTime() - this.states.thresholds.offlineAfterS * 1000);
+    const placed = { include: [{ model: Station, required: true, include: [Gallery] }] };
+    const [silent, back] = await Promise.all([
+      // A kiosk that never reported is silent since it was paired.
+      this.kiosks.findAll({
+        where: {
+          revokedAt: null,
+          silenceAlertedAt: null,
+          [Op.or]: [{ lastHeartbeatAt: { [Op.lte]: offlineSince } }, { lastHeartbeatAt: null, pairedAt: { [Op.lte]: offlineSince } }],
+        },
+        ...placed,
+      }),
+      this.kiosks.findAll({
+        where: {
+          revokedAt: null,
+          silenceAlertedAt: { [Op.ne]: null },
+          lastHeartbeatAt: { [Op.gt]: offlineSince },
+          [Op.and]: [Sequelize.where(Sequelize.col('last_heartbeat_at'), Op.gt, Sequelize.col('silence_alerted_at'))],
+        },
+        ...placed,
+      }),
+    ]);
+    const report: WatchReport = { silent: [], back: [] };
+    for (const kiosk of silent as PlacedKiosk[]) {
+      const since = kiosk.lastHeartbeatAt ?? kiosk.pairedAt;
+      if (await this.announce(kiosk, { silenceAlertedAt: now }, { silenceAlertedAt: null }, (name, link) => ({ kind: 'kiosk-silent', name, ...where(kiosk), since, link }))) report.silent.push(kiosk.id);
+    }
+    for (const kiosk of back as PlacedKiosk[]) {
+      const alertedAt = kiosk.silenceAlertedAt!;
+      if (await this.announce(kiosk, { silenceAlertedAt: null }, { silenceAlertedAt: alertedAt }, (name, link) => ({ kind: 'kiosk-back', name, ...where(kiosk), backAt: kiosk.lastHeartbeatAt!, link }))) report.back.push(kiosk.id);
+    }
+    return report;
+  }
+
+  /** Moves the kiosk's alert state from `expected` to `next`; if this check won that move, queues the mail. */
+  private announce(
+    kiosk: PlacedKiosk,
+    next: { silenceAlertedAt: Date | null },
+    expected: { silenceAlertedAt: Date | null },
+    content: (name: string, link: string) => MailContent,
+  ): Promise<boolean> {
+    return this.sequelize.transaction(async (transaction) => {
+      const [moved] = await this.kiosks.update(next, { where: { id: kiosk.id, ...expected }, transaction });
+      if (moved !== 1) return false;
+      const link = this.mail.studioLink(`/fleet/${kiosk.id}`);
+      for (const technician of await this.technicians(transaction)) {
+        await this.mail.enqueue(technician.email, technician.uiLanguage, content(technician.name, link), transaction);
+      }
+      return true;
+    });
+  }
+
+  private technicians(transaction: Transaction): Promise<User[]> {
+    return this.users.findAll({ where: { [Op.and]: [{ active: true }, isTechnician] }, order: [['id', 'ASC']], transaction });
+  }
+}
+
+const where = (kiosk: PlacedKiosk) => ({ station: kiosk.station.name, gallery: kiosk.station.gallery.name });

@@ -1,0 +1,25 @@
+import { Controller, Get, Query, Req, Res } from '@nestjs/common';
+import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Request, Response } from 'express';
+import { Roles } from '../auth/auth.decorators.js';
+import { InsightsQuery } from './dto/insights.query.js';
+import { toInsightsCsv } from './insights.presenter.js';
+import { InsightsService } from './insights.service.js';
+
+@ApiTags('insights')
+@ApiBearerAuth()
+@Controller('insights')
+export class InsightsController {
+  constructor(private readonly insights: InsightsService) {}
+
+  /** The figures as JSON, or with `Accept: text/csv` the same figures as a file. */
+  @Get()
+  @Roles('curator', 'educator', 'technician', 'admin')
+  @ApiProduces('application/json', 'text/csv')
+  async figures(@Query() query: InsightsQuery, @Req() request: Request, @Res({ passthrough: true }) response: Response) {
+    const view = await this.insights.figures(query);
+    if (request.accepts(['application/json', 'text/csv']) !== 'text/csv') return view;
+    response.attachment(`insights-gallery-${view.galleryId}-${view.from}_to_${view.to}.csv`).type('text/csv; charset=utf-8');
+    return toInsightsCsv(view);
+  }
+}
