@@ -1,10 +1,13 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { getModelToken } from '@nestjs/sequelize';
+import { Op } from 'sequelize';
 import sharp from 'sharp';
 import request from 'supertest';
 import type { PanelDocJSON, PanelNodeJSON, Role } from '@mantlepiece/shared';
 import { MailOutboxWorker } from '../src/mail/mail-outbox.worker.js';
+import { OutboxMessage } from '../src/mail/models/outbox-message.model.js';
 import type { User } from '../src/users/models/user.model.js';
 import { galleryWithExhibit, paragraphDoc, signedInAs } from './authoring-fixtures.js';
 import { bearer, createPerson, createTestApp, signIn, type TestApp } from './test-app.js';
@@ -16,11 +19,22 @@ export interface Member {
   auth: Headers;
 }
 
-/** The app with a media folder of its own, removed on close. */
+/**
+ * The app with a media folder of its own. On close the folder goes, and so does the mail the
+ * suite queued but did not send (every submission notifies every educator), so the outbox of the
+ * shared database does not hold up the suites after it.
+ */
 export async function createReviewApp(): Promise<TestApp> {
   const mediaDir = fs.mkdtempSync(path.join(os.tmpdir(), 'mantlepiece-review-'));
   const t = await createTestApp({ env: { MEDIA_DIR: mediaDir } });
-  return { ...t, close: async () => { await t.close(); fs.rmSync(mediaDir, { recursive: true, force: true }); } };
+  const outbox = t.app.get<typeof OutboxMessage>(getModelToken(OutboxMessage));
+  const before = Number((await outbox.max('id')) ?? 0);
+  const close = async () => {
+    await outbox.destroy({ where: { sentAt: null, id: { [Op.gt]: before } } });
+    await t.close();
+    fs.rmSync(mediaDir, { recursive: true, force: true });
+  };
+  return { ...t, close };
 }
 
 export async function member(t: TestApp, roles: Role[], fields: { name?: string; uiLanguage?: string } = {}): Promise<Member> {

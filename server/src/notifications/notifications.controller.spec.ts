@@ -1,8 +1,10 @@
+import { getModelToken } from '@nestjs/sequelize';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { capturedMailTo, mailDir } from '../../test/mail-helpers.js';
 import { createReviewApp, deliverAllMail, member, reviewVenue, storyWithPanels, submit, verdict, type Member } from '../../test/review-fixtures.js';
 import type { TestApp } from '../../test/test-app.js';
+import { OutboxMessage } from '../mail/models/outbox-message.model.js';
 
 let t: TestApp;
 let curator: Member;
@@ -12,6 +14,8 @@ const publicUrl = process.env.PUBLIC_URL ?? 'http://127.0.0.1:4310';
 beforeAll(async () => {
   mailDir();
   t = await createReviewApp();
+  // Earlier suites leave mail queued (every submission notifies every educator); none of it is this suite's to send.
+  await t.app.get<typeof OutboxMessage>(getModelToken(OutboxMessage)).destroy({ where: { sentAt: null } });
   exhibitId = (await reviewVenue(t, 'notifications')).exhibit.id;
   curator = await member(t, ['curator'], { name: 'Oskar Lind' });
 });

@@ -201,7 +201,7 @@ function queueOrder(sort: string): Order {
   const descending = sort.startsWith('-');
   const direction = descending ? 'DESC' : 'ASC';
   const key = descending ? sort.slice(1) : sort;
-  const first: OrderItem = key === 'storyTitle' ? [Story, 'title', direction] : [key === 'blockers' ? 'blockerCount' : 'submittedAt', direction];
+  const first: OrderItem = key === 'storyTitle' ? [Sequelize.col('story.title'), direction] : [key === 'blockers' ? 'blockerCount' : 'submittedAt', direction];
   return [first, ['id', 'ASC']];
 }
 

@@ -4,6 +4,7 @@ import { IsInt, IsISO8601, IsOptional, IsString, MaxLength, Min } from 'class-va
 import { PageQuery } from '../../common/page.js';
 
 const WHEN = 'A date (YYYY-MM-DD, UTC) or a moment (ISO 8601)';
+const WHEN_MESSAGE = { message: 'Use a date (YYYY-MM-DD, UTC) or a moment (ISO 8601).' };
 
 export class ListAuditEventsQuery extends PageQuery {
   @ApiPropertyOptional({ description: 'Only events of this action, e.g. user.invited' })
@@ -21,11 +22,11 @@ export class ListAuditEventsQuery extends PageQuery {
 
   @ApiPropertyOptional({ description: `${WHEN}: events from then on` })
   @IsOptional()
-  @IsISO8601({ strict: true }, { message: `Use ${WHEN.toLowerCase()}.` })
+  @IsISO8601({ strict: true }, WHEN_MESSAGE)
   from?: string;
 
   @ApiPropertyOptional({ description: `${WHEN}: events up to then; a date includes that whole day` })
   @IsOptional()
-  @IsISO8601({ strict: true }, { message: `Use ${WHEN.toLowerCase()}.` })
+  @IsISO8601({ strict: true }, WHEN_MESSAGE)
   to?: string;
 }
