@@ -18,7 +18,7 @@ export const AREAS_BY_ROLE: Record<Role, readonly Area[]> = {
 };
 
 /** Areas that have working pages; the rest show an honest "arrives later" state. */
-export const BUILT_AREAS: ReadonlySet<Area> = new Set<Area>(['stories', 'media', 'reviews', 'translations', 'releases', 'people', 'settings']);
+export const BUILT_AREAS: ReadonlySet<Area> = new Set<Area>(['stories', 'media', 'reviews', 'translations', 'releases', 'fleet', 'insights', 'people', 'settings']);
 
 /** A person with several roles sees each area once, in the order of their first role that has it. */
 export function areasFor(roles: readonly Role[]): Area[] {

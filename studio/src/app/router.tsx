@@ -27,6 +27,10 @@ const ReviewsPage = named(() => import('../routes/reviews'), 'ReviewsPage');
 const RevisionPage = named(() => import('../routes/reviews/revision'), 'RevisionPage');
 const NotificationsPage = named(() => import('../routes/notifications'), 'NotificationsPage');
 const AuditPage = named(() => import('../routes/audit'), 'AuditPage');
+const FleetPage = named(() => import('../routes/fleet'), 'FleetPage');
+const FleetKioskPage = named(() => import('../routes/fleet/kiosk'), 'FleetKioskPage');
+// Its own chunk, so the charting library is fetched only by those who open Insights.
+const InsightsPage = named(() => import('../routes/insights'), 'InsightsPage');
 const TranslationsPage = named(() => import('../routes/translations'), 'TranslationsPage');
 const TranslationWorkspacePage = named(() => import('../routes/translations/workspace'), 'TranslationWorkspacePage');
 const ReleasesPage = named(() => import('../routes/releases'), 'ReleasesPage');
@@ -97,6 +101,9 @@ export const router = createBrowserRouter([
       { path: '/releases/compare', element: inArea('releases', <ReleaseComparePage />) },
       { path: '/stations', element: inArea('releases', <StationsPage />) },
       { path: '/stations/:id', element: inArea('releases', <StationPage />) },
+      { path: '/fleet', element: inArea('fleet', <FleetPage />) },
+      { path: '/fleet/:kioskId', element: inArea('fleet', <FleetKioskPage />) },
+      { path: '/insights', element: inArea('insights', <InsightsPage />) },
       { path: '/:area', element: <PlannedArea /> },
       { path: '*', element: <NotFoundPage /> },
     ],

@@ -1,4 +1,5 @@
 import { authoringEn } from './authoring.en';
+import { fleetInsightsEn } from './fleet-insights.en';
 import { releaseEn } from './release.en';
 import { reviewEn } from './review.en';
 import { translationEn } from './translation.en';
@@ -9,6 +10,7 @@ export const en = {
   ...reviewEn,
   ...translationEn,
   ...releaseEn,
+  ...fleetInsightsEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',

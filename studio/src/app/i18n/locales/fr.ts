@@ -1,4 +1,5 @@
 import { authoringFr } from './authoring.fr';
+import { fleetInsightsFr } from './fleet-insights.fr';
 import { releaseFr } from './release.fr';
 import { reviewFr } from './review.fr';
 import { translationFr } from './translation.fr';
@@ -10,6 +11,7 @@ export const fr: Messages = {
   ...reviewFr,
   ...translationFr,
   ...releaseFr,
+  ...fleetInsightsFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',

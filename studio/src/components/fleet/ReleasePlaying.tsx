@@ -1,0 +1,29 @@
+import { makeStyles, Text, tokens } from '@fluentui/react-components';
+import { WarningFilled } from '@fluentui/react-icons';
+import type { FleetKioskView } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+
+const useStyles = makeStyles({
+  root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXXS },
+  mismatch: { display: 'inline-flex', alignItems: 'center', gap: tokens.spacingHorizontalXS, color: tokens.colorPaletteDarkOrangeForeground1, fontWeight: tokens.fontWeightSemibold },
+  muted: { color: tokens.colorNeutralForeground3 },
+});
+
+/** The release on the screen, and under it the live one when they differ (in words and an icon). */
+export function ReleasePlaying({ kiosk }: { kiosk: Pick<FleetKioskView, 'releasePlaying' | 'releaseLive' | 'playsLiveRelease' | 'revokedAt'> }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const playing = kiosk.releasePlaying ? t('fleet.release', { number: kiosk.releasePlaying.number }) : t('fleet.noRelease');
+  const mismatch = !kiosk.revokedAt && !kiosk.playsLiveRelease && kiosk.releaseLive !== null;
+  return (
+    <span className={styles.root} data-mismatch={mismatch || undefined}>
+      <Text>{playing}</Text>
+      {mismatch ? (
+        <span className={styles.mismatch}>
+          <WarningFilled aria-hidden />
+          {t('fleet.mismatch')} · {t('fleet.live', { number: kiosk.releaseLive!.number })}
+        </span>
+      ) : kiosk.releaseLive === null ? <Text size={200} className={styles.muted}>{t('fleet.noLive')}</Text> : null}
+    </span>
+  );
+}

@@ -1,0 +1,64 @@
+import { Fragment } from 'react';
+import { makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens } from '@fluentui/react-components';
+import type { FleetKioskView } from '@mantlepiece/shared';
+import { useTranslation } from 'react-i18next';
+import { KioskStateBadge } from '../../components/fleet/KioskStateBadge';
+import { LastHeartbeat } from '../../components/fleet/LastHeartbeat';
+import { ReleasePlaying } from '../../components/fleet/ReleasePlaying';
+import { TextLink } from '../../components/links';
+import { byGallery } from './list-params';
+
+const COLUMNS = 6;
+
+const useStyles = makeStyles({
+  table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
+  group: { backgroundColor: tokens.colorNeutralBackground3 },
+  station: { fontWeight: tokens.fontWeightSemibold },
+  error: { color: tokens.colorPaletteRedForeground1, overflowWrap: 'anywhere', maxWidth: '24rem' },
+  muted: { color: tokens.colorNeutralForeground3 },
+  code: { fontFamily: tokens.fontFamilyMonospace, fontSize: tokens.fontSizeBase200 },
+});
+
+export function FleetTable({ kiosks, now, busy }: { kiosks: FleetKioskView[]; now: Date; busy: boolean }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  return (
+    <Table aria-label={t('fleet.title')} aria-busy={busy} className={styles.table}>
+      <TableHeader>
+        <TableRow>
+          <TableHeaderCell>{t('fleet.columns.station')}</TableHeaderCell>
+          <TableHeaderCell>{t('fleet.columns.state')}</TableHeaderCell>
+          <TableHeaderCell>{t('fleet.columns.release')}</TableHeaderCell>
+          <TableHeaderCell>{t('fleet.columns.lastHeartbeat')}</TableHeaderCell>
+          <TableHeaderCell>{t('fleet.columns.appVersion')}</TableHeaderCell>
+          <TableHeaderCell>{t('fleet.columns.lastError')}</TableHeaderCell>
+        </TableRow>
+      </TableHeader>
+      <TableBody>
+        {byGallery(kiosks).map(({ gallery, kiosks: inGallery }) => (
+          <Fragment key={`${gallery.id}-${inGallery[0]!.id}`}>
+            <TableRow className={styles.group}>
+              <TableCell colSpan={COLUMNS}>
+                <Text weight="semibold">{t('fleet.galleryGroup', { gallery: gallery.name })}</Text>
+              </TableCell>
+            </TableRow>
+            {inGallery.map((kiosk) => (
+              <TableRow key={kiosk.id} data-kiosk-id={kiosk.id}>
+                <TableCell>
+                  <span className={styles.station}><TextLink to={`/fleet/${kiosk.id}`}>{kiosk.station.name}</TextLink></span>
+                </TableCell>
+                <TableCell><KioskStateBadge kiosk={kiosk} /></TableCell>
+                <TableCell><ReleasePlaying kiosk={kiosk} /></TableCell>
+                <TableCell><LastHeartbeat at={kiosk.lastHeartbeatAt} now={now} /></TableCell>
+                <TableCell><span className={styles.code}>{kiosk.appVersion ?? '—'}</span></TableCell>
+                <TableCell>
+                  {kiosk.lastError ? <span className={styles.error}>{kiosk.lastError}</span> : <span className={styles.muted}>{t('fleet.noError')}</span>}
+                </TableCell>
+              </TableRow>
+            ))}
+          </Fragment>
+        ))}
+      </TableBody>
+    </Table>
+  );
+}

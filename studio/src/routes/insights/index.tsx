@@ -1,0 +1,79 @@
+import { Button, Field, Input, makeStyles, Select, Spinner, tokens } from '@fluentui/react-components';
+import { ArrowDownloadRegular, DataBarVerticalRegular } from '@fluentui/react-icons';
+import { useTranslation } from 'react-i18next';
+import { useSearchParams } from 'react-router-dom';
+import { useDownloadInsightsCsv, useInsights } from '../../api/insights';
+import { useGalleries } from '../../api/settings';
+import { EmptyState } from '../../components/EmptyState';
+import { FormAlert } from '../../components/forms/FormAlert';
+import { describeError } from '../../components/forms/describe-error';
+import { InsightsFigures } from '../../components/insights/InsightsFigures';
+import { withSearchChanges } from '../../components/lists/list-search';
+import { PageHeader } from '../../components/PageHeader';
+import { saveFile } from '../../components/save-file';
+import { insightsFileName, readInsightsFilter } from './range';
+
+const useStyles = makeStyles({
+  toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
+});
+
+const GALLERY_CHOICES = { page: 1, pageSize: 100, sort: 'name' } as const;
+
+export function InsightsPage() {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const [search, setSearch] = useSearchParams();
+  const galleries = useGalleries(GALLERY_CHOICES);
+  const filter = readInsightsFilter(search, new Date(), galleries.data?.items[0]?.id);
+  const insights = useInsights(filter);
+  const download = useDownloadInsightsCsv();
+  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
+
+  const downloadButton = filter ? (
+    <Button icon={<ArrowDownloadRegular />} disabled={download.isPending} onClick={() => download.mutate(filter, { onSuccess: (blob) => saveFile(blob, insightsFileName(filter)) })}>
+      {download.isPending ? t('insights.downloading') : t('insights.download')}
+    </Button>
+  ) : null;
+
+  if (galleries.isPending) return <Spinner label={t('common.loading')} />;
+  if (!filter) {
+    return (
+      <>
+        <PageHeader title={t('insights.title')} intro={t('insights.intro')} />
+        <EmptyState icon={<DataBarVerticalRegular />} title={t('insights.noGalleryTitle')}>{t('insights.noGalleryBody')}</EmptyState>
+      </>
+    );
+  }
+  return (
+    <>
+      <PageHeader title={t('insights.title')} intro={t('insights.intro')} actions={downloadButton} />
+      {download.isError ? <FormAlert intent="error">{describeError(t, download.error)}</FormAlert> : null}
+      <div className={styles.toolbar} role="search">
+        <Field label={t('insights.gallery')}>
+          <Select value={String(filter.galleryId)} onChange={(_event, data) => change({ galleryId: data.value })}>
+            {galleries.data?.items.map((gallery) => <option key={gallery.id} value={String(gallery.id)}>{gallery.name}</option>)}
+          </Select>
+        </Field>
+        <Field label={t('insights.from')}>
+          <Input type="date" value={filter.from} max={filter.to} onChange={(_event, data) => change({ from: data.value || undefined })} />
+        </Field>
+        <Field label={t('insights.to')}>
+          <Input type="date" value={filter.to} min={filter.from} onChange={(_event, data) => change({ to: data.value || undefined })} />
+        </Field>
+      </div>
+      {insights.isPending ? (
+        <Spinner label={t('common.loading')} />
+      ) : insights.isError ? (
+        <EmptyState title={t('insights.loadError')} actions={<Button onClick={() => void insights.refetch()}>{t('common.retry')}</Button>}>
+          {describeError(t, insights.error)}
+        </EmptyState>
+      ) : insights.data.totals.events === 0 ? (
+        <EmptyState icon={<DataBarVerticalRegular />} title={t('insights.emptyTitle')}>{t('insights.emptyBody')}</EmptyState>
+      ) : (
+        <div aria-busy={insights.isFetching}>
+          <InsightsFigures insights={insights.data} />
+        </div>
+      )}
+    </>
+  );
+}
