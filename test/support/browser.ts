@@ -5,20 +5,22 @@ export const baseUrl = (process.env.MANTLEPIECE_URL ?? 'http://127.0.0.1:4310').
 export const demoPassword = process.env.DEMO_PASSWORD ?? 'mantlepiece-demo';
 
 /** Debian's chromium, headless, with everything that would reach the internet switched off. */
+export const chromiumOptions = {
+  executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+  headless: true,
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-quic',
+    '--no-first-run',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+  ],
+};
+
 export function launchBrowser(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
+  return chromium.launch(chromiumOptions);
 }
 
 /** A fresh, cookie-less browser profile that reads English, at a desk-sized window. */
