@@ -1,11 +1,11 @@
 import { useRef, useState } from 'react';
 import { Badge, type BadgeProps, makeStyles, Text, tokens } from '@fluentui/react-components';
-import type { CommentRange, CommentView, PanelDiff, PanelDocJSON, RevisionPanelView } from '@mantlepiece/shared';
+import { panelText, type CommentRange, type CommentView, type PanelDiff, type PanelDocJSON, type RevisionPanelView } from '@mantlepiece/shared';
 import { PanelFrame, PanelView, type ResolveMedia } from '@mantlepiece/shared/react';
 import { useTranslation } from 'react-i18next';
 import { CommentThreads } from './CommentThreads';
 import { useReviewStyles } from './review-styles';
-import { selectionRangeIn } from './text-selection';
+import { anchorInPanelText, selectionRangeIn } from './text-selection';
 import { TextDiff } from './TextDiff';
 import { WidgetChanges } from './WidgetChanges';
 
@@ -75,13 +75,14 @@ export function PanelComparison({ diff, panel, basePanel, hasBase, locale, resol
   const title = t('story.panelNumber', { number });
   const headingId = `panel-${diff.panelId}-heading`;
 
-  const captureSelection = () => {
-    if (!drawing.current) return;
-    const selected = selectionRangeIn(drawing.current, window.getSelection());
-    if (selected) setRange(selected);
-  };
   const baseDoc = basePanel?.docs[locale];
   const doc = panel?.docs[locale];
+  const captureSelection = () => {
+    if (!drawing.current || !doc) return;
+    const selected = selectionRangeIn(drawing.current, window.getSelection());
+    const anchored = selected && anchorInPanelText(panelText(doc, { locale }), selected);
+    if (anchored) setRange(anchored);
+  };
 
   return (
     <section id={`panel-${diff.panelId}`} className={shared.card} aria-labelledby={headingId} data-panel-id={diff.panelId} data-panel-status={diff.status}>
@@ -114,7 +115,7 @@ export function PanelComparison({ diff, panel, basePanel, hasBase, locale, resol
 
       <div className={styles.details}>
         <div className={styles.block}>
-          <Text as="h3" weight="semibold" className={shared.heading}>{t('diff.textChanges')}</Text>
+          <Text as="h3" weight="semibold" className={shared.heading}>{diff.status === 'unchanged' ? t('diff.textUnchanged') : t('diff.textChanges')}</Text>
           {diff.text.length > 0 ? <TextDiff pieces={diff.text} locale={locale} /> : <Text className={shared.muted}>{t('diff.noText')}</Text>}
           {diff.media.added.length + diff.media.removed.length > 0 ? (
             <Text className={shared.muted}>{t('diff.media', { added: diff.media.added.length, removed: diff.media.removed.length })}</Text>

@@ -1,10 +1,10 @@
 import { useState } from 'react';
-import { Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, Text, tokens } from '@fluentui/react-components';
+import { Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, MessageBar, MessageBarBody, MessageBarTitle, Text, tokens } from '@fluentui/react-components';
 import { ArchiveRegular, SendRegular } from '@fluentui/react-icons';
-import { STORY_WORKFLOW, type StoryDetailView } from '@mantlepiece/shared';
+import { STORY_WORKFLOW, type RevisionSummary, type StoryDetailView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useCurrentUser } from '../../api/session';
-import { useRetireStory, useStoryRevisions, useSubmitStory } from '../../api/revisions';
+import { useRetireStory, useRevision, useStoryRevisions, useSubmitStory } from '../../api/revisions';
 import { useDateFormat } from '../formatting';
 import { FormAlert } from '../forms/FormAlert';
 import { describeError } from '../forms/describe-error';
@@ -25,6 +25,29 @@ const useStyles = makeStyles({
 
 const canTake = (action: 'submit' | 'retire', roles: readonly string[], state: StoryDetailView['state']) =>
   STORY_WORKFLOW[action].roles.some((role) => roles.includes(role)) && STORY_WORKFLOW[action].from.includes(state);
+
+/**
+ * The workflow lets an open or approved story be submitted again, but the editor is read-only in
+ * those states, so a new revision would only repeat the last one; the button waits for an edit.
+ */
+const SUBMIT_OFFERED: readonly StoryDetailView['state'][] = ['draft', 'changes_requested', 'retired'];
+
+/** What the educator asked for, on the story the curator is about to fix. */
+function ChangesRequested({ revisionId }: { revisionId: number }) {
+  const { t } = useTranslation();
+  const revision = useRevision(revisionId);
+  const request = revision.data?.reviews.filter((review) => review.verdict === 'request_changes').at(-1);
+  if (!request) return null;
+  return (
+    <MessageBar intent="warning" layout="multiline" data-changes-requested>
+      <MessageBarBody>
+        <MessageBarTitle>{t('verdict.changesBy', { name: request.reviewer?.name ?? t('revision.formerColleague') })}</MessageBarTitle>
+        {request.note}{' '}
+        <TextLink to={`/reviews/${revisionId}`}>{t('storyReview.openRevision', { number: revision.data!.number })}</TextLink>
+      </MessageBarBody>
+    </MessageBar>
+  );
+}
 
 function RevisionList({ storyId }: { storyId: number }) {
   const { t } = useTranslation();
@@ -66,12 +89,14 @@ export function StoryReview({ story }: { story: StoryDetailView }) {
   const retire = useRetireStory(story.id);
   const [confirmRetire, setConfirmRetire] = useState(false);
   const submitted = submit.data;
+  const revisions = useStoryRevisions(story.id);
+  const latest = revisions.data?.reduce<RevisionSummary | undefined>((last, revision) => (!last || revision.number > last.number ? revision : last), undefined);
   const blockers = submitted ? groupPreflight(submitted.preflight).blockers : [];
 
   return (
     <section className={styles.root} aria-label={t('storyReview.label')}>
       <div className={styles.actions}>
-        {canTake('submit', me.roles, story.state) ? (
+        {canTake('submit', me.roles, story.state) && SUBMIT_OFFERED.includes(story.state) ? (
           <Button appearance="primary" icon={<SendRegular />} disabled={submit.isPending || story.panels.length === 0} onClick={() => submit.mutate()}>
             {submit.isPending ? t('storyReview.submitting') : t('storyReview.submit')}
           </Button>
@@ -81,6 +106,7 @@ export function StoryReview({ story }: { story: StoryDetailView }) {
         ) : null}
         {story.state === 'in_review' ? <Text className={shared.muted}>{t('storyReview.inReviewHint')}</Text> : null}
       </div>
+      {story.state === 'changes_requested' && latest ? <ChangesRequested revisionId={latest.id} /> : null}
       {submit.isError ? <FormAlert intent="error">{describeError(t, submit.error)}</FormAlert> : null}
       {retire.isSuccess ? <FormAlert intent="success">{t('storyReview.retired')}</FormAlert> : null}
 

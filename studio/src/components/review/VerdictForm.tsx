@@ -53,13 +53,13 @@ export function VerdictForm({ revisionId, storyId, blockers, onSettled }: Verdic
     <form className={styles.form} onSubmit={submit} noValidate aria-labelledby="verdict-heading">
       <Text as="h2" id="verdict-heading" size={500} weight="semibold" className={shared.heading}>{t('verdict.title')}</Text>
       <RadioGroup value={verdict} onChange={(_event, data) => setVerdict(data.value as Verdict)} aria-label={t('verdict.title')}>
-        <Radio value="approve" label={t('verdict.approve')} />
+        <Radio value="approve" label={t('verdict.approve')} disabled={blockers.length > 0} />
         <Radio value="request_changes" label={t('verdict.requestChanges')} />
       </RadioGroup>
       {blockers.length > 0 ? (
         <FormAlert intent="warning">{t('verdict.blocked', { count: blockers.length })}</FormAlert>
       ) : null}
-      {blockers.length > 0 && verdict === 'approve' ? (
+      {blockers.length > 0 ? (
         <ul className={styles.blockers} data-verdict-blockers>
           {blockers.map((blocker, index) => <li key={index}>{blocker.message}</li>)}
         </ul>

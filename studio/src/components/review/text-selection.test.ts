@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { selectionRangeIn } from './text-selection';
+import { anchorInPanelText, selectionRangeIn } from './text-selection';
 
 function panel(html: string): HTMLElement {
   const root = document.createElement('article');
@@ -37,5 +37,21 @@ describe('selectionRangeIn', () => {
     outside.textContent = 'Elsewhere on the page';
     document.body.append(outside);
     expect(selectionRangeIn(root, select(outside.firstChild!, 0, outside.firstChild!, 9))).toBeNull();
+  });
+});
+
+describe('anchorInPanelText', () => {
+  const text = 'Hot rock rises\nDeep under your feet the rock is hot.\nThe rock flows.';
+
+  it('finds the quote in the running text, across a line break, at the occurrence nearest the drawing’s offset', () => {
+    // The drawing runs the heading into the paragraph: "…risesDeep…".
+    expect(anchorInPanelText(text, { from: 9, to: 18, quote: 'risesDeep' })).toEqual({ from: 9, to: 19, quote: 'rises\nDeep' });
+    // "rock" is at 4, 40 and 57 of the running text; the drawing had it near 54.
+    expect(anchorInPanelText(text, { from: 54, to: 58, quote: 'rock' })).toEqual({ from: 57, to: 61, quote: 'rock' });
+    expect(anchorInPanelText(text, { from: 0, to: 4, quote: 'rock' })).toEqual({ from: 4, to: 8, quote: 'rock' });
+  });
+
+  it('gives null for words that are not running text, such as an image credit', () => {
+    expect(anchorInPanelText(text, { from: 70, to: 90, quote: 'Illustration: Basalt Point' })).toBeNull();
   });
 });

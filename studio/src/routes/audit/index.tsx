@@ -19,17 +19,42 @@ import { useDebounced } from '../people/use-debounced';
 import { auditFileName, readAuditFilter, readAuditParams } from './list-params';
 
 const useStyles = makeStyles({
-  toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
+  // Labels line up even though one field carries a hint underneath.
+  toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-start', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
   code: { fontFamily: tokens.fontFamilyMonospace, fontSize: tokens.fontSizeBase200 },
-  details: { fontFamily: tokens.fontFamilyMonospace, fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground2, overflowWrap: 'anywhere', maxWidth: '28rem' },
+  details: { margin: 0, padding: 0, listStyle: 'none', display: 'flex', flexWrap: 'wrap', columnGap: tokens.spacingHorizontalM, fontSize: tokens.fontSizeBase200, color: tokens.colorNeutralForeground2 },
+  detailKey: { color: tokens.colorNeutralForeground3 },
+  at: { width: '11rem' },
+  actor: { width: '11rem' },
+  action: { width: '15rem' },
+  target: { width: '9rem' },
   muted: { color: tokens.colorNeutralForeground3 },
 });
 
 /** People to filter by: the first hundred by name is every account a venue's staff has. */
 const ACTOR_CHOICES = { page: 1, pageSize: 100, sort: 'name' } as const;
 
-const detailsText = (details: unknown) => (details === null || details === undefined ? '' : typeof details === 'string' ? details : JSON.stringify(details));
+/** Past this a value (a content hash, a long note) is cut, whole on hover and in the CSV. */
+const DETAIL_LENGTH = 40;
+
+function Details({ details }: { details: AuditEventView['details'] }) {
+  const styles = useStyles();
+  if (!details) return null;
+  return (
+    <ul className={styles.details}>
+      {Object.entries(details).map(([key, value]) => {
+        const text = typeof value === 'string' ? value : JSON.stringify(value);
+        const cut = text.length > DETAIL_LENGTH;
+        return (
+          <li key={key} title={cut ? text : undefined}>
+            <span className={styles.detailKey}>{key}</span> {cut ? `${text.slice(0, DETAIL_LENGTH - 1)}…` : text}
+          </li>
+        );
+      })}
+    </ul>
+  );
+}
 
 function AuditTable({ entries, busy }: { entries: AuditEventView[]; busy: boolean }) {
   const { t } = useTranslation();
@@ -39,10 +64,10 @@ function AuditTable({ entries, busy }: { entries: AuditEventView[]; busy: boolea
     <Table aria-label={t('audit.title')} aria-busy={busy} className={styles.table} size="small">
       <TableHeader>
         <TableRow>
-          <TableHeaderCell>{t('audit.columns.at')}</TableHeaderCell>
-          <TableHeaderCell>{t('audit.columns.actor')}</TableHeaderCell>
-          <TableHeaderCell>{t('audit.columns.action')}</TableHeaderCell>
-          <TableHeaderCell>{t('audit.columns.target')}</TableHeaderCell>
+          <TableHeaderCell className={styles.at}>{t('audit.columns.at')}</TableHeaderCell>
+          <TableHeaderCell className={styles.actor}>{t('audit.columns.actor')}</TableHeaderCell>
+          <TableHeaderCell className={styles.action}>{t('audit.columns.action')}</TableHeaderCell>
+          <TableHeaderCell className={styles.target}>{t('audit.columns.target')}</TableHeaderCell>
           <TableHeaderCell>{t('audit.columns.details')}</TableHeaderCell>
         </TableRow>
       </TableHeader>
@@ -53,7 +78,7 @@ function AuditTable({ entries, busy }: { entries: AuditEventView[]; busy: boolea
             <TableCell>{entry.actor?.name ?? <span className={styles.muted}>{t('audit.system')}</span>}</TableCell>
             <TableCell><span className={styles.code}>{entry.action}</span></TableCell>
             <TableCell>{entry.target ? <span className={styles.code}>{`${entry.target.type} ${entry.target.id}`}</span> : null}</TableCell>
-            <TableCell><span className={styles.details}>{detailsText(entry.details)}</span></TableCell>
+            <TableCell><Details details={entry.details} /></TableCell>
           </TableRow>
         ))}
       </TableBody>

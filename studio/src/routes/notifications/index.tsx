@@ -20,7 +20,8 @@ const PAGE_SIZE = 25;
 
 const useStyles = makeStyles({
   layout: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr) 20rem', gap: tokens.spacingHorizontalXL, alignItems: 'start', '@media (max-width: 1000px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
-  toolbar: { display: 'flex', alignItems: 'center', justifyContent: 'space-between', gap: tokens.spacingHorizontalM, marginBottom: tokens.spacingVerticalM, flexWrap: 'wrap' },
+  toolbar: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalL, marginBottom: tokens.spacingVerticalM, flexWrap: 'wrap' },
+  markAll: { marginLeft: 'auto' },
   list: { listStyle: 'none', margin: 0, padding: 0, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge, backgroundColor: tokens.colorNeutralBackground1 },
   item: {
     display: 'grid',
@@ -49,7 +50,10 @@ function NotificationItem({ notification, onRead, marking }: { notification: Not
       <div className={styles.text}>
         <Text weight={unread ? 'semibold' : 'regular'}>
           {unread ? <span className={shared.visuallyHidden}>{t('notifications.unreadMark')}</span> : null}
-          <TextLink to={notification.link}>{notification.title}</TextLink>
+          {/* Following a notification is reading it. */}
+          <span onClickCapture={unread ? onRead : undefined}>
+            <TextLink to={notification.link}>{notification.title}</TextLink>
+          </span>
         </Text>
         {notification.body ? <p className={styles.body}>{notification.body}</p> : null}
         <Text size={200} className={shared.muted}>{t(`notifications.kinds.${notification.kind}`)} · {formatDate(notification.createdAt)}</Text>
@@ -78,7 +82,7 @@ export function NotificationsPage() {
           <div className={styles.toolbar}>
             <Switch label={t('notifications.unreadOnly')} checked={unreadOnly} onChange={(_event, data) => change({ unread: data.checked ? 'true' : undefined })} />
             <Text aria-live="polite">{t('notifications.unreadCount', { count: unread })}</Text>
-            <Button icon={<CheckmarkRegular />} disabled={unread === 0 || mark.isPending} onClick={() => mark.mutate({ all: true })}>{t('notifications.markAllRead')}</Button>
+            <Button className={styles.markAll} icon={<CheckmarkRegular />} disabled={unread === 0 || mark.isPending} onClick={() => mark.mutate({ all: true })}>{t('notifications.markAllRead')}</Button>
           </div>
           {mark.isError ? <FormAlert intent="error">{describeError(t, mark.error)}</FormAlert> : null}
           <ListStates

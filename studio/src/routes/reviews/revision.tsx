@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { Badge, Link, makeStyles, Spinner, Text, tokens } from '@fluentui/react-components';
+import { Link, makeStyles, Spinner, Text, tokens } from '@fluentui/react-components';
 import { mediaIdsIn, type RevisionView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams } from 'react-router-dom';
@@ -130,7 +130,7 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
               <TextLink to={`/reviews/${comparison.data.base.id}`}>{t('revision.number', { number: comparison.data.base.number })}</TextLink>
             </Text>
           ) : (
-            <Badge appearance="outline" color="informative">{t('revision.firstReview')}</Badge>
+            <Text>{t('revision.firstReview')}</Text>
           )}
           {comparison.data.diff.map((diff) => (
             <PanelComparison

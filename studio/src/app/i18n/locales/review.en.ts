@@ -57,6 +57,7 @@ export const reviewEn = {
     noBase: 'No approved revision yet',
     removedHere: 'Removed in this revision',
     textChanges: 'Text changes',
+    textUnchanged: 'Text (unchanged)',
     noText: 'No text on either side.',
     insertedStart: '[inserted: ',
     insertedEnd: ']',

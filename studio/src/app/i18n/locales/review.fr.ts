@@ -59,6 +59,7 @@ export const reviewFr: typeof reviewEn = {
     noBase: 'Aucune révision approuvée pour l’instant',
     removedHere: 'Supprimé dans cette révision',
     textChanges: 'Modifications du texte',
+    textUnchanged: 'Texte (inchangé)',
     noText: 'Pas de texte d’un côté ni de l’autre.',
     insertedStart: '[ajouté : ',
     insertedEnd: ']',
