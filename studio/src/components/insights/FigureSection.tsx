@@ -25,12 +25,14 @@ const useStyles = makeStyles({
 });
 
 /** One figure: a heading, its chart and the same numbers as a table (the last column is the number). */
-export function FigureSection({ title, chartLabel, columns, rows, format = String }: {
+export function FigureSection({ title, chartLabel, columns, rows, format = String, decimals = 0 }: {
   title: string;
   chartLabel: string;
   columns: string[];
   rows: FigureRow[];
   format?: (value: number) => string;
+  /** Decimals the chart's axis may show: 0 for counts. */
+  decimals?: number;
 }) {
   const { t } = useTranslation();
   const styles = useStyles();
@@ -42,7 +44,7 @@ export function FigureSection({ title, chartLabel, columns, rows, format = Strin
         <Text as="p" className={styles.muted}>{t('insights.none')}</Text>
       ) : (
         <>
-          <FigureChart label={chartLabel} labels={rows.map((row) => row.label)} values={rows.map((row) => row.value)} format={format} />
+          <FigureChart label={chartLabel} labels={rows.map((row) => row.label)} values={rows.map((row) => row.value)} format={format} decimals={decimals} />
           <Table aria-label={title} size="small">
             <TableHeader>
               <TableRow>

@@ -21,7 +21,7 @@ export function InsightsFigures({ insights }: { insights: InsightsView }) {
   const styles = useStyles();
   const language = i18n.resolvedLanguage ?? 'en';
   const count = new Intl.NumberFormat(language);
-  const seconds = (ms: number) => t('insights.seconds', { value: new Intl.NumberFormat(language, { maximumFractionDigits: 1 }).format(ms / 1000) });
+  const seconds = (s: number) => t('insights.seconds', { value: new Intl.NumberFormat(language, { maximumFractionDigits: 1 }).format(s) });
   const languageNames = new Intl.DisplayNames(language, { type: 'language' });
   const storyTitle = (id: number | null, title: string | null) => title ?? t('insights.deletedStory', { id: id ?? '?' });
 
@@ -46,10 +46,11 @@ export function InsightsFigures({ insights }: { insights: InsightsView }) {
         title={t('insights.panels.title')}
         chartLabel={t('insights.panels.chart')}
         columns={[t('insights.panels.panel'), t('insights.panels.views'), t('insights.panels.median')]}
-        format={(value) => seconds(value)}
+        format={seconds}
+        decimals={1}
         rows={insights.panels.map((p) => {
           const label = p.position === null ? t('insights.deletedPanel', { id: p.panelId }) : t('insights.panels.label', { story: storyTitle(p.storyId, p.storyTitle), position: p.position });
-          return { key: String(p.panelId), label, value: p.medianDwellMs, cells: [label, count.format(p.views), seconds(p.medianDwellMs)] };
+          return { key: String(p.panelId), label, value: p.medianDwellMs / 1000, cells: [label, count.format(p.views), seconds(p.medianDwellMs / 1000)] };
         })}
       />
       <FigureSection
