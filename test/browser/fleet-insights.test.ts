@@ -1,3 +1,4 @@
+import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import type { FleetPage, GalleryView, InsightsView, Page as ListPage, ReleaseView } from '@mantlepiece/shared';
@@ -124,6 +125,13 @@ describe('Fleet and Insights follow a kiosk running in a browser', () => {
     // The same numbers are drawn as charts.
     await studio.getByRole('img', { name: 'Opens per story' }).waitFor();
     await studio.getByRole('img', { name: 'Touches per widget and setting' }).waitFor();
+
+    // And they download as CSV, through the signed-in API client.
+    const [download] = await Promise.all([studio.waitForEvent('download'), studio.getByRole('button', { name: 'Download CSV' }).click()]);
+    expect(download.suggestedFilename()).toMatch(new RegExp(`^insights-gallery-${gallery.id}-\\d{4}-\\d{2}-\\d{2}_to_\\d{4}-\\d{2}-\\d{2}\\.csv$`));
+    const csv = await readFile((await download.path())!, 'utf8');
+    expect(csv.split('\r\n')[0]).toBe('"figure","story_id","story_title","panel_id","panel_position","widget_type","param","locale","switch","count","median_dwell_ms"');
+    expect(csv).toContain(`"story_opens","`);
   });
 
   it("revokes the kiosk from its page after a confirmation, which ends the kiosk's access at once", async () => {
