@@ -1,9 +1,10 @@
 // Kiosk benchmark (issue 7), not a timed test: `npm run bench -w kiosk` after `npm run build -w kiosk`.
-// Each section returns rows for REPORT.md; sections that need the running server (offline boot,
-// release sync) are listed with what they need and join once the server side of releases exists.
+// Each section returns rows for REPORT.md. The offline boot and release sync sections need a server:
+// MANTLEPIECE_URL when set, else a private stack on free ports (see bench-server.mjs).
 import { readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
+import { serverSections } from './server-sections.mjs';
 
 const DIST = new URL('../dist/', import.meta.url);
 const BUDGET_BYTES = 300 * 1024;
@@ -31,15 +32,7 @@ function bundleSize() {
   return { title: 'Bundle size (JS + CSS gzipped, fonts apart)', lines, ok: total <= BUDGET_BYTES };
 }
 
-function pending(title, needs) {
-  return { title, lines: [`Not measured yet: ${needs}`], ok: true };
-}
-
-const sections = [
-  bundleSize(),
-  pending('Offline boot', 'time to the first drawn panel with the network cut, over the time to load a blank page, in one headless Chromium run; needs a paired kiosk and a live release from the server.'),
-  pending('Release sync', 'sync time of the demo gallery release against plain downloads of the same files in the same run; needs GET /api/kiosk/manifest and /api/kiosk/files on the server.'),
-];
+const sections = [bundleSize(), ...(await serverSections())];
 
 const report = ['# Kiosk bench', '', ...sections.flatMap((section) => [`## ${section.title}`, '', ...section.lines, ''])].join('\n');
 writeFileSync(new URL('./REPORT.md', import.meta.url), report);
