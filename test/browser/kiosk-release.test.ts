@@ -193,7 +193,7 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
 
     // The station page shows the kiosk's report to the technician.
     await studio.goto(`/stations/${(await report())!.station.id}`);
-    await studio.locator(`tr[data-kiosk-id="${kioskId}"]`).getByText(`Release ${secondRelease} refused`, { exact: false }).waitFor();
+    await studio.locator(`tr[data-kiosk-error="${kioskId}"]`).getByText(`Last error: Release ${secondRelease} refused`, { exact: false }).waitFor();
   });
 
   it('rolls the gallery back to the first release from the studio', async () => {

@@ -17,7 +17,7 @@ const useStyles = makeStyles({
 
 type Change = 'added' | 'removed' | 'changed' | 'unchanged';
 
-const COLOURS = { added: 'success', removed: 'danger', changed: 'warning', unchanged: 'subtle' } as const;
+const COLOURS = { added: 'success', removed: 'danger', changed: 'warning', unchanged: 'informative' } as const;
 
 interface Row {
   storyId: number;
@@ -88,7 +88,7 @@ export function ReleaseComparePage() {
           {rowsOf(data).map((row) => (
             <TableRow key={row.storyId} data-change={row.change}>
               <TableCell>{row.title}</TableCell>
-              <TableCell><Badge appearance={row.change === 'unchanged' ? 'outline' : 'filled'} color={COLOURS[row.change]}>{t(`releases.compare.status.${row.change}`)}</Badge></TableCell>
+              <TableCell><Badge appearance={row.change === 'unchanged' ? 'tint' : 'filled'} color={COLOURS[row.change]}>{t(`releases.compare.status.${row.change}`)}</Badge></TableCell>
               <TableCell>{revision(row.from)}</TableCell>
               <TableCell>{revision(row.to)}</TableCell>
             </TableRow>

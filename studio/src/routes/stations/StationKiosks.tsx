@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { Fragment, useState } from 'react';
 import {
   Badge, Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, Spinner, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
 } from '@fluentui/react-components';
@@ -12,10 +12,14 @@ import { describeError } from '../../components/forms/describe-error';
 
 const useStyles = makeStyles({
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
-  error: { color: tokens.colorPaletteRedForeground1, overflowWrap: 'anywhere' },
+  // A refusal names file hashes: it gets a row of its own, under its kiosk, and wraps anywhere.
+  error: { color: tokens.colorPaletteRedForeground1, overflowWrap: 'anywhere', fontSize: tokens.fontSizeBase200, paddingBottom: tokens.spacingVerticalS },
+  access: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
   muted: { color: tokens.colorNeutralForeground3 },
   actions: { display: 'flex', justifyContent: 'flex-end' },
 });
+
+const COLUMNS = 6;
 
 /** Every kiosk paired to the station, the active one first, each with what it last reported. */
 export function StationKiosks({ station }: { station: StationView }) {
@@ -40,7 +44,6 @@ export function StationKiosks({ station }: { station: StationView }) {
             <TableHeaderCell>{t('stations.kiosks.pairedAt')}</TableHeaderCell>
             <TableHeaderCell>{t('stations.kiosks.lastHeartbeat')}</TableHeaderCell>
             <TableHeaderCell>{t('stations.kiosks.playing')}</TableHeaderCell>
-            <TableHeaderCell>{t('stations.kiosks.lastError')}</TableHeaderCell>
             <TableHeaderCell><span className={styles.muted}>{t('settings.columns.actions')}</span></TableHeaderCell>
           </TableRow>
         </TableHeader>
@@ -48,25 +51,34 @@ export function StationKiosks({ station }: { station: StationView }) {
           {kiosks.items.map((kiosk) => {
             const name = t('stations.kiosks.name', { id: kiosk.id });
             return (
-              <TableRow key={kiosk.id} data-kiosk-id={kiosk.id}>
-                <TableCell>{name}</TableCell>
-                <TableCell>
-                  {kiosk.revokedAt
-                    ? <Badge appearance="tint" color="subtle">{t('stations.kiosks.revoked', { date: formatDate(kiosk.revokedAt) })}</Badge>
-                    : <Badge appearance="tint" color="success">{t('stations.kiosks.active')}</Badge>}
-                </TableCell>
-                <TableCell>{formatDate(kiosk.pairedAt)}</TableCell>
-                <TableCell>{kiosk.lastHeartbeatAt ? formatDate(kiosk.lastHeartbeatAt) : <span className={styles.muted}>{t('stations.kiosks.never')}</span>}</TableCell>
-                <TableCell>{t('stations.kiosks.playingOf', { playing: release(kiosk.releasePlaying), live: release(kiosk.releaseLive) })}</TableCell>
-                <TableCell>{kiosk.lastError ? <span className={styles.error}>{kiosk.lastError}</span> : <span className={styles.muted}>{t('reviews.none')}</span>}</TableCell>
-                <TableCell>
-                  <span className={styles.actions}>
-                    {kiosk.revokedAt ? null : (
-                      <Button size="small" onClick={() => { revoke.reset(); setRevoking(kiosk); }} aria-label={t('stations.kiosks.revokeLabel', { name })}>{t('stations.kiosks.revoke')}</Button>
-                    )}
-                  </span>
-                </TableCell>
-              </TableRow>
+              <Fragment key={kiosk.id}>
+                <TableRow data-kiosk-id={kiosk.id}>
+                  <TableCell>{name}</TableCell>
+                  <TableCell>
+                    {kiosk.revokedAt ? (
+                      <span className={styles.access}>
+                        <Badge appearance="tint" color="subtle">{t('stations.kiosks.revoked')}</Badge>
+                        <span className={styles.muted}>{formatDate(kiosk.revokedAt)}</span>
+                      </span>
+                    ) : <Badge appearance="tint" color="success">{t('stations.kiosks.active')}</Badge>}
+                  </TableCell>
+                  <TableCell>{formatDate(kiosk.pairedAt)}</TableCell>
+                  <TableCell>{kiosk.lastHeartbeatAt ? formatDate(kiosk.lastHeartbeatAt) : <span className={styles.muted}>{t('stations.kiosks.never')}</span>}</TableCell>
+                  <TableCell>{t('stations.kiosks.playingOf', { playing: release(kiosk.releasePlaying), live: release(kiosk.releaseLive) })}</TableCell>
+                  <TableCell>
+                    <span className={styles.actions}>
+                      {kiosk.revokedAt ? null : (
+                        <Button size="small" onClick={() => { revoke.reset(); setRevoking(kiosk); }} aria-label={t('stations.kiosks.revokeLabel', { name })}>{t('stations.kiosks.revoke')}</Button>
+                      )}
+                    </span>
+                  </TableCell>
+                </TableRow>
+                {kiosk.lastError ? (
+                  <TableRow data-kiosk-error={kiosk.id}>
+                    <TableCell colSpan={COLUMNS} className={styles.error}>{t('stations.kiosks.lastErrorIs', { error: kiosk.lastError })}</TableCell>
+                  </TableRow>
+                ) : null}
+              </Fragment>
             );
           })}
         </TableBody>
