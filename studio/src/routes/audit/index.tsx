@@ -1,4 +1,3 @@
-import { useEffect, useRef, useState } from 'react';
 import { Button, Field, Input, makeStyles, Select, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
 import { ArrowDownloadRegular, HistoryRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
@@ -13,9 +12,9 @@ import { useDateFormat } from '../../components/formatting';
 import { ListStates } from '../../components/lists/ListStates';
 import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
+import { useUrlSearchText } from '../../components/lists/use-url-search-text';
 import { PageHeader } from '../../components/PageHeader';
 import { saveFile } from '../../components/save-file';
-import { useDebounced } from '../people/use-debounced';
 import { auditFileName, readAuditFilter, readAuditParams } from './list-params';
 
 const useStyles = makeStyles({
@@ -94,15 +93,9 @@ export function AuditPage() {
   const log = useAuditLog(readAuditParams(search));
   const people = useUsers(ACTOR_CHOICES);
   const download = useDownloadAuditCsv();
-  const [action, setAction] = useState(filter.action ?? '');
-  const settledAction = useDebounced(action.trim(), 300);
-  const urlAction = useRef(filter.action ?? '');
-  urlAction.current = filter.action ?? '';
+  const [action, setAction] = useUrlSearchText('action');
 
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
-  useEffect(() => {
-    if (settledAction !== urlAction.current) setSearch((current) => withSearchChanges(current, { action: settledAction }), { replace: true });
-  }, [settledAction, setSearch]);
 
   const filtered = Boolean(filter.actorId || filter.action || filter.from || filter.to);
   const today = new Date().toISOString().slice(0, 10);

@@ -1,4 +1,3 @@
-import { useEffect, useRef, useState } from 'react';
 import { Button, Field, makeStyles, SearchBox, tokens } from '@fluentui/react-components';
 import { ClipboardTaskListLtrRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
@@ -9,15 +8,15 @@ import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
 import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
+import { useUrlSearchText } from '../../components/lists/use-url-search-text';
 import { PageHeader } from '../../components/PageHeader';
-import { useDebounced } from '../people/use-debounced';
 import { DEFAULT_QUEUE_SORT, readQueueParams } from './list-params';
 import { ReviewQueueTable } from './ReviewQueueTable';
 import { SubmittedStories } from './SubmittedStories';
 
 const useStyles = makeStyles({
-  toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
-  search: { minWidth: '18rem' },
+  toolbar: { marginBottom: tokens.spacingVerticalL },
+  search: { maxWidth: '24rem' },
 });
 
 /** Educators get the queue of revisions waiting for a verdict; curators follow their stories through review. */
@@ -39,15 +38,9 @@ function ReviewQueue() {
   const [search, setSearch] = useSearchParams();
   const params = readQueueParams(search);
   const queue = useReviewQueue(params);
-  const [query, setQuery] = useState(params.q ?? '');
-  const settledQuery = useDebounced(query.trim(), 300);
-  const urlQuery = useRef(params.q ?? '');
-  urlQuery.current = params.q ?? '';
+  const [query, setQuery] = useUrlSearchText('q');
 
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
-  useEffect(() => {
-    if (settledQuery !== urlQuery.current) setSearch((current) => withSearchChanges(current, { q: settledQuery }), { replace: true });
-  }, [settledQuery, setSearch]);
 
   return (
     <>
