@@ -1,17 +1,14 @@
-import { useEffect, useRef, useState } from 'react';
 import { Button, Field, makeStyles, SearchBox, Select, tokens, ToggleButton } from '@fluentui/react-components';
 import { GridRegular, ImageMultipleRegular, TableRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
-import { useSearchParams } from 'react-router-dom';
 import { useMediaList } from '../../api/media';
 import { useCurrentUser } from '../../api/session';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
-import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
+import { useListSearch } from '../../components/lists/use-list-search';
 import { MediaDropzone } from '../../components/media/MediaDropzone';
 import { PageHeader } from '../../components/PageHeader';
-import { useDebounced } from '../people/use-debounced';
 import { canWriteStories } from '../stories/permissions';
 import { MEDIA_FILTERS, readMediaListParams } from './list-params';
 import { MediaGrid } from './MediaGrid';
@@ -28,19 +25,10 @@ export function MediaPage() {
   const { t } = useTranslation();
   const styles = useStyles();
   const me = useCurrentUser();
-  const [search, setSearch] = useSearchParams();
+  const { search, query, setQuery, change, clear } = useListSearch();
   const { view, ...params } = readMediaListParams(search);
   const media = useMediaList(params);
-  const [query, setQuery] = useState(params.q ?? '');
-  const settledQuery = useDebounced(query.trim(), 300);
-  const urlQuery = useRef(params.q ?? '');
-  urlQuery.current = params.q ?? '';
   const filter = search.get('filter') ?? '';
-
-  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
-  useEffect(() => {
-    if (settledQuery !== urlQuery.current) setSearch((current) => withSearchChanges(current, { q: settledQuery }), { replace: true });
-  }, [settledQuery, setSearch]);
 
   const filtered = Boolean(params.q || filter);
   return (
@@ -69,7 +57,7 @@ export function MediaPage() {
           <EmptyState
             icon={<ImageMultipleRegular />}
             title={filtered ? t('media.noMatchTitle') : t('media.emptyTitle')}
-            actions={filtered ? <Button onClick={() => { setQuery(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button> : null}
+            actions={filtered ? <Button onClick={clear}>{t('lists.clearFilters')}</Button> : null}
           >
             {filtered ? t('media.noMatchBody') : t('media.emptyBody')}
           </EmptyState>

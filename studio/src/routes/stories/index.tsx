@@ -1,17 +1,16 @@
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 import { Button, Field, makeStyles, SearchBox, Select, tokens } from '@fluentui/react-components';
 import { AddRegular, BookOpenRegular } from '@fluentui/react-icons';
 import { AUDIENCES, STORY_STATES } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useNavigate } from 'react-router-dom';
 import { useCurrentUser } from '../../api/session';
 import { useStories } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
-import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
+import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
-import { useDebounced } from '../people/use-debounced';
 import { CreateStoryDialog } from './CreateStoryDialog';
 import { readStoryListParams } from './list-params';
 import { canWriteStories } from './permissions';
@@ -28,21 +27,11 @@ export function StoriesPage() {
   const styles = useStyles();
   const navigate = useNavigate();
   const me = useCurrentUser();
-  const [search, setSearch] = useSearchParams();
+  const { search, query, setQuery, change, clear } = useListSearch();
   const params = readStoryListParams(search);
   const stories = useStories(params);
   const exhibits = useExhibitChoices();
   const [creating, setCreating] = useState(false);
-  const [query, setQuery] = useState(params.q ?? '');
-  const settledQuery = useDebounced(query.trim(), 300);
-  const urlQuery = useRef(params.q ?? '');
-  urlQuery.current = params.q ?? '';
-
-  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
-
-  useEffect(() => {
-    if (settledQuery !== urlQuery.current) setSearch((current) => withSearchChanges(current, { q: settledQuery }), { replace: true });
-  }, [settledQuery, setSearch]);
 
   const filtered = Boolean(params.q || params.state || params.exhibitId || params.audience);
   const writer = canWriteStories(me.roles);
@@ -85,7 +74,7 @@ export function StoriesPage() {
             <EmptyState
               icon={<BookOpenRegular />}
               title={t('stories.noMatchTitle')}
-              actions={<Button onClick={() => { setQuery(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button>}
+              actions={<Button onClick={clear}>{t('lists.clearFilters')}</Button>}
             >
               {t('stories.noMatchBody')}
             </EmptyState>
