@@ -39,9 +39,13 @@ function npmRun(script, workspace, phaseName, env) {
 function secrets(dataDir) {
   const file = path.join(dataDir, 'secrets.json');
   if (!fs.existsSync(file)) {
-    fs.writeFileSync(file, JSON.stringify({ jwtSecret: crypto.randomBytes(32).toString('base64url') }), { mode: 0o600 });
+    fs.writeFileSync(file, JSON.stringify({}), { mode: 0o600 });
   }
-  return JSON.parse(fs.readFileSync(file, 'utf8'));
+  // Each secret is made once per data folder; a folder from an older start gains the ones it lacks.
+  const known = JSON.parse(fs.readFileSync(file, 'utf8'));
+  const wanted = { ...Object.fromEntries(['jwtSecret', 'signingKeySecret'].map((name) => [name, crypto.randomBytes(32).toString('base64url')])), ...known };
+  if (Object.keys(wanted).length !== Object.keys(known).length) fs.writeFileSync(file, JSON.stringify(wanted), { mode: 0o600 });
+  return wanted;
 }
 
 /** A build is skipped when its output is newer than every source file it comes from. */
@@ -99,6 +103,7 @@ export async function startStack(options) {
       MAIL_DIR: mailDir,
       MEDIA_DIR: process.env.MEDIA_DIR ?? path.join(root, 'media/store'),
       JWT_SECRET: process.env.JWT_SECRET ?? secrets(dataDir).jwtSecret,
+      SIGNING_KEY_SECRET: process.env.SIGNING_KEY_SECRET ?? secrets(dataDir).signingKeySecret,
       DEMO_PASSWORD: demoPassword,
       STUDIO_DIST: path.join(root, 'studio/dist'),
       KIOSK_DIST: path.join(root, 'kiosk/dist'),

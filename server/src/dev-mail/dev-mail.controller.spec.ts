@@ -34,7 +34,7 @@ describe('captured mail (development)', () => {
   });
 
   it('answers 404 in production, where no stand-in keeps mail', async () => {
-    const production = await createTestApp({ env: { NODE_ENV: 'production' } });
+    const production = await createTestApp({ env: { NODE_ENV: 'production', SIGNING_KEY_SECRET: 'production-signing-secret' } });
     try {
       const token = (await signIn(production, admin.email)).accessToken;
       expect((await request(production.http).get('/api/dev/mail').set(bearer(token))).status).toBe(404);
