@@ -1,15 +1,15 @@
 import { Body, Controller, Delete, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Put, UseFilters } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/auth.decorators.js';
+import { VersionConflictFilter } from '../common/version-conflict.js';
 import { CreatePanelDto, ReorderPanelsDto, SavePanelDocumentDto, UpdatePanelDto } from './dto/panel.dto.js';
-import { PanelConflictFilter } from './panel-conflict.js';
 import { PanelsService } from './panels.service.js';
 
 /** Panels are read with their story (GET /api/stories/:id); these are the curator's writes. */
 @ApiTags('panels')
 @ApiBearerAuth()
 @Roles('curator')
-@UseFilters(PanelConflictFilter)
+@UseFilters(VersionConflictFilter)
 @Controller()
 export class PanelsController {
   constructor(private readonly panels: PanelsService) {}

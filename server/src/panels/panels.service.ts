@@ -4,15 +4,15 @@ import { Op, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
   checkPanelDocument, emptyPanelDoc, PANEL_IMAGE_NODE, visitPanelNodes,
-  type PanelDocJSON, type PanelIssue, type PanelView,
+  type PanelConflictBody, type PanelDocJSON, type PanelIssue, type PanelView,
 } from '@mantlepiece/shared';
+import { VersionConflictException } from '../common/version-conflict.js';
 import { MediaAsset } from '../media/models/media-asset.model.js';
 import { Story } from '../stories/models/story.model.js';
 import type { CreatePanelDto, SavePanelDocumentDto, UpdatePanelDto } from './dto/panel.dto.js';
 import { PanelDocument } from './models/panel-document.model.js';
 import { PanelMediaUsage } from './models/panel-media-usage.model.js';
 import { Panel } from './models/panel.model.js';
-import { PanelConflictException } from './panel-conflict.js';
 import { toPanelView } from './panels.presenter.js';
 
 /** Museum practice: a panel holds tens of words, not hundreds. The curator sets each panel's own. */
@@ -74,7 +74,10 @@ export class PanelsService {
       if (saved === 0) {
         // A locking read: a plain one would answer from this transaction's snapshot, which may predate the winning save.
         const current = await this.documents.findOne({ where, transaction, lock: transaction.LOCK.UPDATE });
-        throw new PanelConflictException(current!.version, current!.doc);
+        throw new VersionConflictException<Omit<PanelConflictBody, 'statusCode' | 'message'>>('Someone else saved this panel after you started editing it.', {
+          currentVersion: current!.version,
+          doc: current!.doc,
+        });
       }
       await this.recordMediaUsage(panel.id, doc, transaction);
       await this.touchStory(story.id, transaction);

@@ -2,10 +2,10 @@ import { Body, Controller, Get, Param, ParseIntPipe, Put, Query, Res, Unsupporte
 import { ApiBearerAuth, ApiBody, ApiConsumes, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import { VersionConflictFilter } from '../common/version-conflict.js';
 import type { User } from '../users/models/user.model.js';
 import { ListUnitsQuery, ListWorklistQuery, SaveTranslationUnitDto } from './dto/translation.dto.js';
 import { localeParam } from './translation-access.js';
-import { TranslationConflictFilter } from './translation-conflict.js';
 import { TranslationsService } from './translations.service.js';
 import { XLIFF_MEDIA_TYPES, XliffExchangeService } from './xliff-exchange.service.js';
 
@@ -16,7 +16,7 @@ import { XLIFF_MEDIA_TYPES, XliffExchangeService } from './xliff-exchange.servic
 @ApiTags('translations')
 @ApiBearerAuth()
 @Roles('admin', 'curator', 'translator')
-@UseFilters(TranslationConflictFilter)
+@UseFilters(VersionConflictFilter)
 @Controller()
 export class TranslationsController {
   constructor(

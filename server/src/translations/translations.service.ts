@@ -4,18 +4,18 @@ import { QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
   applyTranslations, checkPlaceholders, directionOf, runsFromText, unitStatus,
-  type LocaleCompleteness, type Page, type PanelDocJSON, type SavedTranslationUnit, type TranslationPreviewView,
+  type LocaleCompleteness, type Page, type PanelDocJSON, type SavedTranslationUnit, type TranslationConflictBody, type TranslationPreviewView,
   type TranslationUnitView, type TranslationWorklistItem, type UnitStatus,
 } from '@mantlepiece/shared';
 import { likePattern } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
+import { VersionConflictException } from '../common/version-conflict.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { User } from '../users/models/user.model.js';
 import type { ListUnitsQuery, ListWorklistQuery, SaveTranslationUnitDto } from './dto/translation.dto.js';
 import { Translation } from './models/translation.model.js';
 import { SourceUnitsService, type StorySource } from './source-units.service.js';
 import { assertMayRead, assertMayWrite, assertTargetLocale, readableLocales } from './translation-access.js';
-import { TranslationConflictException } from './translation-conflict.js';
 import { completenessOf, currentTranslationsOf, unitStates, type UnitState } from './translation-state.js';
 import { toTranslationUnitView } from './translations.presenter.js';
 
@@ -219,7 +219,10 @@ export class TranslationsService {
   /** A locking read: a plain one would answer from this transaction's snapshot, which may predate the winning save. */
   private async conflict(where: { unitId: string; locale: string }, transaction: Transaction): Promise<never> {
     const current = await this.translations.findOne({ where, transaction, lock: transaction.LOCK.UPDATE });
-    throw new TranslationConflictException(current?.version ?? 0, current?.text ?? null);
+    throw new VersionConflictException<Omit<TranslationConflictBody, 'statusCode' | 'message'>>('Someone else saved this unit after you started translating it.', {
+      currentVersion: current?.version ?? 0,
+      text: current?.text ?? null,
+    });
   }
 }
 
