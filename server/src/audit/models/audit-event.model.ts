@@ -1,5 +1,6 @@
-import { BeforeBulkDestroy, BeforeBulkUpdate, BeforeDestroy, BeforeUpdate, BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import { User } from '../../users/models/user.model.js';
+import { BeforeAnyChange } from '../../database/append-only.js';
 import { jsonColumn } from '../../database/json-column.js';
 
 /** Append-only: the model itself refuses updates and deletes, whatever code asks. */
@@ -32,10 +33,7 @@ export class AuditEvent extends Model {
 
   declare id: number;
 
-  @BeforeUpdate
-  @BeforeBulkUpdate
-  @BeforeDestroy
-  @BeforeBulkDestroy
+  @BeforeAnyChange
   static refuseChange(): never {
     throw new Error('Audit events are append-only');
   }

@@ -1,5 +1,6 @@
-import { BeforeBulkDestroy, BeforeBulkUpdate, BeforeDestroy, BeforeUpdate, BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import { VERDICTS, type Verdict } from '@mantlepiece/shared';
+import { BeforeAnyChange } from '../../database/append-only.js';
 import { Revision } from '../../revisions/models/revision.model.js';
 import { User } from '../../users/models/user.model.js';
 
@@ -28,10 +29,7 @@ export class Review extends Model {
 
   declare id: number;
 
-  @BeforeUpdate
-  @BeforeBulkUpdate
-  @BeforeDestroy
-  @BeforeBulkDestroy
+  @BeforeAnyChange
   static refuseChange(): never {
     throw new Error('Verdicts are append-only');
   }
