@@ -1,9 +1,10 @@
 import { defineConfig } from 'vitest/config';
 
-// Whole-system tests against the stack `npm test` started: a real browser, one file at a time.
+// Whole-system tests against the stack `npm test` started (a real browser, one file at a time), and
+// checks that the contributor guide matches what the code enforces.
 export default defineConfig({
   test: {
-    include: ['browser/**/*.test.ts'],
+    include: ['browser/**/*.test.ts', 'docs/**/*.test.ts'],
     environment: 'node',
     fileParallelism: false,
     testTimeout: 60_000,
