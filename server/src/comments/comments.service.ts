@@ -1,9 +1,10 @@
-import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { CommentView } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
+import { invalidField } from '../common/validation.js';
 import { NotificationsService } from '../notifications/notifications.service.js';
 import { Revision } from '../revisions/models/revision.model.js';
 import { User } from '../users/models/user.model.js';
@@ -15,10 +16,6 @@ const people = [
   { model: User, as: 'author', attributes: ['id', 'name'] },
   { model: User, as: 'resolvedBy', attributes: ['id', 'name'] },
 ];
-
-function invalid(path: string[], message: string): BadRequestException {
-  return new BadRequestException({ statusCode: 400, message: 'Some fields are not valid.', errors: [{ path, message }] });
-}
 
 /** The studio page of a revision, where its comments are read and answered. */
 export const reviewPagePath = (revisionId: number) => `/reviews/${revisionId}`;
@@ -46,15 +43,15 @@ export class CommentsService {
       const revision = await this.revisions.findByPk(revisionId, { transaction });
       if (!revision) throw new NotFoundException('There is no such revision.');
       const parent = dto.parentId ? await this.comments.findOne({ where: { id: dto.parentId, revisionId }, transaction }) : null;
-      if (dto.parentId && !parent) throw invalid(['parentId'], 'There is no such comment on this revision to reply to.');
+      if (dto.parentId && !parent) throw invalidField(['parentId'], 'There is no such comment on this revision to reply to.');
       const panelId = parent ? parent.panelId : (dto.panelId ?? null);
-      if (parent && dto.panelId != null && dto.panelId !== parent.panelId) throw invalid(['panelId'], 'A reply sits on the same panel as the comment it answers.');
+      if (parent && dto.panelId != null && dto.panelId !== parent.panelId) throw invalidField(['panelId'], 'A reply sits on the same panel as the comment it answers.');
       if (panelId !== null && !revision.snapshot.panels.some((panel) => panel.id === panelId)) {
-        throw invalid(['panelId'], `Revision ${revision.number} has no panel ${panelId}.`);
+        throw invalidField(['panelId'], `Revision ${revision.number} has no panel ${panelId}.`);
       }
       const range = dto.range ?? null;
-      if (range && panelId === null) throw invalid(['range'], 'A text range needs the panel it is in.');
-      if (range && range.from > range.to) throw invalid(['range', 'to'], 'A range ends where it starts or after.');
+      if (range && panelId === null) throw invalidField(['range'], 'A text range needs the panel it is in.');
+      if (range && range.from > range.to) throw invalidField(['range', 'to'], 'A range ends where it starts or after.');
 
       const comment = await this.comments.create({
         revisionId,

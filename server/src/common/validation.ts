@@ -12,12 +12,21 @@ export function fieldErrors(errors: ValidationError[], parent: (string | number)
   });
 }
 
+/** The 400 for fields a request got wrong, each problem under its field's path. */
+export function invalidFields(errors: FieldError[]): BadRequestException {
+  return new BadRequestException({ statusCode: 400, message: 'Some fields are not valid.', errors });
+}
+
+/** The 400 for one field a rule in a service refuses, shaped like the validation pipe's. */
+export function invalidField(path: FieldError['path'], message: string): BadRequestException {
+  return invalidFields([{ path, message }]);
+}
+
 export function createValidationPipe(): ValidationPipe {
   return new ValidationPipe({
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,
-    exceptionFactory: (errors) =>
-      new BadRequestException({ statusCode: 400, message: 'Some fields are not valid.', errors: fieldErrors(errors) }),
+    exceptionFactory: (errors) => invalidFields(fieldErrors(errors)),
   });
 }

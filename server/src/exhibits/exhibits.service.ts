@@ -1,6 +1,7 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { ExhibitView } from '@mantlepiece/shared';
+import { invalidField } from '../common/validation.js';
 import { SettingsService } from '../venues/settings.service.js';
 import type { CreateExhibitDto, UpdateExhibitDto } from './dto/exhibit.dto.js';
 import { toExhibitView } from './exhibits.presenter.js';
@@ -32,9 +33,5 @@ export class ExhibitsService extends SettingsService<Exhibit, ExhibitView> {
 // 'YYYY-MM-DD' strings order as their dates do.
 function assertPlannedDates(start: string | null | undefined, end: string | null | undefined) {
   if (!start || !end || start <= end) return;
-  throw new BadRequestException({
-    statusCode: 400,
-    message: 'Some fields are not valid.',
-    errors: [{ path: ['plannedEnd'], message: 'The planned end comes after the planned start.' }],
-  });
+  throw invalidField(['plannedEnd'], 'The planned end comes after the planned start.');
 }

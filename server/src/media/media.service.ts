@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { ForeignKeyConstraintError, Op, UniqueConstraintError, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
@@ -7,6 +7,7 @@ import { Clock } from '../clock/clock.service.js';
 import { dateOnlyOf } from '../common/date-only.js';
 import { likePattern, orderOf } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
+import { invalidField } from '../common/validation.js';
 import { PanelMediaUsage } from '../panels/models/panel-media-usage.model.js';
 import { Panel } from '../panels/models/panel.model.js';
 import { Story } from '../stories/models/story.model.js';
@@ -49,7 +50,7 @@ export class MediaService {
   /** Every file is checked before any is stored, so a refused upload leaves nothing behind. */
   async upload(uploader: User | null, files: UploadedFile[]): Promise<MediaView[]> {
     if (!files?.length) {
-      throw new BadRequestException({ statusCode: 400, message: 'Some fields are not valid.', errors: [{ path: ['file'], message: 'Choose at least one image to upload.' }] });
+      throw invalidField(['file'], 'Choose at least one image to upload.');
     }
     const inspected: InspectedImage[] = [];
     for (const file of files) inspected.push(await this.images.inspect(file.buffer, filenameOf(file)));

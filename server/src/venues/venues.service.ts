@@ -1,6 +1,7 @@
-import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { VenueView } from '@mantlepiece/shared';
+import { invalidField } from '../common/validation.js';
 import { VenueSigningKeysService } from '../releases/venue-signing-keys.service.js';
 import type { CreateVenueDto, UpdateVenueDto } from './dto/venue.dto.js';
 import { Venue } from './models/venue.model.js';
@@ -42,11 +43,7 @@ export class VenuesService extends SettingsService<Venue, VenueView> {
 function assertLocales(sourceLocale: string, targetLocales: string[]) {
   const index = targetLocales.indexOf(sourceLocale);
   if (index === -1) return;
-  throw new BadRequestException({
-    statusCode: 400,
-    message: 'Some fields are not valid.',
-    errors: [{ path: ['targetLocales', index], message: 'The source locale cannot also be a target locale.' }],
-  });
+  throw invalidField(['targetLocales', index], 'The source locale cannot also be a target locale.');
 }
 
 export function toKioskVenueView(venue: Venue) {
