@@ -1,4 +1,6 @@
+import { ar } from './ar.js';
 import { en } from './en.js';
+import { es } from './es.js';
 import { fr } from './fr.js';
 import type { WidgetResource, WidgetStrings } from './types.js';
 
@@ -8,6 +10,8 @@ export type { WidgetResource, WidgetStrings } from './types.js';
 export const widgetResources = {
   en: { widgets: en },
   fr: { widgets: fr },
+  es: { widgets: es },
+  ar: { widgets: ar },
 } satisfies Record<string, WidgetResource>;
 
 export type WidgetLocale = keyof typeof widgetResources;

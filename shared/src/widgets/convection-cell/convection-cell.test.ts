@@ -202,9 +202,15 @@ describe('convection cell: describe', () => {
     expect(convectionCell.describe(withParams({ rayleigh: 500 }), 'fr')).toContain('sous le seuil de 779,3 qui déclenche la convection');
   });
 
+  it('describes a still cell in Spanish and a convecting one in Arabic', () => {
+    expect(convectionCell.describe(withParams({ rayleigh: 500 }), 'es')).toContain('por debajo del 779,3 necesario para que empiece la convección');
+    expect(convectionCell.describe(defaults, 'ar')).toContain('لذا ترتفع الصخور الساخنة');
+  });
+
   it('adds depth, speed in cm/yr and crossing time in million years in physical units', () => {
     const params = withParams({ rayleigh: undefined, physical: upperMantle, units: 'physical', nx: 128, nz: 128 });
     expect(convectionCell.describe(params, 'en')).toMatch(/The box is 660\u00a0km deep; the rock moves at roughly [\d.]+\u00a0cm\/yr and crosses the box in about [\d.,]+ million years\.$/);
     expect(convectionCell.describe(params, 'fr')).toMatch(/cm\/an .* millions d’années environ\.$/);
+    expect(convectionCell.describe(params, 'es')).toMatch(/cm\/año y cruza la caja en unos .* millones de años\.$/);
   });
 });

@@ -192,6 +192,18 @@ describe('slope force box: describe', () => {
     expect(text).toContain('le bloc glisse et accélère de 3,73\u00a0m/s²');
   });
 
+  it('tells in Spanish that the block slides, with decimal commas for Spain', () => {
+    const text = slopeForce.describe({ ...params, angleDeg: 50 }, 'es');
+    expect(text).toContain('Un bloque de 10\u00a0kg descansa en una pendiente inclinada 50°.');
+    expect(text).toContain('el bloque desliza y acelera 3,73\u00a0m/s²');
+  });
+
+  it('tells in Arabic that the block holds, for a regional tag too', () => {
+    const text = slopeForce.describe(params, 'ar-MA');
+    expect(text).toMatch(/^صندوق كتلته /);
+    expect(text).toContain('لذا يبقى الصندوق ثابتًا');
+  });
+
   it('switches to kilonewtons for a heavy block', () => {
     expect(slopeForce.describe({ ...params, massKg: 2000 }, 'en')).toContain('Its weight of 19.6\u00a0kN');
   });
