@@ -25,16 +25,17 @@ export const READING_TARGETS: Readonly<Record<Audience, ReadingTarget>> = {
   adult: { maxGrade: 10, minEase: 50 },
 };
 
-const isEnglish = (locale: string) => locale.toLowerCase().split(/[-_]/)[0] === 'en';
+/** The Flesch formulas are fitted to English, so text in other languages is not measured (editor and preflight alike). */
+export const measuresReadingLevel = (locale: string) => locale.toLowerCase().split(/[-_]/)[0] === 'en';
 const oneDecimal = (value: number) => value.toFixed(1);
 
-/** The Flesch formulas are fitted to English; other languages are left to the reviewer. */
+/** Other languages than English are left to the reviewer. */
 export const readingLevelRule: PreflightRule = {
   id: 'reading-level',
   severity: 'warning',
   run: (context) => {
     const { audience, sourceLocale } = context.snapshot.story;
-    if (!isEnglish(sourceLocale)) {
+    if (!measuresReadingLevel(sourceLocale)) {
       return [{ passed: true, message: `Reading level is measured for English text only; this story is written in ${languageName(sourceLocale)}, so it was not measured.` }];
     }
     const target = READING_TARGETS[audience];

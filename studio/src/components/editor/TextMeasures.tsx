@@ -1,7 +1,6 @@
 import { makeStyles, mergeClasses, Text, tokens, Tooltip } from '@fluentui/react-components';
-import { panelText, readingLevel, wordCount, type Audience, type PanelDocJSON } from '@mantlepiece/shared';
+import { measuresReadingLevel, panelText, READING_TARGETS, readingLevel, wordCount, type Audience, type PanelDocJSON } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { measuresReadingLevel, READING_GRADE_TARGET } from './reading-targets';
 
 const useStyles = makeStyles({
   root: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'center', flexWrap: 'wrap' },
@@ -10,14 +9,14 @@ const useStyles = makeStyles({
   fine: { color: tokens.colorNeutralForeground2 },
 });
 
-/** Word count against the panel's budget and reading grade against the audience's target, as the curator writes. */
+/** Word count against the panel's budget and reading grade against the audience's target (preflight's own), as the curator writes. */
 export function TextMeasures({ doc, locale, wordBudget, audience }: { doc: PanelDocJSON; locale: string; wordBudget: number; audience: Audience }) {
   const { t, i18n } = useTranslation();
   const styles = useStyles();
   const text = panelText(doc, { locale });
   const words = wordCount(text, locale);
   const level = measuresReadingLevel(locale) ? readingLevel(text) : null;
-  const target = READING_GRADE_TARGET[audience];
+  const target = READING_TARGETS[audience].maxGrade;
   const grade = new Intl.NumberFormat(i18n.resolvedLanguage, { maximumFractionDigits: 1 });
   const overBudget = words > wordBudget;
   const tooHard = level !== null && level.fleschKincaidGrade > target;
