@@ -15,7 +15,7 @@ export function ensureDebianPackage({ command, pkg, phaseName }) {
     run('apt-get', ['update', '-qq'], { env, quiet: true });
     aptUpdated = true;
   }
-  const result = run('apt-get', ['install', '-y', '-qq', '--no-install-recommends', pkg], { env, quiet: true });
+  const result = run('apt-get', ['install', '-y', '-qq', pkg], { env, quiet: true });
   if (result.status !== 0 || !(commandExists(command) || commandExists(`/usr/sbin/${command}`))) {
     throw new PhaseError(phaseName, `could not install Debian package ${pkg}: ${(result.stderr || '').trim().split('\n').pop()}`);
   }
