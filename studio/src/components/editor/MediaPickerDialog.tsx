@@ -9,7 +9,7 @@ import { FormAlert } from '../forms/FormAlert';
 import { describeError } from '../forms/describe-error';
 import { MediaDropzone } from '../media/MediaDropzone';
 import { MediaThumb } from '../media/MediaThumb';
-import { useDebounced } from '../../routes/people/use-debounced';
+import { useDebounced } from '../use-debounced';
 
 const useStyles = makeStyles({
   surface: { maxWidth: '64rem', width: 'calc(100vw - 48px)' },

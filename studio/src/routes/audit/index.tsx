@@ -1,7 +1,6 @@
 import { Button, Field, Input, makeStyles, Select, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
 import { ArrowDownloadRegular, HistoryRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
-import { useSearchParams } from 'react-router-dom';
 import type { AuditEventView } from '@mantlepiece/shared';
 import { useAuditLog, useDownloadAuditCsv } from '../../api/audit';
 import { useUsers } from '../../api/users';
@@ -10,9 +9,8 @@ import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
 import { useDateFormat } from '../../components/formatting';
 import { ListStates } from '../../components/lists/ListStates';
-import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
-import { useUrlSearchText } from '../../components/lists/use-url-search-text';
+import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
 import { saveFile } from '../../components/save-file';
 import { auditFileName, readAuditFilter, readAuditParams } from './list-params';
@@ -88,14 +86,11 @@ function AuditTable({ entries, busy }: { entries: AuditEventView[]; busy: boolea
 export function AuditPage() {
   const { t } = useTranslation();
   const styles = useStyles();
-  const [search, setSearch] = useSearchParams();
+  const { search, query: action, setQuery: setAction, change, clear } = useListSearch('action');
   const filter = readAuditFilter(search);
   const log = useAuditLog(readAuditParams(search));
   const people = useUsers(ACTOR_CHOICES);
   const download = useDownloadAuditCsv();
-  const [action, setAction] = useUrlSearchText('action');
-
-  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
 
   const filtered = Boolean(filter.actorId || filter.action || filter.from || filter.to);
   const today = new Date().toISOString().slice(0, 10);
@@ -137,7 +132,7 @@ export function AuditPage() {
           <EmptyState
             icon={<HistoryRegular />}
             title={filtered ? t('audit.noMatchTitle') : t('audit.emptyTitle')}
-            actions={filtered ? <Button onClick={() => { setAction(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button> : null}
+            actions={filtered ? <Button onClick={clear}>{t('lists.clearFilters')}</Button> : null}
           >
             {filtered ? t('audit.noMatchBody') : t('audit.emptyBody')}
           </EmptyState>

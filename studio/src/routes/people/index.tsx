@@ -1,28 +1,27 @@
-import { useEffect, useRef, useState } from 'react';
-import { Button, Field, makeStyles, SearchBox, Select, Spinner, Text, tokens } from '@fluentui/react-components';
-import { ArrowLeftRegular, ArrowRightRegular, PersonAddRegular, PeopleSearchRegular } from '@fluentui/react-icons';
+import { useState } from 'react';
+import { Button, Field, makeStyles, SearchBox, Select, tokens } from '@fluentui/react-components';
+import { PersonAddRegular, PeopleSearchRegular } from '@fluentui/react-icons';
 import { ROLES, type UserView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { useSearchParams } from 'react-router-dom';
 import { useCurrentUser } from '../../api/session';
 import { useUsers, type SentInvitation } from '../../api/users';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
-import { describeError } from '../../components/forms/describe-error';
 import { useDateFormat } from '../../components/formatting';
+import { ListStates } from '../../components/lists/ListStates';
+import { Pager } from '../../components/lists/Pager';
+import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
 import { ActivationDialog } from './ActivationDialog';
 import { EditPersonDialog } from './EditPersonDialog';
 import { InviteDialog } from './InviteDialog';
-import { readListParams, withListChanges, type ListChanges } from './list-params';
+import { readListParams } from './list-params';
 import { PeopleTable } from './PeopleTable';
-import { useDebounced } from './use-debounced';
 
 const useStyles = makeStyles({
   toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
   search: { minWidth: '18rem' },
   stack: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
-  pager: { display: 'flex', alignItems: 'center', justifyContent: 'flex-end', gap: tokens.spacingHorizontalM, marginTop: tokens.spacingVerticalM },
 });
 
 type Dialog = { kind: 'invite' } | { kind: 'edit'; person: UserView } | { kind: 'activation'; person: UserView } | null;
@@ -32,22 +31,11 @@ export function PeoplePage() {
   const styles = useStyles();
   const formatDate = useDateFormat();
   const me = useCurrentUser();
-  const [search, setSearch] = useSearchParams();
+  const { search, query, setQuery, change, clear } = useListSearch();
   const params = readListParams(search);
   const users = useUsers(params);
   const [dialog, setDialog] = useState<Dialog>(search.get('invite') ? { kind: 'invite' } : null);
   const [sent, setSent] = useState<SentInvitation | null>(null);
-  const [query, setQuery] = useState(params.q ?? '');
-  const settledQuery = useDebounced(query.trim(), 300);
-
-  const change = (changes: ListChanges) => setSearch((current) => withListChanges(current, changes), { replace: true });
-  const urlQuery = useRef(params.q ?? '');
-  urlQuery.current = params.q ?? '';
-
-  // Only a settled search term reaches the URL (and the server), not every keystroke.
-  useEffect(() => {
-    if (settledQuery !== urlQuery.current) setSearch((current) => withListChanges(current, { q: settledQuery }), { replace: true });
-  }, [settledQuery, setSearch]);
 
   const openInvite = () => {
     setSent(null);
@@ -88,54 +76,34 @@ export function PeoplePage() {
         </div>
       </div>
 
-      {users.isPending ? <Spinner label={t('common.loading')} /> : null}
-      {users.isError ? (
-        <EmptyState title={t('people.loadError')} actions={<Button onClick={() => void users.refetch()}>{t('common.retry')}</Button>}>
-          {describeError(t, users.error)}
-        </EmptyState>
-      ) : null}
-      {users.isSuccess && users.data.items.length === 0 ? (
-        <EmptyState
-          icon={<PeopleSearchRegular />}
-          title={t('people.noMatchTitle')}
-          actions={filtered ? <Button onClick={() => { setQuery(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('people.clearFilters')}</Button> : null}
-        >
-          {t('people.noMatchBody')}
-        </EmptyState>
-      ) : null}
-      {users.isSuccess && users.data.items.length > 0 ? (
-        <>
-          <PeopleTable
-            people={users.data.items}
-            sort={params.sort ?? 'name'}
-            onSort={(sort) => change({ sort })}
-            currentUserId={me.id}
-            busy={users.isFetching}
-            onEdit={(person) => setDialog({ kind: 'edit', person })}
-            onToggleActive={(person) => setDialog({ kind: 'activation', person })}
-          />
-          <nav className={styles.pager} aria-label={t('people.pagination')}>
-            <Text aria-live="polite">
-              {t('people.range', {
-                from: (users.data.page - 1) * users.data.pageSize + 1,
-                to: (users.data.page - 1) * users.data.pageSize + users.data.items.length,
-                total: users.data.total,
-              })}
-            </Text>
-            <Button icon={<ArrowLeftRegular />} disabled={users.data.page <= 1} onClick={() => change({ page: String(users.data.page - 1) })}>
-              {t('people.previousPage')}
-            </Button>
-            <Button
-              icon={<ArrowRightRegular />}
-              iconPosition="after"
-              disabled={users.data.page * users.data.pageSize >= users.data.total}
-              onClick={() => change({ page: String(users.data.page + 1) })}
-            >
-              {t('people.nextPage')}
-            </Button>
-          </nav>
-        </>
-      ) : null}
+      <ListStates
+        query={users}
+        loadError={t('people.loadError')}
+        empty={
+          <EmptyState
+            icon={<PeopleSearchRegular />}
+            title={t('people.noMatchTitle')}
+            actions={filtered ? <Button onClick={clear}>{t('people.clearFilters')}</Button> : null}
+          >
+            {t('people.noMatchBody')}
+          </EmptyState>
+        }
+      >
+        {(page) => (
+          <>
+            <PeopleTable
+              people={page.items}
+              sort={params.sort ?? 'name'}
+              onSort={(sort) => change({ sort })}
+              currentUserId={me.id}
+              busy={users.isFetching}
+              onEdit={(person) => setDialog({ kind: 'edit', person })}
+              onToggleActive={(person) => setDialog({ kind: 'activation', person })}
+            />
+            <Pager page={page} label={t('people.pagination')} onPage={(next) => change({ page: String(next) })} />
+          </>
+        )}
+      </ListStates>
 
       {dialog?.kind === 'invite' ? <InviteDialog onClose={closeDialog} onInvited={(invitation) => { setSent(invitation); closeDialog(); }} /> : null}
       {dialog?.kind === 'edit' ? <EditPersonDialog person={dialog.person} onClose={closeDialog} /> : null}

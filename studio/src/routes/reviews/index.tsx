@@ -1,14 +1,12 @@
 import { Button, Field, makeStyles, SearchBox, tokens } from '@fluentui/react-components';
 import { ClipboardTaskListLtrRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
-import { useSearchParams } from 'react-router-dom';
 import { useReviewQueue } from '../../api/reviews';
 import { useCurrentUser } from '../../api/session';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
-import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
-import { useUrlSearchText } from '../../components/lists/use-url-search-text';
+import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
 import { DEFAULT_QUEUE_SORT, readQueueParams } from './list-params';
 import { ReviewQueueTable } from './ReviewQueueTable';
@@ -35,12 +33,9 @@ export function ReviewsPage() {
 function ReviewQueue() {
   const { t } = useTranslation();
   const styles = useStyles();
-  const [search, setSearch] = useSearchParams();
+  const { search, query, setQuery, change, clear } = useListSearch();
   const params = readQueueParams(search);
   const queue = useReviewQueue(params);
-  const [query, setQuery] = useUrlSearchText('q');
-
-  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
 
   return (
     <>
@@ -58,7 +53,7 @@ function ReviewQueue() {
             <EmptyState
               icon={<ClipboardTaskListLtrRegular />}
               title={t('reviews.noMatchTitle')}
-              actions={<Button onClick={() => { setQuery(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button>}
+              actions={<Button onClick={clear}>{t('lists.clearFilters')}</Button>}
             >
               {t('reviews.noMatchBody')}
             </EmptyState>

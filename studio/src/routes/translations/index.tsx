@@ -1,18 +1,15 @@
-import { useEffect, useRef, useState } from 'react';
 import { Button, Dropdown, Field, makeStyles, Option, SearchBox, tokens } from '@fluentui/react-components';
 import { TranslateRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
-import { useSearchParams } from 'react-router-dom';
 import { useCurrentUser } from '../../api/session';
 import { useVenues } from '../../api/settings';
 import { useTranslationWorklist } from '../../api/translations';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
-import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
+import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
 import { useLanguageName } from '../../components/translation/language-name';
-import { useDebounced } from '../people/use-debounced';
 import { readWorklistParams } from './list-params';
 import { WorklistTable } from './WorklistTable';
 
@@ -37,20 +34,12 @@ export function TranslationsPage() {
   const styles = useStyles();
   const me = useCurrentUser();
   const languageName = useLanguageName();
-  const [search, setSearch] = useSearchParams();
+  const { search, query, setQuery, change, clear } = useListSearch();
   const params = readWorklistParams(search);
   const worklist = useTranslationWorklist(params);
   const locales = useLocaleChoices();
-  const [query, setQuery] = useState(params.q ?? '');
-  const settledQuery = useDebounced(query.trim(), 300);
-  const urlQuery = useRef(params.q ?? '');
-  urlQuery.current = params.q ?? '';
   const filtered = Boolean(params.q || params.locale);
 
-  const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
-  useEffect(() => {
-    if (settledQuery !== urlQuery.current) setSearch((current) => withSearchChanges(current, { q: settledQuery }), { replace: true });
-  }, [settledQuery, setSearch]);
 
   const anyLocale = t('translations.anyLocale');
   return (
@@ -81,7 +70,7 @@ export function TranslationsPage() {
             <EmptyState
               icon={<TranslateRegular />}
               title={t('translations.noMatchTitle')}
-              actions={<Button onClick={() => { setQuery(''); setSearch(new URLSearchParams(), { replace: true }); }}>{t('lists.clearFilters')}</Button>}
+              actions={<Button onClick={clear}>{t('lists.clearFilters')}</Button>}
             >
               {t('translations.noMatchBody')}
             </EmptyState>
