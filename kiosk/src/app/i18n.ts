@@ -1,16 +1,21 @@
 import i18next from 'i18next';
 import { initReactI18next } from 'react-i18next';
+import type { Translated } from '@mantlepiece/shared';
+import { ar } from './locales/ar';
 import { en, type KioskMessages } from './locales/en';
+import { es } from './locales/es';
 import { fr } from './locales/fr';
 
 /** The languages the kiosk's own words come in; a venue's other languages fall back to English. */
-export const KIOSK_LANGUAGES = ['en', 'fr'] as const;
+export const KIOSK_LANGUAGES = ['en', 'fr', 'es', 'ar'] as const;
 export type KioskLanguage = (typeof KIOSK_LANGUAGES)[number];
 
 export const resources = {
   en: { translation: en },
   fr: { translation: fr },
-} satisfies Record<KioskLanguage, { translation: KioskMessages }>;
+  es: { translation: es },
+  ar: { translation: ar },
+} satisfies Record<KioskLanguage, { translation: Translated<KioskMessages> }>;
 
 declare module 'i18next' {
   interface CustomTypeOptions {

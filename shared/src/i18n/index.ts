@@ -5,6 +5,7 @@ import { fr } from './fr.js';
 import type { WidgetResource, WidgetStrings } from './types.js';
 
 export type { WidgetResource, WidgetStrings } from './types.js';
+export * from './plural-forms.js';
 
 /** i18next-shaped resources: `i18n.addResourceBundle(locale, 'widgets', widgetResources[locale].widgets)`. */
 export const widgetResources = {
