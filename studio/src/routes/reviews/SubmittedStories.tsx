@@ -5,10 +5,8 @@ import { useTranslation } from 'react-i18next';
 import { useSearchParams } from 'react-router-dom';
 import { useStories, type StoryListParams } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
-import { ListStates } from '../../components/lists/ListStates';
 import { oneOf, pageFrom, withSearchChanges } from '../../components/lists/list-search';
-import { Pager } from '../../components/lists/Pager';
-import { StoriesTable } from '../stories/StoriesTable';
+import { StoryList } from '../stories/StoryList';
 import { PAGE_SIZE } from './list-params';
 
 const useStyles = makeStyles({
@@ -40,18 +38,12 @@ export function SubmittedStories() {
           </Select>
         </Field>
       </div>
-      <ListStates
-        query={stories}
-        loadError={t('stories.loadError')}
+      <StoryList
+        stories={stories}
+        sort={params.sort ?? '-updatedAt'}
+        onChange={change}
         empty={<EmptyState icon={<ClipboardTaskListLtrRegular />} title={t('reviews.emptyTitleCurator')}>{t('reviews.emptyBodyCurator')}</EmptyState>}
-      >
-        {(page) => (
-          <>
-            <StoriesTable stories={page.items} sort={params.sort ?? '-updatedAt'} onSort={(sort) => change({ sort })} busy={stories.isFetching} />
-            <Pager page={page} label={t('stories.pagination')} onPage={(next) => change({ page: String(next) })} />
-          </>
-        )}
-      </ListStates>
+      />
     </>
   );
 }

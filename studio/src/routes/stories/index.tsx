@@ -7,14 +7,12 @@ import { useNavigate } from 'react-router-dom';
 import { useCurrentUser } from '../../api/session';
 import { useStories } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
-import { ListStates } from '../../components/lists/ListStates';
-import { Pager } from '../../components/lists/Pager';
 import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
 import { CreateStoryDialog } from './CreateStoryDialog';
 import { readStoryListParams } from './list-params';
 import { canWriteStories } from './permissions';
-import { StoriesTable } from './StoriesTable';
+import { StoryList } from './StoryList';
 import { useExhibitChoices } from './StoryFieldsForm';
 
 const useStyles = makeStyles({
@@ -66,9 +64,10 @@ export function StoriesPage() {
         </Field>
       </div>
 
-      <ListStates
-        query={stories}
-        loadError={t('stories.loadError')}
+      <StoryList
+        stories={stories}
+        sort={params.sort ?? '-updatedAt'}
+        onChange={change}
         empty={
           filtered ? (
             <EmptyState
@@ -84,14 +83,7 @@ export function StoriesPage() {
             </EmptyState>
           )
         }
-      >
-        {(page) => (
-          <>
-            <StoriesTable stories={page.items} sort={params.sort ?? '-updatedAt'} onSort={(sort) => change({ sort })} busy={stories.isFetching} />
-            <Pager page={page} label={t('stories.pagination')} onPage={(next) => change({ page: String(next) })} />
-          </>
-        )}
-      </ListStates>
+      />
 
       {creating ? <CreateStoryDialog onClose={() => setCreating(false)} onCreated={(story) => navigate(`/stories/${story.id}`)} /> : null}
     </>
