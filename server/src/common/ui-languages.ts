@@ -1,5 +1,5 @@
 /** Languages the studio and our mail are written in. */
-export const UI_LANGUAGES = ['en', 'fr'] as const;
+export const UI_LANGUAGES = ['en', 'fr', 'es', 'ar'] as const;
 export type UiLanguage = (typeof UI_LANGUAGES)[number];
 
 export const asUiLanguage = (value: string): UiLanguage =>

@@ -154,6 +154,128 @@ const templates: Record<UiLanguage, Templates> = {
       after: [],
     }),
   },
+  es: {
+    invitation: (c, l) => ({
+      subject: 'Le invitan a Mantlepiece',
+      before: [
+        `Hola, ${c.name}:`,
+        `${c.inviterName} le ha invitado a Mantlepiece, donde escribimos, revisamos y publicamos las historias de nuestras salas.`,
+        'Abra este enlace para elegir su contraseña e iniciar sesión:',
+      ],
+      after: [
+        `El enlace funciona una sola vez y caduca el ${when(c.expiresAt, l)}. Si no esperaba esta invitación, puede ignorar este mensaje.`,
+      ],
+    }),
+    'password-reset': (c, l) => ({
+      subject: 'Restablezca su contraseña de Mantlepiece',
+      before: [
+        `Hola, ${c.name}:`,
+        'Alguien ha pedido restablecer la contraseña de su cuenta de Mantlepiece. Abra este enlace para elegir una nueva:',
+      ],
+      after: [
+        `El enlace funciona una sola vez y caduca el ${when(c.expiresAt, l)}. Si no lo ha pedido usted, ignore este mensaje: su contraseña sigue siendo la misma.`,
+      ],
+    }),
+    notification: (c) => ({
+      subject: c.subject,
+      before: [`Hola, ${c.name}:`, c.body, 'Ábralo en el estudio:'],
+      after: ['Puede desactivar los correos de este tipo en sus ajustes de avisos del estudio.'],
+    }),
+    'translator-assignment': (c, l) => ({
+      subject: `Ahora traduce a ${languageList(c.locales, l)}`,
+      before: [
+        `Hola, ${c.name}:`,
+        `Desde ahora traduce a ${languageList(c.locales, l)} en Mantlepiece. Las historias que le esperan están en su lista de trabajo:`,
+      ],
+      after: ['Cada unidad muestra el original junto a su traducción, con su presupuesto de longitud y la vista previa del panel tal como lo dibuja un quiosco.'],
+    }),
+    'stale-digest': (c, l) => ({
+      subject: 'El texto original ha cambiado bajo sus traducciones',
+      before: [
+        `Hola, ${c.name}:`,
+        'Los curadores han editado el original de unidades que usted había traducido. Esas traducciones quedan marcadas como desactualizadas, con el original antiguo y el nuevo uno al lado del otro. Unidades por historia:',
+        ...staleLines(c.stories, l),
+      ],
+      after: ['Mientras una unidad desactualizada no se vuelva a traducir, una publicación solo la muestra si el centro permite recurrir al original.'],
+    }),
+    'kiosk-silent': (c, l) => ({
+      subject: `Quiosco en silencio: ${c.station}, ${c.gallery}`,
+      before: [
+        `Hola, ${c.name}:`,
+        `El quiosco del puesto ${c.station} (${c.gallery}) no envía ninguna señal de vida desde el ${when(c.since, l)}. Puede que se haya quedado sin corriente o sin red, o que se haya cerrado su navegador. Su página en la Flota muestra lo último que informó:`,
+      ],
+      after: ['Recibirá un único mensaje más, cuando vuelva a dar señales.'],
+    }),
+    'kiosk-back': (c, l) => ({
+      subject: `Quiosco de vuelta: ${c.station}, ${c.gallery}`,
+      before: [
+        `Hola, ${c.name}:`,
+        `El quiosco del puesto ${c.station} (${c.gallery}) volvió a dar señales el ${when(c.backAt, l)}. Compruebe en su página que reproduce la publicación activa:`,
+      ],
+      after: [],
+    }),
+  },
+  ar: {
+    invitation: (c, l) => ({
+      subject: 'دعوة للانضمام إلى Mantlepiece',
+      before: [
+        `مرحبًا ${c.name}،`,
+        `دعاك ${c.inviterName} إلى Mantlepiece، حيث نكتب قصص قاعاتنا ونراجعها وننشرها.`,
+        'افتح هذا الرابط لاختيار كلمة المرور وتسجيل الدخول:',
+      ],
+      after: [
+        `يعمل الرابط مرة واحدة وتنتهي صلاحيته في ${when(c.expiresAt, l)}. إن لم تكن تتوقع هذه الدعوة، فتجاهل هذه الرسالة.`,
+      ],
+    }),
+    'password-reset': (c, l) => ({
+      subject: 'إعادة تعيين كلمة مرور Mantlepiece',
+      before: [
+        `مرحبًا ${c.name}،`,
+        'طلب أحدهم إعادة تعيين كلمة مرور حسابك في Mantlepiece. افتح هذا الرابط لاختيار كلمة جديدة:',
+      ],
+      after: [
+        `يعمل الرابط مرة واحدة وتنتهي صلاحيته في ${when(c.expiresAt, l)}. إن لم تطلب ذلك، فتجاهل هذه الرسالة: تبقى كلمة مرورك كما هي.`,
+      ],
+    }),
+    notification: (c) => ({
+      subject: c.subject,
+      before: [`مرحبًا ${c.name}،`, c.body, 'افتحه في الاستوديو:'],
+      after: ['يمكنك إيقاف رسائل البريد من هذا النوع من إعدادات الإشعارات في الاستوديو.'],
+    }),
+    'translator-assignment': (c, l) => ({
+      subject: `أصبحت تترجم إلى ${languageList(c.locales, l)}`,
+      before: [
+        `مرحبًا ${c.name}،`,
+        `أُسندت إليك الترجمة إلى ${languageList(c.locales, l)} في Mantlepiece. القصص التي تنتظرك في قائمة عملك:`,
+      ],
+      after: ['تعرض كل وحدة مصدرها بجانب ترجمتك، مع ميزانية طولها ومعاينة اللوحة كما يرسمها الكشك.'],
+    }),
+    'stale-digest': (c, l) => ({
+      subject: 'تغيّر النص المصدر لترجماتك',
+      before: [
+        `مرحبًا ${c.name}،`,
+        'عدّل المؤلفون مصدر وحدات كنت قد ترجمتها. صارت تلك الترجمات متقادمة، والمصدر القديم والجديد متجاوران. عدد الوحدات في كل قصة:',
+        ...staleLines(c.stories, l),
+      ],
+      after: ['إلى أن تُترجم الوحدة المتقادمة من جديد، لا يعرضها الإصدار إلا إذا سمح المركز بالرجوع إلى المصدر.'],
+    }),
+    'kiosk-silent': (c, l) => ({
+      subject: `كشك صامت: ${c.station}، ${c.gallery}`,
+      before: [
+        `مرحبًا ${c.name}،`,
+        `لم يرسل الكشك في المحطة ${c.station} بقاعة ${c.gallery} أي نبضة حالة منذ ${when(c.since, l)}. ربما انقطعت عنه الكهرباء أو الشبكة، أو أُغلق متصفحه. تعرض صفحته في الأسطول آخر ما أبلغ عنه:`,
+      ],
+      after: ['ستصلك رسالة واحدة أخرى حين يعود إلى الإبلاغ.'],
+    }),
+    'kiosk-back': (c, l) => ({
+      subject: `عاد الكشك: ${c.station}، ${c.gallery}`,
+      before: [
+        `مرحبًا ${c.name}،`,
+        `عاد الكشك في المحطة ${c.station} بقاعة ${c.gallery} إلى الإبلاغ في ${when(c.backAt, l)}. تحقّق في صفحته من أنه يعرض الإصدار النشط:`,
+      ],
+      after: [],
+    }),
+  },
 };
 
 /** The message in the recipient's UI language (English when we do not write theirs). */
@@ -168,7 +290,7 @@ export function renderMail(content: MailContent, uiLanguage: string): { subject:
     `<p><a href="${escapeHtml(content.link)}">${escapeHtml(content.link)}</a></p>`,
     ...after.map(paragraph),
   ].join('\n');
-  return { subject, text: `${text}\n`, html: `<!doctype html>\n<html lang="${language}"><body>\n${html}\n</body></html>\n` };
+  return { subject, text: `${text}\n`, html: `<!doctype html>\n<html lang="${language}" dir="${language === 'ar' ? 'rtl' : 'ltr'}"><body>\n${html}\n</body></html>\n` };
 }
 
 function escapeHtml(value: string): string {

@@ -62,6 +62,50 @@ const words: Record<UiLanguage, Words> = {
       body: `${e.replierName} a répondu à votre commentaire sur la révision ${e.number} de « ${e.storyTitle} » : ${excerpt(e.body)}`,
     }),
   },
+  es: {
+    revision_submitted: (e) => ({
+      title: `«${e.storyTitle}» está lista para revisión`,
+      body: `${e.submitterName} ha enviado la versión ${e.number} de «${e.storyTitle}» a revisión.`,
+    }),
+    verdict: (e) =>
+      e.verdict === 'approve'
+        ? {
+            title: `«${e.storyTitle}»: versión ${e.number} aprobada`,
+            body: e.storyState === 'approved'
+              ? `${e.reviewerName} ha aprobado la versión ${e.number} de «${e.storyTitle}». Ya puede entrar en una publicación.`
+              : `${e.reviewerName} ha aprobado la versión ${e.number} de «${e.storyTitle}». Aún necesita la aprobación de otro educador.`,
+          }
+        : {
+            title: `«${e.storyTitle}»: cambios solicitados`,
+            body: `${e.reviewerName} ha pedido cambios en la versión ${e.number} de «${e.storyTitle}»: ${excerpt(e.note ?? '')}`,
+          },
+    comment_reply: (e) => ({
+      title: `${e.replierName} ha respondido en «${e.storyTitle}»`,
+      body: `${e.replierName} ha respondido a su comentario sobre la versión ${e.number} de «${e.storyTitle}»: ${excerpt(e.body)}`,
+    }),
+  },
+  ar: {
+    revision_submitted: (e) => ({
+      title: `«${e.storyTitle}» جاهزة للمراجعة`,
+      body: `أرسل ${e.submitterName} النسخة ${e.number} من «${e.storyTitle}» للمراجعة.`,
+    }),
+    verdict: (e) =>
+      e.verdict === 'approve'
+        ? {
+            title: `«${e.storyTitle}»: اعتُمدت النسخة ${e.number}`,
+            body: e.storyState === 'approved'
+              ? `اعتمد ${e.reviewerName} النسخة ${e.number} من «${e.storyTitle}». يمكن الآن إدخالها في إصدار.`
+              : `اعتمد ${e.reviewerName} النسخة ${e.number} من «${e.storyTitle}». لا تزال تحتاج إلى اعتماد مراجع تربوي آخر.`,
+          }
+        : {
+            title: `«${e.storyTitle}»: مطلوب تعديلات`,
+            body: `طلب ${e.reviewerName} تعديلات على النسخة ${e.number} من «${e.storyTitle}»: ${excerpt(e.note ?? '')}`,
+          },
+    comment_reply: (e) => ({
+      title: `ردّ ${e.replierName} على «${e.storyTitle}»`,
+      body: `ردّ ${e.replierName} على تعليقك على النسخة ${e.number} من «${e.storyTitle}»: ${excerpt(e.body)}`,
+    }),
+  },
 };
 
 export function wordNotification(event: NotificationEvent, language: UiLanguage): NotificationWords {
