@@ -5,6 +5,7 @@ import type { UserView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import type { UserSort } from '../../api/users';
 import { useDateFormat } from '../../components/formatting';
+import { useLanguageName } from '../../components/translation/language-name';
 
 type SortColumn = 'name' | 'email' | 'lastSignInAt';
 
@@ -15,6 +16,10 @@ const useStyles = makeStyles({
   badges: { display: 'flex', gap: tokens.spacingHorizontalXS, flexWrap: 'wrap' },
   actions: { display: 'flex', gap: tokens.spacingHorizontalXS },
   inactiveRow: { color: tokens.colorNeutralForeground3 },
+  // Room for a whole address and for both action buttons; the status badge needs little.
+  emailColumn: { width: '18%' },
+  statusColumn: { width: '7rem' },
+  actionsColumn: { width: '11rem' },
 });
 
 export function PeopleTable({ people, sort, onSort, currentUserId, onEdit, onToggleActive, busy }: {
@@ -29,6 +34,7 @@ export function PeopleTable({ people, sort, onSort, currentUserId, onEdit, onTog
   const { t } = useTranslation();
   const styles = useStyles();
   const formatDate = useDateFormat();
+  const languageName = useLanguageName();
   const sortColumn = sort.replace(/^-/, '');
   const descending = sort.startsWith('-');
 
@@ -42,12 +48,12 @@ export function PeopleTable({ people, sort, onSort, currentUserId, onEdit, onTog
       <TableHeader>
         <TableRow>
           <TableHeaderCell {...sortable('name')}>{t('people.columns.name')}</TableHeaderCell>
-          <TableHeaderCell {...sortable('email')}>{t('people.columns.email')}</TableHeaderCell>
+          <TableHeaderCell className={styles.emailColumn} {...sortable('email')}>{t('people.columns.email')}</TableHeaderCell>
           <TableHeaderCell>{t('people.columns.roles')}</TableHeaderCell>
           <TableHeaderCell>{t('people.columns.locales')}</TableHeaderCell>
-          <TableHeaderCell>{t('people.columns.status')}</TableHeaderCell>
+          <TableHeaderCell className={styles.statusColumn}>{t('people.columns.status')}</TableHeaderCell>
           <TableHeaderCell {...sortable('lastSignInAt')}>{t('people.columns.lastSignIn')}</TableHeaderCell>
-          <TableHeaderCell><span className={styles.muted}>{t('people.columns.actions')}</span></TableHeaderCell>
+          <TableHeaderCell className={styles.actionsColumn}><span className={styles.muted}>{t('people.columns.actions')}</span></TableHeaderCell>
         </TableRow>
       </TableHeader>
       <TableBody>
@@ -65,7 +71,7 @@ export function PeopleTable({ people, sort, onSort, currentUserId, onEdit, onTog
                 {person.roles.map((role) => <Badge key={role} appearance="tint" color="brand">{t(`roles.${role}`)}</Badge>)}
               </span>
             </TableCell>
-            <TableCell>{person.locales.length ? person.locales.join(', ') : <span className={styles.muted}>—</span>}</TableCell>
+            <TableCell>{person.locales.length ? person.locales.map(languageName).join(', ') : <span className={styles.muted}>—</span>}</TableCell>
             <TableCell>
               <Badge appearance={person.active ? 'tint' : 'outline'} color={person.active ? 'success' : 'subtle'}>
                 {person.active ? t('people.active') : t('people.inactive')}

@@ -14,6 +14,7 @@ import { describeError } from '../../components/forms/describe-error';
 import { ListStates } from '../../components/lists/ListStates';
 import { sortableColumn } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
+import { useLanguageName } from '../../components/translation/language-name';
 import { SettingsDialog } from './SettingsDialog';
 
 const useStyles = makeStyles({
@@ -61,14 +62,15 @@ export function SettingsSection({ collection }: { collection: SettingsCollection
   const [dialog, setDialog] = useState<{ kind: 'edit'; view: SettingsView<SettingsCollection> | null } | { kind: 'delete'; view: SettingsView<SettingsCollection> } | null>(null);
   const date = (iso: string | null) => (iso ? new Intl.DateTimeFormat(i18n.resolvedLanguage, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(`${iso}T00:00:00Z`)) : '—');
   const number = new Intl.NumberFormat(i18n.resolvedLanguage);
+  const languageName = useLanguageName();
 
   const columns: Column<never>[] = (
     {
       venues: [
         { key: 'name', sortable: true, cell: (venue: VenueView) => venue.name },
         { key: 'slug', cell: (venue: VenueView) => venue.slug },
-        { key: 'sourceLocale', cell: (venue: VenueView) => venue.sourceLocale },
-        { key: 'targetLocales', cell: (venue: VenueView) => venue.targetLocales.join(', ') || '—' },
+        { key: 'sourceLocale', cell: (venue: VenueView) => languageName(venue.sourceLocale) },
+        { key: 'targetLocales', cell: (venue: VenueView) => venue.targetLocales.map(languageName).join(', ') || '—' },
       ],
       galleries: [
         { key: 'name', sortable: true, cell: (gallery: GalleryView) => gallery.name },

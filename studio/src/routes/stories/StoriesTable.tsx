@@ -5,12 +5,17 @@ import type { StorySort } from '../../api/stories';
 import { useDateFormat } from '../../components/formatting';
 import { TextLink } from '../../components/links';
 import { sortableColumn } from '../../components/lists/list-search';
+import { useLanguageName } from '../../components/translation/language-name';
 import { StoryStateBadge } from './StoryStateBadge';
 
 const useStyles = makeStyles({
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
   title: { fontWeight: tokens.fontWeightSemibold },
-  titleColumn: { width: '32%' },
+  titleColumn: { width: '30%' },
+  // Counts are short; the change date and its author each keep to one line.
+  panelsColumn: { width: '6.5rem' },
+  updatedColumn: { width: '12.5rem' },
+  date: { display: 'block', whiteSpace: 'nowrap' },
   muted: { color: tokens.colorNeutralForeground3 },
   number: { fontVariantNumeric: 'tabular-nums' },
 });
@@ -19,6 +24,7 @@ export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryVi
   const { t } = useTranslation();
   const styles = useStyles();
   const formatDate = useDateFormat();
+  const languageName = useLanguageName();
   return (
     <Table sortable aria-label={t('stories.title')} aria-busy={busy} className={styles.table}>
       <TableHeader>
@@ -28,8 +34,8 @@ export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryVi
           <TableHeaderCell>{t('stories.columns.audience')}</TableHeaderCell>
           <TableHeaderCell>{t('stories.columns.locale')}</TableHeaderCell>
           <TableHeaderCell {...sortableColumn(sort, 'state', onSort)}>{t('stories.columns.state')}</TableHeaderCell>
-          <TableHeaderCell>{t('stories.columns.panels')}</TableHeaderCell>
-          <TableHeaderCell {...sortableColumn(sort, 'updatedAt', onSort)}>{t('stories.columns.updated')}</TableHeaderCell>
+          <TableHeaderCell className={styles.panelsColumn}>{t('stories.columns.panels')}</TableHeaderCell>
+          <TableHeaderCell className={styles.updatedColumn} {...sortableColumn(sort, 'updatedAt', onSort)}>{t('stories.columns.updated')}</TableHeaderCell>
         </TableRow>
       </TableHeader>
       <TableBody>
@@ -44,12 +50,12 @@ export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryVi
             <TableCell>
               <Badge appearance="outline" color="informative">{t(`audiences.${story.audience}`)}</Badge>
             </TableCell>
-            <TableCell>{story.sourceLocale}</TableCell>
+            <TableCell>{languageName(story.sourceLocale)}</TableCell>
             <TableCell><StoryStateBadge state={story.state} /></TableCell>
             <TableCell className={styles.number}>{story.panelCount}</TableCell>
             <TableCell>
-              {formatDate(story.updatedAt)}
-              {story.createdBy ? <span className={styles.muted}> · {story.createdBy.name}</span> : null}
+              <span className={styles.date}>{formatDate(story.updatedAt)}</span>
+              {story.createdBy ? <span className={styles.muted}>{t('story.createdBy', { name: story.createdBy.name })}</span> : null}
             </TableCell>
           </TableRow>
         ))}
