@@ -13,10 +13,13 @@ import { PageHeader } from '../../components/PageHeader';
 import { NotFoundPage } from '../not-found';
 
 const useStyles = makeStyles({
-  layout: { display: 'grid', gridTemplateColumns: 'minmax(0, 5fr) minmax(0, 6fr)', gap: tokens.spacingHorizontalXL, alignItems: 'start', '@media (max-width: 1100px)': { gridTemplateColumns: '1fr' } },
+  layout: { display: 'grid', gridTemplateColumns: 'minmax(0, 3fr) minmax(0, 2fr)', gap: tokens.spacingHorizontalXL, alignItems: 'start', '@media (max-width: 1100px)': { gridTemplateColumns: '1fr' } },
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
   selected: { backgroundColor: tokens.colorBrandBackground2 },
-  subjectButton: { textAlign: 'start' },
+  // The subject reads as the row's text, lined up under its heading, not as an inset button.
+  subjectButton: { textAlign: 'start', justifyContent: 'flex-start', minWidth: 0, paddingInline: 0 },
+  toColumn: { width: '11.5rem' },
+  dateColumn: { width: '9.5rem' },
   message: {
     padding: tokens.spacingHorizontalXL,
     backgroundColor: tokens.colorNeutralBackground1,
@@ -87,8 +90,8 @@ export function CapturedMailPage() {
             <TableHeader>
               <TableRow>
                 <TableHeaderCell>{t('devMail.subject')}</TableHeaderCell>
-                <TableHeaderCell>{t('devMail.to')}</TableHeaderCell>
-                <TableHeaderCell>{t('devMail.date')}</TableHeaderCell>
+                <TableHeaderCell className={styles.toColumn}>{t('devMail.to')}</TableHeaderCell>
+                <TableHeaderCell className={styles.dateColumn}>{t('devMail.date')}</TableHeaderCell>
               </TableRow>
             </TableHeader>
             <TableBody>

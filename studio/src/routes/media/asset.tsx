@@ -134,7 +134,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
             <Text size={200} className={styles.muted}>{t('asset.altHint')}</Text>
             {locales.map((locale) => (
               <Field key={locale} label={t('asset.altIn', { locale })} validationMessage={locale === locales[0] ? message('alt') : undefined}>
-                <Textarea value={values.alt[locale] ?? ''} readOnly={!writer} resize="vertical" onChange={(_event, data) => set({ alt: { ...values.alt, [locale]: data.value } })} />
+                <Textarea value={values.alt[locale] ?? ''} readOnly={!writer} resize="vertical" rows={4} onChange={(_event, data) => set({ alt: { ...values.alt, [locale]: data.value } })} />
               </Field>
             ))}
           </fieldset>
