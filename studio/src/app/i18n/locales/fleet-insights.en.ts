@@ -19,7 +19,7 @@ export const fleetInsightsEn = {
     updated: 'Updated {{time}}, every 15 seconds',
     loadError: 'The fleet could not be loaded.',
     emptyTitle: 'No kiosk is paired yet',
-    emptyBody: 'Open a kiosk’s screen to see its pairing code, then enter the code at its station in Settings.',
+    emptyBody: 'Open a kiosk’s screen to see its pairing code, then enter it on that station’s page under Stations.',
     noMatchTitle: 'No kiosk in this gallery',
     noMatchBody: 'Choose another gallery, or all of them.',
     pagination: 'Pages of the fleet',

@@ -15,7 +15,7 @@ export const releaseFr: typeof releaseEn = {
     emptyTitle: 'Aucune version de {{gallery}} pour l’instant',
     emptyBody: 'Construisez une version : elle reprend la dernière révision approuvée de chaque récit des expositions de la salle, sauf si vous en choisissez d’autres.',
     noGalleryTitle: 'Aucune salle à servir',
-    noGalleryBody: 'Un administrateur crée les sites et les salles dans Réglages ; les versions se construisent par salle.',
+    noGalleryBody: 'Un administrateur crée les sites et les salles dans Paramètres ; les versions se construisent par salle.',
     columns: { number: 'Version', state: 'État', created: 'Créée', stories: 'Récits', files: 'Fichiers', bytes: 'Taille', actions: 'Actions' },
     actions: {
       publish: 'Publier…',
@@ -94,7 +94,7 @@ export const releaseFr: typeof releaseEn = {
     loadError: 'Impossible de charger les postes.',
     notFound: 'Ce poste n’existe pas.',
     emptyTitle: 'Aucun poste ici pour l’instant',
-    emptyBody: 'Un administrateur ajoute les postes dans Réglages, avec la taille d’écran et la hauteur de pose.',
+    emptyBody: 'Un administrateur ajoute les postes dans Paramètres, avec la taille d’écran et la hauteur de pose.',
     pagination: 'Pages des postes',
     facts: '{{gallery}} · {{screen}}, {{orientation}} · posé à {{height}}',
     pair: {
