@@ -11,7 +11,7 @@ import type { ReactElement } from 'react';
 import { useTranslation } from 'react-i18next';
 import { insertionChain } from './insert-point';
 import { useLiveValueLabel } from './live-value-labels';
-import { numericOutputs, unitOfOutput } from './widget-form';
+import { numericOutputs, unitOfOutput } from '../widget-params/widget-form';
 
 const HEADING_ICONS: Record<(typeof PANEL_HEADING_LEVELS)[number], ReactElement> = { 2: <TextHeader2Regular />, 3: <TextHeader3Regular /> };
 

@@ -2,7 +2,7 @@ import { makeStyles, Text, tokens } from '@fluentui/react-components';
 import type { WidgetChange, WidgetType } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useWidgetTypes } from '../../api/widgets';
-import { widgetFormGroups } from '../editor/widget-form';
+import { widgetFormGroups } from '../widget-params/widget-form';
 import { useReviewStyles } from './review-styles';
 
 const useStyles = makeStyles({

@@ -6,8 +6,10 @@ import { ConvectionCell, SimulationCaution, SlopeForceBox } from '@mantlepiece/s
 import { useWidgetTypes } from '../../api/widgets';
 import { RequireArea } from '../area';
 import { PageHeader } from '../../components/PageHeader';
-import { SchemaFields, type Params, type PropertySchema } from './SchemaForm';
+import { WidgetParamsForm } from '../../components/widget-params/WidgetParamsForm';
 import { workbenchStrings } from './workbench-strings';
+
+type Params = Record<string, unknown>;
 
 const useStyles = makeStyles({
   layout: { display: 'grid', gridTemplateColumns: 'minmax(18rem, 26rem) minmax(0, 1fr)', gap: tokens.spacingHorizontalXXL, alignItems: 'start' },
@@ -51,8 +53,6 @@ function Workbench() {
     setEdited((all) => ({ ...all, [chosen]: next }));
     if (widgetModule(chosen).validate(next).ok) setLastValid((all) => ({ ...all, [chosen]: next }));
   };
-  // Errors from checkWidget lead with "params"; the form's paths start inside the params.
-  const errors = check.ok ? [] : check.errors.map((error) => ({ ...error, path: error.path.slice(1) }));
   const shown = check.ok ? params : (lastValid[chosen] ?? (descriptor.defaults as Params));
 
   return (
@@ -73,7 +73,7 @@ function Workbench() {
               {WIDGET_LOCALES.map((code) => <option key={code} value={code}>{code}</option>)}
             </Select>
           </Field>
-          <SchemaFields key={chosen} schema={descriptor.jsonSchema as PropertySchema} value={params} errors={errors} onChange={update} setLabel={words.set} />
+          <WidgetParamsForm key={chosen} widgetType={chosen} params={params} onChange={update} />
         </section>
         <section className={styles.column} aria-labelledby="workbench-preview">
           <Text as="h2" size={500} weight="semibold" id="workbench-preview">{words.preview}</Text>
