@@ -1,10 +1,11 @@
 import { useState } from 'react';
-import { Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, MessageBar, MessageBarBody, MessageBarTitle, Text, tokens } from '@fluentui/react-components';
+import { Button, makeStyles, MessageBar, MessageBarBody, MessageBarTitle, Text, tokens } from '@fluentui/react-components';
 import { ArchiveRegular, SendRegular } from '@fluentui/react-icons';
 import { STORY_WORKFLOW, type RevisionSummary, type StoryDetailView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useCurrentUser } from '../../api/session';
 import { useRetireStory, useRevision, useStoryRevisions, useSubmitStory } from '../../api/revisions';
+import { ConfirmDialog } from '../ConfirmDialog';
 import { useDateFormat } from '../formatting';
 import { FormAlert } from '../forms/FormAlert';
 import { describeError } from '../forms/describe-error';
@@ -131,23 +132,16 @@ export function StoryReview({ story }: { story: StoryDetailView }) {
       <RevisionList storyId={story.id} />
 
       {confirmRetire ? (
-        <Dialog open modalType="alert" onOpenChange={(_event, data) => { if (!data.open) setConfirmRetire(false); }}>
-          <DialogSurface>
-            <DialogBody>
-              <DialogTitle>{t('storyReview.retireTitle', { title: story.title })}</DialogTitle>
-              <DialogContent>
-                {t('storyReview.retireBody')}
-                {retire.isError ? <FormAlert intent="error">{describeError(t, retire.error)}</FormAlert> : null}
-              </DialogContent>
-              <DialogActions>
-                <Button appearance="secondary" onClick={() => setConfirmRetire(false)}>{t('common.cancel')}</Button>
-                <Button appearance="primary" disabled={retire.isPending} onClick={() => retire.mutate(undefined, { onSuccess: () => setConfirmRetire(false) })}>
-                  {t('storyReview.retireConfirm')}
-                </Button>
-              </DialogActions>
-            </DialogBody>
-          </DialogSurface>
-        </Dialog>
+        <ConfirmDialog
+          title={t('storyReview.retireTitle', { title: story.title })}
+          confirmLabel={t('storyReview.retireConfirm')}
+          pending={retire.isPending}
+          problem={retire.isError ? describeError(t, retire.error) : null}
+          onConfirm={() => retire.mutate(undefined, { onSuccess: () => setConfirmRetire(false) })}
+          onCancel={() => setConfirmRetire(false)}
+        >
+          {t('storyReview.retireBody')}
+        </ConfirmDialog>
       ) : null}
     </section>
   );

@@ -1,10 +1,11 @@
 import { Fragment, useState } from 'react';
 import {
-  Badge, Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, Spinner, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
+  Badge, Button, makeStyles, Spinner, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
 } from '@fluentui/react-components';
 import type { KioskView, StationView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useRevokeKiosk, useStationKiosks } from '../../api/kiosks';
+import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { EmptyState } from '../../components/EmptyState';
 import { useDateFormat } from '../../components/formatting';
 import { FormAlert } from '../../components/forms/FormAlert';
@@ -84,23 +85,16 @@ export function StationKiosks({ station }: { station: StationView }) {
         </TableBody>
       </Table>
       {revoking ? (
-        <Dialog open modalType="alert" onOpenChange={(_event, data) => { if (!data.open) setRevoking(null); }}>
-          <DialogSurface>
-            <DialogBody>
-              <DialogTitle>{t('stations.kiosks.revokeTitle', { name: t('stations.kiosks.name', { id: revoking.id }), station: station.name })}</DialogTitle>
-              <DialogContent>
-                <Text as="p">{t('stations.kiosks.revokeBody')}</Text>
-                {revoke.error ? <FormAlert intent="error">{describeError(t, revoke.error)}</FormAlert> : null}
-              </DialogContent>
-              <DialogActions>
-                <Button appearance="secondary" onClick={() => setRevoking(null)}>{t('common.cancel')}</Button>
-                <Button appearance="primary" disabled={revoke.isPending} onClick={() => revoke.mutate(revoking.id, { onSuccess: () => setRevoking(null) })}>
-                  {t('stations.kiosks.revokeConfirm')}
-                </Button>
-              </DialogActions>
-            </DialogBody>
-          </DialogSurface>
-        </Dialog>
+        <ConfirmDialog
+          title={t('stations.kiosks.revokeTitle', { name: t('stations.kiosks.name', { id: revoking.id }), station: station.name })}
+          confirmLabel={t('stations.kiosks.revokeConfirm')}
+          pending={revoke.isPending}
+          problem={revoke.error ? describeError(t, revoke.error) : null}
+          onConfirm={() => revoke.mutate(revoking.id, { onSuccess: () => setRevoking(null) })}
+          onCancel={() => setRevoking(null)}
+        >
+          <Text as="p">{t('stations.kiosks.revokeBody')}</Text>
+        </ConfirmDialog>
       ) : null}
     </>
   );
