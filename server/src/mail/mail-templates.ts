@@ -210,7 +210,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `Quiosco de vuelta: ${c.station}, ${c.gallery}`,
       before: [
         `Hola, ${c.name}:`,
-        `El quiosco del puesto ${c.station} (${c.gallery}) volvió a dar señales el ${when(c.backAt, l)}. Compruebe en su página que reproduce la publicación activa:`,
+        `El quiosco del puesto ${c.station} (${c.gallery}) volvió a dar señales el ${when(c.backAt, l)}. Compruebe en su página que reproduce la publicación en servicio:`,
       ],
       after: [],
     }),
@@ -271,7 +271,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `عاد الكشك: ${c.station}، ${c.gallery}`,
       before: [
         `مرحبًا ${c.name}،`,
-        `عاد الكشك في المحطة ${c.station} بقاعة ${c.gallery} إلى الإبلاغ في ${when(c.backAt, l)}. تحقّق في صفحته من أنه يعرض الإصدار النشط:`,
+        `عاد الكشك في المحطة ${c.station} بقاعة ${c.gallery} إلى الإبلاغ في ${when(c.backAt, l)}. تحقّق في صفحته من أنه يعرض الإصدار المعروض حاليًا:`,
       ],
       after: [],
     }),

@@ -1,12 +1,13 @@
 import { useState } from 'react';
 import { FluentProvider } from '@fluentui/react-components';
 import { QueryClientProvider } from '@tanstack/react-query';
+import { useTranslation } from 'react-i18next';
 import { RouterProvider } from 'react-router-dom';
 import { createQueryClient } from './query-client';
 import { router } from './router';
 import { useSessionLanguage } from './session-language';
 import { mantlepieceTheme } from './theme';
-import './i18n';
+import { languageDirection } from './i18n';
 
 function Routes() {
   useSessionLanguage();
@@ -15,9 +16,11 @@ function Routes() {
 
 export function App() {
   const [queryClient] = useState(createQueryClient);
+  const { i18n } = useTranslation();
+  // Fluent mirrors its own components (and flips icons made to flip) from the provider's dir.
   return (
     <QueryClientProvider client={queryClient}>
-      <FluentProvider theme={mantlepieceTheme}>
+      <FluentProvider theme={mantlepieceTheme} dir={languageDirection(i18n.resolvedLanguage ?? i18n.language)}>
         <Routes />
       </FluentProvider>
     </QueryClientProvider>

@@ -1,43 +1,45 @@
 import { describe, expect, it } from 'vitest';
-import { resources } from './index';
-import { UI_LANGUAGES } from './languages';
+import { translationGaps } from '@mantlepiece/shared';
+import { workbenchStrings } from '../../routes/widgets/workbench-strings';
+import { i18next, resources } from './index';
+import { languageDirection, matchUiLanguage, UI_LANGUAGES } from './languages';
 
-type Tree = { [key: string]: string | Tree };
-
-/** Every leaf of a resource tree as "a.b.c" → text. */
-function leaves(tree: Tree, prefix = ''): Map<string, string> {
-  const found = new Map<string, string>();
-  for (const [key, value] of Object.entries(tree)) {
-    const path = prefix ? `${prefix}.${key}` : key;
-    if (typeof value === 'string') found.set(path, value);
-    else for (const [childPath, text] of leaves(value, path)) found.set(childPath, text);
-  }
-  return found;
-}
-
-const placeholders = (text: string) => [...text.matchAll(/\{\{\s*(\w+)/g)].map((match) => match[1]).sort();
-
-const reference = leaves(resources.en.translation);
+const codes = UI_LANGUAGES.map((language) => language.code);
+const complete = { missing: [], extra: [], empty: [], placeholders: [] };
 
 describe('studio UI strings', () => {
-  it('has a resource for every language in the language menu', () => {
-    expect(Object.keys(resources).sort()).toEqual(UI_LANGUAGES.map((language) => language.code).sort());
+  it('come in English, French, Spanish and Arabic, one resource for each language in the menu', () => {
+    expect([...codes].sort()).toEqual(['ar', 'en', 'es', 'fr']);
+    expect(Object.keys(resources).sort()).toEqual([...codes].sort());
   });
 
-  describe.each(UI_LANGUAGES.map((language) => language.code))('%s', (code) => {
-    const strings = leaves(resources[code].translation);
+  // Plural forms are those Intl.PluralRules reaches for counts 0–1000 (CLDR: Arabic needs all six).
+  it.each(codes)('%s has every English key, every plural form its grammar needs, no empty string, the same {{placeholders}}', (code) => {
+    expect(translationGaps(resources.en.translation, resources[code].translation, code)).toEqual(complete);
+  });
 
-    it('has every English key and no key English lacks', () => {
-      expect([...reference.keys()].filter((key) => !strings.has(key)), 'missing keys').toEqual([]);
-      expect([...strings.keys()].filter((key) => !reference.has(key)), 'extra keys').toEqual([]);
-    });
+  it.each(codes)('%s has the widget workbench’s words too', (code) => {
+    expect(translationGaps(workbenchStrings('en'), workbenchStrings(code), code)).toEqual(complete);
+  });
 
-    it('leaves no string empty and keeps the same {{placeholders}} as English', () => {
-      for (const [key, english] of reference) {
-        const text = strings.get(key) ?? '';
-        expect(text.trim(), `${code}: ${key} is empty`).not.toBe('');
-        expect(placeholders(text), `${code}: placeholders of ${key}`).toEqual(placeholders(english));
-      }
-    });
+  it('names each language in itself and sets Arabic right to left', () => {
+    expect(UI_LANGUAGES.map((language) => language.name)).toEqual(['English', 'Français', 'Español', 'العربية']);
+    expect(codes.filter((code) => languageDirection(code) === 'rtl')).toEqual(['ar']);
+    expect(matchUiLanguage(['ar-EG'])).toBe('ar');
+    expect(matchUiLanguage(['es-419'])).toBe('es');
+  });
+
+  it('picks the Arabic plural form by count, as CLDR defines them', () => {
+    const t = i18next.getFixedT('ar');
+    expect([0, 1, 2, 3, 11, 100].map((count) => t('reviews.blockers', { count }))).toEqual([
+      'لا عوائق', 'عائق واحد', 'عائقان', '3 عوائق', '11 عائقًا', '100 عائق',
+    ]);
+  });
+
+  it('moves the document to right to left when the studio switches to Arabic, and back', async () => {
+    await i18next.changeLanguage('ar');
+    expect([document.documentElement.lang, document.documentElement.dir]).toEqual(['ar', 'rtl']);
+    await i18next.changeLanguage('en');
+    expect([document.documentElement.lang, document.documentElement.dir]).toEqual(['en', 'ltr']);
   });
 });

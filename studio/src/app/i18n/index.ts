@@ -1,13 +1,18 @@
 import i18next from 'i18next';
 import { initReactI18next } from 'react-i18next';
+import type { Translated } from '@mantlepiece/shared';
+import { ar } from './locales/ar';
 import { en } from './locales/en';
+import { es } from './locales/es';
 import { fr } from './locales/fr';
 import { DEFAULT_UI_LANGUAGE, languageDirection, matchUiLanguage, type UiLanguage } from './languages';
 
 export const resources = {
   en: { translation: en },
   fr: { translation: fr },
-} satisfies Record<UiLanguage, { translation: typeof en }>;
+  es: { translation: es },
+  ar: { translation: ar },
+} satisfies Record<UiLanguage, { translation: Translated<typeof en> }>;
 
 declare module 'i18next' {
   interface CustomTypeOptions {

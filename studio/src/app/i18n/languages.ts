@@ -1,10 +1,12 @@
 /**
- * The languages the studio's own screens come in. Adding Spanish or Arabic means a locale file
- * and one entry here; `dir` already lets a right-to-left language flip the layout.
+ * The languages the studio's own screens come in, each named in itself. Adding one means a locale
+ * file and one entry here; `dir` flips the whole layout for a right-to-left language.
  */
 export const UI_LANGUAGES = [
   { code: 'en', name: 'English', dir: 'ltr' },
   { code: 'fr', name: 'Français', dir: 'ltr' },
+  { code: 'es', name: 'Español', dir: 'ltr' },
+  { code: 'ar', name: 'العربية', dir: 'rtl' },
 ] as const satisfies readonly { code: string; name: string; dir: 'ltr' | 'rtl' }[];
 
 export type UiLanguage = (typeof UI_LANGUAGES)[number]['code'];

@@ -1,7 +1,7 @@
 import { Button, makeStyles, Text, tokens } from '@fluentui/react-components';
-import { ArrowLeftRegular, ArrowRightRegular } from '@fluentui/react-icons';
 import type { Page } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import { BackArrow, ForwardArrow } from '../ReadingArrows';
 
 const useStyles = makeStyles({
   pager: { display: 'flex', alignItems: 'center', justifyContent: 'flex-end', gap: tokens.spacingHorizontalM, marginTop: tokens.spacingVerticalM },
@@ -15,10 +15,10 @@ export function Pager({ page, label, onPage }: { page: Page<unknown>; label: str
   return (
     <nav className={styles.pager} aria-label={label}>
       <Text aria-live="polite">{t('lists.range', { from, to: from + page.items.length - 1, total: page.total })}</Text>
-      <Button icon={<ArrowLeftRegular />} disabled={page.page <= 1} onClick={() => onPage(page.page - 1)}>
+      <Button icon={<BackArrow />} disabled={page.page <= 1} onClick={() => onPage(page.page - 1)}>
         {t('lists.previousPage')}
       </Button>
-      <Button icon={<ArrowRightRegular />} iconPosition="after" disabled={page.page * page.pageSize >= page.total} onClick={() => onPage(page.page + 1)}>
+      <Button icon={<ForwardArrow />} iconPosition="after" disabled={page.page * page.pageSize >= page.total} onClick={() => onPage(page.page + 1)}>
         {t('lists.nextPage')}
       </Button>
     </nav>

@@ -1,8 +1,9 @@
 import { useState, type DragEvent, type KeyboardEvent } from 'react';
 import { Button, makeStyles, mergeClasses, shorthands, tokens, Tooltip } from '@fluentui/react-components';
-import { AddRegular, ArrowLeftRegular, ArrowRightRegular, DeleteRegular } from '@fluentui/react-icons';
+import { AddRegular, DeleteRegular } from '@fluentui/react-icons';
 import { panelText, type PanelView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import { BackArrow, ForwardArrow } from '../../components/ReadingArrows';
 import { movedTo } from './panel-order';
 
 const useStyles = makeStyles({
@@ -99,10 +100,10 @@ export function PanelStrip({ panels, selectedId, onSelect, onReorder, onAdd, onD
           {selected ? (
             <div className={styles.tools}>
               <Tooltip content={t('story.moveEarlier')} relationship="label" withArrow>
-                <Button size="small" appearance="subtle" icon={<ArrowLeftRegular />} disabled={selectedIndex <= 0} onClick={() => move(selected.id, -1)} />
+                <Button size="small" appearance="subtle" icon={<BackArrow />} disabled={selectedIndex <= 0} onClick={() => move(selected.id, -1)} />
               </Tooltip>
               <Tooltip content={t('story.moveLater')} relationship="label" withArrow>
-                <Button size="small" appearance="subtle" icon={<ArrowRightRegular />} disabled={selectedIndex >= panels.length - 1} onClick={() => move(selected.id, 1)} />
+                <Button size="small" appearance="subtle" icon={<ForwardArrow />} disabled={selectedIndex >= panels.length - 1} onClick={() => move(selected.id, 1)} />
               </Tooltip>
               <Tooltip content={t('story.deletePanel')} relationship="label" withArrow>
                 <Button size="small" appearance="subtle" icon={<DeleteRegular />} onClick={() => onDelete(selected)} />

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import { Dropdown, Field, makeStyles, Option, Spinner, Text, tokens } from '@fluentui/react-components';
-import { ArrowLeftRegular, LockClosedRegular } from '@fluentui/react-icons';
+import { LockClosedRegular } from '@fluentui/react-icons';
 import { UNIT_STATUSES, type TranslationUnitView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams, useSearchParams } from 'react-router-dom';
@@ -14,6 +14,7 @@ import { ListStates } from '../../components/lists/ListStates';
 import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
 import { PageHeader } from '../../components/PageHeader';
+import { BackArrow } from '../../components/ReadingArrows';
 import { useLanguageName } from '../../components/translation/language-name';
 import { ProgressMeter } from '../../components/translation/ProgressMeter';
 import { TranslationPreview } from '../../components/translation/TranslationPreview';
@@ -115,7 +116,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
       <PageHeader
         title={title}
         intro={t('workspace.intro', { source: languageName(sourceLocale) })}
-        actions={<LinkButton to="/translations" appearance="subtle" icon={<ArrowLeftRegular />}>{t('workspace.back')}</LinkButton>}
+        actions={<LinkButton to="/translations" appearance="subtle" icon={<BackArrow />}>{t('workspace.back')}</LinkButton>}
       />
       <div className={styles.top}>
         <ul className={styles.locales} aria-label={t('workspace.otherLocales')}>

@@ -1,4 +1,4 @@
-import type { Translated } from '../plural-forms';
+import type { Translated } from '@mantlepiece/shared';
 import type { fleetInsightsEn } from './fleet-insights.en';
 
 /** النصوص العربية للأسطول والإحصاءات. */
@@ -9,7 +9,7 @@ export const fleetInsightsAr: Translated<typeof fleetInsightsEn> = {
     intro: 'كل كشك مربوط، بحسب القاعة: هل يرسل تقاريره، والإصدار الذي يعرضه مقارنةً بالإصدار المعروض، وآخر خطأ له. يصبح الكشك متأخرًا بعد نبضتين فائتتين وغير متصل بعد {{offline}}؛ يتلقى الفنيون عندها رسالة بريد، وأخرى عند عودته.',
     gallery: 'القاعة',
     allGalleries: 'كل القاعات',
-    columns: { station: 'الموقع', state: 'الحالة', release: 'الإصدار الذي يعرضه', lastHeartbeat: 'آخر نبضة', appVersion: 'نسخة التطبيق', lastError: 'آخر خطأ' },
+    columns: { station: 'المحطة', state: 'الحالة', release: 'الإصدار الذي يعرضه', lastHeartbeat: 'آخر نبضة', appVersion: 'نسخة التطبيق', lastError: 'آخر خطأ' },
     galleryGroup: 'القاعة: {{gallery}}',
     release: 'الإصدار {{number}}',
     noRelease: 'لا إصدار بعد',
@@ -22,13 +22,13 @@ export const fleetInsightsAr: Translated<typeof fleetInsightsEn> = {
     updated: 'حُدّث في {{time}}، كل 15 ثانية',
     loadError: 'تعذّر تحميل الأسطول.',
     emptyTitle: 'لا كشك مربوط بعد',
-    emptyBody: 'افتح شاشة كشك لترى رمز الربط، ثم اكتبه في صفحة موقعه.',
+    emptyBody: 'افتح شاشة كشك لترى رمز الاقتران، ثم اكتبه في صفحة محطته.',
     noMatchTitle: 'لا كشك في هذه القاعة',
     noMatchBody: 'اختر قاعة أخرى، أو كل القاعات.',
     pagination: 'صفحات الأسطول',
   },
   fleetKiosk: {
-    title: 'كشك الموقع {{station}}',
+    title: 'كشك المحطة {{station}}',
     backToFleet: 'العودة إلى الأسطول',
     notFound: 'الكشك غير موجود',
     notFoundBody: 'لا كشك في هذا العنوان.',
@@ -53,10 +53,10 @@ export const fleetInsightsAr: Translated<typeof fleetInsightsEn> = {
     historyPagination: 'صفحات سجل النبضات',
     revoke: 'إلغاء…',
     revokeTitle: 'إلغاء هذا الكشك؟',
-    revokeBody: 'يفقد كشك الموقع {{station}} وصوله فورًا: لا يتلقى إصدارات جديدة وتُرفض نبضاته وأرقام زواره. يواصل عرض ما حفظه حتى يُربط من جديد.',
+    revokeBody: 'يفقد كشك المحطة {{station}} وصوله فورًا: لا يتلقى إصدارات جديدة وتُرفض نبضاته وأرقام زواره. يواصل عرض ما حفظه حتى يُقرن من جديد.',
     revokeConfirm: 'إلغاء الكشك',
     revoking: 'جارٍ الإلغاء…',
-    revokedNote: 'أُلغي في {{date}}. لاستخدام هذه الشاشة مجددًا، اربطها من جديد من موقعها.',
+    revokedNote: 'أُلغي في {{date}}. لاستخدام هذه الشاشة مجددًا، اقرنها من جديد من محطتها.',
   },
   insights: {
     title: 'الإحصاءات',
