@@ -1,5 +1,6 @@
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import type { CSSProperties } from 'react';
+import { widgetStrings } from '../../i18n/index.js';
 import { isPlainObject } from '../../panel/panel-json.js';
 import { PanelWidget } from './PanelWidget.js';
 import type { PanelEditorOptions } from './panel-editor-options.js';
@@ -18,6 +19,14 @@ export function isWidgetDrawingEvent({ event }: { event: Event }): boolean {
   return target instanceof Element && target.closest(`.${DRAWING_CLASS}`) !== null;
 }
 
+/** The widget's name on its grip, in the panel's language; an unknown type shows as itself so the problem stays visible. */
+function widgetTitle(widgetType: string, locale: string): string {
+  const strings = widgetStrings(locale);
+  if (widgetType === 'slope-force') return strings.slopeForce.title;
+  if (widgetType === 'convection-cell') return strings.convectionCell.title;
+  return widgetType;
+}
+
 /** The widget block in the studio editor, drawn live by the same component the kiosk uses. */
 export function WidgetNodeView({ node, extension, selected, updateAttributes }: ReactNodeViewProps) {
   const { locale } = extension.options as PanelEditorOptions;
@@ -25,7 +34,7 @@ export function WidgetNodeView({ node, extension, selected, updateAttributes }: 
   return (
     <NodeViewWrapper className="mp-widget-node" data-selected={selected || undefined}>
       <div className="mp-widget-node-handle" data-drag-handle="" style={handleStyle}>
-        {`⠿ ${widgetType}`}
+        {`⠿ ${widgetTitle(widgetType, locale)}`}
       </div>
       <div className={DRAWING_CLASS} onDragStart={(event) => event.preventDefault()}>
         <PanelWidget

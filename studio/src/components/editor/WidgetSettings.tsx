@@ -1,6 +1,6 @@
 import { makeStyles, MessageBar, MessageBarBody, Text, tokens } from '@fluentui/react-components';
 import type { Editor } from '@tiptap/react';
-import { isWidgetType, widgetModule, widgetStrings, type PanelWidgetRef } from '@mantlepiece/shared';
+import { isWidgetType, widgetModule, type PanelWidgetRef } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { WidgetParamsForm } from '../widget-params/WidgetParamsForm';
 
@@ -11,7 +11,8 @@ const useStyles = makeStyles({
 /**
  * The settings of one widget on the panel. Every change goes straight into the document (so the
  * widget and its live values redraw at once), and a panel with a widget set wrong is not sent
- * until it is fixed.
+ * until it is fixed. The simplified-model caution is not repeated here: the widget drawn beside
+ * these settings in the editor already carries it.
  */
 export function WidgetSettings({ editor, widget }: { editor: Editor; widget: PanelWidgetRef }) {
   const { t, i18n } = useTranslation();
@@ -25,9 +26,6 @@ export function WidgetSettings({ editor, widget }: { editor: Editor; widget: Pan
 
   return (
     <section className={styles.root} aria-label={t('editor.widget.settingsOf', { name: t(`widgetTypes.${widget.widgetType}`) })}>
-      <MessageBar intent="info" layout="multiline">
-        <MessageBarBody>{widgetStrings(i18n.resolvedLanguage ?? 'en').caution}</MessageBarBody>
-      </MessageBar>
       <WidgetParamsForm widgetType={widget.widgetType} params={widget.params} onChange={(params) => editor.commands.setWidgetParams(widget.widgetId, params)} />
       {warnings.map((warning) => (
         <MessageBar key={warning.code} intent="warning" layout="multiline"><MessageBarBody>{warning.message}</MessageBarBody></MessageBar>
