@@ -11,10 +11,10 @@ import { StoryStateBadge } from './StoryStateBadge';
 const useStyles = makeStyles({
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
   title: { fontWeight: tokens.fontWeightSemibold },
-  titleColumn: { width: '30%' },
+  titleColumn: { width: '28%' },
   // Counts are short; the change date and its author each keep to one line.
-  panelsColumn: { width: '6.5rem' },
-  updatedColumn: { width: '12.5rem' },
+  panelsColumn: { width: '5.5rem' },
+  updatedColumn: { width: '11.5rem' },
   date: { display: 'block', whiteSpace: 'nowrap' },
   muted: { color: tokens.colorNeutralForeground3 },
   number: { fontVariantNumeric: 'tabular-nums' },
