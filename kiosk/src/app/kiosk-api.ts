@@ -1,4 +1,4 @@
-import type { EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, ManifestResponse, PairCompleteWaiting, PairStartResponse } from '@mantlepiece/shared';
+import type { EventsBody, EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, ManifestResponse, PairCompleteWaiting, PairStartResponse } from '@mantlepiece/shared';
 
 /** The public view of the default venue, for the attract loop before the kiosk is paired. */
 export interface KioskVenue {
@@ -87,6 +87,6 @@ export class KioskApi {
   }
 
   async events(events: KioskEvent[]): Promise<EventsResponse> {
-    return (await this.json<EventsResponse>('/api/kiosk/events', { method: 'POST', body: JSON.stringify({ events }) })).body;
+    return (await this.json<EventsResponse>('/api/kiosk/events', { method: 'POST', body: JSON.stringify({ events } satisfies EventsBody) })).body;
   }
 }

@@ -62,14 +62,6 @@ export function useUpdateStory(id: number) {
   });
 }
 
-export function useDeleteStory() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (id: number) => api<void>(`/stories/${id}`, { method: 'DELETE' }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: storiesKey }),
-  });
-}
-
 function setPanels(queryClient: ReturnType<typeof useQueryClient>, storyId: number, update: (panels: PanelView[]) => PanelView[]) {
   queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) => {
     if (!current) return current;

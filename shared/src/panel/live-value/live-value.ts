@@ -3,13 +3,6 @@ import { LIVE_VALUE_NODE } from '../panel-json.js';
 import { assertPanelId, isPanelId } from '../widget/widget-id.js';
 import { assertLiveValueFormat, DEFAULT_LIVE_VALUE_FORMAT, isLiveValueFormat, type LiveValueFormat } from './live-value-format.js';
 
-export interface LiveValueAttributes {
-  widgetId: string;
-  /** A key of that widget's compute() result, e.g. "criticalAngleDeg". */
-  output: string;
-  format: LiveValueFormat;
-}
-
 export interface InsertLiveValueOptions {
   widgetId: string;
   output: string;

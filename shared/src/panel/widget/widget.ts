@@ -3,12 +3,6 @@ import { isPlainObject, WIDGET_NODE } from '../panel-json.js';
 import { uniqueWidgetIds } from './unique-widget-ids.js';
 import { assertPanelId, newWidgetId } from './widget-id.js';
 
-export interface WidgetAttributes {
-  widgetType: string;
-  widgetId: string;
-  params: Record<string, unknown>;
-}
-
 export interface InsertWidgetOptions {
   widgetType: string;
   params: Record<string, unknown>;

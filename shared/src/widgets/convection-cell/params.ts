@@ -4,7 +4,6 @@ import { COLOUR_RAMP_NAMES } from './colour-ramps.js';
 
 /** Grid sizes the solver's sine transforms take (powers of two), points per side. */
 export const GRID_SIZES = [16, 32, 64, 128, 256, 512] as const;
-export type GridSize = (typeof GRID_SIZES)[number];
 
 export const OVERLAYS = ['streamlines', 'particles', 'arrows', 'none'] as const;
 export const UNIT_SYSTEMS = ['non-dimensional', 'physical'] as const;

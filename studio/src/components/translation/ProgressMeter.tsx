@@ -1,4 +1,4 @@
-import { Field, makeStyles, ProgressBar, tokens } from '@fluentui/react-components';
+import { Field, makeStyles, ProgressBar } from '@fluentui/react-components';
 import type { LocaleCompleteness } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 
