@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ExhibitView, GalleryView, Orientation, Page, StationView, VenueView } from '@mantlepiece/shared';
+import type { ExhibitView, GalleryView, Page, StationView, VenueView } from '@mantlepiece/shared';
 import { api, type Query } from './client';
 
 /** The four settings collections share one shape of API: paged list, create, change, delete. */
@@ -14,33 +14,11 @@ export interface SettingsListParams {
   galleryId?: number;
 }
 
-export interface VenueFields {
-  name: string;
-  slug: string;
-  sourceLocale: string;
-  targetLocales: string[];
-}
-
-export interface GalleryFields {
-  venueId: number;
-  name: string;
-}
-
-export interface StationFields {
-  galleryId: number;
-  name: string;
-  screenWidthPx: number;
-  screenHeightPx: number;
-  orientation: Orientation;
-  mountingHeightMm: number;
-}
-
-export interface ExhibitFields {
-  galleryId: number;
-  name: string;
-  plannedStart: string | null;
-  plannedEnd: string | null;
-}
+/** What a settings form sends: the view without what the server assigns. */
+export type VenueFields = Pick<VenueView, 'name' | 'slug' | 'sourceLocale' | 'targetLocales'>;
+export type GalleryFields = Omit<GalleryView, 'id'>;
+export type StationFields = Omit<StationView, 'id'>;
+export type ExhibitFields = Omit<ExhibitView, 'id'>;
 
 interface Collections {
   venues: { view: VenueView; fields: VenueFields };
