@@ -41,3 +41,19 @@ export async function signIn(page: Page, email: string, password = demoPassword)
   await submitSignIn(page, email, password);
   await page.getByRole('navigation', { name: 'Studio areas' }).waitFor();
 }
+
+/** Calls the API with a demo account's own access token, as a test's setup and clean-up do. */
+export async function apiAs(email: string, password = demoPassword) {
+  const login = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }) });
+  if (!login.ok) throw new Error(`Sign-in of ${email} answered ${login.status}`);
+  const { accessToken } = (await login.json()) as { accessToken: string };
+  return async <T>(method: string, path: string, body?: unknown): Promise<T> => {
+    const response = await fetch(`${baseUrl}/api${path}`, {
+      method,
+      headers: { Authorization: `Bearer ${accessToken}`, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+    if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}: ${await response.text()}`);
+    return (response.status === 204 ? undefined : await response.json()) as T;
+  };
+}
