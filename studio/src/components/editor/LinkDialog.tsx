@@ -1,8 +1,9 @@
-import { useState, type FormEvent } from 'react';
-import { Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, Field, Input } from '@fluentui/react-components';
+import { useState } from 'react';
+import { Button, Field, Input } from '@fluentui/react-components';
 import type { Editor } from '@tiptap/react';
 import { isPanelHref } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import { FormDialog } from '../FormDialog';
 
 /** Sets, changes or removes the link on the selection; only http, https and mailto, as the server allows. */
 export function LinkDialog({ editor, onClose }: { editor: Editor; onClose: () => void }) {
@@ -11,8 +12,7 @@ export function LinkDialog({ editor, onClose }: { editor: Editor; onClose: () =>
   const [href, setHref] = useState(current ?? 'https://');
   const [problem, setProblem] = useState<string | undefined>();
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
+  const submit = () => {
     const value = href.trim();
     if (!isPanelHref(value)) {
       setProblem(t('editor.linkInvalid'));
@@ -27,24 +27,16 @@ export function LinkDialog({ editor, onClose }: { editor: Editor; onClose: () =>
   };
 
   return (
-    <Dialog open modalType="modal" onOpenChange={(_event, data) => { if (!data.open) onClose(); }}>
-      <DialogSurface>
-        <form onSubmit={submit} noValidate>
-          <DialogBody>
-            <DialogTitle>{current ? t('editor.linkEditTitle') : t('editor.linkAddTitle')}</DialogTitle>
-            <DialogContent>
-              <Field label={t('editor.linkAddress')} hint={t('editor.linkHint')} validationMessage={problem}>
-                <Input type="url" value={href} onChange={(_event, data) => setHref(data.value)} autoFocus />
-              </Field>
-            </DialogContent>
-            <DialogActions>
-              {current ? <Button onClick={remove}>{t('editor.linkRemove')}</Button> : null}
-              <Button appearance="secondary" onClick={onClose}>{t('common.cancel')}</Button>
-              <Button type="submit" appearance="primary">{t('editor.linkApply')}</Button>
-            </DialogActions>
-          </DialogBody>
-        </form>
-      </DialogSurface>
-    </Dialog>
+    <FormDialog
+      title={current ? t('editor.linkEditTitle') : t('editor.linkAddTitle')}
+      submitLabel={t('editor.linkApply')}
+      extraActions={current ? <Button onClick={remove}>{t('editor.linkRemove')}</Button> : null}
+      onSubmit={submit}
+      onClose={onClose}
+    >
+      <Field label={t('editor.linkAddress')} hint={t('editor.linkHint')} validationMessage={problem}>
+        <Input type="url" value={href} onChange={(_event, data) => setHref(data.value)} autoFocus />
+      </Field>
+    </FormDialog>
   );
 }

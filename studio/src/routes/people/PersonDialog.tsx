@@ -1,15 +1,10 @@
-import { useState, type FormEvent } from 'react';
-import { Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, makeStyles, Text, tokens } from '@fluentui/react-components';
+import { useState } from 'react';
 import { useTranslation } from 'react-i18next';
+import { FormDialog } from '../../components/FormDialog';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError, shownAtField } from '../../components/forms/describe-error';
 import { hasProblems } from '../../components/forms/validation';
 import { PERSON_FIELDS, PersonFields, personFieldMessage, personProblems, type PersonField, type PersonValues } from './PersonFields';
-
-const useStyles = makeStyles({
-  content: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
-  intro: { color: tokens.colorNeutralForeground2 },
-});
 
 export interface PersonDialogProps {
   title: string;
@@ -27,12 +22,10 @@ export interface PersonDialogProps {
 /** A person's details in a dialog: checks them, submits, and puts the server's answer by each field. */
 export function PersonDialog(props: PersonDialogProps) {
   const { t } = useTranslation();
-  const styles = useStyles();
   const [values, setValues] = useState(props.initial);
   const [problems, setProblems] = useState<Partial<Record<PersonField, string>>>({});
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
+  const submit = () => {
     const found = personProblems(t, values, { withEmail: props.emailEditable });
     setProblems(found);
     if (!hasProblems(found)) props.onSubmit(values);
@@ -42,25 +35,16 @@ export function PersonDialog(props: PersonDialogProps) {
   const alert = props.error && !shownAtField(props.error, PERSON_FIELDS) && !messages.email ? describeError(t, props.error) : null;
 
   return (
-    <Dialog open modalType="modal" onOpenChange={(_event, data) => { if (!data.open) props.onClose(); }}>
-      <DialogSurface>
-        <form onSubmit={submit} noValidate>
-          <DialogBody>
-            <DialogTitle>{props.title}</DialogTitle>
-            <DialogContent className={styles.content}>
-              {props.intro ? <Text as="p" className={styles.intro}>{props.intro}</Text> : null}
-              {alert ? <FormAlert intent="error">{alert}</FormAlert> : null}
-              <PersonFields values={values} onChange={setValues} messages={messages} emailEditable={props.emailEditable} />
-            </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={props.onClose}>{t('common.cancel')}</Button>
-              <Button type="submit" appearance="primary" disabled={props.pending}>
-                {props.pending ? props.pendingLabel : props.submitLabel}
-              </Button>
-            </DialogActions>
-          </DialogBody>
-        </form>
-      </DialogSurface>
-    </Dialog>
+    <FormDialog
+      title={props.title}
+      intro={props.intro}
+      submitLabel={props.pending ? props.pendingLabel : props.submitLabel}
+      pending={props.pending}
+      onSubmit={submit}
+      onClose={props.onClose}
+    >
+      {alert ? <FormAlert intent="error">{alert}</FormAlert> : null}
+      <PersonFields values={values} onChange={setValues} messages={messages} emailEditable={props.emailEditable} />
+    </FormDialog>
   );
 }

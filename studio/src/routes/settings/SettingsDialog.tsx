@@ -1,15 +1,15 @@
-import { useState, type FormEvent } from 'react';
-import { Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, Field, Input, makeStyles, Select, tokens } from '@fluentui/react-components';
+import { useState } from 'react';
+import { Field, Input, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { ORIENTATIONS } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useGalleries, useSaveSetting, useVenues, type SettingsCollection, type SettingsView } from '../../api/settings';
+import { FormDialog } from '../../components/FormDialog';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError, serverFieldMessage } from '../../components/forms/describe-error';
 import { hasProblems } from '../../components/forms/validation';
 import { SETTINGS_FORMS, type SettingsInput, type SettingsValues } from './settings-forms';
 
 const useStyles = makeStyles({
-  content: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
   unit: { color: tokens.colorNeutralForeground3 },
 });
 
@@ -26,8 +26,7 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
   const [values, setValues] = useState<SettingsValues>(() => (editing ? form.valuesOf(editing) : form.empty));
   const [problems, setProblems] = useState<Record<string, string | undefined>>({});
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
+  const submit = () => {
     const found = form.problems(t, values);
     setProblems(found);
     if (!hasProblems(found)) save.mutate({ id: editing?.id, fields: form.toFields(values) }, { onSuccess: onClose });
@@ -69,32 +68,25 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
   };
 
   return (
-    <Dialog open modalType="modal" onOpenChange={(_event, data) => { if (!data.open) onClose(); }}>
-      <DialogSurface>
-        <form onSubmit={submit} noValidate>
-          <DialogBody>
-            <DialogTitle>{editing ? t(`settings.${collection}.edit`) : t(`settings.${collection}.create`)}</DialogTitle>
-            <DialogContent className={styles.content}>
-              {unplaced ? <FormAlert intent="error">{unplaced}</FormAlert> : null}
-              {form.inputs.map((input) => (
-                <Field
-                  key={input.name}
-                  label={t(`settings.fields.${input.name as 'name'}`)}
-                  required={input.required}
-                  hint={input.hint ? t(`settings.hints.${input.hint}`) : undefined}
-                  validationMessage={message(input.name)}
-                >
-                  {control(input)}
-                </Field>
-              ))}
-            </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={onClose}>{t('common.cancel')}</Button>
-              <Button type="submit" appearance="primary" disabled={save.isPending}>{save.isPending ? t('common.saving') : t('common.save')}</Button>
-            </DialogActions>
-          </DialogBody>
-        </form>
-      </DialogSurface>
-    </Dialog>
+    <FormDialog
+      title={editing ? t(`settings.${collection}.edit`) : t(`settings.${collection}.create`)}
+      submitLabel={save.isPending ? t('common.saving') : t('common.save')}
+      pending={save.isPending}
+      onSubmit={submit}
+      onClose={onClose}
+    >
+      {unplaced ? <FormAlert intent="error">{unplaced}</FormAlert> : null}
+      {form.inputs.map((input) => (
+        <Field
+          key={input.name}
+          label={t(`settings.fields.${input.name as 'name'}`)}
+          required={input.required}
+          hint={input.hint ? t(`settings.hints.${input.hint}`) : undefined}
+          validationMessage={message(input.name)}
+        >
+          {control(input)}
+        </Field>
+      ))}
+    </FormDialog>
   );
 }
