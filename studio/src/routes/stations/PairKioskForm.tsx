@@ -10,7 +10,7 @@ const useStyles = makeStyles({
   form: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM, maxWidth: '36rem' },
   row: { display: 'flex', gap: tokens.spacingHorizontalM, alignItems: 'flex-start', flexWrap: 'wrap' },
   // Read off a screen across a room and typed back: large, spaced, in capitals.
-  code: { width: '12rem', '& input': { fontSize: tokens.fontSizeBase500, letterSpacing: '0.3em', textTransform: 'uppercase', fontVariantNumeric: 'tabular-nums' } },
+  code: { width: '14rem', '& input': { fontSize: tokens.fontSizeBase500, letterSpacing: '0.3em', textTransform: 'uppercase', fontVariantNumeric: 'tabular-nums' } },
   submit: { marginTop: '1.6rem' },
   steps: { color: tokens.colorNeutralForeground2, margin: 0 },
 });

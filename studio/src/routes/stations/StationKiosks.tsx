@@ -65,7 +65,11 @@ export function StationKiosks({ station }: { station: StationView }) {
                   </TableCell>
                   <TableCell>{formatDate(kiosk.pairedAt)}</TableCell>
                   <TableCell>{kiosk.lastHeartbeatAt ? formatDate(kiosk.lastHeartbeatAt) : <span className={styles.muted}>{t('stations.kiosks.never')}</span>}</TableCell>
-                  <TableCell>{t('stations.kiosks.playingOf', { playing: release(kiosk.releasePlaying), live: release(kiosk.releaseLive) })}</TableCell>
+                  <TableCell>
+                    {kiosk.releasePlaying || kiosk.releaseLive
+                      ? t('stations.kiosks.playingOf', { playing: release(kiosk.releasePlaying), live: release(kiosk.releaseLive) })
+                      : <span className={styles.muted}>{t('fleet.noRelease')}</span>}
+                  </TableCell>
                   <TableCell>
                     <span className={styles.actions}>
                       {kiosk.revokedAt ? null : (
