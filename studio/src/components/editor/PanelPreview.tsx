@@ -17,7 +17,7 @@ export function PanelPreview({ doc, locale, resolveMedia, width }: { doc: PanelD
   const { width: screenWidth, height: screenHeight } = PANEL_LAYOUTS[layout];
   return (
     <section className={styles.root} aria-label={t('editor.preview.title')}>
-      <RadioGroup layout="horizontal" value={layout} onChange={(_event, data) => setLayout(data.value as PanelLayout)} aria-label={t('editor.preview.layout')}>
+      <RadioGroup value={layout} onChange={(_event, data) => setLayout(data.value as PanelLayout)} aria-label={t('editor.preview.layout')}>
         <Radio value="landscape" label={t('editor.preview.landscape', PANEL_LAYOUTS.landscape)} />
         <Radio value="portrait" label={t('editor.preview.portrait', PANEL_LAYOUTS.portrait)} />
       </RadioGroup>
