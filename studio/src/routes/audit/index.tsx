@@ -8,6 +8,7 @@ import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
 import { useDateFormat } from '../../components/formatting';
+import { TextLink } from '../../components/links';
 import { ListStates } from '../../components/lists/ListStates';
 import { Pager } from '../../components/lists/Pager';
 import { useListSearch } from '../../components/lists/use-list-search';
@@ -53,7 +54,18 @@ function Details({ details }: { details: AuditEventView['details'] }) {
   );
 }
 
-function AuditTable({ entries, busy }: { entries: AuditEventView[]; busy: boolean }) {
+/** What an entry acted on: people and kiosks by name, revisions as a link to their review page; anything else as its type and id. */
+function AuditTarget({ target, personName }: { target: NonNullable<AuditEventView['target']>; personName: (id: string) => string | undefined }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const raw = <span className={styles.code}>{`${target.type} ${target.id}`}</span>;
+  if (target.type === 'user') return <>{personName(target.id) ?? raw}</>;
+  if (target.type === 'kiosk') return <>{t('stations.kiosks.name', { id: target.id })}</>;
+  if (target.type === 'revision') return <TextLink to={`/reviews/${target.id}`}>{raw}</TextLink>;
+  return raw;
+}
+
+function AuditTable({ entries, busy, personName }: { entries: AuditEventView[]; busy: boolean; personName: (id: string) => string | undefined }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const formatDate = useDateFormat();
@@ -74,7 +86,7 @@ function AuditTable({ entries, busy }: { entries: AuditEventView[]; busy: boolea
             <TableCell>{formatDate(entry.at)}</TableCell>
             <TableCell>{entry.actor?.name ?? <span className={styles.muted}>{t('audit.system')}</span>}</TableCell>
             <TableCell><span className={styles.code}>{entry.action}</span></TableCell>
-            <TableCell>{entry.target ? <span className={styles.code}>{`${entry.target.type} ${entry.target.id}`}</span> : null}</TableCell>
+            <TableCell>{entry.target ? <AuditTarget target={entry.target} personName={personName} /> : null}</TableCell>
             <TableCell><Details details={entry.details} /></TableCell>
           </TableRow>
         ))}
@@ -91,6 +103,7 @@ export function AuditPage() {
   const log = useAuditLog(readAuditParams(search));
   const people = useUsers(ACTOR_CHOICES);
   const download = useDownloadAuditCsv();
+  const personName = (id: string) => people.data?.items.find((person) => String(person.id) === id)?.name;
 
   const filtered = Boolean(filter.actorId || filter.action || filter.from || filter.to);
   const today = new Date().toISOString().slice(0, 10);
@@ -140,7 +153,7 @@ export function AuditPage() {
       >
         {(page) => (
           <>
-            <AuditTable entries={page.items} busy={log.isFetching} />
+            <AuditTable entries={page.items} busy={log.isFetching} personName={personName} />
             <Pager page={page} label={t('audit.pagination')} onPage={(next) => change({ page: String(next) })} />
           </>
         )}
