@@ -30,7 +30,7 @@ describe('SeedService', () => {
     expect(admin).toMatchObject({ email, roles: ['admin'], active: true });
     expect(admin.passwordHash).toMatch(/^\$argon2id\$/);
     expect(await t.app.get(PasswordHasher).verify(admin.passwordHash, 'a long admin passphrase')).toBe(true);
-    const events = await t.app.get<typeof AuditEvent>(getModelToken(AuditEvent)).findAll({ where: { targetId: String(admin.id) } });
+    const events = await t.app.get<typeof AuditEvent>(getModelToken(AuditEvent)).findAll({ where: { targetType: 'user', targetId: String(admin.id) } });
     expect(events.map((e) => [e.action, e.detail])).toEqual([['user.created', { via: 'cli', roles: ['admin'] }]]);
     await expect(seed.createAdmin(email, 'Again', 'a long admin passphrase')).rejects.toThrow(/already has an account/);
   });
