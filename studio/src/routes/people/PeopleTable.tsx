@@ -34,7 +34,7 @@ export function PeopleTable({ people, sort, onSort, currentUserId, onEdit, onTog
   const { t } = useTranslation();
   const styles = useStyles();
   const formatDate = useDateFormat();
-  const languageName = useLanguageName();
+  const languageName = useLanguageName({ standalone: true });
   const sortColumn = sort.replace(/^-/, '');
   const descending = sort.startsWith('-');
 

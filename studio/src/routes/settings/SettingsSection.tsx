@@ -62,7 +62,7 @@ export function SettingsSection({ collection }: { collection: SettingsCollection
   const [dialog, setDialog] = useState<{ kind: 'edit'; view: SettingsView<SettingsCollection> | null } | { kind: 'delete'; view: SettingsView<SettingsCollection> } | null>(null);
   const date = (iso: string | null) => (iso ? new Intl.DateTimeFormat(i18n.resolvedLanguage, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(`${iso}T00:00:00Z`)) : '—');
   const number = new Intl.NumberFormat(i18n.resolvedLanguage);
-  const languageName = useLanguageName();
+  const languageName = useLanguageName({ standalone: true });
 
   const columns: Column<never>[] = (
     {

@@ -24,7 +24,7 @@ export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryVi
   const { t } = useTranslation();
   const styles = useStyles();
   const formatDate = useDateFormat();
-  const languageName = useLanguageName();
+  const languageName = useLanguageName({ standalone: true });
   return (
     <Table sortable aria-label={t('stories.title')} aria-busy={busy} className={styles.table}>
       <TableHeader>

@@ -35,7 +35,7 @@ const sum = (rows: readonly TranslationWorklistItem[], field: 'total' | 'transla
 export function WorklistTable({ items, busy }: { items: TranslationWorklistItem[]; busy: boolean }) {
   const { t } = useTranslation();
   const styles = useStyles();
-  const languageName = useLanguageName();
+  const languageName = useLanguageName({ standalone: true });
   return (
     <Table aria-label={t('translations.title')} aria-busy={busy} className={styles.table}>
       <TableHeader>
@@ -61,7 +61,7 @@ export function WorklistTable({ items, busy }: { items: TranslationWorklistItem[
                 </>
               ) : null}
               <TableCell>
-                <span lang={row.locale}>{languageName(row.locale)}</span> <span className={styles.muted}>({row.locale})</span>
+                <span>{languageName(row.locale)}</span> <span className={styles.muted}>({row.locale})</span>
               </TableCell>
               <TableCell><ProgressMeter progress={row} /></TableCell>
               <TableCell>

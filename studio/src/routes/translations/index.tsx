@@ -33,7 +33,7 @@ export function TranslationsPage() {
   const { t } = useTranslation();
   const styles = useStyles();
   const me = useCurrentUser();
-  const languageName = useLanguageName();
+  const languageName = useLanguageName({ standalone: true });
   const { search, query, setQuery, change, clear } = useListSearch();
   const params = readWorklistParams(search);
   const worklist = useTranslationWorklist(params);

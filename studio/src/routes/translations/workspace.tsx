@@ -51,6 +51,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
   const styles = useStyles();
   const me = useCurrentUser();
   const languageName = useLanguageName();
+  const languageLabel = useLanguageName({ standalone: true });
   const [search, setSearch] = useSearchParams();
   const unitParams = readUnitParams(search);
   const story = useStory(target.storyId);
@@ -92,7 +93,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
 
   const sourceLocale = story.data?.sourceLocale ?? 'en';
   const language = languageName(target.locale);
-  const title = t('workspace.title', { story: story.data?.title ?? '…', language });
+  const title = t('workspace.title', { story: story.data?.title ?? '…', language: languageLabel(target.locale) });
   const myLocales = readsEveryLocale(me.roles) ? null : me.locales;
   const canWrite = me.roles.includes('translator') && me.locales.includes(target.locale);
   const page = units.data;
@@ -125,7 +126,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
             .map((entry) => (
               <li key={entry.locale} className={entry.locale === target.locale ? styles.current : undefined} data-locale-progress={entry.locale}>
                 <LinkButton to={`/translations/${target.storyId}/${encodeURIComponent(entry.locale)}`} appearance="transparent" size="small" aria-current={entry.locale === target.locale ? 'page' : undefined}>
-                  {languageName(entry.locale)}
+                  {languageLabel(entry.locale)}
                 </LinkButton>
                 <ProgressMeter progress={entry} />
               </li>
