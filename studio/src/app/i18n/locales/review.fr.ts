@@ -111,7 +111,7 @@ export const reviewFr: typeof reviewEn = {
     recorded: {
       approved: 'Approuvée. Le récit peut maintenant entrer dans une version publiée.',
       changes: 'Renvoyée à la conception avec votre note.',
-      waiting: 'Votre approbation est enregistrée ; le site demande aussi celle d’une autre personne de la médiation.',
+      waiting: 'Votre approbation est enregistrée ; le lieu demande aussi celle d’une autre personne de la médiation.',
     },
     history: 'Avis',
     none: 'Pas encore d’avis.',

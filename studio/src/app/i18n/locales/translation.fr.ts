@@ -5,7 +5,7 @@ export const translationFr: typeof translationEn = {
   translations: {
     title: 'Traductions',
     intro: 'Les récits à traduire dans vos langues, et leur avancement.',
-    introAll: 'Chaque récit dans chacune des langues cibles du site, et son avancement.',
+    introAll: 'Chaque récit dans chacune des langues cibles du lieu, et son avancement.',
     search: 'Rechercher un titre de récit',
     locale: 'Langue',
     anyLocale: 'Toutes les langues',
@@ -17,7 +17,7 @@ export const translationFr: typeof translationEn = {
     open: 'Traduire',
     openLabel: 'Traduire {{story}} en {{language}}',
     emptyTitle: 'Rien à traduire pour l’instant',
-    emptyBody: 'Les récits apparaissent ici dès que le site a des langues cibles et qu’on vous en a attribué au moins une.',
+    emptyBody: 'Les récits apparaissent ici dès que le lieu a des langues cibles et qu’on vous en a attribué au moins une.',
     noMatchTitle: 'Aucun récit ne correspond à ces filtres',
     noMatchBody: 'Effacez la recherche ou choisissez une autre langue.',
     loadError: 'La liste des traductions n’a pas pu être chargée.',
