@@ -9,6 +9,7 @@ import { useCapturedMail, useCapturedMessage } from '../../api/dev-mail';
 import { EmptyState } from '../../components/EmptyState';
 import { describeError } from '../../components/forms/describe-error';
 import { useDateFormat } from '../../components/formatting';
+import { Pager } from '../../components/lists/Pager';
 import { PageHeader } from '../../components/PageHeader';
 import { NotFoundPage } from '../not-found';
 
@@ -74,7 +75,8 @@ export function CapturedMailPage() {
   const styles = useStyles();
   const formatDate = useDateFormat();
   const [selected, setSelected] = useState<string | undefined>();
-  const mail = useCapturedMail(1);
+  const [page, setPage] = useState(1);
+  const mail = useCapturedMail(page);
 
   if (mail.isError && mail.error instanceof ApiError && mail.error.status === 404) return <NotFoundPage />;
 
@@ -86,26 +88,29 @@ export function CapturedMailPage() {
       {mail.isSuccess && mail.data.items.length === 0 ? <EmptyState icon={<MailInboxRegular />} title={t('devMail.title')}>{t('devMail.empty')}</EmptyState> : null}
       {mail.isSuccess && mail.data.items.length > 0 ? (
         <div className={styles.layout}>
-          <Table aria-label={t('devMail.title')} className={styles.table} size="small">
-            <TableHeader>
-              <TableRow>
-                <TableHeaderCell>{t('devMail.subject')}</TableHeaderCell>
-                <TableHeaderCell className={styles.toColumn}>{t('devMail.to')}</TableHeaderCell>
-                <TableHeaderCell className={styles.dateColumn}>{t('devMail.date')}</TableHeaderCell>
-              </TableRow>
-            </TableHeader>
-            <TableBody>
-              {mail.data.items.map((item) => (
-                <TableRow key={item.id} className={item.id === selected ? styles.selected : undefined} aria-selected={item.id === selected}>
-                  <TableCell>
-                    <Button appearance="transparent" className={styles.subjectButton} onClick={() => setSelected(item.id)}>{item.subject}</Button>
-                  </TableCell>
-                  <TableCell>{item.to}</TableCell>
-                  <TableCell>{formatDate(item.date)}</TableCell>
+          <div>
+            <Table aria-label={t('devMail.title')} className={styles.table} size="small">
+              <TableHeader>
+                <TableRow>
+                  <TableHeaderCell>{t('devMail.subject')}</TableHeaderCell>
+                  <TableHeaderCell className={styles.toColumn}>{t('devMail.to')}</TableHeaderCell>
+                  <TableHeaderCell className={styles.dateColumn}>{t('devMail.date')}</TableHeaderCell>
                 </TableRow>
-              ))}
-            </TableBody>
-          </Table>
+              </TableHeader>
+              <TableBody>
+                {mail.data.items.map((item) => (
+                  <TableRow key={item.id} className={item.id === selected ? styles.selected : undefined} aria-selected={item.id === selected}>
+                    <TableCell>
+                      <Button appearance="transparent" className={styles.subjectButton} onClick={() => setSelected(item.id)}>{item.subject}</Button>
+                    </TableCell>
+                    <TableCell>{item.to}</TableCell>
+                    <TableCell>{formatDate(item.date)}</TableCell>
+                  </TableRow>
+                ))}
+              </TableBody>
+            </Table>
+            <Pager page={mail.data} label={t('devMail.title')} onPage={setPage} />
+          </div>
           {selected ? <CapturedMessage id={selected} /> : <EmptyState headingLevel={2} title={t('devMail.message')}>{t('devMail.choose')}</EmptyState>}
         </div>
       ) : null}
