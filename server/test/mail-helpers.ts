@@ -1,7 +1,10 @@
 import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
+import type { INestApplication } from '@nestjs/common';
+import { getModelToken } from '@nestjs/sequelize';
 import mailparser, { type ParsedMail } from 'mailparser';
+import { OutboxMessage } from '../src/mail/models/outbox-message.model.js';
 
 /** The stand-in's folder; `npm test` sets it, and SMTP_PORT, for the stand-in it starts. */
 export function mailDir(): string {
@@ -27,4 +30,12 @@ export async function capturedMailTo(recipient: string): Promise<ParsedMail[]> {
   const files = fs.readdirSync(dir).filter((name) => name.endsWith('.eml') && !name.startsWith('.'));
   const parsed = await Promise.all(files.map((name) => mailparser.simpleParser(fs.readFileSync(path.join(dir, name)))));
   return parsed.filter((mail) => mail.headers.get('x-envelope-to') === recipient);
+}
+
+/**
+ * Suites share one database, and earlier ones leave unsent mail behind (every submission mails
+ * every educator). A suite that waits for its own message in the worker's next batch starts clean.
+ */
+export async function discardUnsentMail(app: INestApplication): Promise<void> {
+  await app.get<typeof OutboxMessage>(getModelToken(OutboxMessage)).destroy({ where: { sentAt: null } });
 }

@@ -1,9 +1,11 @@
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { MailOutboxWorker } from '../mail/mail-outbox.worker.js';
+import { discardUnsentMail } from '../../test/mail-helpers.js';
 import { bearer, createPerson, createTestApp, signIn } from '../../test/test-app.js';
 
 const t = await createTestApp();
+await discardUnsentMail(t.app);
 afterAll(() => t.close());
 const admin = await createPerson(t, { roles: ['admin'] });
 const { accessToken } = await signIn(t, admin.email);

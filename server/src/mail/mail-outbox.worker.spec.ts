@@ -1,7 +1,7 @@
 import { getModelToken } from '@nestjs/sequelize';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { closedPort, capturedMailTo, mailDir } from '../../test/mail-helpers.js';
+import { closedPort, capturedMailTo, discardUnsentMail, mailDir } from '../../test/mail-helpers.js';
 import { bearer, createPerson, createTestApp, signIn, TestClock, uniqueEmail, type TestApp } from '../../test/test-app.js';
 import { MailOutboxWorker, retryDelayMs } from './mail-outbox.worker.js';
 import { OutboxMessage } from './models/outbox-message.model.js';
@@ -22,6 +22,7 @@ describe('mail outbox', () => {
     mailDir();
     const clock = new TestClock();
     const down = await createTestApp({ clock, env: { SMTP_PORT: String(await closedPort()) } });
+    await discardUnsentMail(down.app);
     const { email, message } = await inviteSomeone(down, 'en');
     try {
       const worker = down.app.get(MailOutboxWorker);
@@ -56,6 +57,7 @@ describe('mail outbox', () => {
 
   it('writes the invitation in the language chosen for the recipient', async () => {
     const t = await createTestApp();
+    await discardUnsentMail(t.app);
     try {
       const { email, message } = await inviteSomeone(t, 'fr');
       expect((await t.app.get(MailOutboxWorker).deliverDue()).sent).toContain(message.id);

@@ -1,10 +1,8 @@
-import { getModelToken } from '@nestjs/sequelize';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { capturedMailTo, mailDir } from '../../test/mail-helpers.js';
+import { capturedMailTo, discardUnsentMail, mailDir } from '../../test/mail-helpers.js';
 import { createReviewApp, deliverAllMail, member, reviewVenue, storyWithPanels, submit, verdict, type Member } from '../../test/review-fixtures.js';
 import type { TestApp } from '../../test/test-app.js';
-import { OutboxMessage } from '../mail/models/outbox-message.model.js';
 
 let t: TestApp;
 let curator: Member;
@@ -14,8 +12,7 @@ const publicUrl = process.env.PUBLIC_URL ?? 'http://127.0.0.1:4310';
 beforeAll(async () => {
   mailDir();
   t = await createReviewApp();
-  // Earlier suites leave mail queued (every submission notifies every educator); none of it is this suite's to send.
-  await t.app.get<typeof OutboxMessage>(getModelToken(OutboxMessage)).destroy({ where: { sentAt: null } });
+  await discardUnsentMail(t.app);
   exhibitId = (await reviewVenue(t, 'notifications')).exhibit.id;
   curator = await member(t, ['curator'], { name: 'Oskar Lind' });
 });
