@@ -89,7 +89,7 @@ describe('Fleet and Insights follow a kiosk running in a browser', () => {
     await expect.poll(async () => {
       await studio.getByRole('button', { name: 'Refresh' }).click();
       return row.locator('[data-state]').first().getAttribute('data-state', { timeout: 2_000 }).catch(() => null);
-    }, { timeout: 30_000, intervals: [1_000] }).toBe('online');
+    }, { timeout: 30_000, interval: 1_000 }).toBe('online');
     await row.getByText('Online', { exact: true }).waitFor();
     await row.getByText(`Release ${liveRelease.number}`, { exact: true }).waitFor();
     expect(await row.locator('[data-mismatch]').count()).toBe(0);
@@ -121,7 +121,7 @@ describe('Fleet and Insights follow a kiosk running in a browser', () => {
     await expect.poll(async () => {
       await studio.reload();
       return [await opens(), await angleTouches()];
-    }, { timeout: 30_000, intervals: [2_000] }).toEqual([String(opensBefore + 1), String(angleBefore + 1)]);
+    }, { timeout: 30_000, interval: 2_000 }).toEqual([String(opensBefore + 1), String(angleBefore + 1)]);
     // The same numbers are drawn as charts.
     await studio.getByRole('img', { name: 'Opens per story' }).waitFor();
     await studio.getByRole('img', { name: 'Touches per widget and setting' }).waitFor();

@@ -1,11 +1,11 @@
 import { useCallback, useMemo, useState } from 'react';
 import { readPanelWidgets } from '../../panel/live-value/live-value-reading.js';
-import type { PanelDocJSON } from '../../panel/panel-json.js';
+import { PANEL_IMAGE_NODE, WIDGET_NODE, type PanelDocJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
 import { directionOf, PANEL_LAYOUTS, type PanelLayout, type TextDirection } from '../../panel/panel-presentation.js';
 import { widgetsIn } from '../../panel/panel-queries.js';
 import { renderPanelNode, type PanelRenderContext } from './panel-nodes.js';
 import type { ResolveMedia } from './panel-media.js';
-import { panelRootStyle, WIDGET_MAX_WIDTH } from './panel-theme.js';
+import { landscapeColumnStyle, panelRootStyle, WIDGET_MAX_WIDTH } from './panel-theme.js';
 
 export interface PanelViewProps {
   doc: PanelDocJSON;
@@ -69,7 +69,27 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
       data-reduced-motion={reducedMotion || undefined}
       style={panelRootStyle(layout, width, height, largeText, highContrast)}
     >
-      {renderPanelNode(doc, context, 0)}
+      {layout === 'landscape' ? <LandscapeColumns doc={doc} context={context} /> : renderPanelNode(doc, context, 0)}
     </article>
+  );
+}
+
+const isMediaNode = (node: PanelNodeJSON) => node.type === WIDGET_NODE || node.type === PANEL_IMAGE_NODE;
+
+/**
+ * A wide screen reads best with the words on one side and the widgets and pictures on the other:
+ * stacked in one column, a widget pushed the caption below it off the bottom of a 1080 px screen.
+ * Each column keeps the document's order, and the words come first for a screen reader.
+ */
+function LandscapeColumns({ doc, context }: { doc: PanelDocJSON; context: PanelRenderContext }) {
+  const blocks = (doc.content ?? []) as PanelNodeJSON[];
+  const media = blocks.filter(isMediaNode);
+  if (media.length === 0 || media.length === blocks.length) return <>{renderPanelNode(doc, context, 0)}</>;
+  const column = (nodes: PanelNodeJSON[]) => renderPanelNode({ type: 'doc', content: nodes }, context, 0);
+  return (
+    <div style={landscapeColumnStyle.row}>
+      <div className="mp-panel-text" style={landscapeColumnStyle.text}>{column(blocks.filter((node) => !isMediaNode(node)))}</div>
+      <div className="mp-panel-media" style={landscapeColumnStyle.media}>{column(media)}</div>
+    </div>
   );
 }

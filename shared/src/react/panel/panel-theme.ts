@@ -19,7 +19,9 @@ export function panelRootStyle(layout: keyof typeof BODY_SIZE, width: number, he
     boxSizing: 'border-box',
     width,
     height,
-    overflow: 'hidden',
+    // A panel longer than its screen scrolls under the visitor's finger rather than losing its end.
+    overflowX: 'hidden',
+    overflowY: 'auto',
     padding: layout === 'landscape' ? '72px 96px' : '96px 72px',
     background: colours.surface,
     color: colours.text,
@@ -32,5 +34,14 @@ export function panelRootStyle(layout: keyof typeof BODY_SIZE, width: number, he
   };
 }
 
-/** Widest a widget is drawn on each screen, in CSS px: a portrait screen's full text width, half a landscape one. */
-export const WIDGET_MAX_WIDTH = { landscape: 1100, portrait: 936 } as const;
+/** Gap between the words and the pictures on a landscape screen, in CSS px. */
+const COLUMN_GAP = 64;
+
+/** Widest a widget is drawn on each screen, in CSS px: a portrait screen's full text width, a landscape one's media column. */
+export const WIDGET_MAX_WIDTH = { landscape: (1920 - 2 * 96 - COLUMN_GAP) / 2, portrait: 936 } as const;
+
+export const landscapeColumnStyle = {
+  row: { display: 'flex', gap: COLUMN_GAP, alignItems: 'flex-start' },
+  text: { flex: '1 1 0', minWidth: 0 },
+  media: { flex: '1 1 0', minWidth: 0, display: 'flex', flexDirection: 'column', gap: 32 },
+} satisfies Record<string, CSSProperties>;
