@@ -1,10 +1,11 @@
-import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { dwellByPanel, widgetUse, type DwellSample, type InsightsView, type KioskEventType, type KioskSwitch, type WidgetParamCount } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import { dateOnlyOf } from '../common/date-only.js';
+import { invalidField } from '../common/validation.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import type { InsightsQuery } from './dto/insights.query.js';
 
@@ -92,7 +93,7 @@ export class InsightsService {
     const to = query.to ?? dateOnlyOf(this.clock.now());
     const from = query.from ?? dateOnlyOf(new Date(dayStart(to).getTime() - (DEFAULT_DAYS - 1) * DAY_MS));
     if (from > to) {
-      throw new BadRequestException({ statusCode: 400, message: 'Some fields are not valid.', errors: [{ path: ['to'], message: 'The range ends before it starts.' }] });
+      throw invalidField(['to'], 'The range ends before it starts.');
     }
     return { from, to };
   }
