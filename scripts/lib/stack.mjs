@@ -90,6 +90,7 @@ export async function startStack(options) {
     }
 
     const mailDir = path.resolve(dataDir, 'mail');
+    const dataSecrets = secrets(dataDir);
     const env = {
       ...process.env,
       NODE_ENV: nodeEnv,
@@ -102,8 +103,8 @@ export async function startStack(options) {
       SMTP_PORT: String(smtpPort),
       MAIL_DIR: mailDir,
       MEDIA_DIR: process.env.MEDIA_DIR ?? path.join(root, 'media/store'),
-      JWT_SECRET: process.env.JWT_SECRET ?? secrets(dataDir).jwtSecret,
-      SIGNING_KEY_SECRET: process.env.SIGNING_KEY_SECRET ?? secrets(dataDir).signingKeySecret,
+      JWT_SECRET: process.env.JWT_SECRET ?? dataSecrets.jwtSecret,
+      SIGNING_KEY_SECRET: process.env.SIGNING_KEY_SECRET ?? dataSecrets.signingKeySecret,
       DEMO_PASSWORD: demoPassword,
       STUDIO_DIST: path.join(root, 'studio/dist'),
       KIOSK_DIST: path.join(root, 'kiosk/dist'),
