@@ -10,17 +10,21 @@ import { ensureDebianPackage } from './lib/debian.mjs';
 import { ensureDependencies, root, startStack } from './lib/stack.mjs';
 
 const workspaces = ['shared', 'server', 'studio', 'kiosk', 'test'];
-const only = process.argv.slice(2);
+// `node scripts/test.mjs server test -- browser/review` runs those workspaces, passing what follows `--` to vitest as file filters.
+const separator = process.argv.indexOf('--');
+const only = process.argv.slice(2, separator === -1 ? undefined : separator);
+const filters = separator === -1 ? [] : process.argv.slice(separator + 1);
 const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'mantlepiece-test-'));
 let stack;
 let passed = 0;
 let failed = 0;
+let skipped = 0;
 const broken = [];
 
 async function finish(code) {
   await stack?.stop();
   if (!process.env.KEEP_TEST_DATA) fs.rmSync(dataDir, { recursive: true, force: true });
-  console.log(`\n${passed} passed, ${failed} failed`);
+  console.log(`\n${passed} passed, ${failed} failed, ${skipped} skipped`);
   process.exit(code);
 }
 process.on('SIGINT', () => finish(130));
@@ -42,7 +46,7 @@ try {
   for (const workspace of only.length ? only : workspaces) {
     phase('tests', workspace);
     const report = path.join(dataDir, `vitest-${workspace}.json`);
-    const result = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`], {
+    const result = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...(filters.length ? ['--passWithNoTests', ...filters] : [])], {
       cwd: path.join(root, workspace), env,
     });
     if (!fs.existsSync(report)) {
@@ -53,6 +57,7 @@ try {
     const summary = JSON.parse(fs.readFileSync(report, 'utf8'));
     passed += summary.numPassedTests;
     failed += summary.numFailedTests;
+    skipped += summary.numPendingTests + summary.numTodoTests;
     // A suite that fails to load counts as a failure even though none of its tests ran.
     if (result.status !== 0 && summary.numFailedTests === 0) {
       broken.push(workspace);

@@ -89,7 +89,8 @@ describe('a story goes through review in the browser', () => {
     await educator.getByText('a request for changes needs a note', { exact: false }).waitFor();
     await educator.getByRole('textbox', { name: 'What should change' }).fill(note);
     await educator.getByRole('button', { name: 'Send back for changes' }).click();
-    await educator.getByText('Sent back to the curator with your note.').waitFor();
+    await educator.locator('[data-verdict-outcome="changes_requested"]').getByText('Sent back to the curator with your note.').waitFor();
+    await expect.poll(() => educator.locator('header').getByText(/^Changes requested$/).count(), settled).toBeGreaterThan(0);
   });
 
   it('the curator sees the note, fixes the panel and resubmits', async () => {
@@ -119,7 +120,10 @@ describe('a story goes through review in the browser', () => {
     await expect.poll(() => educator.locator('[data-text-diff] ins').first().textContent(), settled).toContain('a few centimetres');
     await educator.getByRole('radio', { name: 'Approve' }).check();
     await educator.getByRole('button', { name: 'Approve this revision' }).click();
-    await educator.getByText('Approved. The story can now go into a release.').waitFor();
+    // The state is what counts; the confirmation stays once the verdict form has left with the open revision.
+    await educator.locator('[data-verdict-outcome="approved"]').getByText('Approved. The story can now go into a release.').waitFor();
+    await expect.poll(() => educator.getByRole('button', { name: 'Approve this revision' }).count(), settled).toBe(0);
+    await educator.locator('[data-verdict="approve"]').waitFor();
   });
 
   it('the curator sees the approval: the state badge and a notification', async () => {

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Button, Field, makeStyles, Radio, RadioGroup, Text, Textarea, tokens } from '@fluentui/react-components';
-import type { PreflightEntry, Verdict } from '@mantlepiece/shared';
+import type { PreflightEntry, StoryState, Verdict } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { ApiError } from '../../api/client';
 import { useRecordVerdict } from '../../api/reviews';
@@ -20,10 +20,12 @@ export interface VerdictFormProps {
   blockers: PreflightEntry[];
   /** Told after the server took a verdict, or refused a move because the story had moved on. */
   onSettled: () => void;
+  /** Told the story's state once the server took the verdict; the page shows the outcome, since this form goes away with the open revision. */
+  onRecorded: (storyState: StoryState) => void;
 }
 
 /** Approve, or ask for changes with a note that says what to change. */
-export function VerdictForm({ revisionId, storyId, blockers, onSettled }: VerdictFormProps) {
+export function VerdictForm({ revisionId, storyId, blockers, onSettled, onRecorded }: VerdictFormProps) {
   const { t } = useTranslation();
   const styles = useStyles();
   const shared = useReviewStyles();
@@ -40,7 +42,7 @@ export function VerdictForm({ revisionId, storyId, blockers, onSettled }: Verdic
       return;
     }
     if (blocked) return;
-    record.mutate({ verdict, ...(note.trim() ? { note: note.trim() } : {}) }, { onSettled });
+    record.mutate({ verdict, ...(note.trim() ? { note: note.trim() } : {}) }, { onSettled, onSuccess: ({ storyState }) => onRecorded(storyState) });
   };
 
   const error = record.error instanceof ApiError ? record.error : null;
@@ -80,7 +82,6 @@ export function VerdictForm({ revisionId, storyId, blockers, onSettled }: Verdic
       ) : refusal ? (
         <FormAlert intent="error">{refusal}</FormAlert>
       ) : null}
-      {record.isSuccess ? <FormAlert intent="success">{t(`verdict.recorded.${record.data.storyState === 'approved' ? 'approved' : record.data.storyState === 'changes_requested' ? 'changes' : 'waiting'}`)}</FormAlert> : null}
       <div className={styles.actions}>
         <Button type="submit" appearance="primary" disabled={blocked || record.isPending}>
           {record.isPending ? t('common.saving') : verdict === 'approve' ? t('verdict.sendApprove') : t('verdict.sendChanges')}

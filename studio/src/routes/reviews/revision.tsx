@@ -1,6 +1,6 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { Link, makeStyles, Spinner, Text, tokens } from '@fluentui/react-components';
-import { mediaIdsIn, type RevisionView } from '@mantlepiece/shared';
+import { mediaIdsIn, type RevisionView, type StoryState } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
@@ -11,6 +11,7 @@ import { useStory } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
 import { useResolveMedia } from '../../components/editor/media-resolver';
 import { describeError } from '../../components/forms/describe-error';
+import { FormAlert } from '../../components/forms/FormAlert';
 import { useDateFormat } from '../../components/formatting';
 import { LinkButton, TextLink } from '../../components/links';
 import { PageHeader } from '../../components/PageHeader';
@@ -78,6 +79,9 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
   const numberOf = (panelId: number) => revision.snapshot.findIndex((panel) => panel.panelId === panelId) + 1;
 
   const refreshStory = () => void story.refetch();
+  // Kept here rather than in the verdict form: the form leaves the page once the revision is no longer open.
+  const [recorded, setRecorded] = useState<StoryState | null>(null);
+  const outcome = recorded === 'approved' ? 'approved' : recorded === 'changes_requested' ? 'changes' : 'waiting';
 
   return (
     <>
@@ -108,9 +112,10 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
         <div className={styles.column}>
           {isEducator && revision.state === 'open' ? (
             <section className={shared.card}>
-              <VerdictForm revisionId={revision.id} storyId={revision.storyId} blockers={blockers} onSettled={refreshStory} />
+              <VerdictForm revisionId={revision.id} storyId={revision.storyId} blockers={blockers} onSettled={refreshStory} onRecorded={setRecorded} />
             </section>
           ) : null}
+          {recorded ? <div data-verdict-outcome={recorded}><FormAlert intent="success">{t(`verdict.recorded.${outcome}`)}</FormAlert></div> : null}
           <section className={shared.card} aria-labelledby="verdicts-heading">
             <Text as="h2" id="verdicts-heading" size={500} weight="semibold" className={shared.heading}>{t('verdict.history')}</Text>
             <VerdictHistory reviews={revision.reviews} />
