@@ -1,15 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from '../src/seed/demo-scenario.js';
+import { demoPassword, runningServerUrl } from './running-server.js';
 
-/** The server `npm test` started, on the database `seed` filled. */
-const server = process.env.MANTLEPIECE_URL;
+const server = runningServerUrl();
 
-describe.runIf(server)('the seeded demo scenario on the running server', () => {
+describe('the seeded demo scenario on the running server', () => {
   it.each(DEMO_ACCOUNTS)('signs in $email with DEMO_PASSWORD as $roles', async (account) => {
     const res = await fetch(`${server}/api/auth/login`, {
       method: 'POST',
       headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify({ email: account.email, password: process.env.DEMO_PASSWORD ?? 'mantlepiece-demo' }),
+      body: JSON.stringify({ email: account.email, password: demoPassword }),
     });
     expect(res.status).toBe(200);
     const { user } = (await res.json()) as { user: unknown };

@@ -1,21 +1,21 @@
 import { describe, expect, it } from 'vitest';
 import { checkPanelDocument, panelText, wordCount, type MediaView, type Page, type StoryDetailView, type StoryView } from '@mantlepiece/shared';
 import { DEMO_EXHIBIT } from '../src/seed/demo-stories.js';
+import { demoPassword, runningServerUrl } from './running-server.js';
 
-/** The server `npm test` started, on the database `seed` filled. */
-const server = process.env.MANTLEPIECE_URL;
+const server = runningServerUrl();
 
 async function asCurator<T>(path: string): Promise<T> {
   const login = await fetch(`${server}/api/auth/login`, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: 'curator@demo.test', password: process.env.DEMO_PASSWORD ?? 'mantlepiece-demo' }),
+    body: JSON.stringify({ email: 'curator@demo.test', password: demoPassword }),
   });
   const { accessToken } = (await login.json()) as { accessToken: string };
   return (await (await fetch(`${server}${path}`, { headers: { Authorization: `Bearer ${accessToken}` } })).json()) as T;
 }
 
-describe.runIf(server)('the seeded demo stories on the running server', () => {
+describe('the seeded demo stories on the running server', () => {
   it('holds three short family stories in the demo exhibit, approved by the demo educator, every panel a valid document within its word budget', async () => {
     const stories = await asCurator<Page<StoryView>>('/api/stories?sort=title');
     const demo = stories.items.filter((story) => story.exhibitName === DEMO_EXHIBIT.name);
