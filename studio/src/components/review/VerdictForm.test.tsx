@@ -6,7 +6,7 @@ import { VerdictForm } from './VerdictForm';
 
 const missingAlt: PreflightEntry = { check: 'image-alt-text', severity: 'blocker', passed: false, message: 'Panel 1: the image “slab.png” has no alt text in English.', panelId: 4 };
 
-const form = (blockers: PreflightEntry[]) => renderInStudio(<VerdictForm revisionId={7} storyId={3} blockers={blockers} onSettled={() => undefined} />);
+const form = (blockers: PreflightEntry[]) => renderInStudio(<VerdictForm revisionId={7} storyId={3} blockers={blockers} onSettled={() => undefined} onRecorded={() => undefined} />);
 
 describe('verdict form', () => {
   it('offers approval when preflight found no blockers', async () => {
