@@ -47,4 +47,11 @@ describe('person dialog', () => {
     expect(onSubmit).not.toHaveBeenCalled();
     expect(screen.getByRole('group', { name: 'Roles' }).textContent).toContain('Choose at least one role.');
   });
+
+  it('takes the role message away as soon as a role is ticked', async () => {
+    await dialog({ onSubmit: vi.fn(), initial: { ...translator, roles: [] } });
+    fireEvent.click(screen.getByRole('button', { name: 'Send invitation' }));
+    fireEvent.click(screen.getByRole('checkbox', { name: 'Curator' }));
+    expect(screen.getByRole('group', { name: 'Roles' }).textContent).not.toContain('Choose at least one role.');
+  });
 });

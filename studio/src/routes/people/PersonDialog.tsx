@@ -25,10 +25,16 @@ export function PersonDialog(props: PersonDialogProps) {
   const [values, setValues] = useState(props.initial);
   const [problems, setProblems] = useState<Partial<Record<PersonField, string>>>({});
 
+  const check = (next: PersonValues) => personProblems(t, next, { withEmail: props.emailEditable });
   const submit = () => {
-    const found = personProblems(t, values, { withEmail: props.emailEditable });
+    const found = check(values);
     setProblems(found);
     if (!hasProblems(found)) props.onSubmit(values);
+  };
+  // Once a submit has shown problems, each change re-checks, so a mended field loses its message at once.
+  const change = (next: PersonValues) => {
+    setValues(next);
+    setProblems((shown) => (hasProblems(shown) ? check(next) : shown));
   };
 
   const messages = Object.fromEntries(PERSON_FIELDS.map((field) => [field, personFieldMessage(t, field, problems, props.error)]));
@@ -44,7 +50,7 @@ export function PersonDialog(props: PersonDialogProps) {
       onClose={props.onClose}
     >
       {alert ? <FormAlert intent="error">{alert}</FormAlert> : null}
-      <PersonFields values={values} onChange={setValues} messages={messages} emailEditable={props.emailEditable} />
+      <PersonFields values={values} onChange={change} messages={messages} emailEditable={props.emailEditable} />
     </FormDialog>
   );
 }
