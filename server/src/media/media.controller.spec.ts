@@ -209,7 +209,7 @@ describe('details, lists and delete', () => {
     const [asset] = (await upload([await picture(80, 80).png().toBuffer(), 'used.png'])).body;
     const story = (await request(t.http).post('/api/stories').set(curator).send({ title: 'Uses an image' })).body;
     const panel = (await request(t.http).post(`/api/stories/${story.id}/panels`).set(curator).send({ doc: { type: 'doc', content: [{ type: 'panelImage', attrs: { mediaId: String(asset.id) } }] } })).body;
-    expect((await request(t.http).get(`/api/media/${asset.id}`).set(curator)).body.usedIn).toEqual([{ storyId: story.id, storyTitle: 'Uses an image', panelId: panel.id }]);
+    expect((await request(t.http).get(`/api/media/${asset.id}`).set(curator)).body.usedIn).toEqual([{ storyId: story.id, storyTitle: 'Uses an image', panelId: panel.id, panelNumber: 1 }]);
 
     const refused = await request(t.http).delete(`/api/media/${asset.id}`).set(curator);
     expect(refused.status).toBe(409);

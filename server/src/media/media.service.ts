@@ -41,6 +41,7 @@ export class MediaService {
     @InjectModel(MediaRendition) private readonly renditions: typeof MediaRendition,
     @InjectModel(MediaAltText) private readonly altTexts: typeof MediaAltText,
     @InjectModel(PanelMediaUsage) private readonly usages: typeof PanelMediaUsage,
+    @InjectModel(Panel) private readonly panels: typeof Panel,
     @Inject(MEDIA_STORE) private readonly store: MediaStore,
     private readonly images: ImageProcessing,
     private readonly clock: Clock,
@@ -199,7 +200,11 @@ export class MediaService {
       transaction,
     });
     rows.sort((a, b) => a.panel!.story!.title.localeCompare(b.panel!.story!.title) || a.panel!.position - b.panel!.position);
-    return rows.map((row) => ({ mediaAssetId: row.mediaAssetId, storyId: row.panel!.storyId, storyTitle: row.panel!.story!.title, panelId: row.panelId }));
+    // People count panels from 1 in story order; positions may have gaps after a panel is deleted.
+    const storyIds = [...new Set(rows.map((row) => row.panel!.storyId))];
+    const panels = storyIds.length ? await this.panels.findAll({ where: { storyId: storyIds }, attributes: ['id', 'storyId', 'position'], order: [['position', 'ASC']], transaction }) : [];
+    const panelNumber = (panel: Panel) => panels.filter((other) => other.storyId === panel.storyId).findIndex((other) => other.id === panel.id) + 1;
+    return rows.map((row) => ({ mediaAssetId: row.mediaAssetId, storyId: row.panel!.storyId, storyTitle: row.panel!.story!.title, panelId: row.panelId, panelNumber: panelNumber(row.panel!) }));
   }
 }
 
@@ -208,6 +213,6 @@ function inUse(usedIn: MediaUsageView[]): ConflictException {
   return new ConflictException({
     statusCode: 409,
     message: `This image is used on ${usedIn.length} panel${usedIn.length === 1 ? '' : 's'} of ${stories.join(', ')}; take it off them first.`,
-    errors: usedIn.map((use, index) => ({ path: ['usedIn', index], message: `Story ${use.storyId} "${use.storyTitle}", panel ${use.panelId}` })),
+    errors: usedIn.map((use, index) => ({ path: ['usedIn', index], message: `"${use.storyTitle}", panel ${use.panelNumber}` })),
   });
 }

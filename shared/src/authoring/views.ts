@@ -21,6 +21,11 @@ export interface StoryView {
   createdAt: string;
   updatedAt: string;
   createdBy: { id: number; name: string } | null;
+  /**
+   * The story's latest approved revision, which releases carry; it stays so while a newer draft
+   * is written and reviewed ("Approved · draft in progress"). Null before the first approval.
+   */
+  approvedRevision: { id: number; number: number } | null;
 }
 
 export interface PanelView {
@@ -57,6 +62,8 @@ export interface MediaUsageView {
   storyId: number;
   storyTitle: string;
   panelId: number;
+  /** The panel's place in its story, counted from 1 as people do. */
+  panelNumber: number;
 }
 
 export interface MediaView {

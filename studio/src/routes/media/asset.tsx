@@ -111,14 +111,14 @@ function AssetDetails({ asset }: { asset: MediaView }) {
           </Text>
           <Text size={200} className={styles.muted}>{t('asset.renditions', { widths: asset.renditions.map((rendition) => rendition.width).join(', ') })}</Text>
           <section aria-labelledby="usage-heading">
-            <Text as="h2" size={400} weight="semibold" id="usage-heading">{t('asset.usedIn')}</Text>
+            <Text as="h2" block size={400} weight="semibold" id="usage-heading">{t('asset.usedIn')}</Text>
             {asset.usedIn.length === 0 ? (
               <Text as="p" className={styles.muted}>{t('asset.unused')}</Text>
             ) : (
               <ul className={styles.usage}>
                 {asset.usedIn.map((usage) => (
                   <li key={usage.panelId}>
-                    <TextLink to={`/stories/${usage.storyId}?panel=${usage.panelId}`}>{t('asset.usage', { story: usage.storyTitle, panel: usage.panelId })}</TextLink>
+                    <TextLink to={`/stories/${usage.storyId}?panel=${usage.panelId}`}>{t('asset.usage', { story: usage.storyTitle, panel: usage.panelNumber })}</TextLink>
                   </li>
                 ))}
               </ul>

@@ -218,7 +218,7 @@ export const authoringAr: Translated<typeof authoringEn> = {
     renditions: 'نسخ الشاشة: بعرض {{widths}} بكسل',
     usedIn: 'أين تُستخدم',
     unused: 'لا توجد لوحة تستخدم هذه الصورة.',
-    usage: '{{story}}، اللوحة رقم {{panel}}',
+    usage: '{{story}}، اللوحة {{panel}}',
     rights: 'الإسناد والترخيص',
     altTitle: 'النص البديل',
     altHint: 'وصف واحد لكل لغة من لغات المركز. قل ما يهم في الصورة بالنسبة للوحة، في جملة أو جملتين.',

@@ -196,7 +196,7 @@ export const authoringEn = {
     renditions: 'Screen renditions: {{widths}} px wide',
     usedIn: 'Where it is used',
     unused: 'No panel uses this image.',
-    usage: '{{story}}, panel #{{panel}}',
+    usage: '{{story}}, panel {{panel}}',
     rights: 'Credit and licence',
     altTitle: 'Alt text',
     altHint: 'One description per language of the venue. Say what matters in the image for the panel, in a sentence or two.',

@@ -199,7 +199,7 @@ export const authoringEs: Translated<typeof authoringEn> = {
     renditions: 'Versiones para pantalla: {{widths}} px de ancho',
     usedIn: 'Dónde se usa',
     unused: 'Ningún panel usa esta imagen.',
-    usage: '{{story}}, panel n.º {{panel}}',
+    usage: '{{story}}, panel {{panel}}',
     rights: 'Crédito y licencia',
     altTitle: 'Texto alternativo',
     altHint: 'Una descripción por cada idioma del centro. Diga lo que importa de la imagen para el panel, en una o dos frases.',

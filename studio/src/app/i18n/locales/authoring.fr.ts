@@ -198,7 +198,7 @@ export const authoringFr: typeof authoringEn = {
     renditions: 'Déclinaisons pour les écrans : {{widths}} px de large',
     usedIn: 'Où elle est utilisée',
     unused: 'Aucun panneau n’utilise cette image.',
-    usage: '{{story}}, panneau n° {{panel}}',
+    usage: '{{story}}, panneau {{panel}}',
     rights: 'Crédit et licence',
     altTitle: 'Texte alternatif',
     altHint: 'Une description par langue du lieu. Dites en une ou deux phrases ce qui compte dans l’image pour le panneau.',
