@@ -105,7 +105,7 @@ export const reviewAr: Translated<typeof reviewEn> = {
     newOnRevision: 'علّق على النسخة',
     onWords: 'على «{{quote}}»',
     clearRange: 'علّق على اللوحة كلها بدلًا من ذلك',
-    selectHint: 'حدّد كلمات في هذا العرض للتعليق عليها.',
+    selectHint: 'حدّد كلمات في هذه اللوحة للتعليق عليها.',
     add: 'أضف تعليقًا',
     reply: 'ردّ',
     sendReply: 'أرسل الرد',

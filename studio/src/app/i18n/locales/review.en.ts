@@ -82,7 +82,7 @@ export const reviewEn = {
     newOnRevision: 'Comment on the revision',
     onWords: 'On “{{quote}}”',
     clearRange: 'Comment on the whole panel instead',
-    selectHint: 'Select words in this drawing to comment on them.',
+    selectHint: 'Select words in this panel to comment on them.',
     add: 'Add comment',
     reply: 'Reply',
     sendReply: 'Send reply',

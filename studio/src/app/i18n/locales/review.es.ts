@@ -85,7 +85,7 @@ export const reviewEs: Translated<typeof reviewEn> = {
     newOnRevision: 'Comentar la versión',
     onWords: 'Sobre «{{quote}}»',
     clearRange: 'Comentar todo el panel en su lugar',
-    selectHint: 'Seleccione palabras en esta vista para comentarlas.',
+    selectHint: 'Seleccione palabras de este panel para comentarlas.',
     add: 'Añadir comentario',
     reply: 'Responder',
     sendReply: 'Enviar respuesta',

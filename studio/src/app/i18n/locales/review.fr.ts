@@ -84,7 +84,7 @@ export const reviewFr: typeof reviewEn = {
     newOnRevision: 'Commenter la révision',
     onWords: 'Sur « {{quote}} »',
     clearRange: 'Commenter plutôt tout le panneau',
-    selectHint: 'Sélectionnez des mots dans ce rendu pour les commenter.',
+    selectHint: 'Sélectionnez des mots de ce panneau pour les commenter.',
     add: 'Ajouter le commentaire',
     reply: 'Répondre',
     sendReply: 'Envoyer la réponse',
