@@ -117,7 +117,7 @@ describe('Fleet and Insights follow a kiosk running in a browser', () => {
     const stories = studio.getByRole('table', { name: 'Stories by opens' });
     const widgets = studio.getByRole('table', { name: 'Widget use' });
     const opens = () => stories.getByRole('row').filter({ hasText: WIDGET_STORY }).getByRole('cell').last().textContent({ timeout: 1_000 }).catch(() => null);
-    const angleTouches = () => widgets.getByRole('row').filter({ hasText: 'angleDeg' }).getByRole('cell').last().textContent({ timeout: 1_000 }).catch(() => null);
+    const angleTouches = () => widgets.getByRole('row').filter({ hasText: 'Slope angle (°)' }).getByRole('cell').last().textContent({ timeout: 1_000 }).catch(() => null);
     await expect.poll(async () => {
       await studio.reload();
       return [await opens(), await angleTouches()];

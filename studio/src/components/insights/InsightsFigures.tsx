@@ -1,6 +1,7 @@
 import { makeStyles, Text, tokens } from '@fluentui/react-components';
 import type { InsightsView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import { useParamLabels, useWidgetName } from '../widget-params/use-param-labels';
 import { FigureSection } from './FigureSection';
 
 const useStyles = makeStyles({
@@ -10,7 +11,6 @@ const useStyles = makeStyles({
     backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge,
   },
   totalValue: { fontSize: tokens.fontSizeHero700, fontWeight: tokens.fontWeightSemibold, fontVariantNumeric: 'tabular-nums', margin: 0 },
-  code: { fontFamily: tokens.fontFamilyMonospace, fontSize: tokens.fontSizeBase200 },
 });
 
 const TOTALS = ['events', 'storyOpens', 'panelViews', 'widgetTouches'] as const;
@@ -24,6 +24,8 @@ export function InsightsFigures({ insights }: { insights: InsightsView }) {
   const seconds = (s: number) => t('insights.seconds', { value: new Intl.NumberFormat(language, { maximumFractionDigits: 1 }).format(s) });
   const languageNames = new Intl.DisplayNames(language, { type: 'language' });
   const storyTitle = (id: number | null, title: string | null) => title ?? t('insights.deletedStory', { id: id ?? '?' });
+  const widgetName = useWidgetName();
+  const paramLabel = useParamLabels();
 
   return (
     <>
@@ -58,12 +60,13 @@ export function InsightsFigures({ insights }: { insights: InsightsView }) {
         chartLabel={t('insights.widgets.chart')}
         columns={[t('insights.widgets.widget'), t('insights.widgets.param'), t('insights.widgets.touches')]}
         rows={insights.widgets.flatMap((w) => w.params.map((p) => {
-          const param = p.param ?? t('insights.widgets.noParam');
+          const widget = widgetName(w.widgetType);
+          const param = p.param ? paramLabel(w.widgetType, p.param.split('.')) : t('insights.widgets.noParam');
           return {
             key: `${w.widgetType}:${p.param ?? ''}`,
-            label: `${w.widgetType} · ${param}`,
+            label: `${widget} · ${param}`,
             value: p.touches,
-            cells: [<span className={styles.code}>{w.widgetType}</span>, p.param ? <span className={styles.code}>{p.param}</span> : param, count.format(p.touches)],
+            cells: [widget, param, count.format(p.touches)],
           };
         }))}
       />

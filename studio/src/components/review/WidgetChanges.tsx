@@ -1,8 +1,7 @@
 import { makeStyles, Text, tokens } from '@fluentui/react-components';
 import type { WidgetChange, WidgetType } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { useWidgetTypes } from '../../api/widgets';
-import { widgetFormGroups } from '../widget-params/widget-form';
+import { useParamLabels } from '../widget-params/use-param-labels';
 import { useReviewStyles } from './review-styles';
 
 const useStyles = makeStyles({
@@ -14,17 +13,6 @@ const useStyles = makeStyles({
   before: { textDecorationLine: 'line-through', color: tokens.colorNeutralForeground3 },
   after: { fontWeight: tokens.fontWeightSemibold },
 });
-
-/** "Slope angle θ (°)" for a param path, read from the widget's published JSON Schema; the path itself otherwise. */
-function useParamLabels(): (widgetType: string, path: string[]) => string {
-  const types = useWidgetTypes();
-  return (widgetType, path) => {
-    const descriptor = types.data?.items.find((item) => item.type === widgetType);
-    const field = descriptor ? widgetFormGroups(descriptor.jsonSchema).flatMap((group) => group.fields).find((f) => f.path.join('.') === path.join('.')) : undefined;
-    if (!field) return path.join(' › ');
-    return field.unit ? `${field.label} (${field.unit})` : field.label;
-  };
-}
 
 const shown = (value: unknown) => (value === undefined ? '—' : typeof value === 'string' ? value : JSON.stringify(value));
 
