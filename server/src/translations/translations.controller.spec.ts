@@ -85,7 +85,7 @@ describe('units', () => {
   it('saves a unit by compare-and-set: a second save from the same version gets 409 with the current text', async () => {
     const first = await request(t.http).put(unitPath('fr', heading())).set(world.translator).send({ text: 'Pourquoi la roche glisse-t-elle ?', version: 0 });
     expect(first.status).toBe(200);
-    expect(first.body).toEqual({ version: 1, status: 'translated' });
+    expect(first.body).toEqual({ version: 1, status: 'translated', warnings: [] });
     const before = await translationRowCounts(t);
     const late = await request(t.http).put(unitPath('fr', heading())).set(world.translator).send({ text: 'Pourquoi ça glisse ?', version: 0 });
     expect(late.status).toBe(409);
@@ -94,7 +94,7 @@ describe('units', () => {
     expect(older.body.currentVersion).toBe(1);
     expect(await translationRowCounts(t)).toEqual(before);
     const next = await request(t.http).put(unitPath('fr', heading())).set(world.translator).send({ text: 'Pourquoi la roche glisse-t-elle ?', version: 1 });
-    expect(next.body).toEqual({ version: 2, status: 'translated' });
+    expect(next.body).toEqual({ version: 2, status: 'translated', warnings: [] });
   });
 
   it('refuses a translation with a placeholder missing, added or unclosed, naming each problem and changing nothing', async () => {
@@ -112,6 +112,21 @@ describe('units', () => {
       ],
     });
     expect(await translationRowCounts(t)).toEqual(before);
+  });
+
+  it('saves a translation over its length budget, with a warning, as an XLIFF import does', async () => {
+    // A world of its own, so the completeness figures below stay as they are.
+    const own = await translationWorld(t, 'budget');
+    const unitId = `p${own.panel.id}.heading.1`;
+    const [unit] = (await request(t.http).get(`/api/stories/${own.story.id}/translations/fr/units`).set(own.translator).expect(200)).body.items as TranslationUnitView[];
+    const long = 'Pourquoi la roche glisse-t-elle ? '.repeat(10).trim();
+    const res = await request(t.http).put(`/api/stories/${own.story.id}/translations/fr/units/${unitId}`).set(own.translator).send({ text: long, version: 0 });
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({
+      version: 1,
+      status: 'translated',
+      warnings: [{ unitId, kind: 'heading', panelNumber: 1, length: long.length, budget: unit!.budget, message: expect.stringContaining(`over its budget of ${unit!.budget}`) }],
+    });
   });
 
   it('answers 404 for a unit the story does not have', async () => {
@@ -141,7 +156,7 @@ describe('units', () => {
     ]);
     const retranslated = await request(t.http).put(unitPath('fr', `p${panel.id}.paragraph.1`)).set(world.translator)
       .send({ text: 'Le fond marin s’enfonce en refroidissant et en vieillissant.', version: 1 });
-    expect(retranslated.body).toEqual({ version: 2, status: 'translated' });
+    expect(retranslated.body).toEqual({ version: 2, status: 'translated', warnings: [] });
     expect((await units('fr', '?status=stale').set(world.translator)).body.total).toBe(0);
   });
 });

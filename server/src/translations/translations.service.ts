@@ -3,7 +3,7 @@ import { InjectModel } from '@nestjs/sequelize';
 import { QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
-  applyTranslations, checkPlaceholders, directionOf, runsFromText, unitStatus,
+  applyTranslations, checkPlaceholders, directionOf, lengthBudgetWarning, runsFromText, unitStatus,
   type LocaleCompleteness, type Page, type PanelDocJSON, type SavedTranslationUnit, type TranslationConflictBody, type TranslationPreviewView,
   type TranslationUnitView, type TranslationWorklistItem, type UnitStatus,
 } from '@mantlepiece/shared';
@@ -104,7 +104,8 @@ export class TranslationsService {
   /**
    * Saves one unit by compare-and-set on its version: of two translators who started from the same
    * version, the second gets a 409 with what the first saved. A translation that breaks a
-   * placeholder is refused with each problem named.
+   * placeholder is refused with each problem named; one over its length budget is saved with a
+   * warning, as in an XLIFF import.
    */
   async saveUnit(translator: User, storyId: number, locale: string, unitId: string, dto: SaveTranslationUnitDto): Promise<SavedTranslationUnit> {
     assertMayWrite(translator, locale);
@@ -113,7 +114,8 @@ export class TranslationsService {
       assertTargetLocale(source.targetLocales, locale);
       const state = (await this.statesOf(source, locale, transaction)).find((each) => each.unit.id === unitId);
       if (!state) throw new NotFoundException(`Unit ${unitId} is not in this story; the source may have changed. Reload the units.`);
-      const problems = dto.text === '' ? [] : checkPlaceholders(state.unit, runsFromText(state.unit, dto.text));
+      const runs = runsFromText(state.unit, dto.text);
+      const problems = dto.text === '' ? [] : checkPlaceholders(state.unit, runs);
       if (problems.length > 0) {
         throw new BadRequestException({
           statusCode: HttpStatus.BAD_REQUEST,
@@ -122,7 +124,12 @@ export class TranslationsService {
         });
       }
       const version = await this.writeTranslation(state, { storyId, locale, text: dto.text, translatorId: translator.id, expectedVersion: dto.version }, transaction);
-      return { version, status: unitStatus({ sourceHash: state.unit.sourceHash, translation: { text: dto.text, sourceHash: state.unit.sourceHash } }) };
+      const warning = lengthBudgetWarning(state.unit, runs, { targetLocale: locale });
+      return {
+        version,
+        status: unitStatus({ sourceHash: state.unit.sourceHash, translation: { text: dto.text, sourceHash: state.unit.sourceHash } }),
+        warnings: warning ? [warning] : [],
+      };
     });
   }
 

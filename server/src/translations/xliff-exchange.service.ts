@@ -1,4 +1,4 @@
-import { BadRequestException, HttpStatus, Injectable } from '@nestjs/common';
+import { BadRequestException, HttpStatus, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import { Sequelize } from 'sequelize-typescript';
 import { exportXliff, parseXliff, planXliffImport, type XliffImportResult, type XliffProblem } from '@mantlepiece/shared';
 import type { User } from '../users/models/user.model.js';
@@ -41,7 +41,9 @@ export class XliffExchangeService {
   /**
    * Takes a translated file whole or not at all, in one transaction: a malformed file, other
    * languages, an unknown unit, a broken placeholder or a unit whose source changed since the
-   * export refuses the whole file with every problem listed, and nothing is written.
+   * export refuses the whole file with every problem listed, and nothing is written. A file from
+   * another story is refused with 422 naming it. A target over its length budget is taken, with a
+   * warning for that unit in the answer, as a save in the workspace is.
    */
   async importStory(translator: User, storyId: number, locale: string, xml: string): Promise<XliffImportResult> {
     assertMayWrite(translator, locale);
@@ -52,10 +54,17 @@ export class XliffExchangeService {
       const states = await this.translations.statesOf(source, locale, transaction);
       const plan = planXliffImport({
         parsed,
-        expected: { srcLang: source.story.sourceLocale, trgLang: locale },
+        expected: { storyId, srcLang: source.story.sourceLocale, trgLang: locale },
         currentUnits: states.map((state) => state.unit),
         currentTranslations: Object.fromEntries(states.flatMap((state) => (state.translation ? [[state.unit.id, state.translation]] : []))),
       });
+      if (!plan.ok && plan.otherStory) {
+        throw new UnprocessableEntityException({
+          statusCode: HttpStatus.UNPROCESSABLE_ENTITY,
+          message: 'The file is from another story; it was not imported, and nothing was changed.',
+          errors: plan.problems.map((problem) => ({ path: ['file', plan.otherStory!.attribute], message: problem.message })),
+        });
+      }
       if (!plan.ok) {
         throw new BadRequestException({
           statusCode: HttpStatus.BAD_REQUEST,
@@ -74,7 +83,7 @@ export class XliffExchangeService {
       }
       const updated = new Set(plan.updates.map((update) => update.unitId));
       const stale = states.filter((state) => state.status === 'stale' && !updated.has(state.unit.id)).length;
-      return { updated: plan.updates.length, unchanged: plan.unchanged.length, stale };
+      return { updated: plan.updates.length, unchanged: plan.unchanged.length, stale, warnings: plan.warnings };
     });
   }
 }

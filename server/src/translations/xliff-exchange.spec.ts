@@ -72,7 +72,7 @@ describe('the XLIFF round trip through the API, with targets filled by the xliff
   it('imports every unit, and the preview carries the text with marks and live values intact', async () => {
     const res = await upload(await translatedWithLibrary(await exported()));
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ updated: 9, unchanged: 0, stale: 0 });
+    expect(res.body).toEqual({ updated: 9, unchanged: 0, stale: 0, warnings: [] });
 
     const figures = await request(t.http).get(`/api/stories/${world.story.id}/translations`).set(world.translator).expect(200);
     expect(figures.body).toEqual([{ locale: 'fr', total: 9, translated: 9, stale: 0 }]);
@@ -100,8 +100,65 @@ describe('the XLIFF round trip through the API, with targets filled by the xliff
   it('reports everything unchanged when the same file comes back again', async () => {
     const before = await translationRowCounts(t);
     const res = await upload(await translatedWithLibrary(await exported()));
-    expect(res.body).toEqual({ updated: 0, unchanged: 9, stale: 0 });
+    expect(res.body).toEqual({ updated: 0, unchanged: 9, stale: 0, warnings: [] });
     expect(await translationRowCounts(t)).toEqual(before);
+  });
+});
+
+describe('an XLIFF target over its length budget', () => {
+  it('is imported, with a warning for that unit in the answer', async () => {
+    const heading = `p${world.panel.id}.heading.1`;
+    const long = 'Pourquoi la roche glisse-t-elle ? '.repeat(150).trim();
+    const xml = await translatedWithLibrary(await exported(), (unitId, unit) => {
+      if (unitId === heading) unit.target = [long];
+    });
+    const res = await upload(xml);
+    expect(res.status).toBe(200);
+    expect(res.body.updated).toBe(1);
+    const [budgetOf] = (await request(t.http).get(`/api/stories/${world.story.id}/translations/fr/units`).set(world.translator).expect(200)).body.items
+      .filter((unit: { unitId: string }) => unit.unitId === heading)
+      .map((unit: { budget: number }) => unit.budget);
+    expect(res.body.warnings).toEqual([
+      { unitId: heading, kind: 'heading', panelNumber: 1, length: long.length, budget: budgetOf, message: expect.stringMatching(new RegExp(`^Unit ${heading} is ${long.length} characters long, ${long.length - budgetOf} over its budget of ${budgetOf}`)) },
+    ]);
+    const units = await request(t.http).get(`/api/stories/${world.story.id}/translations/fr/units`).set(world.translator).expect(200);
+    expect(units.body.items.find((unit: { unitId: string }) => unit.unitId === heading).target).toBe(long);
+  });
+});
+
+describe('an XLIFF file from another story', () => {
+  /** A second story of the venue whose only unit is the image's alt text, which the first story shares. */
+  async function storySharingTheImage() {
+    const story = (await request(t.http).post('/api/stories').set(world.curator).send({ title: 'xliff second story', exhibitId: world.story.exhibitId }).expect(201)).body;
+    const doc = { type: 'doc', content: [{ type: 'panelImage', attrs: { mediaId: String(world.image.id) } }] };
+    await request(t.http).post(`/api/stories/${story.id}/panels`).set(world.curator).send({ doc }).expect(201);
+    const xml = (await request(t.http).get(`/api/stories/${story.id}/translations/fr/xliff`).set(world.translator).expect(200)).text;
+    expect(xml.match(/<unit /g)).toHaveLength(1);
+    return { story, translated: xml.replace(/<source>([^<]*)<\/source>/, '<source>$1</source><target>Basalte noir sur une dorsale.</target>') };
+  }
+
+  it('is refused whole with 422 naming its original, though every unit in it is one this story has too', async () => {
+    const other = await storySharingTheImage();
+    const before = await translationRowCounts(t);
+    const res = await upload(other.translated);
+    expect(res.status).toBe(422);
+    expect(res.body).toEqual({
+      statusCode: 422,
+      message: 'The file is from another story; it was not imported, and nothing was changed.',
+      errors: [{ path: ['file', 'original'], message: `The file's original is "story/${other.story.id}": it was exported from another story, and this story's is "story/${world.story.id}". Export this story's own file and translate that.` }],
+    });
+    expect(await translationRowCounts(t)).toEqual(before);
+    // The same file goes into the story it came from.
+    const own = await request(t.http).put(`/api/stories/${other.story.id}/translations/fr/xliff`).set(world.translator).set('Content-Type', 'application/xliff+xml').send(other.translated);
+    expect(own.status).toBe(200);
+  });
+
+  it('is refused with 422 naming the file id when a tool dropped the original', async () => {
+    const other = await storySharingTheImage();
+    const returned = (await translatedWithLibrary(await exported())).replace(`<file id="s${world.story.id}"`, `<file id="s${other.story.id}"`);
+    const res = await upload(returned);
+    expect(res.status).toBe(422);
+    expect(res.body.errors).toEqual([{ path: ['file', 'id'], message: expect.stringContaining(`"s${other.story.id}"`) }]);
   });
 });
 

@@ -1,5 +1,6 @@
 import type { PanelLayout } from '../panel/panel-presentation.js';
-import type { TranslationUnit } from './translation-unit.js';
+import { visibleLength } from './inline-runs.js';
+import type { TranslationUnit, UnitKind, UnitRun } from './translation-unit.js';
 
 /**
  * Length of a text in a language family relative to the same text in English. Common practice,
@@ -68,4 +69,37 @@ export function lengthBudget(unit: Pick<TranslationUnit, 'sourceLength' | 'sourc
   const layouts: PanelLayout[] = layout ? [layout] : ['landscape', 'portrait'];
   const lineLimit = Math.min(...layouts.map((each) => HEADING_CHARACTERS_PER_LINE[each][level] * HEADING_LINES));
   return Math.max(unit.sourceLength, Math.min(scaled, lineLimit));
+}
+
+/**
+ * The longest translation stored, in the display form's UTF-16 code units: far past any budget,
+ * so it never stands in for one, and well inside the database column.
+ */
+export const MAX_TRANSLATION_LENGTH = 10_000;
+
+/** A translation longer than its unit's budget: kept all the same, and reported so the translator can shorten it. */
+export interface LengthBudgetWarning {
+  unitId: string;
+  kind: UnitKind;
+  /** The panel's place in the story, counted from 1; null for alt text. */
+  panelNumber: number | null;
+  /** Characters a reader would see, counted as the budget is. */
+  length: number;
+  budget: number;
+  message: string;
+}
+
+/** The warning for a translation over its unit's budget, or null when it keeps within it. */
+export function lengthBudgetWarning(unit: TranslationUnit, targetRuns: readonly UnitRun[], options: LengthBudgetOptions): LengthBudgetWarning | null {
+  const budget = lengthBudget(unit, options);
+  const length = visibleLength(targetRuns, unit.placeholders);
+  if (length <= budget) return null;
+  return {
+    unitId: unit.id,
+    kind: unit.kind,
+    panelNumber: unit.context.panelNumber ?? null,
+    length,
+    budget,
+    message: `Unit ${unit.id} is ${length} characters long, ${length - budget} over its budget of ${budget}: the text may not fit on the screen.`,
+  };
 }

@@ -1,4 +1,5 @@
 import type { PanelDocJSON } from '../panel/panel-json.js';
+import type { LengthBudgetWarning } from './length-budget.js';
 import type { Placeholder, UnitKind } from './translation-unit.js';
 import type { LocaleCompleteness, UnitStatus } from './unit-status.js';
 
@@ -48,6 +49,8 @@ export interface SaveTranslationUnitBody {
 export interface SavedTranslationUnit {
   version: number;
   status: UnitStatus;
+  /** The saved text's length against its budget when it is over: saved all the same, as in an XLIFF import. */
+  warnings: LengthBudgetWarning[];
 }
 
 /** PUT …/units/:unitId answers 409 with this when someone saved the unit first. */
@@ -84,4 +87,6 @@ export interface XliffImportResult {
   unchanged: number;
   /** Units of the story in this locale still stale after the import. */
   stale: number;
+  /** One per unit whose target in the file is over its length budget: imported all the same, to be shortened. */
+  warnings: LengthBudgetWarning[];
 }

@@ -8,6 +8,10 @@ export const XLIFF_NAMESPACE = 'urn:oasis:names:tc:xliff:document:2.0';
 /** Note categories a re-import reads back; the others are for the translator. */
 export const SOURCE_HASH_NOTE = 'sourceHash';
 
+/** The `original` and `id` of a story's `<file>`: an import checks them, so one story's file never lands in another. */
+export const storyOriginal = (storyId: string | number) => `story/${storyId}`;
+export const storyFileId = (storyId: string | number) => `s${storyId}`;
+
 export interface ExportXliffOptions {
   storyId: string | number;
   srcLang: string;
@@ -114,7 +118,7 @@ export function exportXliff(options: ExportXliffOptions): string {
   return [
     '<?xml version="1.0" encoding="UTF-8"?>',
     `<xliff${attributes({ xmlns: XLIFF_NAMESPACE, version: '2.1', srcLang: options.srcLang, trgLang: options.trgLang })}>`,
-    `  <file${attributes({ id: `s${options.storyId}`, original: `story/${options.storyId}` })}>`,
+    `  <file${attributes({ id: storyFileId(options.storyId), original: storyOriginal(options.storyId) })}>`,
     ...options.units.map((unit) => unitXml(unit, options)),
     '  </file>',
     '</xliff>',

@@ -16,9 +16,16 @@ export interface ParsedXliffUnit {
   targetRuns?: UnitRun[];
 }
 
+/** A `<file>` element: our export writes one, its `original` naming the story (`story/7`). */
+export interface ParsedXliffFile {
+  id?: string;
+  original?: string;
+}
+
 export interface ParsedXliff {
   srcLang: string;
   trgLang?: string;
+  files: ParsedXliffFile[];
   units: ParsedXliffUnit[];
 }
 
@@ -83,6 +90,7 @@ export function parseXliff(xml: string): XliffParse {
   const parser = new SaxesParser({ xmlns: true, position: true });
   const problems: XliffProblem[] = [];
   const units: ParsedXliffUnit[] = [];
+  const files: ParsedXliffFile[] = [];
   const seenIds = new Set<string>();
   let root: { srcLang: string; trgLang?: string } | undefined;
   let unit: OpenUnit | undefined;
@@ -134,7 +142,11 @@ export function parseXliff(xml: string): XliffParse {
       if (name === 'mrk') openCodes.push(null);
       return;
     }
-    if (name === 'file' || name === 'group') return;
+    if (name === 'file') {
+      files.push({ id: attribute(tag, 'id'), original: attribute(tag, 'original') });
+      return;
+    }
+    if (name === 'group') return;
     if (name === 'unit') {
       const id = attribute(tag, 'id') ?? refuse('A <unit> has no id.');
       if (seenIds.has(id)) refuse(`Unit ${id} appears twice in the file.`, id);
@@ -205,5 +217,5 @@ export function parseXliff(xml: string): XliffParse {
   }
   if (problems.length > 0) return { ok: false, problems };
   if (!root) return { ok: false, problems: [{ message: 'The file has no <xliff> element.' }] };
-  return { ok: true, xliff: { ...root, units } };
+  return { ok: true, xliff: { ...root, files, units } };
 }

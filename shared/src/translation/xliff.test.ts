@@ -12,7 +12,7 @@ import { exportXliff } from './xliff-export.js';
 import { planXliffImport } from './xliff-import.js';
 import { parseXliff } from './xliff-parse.js';
 
-const expected = { srcLang: 'en', trgLang: 'fr' };
+const expected = { storyId: 7, srcLang: 'en', trgLang: 'fr' };
 
 async function storyUnits(): Promise<TranslationUnit[]> {
   return [...(await segmentPanel(examplePanelDoc(), { panelId: 42, sourceLocale: 'en', panelNumber: 1 })), await segmentAltText('ridge-photo', 'Dark basalt on a ridge.', { sourceLocale: 'en' })];
@@ -148,7 +148,7 @@ describe('planXliffImport refuses the whole file', () => {
     const units = await storyUnits();
     const xml = exportXliff({ storyId: 7, srcLang: 'en', trgLang: 'es', units, translations: {} });
     expect(problemsOf(planXliffImport({ parsed: parseXliff(xml), expected, currentUnits: units }))).toEqual([{ message: "The file's target language is es; this upload is for fr." }]);
-    expect(planXliffImport({ parsed: parseXliff(xml), expected: { srcLang: 'EN', trgLang: 'es' }, currentUnits: units }).ok).toBe(true);
+    expect(planXliffImport({ parsed: parseXliff(xml), expected: { storyId: 7, srcLang: 'EN', trgLang: 'es' }, currentUnits: units }).ok).toBe(true);
   });
 
   it('when a unit id is unknown', async () => {
@@ -186,6 +186,57 @@ describe('planXliffImport refuses the whole file', () => {
     const units = await storyUnits();
     const withoutNotes = (await exported()).replace(/<notes>[\s\S]*?<\/notes>/g, '').replace('<source>Try it</source>', '<source>Try this</source>');
     expect(problemsOf(planXliffImport({ parsed: parseXliff(withoutNotes), expected, currentUnits: units })).map((problem) => problem.unitId)).toEqual(['p42.heading.2']);
+  });
+});
+
+describe('planXliffImport checks the story and the length of each target', () => {
+  it('refuses a file whose original names another story, with that one problem', async () => {
+    const units = await storyUnits();
+    const fromStory3 = (await exported()).replace('original="story/7"', 'original="story/3"');
+    expect(planXliffImport({ parsed: parseXliff(fromStory3), expected, currentUnits: units })).toEqual({
+      ok: false,
+      otherStory: { attribute: 'original', value: 'story/3' },
+      problems: [{ message: 'The file\'s original is "story/3": it was exported from another story, and this story\'s is "story/7". Export this story\'s own file and translate that.' }],
+    });
+  });
+
+  it('refuses a file whose tool dropped the original but kept another story\'s file id', async () => {
+    const units = await storyUnits();
+    const returned = await translatedWithLibrary(await exported());
+    expect(returned).not.toContain('original=');
+    expect(planXliffImport({ parsed: parseXliff(returned), expected, currentUnits: units }).ok).toBe(true);
+    const fromStory3 = planXliffImport({ parsed: parseXliff(returned.replace('<file id="s7"', '<file id="s3"')), expected, currentUnits: units });
+    expect(!fromStory3.ok && fromStory3.otherStory).toEqual({ attribute: 'id', value: 's3' });
+  });
+
+  it('takes a file whose tool renamed the file and dropped the original', async () => {
+    const renamed = (await exported()).replace(' original="story/7"', '').replace('<file id="s7"', '<file id="f1"');
+    expect(planXliffImport({ parsed: parseXliff(renamed), expected, currentUnits: await storyUnits() }).ok).toBe(true);
+  });
+
+  it('takes a target over its length budget with a warning for that unit', async () => {
+    const units = await storyUnits();
+    const long = 'Pourquoi '.repeat(20).trim();
+    const returned = await translatedWithLibrary(await exported(), (unitId, unit) => {
+      if (unitId === 'p42.heading.1') unit.target = [long];
+    });
+    const plan = planXliffImport({ parsed: parseXliff(returned), expected, currentUnits: units });
+    if (!plan.ok) throw new Error(`expected the import to be accepted, got ${JSON.stringify(plan.problems)}`);
+    expect(plan.updates.find((update) => update.unitId === 'p42.heading.1')?.text).toBe(long);
+    // "Why does rock slide?" is 20 characters: × 1.25 for French, × 1.4 for a short text (see length-budget.ts).
+    expect(plan.warnings).toEqual([
+      { unitId: 'p42.heading.1', kind: 'heading', panelNumber: 1, length: long.length, budget: 35, message: `Unit p42.heading.1 is ${long.length} characters long, ${long.length - 35} over its budget of 35: the text may not fit on the screen.` },
+    ]);
+  });
+
+  it('refuses a target longer than a translation may be stored', async () => {
+    const units = await storyUnits();
+    const returned = await translatedWithLibrary(await exported(), (unitId, unit) => {
+      if (unitId === 'p42.heading.1') unit.target = ['x'.repeat(10_001)];
+    });
+    expect(problemsOf(planXliffImport({ parsed: parseXliff(returned), expected, currentUnits: units }))).toEqual([
+      { unitId: 'p42.heading.1', message: 'The target of unit p42.heading.1 is 10001 characters long; a translation may be at most 10000.' },
+    ]);
   });
 });
 
