@@ -6,6 +6,7 @@ import { useDateFormat } from '../../components/formatting';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
 import { TextLink } from '../../components/links';
+import { publicationKind } from './publication-kind';
 
 const useStyles = makeStyles({
   content: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
@@ -15,7 +16,7 @@ const useStyles = makeStyles({
 
 /**
  * Says what goes Live and what it replaces before anything changes on a gallery's screens.
- * A Superseded release going Live again is the rollback; the wording says so.
+ * A Superseded release going Live again rolls the gallery back or moves it forward; the wording says which.
  */
 export function PublishDialog({ release, live, galleryName, onClose }: {
   release: ReleaseView;
@@ -28,14 +29,14 @@ export function PublishDialog({ release, live, galleryName, onClose }: {
   const formatDate = useDateFormat();
   const publish = usePublishRelease();
   const comparison = useReleaseComparison(live?.id, release.id);
-  const rollback = release.state === 'superseded';
+  const kind = publicationKind(release, live) ?? 'publish';
   const name = t('releases.name', { number: release.number });
-  const action = rollback ? t('releases.publish.rollBackConfirm', { name }) : t('releases.publish.confirm', { name });
+  const action = kind === 'publish' ? t('releases.publish.confirm', { name }) : t(`releases.publish.${kind}Confirm`, { name });
   return (
     <Dialog open modalType="alert" onOpenChange={(_event, data) => { if (!data.open) onClose(); }}>
       <DialogSurface>
         <DialogBody>
-          <DialogTitle>{rollback ? t('releases.publish.rollBackTitle', { name, gallery: galleryName }) : t('releases.publish.title', { name, gallery: galleryName })}</DialogTitle>
+          <DialogTitle>{kind === 'publish' ? t('releases.publish.title', { name, gallery: galleryName }) : t(`releases.publish.${kind}Title`, { name, gallery: galleryName })}</DialogTitle>
           <DialogContent className={styles.content}>
             <Text as="p">{t('releases.publish.goesLive', { name, gallery: galleryName })}</Text>
             <div>

@@ -5,6 +5,7 @@ import { useDateFormat } from '../../components/formatting';
 import { LinkButton } from '../../components/links';
 import { ReleaseStateBadge } from '../../components/releases/ReleaseStateBadge';
 import { formatBytes } from '../media/media-facts';
+import { publicationKind } from './publication-kind';
 
 const useStyles = makeStyles({
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
@@ -15,7 +16,7 @@ const useStyles = makeStyles({
   muted: { color: tokens.colorNeutralForeground3 },
 });
 
-/** Newest first. A Ready release can be published; a Superseded one is a rollback target. */
+/** Newest first. A Ready release can be published; a Superseded one can be made Live again (back or forward). */
 export function ReleasesTable({ items, live, busy, onPublish }: {
   items: ReleaseView[];
   live: ReleaseView | undefined;
@@ -42,6 +43,7 @@ export function ReleasesTable({ items, live, busy, onPublish }: {
       <TableBody>
         {items.map((release) => {
           const name = t('releases.name', { number: release.number });
+          const kind = publicationKind(release, live);
           return (
             <TableRow key={release.id} data-release-id={release.id} data-state={release.state}>
               <TableCell><span className={styles.title}>{name}</span></TableCell>
@@ -52,11 +54,10 @@ export function ReleasesTable({ items, live, busy, onPublish }: {
               <TableCell className={styles.number}>{release.state === 'building' || release.state === 'failed' ? '—' : formatBytes(release.bytes, i18n.resolvedLanguage ?? 'en')}</TableCell>
               <TableCell>
                 <span className={styles.actions}>
-                  {release.state === 'ready' ? (
-                    <Button size="small" appearance="primary" onClick={() => onPublish(release)} aria-label={t('releases.actions.publishLabel', { name })}>{t('releases.actions.publish')}</Button>
-                  ) : null}
-                  {release.state === 'superseded' ? (
-                    <Button size="small" onClick={() => onPublish(release)} aria-label={t('releases.actions.rollBackLabel', { name })}>{t('releases.actions.rollBack')}</Button>
+                  {kind ? (
+                    <Button size="small" appearance={kind === 'publish' ? 'primary' : 'secondary'} onClick={() => onPublish(release)} aria-label={t(`releases.actions.${kind}Label`, { name })}>
+                      {t(`releases.actions.${kind}`)}
+                    </Button>
                   ) : null}
                   {live && live.id !== release.id && release.state !== 'failed' && release.state !== 'building' ? (
                     <LinkButton size="small" appearance="subtle" to={`/releases/compare?a=${live.id}&b=${release.id}`} aria-label={t('releases.actions.compareLabel', { name })}>

@@ -23,6 +23,8 @@ export const releaseAr: Translated<typeof releaseEn> = {
       publishLabel: 'نشر {{name}}',
       rollBack: 'رجوع…',
       rollBackLabel: 'الرجوع إلى {{name}}',
+      goForward: 'تقدّم…',
+      goForwardLabel: 'التقدّم إلى {{name}}',
       compare: 'مقارنة بالمعروض',
       compareLabel: 'مقارنة {{name}} بالإصدار المعروض',
     },
@@ -57,6 +59,7 @@ export const releaseAr: Translated<typeof releaseEn> = {
     publish: {
       title: 'نشر {{name}} في {{gallery}}؟',
       rollBackTitle: 'إرجاع {{gallery}} إلى {{name}}؟',
+      goForwardTitle: 'تقديم {{gallery}} إلى {{name}}؟',
       goesLive: 'يصبح {{name}} معروضًا في {{gallery}}. تنزّله أكشاكها وتتحقق من كل ملف وتنتقل إليه بين زائر وآخر.',
       carries: 'يحمل {{count}} قصة:',
       carries_zero: 'لا يحمل أي قصة:',
@@ -69,6 +72,7 @@ export const releaseAr: Translated<typeof releaseEn> = {
       firstLive: 'لا إصدار معروضًا في هذه القاعة بعد: هذا أول ما تعرضه أكشاكها.',
       confirm: 'نشر {{name}}',
       rollBackConfirm: 'الرجوع إلى {{name}}',
+      goForwardConfirm: 'التقدّم إلى {{name}}',
     },
     compare: {
       title: 'مقارنة الإصدارات',

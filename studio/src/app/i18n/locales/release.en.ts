@@ -20,6 +20,8 @@ export const releaseEn = {
       publishLabel: 'Publish {{name}}',
       rollBack: 'Roll back…',
       rollBackLabel: 'Roll back to {{name}}',
+      goForward: 'Go forward…',
+      goForwardLabel: 'Go forward to {{name}}',
       compare: 'Compare with live',
       compareLabel: 'Compare {{name}} with the live release',
     },
@@ -54,6 +56,7 @@ export const releaseEn = {
     publish: {
       title: 'Publish {{name}} to {{gallery}}?',
       rollBackTitle: 'Roll {{gallery}} back to {{name}}?',
+      goForwardTitle: 'Move {{gallery}} forward to {{name}}?',
       goesLive: '{{name}} goes Live in {{gallery}}. Its kiosks download it, check every file and switch to it between visitors.',
       carries: 'It carries {{count}} stories:',
       carries_one: 'It carries {{count}} story:',
@@ -62,6 +65,7 @@ export const releaseEn = {
       firstLive: 'No release is Live in this gallery yet: this is the first its kiosks play.',
       confirm: 'Publish {{name}}',
       rollBackConfirm: 'Roll back to {{name}}',
+      goForwardConfirm: 'Go forward to {{name}}',
     },
     compare: {
       title: 'Compare releases',

@@ -23,6 +23,8 @@ export const releaseEs: Translated<typeof releaseEn> = {
       publishLabel: 'Publicar la {{name}}',
       rollBack: 'Volver…',
       rollBackLabel: 'Volver a la {{name}}',
+      goForward: 'Avanzar…',
+      goForwardLabel: 'Avanzar a la {{name}}',
       compare: 'Comparar con la de servicio',
       compareLabel: 'Comparar la {{name}} con la publicación en servicio',
     },
@@ -57,6 +59,7 @@ export const releaseEs: Translated<typeof releaseEn> = {
     publish: {
       title: '¿Publicar la {{name}} en {{gallery}}?',
       rollBackTitle: '¿Devolver {{gallery}} a la {{name}}?',
+      goForwardTitle: '¿Avanzar {{gallery}} a la {{name}}?',
       goesLive: 'La {{name}} entra en servicio en {{gallery}}. Sus quioscos la descargan, comprueban cada archivo y cambian a ella entre visitantes.',
       carries: 'Contiene {{count}} historias:',
       carries_one: 'Contiene {{count}} historia:',
@@ -65,6 +68,7 @@ export const releaseEs: Translated<typeof releaseEn> = {
       firstLive: 'Aún no hay ninguna publicación en servicio en esta sala: será la primera que muestren sus quioscos.',
       confirm: 'Publicar la {{name}}',
       rollBackConfirm: 'Volver a la {{name}}',
+      goForwardConfirm: 'Avanzar a la {{name}}',
     },
     compare: {
       title: 'Comparar publicaciones',

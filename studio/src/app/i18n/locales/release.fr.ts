@@ -22,6 +22,8 @@ export const releaseFr: typeof releaseEn = {
       publishLabel: 'Publier la {{name}}',
       rollBack: 'Revenir…',
       rollBackLabel: 'Revenir à la {{name}}',
+      goForward: 'Avancer…',
+      goForwardLabel: 'Avancer à la {{name}}',
       compare: 'Comparer à celle en service',
       compareLabel: 'Comparer la {{name}} à la version en service',
     },
@@ -56,6 +58,7 @@ export const releaseFr: typeof releaseEn = {
     publish: {
       title: 'Publier la {{name}} dans {{gallery}} ?',
       rollBackTitle: 'Ramener {{gallery}} à la {{name}} ?',
+      goForwardTitle: 'Faire avancer {{gallery}} à la {{name}} ?',
       goesLive: 'La {{name}} entre en service dans {{gallery}}. Ses bornes la téléchargent, vérifient chaque fichier et basculent entre deux visiteurs.',
       carries: 'Elle contient {{count}} récits :',
       carries_one: 'Elle contient {{count}} récit :',
@@ -64,6 +67,7 @@ export const releaseFr: typeof releaseEn = {
       firstLive: 'Aucune version n’est encore en service dans cette galerie : ce sera la première que ses bornes affichent.',
       confirm: 'Publier la {{name}}',
       rollBackConfirm: 'Revenir à la {{name}}',
+      goForwardConfirm: 'Avancer à la {{name}}',
     },
     compare: {
       title: 'Comparer des versions',
