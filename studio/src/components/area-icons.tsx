@@ -2,8 +2,8 @@ import type { FluentIcon } from '@fluentui/react-icons';
 import {
   ClipboardTaskListLtrRegular,
   DataBarVerticalRegular,
-  DesktopRegular,
   DocumentTextRegular,
+  HeartPulseRegular,
   ImageRegular,
   PeopleRegular,
   RocketRegular,
@@ -18,7 +18,8 @@ export const AREA_ICONS: Record<Area, FluentIcon> = {
   reviews: ClipboardTaskListLtrRegular,
   translations: TranslateRegular,
   releases: RocketRegular,
-  fleet: DesktopRegular,
+  // Heartbeats are what Fleet watches; a screen icon would look like Stations' own.
+  fleet: HeartPulseRegular,
   insights: DataBarVerticalRegular,
   people: PeopleRegular,
   settings: SettingsRegular,

@@ -1,5 +1,5 @@
 import { makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
-import { DesktopRegular } from '@fluentui/react-icons';
+import { TvRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { useSearchParams } from 'react-router-dom';
 import { useStations } from '../../api/settings';
@@ -34,7 +34,7 @@ export function StationsPage() {
       <div className={styles.toolbar}>
         <GalleryPicker allowAll galleries={galleries.items} value={galleryId} onChange={(id) => change({ gallery: id ? String(id) : undefined })} />
       </div>
-      <ListStates query={stations} loadError={t('stations.loadError')} empty={<EmptyState icon={<DesktopRegular />} title={t('stations.emptyTitle')}>{t('stations.emptyBody')}</EmptyState>}>
+      <ListStates query={stations} loadError={t('stations.loadError')} empty={<EmptyState icon={<TvRegular />} title={t('stations.emptyTitle')}>{t('stations.emptyBody')}</EmptyState>}>
         {(page) => (
           <>
             <Table aria-label={t('stations.title')} aria-busy={stations.isFetching} className={styles.table}>
