@@ -46,4 +46,5 @@ export const ar: WidgetStrings = {
     overlays: { streamlines: 'خطوط الانسياب', particles: 'جسيمات منجرفة', arrows: 'أسهم التدفق', none: 'بلا طبقة إضافية' },
     ramps: { magma: 'الصهارة', seafloor: 'قاع البحر', greys: 'درجات الرمادي' },
   },
+  states: { holds: 'ثابت', slides: 'ينزلق' },
 };

@@ -46,4 +46,5 @@ export const en: WidgetStrings = {
     overlays: { streamlines: 'Streamlines', particles: 'Drifting particles', arrows: 'Flow arrows', none: 'No overlay' },
     ramps: { magma: 'Magma', seafloor: 'Sea floor', greys: 'Greys' },
   },
+  states: { holds: 'holds', slides: 'slides' },
 };

@@ -46,4 +46,5 @@ export const es: WidgetStrings = {
     overlays: { streamlines: 'Líneas de corriente', particles: 'Partículas a la deriva', arrows: 'Flechas de flujo', none: 'Sin superposición' },
     ramps: { magma: 'Magma', seafloor: 'Fondo marino', greys: 'Grises' },
   },
+  states: { holds: 'se sostiene', slides: 'se desliza' },
 };

@@ -46,4 +46,5 @@ export const fr: WidgetStrings = {
     overlays: { streamlines: 'Lignes de courant', particles: 'Particules à la dérive', arrows: 'Flèches d’écoulement', none: 'Aucune surcouche' },
     ramps: { magma: 'Magma', seafloor: 'Fond marin', greys: 'Gris' },
   },
+  states: { holds: 'tient', slides: 'glisse' },
 };

@@ -45,6 +45,8 @@ export interface WidgetStrings {
     overlays: { streamlines: string; particles: string; arrows: string; none: string };
     ramps: { magma: string; seafloor: string; greys: string };
   };
+  /** A widget's state as a live value shows it inside a sentence ("the block {{state}}"), so in lower case. */
+  states: { holds: string; slides: string };
 }
 
 export interface WidgetResource {

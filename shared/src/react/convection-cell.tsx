@@ -9,6 +9,7 @@ import {
   rayleighOf,
   COLOUR_RAMPS,
   type ConvectionCellParams,
+  type ConvectionReport,
 } from '../widgets/convection-cell/index.js';
 import { drawArrows, drawParticles, drawStreamlines, paintField, rampPositions, streamlineSegments } from './convection-drawing.js';
 import type { HostFrame } from './convection-host.js';
@@ -28,12 +29,8 @@ export interface ConvectionCellProps {
   width?: number;
   /** Starting noise seed; the same seed starts the same overturn. */
   seed?: number;
-}
-
-interface Readout {
-  time: number;
-  nusselt: number;
-  vrms: number;
+  /** Told what the solver reports each time the readouts change, so live values on the panel follow it. */
+  onReport?: (report: ConvectionReport) => void;
 }
 
 /** Readouts change four times a second: often enough to follow, slow enough to read. */
@@ -52,11 +49,11 @@ const buttonStyle = { minHeight: 44, minWidth: 44, padding: '0 1em' } as const;
  * A box of mantle rock heated from below, overturning: the temperature field in one of our ramps,
  * an overlay of the flow, live Nu and Vrms. The solver runs in a Web Worker.
  */
-export function ConvectionCell({ params, locale, showCaution = false, reducedMotion, width = 480, seed }: ConvectionCellProps) {
+export function ConvectionCell({ params, locale, showCaution = false, reducedMotion, width = 480, seed, onReport }: ConvectionCellProps) {
   const strings = widgetStrings(locale).convectionCell;
   const reduce = useReducedMotion(reducedMotion);
   const [playing, setPlaying] = useState(true);
-  const [readout, setReadout] = useState<Readout>({ time: 0, nusselt: 1, vrms: 0 });
+  const [readout, setReadout] = useState<ConvectionReport>({ time: 0, nusselt: 1, vrms: 0 });
   const [failure, setFailure] = useState<string | null>(null);
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const runner = useRef<ConvectionRunner | null>(null);
@@ -120,6 +117,8 @@ export function ConvectionCell({ params, locale, showCaution = false, reducedMot
   drawRef.current = draw;
   const animatingRef = useRef(animating);
   animatingRef.current = animating;
+  const onReportRef = useRef(onReport);
+  onReportRef.current = onReport;
 
   useEffect(() => {
     const started = startConvectionRunner((message) => {
@@ -134,7 +133,9 @@ export function ConvectionCell({ params, locale, showCaution = false, reducedMot
       const now = performance.now();
       if (now - lastReadout.current >= READOUT_INTERVAL_MS || !animatingRef.current) {
         lastReadout.current = now;
-        setReadout({ time: message.time, nusselt: message.nusselt, vrms: message.vrms });
+        const report = { time: message.time, nusselt: message.nusselt, vrms: message.vrms };
+        setReadout(report);
+        onReportRef.current?.(report);
       }
       if (!animatingRef.current) drawRef.current(null);
     });

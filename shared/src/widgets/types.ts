@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import type { LiveValueUnit } from '../panel/live-value/live-value-format.js';
 
 /** One problem with a widget's params: where it is (property names from the params root) and what to do. */
 export interface WidgetIssue {
@@ -13,6 +14,45 @@ export interface ModelLimitWarning {
   path: string[];
   code: string;
   message: string;
+}
+
+/** What a running simulation reports as it goes (the convection cell's solver: time, Nu, Vrms). */
+export type SimulationReport = Readonly<Record<string, number>>;
+
+interface OutputBase<P> {
+  /** The name a live value refers to; never renamed, since stored panels point at it. */
+  name: string;
+  /** Left out where the output means nothing for these params (a speed in cm/yr without physical properties). */
+  appliesTo?: (params: P) => boolean;
+}
+
+/**
+ * A number or a state a widget puts out, which a panel's live values can show. Each widget declares
+ * its outputs once, so the studio's live-value menu, the kiosk renderer and the server's preflight
+ * agree on what exists and in which unit.
+ */
+export type WidgetOutput<P, R> = OutputBase<P> &
+  (
+    | { kind: 'number'; unit: LiveValueUnit; source: 'settings'; read: (result: R, params: P) => number }
+    /** Comes from the running simulation, so it exists only once the simulation has reported. */
+    | { kind: 'number'; unit: LiveValueUnit; source: 'simulation'; read: (report: SimulationReport, params: P) => number }
+    | { kind: 'state'; states: readonly WidgetState[]; source: 'settings'; read: (result: R, params: P) => WidgetState }
+  );
+
+/** States a widget can be in, each worded in every visitor language (widgetStrings(locale).states). */
+export const WIDGET_STATES = ['holds', 'slides'] as const;
+export type WidgetState = (typeof WIDGET_STATES)[number];
+
+/**
+ * An optional group of params (the convection cell's physical properties) as a curator switches it
+ * on or off: the whole params it leads to, so the form never opens on a page of errors, and where
+ * each starting value comes from.
+ */
+export interface WidgetParamGroup {
+  switchOn(params: Record<string, unknown>): Record<string, unknown>;
+  switchOff(params: Record<string, unknown>): Record<string, unknown>;
+  /** Field name → where its starting value comes from, shown beside the field. */
+  sources: Readonly<Record<string, string>>;
 }
 
 /**
@@ -30,4 +70,7 @@ export interface WidgetModule<P, R, T extends string = string> {
   /** A plain-language account of the current state, for screen readers and the printed label. */
   describe(params: P, locale: string): string;
   modelLimits(params: P): ModelLimitWarning[];
+  outputs: readonly WidgetOutput<P, R>[];
+  /** Optional param groups by name, for those whose empty start would not validate. */
+  paramGroups?: Readonly<Record<string, WidgetParamGroup>>;
 }

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { computeSlopeForce } from '../../widgets/index.js';
+import { computeSlopeForce, convectionCell } from '../../widgets/index.js';
 import { examplePanelDoc } from '../example-panel.js';
 import type { PanelNodeJSON } from '../panel-json.js';
 import { widgetsIn } from '../panel-queries.js';
 import { danglingLiveValues, liveValueText, readLiveValue, readPanelWidgets } from './live-value-reading.js';
-import { formatLiveValue } from './live-value-format.js';
+import { DEFAULT_LIVE_VALUE_FORMAT, formatLiveValue } from './live-value-format.js';
 
 const slopeParams = { massKg: 10, angleDeg: 30, staticFriction: 0.85, kineticFriction: 0.6 };
 
@@ -19,7 +19,24 @@ describe('live values', () => {
     const readings = readPanelWidgets(widgetsIn(examplePanelDoc()), new Map([['ridge-slope', { ...slopeParams, staticFriction: 1 }]]));
     const reading = readLiveValue({ widgetId: 'ridge-slope', output: 'criticalAngleDeg' }, readings);
     // θc = arctan μs, and arctan 1 = 45° exactly.
-    expect(reading.ok && reading.value).toBeCloseTo(45, 12);
+    expect(reading.ok && 'value' in reading && reading.value).toBeCloseTo(45, 12);
+  });
+
+  it('show a state in the visitor’s language, worded to sit inside a sentence', () => {
+    const readings = readPanelWidgets(widgetsIn(examplePanelDoc()), new Map([['ridge-slope', { ...slopeParams, angleDeg: 45 }]]));
+    const reading = readLiveValue({ widgetId: 'ridge-slope', output: 'state' }, readings);
+    expect(reading).toEqual({ ok: true, state: 'slides' });
+    expect(liveValueText(reading, DEFAULT_LIVE_VALUE_FORMAT, 'en')).toBe('slides');
+    expect(liveValueText(reading, DEFAULT_LIVE_VALUE_FORMAT, 'fr')).toBe('glisse');
+  });
+
+  it('follow what a running simulation reports, and show a dash until it has', () => {
+    const widgets = [{ widgetId: 'overturn', widgetType: 'convection-cell', params: { ...convectionCell.defaults }, path: [] }];
+    const before = readLiveValue({ widgetId: 'overturn', output: 'nusselt' }, readPanelWidgets(widgets));
+    expect(before).toEqual({ ok: false, reason: 'not-reported' });
+    expect(liveValueText(before, DEFAULT_LIVE_VALUE_FORMAT, 'en')).toBe('—');
+    const reports = new Map([['overturn', { time: 0.3, nusselt: 4.884409, vrms: 42.864947 }]]);
+    expect(readLiveValue({ widgetId: 'overturn', output: 'nusselt' }, readPanelWidgets(widgets, new Map(), reports))).toEqual({ ok: true, value: 4.884409 });
   });
 
   it('show a dash, never a number, when they cannot be computed', () => {
@@ -58,6 +75,22 @@ describe('danglingLiveValues', () => {
     const paragraph = doc.content?.[1] as PanelNodeJSON;
     (paragraph.content as PanelNodeJSON[])[5] = { type: 'liveValue', attrs: { widgetId: 'ridge-slope', output: 'rayleigh', format: { digits: 2, unit: '' } } };
     expect(danglingLiveValues(doc).map(({ reason, path }) => ({ reason, path }))).toEqual([{ reason: 'no-output', path: ['content', 1, 'content', 5] }]);
+  });
+
+  it('leaves out a simulation output that has not been reported yet: it exists, it only waits for the solver', () => {
+    const doc = { type: 'doc', content: [
+      { type: 'widget', attrs: { widgetId: 'overturn', widgetType: 'convection-cell', params: convectionCell.defaults } },
+      { type: 'paragraph', content: [{ type: 'liveValue', attrs: { widgetId: 'overturn', output: 'vrms', format: { digits: 3, unit: '' } } }] },
+    ] };
+    expect(danglingLiveValues(doc)).toEqual([]);
+  });
+
+  it('finds a speed in cm/yr on a convection cell that has no physical properties to give it', () => {
+    const doc = { type: 'doc', content: [
+      { type: 'widget', attrs: { widgetId: 'overturn', widgetType: 'convection-cell', params: convectionCell.defaults } },
+      { type: 'paragraph', content: [{ type: 'liveValue', attrs: { widgetId: 'overturn', output: 'speedCmYr', format: { digits: 3, unit: 'cm/yr' } } }] },
+    ] };
+    expect(danglingLiveValues(doc).map(({ reason }) => reason)).toEqual(['no-output']);
   });
 
   it('leaves a widget with invalid params to the params check', () => {

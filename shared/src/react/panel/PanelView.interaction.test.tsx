@@ -1,5 +1,5 @@
 // @vitest-environment jsdom
-import { cleanup, fireEvent, render, screen } from '@testing-library/react';
+import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
 import type { PanelDocJSON } from '../../panel/panel-json.js';
 import { PanelView } from './PanelView.js';
@@ -35,5 +35,22 @@ describe('PanelView under touch', () => {
     fireEvent.keyDown(screen.getByRole('slider'), { key: 'PageUp' });
     rerender(<PanelView doc={structuredClone(doc)} locale="en" resolveMedia={() => null} reducedMotion />);
     expect(container.querySelector('.mp-live-value')?.textContent).toBe('49.03\u00a0N');
+  });
+
+  it('shows the running solver’s Nu in a live value, matching the cell’s own readout, once it reports', async () => {
+    const convection: PanelDocJSON = {
+      type: 'doc',
+      content: [
+        { type: 'paragraph', content: [{ type: 'text', text: 'Heat carried: ' }, { type: 'liveValue', attrs: { widgetId: 'cell', output: 'nusselt', format: { digits: 3, unit: '' } } }] },
+        { type: 'widget', attrs: { widgetType: 'convection-cell', widgetId: 'cell', params: { rayleigh: 1e4, aspectRatio: 1, nx: 32, nz: 32, playbackSpeed: 1, colourRamp: 'mantle-heat', overlay: 'none', units: 'non-dimensional' } } },
+      ],
+    };
+    const { container } = render(<PanelView doc={convection} locale="en" resolveMedia={() => null} reducedMotion />);
+    const liveValue = () => container.querySelector('.mp-live-value')!.textContent;
+    await waitFor(() => expect(liveValue()).not.toBe('—'));
+    expect(liveValue()).toBe(container.querySelector('[data-readout="nusselt"]')!.textContent);
+    fireEvent.click(screen.getByRole('button', { name: 'Step forward' }));
+    await waitFor(() => expect(Number(liveValue())).toBeGreaterThan(1));
+    expect(liveValue()).toBe(container.querySelector('[data-readout="nusselt"]')!.textContent);
   });
 });

@@ -3,6 +3,7 @@ import { readPanelWidgets } from '../../panel/live-value/live-value-reading.js';
 import { PANEL_IMAGE_NODE, WIDGET_NODE, type PanelDocJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
 import { directionOf, PANEL_LAYOUTS, type PanelLayout, type TextDirection } from '../../panel/panel-presentation.js';
 import { widgetsIn } from '../../panel/panel-queries.js';
+import type { SimulationReport } from '../../widgets/index.js';
 import { renderPanelNode, type PanelRenderContext } from './panel-nodes.js';
 import type { ResolveMedia } from './panel-media.js';
 import { landscapeColumnStyle, panelRootStyle, WIDGET_MAX_WIDTH } from './panel-theme.js';
@@ -23,9 +24,20 @@ export interface PanelViewProps {
   onVisitorParamsChange?: (widgetId: string, params: Record<string, unknown>) => void;
 }
 
-interface VisitorParams {
+/** Something kept per widget that belongs to the document it was set on; a new panel starts without it. */
+interface PerWidget<T> {
   doc: PanelDocJSON;
-  byWidget: ReadonlyMap<string, unknown>;
+  byWidget: ReadonlyMap<string, T>;
+}
+
+function usePerWidget<T>(doc: PanelDocJSON) {
+  const [state, setState] = useState<PerWidget<T>>({ doc, byWidget: new Map() });
+  const current = state.doc === doc ? state.byWidget : new Map<string, T>();
+  const set = useCallback(
+    (widgetId: string, value: T) => setState((previous) => ({ doc, byWidget: new Map(previous.doc === doc ? previous.byWidget : []).set(widgetId, value) })),
+    [doc],
+  );
+  return [current, set] as const;
 }
 
 /**
@@ -33,17 +45,17 @@ interface VisitorParams {
  * and no raw HTML. Widgets stay live under touch, and live values follow what the visitor sets.
  */
 export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = false, highContrast = false, reducedMotion = false, resolveMedia, links = 'anchor', onVisitorParamsChange }: PanelViewProps) {
-  const [visitor, setVisitor] = useState<VisitorParams>({ doc, byWidget: new Map() });
-  // What a visitor set belongs to the document they set it on; a new panel starts from its own params.
-  const paramsById = visitor.doc === doc ? visitor.byWidget : new Map<string, unknown>();
+  const [paramsById, setVisitorParams] = usePerWidget<unknown>(doc);
+  // What each running simulation last reported, for live values of its outputs (Nu, speed, time).
+  const [reportsById, setReport] = usePerWidget<SimulationReport>(doc);
   const widgets = useMemo(() => widgetsIn(doc), [doc]);
-  const readings = useMemo(() => readPanelWidgets(widgets, paramsById), [widgets, paramsById]);
+  const readings = useMemo(() => readPanelWidgets(widgets, paramsById, reportsById), [widgets, paramsById, reportsById]);
   const onWidgetParamsChange = useCallback(
     (widgetId: string, params: Record<string, unknown>) => {
-      setVisitor((current) => ({ doc, byWidget: new Map(current.doc === doc ? current.byWidget : []).set(widgetId, params) }));
+      setVisitorParams(widgetId, params);
       onVisitorParamsChange?.(widgetId, params);
     },
-    [doc, onVisitorParamsChange],
+    [setVisitorParams, onVisitorParamsChange],
   );
 
   const { width, height } = PANEL_LAYOUTS[layout];
@@ -57,6 +69,7 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
     highContrast,
     widgetMaxWidth: WIDGET_MAX_WIDTH[layout],
     onWidgetParamsChange,
+    onWidgetReport: setReport,
   };
   return (
     <article

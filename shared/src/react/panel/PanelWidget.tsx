@@ -1,5 +1,5 @@
 import type { CSSProperties } from 'react';
-import { isWidgetType, widgetModule, type ConvectionCellParams, type SlopeForceParams, type WidgetType } from '../../widgets/index.js';
+import { isWidgetType, widgetModule, type ConvectionCellParams, type SimulationReport, type SlopeForceParams, type WidgetType } from '../../widgets/index.js';
 import { ConvectionCell } from '../convection-cell.js';
 import { SlopeForceBox } from '../slope-force-box.js';
 
@@ -14,6 +14,8 @@ export interface PanelWidgetProps {
   /** Widest the drawing may be, in CSS px at the station's full size. */
   maxWidth?: number;
   onParamsChange: (params: Record<string, unknown>) => void;
+  /** Told what a running simulation reports, for the live values that show its outputs. */
+  onReport?: (report: SimulationReport) => void;
 }
 
 const blockStyle: CSSProperties = { margin: '0.75em 0' };
@@ -25,7 +27,7 @@ interface DrawingProps extends Omit<PanelWidgetProps, 'widgetType' | 'params'> {
 }
 
 /** The shared component of each widget type, given params the registry has already accepted. */
-function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, onParamsChange }: DrawingProps) {
+function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, onParamsChange, onReport }: DrawingProps) {
   switch (widgetType) {
     case 'slope-force':
       return (
@@ -39,7 +41,9 @@ function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = fa
         />
       );
     case 'convection-cell':
-      return <ConvectionCell params={params as ConvectionCellParams} locale={locale} reducedMotion={reducedMotion} showCaution={editing} width={maxWidth} />;
+      return (
+        <ConvectionCell params={params as ConvectionCellParams} locale={locale} reducedMotion={reducedMotion} showCaution={editing} width={maxWidth} onReport={onReport} />
+      );
   }
 }
 

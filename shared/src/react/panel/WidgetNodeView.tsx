@@ -29,8 +29,9 @@ function widgetTitle(widgetType: string, locale: string): string {
 
 /** The widget block in the studio editor, drawn live by the same component the kiosk uses. */
 export function WidgetNodeView({ node, extension, selected, updateAttributes }: ReactNodeViewProps) {
-  const { locale } = extension.options as PanelEditorOptions;
+  const { locale, simulationReports } = extension.options as PanelEditorOptions;
   const widgetType = String(node.attrs.widgetType);
+  const widgetId = String(node.attrs.widgetId);
   return (
     <NodeViewWrapper className="mp-widget-node" data-selected={selected || undefined}>
       <div className="mp-widget-node-handle" data-drag-handle="" style={handleStyle}>
@@ -45,6 +46,7 @@ export function WidgetNodeView({ node, extension, selected, updateAttributes }: 
           highContrast={false}
           editing
           onParamsChange={(params) => updateAttributes({ params })}
+          onReport={(report) => simulationReports?.set(widgetId, report)}
         />
       </div>
     </NodeViewWrapper>

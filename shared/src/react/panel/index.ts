@@ -9,3 +9,4 @@ export * from './panel-editor-extensions.js';
 export { isWidgetDrawingEvent, WidgetNodeView } from './WidgetNodeView.js';
 export { LiveValueNodeView } from './LiveValueNodeView.js';
 export { PanelImageNodeView } from './PanelImageNodeView.js';
+export { SimulationReports } from './simulation-reports.js';

@@ -6,6 +6,7 @@ import { LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE } from '../../panel/pane
 import { LiveValueNodeView } from './LiveValueNodeView.js';
 import type { PanelEditorOptions } from './panel-editor-options.js';
 import { PanelImageNodeView } from './PanelImageNodeView.js';
+import { SimulationReports } from './simulation-reports.js';
 import { isWidgetDrawingEvent, WidgetNodeView } from './WidgetNodeView.js';
 
 const nodeViews: Record<string, ComponentType<ReactNodeViewProps>> = {
@@ -35,5 +36,6 @@ function withNodeView(extension: AnyExtension, options: PanelEditorOptions): Any
  * editor's schema is the server's schema.
  */
 export function panelEditorExtensions(options: PanelEditorOptions): Extensions {
-  return panelExtensions.map((extension) => withNodeView(extension, options));
+  const shared = { ...options, simulationReports: options.simulationReports ?? new SimulationReports() };
+  return panelExtensions.map((extension) => withNodeView(extension, shared));
 }

@@ -1,4 +1,5 @@
 import type { ResolveMedia } from './panel-media.js';
+import type { SimulationReports } from './simulation-reports.js';
 
 /** What the studio tells the editor's node views; the schema itself never depends on it. */
 export interface PanelEditorOptions {
@@ -6,4 +7,6 @@ export interface PanelEditorOptions {
   resolveMedia: ResolveMedia;
   /** Shown where an image's media asset cannot be found (deleted, or not yet loaded). */
   missingMediaLabel: string;
+  /** Shared by the node views of one editor; panelEditorExtensions makes one when none is given. */
+  simulationReports?: SimulationReports;
 }

@@ -3,6 +3,7 @@ import { isPanelHref } from '../../panel/panel-link/panel-href.js';
 import { DEFAULT_LIVE_VALUE_FORMAT, isLiveValueFormat } from '../../panel/live-value/live-value-format.js';
 import { liveValueText, readLiveValue, type WidgetReading } from '../../panel/live-value/live-value-reading.js';
 import { isNodeLike, isPlainObject, LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE, type PanelMarkJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
+import type { SimulationReport } from '../../widgets/index.js';
 import type { ResolveMedia } from './panel-media.js';
 import { PanelImageFigure } from './PanelImageFigure.js';
 import { PanelWidget } from './PanelWidget.js';
@@ -18,6 +19,7 @@ export interface PanelRenderContext {
   highContrast: boolean;
   widgetMaxWidth: number;
   onWidgetParamsChange: (widgetId: string, params: Record<string, unknown>) => void;
+  onWidgetReport: (widgetId: string, report: SimulationReport) => void;
 }
 
 const headingStyle: CSSProperties = { color: 'var(--mp-heading)', lineHeight: 1.15, margin: '0 0 0.4em' };
@@ -111,6 +113,7 @@ export function renderPanelNode(node: PanelNodeJSON, context: PanelRenderContext
           highContrast={context.highContrast}
           maxWidth={context.widgetMaxWidth}
           onParamsChange={(params) => context.onWidgetParamsChange(widgetId, params)}
+          onReport={(report) => context.onWidgetReport(widgetId, report)}
         />
       );
     }

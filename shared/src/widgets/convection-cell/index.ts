@@ -3,12 +3,16 @@ import type { ModelLimitWarning, WidgetModule } from '../types.js';
 import { formatLimit, validateWith, whenFieldsValid } from '../validation.js';
 import { deriveConvectionCell, type ConvectionCellDerived } from './derived.js';
 import { convectionCellDefaults, convectionCellFields, type ConvectionCellParams } from './params.js';
+import { convectionCellOutputs } from './outputs.js';
 import { checkConvectionCell } from './rules.js';
+import { physicalGroup } from './upper-mantle.js';
 
 export * from './colour-ramps.js';
 export * from './derived.js';
+export * from './outputs.js';
 export * from './params.js';
 export * from './solver.js';
+export * from './upper-mantle.js';
 
 export const convectionCellSchema = convectionCellFields.superRefine(checkConvectionCell, whenFieldsValid).meta({ title: 'Convection cell' });
 
@@ -78,4 +82,6 @@ export const convectionCell: WidgetModule<ConvectionCellParams, ConvectionCellDe
   compute: deriveConvectionCell,
   describe: describeConvectionCell,
   modelLimits: convectionCellLimits,
+  outputs: convectionCellOutputs,
+  paramGroups: { physical: physicalGroup },
 };

@@ -2,10 +2,12 @@ import { interpolate, widgetStrings } from '../../i18n/index.js';
 import type { ModelLimitWarning, WidgetModule } from '../types.js';
 import { validateWith } from '../validation.js';
 import { computeSlopeForce, type SlopeForceResult } from './compute.js';
+import { slopeForceOutputs } from './outputs.js';
 import { slopeForceDefaults, slopeForceSchema, type SlopeForceParams } from './params.js';
 import { formatAcceleration, formatAngle, formatForce, formatMass } from './units.js';
 
 export { computeSlopeForce, criticalAngleDeg, type SlopeForceResult } from './compute.js';
+export * from './outputs.js';
 export * from './params.js';
 export * from './units.js';
 
@@ -56,4 +58,5 @@ export const slopeForce: WidgetModule<SlopeForceParams, SlopeForceResult, 'slope
   compute: computeSlopeForce,
   describe: describeSlopeForce,
   modelLimits: slopeForceLimits,
+  outputs: slopeForceOutputs,
 };

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { criticalAngleDeg, MAX_FRICTION, slopeForce, STANDARD_GRAVITY } from './index.js';
+import { widgetOutputChoices } from '../../panel/live-value/live-value-reading.js';
+import { criticalAngleDeg, MAX_FRICTION, slopeForce, slopeForceDefaults, STANDARD_GRAVITY } from './index.js';
 
 // Standard gravity g0 = 9.80665 m/s² (3rd CGPM, 1901). Relations: W = m·g, N = W·cos θ, S = W·sin θ,
 // holds while S ≤ μs·N, θc = arctan μs, sliding a = g·(sin θ − μk·cos θ) (textbook inclined plane).
@@ -219,5 +220,33 @@ describe('slope force box: model limits', () => {
     expect(slopeForce.modelLimits({ ...base, staticFriction: 1.5 }).map((warning) => warning.code)).toEqual(['beyond-rock-friction']);
     expect(slopeForce.modelLimits({ ...base, staticFriction: 0 }).map((warning) => warning.code)).toEqual(['frictionless']);
     expect(slopeForce.modelLimits({ ...base, staticFriction: 0.85 })).toEqual([]);
+  });
+});
+
+describe('slope force box outputs', () => {
+  const choices = (params: unknown) => widgetOutputChoices('slope-force', params) ?? [];
+
+  it('offer the forces in N, the state, the critical angle in degrees and the acceleration', () => {
+    expect(choices(slopeForceDefaults).map(({ name, kind, unit }) => [name, kind, unit])).toEqual([
+      ['weightN', 'number', 'N'],
+      ['normalN', 'number', 'N'],
+      ['shearN', 'number', 'N'],
+      ['maxStaticFrictionN', 'number', 'N'],
+      ['frictionN', 'number', 'N'],
+      ['netForceN', 'number', 'N'],
+      ['state', 'state', ''],
+      ['criticalAngleDeg', 'number', '°'],
+      ['accelerationMs2', 'number', 'm/s²'],
+    ]);
+  });
+
+  it('say the block holds below arctan μs and slides above it (arctan 0.85 ≈ 40.36°)', () => {
+    const state = (angleDeg: number) => choices({ ...slopeForceDefaults, angleDeg }).find((choice) => choice.name === 'state')?.value;
+    expect(state(40)).toBe('holds');
+    expect(state(41)).toBe('slides');
+  });
+
+  it('give the shear as W·sin θ by hand: 10 kg × 9.80665 m/s² × sin 30° = 49.03325 N (g0 from the 3rd CGPM, 1901)', () => {
+    expect(choices(slopeForceDefaults).find((choice) => choice.name === 'shearN')?.value).toBeCloseTo(49.03325, 10);
   });
 });

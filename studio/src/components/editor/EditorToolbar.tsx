@@ -6,12 +6,11 @@ import {
   TextHeader2Regular, TextHeader3Regular, TextItalicRegular, TextNumberListLtrRegular, TextQuoteRegular, BeakerAddRegular,
 } from '@fluentui/react-icons';
 import { useEditorState, type Editor } from '@tiptap/react';
-import { formatLiveValue, PANEL_HEADING_LEVELS, WIDGET_TYPES, widgetRegistry, widgetsIn, type WidgetType } from '@mantlepiece/shared';
+import { liveValueText, PANEL_HEADING_LEVELS, WIDGET_TYPES, widgetOutputChoices, widgetRegistry, widgetsIn, type WidgetOutputChoice, type WidgetType } from '@mantlepiece/shared';
 import type { ReactElement } from 'react';
 import { useTranslation } from 'react-i18next';
 import { insertionChain } from './insert-point';
 import { useLiveValueLabel } from './live-value-labels';
-import { numericOutputs, unitOfOutput } from '../widget-params/widget-form';
 
 const HEADING_ICONS: Record<(typeof PANEL_HEADING_LEVELS)[number], ReactElement> = { 2: <TextHeader2Regular />, 3: <TextHeader3Regular /> };
 
@@ -46,6 +45,12 @@ export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Edi
   const chain = () => editor.chain().focus();
   const insertWidget = (type: WidgetType) => insertionChain(editor).insertWidget({ widgetType: type, params: { ...widgetRegistry[type].defaults } }).run();
   const locale = i18n.resolvedLanguage ?? 'en';
+  // What the menu shows beside an output: its value now, or, for one the running simulation reports, its unit and "live".
+  const preview = (choice: WidgetOutputChoice) => {
+    if (choice.source === 'simulation') return [t('editor.liveFromSimulation'), choice.unit].filter(Boolean).join(' · ');
+    const reading = typeof choice.value === 'number' ? { ok: true as const, value: choice.value } : { ok: true as const, state: choice.value! };
+    return liveValueText(reading, { digits: 4, unit: choice.unit }, locale);
+  };
 
   const toggle = (name: string, value: string, label: string, icon: ReactElement, run: () => void) => (
     <Tooltip content={label} relationship="label" withArrow>
@@ -86,13 +91,13 @@ export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Edi
         <MenuPopover>
           <MenuList>
             {state.widgets.flatMap((widget, index) =>
-              numericOutputs(widget.widgetType, widget.params).map(({ output, value }) => (
+              (widgetOutputChoices(widget.widgetType, widget.params) ?? []).map((choice) => (
                 <MenuItem
-                  key={`${widget.widgetId}.${output}`}
-                  secondaryContent={formatLiveValue(value, { digits: 4, unit: unitOfOutput(output) }, locale)}
-                  onClick={() => insertionChain(editor).insertLiveValue({ widgetId: widget.widgetId, output, format: { digits: 3, unit: unitOfOutput(output) } }).run()}
+                  key={`${widget.widgetId}.${choice.name}`}
+                  secondaryContent={preview(choice)}
+                  onClick={() => insertionChain(editor).insertLiveValue({ widgetId: widget.widgetId, output: choice.name, format: { digits: 3, unit: choice.unit } }).run()}
                 >
-                  {outputLabel(output)}
+                  {outputLabel(choice.name)}
                   {state.widgets.length > 1 ? ` · ${t(`widgetTypes.${widget.widgetType as WidgetType}`)} ${index + 1}` : ''}
                 </MenuItem>
               )),

@@ -1,16 +1,16 @@
 import { useState } from 'react';
 import { describe, expect, it } from 'vitest';
 import { fireEvent, screen } from '@testing-library/react';
-import { slopeForce } from '@mantlepiece/shared';
+import { convectionCell, slopeForce, type WidgetType } from '@mantlepiece/shared';
 import { renderInStudio } from '../../test-utils';
 import { WidgetParamsForm } from './WidgetParamsForm';
 
 let latest: Record<string, unknown> = {};
 
-function Harness({ start }: { start: Record<string, unknown> }) {
+function Harness({ start, widgetType = 'slope-force' }: { start: Record<string, unknown>; widgetType?: WidgetType }) {
   const [params, setParams] = useState(start);
   latest = params;
-  return <WidgetParamsForm widgetType="slope-force" params={params} onChange={setParams} />;
+  return <WidgetParamsForm widgetType={widgetType} params={params} onChange={setParams} />;
 }
 
 const describedText = (input: HTMLElement) =>
@@ -31,5 +31,17 @@ describe('the widget params form', () => {
     fireEvent.change(kinetic, { target: { value: '0.7' } });
     expect(kinetic.getAttribute('aria-invalid')).toBe('true');
     expect(describedText(kinetic)).toMatch(/cannot be more than static friction/);
+  });
+
+  it('starts a convection cell switched to physical properties from typical upper-mantle values, each with its source, and no errors', async () => {
+    await renderInStudio(<Harness widgetType="convection-cell" start={{ ...convectionCell.defaults }} />);
+    fireEvent.click(screen.getByRole('switch', { name: 'Set these' }));
+    expect(convectionCell.validate(latest).ok).toBe(true);
+    expect(latest).toMatchObject({ physical: { densityKgM3: 3300, viscosityPas: 1e21 }, units: 'physical' });
+    expect(latest.rayleigh).toBeUndefined();
+    expect(document.querySelectorAll('[aria-invalid="true"]')).toHaveLength(0);
+    const viscosity = screen.getByRole('textbox', { name: /^Viscosity/ });
+    expect(describedText(viscosity)).toMatch(/common practice, no source/);
+    expect(describedText(screen.getByRole('textbox', { name: /^Density/ }))).toMatch(/Turcotte and Schubert, Geodynamics/);
   });
 });

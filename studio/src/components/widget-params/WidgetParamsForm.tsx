@@ -44,15 +44,20 @@ export function WidgetParamsForm({ widgetType, params, onChange }: { widgetType:
     return typed !== undefined && parseFieldText(typed, field) === stored ? typed : stored === undefined ? '' : String(stored);
   };
   const toggleGroup = (path: string[], on: boolean) => {
+    const group = module.paramGroups?.[path.join('.')];
+    if (group) return onChange(on ? group.switchOn(params) : group.switchOff(params));
     const defaults = valueAt(module.defaults as Params, path);
     onChange(withValueAt(params, path, on ? (defaults ?? {}) : undefined));
   };
+  const sourceOf = (field: WidgetFormField) => module.paramGroups?.[field.path.slice(0, -1).join('.')]?.sources[field.path.at(-1) ?? ''];
 
   const input = (field: WidgetFormField) => {
     const key = field.path.join('.');
     const message = issues.get(key)?.join(' ');
+    const source = sourceOf(field);
+    const hint = message ? undefined : [rangeHint(field), source && t('editor.widget.startingValue', { source })].filter(Boolean).join(' · ');
     return (
-      <Field key={key} label={field.label} required={field.required} hint={message ? undefined : rangeHint(field)} validationMessage={message}>
+      <Field key={key} label={field.label} required={field.required} hint={hint || undefined} validationMessage={message}>
         {field.kind === 'choice' ? (
           <Select value={shownText(field)} onChange={(_event, data) => setField(field, data.value)}>
             {field.required ? null : <option value="">{t('editor.widget.notSet')}</option>}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { slopeForce, widgetJsonSchema } from '@mantlepiece/shared';
-import { issuesByField, numericOutputs, parseFieldText, unitOfOutput, widgetFormGroups, withValueAt } from './widget-form';
+import { issuesByField, parseFieldText, widgetFormGroups, withValueAt } from './widget-form';
 
 describe('the widget side form', () => {
   it('has one input per setting of the slope force box, with label, unit and range from its JSON Schema', () => {
@@ -33,15 +33,5 @@ describe('the widget side form', () => {
     expect(checked.ok).toBe(false);
     const byField = issuesByField(checked.ok ? [] : checked.errors);
     expect(byField.get('kineticFriction')?.[0]).toMatch(/cannot be more than static friction/);
-  });
-
-  it('lists the slope force box’s critical angle among its outputs, in degrees', () => {
-    const outputs = numericOutputs('slope-force', slopeForce.defaults);
-    // θc = arctan μs = arctan 0.85 ≈ 40.36° (inclined plane, brief).
-    expect(outputs.find((entry) => entry.output === 'criticalAngleDeg')?.value).toBeCloseTo(40.36, 2);
-    expect(unitOfOutput('criticalAngleDeg')).toBe('°');
-    expect(unitOfOutput('accelerationMs2')).toBe('m/s²');
-    expect(unitOfOutput('weightN')).toBe('N');
-    expect(unitOfOutput('rayleigh')).toBe('');
   });
 });

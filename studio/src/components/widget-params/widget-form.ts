@@ -1,4 +1,4 @@
-import { LIVE_VALUE_UNITS, readWidget, type LiveValueUnit, type WidgetIssue } from '@mantlepiece/shared';
+import type { WidgetIssue } from '@mantlepiece/shared';
 
 /** One input of a widget's side form, read from the JSON Schema the widget registry publishes. */
 export interface WidgetFormField {
@@ -99,29 +99,4 @@ export function issuesByField(issues: readonly WidgetIssue[]): Map<string, strin
     byField.set(key, [...(byField.get(key) ?? []), issue.message]);
   }
   return byField;
-}
-
-/** A widget's numeric outputs with their values, for the live-value menu. */
-export function numericOutputs(widgetType: string, params: unknown): { output: string; value: number }[] {
-  const reading = readWidget(widgetType, params);
-  if (!reading.ok) return [];
-  return Object.entries(reading.outputs).flatMap(([output, value]) =>
-    typeof value === 'number' && Number.isFinite(value) && /^[A-Za-z][A-Za-z0-9_]{0,63}$/.test(output) ? [{ output, value }] : [],
-  );
-}
-
-/** The unit an output is computed in, read from the suffix the widgets name their outputs with. */
-export function unitOfOutput(output: string): LiveValueUnit {
-  const suffixes: [RegExp, LiveValueUnit][] = [
-    [/Deg$/, '°'],
-    [/Ms2$/, 'm/s²'],
-    [/N$/, 'N'],
-    [/CmYr$/, 'cm/yr'],
-    [/Myr$/, 'Myr'],
-    [/Km$/, 'km'],
-    [/M$/, 'm'],
-    [/Kg$/, 'kg'],
-  ];
-  const unit = suffixes.find(([pattern]) => pattern.test(output))?.[1] ?? '';
-  return (LIVE_VALUE_UNITS as readonly string[]).includes(unit) ? unit : '';
 }

@@ -86,6 +86,7 @@ export const authoringAr: Translated<typeof authoringEn> = {
     image: 'صورة',
     widgetMenu: 'أداة',
     liveValueMenu: 'قيمة محسوبة',
+    liveFromSimulation: 'مباشر',
     undo: 'تراجع',
     redo: 'إعادة',
     missingImage: 'لم تعد هذه الصورة في مكتبة الوسائط.',
@@ -111,6 +112,11 @@ export const authoringAr: Translated<typeof authoringEn> = {
       rayleigh: 'عدد رايلي',
       onsetRayleigh: 'عدد رايلي لبدء الحمل (هذا الصندوق)',
       onsetRayleighInfiniteLayer: 'عدد رايلي لبدء الحمل (طبقة واسعة)',
+      state: 'ثابت أو ينزلق',
+      nusselt: 'الحرارة المنقولة (Nu)، من المحاكاة الجارية',
+      vrms: 'السرعة النموذجية (Vrms)، من المحاكاة الجارية',
+      speedCmYr: 'السرعة النموذجية بالسنتيمتر في السنة، من المحاكاة الجارية',
+      elapsedMyr: 'الزمن المنقضي بملايين السنين، من المحاكاة الجارية',
     },
     save: {
       saved: 'حُفظت كل التغييرات',
@@ -152,6 +158,7 @@ export const authoringAr: Translated<typeof authoringEn> = {
       notSet: 'غير محدد',
       optional: 'اختياري',
       useGroup: 'تحديد هذه',
+      startingValue: 'القيمة الابتدائية: {{source}}',
     },
     preview: {
       title: 'معاينة',

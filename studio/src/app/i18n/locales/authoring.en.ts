@@ -79,6 +79,7 @@ export const authoringEn = {
     image: 'Image',
     widgetMenu: 'Widget',
     liveValueMenu: 'Live value',
+    liveFromSimulation: 'live',
     undo: 'Undo',
     redo: 'Redo',
     missingImage: 'This image is not in the media library any more.',
@@ -104,6 +105,11 @@ export const authoringEn = {
       rayleigh: 'Rayleigh number',
       onsetRayleigh: 'Rayleigh number for onset (this box)',
       onsetRayleighInfiniteLayer: 'Rayleigh number for onset (wide layer)',
+      state: 'Holds or slides',
+      nusselt: 'Heat carried (Nu), from the running simulation',
+      vrms: 'Typical speed (Vrms), from the running simulation',
+      speedCmYr: 'Typical speed in cm per year, from the running simulation',
+      elapsedMyr: 'Time run in million years, from the running simulation',
     },
     save: {
       saved: 'All changes saved',
@@ -141,6 +147,7 @@ export const authoringEn = {
       notSet: 'Not set',
       optional: 'optional',
       useGroup: 'Set these',
+      startingValue: 'Starting value: {{source}}',
     },
     preview: {
       title: 'Preview',

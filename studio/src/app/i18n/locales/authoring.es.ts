@@ -82,6 +82,7 @@ export const authoringEs: Translated<typeof authoringEn> = {
     image: 'Imagen',
     widgetMenu: 'Widget',
     liveValueMenu: 'Valor calculado',
+    liveFromSimulation: 'en vivo',
     undo: 'Deshacer',
     redo: 'Rehacer',
     missingImage: 'Esta imagen ya no está en la mediateca.',
@@ -107,6 +108,11 @@ export const authoringEs: Translated<typeof authoringEn> = {
       rayleigh: 'Número de Rayleigh',
       onsetRayleigh: 'Número de Rayleigh de inicio (esta caja)',
       onsetRayleighInfiniteLayer: 'Número de Rayleigh de inicio (capa ancha)',
+      state: 'Se sostiene o se desliza',
+      nusselt: 'Calor transportado (Nu), de la simulación en marcha',
+      vrms: 'Velocidad típica (Vrms), de la simulación en marcha',
+      speedCmYr: 'Velocidad típica en cm por año, de la simulación en marcha',
+      elapsedMyr: 'Tiempo transcurrido en millones de años, de la simulación en marcha',
     },
     save: {
       saved: 'Todos los cambios guardados',
@@ -144,6 +150,7 @@ export const authoringEs: Translated<typeof authoringEn> = {
       notSet: 'Sin definir',
       optional: 'opcional',
       useGroup: 'Definir estos',
+      startingValue: 'Valor inicial: {{source}}',
     },
     preview: {
       title: 'Vista previa',

@@ -81,6 +81,7 @@ export const authoringFr: typeof authoringEn = {
     image: 'Image',
     widgetMenu: 'Widget',
     liveValueMenu: 'Valeur calculée',
+    liveFromSimulation: 'en direct',
     undo: 'Annuler',
     redo: 'Rétablir',
     missingImage: 'Cette image n’est plus dans la médiathèque.',
@@ -106,6 +107,11 @@ export const authoringFr: typeof authoringEn = {
       rayleigh: 'Nombre de Rayleigh',
       onsetRayleigh: 'Nombre de Rayleigh critique (cette boîte)',
       onsetRayleighInfiniteLayer: 'Nombre de Rayleigh critique (couche étendue)',
+      state: 'Tient ou glisse',
+      nusselt: 'Chaleur transportée (Nu), de la simulation en cours',
+      vrms: 'Vitesse typique (Vrms), de la simulation en cours',
+      speedCmYr: 'Vitesse typique en cm par an, de la simulation en cours',
+      elapsedMyr: 'Temps écoulé en millions d’années, de la simulation en cours',
     },
     save: {
       saved: 'Toutes les modifications sont enregistrées',
@@ -143,6 +149,7 @@ export const authoringFr: typeof authoringEn = {
       notSet: 'Non défini',
       optional: 'facultatif',
       useGroup: 'Définir ces valeurs',
+      startingValue: 'Valeur de départ : {{source}}',
     },
     preview: {
       title: 'Aperçu',

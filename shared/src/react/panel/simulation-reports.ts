@@ -1,0 +1,23 @@
+import type { SimulationReport } from '../../widgets/index.js';
+
+/**
+ * What each widget's running simulation last reported, within one editor. The widget's node view
+ * writes it and the live values' node views read it, so a live value of Nu follows the drawing
+ * beside it as it does on a kiosk.
+ */
+export class SimulationReports {
+  private readonly byWidget = new Map<string, SimulationReport>();
+  private readonly listeners = new Set<() => void>();
+
+  get = (widgetId: string): SimulationReport | undefined => this.byWidget.get(widgetId);
+
+  set(widgetId: string, report: SimulationReport): void {
+    this.byWidget.set(widgetId, report);
+    for (const listener of this.listeners) listener();
+  }
+
+  subscribe = (listener: () => void): (() => void) => {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  };
+}
