@@ -167,7 +167,17 @@ describe('the media library', () => {
     await eventually(() => page.getByRole('link', { name: new RegExp(title) }).count()).toBeGreaterThan(0);
     await page.getByRole('textbox', { name: 'Credit line' }).fill('Drawing: Basalt Point Earth Science Centre');
     await page.getByRole('radio', { name: 'An open licence (SPDX identifier)' }).check();
-    await page.getByRole('combobox', { name: 'SPDX identifier' }).fill('CC-BY-4.0');
+    const spdx = page.getByRole('combobox', { name: 'SPDX identifier' });
+    // An incomplete identifier is refused by the server, and its message stands at the SPDX box, which is outlined.
+    await spdx.fill('CC-BY');
+    await page.getByRole('button', { name: 'Save' }).click();
+    await eventually(() => spdx.getAttribute('aria-invalid')).toBe('true');
+    const describedBy = (await spdx.getAttribute('aria-describedby')) ?? '';
+    expect(await page.locator(describedBy.split(' ').map((id) => `#${id}`).join(', ')).allTextContents()).toContainEqual(expect.stringContaining('SPDX licence identifier'));
+    // Typing offers the common licences that match.
+    await spdx.fill('CC-BY-S');
+    await eventually(() => page.getByRole('option', { name: 'CC-BY-SA-4.0' }).count()).toBe(1);
+    await spdx.fill('CC-BY-4.0');
     await page.getByRole('button', { name: 'Save' }).click();
     await eventually(() => page.getByText('Saved.').count()).toBe(1);
   });

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import {
-  Button, Field, Input, makeStyles, Radio, RadioGroup, Spinner, Text, Textarea, tokens,
+  Button, Combobox, Field, Input, makeStyles, Option, Radio, RadioGroup, Spinner, Text, Textarea, tokens,
 } from '@fluentui/react-components';
 import type { MediaView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
@@ -86,6 +86,9 @@ function AssetDetails({ asset }: { asset: MediaView }) {
     if (!hasProblems(found)) update.mutate(assetChanges(values), { onSuccess: (next) => { setValues(assetValues(next)); setSaved(true); } });
   };
   const message = (field: (typeof ASSET_FIELDS)[number]) => serverFieldMessage(update.error, field);
+  // The server judges the licence as a whole; its message belongs at the box the curator filled in.
+  const licenceMessage = message('licence');
+  const spdxSuggestions = COMMON_SPDX_IMAGE_LICENCES.filter((id) => id.toLowerCase().includes(values.spdxId.trim().toLowerCase()));
   const unplaced = update.error && !ASSET_FIELDS.some((field) => message(field)) ? describeError(t, update.error) : null;
   const deleteProblem = remove.error instanceof ApiError && remove.error.status === 409 ? t('asset.inUse') : remove.error ? describeError(t, remove.error) : null;
 
@@ -143,7 +146,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
             <Field label={t('asset.credit')} hint={t('asset.creditHint')} validationMessage={message('credit')}>
               <Input value={values.credit} readOnly={!writer} onChange={(_event, data) => set({ credit: data.value })} />
             </Field>
-            <Field label={t('asset.licence')} validationMessage={message('licence')}>
+            <Field label={t('asset.licence')} validationMessage={values.licenceKind === 'none' ? licenceMessage : undefined}>
               <RadioGroup value={values.licenceKind} disabled={!writer} onChange={(_event, data) => set({ licenceKind: data.value as AssetValues['licenceKind'] })}>
                 <Radio value="spdx" label={t('asset.licenceSpdx')} />
                 <Radio value="all-rights-reserved" label={t('asset.licenceReserved')} />
@@ -151,15 +154,21 @@ function AssetDetails({ asset }: { asset: MediaView }) {
               </RadioGroup>
             </Field>
             {values.licenceKind === 'spdx' ? (
-              <Field label={t('asset.spdxId')} hint={t('asset.spdxHint')} required validationMessage={problems.spdxId}>
-                <Input value={values.spdxId} readOnly={!writer} list="spdx-licences" onChange={(_event, data) => set({ spdxId: data.value })} />
+              <Field label={t('asset.spdxId')} hint={t('asset.spdxHint')} required validationMessage={problems.spdxId ?? licenceMessage}>
+                <Combobox
+                  freeform
+                  disabled={!writer}
+                  value={values.spdxId}
+                  selectedOptions={[values.spdxId]}
+                  onChange={(event) => set({ spdxId: event.target.value })}
+                  onOptionSelect={(_event, data) => set({ spdxId: data.optionValue ?? '' })}
+                >
+                  {spdxSuggestions.map((id) => <Option key={id}>{id}</Option>)}
+                </Combobox>
               </Field>
             ) : null}
-            <datalist id="spdx-licences">
-              {COMMON_SPDX_IMAGE_LICENCES.map((licence) => <option key={licence} value={licence} />)}
-            </datalist>
             {values.licenceKind === 'all-rights-reserved' ? (
-              <Field label={t('asset.holder')} required validationMessage={problems.holder}>
+              <Field label={t('asset.holder')} required validationMessage={problems.holder ?? licenceMessage}>
                 <Input value={values.holder} readOnly={!writer} onChange={(_event, data) => set({ holder: data.value })} />
               </Field>
             ) : null}
