@@ -48,6 +48,24 @@ function secrets(dataDir) {
   return wanted;
 }
 
+/**
+ * Media lived in the checkout (`media/store`) before it moved into the data folder: a data folder
+ * from then gets its images back on its next start. Never for a throwaway test data folder.
+ */
+function adoptCheckoutMedia(dataDir) {
+  const legacy = path.join(root, 'media/store');
+  const target = path.join(dataDir, 'media');
+  if (process.env.MEDIA_DIR || !fs.existsSync(legacy) || fs.existsSync(target)) return;
+  phase('media', `moving ${legacy} to ${target}`);
+  try {
+    fs.renameSync(legacy, target);
+  } catch (error) {
+    if (error.code !== 'EXDEV') throw error;
+    fs.cpSync(legacy, target, { recursive: true });
+    fs.rmSync(legacy, { recursive: true, force: true });
+  }
+}
+
 /** A build is skipped when its output is newer than every source file it comes from. */
 function upToDate(output, sources) {
   if (!fs.existsSync(output)) return false;
@@ -89,6 +107,7 @@ export async function startStack(options) {
       databaseUrls = provisionDatabase({ dataDir, socket: db.socket, port: dbPort, databases: ['mantlepiece', ...extraDatabases] });
     }
 
+    if (nodeEnv !== 'test') adoptCheckoutMedia(dataDir);
     const mailDir = path.resolve(dataDir, 'mail');
     const dataSecrets = secrets(dataDir);
     const env = {
@@ -102,7 +121,6 @@ export async function startStack(options) {
       SMTP_HOST: '127.0.0.1',
       SMTP_PORT: String(smtpPort),
       MAIL_DIR: mailDir,
-      MEDIA_DIR: process.env.MEDIA_DIR ?? path.join(root, 'media/store'),
       JWT_SECRET: process.env.JWT_SECRET ?? dataSecrets.jwtSecret,
       SIGNING_KEY_SECRET: process.env.SIGNING_KEY_SECRET ?? dataSecrets.signingKeySecret,
       DEMO_PASSWORD: demoPassword,

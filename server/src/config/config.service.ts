@@ -35,8 +35,10 @@ export class ConfigService {
   readonly kioskDist = process.env.KIOSK_DIST;
   readonly demoPassword = process.env.DEMO_PASSWORD ?? 'mantlepiece-demo';
 
-  /** Uploaded images and their renditions, content-addressed; git-ignored. */
-  readonly mediaDir = path.resolve(process.env.MEDIA_DIR ?? 'media/store');
+  /** Everything this installation keeps (MariaDB's files, media, releases, mail, secrets); `npm start` sets it. */
+  readonly dataDir = path.resolve(process.env.DATA_DIR ?? '.data');
+  /** Uploaded images, their renditions and release files, content-addressed: in the data folder, so its backup has them. */
+  readonly mediaDir = path.resolve(process.env.MEDIA_DIR ?? path.join(this.dataDir, 'media'));
   readonly mediaMaxBytes = intFromEnv('MEDIA_MAX_BYTES', 25 * 1024 * 1024);
   /** Width × height above which an upload is refused before it is decoded (decompression bombs). */
   readonly mediaMaxPixels = intFromEnv('MEDIA_MAX_PIXELS', 100_000_000);

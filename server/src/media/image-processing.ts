@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { HttpStatus, Injectable, UnprocessableEntityException, UnsupportedMediaTypeException } from '@nestjs/common';
-import sharp from 'sharp';
+import sharp, { type Sharp } from 'sharp';
 import { ConfigService } from '../config/config.service.js';
 
 /** Widths of the WebP renditions a kiosk picks from (srcset); never wider than the original. */
@@ -54,6 +54,8 @@ export interface ProcessedImage {
   /** As a visitor sees it: after the EXIF orientation is applied. */
   width: number;
   height: number;
+  /** The original as it is kept: upright, in its own format, without EXIF, XMP or IPTC. */
+  original: Buffer;
   renditions: Rendition[];
   placeholder: string;
 }
@@ -62,6 +64,25 @@ const sha256Of = (data: Buffer) => createHash('sha256').update(data).digest('hex
 
 const unsupported = (filename: string) =>
   new UnsupportedMediaTypeException(`${filename} is not an image Mantlepiece accepts; upload ${ACCEPTED} (SVG is not accepted).`);
+
+/** A 422 about the upload's `file` field, the file named in the message. */
+const unprocessable = (message: string) =>
+  new UnprocessableEntityException({ statusCode: HttpStatus.UNPROCESSABLE_ENTITY, message, errors: [{ path: ['file'], message }] });
+
+/**
+ * Re-encodes the original in its own format with nothing but its pixels and colour profile: sharp
+ * writes no EXIF, XMP or IPTC unless asked, so a camera's GPS position, serial number and owner
+ * never reach the disk, while renditions made again later lose no colour. JPEG, WebP and AVIF are
+ * encoded at a quality well above the renditions', so the kept original stays the best copy.
+ */
+function encodeOriginal(image: Sharp, kind: ImageKind): Promise<Buffer> {
+  const kept = image.keepIccProfile();
+  if (kind === 'jpeg') return kept.jpeg({ quality: 95, chromaSubsampling: '4:4:4' }).toBuffer();
+  if (kind === 'png') return kept.png().toBuffer();
+  if (kind === 'webp') return kept.webp({ quality: 95 }).toBuffer();
+  if (kind === 'avif') return kept.avif({ quality: 80 }).toBuffer();
+  return kept.tiff({ compression: 'lzw' }).toBuffer();
+}
 
 @Injectable()
 export class ImageProcessing {
@@ -76,19 +97,26 @@ export class ImageProcessing {
     if (!metadata || metadata.format !== SHARP_FORMATS[kind] || (kind === 'avif' && metadata.compression !== 'av1')) throw unsupported(filename);
     const pixels = metadata.width * metadata.height;
     if (pixels > this.config.mediaMaxPixels) {
-      throw new UnprocessableEntityException({
-        statusCode: HttpStatus.UNPROCESSABLE_ENTITY,
-        message: `${filename} is ${metadata.width} × ${metadata.height} pixels; the limit is ${(this.config.mediaMaxPixels / 1e6).toLocaleString('en')} megapixels.`,
-      });
+      throw unprocessable(`${filename} is ${metadata.width} × ${metadata.height} pixels; the limit is ${(this.config.mediaMaxPixels / 1e6).toLocaleString('en')} megapixels.`);
     }
     return { kind, sha256: sha256Of(bytes) };
   }
 
   /**
-   * Auto-orients and writes the renditions. sharp drops EXIF, XMP and IPTC unless asked to keep
-   * them (we never ask), so no GPS position or camera detail reaches a rendition.
+   * Decodes the whole image: auto-orients it, makes the original to keep (see `encodeOriginal`),
+   * the renditions and the placeholder, none of them carrying EXIF, XMP or IPTC. A file whose
+   * header reads but whose pixels do not (truncated, corrupt) is refused with 422.
    */
-  async process(bytes: Buffer): Promise<ProcessedImage> {
+  async process(bytes: Buffer, filename: string, kind: ImageKind): Promise<ProcessedImage> {
+    try {
+      return await this.decode(bytes, kind);
+    } catch {
+      // sharp's message names libvips internals; the person uploading needs the file's name.
+      throw unprocessable(`Could not read this image: ${filename} is damaged or incomplete. Save or export it again, then upload it.`);
+    }
+  }
+
+  private async decode(bytes: Buffer, kind: ImageKind): Promise<ProcessedImage> {
     // Each output decodes the original again: libvips streams it and shrinks on load, which
     // keeps memory far below holding a 100-megapixel bitmap.
     const oriented = sharp(bytes, { limitInputPixels: this.config.mediaMaxPixels, failOn: 'error' }).rotate();
@@ -105,6 +133,7 @@ export class ImageProcessing {
       }),
     );
     const tiny = await oriented.clone().resize({ width: PLACEHOLDER_WIDTH }).blur(1).webp({ quality: 40 }).toBuffer();
-    return { width: autoOrient.width, height: autoOrient.height, renditions, placeholder: `data:image/webp;base64,${tiny.toString('base64')}` };
+    const original = await encodeOriginal(oriented.clone(), kind);
+    return { width: autoOrient.width, height: autoOrient.height, original, renditions, placeholder: `data:image/webp;base64,${tiny.toString('base64')}` };
   }
 }

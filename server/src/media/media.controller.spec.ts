@@ -6,9 +6,12 @@ import { crc32 } from 'node:zlib';
 import exifr from 'exifr';
 import sharp, { type Sharp } from 'sharp';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { getModelToken } from '@nestjs/sequelize';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { signedInAs } from '../../test/authoring-fixtures.js';
 import { createTestApp, type TestApp } from '../../test/test-app.js';
+import { MediaAsset } from './models/media-asset.model.js';
+import { MediaRendition } from './models/media-rendition.model.js';
 
 const MAX_BYTES = 400_000;
 const MAX_PIXELS = 4_000_000;
@@ -35,6 +38,22 @@ const upload = (...files: [Buffer, string][]) => {
   for (const [data, name] of files) req.attach('file', data, name);
   return req;
 };
+
+const storedOriginal = (sha256: string) => path.join(mediaDir, 'originals', sha256);
+
+/** Every file under the media folder, to show a refused upload stored nothing. */
+const storedFiles = () => (fs.existsSync(mediaDir) ? fs.readdirSync(mediaDir, { recursive: true, withFileTypes: true }).filter((entry) => entry.isFile()).length : 0);
+const assetCount = () => t.app.get<typeof MediaAsset>(getModelToken(MediaAsset)).count();
+
+/**
+ * What exifr finds of EXIF (camera, GPS, interoperability, thumbnail), XMP and IPTC; a colour
+ * profile (ICC) and the format's own header (JFIF, PNG's IHDR) carry nothing about who or where.
+ */
+const personalMetadata = (data: Buffer) =>
+  exifr.parse(data, { tiff: true, ifd0: {}, ifd1: true, exif: true, gps: true, interop: true, xmp: true, iptc: true, icc: false, jfif: false, ihdr: false });
+
+/** The first half of an image: its header reads, its pixels end early. */
+const truncated = (data: Buffer) => data.subarray(0, Math.floor(data.length / 2));
 
 /** The chunks of a WebP (RIFF) file by their four-letter ids. */
 function webpChunks(data: Buffer): Map<string, Buffer> {
@@ -74,7 +93,9 @@ describe('POST /api/media', () => {
     const res = await upload([data, `photo.${extension === 'png' ? 'jpg' : 'png'}`]);
     expect(res.status).toBe(201);
     const [asset] = res.body;
-    expect(asset).toMatchObject({ mime, width: 1000, height: 750, bytes: data.length, credit: null, licence: null, alt: {}, usedIn: [] });
+    expect(asset).toMatchObject({ mime, width: 1000, height: 750, credit: null, licence: null, alt: {}, usedIn: [] });
+    // The size of the original as kept, re-encoded without metadata (see the EXIF tests below).
+    expect(asset.bytes).toBe(fs.statSync(storedOriginal(asset.sha256)).size);
     expect(asset.renditions).toEqual([
       { width: 640, url: `/media/${asset.sha256}/640.webp` },
       { width: 1000, url: `/media/${asset.sha256}/1000.webp` },
@@ -111,6 +132,30 @@ describe('POST /api/media', () => {
     }
   });
 
+  it('stores the original upright and without metadata: a JPEG carrying GPS is kept with no EXIF, GPS, XMP or IPTC on disk', async () => {
+    const data = await picture(400, 200).jpeg().withExif(GPS_EXIF).withMetadata({ orientation: 6 }).toBuffer();
+    // exifr, a reader independent of sharp, sees the camera and the position in what was uploaded.
+    expect(await personalMetadata(data)).toMatchObject({ Make: 'Suite Camera', latitude: expect.closeTo(64.133, 2) });
+
+    const [asset] = (await upload([data, 'field-trip-original.jpg'])).body;
+    const stored = fs.readFileSync(storedOriginal(asset.sha256));
+    expect(await personalMetadata(stored)).toBeUndefined();
+    expect(await exifr.gps(stored)).toBeUndefined();
+    const metadata = await sharp(stored).metadata();
+    expect({ format: metadata.format, width: metadata.width, height: metadata.height, orientation: metadata.orientation, exif: metadata.exif, xmp: metadata.xmp, iptc: metadata.iptc })
+      .toEqual({ format: 'jpeg', width: 200, height: 400, orientation: undefined, exif: undefined, xmp: undefined, iptc: undefined });
+    expect(asset).toMatchObject({ mime: 'image/jpeg', width: 200, height: 400, bytes: stored.length });
+  });
+
+  it('keeps a PNG original without its EXIF too', async () => {
+    const data = await picture(300, 200).png().withExif(GPS_EXIF).toBuffer();
+    expect(await exifr.gps(data)).toMatchObject({ latitude: expect.closeTo(64.133, 2) });
+    const [asset] = (await upload([data, 'field-trip.png'])).body;
+    const stored = fs.readFileSync(storedOriginal(asset.sha256));
+    expect(await personalMetadata(stored)).toBeUndefined();
+    expect((await sharp(stored).metadata()).exif).toBeUndefined();
+  });
+
   it('stores the same upload once and answers with the asset already there', async () => {
     const data = await picture(300, 200).png().toBuffer();
     const first = await upload([data, 'first-name.png']);
@@ -124,6 +169,51 @@ describe('POST /api/media', () => {
     const res = await upload([await picture(100, 100).png().toBuffer(), 'one.png'], [await picture(120, 100).jpeg().toBuffer(), 'two.jpg']);
     expect(res.status).toBe(201);
     expect(res.body.map((asset: { filename: string }) => asset.filename)).toEqual(['one.png', 'two.jpg']);
+  });
+
+  it.each([
+    ['PNG', (s: Sharp) => s.png()],
+    ['JPEG', (s: Sharp) => s.jpeg()],
+  ])('refuses a truncated %s whose header is valid with 422 "could not read this image", naming the file, and stores nothing', async (label, encode) => {
+    const whole = await encode(sharp(randomBytes(200 * 150 * 3), { raw: { width: 200, height: 150, channels: 3 } })).toBuffer();
+    const cut = truncated(whole);
+    expect(await sharp(cut).metadata()).toMatchObject({ width: 200, height: 150 });
+    const [files, assets] = [storedFiles(), await assetCount()];
+    const res = await upload([cut, `cut-short.${label.toLowerCase()}`]);
+    const message = `Could not read this image: cut-short.${label.toLowerCase()} is damaged or incomplete. Save or export it again, then upload it.`;
+    expect({ status: res.status, body: res.body }).toEqual({ status: 422, body: { statusCode: 422, message, errors: [{ path: ['file'], message }] } });
+    expect([storedFiles(), await assetCount()]).toEqual([files, assets]);
+  });
+
+  it('takes an upload of several files all or nothing: a bad second file refuses the first too', async () => {
+    const good = await picture(120, 90).png().toBuffer();
+    const bad = truncated(await sharp(randomBytes(200 * 150 * 3), { raw: { width: 200, height: 150, channels: 3 } }).png().toBuffer());
+    const [files, assets] = [storedFiles(), await assetCount()];
+    const res = await upload([good, 'good.png'], [bad, 'bad.png']);
+    expect(res.status).toBe(422);
+    expect(res.body.message).toMatch(/^Could not read this image: bad\.png/);
+    expect([storedFiles(), await assetCount()]).toEqual([files, assets]);
+    // The good file alone is taken.
+    expect((await upload([good, 'good.png'])).status).toBe(201);
+  });
+
+  it('takes back the files it wrote when recording the rows fails, leaving no row and no file', async () => {
+    const renditions = t.app.get<typeof MediaRendition>(getModelToken(MediaRendition));
+    const bulkCreate = renditions.bulkCreate.bind(renditions);
+    let calls = 0;
+    const spy = vi.spyOn(renditions, 'bulkCreate').mockImplementation(((...args: Parameters<typeof bulkCreate>) => {
+      calls += 1;
+      return calls === 2 ? Promise.reject(new Error('the database went away')) : bulkCreate(...args);
+    }) as typeof renditions.bulkCreate);
+    try {
+      const [files, assets] = [storedFiles(), await assetCount()];
+      const res = await upload([await picture(100, 80).png().toBuffer(), 'first.png'], [await picture(90, 80).png().toBuffer(), 'second.png']);
+      expect(res.status).toBe(500);
+      expect(calls).toBe(2);
+      expect([storedFiles(), await assetCount()]).toEqual([files, assets]);
+    } finally {
+      spy.mockRestore();
+    }
   });
 
   it('refuses a text file renamed .jpg with 415', async () => {

@@ -13,7 +13,7 @@ import { Panel } from '../panels/models/panel.model.js';
 import { Story } from '../stories/models/story.model.js';
 import type { User } from '../users/models/user.model.js';
 import type { ListMediaQuery, UpdateMediaDto } from './dto/media.dto.js';
-import { ImageProcessing, MIME_TYPES, type InspectedImage } from './image-processing.js';
+import { ImageProcessing, MIME_TYPES, type ImageKind, type InspectedImage, type ProcessedImage } from './image-processing.js';
 import { toMediaView } from './media.presenter.js';
 import { MEDIA_STORE, originalKey, renditionKey, type MediaStore } from './media-store.js';
 import { MediaAltText } from './models/media-alt-text.model.js';
@@ -25,6 +25,14 @@ const DAY_MS = 86_400_000;
 export interface UploadedFile {
   originalname: string;
   buffer: Buffer;
+}
+
+/** An image of an upload that the library does not have yet, decoded and ready to store. */
+interface NewImage {
+  sha256: string;
+  kind: ImageKind;
+  filename: string;
+  processed: ProcessedImage;
 }
 
 /** Multer reads the name in a multipart header as Latin-1; browsers send UTF-8. Path parts and control characters go. */
@@ -48,16 +56,36 @@ export class MediaService {
     private readonly sequelize: Sequelize,
   ) {}
 
-  /** Every file is checked before any is stored, so a refused upload leaves nothing behind. */
+  /**
+   * All or nothing: every file is checked and every new image decoded before any is stored, so a
+   * refused upload leaves nothing behind; the rows go in one transaction, and a failure there
+   * takes back the files this upload wrote. Stored once per content: the same bytes uploaded
+   * again give the asset that exists.
+   */
   async upload(uploader: User | null, files: UploadedFile[]): Promise<MediaView[]> {
     if (!files?.length) {
       throw invalidField(['file'], 'Choose at least one image to upload.');
     }
+    const named = files.map((file) => ({ buffer: file.buffer, filename: filenameOf(file) }));
     const inspected: InspectedImage[] = [];
-    for (const file of files) inspected.push(await this.images.inspect(file.buffer, filenameOf(file)));
-    const ids: number[] = [];
-    for (const [index, file] of files.entries()) ids.push(await this.storeImage(uploader, file, inspected[index]!));
-    return this.viewsOf(ids);
+    for (const file of named) inspected.push(await this.images.inspect(file.buffer, file.filename));
+    const known = await this.idsOf(inspected.map((image) => image.sha256));
+    const fresh = new Map<string, NewImage>();
+    for (const [index, { kind, sha256 }] of inspected.entries()) {
+      if (known.has(sha256) || fresh.has(sha256)) continue;
+      const { buffer, filename } = named[index]!;
+      fresh.set(sha256, { sha256, kind, filename, processed: await this.images.process(buffer, filename, kind) });
+    }
+    const images = [...fresh.values()];
+    const written = await this.writeFiles(images);
+    let created: Map<string, number>;
+    try {
+      created = await this.recordAssets(uploader, images);
+    } catch (error) {
+      await this.removeUnclaimed(written);
+      throw error;
+    }
+    return this.viewsOf(inspected.map(({ sha256 }) => known.get(sha256) ?? created.get(sha256)!));
   }
 
   /** The Media library: searched, filtered, sorted and paged by the database. */
@@ -125,46 +153,87 @@ export class MediaService {
     for (const key of [originalKey(asset.sha256), ...asset.keys]) await this.store.remove(key);
   }
 
-  /** Stored once per content: the same bytes uploaded again return the asset that exists. */
-  private async storeImage(uploader: User | null, file: UploadedFile, { kind, sha256 }: InspectedImage): Promise<number> {
-    const existing = await this.assets.findOne({ where: { sha256 }, attributes: ['id'] });
-    if (existing) return existing.id;
-    const processed = await this.images.process(file.buffer);
-    await this.store.put(originalKey(sha256), file.buffer);
-    for (const rendition of processed.renditions) await this.store.put(renditionKey(sha256, rendition.width), rendition.data);
+  /** Asset ids by content hash, for the hashes the library has. */
+  private async idsOf(sha256s: string[], transaction?: Transaction): Promise<Map<string, number>> {
+    if (sha256s.length === 0) return new Map();
+    const rows = await this.assets.findAll({ where: { sha256: [...new Set(sha256s)] }, attributes: ['id', 'sha256'], transaction });
+    return new Map(rows.map((row) => [row.sha256, row.id]));
+  }
+
+  /** Writes each image's original and renditions; returns the keys it wrote that were not there before. */
+  private async writeFiles(images: NewImage[]): Promise<{ sha256: string; key: string }[]> {
+    const written: { sha256: string; key: string }[] = [];
     try {
-      return await this.sequelize.transaction(async (transaction) => {
-        const asset = await this.assets.create(
-          {
-            sha256,
-            originalFilename: filenameOf(file),
-            mime: MIME_TYPES[kind],
-            width: processed.width,
-            height: processed.height,
-            bytes: file.buffer.length,
-            placeholder: processed.placeholder,
-            uploadedById: uploader?.id ?? null,
-          },
-          { transaction },
-        );
-        await this.renditions.bulkCreate(
-          processed.renditions.map((rendition) => ({
-            mediaAssetId: asset.id,
-            width: rendition.width,
-            height: rendition.height,
-            sha256: rendition.sha256,
-            storeKey: renditionKey(sha256, rendition.width),
-            bytes: rendition.data.length,
-          })),
-          { transaction },
-        );
-        return asset.id;
-      });
+      for (const { sha256, processed } of images) {
+        const files = [
+          { key: originalKey(sha256), data: processed.original },
+          ...processed.renditions.map((rendition) => ({ key: renditionKey(sha256, rendition.width), data: rendition.data })),
+        ];
+        for (const { key, data } of files) {
+          const existed = await this.store.exists(key);
+          await this.store.put(key, data);
+          if (!existed) written.push({ sha256, key });
+        }
+      }
     } catch (error) {
-      // The same file uploaded twice at once: the first row stands and both uploads get it.
-      if (error instanceof UniqueConstraintError) return (await this.assets.findOne({ where: { sha256 }, attributes: ['id'] }))!.id;
+      await this.removeUnclaimed(written);
       throw error;
     }
+    return written;
+  }
+
+  /**
+   * The asset and rendition rows of every new image, in one transaction. The same file uploaded
+   * twice at once: the first upload's row stands, and the second, on its unique-key error, takes it.
+   */
+  private async recordAssets(uploader: User | null, images: NewImage[]): Promise<Map<string, number>> {
+    if (images.length === 0) return new Map();
+    const record = () => this.sequelize.transaction((transaction) => this.createAssets(uploader, images, transaction));
+    try {
+      return await record();
+    } catch (error) {
+      if (error instanceof UniqueConstraintError) return record();
+      throw error;
+    }
+  }
+
+  private async createAssets(uploader: User | null, images: NewImage[], transaction: Transaction): Promise<Map<string, number>> {
+    const ids = await this.idsOf(images.map((image) => image.sha256), transaction);
+    for (const { sha256, kind, filename, processed } of images) {
+      if (ids.has(sha256)) continue;
+      const asset = await this.assets.create(
+        {
+          sha256,
+          originalFilename: filename,
+          mime: MIME_TYPES[kind],
+          width: processed.width,
+          height: processed.height,
+          bytes: processed.original.length,
+          placeholder: processed.placeholder,
+          uploadedById: uploader?.id ?? null,
+        },
+        { transaction },
+      );
+      await this.renditions.bulkCreate(
+        processed.renditions.map((rendition) => ({
+          mediaAssetId: asset.id,
+          width: rendition.width,
+          height: rendition.height,
+          sha256: rendition.sha256,
+          storeKey: renditionKey(sha256, rendition.width),
+          bytes: rendition.data.length,
+        })),
+        { transaction },
+      );
+      ids.set(sha256, asset.id);
+    }
+    return ids;
+  }
+
+  /** After a failed upload: removes the files it wrote, except those of an asset that a simultaneous upload of the same image recorded. */
+  private async removeUnclaimed(written: { sha256: string; key: string }[]): Promise<void> {
+    const claimed = await this.idsOf(written.map((file) => file.sha256));
+    for (const { sha256, key } of written) if (!claimed.has(sha256)) await this.store.remove(key);
   }
 
   private async setAltTexts(mediaAssetId: number, alt: Record<string, string>, transaction: Transaction): Promise<void> {
