@@ -1,4 +1,5 @@
 export * from './auth/roles.js';
+export * from './auth/passwords.js';
 export type * from './auth/views.js';
 export * from './widgets/index.js';
 export * from './i18n/index.js';
@@ -6,6 +7,7 @@ export * from './panel/index.js';
 export * from './authoring/views.js';
 export * from './release/index.js';
 export * from './review/index.js';
+export * from './colour/colour.js';
 export * from './preflight/index.js';
 export * from './translation/index.js';
 export * from './fleet/index.js';

@@ -1,5 +1,5 @@
 import { PANEL_COLOURS } from '../react/panel/panel-theme.js';
-import { contrastRatio, WCAG_AA_CONTRAST } from './contrast.js';
+import { contrastRatio, WCAG_AA_CONTRAST } from '../colour/colour.js';
 import type { PreflightRule } from './types.js';
 
 /** A panel colour scheme: its surface and the colour of each kind of text drawn on it. */

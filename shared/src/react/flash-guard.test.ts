@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { COLOUR_RAMP_NAMES, relativeLuminance, rampLookupTable } from '../widgets/convection-cell/colour-ramps.js';
+import { relativeLuminance } from '../colour/colour.js';
+import { COLOUR_RAMP_NAMES, rampLookupTable } from '../widgets/convection-cell/colour-ramps.js';
 import { FlashGuard } from './flash-guard.js';
 
 /** Counts flashes as WCAG 2.2 defines them: pairs of opposing luminance changes of at least 0.1. */

@@ -1,4 +1,4 @@
-import { relativeLuminance } from '../widgets/convection-cell/colour-ramps.js';
+import { relativeLuminance } from '../colour/colour.js';
 
 /**
  * Keeps the drawn temperature field under WCAG 2.2 success criterion 2.3.1 (no more than three

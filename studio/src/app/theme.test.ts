@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { contrastRatio, relativeLuminance } from './contrast';
+import { contrastRatio, parseHexColour, relativeLuminance } from '@mantlepiece/shared';
 import { header, magma, mantlepieceTheme as theme, sediment } from './theme';
 
 // WCAG 2.2 §1.4.3 Contrast (Minimum): text needs at least 4.5:1 against its background.
@@ -12,7 +12,7 @@ describe('contrast ratio (WCAG 2.2 definition)', () => {
   });
 
   it('matches the luminance of mid grey #777777 from the sRGB formula (about 0.184)', () => {
-    expect(relativeLuminance('#777777')).toBeCloseTo(0.1845, 3);
+    expect(relativeLuminance(parseHexColour('#777777'))).toBeCloseTo(0.1845, 3);
   });
 });
 

@@ -1,3 +1,5 @@
+import { parseHexColour } from '../../colour/colour.js';
+
 /**
  * Our own sequential colour ramps for temperature fields, cold to hot. Each rises steadily in CIE
  * lightness (L*) from stop to stop, so the order of temperatures reads from lightness alone, which
@@ -16,34 +18,12 @@ export const COLOUR_RAMPS = {
 export type ColourRampName = keyof typeof COLOUR_RAMPS;
 export const COLOUR_RAMP_NAMES = Object.keys(COLOUR_RAMPS) as [ColourRampName, ...ColourRampName[]];
 
-export type Rgb = [number, number, number];
-
-export function hexToRgb(hex: string): Rgb {
-  const value = Number.parseInt(hex.slice(1), 16);
-  return [(value >> 16) & 0xff, (value >> 8) & 0xff, value & 0xff];
-}
-
-/** Relative luminance of an sRGB colour (the sRGB transfer curve, IEC 61966-2-1; the same Y as WCAG 2.2 uses). */
-export function relativeLuminance([r, g, b]: Rgb): number {
-  const linear = (channel: number) => {
-    const c = channel / 255;
-    return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
-  };
-  return 0.2126 * linear(r) + 0.7152 * linear(g) + 0.0722 * linear(b);
-}
-
-/** CIE 1976 L* (D65) of an sRGB colour, from its relative luminance. */
-export function lightness(rgb: Rgb): number {
-  const y = relativeLuminance(rgb);
-  return y > 216 / 24389 ? 116 * Math.cbrt(y) - 16 : (24389 / 27) * y;
-}
-
 /**
  * A lookup table (RGB triples) for drawing, interpolated between stops in encoded sRGB; the test
  * checks that every entry of the table, not only the stops, rises in lightness.
  */
 export function rampLookupTable(name: ColourRampName, size = 256): Uint8ClampedArray {
-  const stops = COLOUR_RAMPS[name].map(hexToRgb);
+  const stops = COLOUR_RAMPS[name].map(parseHexColour);
   const table = new Uint8ClampedArray(size * 3);
   for (let i = 0; i < size; i += 1) {
     const position = (i / (size - 1)) * (stops.length - 1);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { contrastRatio, parseHexColour, WCAG_AA_CONTRAST } from './contrast.js';
+import { contrastRatio, parseHexColour, WCAG_AA_CONTRAST } from './colour.js';
 
 // Relative luminance and contrast ratio as WCAG 2.2 defines them (Understanding SC 1.4.3; glossary "relative luminance").
 describe('WCAG 2.2 contrast', () => {
