@@ -24,7 +24,10 @@ export async function approvedGallery(t: TestApp, label: string, { fallbackToSou
   return { admin, venue, gallery, exhibit, curator, educator, technician, imageId, story, revisionId: revision };
 }
 
+/** Submits the story and approves the revision; an approved story is revised first, as a curator would. */
 export async function approve(t: TestApp, curator: Headers, educator: Headers, storyId: number): Promise<number> {
+  const { state } = expectStatus(await request(t.http).get(`/api/stories/${storyId}`).set(curator), 200, 'story').body;
+  if (state === 'approved') expectStatus(await request(t.http).post(`/api/stories/${storyId}/revise`).set(curator), 200, 'revise');
   const { revisionId } = await submit(t, curator, storyId);
   expectStatus(await verdict(t, educator, revisionId, { verdict: 'approve' }), 201, 'approval');
   return revisionId;

@@ -89,8 +89,11 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'PUT /api/stories/:id/translations/:locale/xliff': TRANSLATOR,
 
   'POST /api/stories/:id/submit': CURATOR,
+  'POST /api/stories/:id/withdraw': CURATOR,
+  'POST /api/stories/:id/revise': CURATOR,
   'POST /api/stories/:id/retire': ['curator', 'admin'],
   'GET /api/stories/:id/revisions': STAFF,
+  'GET /api/stories/:id/preflight': STAFF,
   'GET /api/revisions/:id': STAFF,
   'GET /api/revisions/:id/compare': STAFF,
   'GET /api/reviews/queue': EDUCATOR,

@@ -26,6 +26,8 @@ export type AuditAction =
   | 'revision.submitted'
   | 'revision.approved'
   | 'revision.changes-requested'
+  | 'revision.withdrawn'
+  | 'story.revised'
   | 'story.retired'
   | 'release.requested'
   | 'release.published'

@@ -28,7 +28,7 @@ describe('comments on a revision', () => {
     expect(root.body).toEqual({
       id: expect.any(Number), revisionId, panelId: panelIds[0], range: { from: 0, to: 8, quote: 'Hot rock' }, body: 'How hot?',
       author: { id: educator.person.id, name: 'Grace Mensah' }, parentId: null, resolvedAt: null, resolvedBy: null,
-      createdAt: expect.any(String), carriedFromRevisionId: null,
+      createdAt: expect.any(String), carriedFromRevisionId: null, anchorChanged: null,
     });
     const reply = await comment(curator, revisionId, { parentId: root.body.id, body: 'About 1300 °C at the base.' });
     expect(reply.body).toMatchObject({ parentId: root.body.id, panelId: panelIds[0], range: null });

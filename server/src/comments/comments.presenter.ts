@@ -15,4 +15,5 @@ export const toCommentView = (comment: Comment): CommentView => ({
   resolvedBy: personRef(comment.resolvedBy),
   createdAt: comment.createdAt.toISOString(),
   carriedFromRevisionId: comment.carriedFromRevisionId,
+  anchorChanged: comment.anchorChanged ?? null,
 });

@@ -2,7 +2,7 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import type { CommentView } from '@mantlepiece/shared';
+import { carryAnchor, panelText, type CommentView } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import { invalidField } from '../common/validation.js';
 import { NotificationsService } from '../notifications/notifications.service.js';
@@ -63,6 +63,7 @@ export class CommentsService {
         authorId: author.id,
         parentId: parent?.id ?? null,
         carriedFromRevisionId: null,
+        anchorChanged: null,
       }, { transaction });
       await this.notifyParentAuthor(parent, author, revision, dto.body, transaction);
       return this.view(comment.id, transaction);
@@ -80,22 +81,28 @@ export class CommentsService {
 
   /**
    * Copies the unresolved comments of `from` onto its successor `to`, wherever their panel is still
-   * in the story (story-wide comments always), replies with the thread they belong to.
+   * in the story (story-wide comments always), replies with the thread they belong to. A range
+   * follows its quoted words into the new text and says whether they are gone.
    */
   async carryOver(from: Revision, to: Revision, transaction: Transaction): Promise<void> {
-    const panels = new Set(to.snapshot.panels.map((panel) => panel.id));
+    const { sourceLocale } = to.snapshot.story;
+    const texts = new Map(to.snapshot.panels.map((panel) => [panel.id, panelText(panel.docs[sourceLocale], { locale: sourceLocale })]));
     const open = await this.comments.findAll({ where: { revisionId: from.id, resolvedAt: null }, order: [['id', 'ASC']], transaction });
     const copies = new Map<number, number>();
     for (const comment of open) {
-      if (comment.panelId !== null && !panels.has(comment.panelId)) continue;
+      if (comment.panelId !== null && !texts.has(comment.panelId)) continue;
       const parentId = comment.parentId === null ? null : copies.get(comment.parentId);
       if (parentId === undefined) continue;
+      const anchor = comment.panelId !== null && comment.rangeFrom !== null && comment.rangeTo !== null
+        ? carryAnchor({ from: comment.rangeFrom, to: comment.rangeTo, quote: comment.rangeQuote ?? '' }, texts.get(comment.panelId)!)
+        : null;
       const copy = await this.comments.create({
         revisionId: to.id,
         panelId: comment.panelId,
-        rangeFrom: comment.rangeFrom,
-        rangeTo: comment.rangeTo,
+        rangeFrom: anchor?.range.from ?? comment.rangeFrom,
+        rangeTo: anchor?.range.to ?? comment.rangeTo,
         rangeQuote: comment.rangeQuote,
+        anchorChanged: anchor?.changed ?? null,
         body: comment.body,
         authorId: comment.authorId,
         parentId,

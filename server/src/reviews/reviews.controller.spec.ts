@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role, StoryState } from '@mantlepiece/shared';
+import { paragraphDoc } from '../../test/authoring-fixtures.js';
 import { createReviewApp, member, reviewVenue, storyWithPanels, submit, verdict, type Headers } from '../../test/review-fixtures.js';
 import type { TestApp } from '../../test/test-app.js';
 
@@ -34,12 +35,12 @@ async function storyIn(state: StoryState): Promise<{ storyId: number; revisionId
   return { storyId, revisionId };
 }
 
-type Action = 'submit' | 'approve' | 'request_changes' | 'retire';
+type Action = 'submit' | 'withdraw' | 'approve' | 'request_changes' | 'revise' | 'retire';
 
 function act(action: Action, role: Role, story: { storyId: number; revisionId: number | null }) {
   const auth = callers[role];
   if (action === 'submit') return request(t.http).post(`/api/stories/${story.storyId}/submit`).set(auth);
-  if (action === 'retire') return request(t.http).post(`/api/stories/${story.storyId}/retire`).set(auth);
+  if (action === 'retire' || action === 'withdraw' || action === 'revise') return request(t.http).post(`/api/stories/${story.storyId}/${action}`).set(auth);
   return verdict(t, auth, story.revisionId!, action === 'approve' ? { verdict: 'approve' } : { verdict: 'request_changes', note: 'Shorter sentences, please.' });
 }
 
@@ -54,7 +55,11 @@ const only = (allowed: Partial<Record<Role, number>>): Record<Role, number> =>
 const TABLE: [StoryState, Action, Record<Role, number>, StoryState | null][] = [
   ['draft', 'submit', only({ curator: 201 }), 'in_review'],
   ['draft', 'retire', only({ curator: 409, admin: 409 }), null],
+  ['draft', 'withdraw', only({ curator: 409 }), null],
+  ['draft', 'revise', only({ curator: 409 }), null],
   ['in_review', 'submit', only({ curator: 201 }), 'in_review'],
+  ['in_review', 'withdraw', only({ curator: 200 }), 'draft'],
+  ['in_review', 'revise', only({ curator: 409 }), null],
   ['in_review', 'approve', only({ educator: 201 }), 'approved'],
   ['in_review', 'request_changes', only({ educator: 201 }), 'changes_requested'],
   ['in_review', 'retire', only({ curator: 409, admin: 409 }), null],
@@ -62,7 +67,10 @@ const TABLE: [StoryState, Action, Record<Role, number>, StoryState | null][] = [
   ['changes_requested', 'approve', only({ educator: 409 }), null],
   ['changes_requested', 'request_changes', only({ educator: 409 }), null],
   ['changes_requested', 'retire', only({ curator: 409, admin: 409 }), null],
-  ['approved', 'submit', only({ curator: 201 }), 'in_review'],
+  ['changes_requested', 'withdraw', only({ curator: 409 }), null],
+  ['approved', 'submit', only({ curator: 409 }), null],
+  ['approved', 'withdraw', only({ curator: 409 }), null],
+  ['approved', 'revise', only({ curator: 200 }), 'draft'],
   ['approved', 'approve', only({ educator: 409 }), null],
   ['approved', 'request_changes', only({ educator: 409 }), null],
   ['approved', 'retire', only({ curator: 200, admin: 200 }), 'retired'],
@@ -70,6 +78,7 @@ const TABLE: [StoryState, Action, Record<Role, number>, StoryState | null][] = [
   ['retired', 'approve', only({ educator: 409 }), null],
   ['retired', 'request_changes', only({ educator: 409 }), null],
   ['retired', 'retire', only({ curator: 409, admin: 409 }), null],
+  ['retired', 'revise', only({ curator: 409 }), null],
 ];
 
 describe('the story workflow through the API', () => {
@@ -160,7 +169,7 @@ describe('GET /api/reviews/queue', () => {
     const ids: number[] = [];
     for (const suffix of ['a', 'b', 'c']) {
       const story = await request(t.http).post('/api/stories').set(callers.curator).send({ title: `${marker} ${suffix}`, exhibitId });
-      await request(t.http).post(`/api/stories/${story.body.id}/panels`).set(callers.curator).send({});
+      await request(t.http).post(`/api/stories/${story.body.id}/panels`).set(callers.curator).send({ doc: paragraphDoc('Plates move a few centimetres a year.') });
       ids.push((await submit(t, callers.curator, story.body.id)).revisionId);
     }
     await verdict(t, approver, ids[2]!, { verdict: 'approve' });

@@ -4,7 +4,7 @@ import { Op, type Order, type OrderItem, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
   decide, preflightBlockers, revisionHash, STORY_STATE_LABELS,
-  type Page, type ReviewQueueItem, type StoryState, type StoryView, type SubmitResult, type VerdictResult, type WorkflowRequest,
+  type Page, type ReviewQueueItem, type RevisionState, type StoryState, type StoryView, type SubmitRequest, type SubmitResult, type VerdictResult, type WorkflowRequest,
 } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
 import { Clock } from '../clock/clock.service.js';
@@ -30,7 +30,9 @@ const REQUIRED_APPROVALS_COLUMN = Sequelize.literal(
     '(SELECT `required_approvals` FROM `venues` ORDER BY `id` LIMIT 1), 1)',
 );
 
-const REVISION_STATE_WORDS = { open: 'open', approved: 'approved', changes_requested: 'closed with changes requested', superseded: 'superseded by a newer submission' } as const;
+const REVISION_STATE_WORDS: Readonly<Record<RevisionState, string>> = {
+  open: 'open', approved: 'approved', changes_requested: 'closed with changes requested', superseded: 'superseded by a newer submission', withdrawn: 'withdrawn by its curator',
+};
 
 @Injectable()
 export class ReviewsService {
@@ -49,16 +51,20 @@ export class ReviewsService {
   ) {}
 
   /**
-   * Freezes the story as a new revision with its preflight, supersedes the open one, carries the
-   * unresolved comments forward and tells the educators. The draft stays editable.
+   * Freezes the story as a new revision with its preflight and the curator's note, supersedes the
+   * open one, carries the unresolved comments forward and tells the educators. Refused while
+   * preflight finds blockers, so educators only see work that could be approved; warnings go
+   * along with the revision.
    */
-  async submitForReview(storyId: number, curator: User): Promise<SubmitResult> {
+  async submitForReview(storyId: number, curator: User, request: SubmitRequest = {}): Promise<SubmitResult> {
     return this.sequelize.transaction(async (transaction) => {
       const story = await this.lockStory(storyId, transaction);
       const state = this.allow({ state: story.state, action: 'submit', actor: curator, revision: null });
       const snapshot = await this.revisions.snapshotOf(story, transaction);
       if (snapshot.panels.length === 0) throw new ConflictException('This story has no panels yet; add one before submitting it for review.');
       const preflight = await this.revisions.preflightOf(snapshot, story, transaction);
+      const blockers = preflightBlockers(preflight);
+      if (blockers.length > 0) throw blockedByPreflight(blockers, 'submission');
 
       const previous = await this.revisionRows.findOne({ where: { storyId }, order: [['number', 'DESC']], transaction });
       if (previous?.state === 'open') await previous.update({ state: 'superseded' }, { transaction });
@@ -69,10 +75,11 @@ export class ReviewsService {
         state: 'open',
         snapshot,
         preflight,
-        blockerCount: preflightBlockers(preflight).length,
+        blockerCount: blockers.length,
         warningCount: preflight.filter((entry) => entry.severity === 'warning' && !entry.passed).length,
         submittedById: curator.id,
         submittedAt: this.clock.now(),
+        note: request.note?.trim() || null,
       }, { transaction });
       if (previous) await this.comments.carryOver(previous, revision, transaction);
       await story.update({ state }, { transaction });
@@ -115,7 +122,7 @@ export class ReviewsService {
       });
       if (dto.verdict === 'approve') {
         const blockers = preflightBlockers(revision.preflight);
-        if (blockers.length > 0) throw blockedByPreflight(blockers);
+        if (blockers.length > 0) throw blockedByPreflight(blockers, 'approval');
       }
 
       const review = await this.reviews.create({ revisionId, reviewerId: educator.id, verdict: dto.verdict, note, createdAt: this.clock.now() }, { transaction });
@@ -131,6 +138,46 @@ export class ReviewsService {
       review.reviewer = educator;
       return { review: toReviewView(review), storyState: state };
     });
+  }
+
+  /**
+   * Takes an open submission back to Draft before any educator has given a verdict on it; the
+   * revision stays in the story's history as withdrawn, and leaves the review queue.
+   */
+  async withdrawSubmission(storyId: number, curator: User): Promise<StoryView> {
+    await this.sequelize.transaction(async (transaction) => {
+      const story = await this.lockStory(storyId, transaction);
+      const open = await this.revisionRows.findOne({ where: { storyId, state: 'open' }, transaction });
+      const approvals = open ? await this.reviews.findAll({ where: { revisionId: open.id, verdict: 'approve' }, attributes: ['reviewerId'], transaction }) : [];
+      const state = this.allow({
+        state: story.state,
+        action: 'withdraw',
+        actor: curator,
+        revision: open && { authorId: open.submittedById ?? 0, approvals: approvals.map((approval) => ({ educatorId: approval.reviewerId ?? 0 })) },
+      });
+      await open!.update({ state: 'withdrawn' }, { transaction });
+      await story.update({ state }, { transaction });
+      await this.audit.record({ actorId: curator.id, action: 'revision.withdrawn', targetType: 'revision', targetId: open!.id, detail: { storyId, number: open!.number } }, transaction);
+    });
+    return this.storyViews.view(storyId);
+  }
+
+  /**
+   * Opens a new draft of an approved story, from its latest revision (the editor was closed since
+   * it was submitted). The approved revision stays what releases carry until a newer one is approved.
+   */
+  async reviseStory(storyId: number, curator: User): Promise<StoryView> {
+    await this.sequelize.transaction(async (transaction) => {
+      const story = await this.lockStory(storyId, transaction);
+      const state = this.allow({ state: story.state, action: 'revise', actor: curator, revision: null });
+      const approved = await this.revisionRows.findOne({ where: { storyId, state: 'approved' }, order: [['number', 'DESC']], attributes: ['id', 'number'], transaction });
+      await story.update({ state }, { transaction });
+      await this.audit.record({
+        actorId: curator.id, action: 'story.revised', targetType: 'story', targetId: storyId,
+        detail: { approvedRevisionId: approved?.id ?? null, approvedNumber: approved?.number ?? null },
+      }, transaction);
+    });
+    return this.storyViews.view(storyId);
   }
 
   /** Takes an approved story out of future releases; bringing it back means a new review. */

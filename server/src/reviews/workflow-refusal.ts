@@ -8,12 +8,14 @@ export function workflowRefusal(reason: WorkflowRefusal, message: string): HttpE
   return new ConflictException(message);
 }
 
-/** An approval refused while preflight blockers stand: each blocker located by its check and panel. */
-export function blockedByPreflight(blockers: readonly PreflightEntry[]): UnprocessableEntityException {
+/** A submission or an approval refused while preflight blockers stand: each blocker located by its check and panel. */
+export function blockedByPreflight(blockers: readonly PreflightEntry[], refused: 'submission' | 'approval'): UnprocessableEntityException {
   const count = blockers.length === 1 ? 'a preflight blocker' : `${blockers.length} preflight blockers`;
   return new UnprocessableEntityException({
     statusCode: HttpStatus.UNPROCESSABLE_ENTITY,
-    message: `This revision cannot be approved while it has ${count}; ask for changes instead.`,
+    message: refused === 'submission'
+      ? `This story cannot be submitted for review while it has ${count}; fix ${blockers.length === 1 ? 'it' : 'them'} and submit again.`
+      : `This revision cannot be approved while it has ${count}; ask for changes instead.`,
     errors: blockers.map((blocker) => ({
       path: ['preflight', blocker.check, ...(blocker.panelId === undefined ? [] : [blocker.panelId])],
       message: blocker.message,

@@ -61,17 +61,19 @@ describe('a submitted revision', () => {
     expect(list.map((r: { id: number; state: string }) => [r.id, r.state])).toEqual([[second.revisionId, 'open'], [first.revisionId, 'superseded']]);
   });
 
-  it('compares with the last approved revision: text and widget settings that changed', async () => {
+  it('compares with the last approved revision after a revise: text and widget settings that changed', async () => {
     const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId, [liveValueDoc('ridge', widgetNode('ridge'))]);
     const first = await submit(t, curator, storyId);
-    expect((await request(t.http).get(`/api/revisions/${first.revisionId}/compare`).set(curator)).body).toMatchObject({ base: null, diff: [{ panelId: panelIds[0], status: 'added' }] });
+    expect((await request(t.http).get(`/api/revisions/${first.revisionId}/compare`).set(curator)).body).toMatchObject({ basis: 'first_review', base: null, diff: [{ panelId: panelIds[0], status: 'added' }] });
     await verdict(t, educator, first.revisionId, { verdict: 'approve' });
 
+    expect((await request(t.http).post(`/api/stories/${storyId}/revise`).set(curator)).status).toBe(200);
     const changed = liveValueDoc('ridge', widgetNode('ridge', { ...SLOPE_PARAMS, angleDeg: 40 }));
     await request(t.http).put(`/api/panels/${panelIds[0]}`).set(curator).send({ doc: changed, version: 1 });
     const second = await submit(t, curator, storyId);
     const res = await request(t.http).get(`/api/revisions/${second.revisionId}/compare`).set(educator);
     expect(res.status).toBe(200);
+    expect(res.body.basis).toBe('approved');
     expect(res.body.base).toMatchObject({ id: first.revisionId, state: 'approved', reviews: [{ verdict: 'approve' }] });
     expect(res.body.diff).toEqual([expect.objectContaining({
       panelId: panelIds[0], status: 'changed',
@@ -79,18 +81,38 @@ describe('a submitted revision', () => {
     })]);
     expect((await getRevision(second.revisionId)).previousApprovedRevisionId).toBe(first.revisionId);
   });
+
+  it('compares a resubmission after changes were asked for with the revision they were asked on, while none is approved', async () => {
+    const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId, [paragraphDoc('Hot rock rises and cool rock sinks.')]);
+    const first = await submit(t, curator, storyId);
+    await verdict(t, educator, first.revisionId, { verdict: 'request_changes', note: 'Say how slowly.' });
+    await request(t.http).put(`/api/panels/${panelIds[0]}`).set(curator).send({ doc: paragraphDoc('Hot rock rises and cool rock sinks, slowly.'), version: 1 });
+    const second = await submit(t, curator, storyId);
+    const res = await request(t.http).get(`/api/revisions/${second.revisionId}/compare`).set(educator);
+    expect(res.body).toMatchObject({ basis: 'changes_requested', base: { id: first.revisionId, state: 'changes_requested' }, diff: [{ panelId: panelIds[0], status: 'changed' }] });
+    expect(res.body.diff[0].text).toContainEqual({ kind: 'added', text: expect.stringContaining('slowly') });
+  });
+
+  it('keeps the curator’s note to the educators with the revision', async () => {
+    const { storyId } = await storyWithPanels(t, curator, exhibitId);
+    const { revisionId } = (await request(t.http).post(`/api/stories/${storyId}/submit`).set(curator).send({ note: '  Panel 1 now says how fast.  ' })).body;
+    expect((await getRevision(revisionId)).note).toBe('Panel 1 now says how fast.');
+    const unsaid = await submit(t, curator, (await storyWithPanels(t, curator, exhibitId)).storyId);
+    expect((await getRevision(unsaid.revisionId)).note).toBeNull();
+  });
 });
 
-describe('preflight blockers stop an approval (422 listing them)', () => {
+describe('preflight blockers stop a submission (422 listing them) and show on the draft first', () => {
   async function expectBlocked(storyId: number, check: string, panelId: number, message: RegExp) {
-    const { revisionId, preflight } = await submit(t, curator, storyId);
-    expect(preflight).toContainEqual(expect.objectContaining({ check, severity: 'blocker', passed: false, panelId }));
-    expect((await request(t.http).get('/api/reviews/queue?pageSize=100&sort=-submittedAt').set(educator)).body.items
-      .find((item: { revisionId: number }) => item.revisionId === revisionId).blockers).toBeGreaterThan(0);
-    const res = await verdict(t, educator, revisionId, { verdict: 'approve' });
+    const draft = await request(t.http).get(`/api/stories/${storyId}/preflight`).set(curator);
+    expect(draft.status).toBe(200);
+    expect(draft.body).toContainEqual(expect.objectContaining({ check, severity: 'blocker', passed: false, panelId, message: expect.stringMatching(message) }));
+    const res = await request(t.http).post(`/api/stories/${storyId}/submit`).set(curator).send({ note: 'Ready, I think.' });
     expect(res.status).toBe(422);
+    expect(res.body).toMatchObject({ statusCode: 422, message: expect.stringMatching(/cannot be submitted for review while it has/) });
     expect(res.body.errors).toContainEqual({ path: ['preflight', check, panelId], message: expect.stringMatching(message) });
-    expect((await request(t.http).get(`/api/stories/${storyId}`).set(curator)).body.state).toBe('in_review');
+    expect((await request(t.http).get(`/api/stories/${storyId}`).set(curator)).body.state).toBe('draft');
+    expect((await request(t.http).get(`/api/stories/${storyId}/revisions`).set(curator)).body).toEqual([]);
   }
 
   const rights = { credit: 'Map: Basalt Point', licence: { kind: 'spdx', id: 'CC-BY-4.0' }, licenceExpiresOn: '2030-12-31', alt: { en: 'A map of plate boundaries.' } };
@@ -139,7 +161,24 @@ describe('preflight blockers stop an approval (422 listing them)', () => {
     await expectBlocked(storyId, 'widget-params', panelIds[0]!, /has settings to fix/);
   });
 
-  it('lets warnings through: an over-long panel is approved', async () => {
+  it('an empty panel', async () => {
+    const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId, [paragraphDoc('Plates move.'), { type: 'doc', content: [{ type: 'paragraph' }] }]);
+    await expectBlocked(storyId, 'panel-content', panelIds[1]!, /Panel 2 is empty/);
+  });
+
+  /** Submissions were not always checked: a revision stored with blockers still cannot be approved. */
+  it('an approval of a revision stored with blockers', async () => {
+    const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId);
+    const { revisionId } = await submit(t, curator, storyId);
+    const blocker = { check: 'image-credit', severity: 'blocker', passed: false, message: 'The image has no credit line.', panelId: panelIds[0] };
+    await t.app.get<typeof Revision>(getModelToken(Revision)).sequelize!.query('UPDATE `revisions` SET `preflight` = ?, `blocker_count` = 1 WHERE `id` = ?', { replacements: [JSON.stringify([blocker]), revisionId] });
+    const res = await verdict(t, educator, revisionId, { verdict: 'approve' });
+    expect(res.status).toBe(422);
+    expect(res.body.errors).toEqual([{ path: ['preflight', 'image-credit', panelIds[0]], message: 'The image has no credit line.' }]);
+    expect((await request(t.http).get(`/api/stories/${storyId}`).set(curator)).body.state).toBe('in_review');
+  });
+
+  it('lets warnings through: an over-long panel is submitted with its warning, and approved', async () => {
     const long = paragraphDoc(Array.from({ length: 80 }, () => 'rock').join(' '));
     const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId, [long]);
     const { revisionId, preflight } = await submit(t, curator, storyId);

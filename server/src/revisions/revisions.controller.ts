@@ -17,6 +17,12 @@ export class RevisionsController {
     return this.revisions.listForStory(storyId);
   }
 
+  /** The shared preflight on the story's draft as it stands; a revision keeps its own from submission. */
+  @Get('stories/:id/preflight')
+  draftPreflight(@Param('id', ParseIntPipe) storyId: number) {
+    return this.revisions.draftPreflight(storyId);
+  }
+
   @Get('revisions/:id')
   get(@Param('id', ParseIntPipe) id: number) {
     return this.revisions.get(id);

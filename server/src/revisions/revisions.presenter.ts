@@ -32,6 +32,7 @@ export const toRevisionView = (revision: Revision, parts: RevisionParts): Revisi
   state: revision.state,
   submittedAt: revision.submittedAt.toISOString(),
   submittedBy: personRef(revision.submittedBy),
+  note: revision.note,
   snapshot: revision.snapshot.panels.map((panel) => ({ panelId: panel.id, position: panel.position, docs: panel.docs, wordBudget: panel.wordBudget })),
   preflight: revision.preflight,
   ...parts,

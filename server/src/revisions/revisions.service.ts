@@ -4,7 +4,7 @@ import { Op, type FindOptions, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
   buildRevisionSnapshot, diffRevisions, runPreflight,
-  type PreflightEntry, type PreflightMedia, type RevisionComparison, type RevisionSnapshot, type RevisionSummary, type RevisionView,
+  type ComparisonBasis, type PreflightEntry, type PreflightMedia, type RevisionComparison, type RevisionSnapshot, type RevisionState, type RevisionSummary, type RevisionView,
 } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import { CommentsService } from '../comments/comments.service.js';
@@ -17,7 +17,7 @@ import { PanelDocument } from '../panels/models/panel-document.model.js';
 import { Panel } from '../panels/models/panel.model.js';
 import { Review } from '../reviews/models/review.model.js';
 import { toReviewView } from '../reviews/reviews.presenter.js';
-import type { Story } from '../stories/models/story.model.js';
+import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
@@ -38,12 +38,14 @@ export class RevisionsService {
   constructor(
     @InjectModel(Revision) private readonly revisions: typeof Revision,
     @InjectModel(Review) private readonly reviews: typeof Review,
+    @InjectModel(Story) private readonly stories: typeof Story,
     @InjectModel(Panel) private readonly panels: typeof Panel,
     @InjectModel(MediaAsset) private readonly media: typeof MediaAsset,
     @InjectModel(Exhibit) private readonly exhibits: typeof Exhibit,
     @InjectModel(Venue) private readonly venues: typeof Venue,
     private readonly comments: CommentsService,
     private readonly clock: Clock,
+    private readonly sequelize: Sequelize,
   ) {}
 
   /** Every panel of the story in every locale, frozen as the shared snapshot. */
@@ -79,6 +81,18 @@ export class RevisionsService {
     return runPreflight({ snapshot, media, exhibitPlannedEnd: exhibit?.plannedEnd ?? null, today: dateOnlyOf(this.clock.now()) });
   }
 
+  /**
+   * Preflight of the draft as it stands, so the curator sees blockers while writing rather than
+   * after submitting. Read in one transaction so panels and media are seen at one moment.
+   */
+  async draftPreflight(storyId: number): Promise<PreflightEntry[]> {
+    return this.sequelize.transaction(async (transaction) => {
+      const story = await this.stories.findByPk(storyId, { transaction });
+      if (!story) throw new NotFoundException('There is no such story.');
+      return this.preflightOf(await this.snapshotOf(story, transaction), story, transaction);
+    });
+  }
+
   /** The story's venue: its exhibit's, or else the first venue set up (a story need not be in an exhibit yet). */
   async venueOf(story: Story, transaction?: Transaction): Promise<Venue | null> {
     if (story.exhibitId) {
@@ -103,11 +117,17 @@ export class RevisionsService {
     return this.view(await this.find(id));
   }
 
-  /** The revision against the story's last approved one before it; every panel is new when there is none. */
+  /**
+   * The revision against the story's last approved one before it. While none is approved, against
+   * the last one sent back with changes requested: the educator who asked sees what changed in
+   * answer, rather than every panel marked new. Every panel is new only on a first review.
+   */
   async compare(id: number): Promise<RevisionComparison> {
     const revision = await this.find(id);
-    const base = await this.lastApprovedBefore(revision);
-    return { base: base && (await this.view(base)), diff: diffRevisions(base?.snapshot ?? null, revision.snapshot) };
+    const approved = await this.lastApprovedBefore(revision);
+    const base = approved ?? (await this.lastBefore(revision, 'changes_requested'));
+    const basis: ComparisonBasis = approved ? 'approved' : base ? 'changes_requested' : 'first_review';
+    return { basis, base: base && (await this.view(base)), diff: diffRevisions(base?.snapshot ?? null, revision.snapshot) };
   }
 
   private async view(revision: Revision): Promise<RevisionView> {
@@ -120,10 +140,14 @@ export class RevisionsService {
   }
 
   private lastApprovedBefore(revision: Revision, attributes?: string[]): Promise<Revision | null> {
+    return this.lastBefore(revision, 'approved', attributes);
+  }
+
+  private lastBefore(revision: Revision, state: RevisionState, attributes?: string[]): Promise<Revision | null> {
     return this.revisions.findOne({
       ...withSubmitter,
       ...(attributes ? { attributes } : {}),
-      where: { storyId: revision.storyId, state: 'approved', number: { [Op.lt]: revision.number } },
+      where: { storyId: revision.storyId, state, number: { [Op.lt]: revision.number } },
       order: [['number', 'DESC']],
     });
   }

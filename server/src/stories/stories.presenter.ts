@@ -1,7 +1,15 @@
 import type { StoryView } from '@mantlepiece/shared';
 import type { Story } from './models/story.model.js';
 
-/** `story` as read by StoriesService, with its exhibit, author and the panelCount column. */
+/** The `approvedRevision` column, `id:number` or null. */
+function approvedRevisionOf(story: Story): StoryView['approvedRevision'] {
+  const column = story.get('approvedRevision');
+  if (typeof column !== 'string') return null;
+  const [id, number] = column.split(':').map(Number);
+  return { id: id!, number: number! };
+}
+
+/** `story` as read by StoriesService, with its exhibit, author and the panelCount and approvedRevision columns. */
 export const toStoryView = (story: Story): StoryView => ({
   id: story.id,
   title: story.title,
@@ -14,4 +22,5 @@ export const toStoryView = (story: Story): StoryView => ({
   createdAt: story.createdAt.toISOString(),
   updatedAt: story.updatedAt.toISOString(),
   createdBy: story.createdBy ? { id: story.createdBy.id, name: story.createdBy.name } : null,
+  approvedRevision: approvedRevisionOf(story),
 });

@@ -19,9 +19,19 @@ import { toStoryView } from './stories.presenter.js';
 /** Used when there is neither an exhibit nor a venue to take the language from. */
 const FALLBACK_SOURCE_LOCALE = 'en';
 
-/** What every StoryView needs: the exhibit's name, the author and the number of panels, in one query. */
+/** The story's latest approved revision, as `id:number`, so the list reads it without a query per row. */
+const APPROVED_REVISION_COLUMN = Sequelize.literal(
+  "(SELECT CONCAT(`r`.`id`, ':', `r`.`number`) FROM `revisions` AS `r` WHERE `r`.`story_id` = `Story`.`id` AND `r`.`state` = 'approved' ORDER BY `r`.`number` DESC LIMIT 1)",
+);
+
+/** What every StoryView needs: the exhibit's name, the author, the number of panels and the approved revision, in one query. */
 const storyColumns: FindOptions<Story> = {
-  attributes: { include: [[Sequelize.literal('(SELECT COUNT(*) FROM `panels` WHERE `panels`.`story_id` = `Story`.`id`)'), 'panelCount']] },
+  attributes: {
+    include: [
+      [Sequelize.literal('(SELECT COUNT(*) FROM `panels` WHERE `panels`.`story_id` = `Story`.`id`)'), 'panelCount'],
+      [APPROVED_REVISION_COLUMN, 'approvedRevision'],
+    ],
+  },
   include: [
     { model: Exhibit, attributes: ['id', 'name'] },
     { model: User, attributes: ['id', 'name'] },

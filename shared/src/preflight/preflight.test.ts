@@ -12,6 +12,7 @@ import { imageInLibrary } from './image-in-library.js';
 import { imageLicenceExpiry } from './image-licence-expiry.js';
 import { imageLicenceRecorded } from './image-licence-recorded.js';
 import { liveValueTarget } from './live-value-target.js';
+import { panelContent } from './panel-content.js';
 import { READING_TARGETS, readingLevelRule } from './reading-level.js';
 import { PREFLIGHT_RULES, preflightBlockers, runPreflight } from './run-preflight.js';
 import { textContrast, textContrastRule } from './text-contrast.js';
@@ -72,6 +73,18 @@ function context({ audience = 'family', sourceLocale = 'en', panels = [{}], medi
 
 const failures = (rule: PreflightRule, story?: Story) => rule.run(context(story)).filter((finding) => !finding.passed);
 const passes = (rule: PreflightRule, story?: Story) => rule.run(context(story)).every((finding) => finding.passed);
+
+describe('preflight: panel content (blocker)', () => {
+  it('refuses a panel with no text, image or widget, naming it by number', () => {
+    expect(failures(panelContent, { panels: [{}, { en: doc(paragraph()) }] })).toEqual([
+      { passed: false, message: 'Panel 2 is empty. Write its text, add an image or a widget, or delete the panel.', panelId: 101 },
+    ]);
+  });
+
+  it('passes a panel with only an image, only a widget, or only words', () => {
+    expect(passes(panelContent, { panels: [{ en: doc(image()) }, { en: doc(slope()) }, { en: doc(paragraph(text('Rock flows.'))) }] })).toBe(true);
+  });
+});
 
 describe('preflight: widget params (blocker)', () => {
   it('passes a slope force box the shared validation accepts', () => {

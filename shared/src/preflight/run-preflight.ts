@@ -4,6 +4,7 @@ import { imageInLibrary } from './image-in-library.js';
 import { imageLicenceExpiry } from './image-licence-expiry.js';
 import { imageLicenceRecorded } from './image-licence-recorded.js';
 import { liveValueTarget } from './live-value-target.js';
+import { panelContent } from './panel-content.js';
 import { readingLevelRule } from './reading-level.js';
 import { textContrast } from './text-contrast.js';
 import type { PreflightContext, PreflightEntry, PreflightRule } from './types.js';
@@ -13,6 +14,7 @@ import { wordBudget } from './word-budget.js';
 
 /** Every check a revision gets, blockers first, in the order the review page lists them. */
 export const PREFLIGHT_RULES: readonly PreflightRule[] = [
+  panelContent,
   widgetParams,
   liveValueTarget,
   imageInLibrary,

@@ -2,3 +2,4 @@ export * from './story-workflow.js';
 export * from './revision-snapshot.js';
 export * from './panel-diff.js';
 export * from './views.js';
+export * from './comment-anchor.js';

@@ -17,7 +17,14 @@ const NEVER: Row = [F, F, F, F, F];
 const EXPECTED: Record<StoryAction, Record<Role, Row>> = {
   submit: {
     admin: NEVER,
-    curator: ['in_review', 'in_review', 'in_review', 'in_review', 'in_review'],
+    curator: ['in_review', 'in_review', 'in_review', I, 'in_review'],
+    educator: NEVER,
+    translator: NEVER,
+    technician: NEVER,
+  },
+  withdraw: {
+    admin: NEVER,
+    curator: [I, 'draft', I, I, I],
     educator: NEVER,
     translator: NEVER,
     technician: NEVER,
@@ -33,6 +40,13 @@ const EXPECTED: Record<StoryAction, Record<Role, Row>> = {
     admin: NEVER,
     curator: NEVER,
     educator: [I, 'changes_requested', I, I, I],
+    translator: NEVER,
+    technician: NEVER,
+  },
+  revise: {
+    admin: NEVER,
+    curator: [I, I, I, 'draft', I],
+    educator: NEVER,
     translator: NEVER,
     technician: NEVER,
   },
@@ -126,6 +140,13 @@ describe('story workflow: verdict rules', () => {
   it('names the current state and the states the move needs in an illegal-move message', () => {
     const decision = decide({ state: 'approved', action: 'approve', actor: educator, revision: null });
     expect(decision).toEqual({ ok: false, reason: 'illegal_move', message: 'This story is Approved; only a story that is In review can be approved.' });
+  });
+
+  it('refuses to withdraw a submission an educator has already approved, since that verdict counts', () => {
+    const curator = { id: AUTHOR, roles: ['curator'] as Role[] };
+    const approved = decide({ state: 'in_review', action: 'withdraw', actor: curator, revision: { authorId: AUTHOR, approvals: [{ educatorId: ACTOR }] }, requiredApprovals: 2 });
+    expect(approved).toMatchObject({ ok: false, reason: 'has_verdict' });
+    expect(decide({ state: 'in_review', action: 'withdraw', actor: curator, revision: null })).toMatchObject({ ok: false, reason: 'illegal_move' });
   });
 
   it('refuses a required-approvals setting below one', () => {

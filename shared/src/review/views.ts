@@ -12,10 +12,11 @@ export interface PersonRef {
 }
 
 /**
- * A revision is open while it waits for verdicts; a newer submission supersedes it. Approved and
- * changes_requested are the verdicts that closed it.
+ * A revision is open while it waits for verdicts; a newer submission supersedes it, and its
+ * curator may withdraw it before any verdict. Approved and changes_requested are the verdicts
+ * that closed it.
  */
-export const REVISION_STATES = ['open', 'approved', 'changes_requested', 'superseded'] as const;
+export const REVISION_STATES = ['open', 'approved', 'changes_requested', 'superseded', 'withdrawn'] as const;
 export type RevisionState = (typeof REVISION_STATES)[number];
 
 export const VERDICTS = ['approve', 'request_changes'] as const;
@@ -84,6 +85,11 @@ export interface CommentView {
   createdAt: string;
   /** Set on an unresolved comment copied forward from an earlier revision of the story. */
   carriedFromRevisionId: number | null;
+  /**
+   * On a carried comment with a range: whether the words it was anchored to are no longer in this
+   * revision's panel (edited or deleted). Null when the comment has no range or was not carried.
+   */
+  anchorChanged: boolean | null;
 }
 
 export interface RevisionView {
@@ -95,6 +101,8 @@ export interface RevisionView {
   state: RevisionState;
   submittedAt: string;
   submittedBy: PersonRef | null;
+  /** What the curator told the educators when submitting. */
+  note: string | null;
   snapshot: RevisionPanelView[];
   preflight: PreflightEntry[];
   reviews: ReviewView[];
@@ -103,10 +111,24 @@ export interface RevisionView {
   previousApprovedRevisionId: number | null;
 }
 
-/** GET /api/revisions/:id/compare: the revision against the story's last approved one. */
+/**
+ * What a revision is compared with: the story's last approved revision before it; while none is
+ * approved, the last one sent back with changes requested, so the educator sees what the curator
+ * changed in answer; none at all on a story's first review.
+ */
+export type ComparisonBasis = 'approved' | 'changes_requested' | 'first_review';
+
+/** GET /api/revisions/:id/compare. */
 export interface RevisionComparison {
+  basis: ComparisonBasis;
   base: RevisionView | null;
   diff: PanelDiff[];
+}
+
+/** POST /api/stories/:id/submit takes this. */
+export interface SubmitRequest {
+  /** To the educators, kept with the revision. */
+  note?: string;
 }
 
 export interface ReviewQueueItem {

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { RevisionComparison, RevisionSummary, RevisionView, StoryDetailView, StoryState, StoryView, SubmitResult } from '@mantlepiece/shared';
+import type { RevisionComparison, RevisionSummary, RevisionView, StoryDetailView, StoryView, SubmitRequest, SubmitResult } from '@mantlepiece/shared';
 import { api } from './client';
 import { storyKey } from './stories';
 
@@ -26,11 +26,11 @@ export function useRevisionComparison(id: number) {
   });
 }
 
-/** The story's state comes back with submit and retire; the open story takes it without a reload of its panels. */
+/** A review move answers with the story's state (and its approved revision); the open story takes them without a reload of its panels. */
 function useStoryStateChange(storyId: number) {
   const queryClient = useQueryClient();
-  return (state: StoryState) => {
-    queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) => (current ? { ...current, state } : current));
+  return (change: Partial<Pick<StoryView, 'state' | 'approvedRevision'>>) => {
+    queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) => (current ? { ...current, ...change } : current));
     void queryClient.invalidateQueries({ queryKey: storyRevisionsKey(storyId) });
     void queryClient.invalidateQueries({ queryKey: ['stories'] });
     void queryClient.invalidateQueries({ queryKey: ['reviews'] });
@@ -40,15 +40,20 @@ function useStoryStateChange(storyId: number) {
 export function useSubmitStory(storyId: number) {
   const changeState = useStoryStateChange(storyId);
   return useMutation({
-    mutationFn: () => api<SubmitResult>(`/stories/${storyId}/submit`, { method: 'POST' }),
-    onSuccess: (revision) => changeState(revision.state),
+    mutationFn: (request: SubmitRequest) => api<SubmitResult>(`/stories/${storyId}/submit`, { method: 'POST', body: request }),
+    onSuccess: (revision) => changeState({ state: revision.state }),
   });
 }
 
-export function useRetireStory(storyId: number) {
+/** Withdraw, revise and retire: each answers with the story as the Stories table shows it. */
+function useStoryMove(storyId: number, move: 'withdraw' | 'revise' | 'retire') {
   const changeState = useStoryStateChange(storyId);
   return useMutation({
-    mutationFn: () => api<StoryView>(`/stories/${storyId}/retire`, { method: 'POST' }),
-    onSuccess: (story) => changeState(story.state),
+    mutationFn: () => api<StoryView>(`/stories/${storyId}/${move}`, { method: 'POST' }),
+    onSuccess: (story) => changeState({ state: story.state, approvedRevision: story.approvedRevision }),
   });
 }
+
+export const useWithdrawSubmission = (storyId: number) => useStoryMove(storyId, 'withdraw');
+export const useReviseStory = (storyId: number) => useStoryMove(storyId, 'revise');
+export const useRetireStory = (storyId: number) => useStoryMove(storyId, 'retire');

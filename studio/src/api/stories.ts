@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Audience, Page, PanelDocJSON, PanelView, StoryDetailView, StoryState, StoryView } from '@mantlepiece/shared';
+import type { Audience, Page, PanelDocJSON, PanelView, PreflightEntry, StoryDetailView, StoryState, StoryView } from '@mantlepiece/shared';
 import { api } from './client';
 
 export const STORY_SORTS = ['title', '-title', 'updatedAt', '-updatedAt', 'createdAt', '-createdAt', 'state', '-state'] as const;
@@ -17,6 +17,7 @@ export interface StoryListParams {
 
 const storiesKey = ['stories'] as const;
 export const storyKey = (id: number) => ['story', id] as const;
+const draftPreflightKey = (id: number) => ['story', id, 'preflight'] as const;
 
 export function useStories(params: StoryListParams) {
   return useQuery({
@@ -32,6 +33,15 @@ export function useStory(id: number) {
     queryFn: () => api<StoryDetailView>(`/stories/${id}`),
     // The editor owns the panels once open; a background refetch must not pull text out from under it.
     staleTime: Infinity,
+  });
+}
+
+/** Preflight of the draft as saved; every save of the story's panels asks for it again. */
+export function useDraftPreflight(id: number, enabled: boolean) {
+  return useQuery({
+    queryKey: draftPreflightKey(id),
+    queryFn: () => api<PreflightEntry[]>(`/stories/${id}/preflight`),
+    enabled,
   });
 }
 
@@ -69,6 +79,7 @@ function setPanels(queryClient: ReturnType<typeof useQueryClient>, storyId: numb
     return { ...current, panels, panelCount: panels.length };
   });
   void queryClient.invalidateQueries({ queryKey: storiesKey });
+  void queryClient.invalidateQueries({ queryKey: draftPreflightKey(storyId) });
 }
 
 export function useCreatePanel(storyId: number) {
@@ -122,8 +133,10 @@ export const savePanelDoc = (panelId: number, doc: PanelDocJSON, version: number
 /** Keeps the cached story in step with what the autosave wrote, so switching panels shows the saved text. */
 export function useRememberSavedPanel(storyId: number) {
   const queryClient = useQueryClient();
-  return (panelId: number, doc: PanelDocJSON, version: number) =>
+  return (panelId: number, doc: PanelDocJSON, version: number) => {
     queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) =>
       current ? { ...current, panels: current.panels.map((p) => (p.id === panelId ? { ...p, doc, version } : p)) } : current,
     );
+    void queryClient.invalidateQueries({ queryKey: draftPreflightKey(storyId) });
+  };
 }

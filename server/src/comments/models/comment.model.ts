@@ -50,6 +50,10 @@ export class Comment extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
   carriedFromRevisionId: number | null;
 
+  /** On a carried comment with a range: whether its quoted words are gone from this revision's panel. */
+  @Column({ type: DataType.BOOLEAN, allowNull: true })
+  anchorChanged: boolean | null;
+
   declare id: number;
   declare createdAt: Date;
 }

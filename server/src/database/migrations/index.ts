@@ -11,6 +11,7 @@ import * as venueSigningKeys from './0400-venue-signing-keys.js';
 import * as releases from './0401-releases.js';
 import * as kiosks from './0402-kiosks.js';
 import * as fleetWatch from './0500-fleet-watch.js';
+import * as livingStory from './0650-living-story.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -31,6 +32,7 @@ const modules: [string, MigrationModule][] = [
   ['0401-releases', releases],
   ['0402-kiosks', kiosks],
   ['0500-fleet-watch', fleetWatch],
+  ['0650-living-story', livingStory],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

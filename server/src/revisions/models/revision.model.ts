@@ -4,7 +4,7 @@ import { jsonColumn } from '../../database/json-column.js';
 import { Story } from '../../stories/models/story.model.js';
 import { User } from '../../users/models/user.model.js';
 
-/** What a verdict or a newer submission may change on a revision; its content never changes. */
+/** What a verdict, a withdrawal or a newer submission may change on a revision; its content never changes. */
 const MOVABLE = new Set(['state', 'updatedAt']);
 
 function refuseContentChange(changed: readonly string[]): void {
@@ -54,6 +54,10 @@ export class Revision extends Model {
 
   @Column({ type: DataType.DATE(3), allowNull: false })
   submittedAt: Date;
+
+  /** What the curator told the educators when submitting. */
+  @Column({ type: DataType.TEXT, allowNull: true })
+  note: string | null;
 
   declare id: number;
 

@@ -32,6 +32,8 @@ function CommentBody({ comment }: { comment: CommentView }) {
         <Text weight="semibold">{comment.author?.name ?? t('revision.formerColleague')}</Text>
         <Text className={shared.muted}>{formatDate(comment.createdAt)}</Text>
         {comment.carriedFromRevisionId !== null ? <Badge appearance="outline" color="informative">{t('comments.carried')}</Badge> : null}
+        {comment.anchorChanged === true ? <Badge appearance="tint" color="warning" data-anchor-changed>{t('comments.anchorChanged')}</Badge> : null}
+        {comment.anchorChanged === false ? <Badge appearance="outline" color="subtle">{t('comments.anchorSame')}</Badge> : null}
       </div>
       {comment.range ? <blockquote className={styles.quote}>{comment.range.quote}</blockquote> : null}
       <p className={styles.body}>{comment.body}</p>

@@ -1,6 +1,6 @@
 import { useRef, useState } from 'react';
 import { Badge, type BadgeProps, makeStyles, Text, tokens } from '@fluentui/react-components';
-import { panelText, type CommentRange, type CommentView, type PanelDiff, type PanelDocJSON, type RevisionPanelView } from '@mantlepiece/shared';
+import { panelText, type CommentRange, type CommentView, type ComparisonBasis, type PanelDiff, type PanelDocJSON, type RevisionPanelView } from '@mantlepiece/shared';
 import { PanelFrame, PanelView, type ResolveMedia } from '@mantlepiece/shared/react';
 import { useTranslation } from 'react-i18next';
 import { CommentThreads } from './CommentThreads';
@@ -51,8 +51,8 @@ export interface PanelComparisonProps {
   diff: PanelDiff;
   panel: RevisionPanelView | undefined;
   basePanel: RevisionPanelView | undefined;
-  /** Whether there is a last approved revision at all. */
-  hasBase: boolean;
+  /** What the revision is compared with: the last approved one, the one changes were asked on, or nothing yet. */
+  basis: ComparisonBasis;
   locale: string;
   resolveMedia: ResolveMedia;
   revisionId: number;
@@ -61,11 +61,13 @@ export interface PanelComparisonProps {
 }
 
 /**
- * One panel of the revision beside the same panel in the last approved one, both drawn by the
- * kiosk's renderer; then the word-level text changes, the widget settings that moved, and the
- * panel's comments. Selecting words in this revision's drawing anchors a new comment to them.
+ * One panel of the revision beside the same panel in the last approved one (or, while none is,
+ * the one changes were asked on), both drawn by the kiosk's renderer; then the word-level text
+ * changes, the widget settings that moved, and the panel's comments. On a first review there is
+ * nothing to compare with, so the panel is shown alone, its text unmarked. Selecting words in
+ * this revision's drawing anchors a new comment to them.
  */
-export function PanelComparison({ diff, panel, basePanel, hasBase, locale, resolveMedia, revisionId, comments, canComment }: PanelComparisonProps) {
+export function PanelComparison({ diff, panel, basePanel, basis, locale, resolveMedia, revisionId, comments, canComment }: PanelComparisonProps) {
   const { t } = useTranslation();
   const styles = useStyles();
   const shared = useReviewStyles();
@@ -75,6 +77,7 @@ export function PanelComparison({ diff, panel, basePanel, hasBase, locale, resol
   const title = t('story.panelNumber', { number });
   const headingId = `panel-${diff.panelId}-heading`;
 
+  const firstReview = basis === 'first_review';
   const baseDoc = basePanel?.docs[locale];
   const doc = panel?.docs[locale];
   const captureSelection = () => {
@@ -88,17 +91,19 @@ export function PanelComparison({ diff, panel, basePanel, hasBase, locale, resol
     <section id={`panel-${diff.panelId}`} className={shared.card} aria-labelledby={headingId} data-panel-id={diff.panelId} data-panel-status={diff.status}>
       <div className={styles.top}>
         <Text as="h2" id={headingId} size={500} weight="semibold" className={shared.heading}>{title}</Text>
-        <Badge appearance="tint" color={STATUS_COLOURS[diff.status]}>{t(`diff.status.${diff.status}`)}</Badge>
+        {firstReview ? null : <Badge appearance="tint" color={STATUS_COLOURS[diff.status]}>{t(`diff.status.${diff.status}`)}</Badge>}
         {diff.numberBefore !== undefined && diff.numberAfter !== undefined && diff.numberBefore !== diff.numberAfter ? (
           <Text className={shared.muted}>{t('diff.moved', { number: diff.numberBefore })}</Text>
         ) : null}
       </div>
 
       <div className={styles.sides}>
-        <div className={styles.side}>
-          <Text weight="semibold">{t('diff.lastApproved')}</Text>
-          {baseDoc ? <Drawing doc={baseDoc} locale={locale} resolveMedia={resolveMedia} /> : <div className={styles.absent}>{hasBase ? t('diff.notInBase') : t('diff.noBase')}</div>}
-        </div>
+        {firstReview ? null : (
+          <div className={styles.side}>
+            <Text weight="semibold">{basis === 'approved' ? t('diff.lastApproved') : t('diff.changesAskedOn')}</Text>
+            {baseDoc ? <Drawing doc={baseDoc} locale={locale} resolveMedia={resolveMedia} /> : <div className={styles.absent}>{basis === 'approved' ? t('diff.notInBase') : t('diff.notInChangesBase')}</div>}
+          </div>
+        )}
         <div className={styles.side}>
           <Text weight="semibold">{t('diff.thisRevision')}</Text>
           {doc ? (
@@ -115,13 +120,22 @@ export function PanelComparison({ diff, panel, basePanel, hasBase, locale, resol
 
       <div className={styles.details}>
         <div className={styles.block}>
-          <Text as="h3" weight="semibold" className={shared.heading}>{diff.status === 'unchanged' ? t('diff.textUnchanged') : t('diff.textChanges')}</Text>
-          {diff.text.length > 0 ? <TextDiff pieces={diff.text} locale={locale} /> : <Text className={shared.muted}>{t('diff.noText')}</Text>}
-          {diff.media.added.length + diff.media.removed.length > 0 ? (
-            <Text className={shared.muted}>{t('diff.media', { added: diff.media.added.length, removed: diff.media.removed.length })}</Text>
-          ) : null}
-          <Text as="h3" weight="semibold" className={shared.heading}>{t('diff.widgetChanges')}</Text>
-          <WidgetChanges changes={diff.widgets} />
+          <Text as="h3" weight="semibold" className={shared.heading}>{firstReview ? t('diff.text') : diff.status === 'unchanged' ? t('diff.textUnchanged') : t('diff.textChanges')}</Text>
+          {diff.text.length === 0 ? (
+            <Text className={shared.muted}>{t('diff.noText')}</Text>
+          ) : (
+            // Nothing came before a first review, so its words are read as they are, not as insertions.
+            <TextDiff pieces={firstReview ? diff.text.map((piece) => ({ ...piece, kind: 'same' as const })) : diff.text} locale={locale} />
+          )}
+          {firstReview ? null : (
+            <>
+              {diff.media.added.length + diff.media.removed.length > 0 ? (
+                <Text className={shared.muted}>{t('diff.media', { added: diff.media.added.length, removed: diff.media.removed.length })}</Text>
+              ) : null}
+              <Text as="h3" weight="semibold" className={shared.heading}>{t('diff.widgetChanges')}</Text>
+              <WidgetChanges changes={diff.widgets} />
+            </>
+          )}
         </div>
         <div className={styles.block}>
           <Text as="h3" weight="semibold" className={shared.heading}>{t('comments.title')}</Text>

@@ -7,6 +7,7 @@ const COLOURS: Record<RevisionState, BadgeProps['color']> = {
   approved: 'success',
   changes_requested: 'danger',
   superseded: 'subtle',
+  withdrawn: 'subtle',
 };
 
 export function RevisionStateBadge({ state }: { state: RevisionState }) {

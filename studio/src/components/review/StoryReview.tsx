@@ -1,10 +1,11 @@
 import { useState } from 'react';
 import { Button, makeStyles, MessageBar, MessageBarBody, MessageBarTitle, Text, tokens } from '@fluentui/react-components';
-import { ArchiveRegular, SendRegular } from '@fluentui/react-icons';
-import { STORY_WORKFLOW, type RevisionSummary, type StoryDetailView } from '@mantlepiece/shared';
+import { ArchiveRegular, ArrowUndoRegular, EditRegular, SendRegular } from '@fluentui/react-icons';
+import { EDITABLE_STORY_STATES, mayTake, type PreflightEntry, type RevisionSummary, type StoryDetailView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useCurrentUser } from '../../api/session';
-import { useRetireStory, useRevision, useStoryRevisions, useSubmitStory } from '../../api/revisions';
+import { useRetireStory, useReviseStory, useRevision, useStoryRevisions, useSubmitStory, useWithdrawSubmission } from '../../api/revisions';
+import { useDraftPreflight } from '../../api/stories';
 import { ConfirmDialog } from '../ConfirmDialog';
 import { useDateFormat } from '../formatting';
 import { FormAlert } from '../forms/FormAlert';
@@ -14,6 +15,7 @@ import { groupPreflight } from './preflight-groups';
 import { PreflightList } from './PreflightList';
 import { useReviewStyles } from './review-styles';
 import { RevisionStateBadge } from './RevisionStateBadge';
+import { SubmitDialog } from './SubmitDialog';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS, marginBottom: tokens.spacingVerticalM },
@@ -24,14 +26,12 @@ const useStyles = makeStyles({
   result: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
 });
 
-const canTake = (action: 'submit' | 'retire', roles: readonly string[], state: StoryDetailView['state']) =>
-  STORY_WORKFLOW[action].roles.some((role) => roles.includes(role)) && STORY_WORKFLOW[action].from.includes(state);
-
 /**
- * The workflow lets an open or approved story be submitted again, but the editor is read-only in
- * those states, so a new revision would only repeat the last one; the button waits for an edit.
+ * The workflow also lets a newer submission supersede an open one, but the editor is closed while
+ * it is in review, so it would only repeat it: the studio offers Withdraw instead. A retired story
+ * comes back through review as it is.
  */
-const SUBMIT_OFFERED: readonly StoryDetailView['state'][] = ['draft', 'changes_requested', 'retired'];
+const SUBMIT_OFFERED: readonly StoryDetailView['state'][] = [...EDITABLE_STORY_STATES, 'retired'];
 
 /** What the educator asked for, on the story the curator is about to fix. */
 function ChangesRequested({ revisionId }: { revisionId: number }) {
@@ -80,49 +80,90 @@ function RevisionList({ storyId }: { storyId: number }) {
   );
 }
 
-/** The story's way through review: submit (and what preflight found), retire, and its revisions. */
+/** Preflight of the draft as the curator writes: what stops a submission, and what the educator will weigh. */
+function DraftPreflight({ story, entries }: { story: StoryDetailView; entries: PreflightEntry[] }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  const shared = useReviewStyles();
+  const { blockers } = groupPreflight(entries);
+  return (
+    <details className={shared.card} open={blockers.length > 0} data-draft-preflight>
+      <summary className={styles.summary}>
+        {blockers.length > 0 ? t('storyReview.draftBlocked', { count: blockers.length }) : t('storyReview.draftClear')}
+      </summary>
+      <PreflightList
+        entries={entries}
+        panelLink={(panelId) => {
+          const index = story.panels.findIndex((panel) => panel.id === panelId);
+          return index < 0 ? null : <TextLink to={{ search: `?panel=${panelId}` }}>{t('story.panelNumber', { number: index + 1 })}</TextLink>;
+        }}
+      />
+    </details>
+  );
+}
+
+type Dialog = 'submit' | 'withdraw' | 'retire';
+
+/**
+ * The story's way through review: preflight of the draft, submit (with a note, once nothing
+ * blocks), withdraw, revise, retire, and its revisions. The workflow table decides which moves
+ * a person's roles and the story's state allow; the latest revision decides whether a withdrawal
+ * still can come before a verdict.
+ */
 export function StoryReview({ story }: { story: StoryDetailView }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const shared = useReviewStyles();
   const me = useCurrentUser();
   const submit = useSubmitStory(story.id);
+  const withdraw = useWithdrawSubmission(story.id);
+  const revise = useReviseStory(story.id);
   const retire = useRetireStory(story.id);
-  const [confirmRetire, setConfirmRetire] = useState(false);
-  const submitted = submit.data;
+  const [dialog, setDialog] = useState<Dialog | null>(null);
+  const [done, setDone] = useState<'withdrawn' | 'revised' | 'retired' | null>(null);
   const revisions = useStoryRevisions(story.id);
   const latest = revisions.data?.reduce<RevisionSummary | undefined>((last, revision) => (!last || revision.number > last.number ? revision : last), undefined);
-  const blockers = submitted ? groupPreflight(submitted.preflight).blockers : [];
+
+  const mayWrite = mayTake('submit', me.roles, story.state) && SUBMIT_OFFERED.includes(story.state);
+  const preflight = useDraftPreflight(story.id, mayWrite);
+  const { blockers, warnings } = groupPreflight(preflight.data ?? []);
+  const offerSubmit = mayWrite && preflight.isSuccess && blockers.length === 0 && story.panels.length > 0;
+  const offerWithdraw = mayTake('withdraw', me.roles, story.state) && latest?.state === 'open' && latest.approvals === 0;
+  const offerRevise = mayTake('revise', me.roles, story.state);
+  const submitted = submit.data;
+  const close = () => setDialog(null);
+  const moved = (what: NonNullable<typeof done>) => () => { setDone(what); close(); };
 
   return (
     <section className={styles.root} aria-label={t('storyReview.label')}>
       <div className={styles.actions}>
-        {canTake('submit', me.roles, story.state) && SUBMIT_OFFERED.includes(story.state) ? (
-          <Button appearance="primary" icon={<SendRegular />} disabled={submit.isPending || story.panels.length === 0} onClick={() => submit.mutate()}>
-            {submit.isPending ? t('storyReview.submitting') : t('storyReview.submit')}
+        {offerSubmit ? (
+          <Button appearance="primary" icon={<SendRegular />} onClick={() => { submit.reset(); setDialog('submit'); }}>{t('storyReview.submit')}</Button>
+        ) : null}
+        {offerRevise ? (
+          <Button appearance="primary" icon={<EditRegular />} disabled={revise.isPending} onClick={() => revise.mutate(undefined, { onSuccess: moved('revised') })}>
+            {t('storyReview.revise')}
           </Button>
         ) : null}
-        {canTake('retire', me.roles, story.state) ? (
-          <Button icon={<ArchiveRegular />} onClick={() => setConfirmRetire(true)}>{t('storyReview.retire')}</Button>
+        {offerWithdraw ? <Button icon={<ArrowUndoRegular />} onClick={() => setDialog('withdraw')}>{t('storyReview.withdraw')}</Button> : null}
+        {mayTake('retire', me.roles, story.state) ? (
+          <Button icon={<ArchiveRegular />} onClick={() => setDialog('retire')}>{t('storyReview.retire')}</Button>
         ) : null}
-        {story.state === 'in_review' ? <Text className={shared.muted}>{t('storyReview.inReviewHint')}</Text> : null}
+        {mayWrite && blockers.length > 0 ? <Text className={shared.muted}>{t('storyReview.fixBlockersFirst', { count: blockers.length })}</Text> : null}
+        {story.state === 'in_review' ? <Text className={shared.muted}>{t(offerWithdraw ? 'storyReview.inReviewWithdrawHint' : 'storyReview.inReviewHint')}</Text> : null}
+        {offerRevise ? <Text className={shared.muted}>{t('storyReview.approvedHint')}</Text> : null}
       </div>
       {story.state === 'changes_requested' && latest ? <ChangesRequested revisionId={latest.id} /> : null}
-      {submit.isError ? <FormAlert intent="error">{describeError(t, submit.error)}</FormAlert> : null}
-      {retire.isSuccess ? <FormAlert intent="success">{t('storyReview.retired')}</FormAlert> : null}
+      {revise.isError ? <FormAlert intent="error">{describeError(t, revise.error)}</FormAlert> : null}
+      {done === 'revised' && story.approvedRevision ? <FormAlert intent="success">{t('storyReview.revised', { number: story.approvedRevision.number })}</FormAlert> : null}
+      {done === 'withdrawn' ? <FormAlert intent="success">{t('storyReview.withdrawn')}</FormAlert> : null}
+      {done === 'retired' ? <FormAlert intent="success">{t('storyReview.retired')}</FormAlert> : null}
+      {preflight.isError ? <FormAlert intent="error">{describeError(t, preflight.error)}</FormAlert> : null}
+      {mayWrite && preflight.data ? <DraftPreflight story={story} entries={preflight.data} /> : null}
 
-      {submitted ? (
+      {submitted && story.state === 'in_review' ? (
         <div className={`${shared.card} ${styles.result}`} data-submitted-revision={submitted.revisionId}>
-          <FormAlert intent={blockers.length > 0 ? 'warning' : 'success'}>
-            {blockers.length > 0 ? t('storyReview.submittedWithBlockers', { number: submitted.number, count: blockers.length }) : t('storyReview.submitted', { number: submitted.number })}
-          </FormAlert>
-          <PreflightList
-            entries={submitted.preflight}
-            panelLink={(panelId) => {
-              const index = story.panels.findIndex((panel) => panel.id === panelId);
-              return index < 0 ? null : <TextLink to={{ search: `?panel=${panelId}` }}>{t('story.panelNumber', { number: index + 1 })}</TextLink>;
-            }}
-          />
+          <FormAlert intent="success">{t('storyReview.submitted', { number: submitted.number })}</FormAlert>
           <div>
             <LinkButton to={`/reviews/${submitted.revisionId}`}>{t('storyReview.openRevision', { number: submitted.number })}</LinkButton>
           </div>
@@ -131,14 +172,36 @@ export function StoryReview({ story }: { story: StoryDetailView }) {
 
       <RevisionList storyId={story.id} />
 
-      {confirmRetire ? (
+      {dialog === 'submit' ? (
+        <SubmitDialog
+          title={story.title}
+          warnings={warnings.length}
+          pending={submit.isPending}
+          problem={submit.isError ? describeError(t, submit.error) : null}
+          onSubmit={(request) => submit.mutate(request, { onSuccess: close, onError: () => void preflight.refetch() })}
+          onClose={close}
+        />
+      ) : null}
+      {dialog === 'withdraw' ? (
+        <ConfirmDialog
+          title={t('storyReview.withdrawTitle', { title: story.title })}
+          confirmLabel={t('storyReview.withdrawConfirm')}
+          pending={withdraw.isPending}
+          problem={withdraw.isError ? describeError(t, withdraw.error) : null}
+          onConfirm={() => withdraw.mutate(undefined, { onSuccess: moved('withdrawn') })}
+          onCancel={close}
+        >
+          {t('storyReview.withdrawBody')}
+        </ConfirmDialog>
+      ) : null}
+      {dialog === 'retire' ? (
         <ConfirmDialog
           title={t('storyReview.retireTitle', { title: story.title })}
           confirmLabel={t('storyReview.retireConfirm')}
           pending={retire.isPending}
           problem={retire.isError ? describeError(t, retire.error) : null}
-          onConfirm={() => retire.mutate(undefined, { onSuccess: () => setConfirmRetire(false) })}
-          onCancel={() => setConfirmRetire(false)}
+          onConfirm={() => retire.mutate(undefined, { onSuccess: moved('retired') })}
+          onCancel={close}
         >
           {t('storyReview.retireBody')}
         </ConfirmDialog>

@@ -30,6 +30,8 @@ const useStyles = makeStyles({
   top: { display: 'grid', gridTemplateColumns: 'minmax(0, 3fr) minmax(20rem, 2fr)', gap: tokens.spacingHorizontalL, alignItems: 'start', marginBottom: tokens.spacingVerticalL, '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
   column: { display: 'flex', flexDirection: 'column', gap: tokens.spacingHorizontalL },
   panels: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL, marginBottom: tokens.spacingVerticalL },
+  note: { marginBottom: tokens.spacingVerticalL },
+  noteText: { margin: 0, whiteSpace: 'pre-wrap' },
 });
 
 /** Shows a content hash by its first 12 hex digits, as people read commit hashes; the whole one on hover and to screen readers. */
@@ -90,7 +92,7 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
         intro={
           <span className={styles.facts}>
             <RevisionStateBadge state={revision.state} />
-            {story.data ? <span>{t('revision.storyIs')} <StoryStateBadge state={story.data.state} /></span> : null}
+            {story.data ? <span>{t('revision.storyIs')} <StoryStateBadge state={story.data.state} approvedRevision={story.data.approvedRevision} /></span> : null}
             <span>
               {t('revision.hash')}{' '}
               <code className={shared.hash} title={revision.hash} aria-label={revision.hash}>{revision.hash.slice(0, SHORT_HASH)}</code>
@@ -100,6 +102,15 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
         }
         actions={<LinkButton to={`/stories/${revision.storyId}`}>{t('revision.openStory')}</LinkButton>}
       />
+
+      {revision.note ? (
+        <section className={`${shared.card} ${styles.note}`} aria-labelledby="note-heading" data-submission-note>
+          <Text as="h2" id="note-heading" size={500} weight="semibold" className={shared.heading}>
+            {t('revision.noteFrom', { name: revision.submittedBy?.name ?? t('revision.formerColleague') })}
+          </Text>
+          <Text as="p" className={styles.noteText}>{revision.note}</Text>
+        </section>
+      ) : null}
 
       <div className={styles.top}>
         <section className={shared.card} aria-labelledby="preflight-heading">
@@ -130,12 +141,12 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
       ) : (
         <div className={styles.panels}>
           {comparison.data.base ? (
-            <Text>
-              {t('revision.comparedWith')}{' '}
+            <Text data-comparison-basis={comparison.data.basis}>
+              {t(comparison.data.basis === 'approved' ? 'revision.comparedWith' : 'revision.comparedWithChangesRequested')}{' '}
               <TextLink to={`/reviews/${comparison.data.base.id}`}>{t('revision.number', { number: comparison.data.base.number })}</TextLink>
             </Text>
           ) : (
-            <Text>{t('revision.firstReview')}</Text>
+            <div data-comparison-basis="first_review"><FormAlert intent="info">{t('revision.firstReview')}</FormAlert></div>
           )}
           {comparison.data.diff.map((diff) => (
             <PanelComparison
@@ -143,7 +154,7 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
               diff={diff}
               panel={revision.snapshot.find((panel) => panel.panelId === diff.panelId)}
               basePanel={comparison.data.base?.snapshot.find((panel) => panel.panelId === diff.panelId)}
-              hasBase={comparison.data.base !== null}
+              basis={comparison.data.basis}
               locale={locale}
               resolveMedia={resolveMedia}
               revisionId={revision.id}

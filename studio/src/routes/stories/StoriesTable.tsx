@@ -51,7 +51,7 @@ export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryVi
               <Badge appearance="outline" color="informative">{t(`audiences.${story.audience}`)}</Badge>
             </TableCell>
             <TableCell>{languageName(story.sourceLocale)}</TableCell>
-            <TableCell><StoryStateBadge state={story.state} /></TableCell>
+            <TableCell><StoryStateBadge state={story.state} approvedRevision={story.approvedRevision} /></TableCell>
             <TableCell className={styles.number}>{story.panelCount}</TableCell>
             <TableCell>
               <span className={styles.date}>{formatDate(story.updatedAt)}</span>

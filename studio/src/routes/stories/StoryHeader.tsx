@@ -52,7 +52,7 @@ export function StoryHeader({ story, readOnly }: { story: StoryDetailView; readO
     <header className={styles.root}>
       <div className={styles.top}>
         <Text as="h1" size={700} weight="semibold">{story.title}</Text>
-        <StoryStateBadge state={story.state} />
+        <StoryStateBadge state={story.state} approvedRevision={story.approvedRevision} />
         <Text className={styles.meta}>
           {t('story.meta', { count: story.panels.length, date: formatDate(story.updatedAt) })}
           {story.createdBy ? ` · ${t('story.createdBy', { name: story.createdBy.name })}` : ''}

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button, makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { DocumentAddRegular } from '@fluentui/react-icons';
-import { emptyPanelDoc, type PanelView } from '@mantlepiece/shared';
+import { EDITABLE_STORY_STATES, emptyPanelDoc, type PanelView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
@@ -52,7 +52,7 @@ export function StoryPage() {
   }
 
   const { panels } = story.data;
-  const readOnly = !canWriteStories(me.roles) || story.data.state !== 'draft' && story.data.state !== 'changes_requested';
+  const readOnly = !canWriteStories(me.roles) || !EDITABLE_STORY_STATES.includes(story.data.state);
   const selectedId = Number(search.get('panel')) || panels[0]?.id || null;
   const selected = panels.find((panel) => panel.id === selectedId) ?? panels[0];
   const select = (panelId: number) => setSearch((current) => { const next = new URLSearchParams(current); next.set('panel', String(panelId)); return next; }, { replace: true });
