@@ -5,6 +5,13 @@ import { ConfigService } from '../config/config.service.js';
 
 interface AccessTokenClaims {
   sub: string;
+  /** The session (refresh-token family) the token belongs to: ending the session ends the token. */
+  sid: string;
+}
+
+export interface AccessTokenHolder {
+  userId: number;
+  sessionId: string;
 }
 
 /** Short-lived bearer tokens. Issued and checked against our clock, so tests can let them expire. */
@@ -16,25 +23,22 @@ export class AccessTokenService {
     private readonly config: ConfigService,
   ) {}
 
-  issue(userId: number): Promise<string> {
+  /** The same holder and moment give the same token, so a refresh answered twice hands out one pair. */
+  issue({ userId, sessionId }: AccessTokenHolder, issuedAt: Date = this.clock.now()): Promise<string> {
     return this.jwt.signAsync(
-      { sub: String(userId), iat: this.nowSeconds() },
+      { sub: String(userId), sid: sessionId, iat: Math.floor(issuedAt.getTime() / 1000) },
       { expiresIn: this.config.accessTokenTtlSeconds },
     );
   }
 
-  /** The user id the token was issued to, or null when it is missing, forged or expired. */
-  async verify(token: string): Promise<number | null> {
+  /** Whose token it is and of which session, or null when it is missing, forged or expired. */
+  async verify(token: string): Promise<AccessTokenHolder | null> {
     try {
-      const claims = await this.jwt.verifyAsync<AccessTokenClaims>(token, { clockTimestamp: this.nowSeconds() });
-      const id = Number(claims.sub);
-      return Number.isInteger(id) ? id : null;
+      const claims = await this.jwt.verifyAsync<AccessTokenClaims>(token, { clockTimestamp: Math.floor(this.clock.now().getTime() / 1000) });
+      const userId = Number(claims.sub);
+      return Number.isInteger(userId) && typeof claims.sid === 'string' ? { userId, sessionId: claims.sid } : null;
     } catch {
       return null;
     }
-  }
-
-  private nowSeconds(): number {
-    return Math.floor(this.clock.now().getTime() / 1000);
   }
 }

@@ -1,5 +1,5 @@
-import { Body, Controller, Get, HttpCode, HttpStatus, Ip, Param, Patch, Post, Req, Res } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Get, HttpCode, HttpStatus, Ip, Param, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { ApiBearerAuth, ApiBody, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { SessionView } from '@mantlepiece/shared';
 import { ConfigService } from '../config/config.service.js';
@@ -14,6 +14,7 @@ import { CompletePasswordResetDto } from './dto/complete-password-reset.dto.js';
 import { RequestPasswordResetDto } from './dto/request-password-reset.dto.js';
 import { SignInDto } from './dto/sign-in.dto.js';
 import { UpdateProfileDto } from './dto/update-profile.dto.js';
+import { LocalAuthGuard } from './local-auth.guard.js';
 import { PasswordResetsService } from './password-resets.service.js';
 
 export const REFRESH_COOKIE = 'mp_refresh';
@@ -31,11 +32,14 @@ export class AuthController {
     private readonly config: ConfigService,
   ) {}
 
+  /** The local strategy has checked the credentials (and the limits) by the time this runs. */
   @Public()
+  @UseGuards(LocalAuthGuard)
   @Post('login')
   @HttpCode(HttpStatus.OK)
-  async login(@Body() dto: SignInDto, @Ip() ip: string, @Res({ passthrough: true }) res: Response): Promise<SessionView> {
-    return this.withCookie(res, await this.auth.signIn(dto.email, dto.password, ip));
+  @ApiBody({ type: SignInDto })
+  async login(@CurrentUser() user: User, @Ip() ip: string, @Res({ passthrough: true }) res: Response): Promise<SessionView> {
+    return this.withCookie(res, await this.auth.signIn(user, ip));
   }
 
   @Public()
@@ -82,8 +86,8 @@ export class AuthController {
   @Public()
   @Post('password-reset')
   @HttpCode(HttpStatus.ACCEPTED)
-  async requestPasswordReset(@Body() dto: RequestPasswordResetDto): Promise<void> {
-    await this.passwordResets.requestReset(dto.email);
+  async requestPasswordReset(@Body() dto: RequestPasswordResetDto, @Ip() ip: string): Promise<void> {
+    await this.passwordResets.requestReset(dto.email, ip);
   }
 
   @Public()

@@ -1,42 +1,48 @@
-import { CanActivate, ExecutionContext, ForbiddenException, Injectable, UnauthorizedException } from '@nestjs/common';
+import { ForbiddenException, Injectable, UnauthorizedException, type ExecutionContext } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
+import { AuthGuard as PassportAuthGuard } from '@nestjs/passport';
 import type { Role } from '@mantlepiece/shared';
 import { isDeviceToken } from '../kiosks/device-token.js';
-import { UsersService } from '../users/users.service.js';
-import { AccessTokenService } from './access-token.service.js';
+import type { User } from '../users/models/user.model.js';
 import { IS_PUBLIC, REQUIRED_ROLES } from './auth.decorators.js';
 import type { AuthenticatedRequest } from './authenticated-request.js';
 
+const SIGN_IN_REQUIRED = 'Sign in to continue.';
+
 /**
- * Guards every route: a route is open only when marked @Public(); otherwise it needs a valid
- * access token of an active account, and, when marked @Roles(...), one of those roles.
- * The account is read on each request so a deactivation or role change counts at once.
+ * Guards every route: a route is open only when marked @Public(); otherwise it needs an access
+ * token in the Authorization header (the bearer strategy) of an active account whose session has
+ * not ended, and, when marked @Roles(...), one of those roles. The account and the session are
+ * read on each request, so a deactivation, a sign-out or a role change counts at once.
  */
 @Injectable()
-export class AuthGuard implements CanActivate {
-  constructor(
-    private readonly reflector: Reflector,
-    private readonly tokens: AccessTokenService,
-    private readonly users: UsersService,
-  ) {}
+export class AuthGuard extends PassportAuthGuard('bearer') {
+  constructor(private readonly reflector: Reflector) {
+    super();
+  }
 
-  async canActivate(context: ExecutionContext): Promise<boolean> {
+  override async canActivate(context: ExecutionContext): Promise<boolean> {
     const targets = [context.getHandler(), context.getClass()];
     if (this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, targets)) return true;
 
     const request = context.switchToHttp().getRequest<AuthenticatedRequest>();
     const [scheme, token] = (request.headers.authorization ?? '').split(' ');
+    // Only the header: a token in a URL ends up in logs and browser history.
+    if (scheme !== 'Bearer' || !token) throw new UnauthorizedException(SIGN_IN_REQUIRED);
     // A kiosk's device token opens the kiosk routes and nothing else.
-    if (scheme === 'Bearer' && token && isDeviceToken(token)) throw new ForbiddenException('A kiosk’s device token opens only the kiosk routes.');
-    const userId = scheme === 'Bearer' && token ? await this.tokens.verify(token) : null;
-    const user = userId === null ? null : await this.users.findActive(userId);
-    if (!user) throw new UnauthorizedException('Sign in to continue.');
-    request.user = user;
+    if (isDeviceToken(token)) throw new ForbiddenException('A kiosk’s device token opens only the kiosk routes.');
+    await super.canActivate(context);
 
     const required = this.reflector.getAllAndOverride<Role[] | undefined>(REQUIRED_ROLES, targets);
-    if (required?.length && !required.some((role) => user.roles.includes(role))) {
+    if (required?.length && !required.some((role) => request.user.roles.includes(role))) {
       throw new ForbiddenException('Your role does not allow this.');
     }
     return true;
+  }
+
+  override handleRequest<TUser = User>(error: unknown, user: TUser | false): TUser {
+    if (error) throw error;
+    if (!user) throw new UnauthorizedException(SIGN_IN_REQUIRED);
+    return user;
   }
 }

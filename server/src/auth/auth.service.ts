@@ -20,6 +20,7 @@ export interface IssuedSession {
 /** The one message for a wrong address and a wrong password alike, so neither can be probed. */
 export const WRONG_CREDENTIALS = 'Email or password is incorrect.';
 
+/** The rules of signing in and of sessions; the passport strategies call them. */
 @Injectable()
 export class AuthService {
   constructor(
@@ -33,20 +34,34 @@ export class AuthService {
     private readonly clock: Clock,
   ) {}
 
-  async signIn(email: string, password: string, clientAddress: string): Promise<IssuedSession> {
+  /** The account these credentials open, within the sign-in limits; 401 or 429 otherwise. */
+  async checkCredentials(email: string, password: string, clientAddress: string): Promise<User> {
     const address = email.trim().toLowerCase();
-    await this.signInAttempts.assertAllowed(address, clientAddress);
+    const spent = await this.signInAttempts.take(address, clientAddress);
     const user = await this.users.findByEmail(address);
     const passwordMatches = await this.hasher.verify(user?.passwordHash, password);
     if (!user || !user.active || !passwordMatches) {
-      await this.signInAttempts.recordFailure(address, clientAddress);
+      await this.signInAttempts.failed(address, clientAddress, spent);
       throw new UnauthorizedException(WRONG_CREDENTIALS);
     }
-    await this.signInAttempts.clear(address);
+    await this.signInAttempts.succeeded(address, clientAddress);
+    return user;
+  }
+
+  /** Starts a session for a person whose credentials were just checked. */
+  async signIn(user: User, clientAddress: string): Promise<IssuedSession> {
     user.lastSignInAt = this.clock.now();
     await user.save();
     await this.audit.record({ actorId: user.id, action: 'auth.signed-in', targetType: 'user', targetId: user.id, clientAddress });
-    return this.startSession(user, await this.refreshTokens.issue(user.id));
+    return this.startSession(user);
+  }
+
+  /** The active person an access token was issued to, while its session lasts; null otherwise. */
+  async personOf(accessToken: string): Promise<User | null> {
+    const holder = await this.accessTokens.verify(accessToken);
+    if (!holder) return null;
+    const [user, live] = await Promise.all([this.users.findActive(holder.userId), this.refreshTokens.isLive(holder.sessionId, holder.userId)]);
+    return live ? user : null;
   }
 
   async refresh(token: string | undefined, clientAddress: string): Promise<IssuedSession> {
@@ -55,7 +70,8 @@ export class AuthService {
       : { ok: false as const };
     const user = rotation.ok ? await this.users.findActive(rotation.userId) : null;
     if (!rotation.ok || !user) throw new UnauthorizedException('Your session has ended. Sign in again.');
-    return this.startSession(user, rotation.next);
+    const accessToken = await this.accessTokens.issue({ userId: user.id, sessionId: rotation.sessionId }, rotation.rotatedAt);
+    return { session: { accessToken, user: toUserView(user) }, refresh: rotation.next };
   }
 
   async signOut(token: string | undefined): Promise<void> {
@@ -63,11 +79,11 @@ export class AuthService {
   }
 
   async acceptInvitation(token: string, name: string, password: string, clientAddress: string): Promise<IssuedSession> {
-    const user = await this.invitations.accept(token, name, password, clientAddress);
-    return this.startSession(user, await this.refreshTokens.issue(user.id));
+    return this.startSession(await this.invitations.accept(token, name, password, clientAddress));
   }
 
-  private async startSession(user: User, refresh: IssuedRefreshToken): Promise<IssuedSession> {
-    return { session: { accessToken: await this.accessTokens.issue(user.id), user: toUserView(user) }, refresh };
+  private async startSession(user: User): Promise<IssuedSession> {
+    const { sessionId, ...refresh } = await this.refreshTokens.issue(user.id);
+    return { session: { accessToken: await this.accessTokens.issue({ userId: user.id, sessionId }), user: toUserView(user) }, refresh };
   }
 }

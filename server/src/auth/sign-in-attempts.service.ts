@@ -1,63 +1,66 @@
-import { HttpException, HttpStatus, Injectable } from '@nestjs/common';
-import { InjectModel } from '@nestjs/sequelize';
-import { Op } from 'sequelize';
+import { Injectable } from '@nestjs/common';
 import { AuditService } from '../audit/audit.service.js';
-import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
-import { SignInFailure } from './models/sign-in-failure.model.js';
+import { RateLimitsService, type RateLimit } from '../rate-limits/rate-limits.service.js';
+
+const ACCOUNT_AND_ADDRESS = 'sign-in:account-address';
+const ADDRESS = 'sign-in:address';
+const ACCOUNT = 'sign-in:account';
+const DAY_MS = 86_400_000;
 
 /**
- * Counts failed sign-ins per account and per client address in the database, so the limit holds
- * however many server instances share the load.
+ * The limits on password checks (OWASP ASVS 4.0.3 V2.2.1). A flood of wrong passwords from one
+ * address locks that address out of that account (and, past a larger count, out of every
+ * account), but not the owner signing in from elsewhere; guesses at one account spread over many
+ * addresses are slowed down instead: past a free allowance each try waits twice as long as the
+ * last. Each check is taken from the limits before the password is hashed, so parallel requests
+ * cannot all slip through.
  */
 @Injectable()
 export class SignInAttemptsService {
   constructor(
-    @InjectModel(SignInFailure) private readonly failures: typeof SignInFailure,
+    private readonly limits: RateLimitsService,
     private readonly audit: AuditService,
-    private readonly clock: Clock,
     private readonly config: ConfigService,
   ) {}
 
-  async assertAllowed(email: string, clientAddress: string): Promise<void> {
-    const [forAccount, forAddress] = await this.countRecent(email, clientAddress);
-    if (forAccount >= this.config.signInMaxFailuresPerAccount || forAddress >= this.config.signInMaxFailuresPerAddress) {
-      throw this.tooMany();
-    }
+  /** Takes one password check from the limits, narrowest first, or throws 429. */
+  async take(email: string, clientAddress: string): Promise<RateLimit[]> {
+    return this.limits.take(this.limitsOf(email, clientAddress), 'Too many failed sign-ins.');
   }
 
-  /** Records a failure; the one that reaches a limit is written to the audit trail. */
-  async recordFailure(email: string, clientAddress: string): Promise<void> {
-    await this.failures.create({ email, clientAddress, createdAt: this.clock.now() });
-    const [forAccount, forAddress] = await this.countRecent(email, clientAddress);
-    const scope =
-      forAccount === this.config.signInMaxFailuresPerAccount ? 'account'
-        : forAddress === this.config.signInMaxFailuresPerAddress ? 'address' : null;
-    if (scope) {
+  /** The right password: the account's counts start afresh and the address's check is given back. */
+  async succeeded(email: string, clientAddress: string): Promise<void> {
+    const [accountAndAddress, address, account] = this.limitsOf(email, clientAddress);
+    await this.limits.clear(accountAndAddress.scope, accountAndAddress.subject);
+    await this.limits.clear(account.scope, account.subject);
+    await this.limits.refund([address]);
+  }
+
+  /** A wrong password; the one that uses up a limit is written to the audit trail. */
+  async failed(email: string, clientAddress: string, spent: RateLimit[]): Promise<void> {
+    for (const limit of spent) {
       await this.audit.record({
         actorId: null, action: 'auth.sign-in-locked', targetType: 'email', targetId: email.slice(0, 64),
-        detail: { scope, email, clientAddress, minutes: this.config.signInWindowMinutes }, clientAddress,
+        detail: { scope: limit.scope.replace('sign-in:', ''), email, clientAddress, minutes: Math.round(limit.windowMs / 60_000) },
+        clientAddress,
       });
     }
   }
 
-  /** A successful sign-in or a new password clears the account's count (not the address's). */
-  async clear(email: string): Promise<void> {
-    await this.failures.destroy({ where: { email } });
+  /** A new password: every lock-out and slow-down of the account ends, from every address. */
+  async clearAccount(email: string): Promise<void> {
+    await this.limits.clear(ACCOUNT_AND_ADDRESS, { startsWith: `${email} ` });
+    await this.limits.clear(ACCOUNT, email);
   }
 
-  private countRecent(email: string, clientAddress: string): Promise<[number, number]> {
-    const since = { [Op.gt]: this.clock.fromNow(-this.config.signInWindowMinutes * 60_000) };
-    return Promise.all([
-      this.failures.count({ where: { email, createdAt: since } }),
-      this.failures.count({ where: { clientAddress, createdAt: since } }),
-    ]);
-  }
-
-  private tooMany(): HttpException {
-    return new HttpException(
-      { statusCode: 429, message: `Too many failed sign-ins. Try again in ${this.config.signInWindowMinutes} minutes.` },
-      HttpStatus.TOO_MANY_REQUESTS,
-    );
+  private limitsOf(email: string, clientAddress: string): [RateLimit, RateLimit, RateLimit] {
+    const windowMs = this.config.signInWindowMinutes * 60_000;
+    return [
+      { scope: ACCOUNT_AND_ADDRESS, subject: `${email} ${clientAddress}`, max: this.config.signInMaxFailuresPerAccountAndAddress, windowMs },
+      { scope: ADDRESS, subject: clientAddress, max: this.config.signInMaxFailuresPerAddress, windowMs },
+      // About 20 tries in the first quarter hour, then one per window: roughly a hundred a day (NIST SP 800-63B 5.2.2).
+      { scope: ACCOUNT, subject: email, max: this.config.signInFreeFailuresPerAccount, windowMs: DAY_MS, slowDown: { baseMs: 1000, maxMs: windowMs } },
+    ];
   }
 }

@@ -1,6 +1,7 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { Response } from 'express';
 import type { ApiErrorBody } from '@mantlepiece/shared';
+import { TooManyAttemptsException } from '../rate-limits/too-many-attempts.exception.js';
 
 /** Shapes every error the API sends as ApiErrorBody; the details of a crash stay in the log. */
 @Catch()
@@ -10,7 +11,9 @@ export class ApiExceptionFilter implements ExceptionFilter {
   catch(exception: unknown, host: ArgumentsHost): void {
     const body = toErrorBody(exception);
     if (body.statusCode >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
-    host.switchToHttp().getResponse<Response>().status(body.statusCode).json(body);
+    const response = host.switchToHttp().getResponse<Response>();
+    if (exception instanceof TooManyAttemptsException) response.set('Retry-After', String(exception.retryAfterSeconds));
+    response.status(body.statusCode).json(body);
   }
 }
 

@@ -27,9 +27,19 @@ export class ConfigService {
   readonly refreshTokenTtlDays = intFromEnv('REFRESH_TOKEN_TTL_DAYS', 14);
   readonly invitationTtlHours = intFromEnv('INVITATION_TTL_HOURS', 72);
   readonly passwordResetTtlMinutes = intFromEnv('PASSWORD_RESET_TTL_MINUTES', 60);
+  /** Two refreshes with one refresh token this close together (two tabs) get the same new pair instead of a sign-out. */
+  readonly refreshReuseGraceSeconds = intFromEnv('REFRESH_REUSE_GRACE_SECONDS', 10);
   readonly signInWindowMinutes = intFromEnv('SIGN_IN_WINDOW_MINUTES', 15);
-  readonly signInMaxFailuresPerAccount = intFromEnv('SIGN_IN_MAX_FAILURES_PER_ACCOUNT', 5);
+  /** Wrong passwords for one account from one client address before that address is locked out of it. */
+  readonly signInMaxFailuresPerAccountAndAddress = intFromEnv('SIGN_IN_MAX_FAILURES_PER_ACCOUNT_AND_ADDRESS', 5);
+  /** Wrong passwords from one client address, whichever accounts, before it is locked out. */
   readonly signInMaxFailuresPerAddress = intFromEnv('SIGN_IN_MAX_FAILURES_PER_ADDRESS', 30);
+  /** Wrong passwords for one account, from anywhere, before each further try waits twice as long as the last. */
+  readonly signInFreeFailuresPerAccount = intFromEnv('SIGN_IN_FREE_FAILURES_PER_ACCOUNT', 10);
+  readonly passwordResetsPerAccountPerHour = intFromEnv('PASSWORD_RESETS_PER_ACCOUNT_PER_HOUR', 3);
+  readonly passwordResetsPerAddressPerHour = intFromEnv('PASSWORD_RESETS_PER_ADDRESS_PER_HOUR', 10);
+  /** Pairing codes one client address may ask for per quarter hour (a kiosk asks once per code, every 10 minutes). */
+  readonly pairingStartsPerAddress = intFromEnv('PAIRING_STARTS_PER_ADDRESS', 60);
 
   readonly studioDist = process.env.STUDIO_DIST;
   readonly kioskDist = process.env.KIOSK_DIST;

@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
+import { PasswordResetsService } from '../auth/password-resets.service.js';
 import { MailOutboxWorker } from '../mail/mail-outbox.worker.js';
 import { discardUnsentMail } from '../../test/mail-helpers.js';
 import { bearer, createPerson, createTestApp, signIn } from '../../test/test-app.js';
@@ -14,6 +15,7 @@ describe('captured mail (development)', () => {
   it('lists the stand-in’s messages, newest first, and shows one with its text and HTML', async () => {
     const person = await createPerson(t, { roles: ['curator'], name: 'Oskar Lind' });
     await request(t.http).post('/api/auth/password-reset').send({ email: person.email });
+    await t.app.get(PasswordResetsService).mailRequestedLinks();
     await t.app.get(MailOutboxWorker).deliverDue();
 
     const list = await request(t.http).get('/api/dev/mail?pageSize=100').set(bearer(accessToken));

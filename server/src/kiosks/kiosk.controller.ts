@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Headers, HttpCode, HttpStatus, NotFoundException, Param, Post, Req, Res } from '@nestjs/common';
+import { Body, Controller, Get, Headers, HttpCode, HttpStatus, Ip, NotFoundException, Param, Post, Req, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../auth/auth.decorators.js';
@@ -23,8 +23,8 @@ export class KioskController {
 
   @Public()
   @Post('pair/start')
-  start() {
-    return this.pairing.start();
+  start(@Ip() ip: string) {
+    return this.pairing.start(ip);
   }
 
   @Public()

@@ -3,6 +3,7 @@ import { SequelizeModule } from '@nestjs/sequelize';
 import { FleetStatesModule } from '../fleet/fleet-states.module.js';
 import { ReleaseFile } from '../releases/models/release-file.model.js';
 import { Release } from '../releases/models/release.model.js';
+import { RateLimitsModule } from '../rate-limits/rate-limits.module.js';
 import { ReleasesModule } from '../releases/releases.module.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
@@ -13,15 +14,14 @@ import { KiosksService } from './kiosks.service.js';
 import { KioskEvent } from './models/kiosk-event.model.js';
 import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
 import { Kiosk } from './models/kiosk.model.js';
-import { PairingFailure } from './models/pairing-failure.model.js';
 import { PairingRequest } from './models/pairing-request.model.js';
 import { PairingAttemptsService } from './pairing-attempts.service.js';
 import { PairingService } from './pairing.service.js';
 
 @Module({
   imports: [
-    SequelizeModule.forFeature([Kiosk, PairingRequest, PairingFailure, KioskHeartbeat, KioskEvent, Station, Gallery, Release, ReleaseFile]),
-    ReleasesModule, FleetStatesModule,
+    SequelizeModule.forFeature([Kiosk, PairingRequest, KioskHeartbeat, KioskEvent, Station, Gallery, Release, ReleaseFile]),
+    ReleasesModule, FleetStatesModule, RateLimitsModule,
   ],
   controllers: [KioskController, KiosksController],
   providers: [PairingService, PairingAttemptsService, KiosksService, DeviceTokenGuard],

@@ -1,44 +1,48 @@
-import { HttpException, HttpStatus, Injectable } from '@nestjs/common';
-import { InjectModel } from '@nestjs/sequelize';
-import { Op } from 'sequelize';
-import { Clock } from '../clock/clock.service.js';
-import { PairingFailure } from './models/pairing-failure.model.js';
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '../config/config.service.js';
+import { RateLimitsService, type RateLimit } from '../rate-limits/rate-limits.service.js';
 
 export const PAIRING_WINDOW_MINUTES = 15;
 export const PAIRING_MAX_FAILURES_PER_STATION = 5;
 export const PAIRING_MAX_FAILURES_PER_ADDRESS = 20;
+const WINDOW_MS = PAIRING_WINDOW_MINUTES * 60_000;
 
 /**
- * Counts wrong pairing codes per station and per client address in the database, as sign-in
- * failures are counted, so the limit holds across server instances. A code is six characters
- * from 29, so a handful of tries per quarter hour leaves guessing hopeless.
+ * The limits on pairing, counted by the shared rate limits: codes a client address may ask for,
+ * and codes tried per station and per client address. A code is six characters from 29, so a
+ * handful of tries per quarter hour leaves guessing hopeless.
  */
 @Injectable()
 export class PairingAttemptsService {
   constructor(
-    @InjectModel(PairingFailure) private readonly failures: typeof PairingFailure,
-    private readonly clock: Clock,
+    private readonly limits: RateLimitsService,
+    private readonly config: ConfigService,
   ) {}
 
-  async assertAllowed(stationId: number, clientAddress: string): Promise<void> {
-    const [forStation, forAddress] = await this.countRecent(stationId, clientAddress);
-    if (forStation >= PAIRING_MAX_FAILURES_PER_STATION || forAddress >= PAIRING_MAX_FAILURES_PER_ADDRESS) {
-      throw new HttpException(
-        { statusCode: 429, message: `Too many wrong pairing codes. Try again in ${PAIRING_WINDOW_MINUTES} minutes.` },
-        HttpStatus.TOO_MANY_REQUESTS,
-      );
-    }
+  /** One new pairing code for this address, or 429: each start stores a row. */
+  async takeStart(clientAddress: string): Promise<void> {
+    await this.limits.take(
+      [{ scope: 'pairing-start:address', subject: clientAddress, max: this.config.pairingStartsPerAddress, windowMs: WINDOW_MS }],
+      'Too many pairing codes asked for from this address.',
+    );
   }
 
-  async recordFailure(stationId: number, clientAddress: string): Promise<void> {
-    await this.failures.create({ stationId, clientAddress, createdAt: this.clock.now() });
+  /** One code check, taken before the code is looked up, or 429. */
+  async takeCheck(stationId: number, clientAddress: string): Promise<RateLimit[]> {
+    const limits = this.checkLimits(stationId, clientAddress);
+    await this.limits.take(limits, 'Too many wrong pairing codes.');
+    return limits;
   }
 
-  private countRecent(stationId: number, clientAddress: string): Promise<[number, number]> {
-    const since = { [Op.gt]: this.clock.fromNow(-PAIRING_WINDOW_MINUTES * 60_000) };
-    return Promise.all([
-      this.failures.count({ where: { stationId, createdAt: since } }),
-      this.failures.count({ where: { clientAddress, createdAt: since } }),
-    ]);
+  /** The right code: only wrong ones count. */
+  async checkSucceeded(limits: RateLimit[]): Promise<void> {
+    await this.limits.refund(limits);
+  }
+
+  private checkLimits(stationId: number, clientAddress: string): RateLimit[] {
+    return [
+      { scope: 'pairing-code:station', subject: String(stationId), max: PAIRING_MAX_FAILURES_PER_STATION, windowMs: WINDOW_MS },
+      { scope: 'pairing-code:address', subject: clientAddress, max: PAIRING_MAX_FAILURES_PER_ADDRESS, windowMs: WINDOW_MS },
+    ];
   }
 }

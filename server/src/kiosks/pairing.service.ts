@@ -39,8 +39,9 @@ export class PairingService {
     private readonly sequelize: Sequelize,
   ) {}
 
-  /** A new code for an unpaired kiosk to show, and the poll token it asks with. Only hashes are kept. */
-  async start(): Promise<PairStartResponse> {
+  /** A new code for an unpaired kiosk to show, and the poll token it asks with; so many per client address. Only hashes are kept. */
+  async start(clientAddress: string): Promise<PairStartResponse> {
+    await this.attempts.takeStart(clientAddress);
     const expiresAt = this.clock.fromNow(PAIRING_TTL_MS);
     let code = newPairingCode();
     // Two screens showing the same code at once would make a technician pair the wrong one.
@@ -75,12 +76,12 @@ export class PairingService {
 
   /**
    * Binds the kiosk showing the code to the station. A kiosk paired to the station before is
-   * unpaired: a station is one screen. Wrong codes count towards the throttle.
+   * unpaired: a station is one screen. Each check is taken from the limits first; a right one is given back.
    */
   async pairStation(stationId: number, typedCode: string, technician: User, clientAddress: string): Promise<{ kioskId: number }> {
     const station = await this.stations.findByPk(stationId);
     if (!station) throw new NotFoundException('There is no such station.');
-    await this.attempts.assertAllowed(stationId, clientAddress);
+    const check = await this.attempts.takeCheck(stationId, clientAddress);
     const kioskId = await this.sequelize.transaction(async (transaction) => {
       const now = this.clock.now();
       const request = await this.requests.findOne({
@@ -100,13 +101,13 @@ export class PairingService {
       return kiosk.id;
     });
     if (kioskId === null) {
-      await this.attempts.recordFailure(stationId, clientAddress);
       throw new UnprocessableEntityException({
         statusCode: 422,
         message: 'No kiosk is showing this code.',
         errors: [{ path: ['pairingCode'], message: 'No kiosk is showing this code, or it has expired. Check the screen and type it again.' }],
       });
     }
+    await this.attempts.checkSucceeded(check);
     return { kioskId };
   }
 }

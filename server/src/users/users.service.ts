@@ -4,6 +4,8 @@ import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { Page, Role, UserView } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
+import { RefreshToken } from '../auth/models/refresh-token.model.js';
+import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import type { ListUsersQuery } from './dto/list-users.query.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
@@ -26,8 +28,10 @@ const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, '\\$&')}%`;
 export class UsersService {
   constructor(
     @InjectModel(User) private readonly users: typeof User,
+    @InjectModel(RefreshToken) private readonly refreshTokens: typeof RefreshToken,
     private readonly sequelize: Sequelize,
     private readonly audit: AuditService,
+    private readonly clock: Clock,
   ) {}
 
   findActive(id: number): Promise<User | null> {
@@ -88,10 +92,13 @@ export class UsersService {
         await record('user.locales-changed', { from: user.locales, to: changes.locales });
         user.locales = changes.locales;
       }
-      // A deactivated account fails the guard and refresh at once; its sessions need no other revoking.
+      // A deactivated account fails the guard and refresh at once; its sessions end too, so activating it again does not revive them.
       if (changes.active !== undefined && changes.active !== user.active) {
         await record(changes.active ? 'user.activated' : 'user.deactivated', {});
         user.active = changes.active;
+        if (!changes.active) {
+          await this.refreshTokens.update({ revokedAt: this.clock.now() }, { where: { userId: user.id, revokedAt: null }, transaction });
+        }
       }
       if (changes.name !== undefined) user.name = changes.name;
       await user.save({ transaction });

@@ -19,5 +19,9 @@ export class PasswordReset extends Model {
   @Column({ type: DataType.DATE(3), allowNull: true })
   usedAt: Date | null;
 
+  /** A newer link was asked for, or another link of the account was used. */
+  @Column({ type: DataType.DATE(3), allowNull: true })
+  voidedAt: Date | null;
+
   declare id: number;
 }

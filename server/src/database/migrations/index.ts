@@ -11,6 +11,7 @@ import * as venueSigningKeys from './0400-venue-signing-keys.js';
 import * as releases from './0401-releases.js';
 import * as kiosks from './0402-kiosks.js';
 import * as fleetWatch from './0500-fleet-watch.js';
+import * as rateLimitsAndSessions from './0610-rate-limits-and-sessions.js';
 import * as livingStory from './0650-living-story.js';
 
 interface MigrationModule {
@@ -32,6 +33,7 @@ const modules: [string, MigrationModule][] = [
   ['0401-releases', releases],
   ['0402-kiosks', kiosks],
   ['0500-fleet-watch', fleetWatch],
+  ['0610-rate-limits-and-sessions', rateLimitsAndSessions],
   ['0650-living-story', livingStory],
 ];
 

@@ -2,8 +2,9 @@ import { applyDecorators } from '@nestjs/common';
 import { ApiProperty } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsEmail, IsIn, IsString, Matches, MaxLength, MinLength } from 'class-validator';
-import { ROLES } from '@mantlepiece/shared';
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH, ROLES } from '@mantlepiece/shared';
 import { BCP47, UI_LANGUAGES } from '../../common/ui-languages.js';
+import { IsAcceptablePassword } from '../password-rules.js';
 
 /** Field rules that several DTOs share, so an e-mail or a role list is checked the same everywhere. */
 export const EmailField = () =>
@@ -47,10 +48,9 @@ export const UiLanguageField = () =>
     IsIn(UI_LANGUAGES, { message: `The UI language must be one of ${UI_LANGUAGES.join(', ')}.` }),
   );
 
+/** A password someone chooses: the rules of shared's passwords.ts, and the list of common ones. */
 export const NewPasswordField = () =>
   applyDecorators(
-    ApiProperty({ minLength: 12 }),
-    IsString(),
-    MinLength(12, { message: 'Use at least 12 characters.' }),
-    MaxLength(256),
+    ApiProperty({ minLength: MIN_PASSWORD_LENGTH, maxLength: MAX_PASSWORD_LENGTH }),
+    IsAcceptablePassword(),
   );
