@@ -1,6 +1,7 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { Response } from 'express';
 import type { ApiErrorBody } from '@mantlepiece/shared';
+import { DATABASE_RETRY_AFTER_SECONDS, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from '../database/database-unavailable.js';
 import { TooManyAttemptsException } from '../rate-limits/too-many-attempts.exception.js';
 
 /** Shapes every error the API sends as ApiErrorBody; the details of a crash stay in the log. */
@@ -10,9 +11,13 @@ export class ApiExceptionFilter implements ExceptionFilter {
 
   catch(exception: unknown, host: ArgumentsHost): void {
     const body = toErrorBody(exception);
-    if (body.statusCode >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    const databaseUnavailable = isDatabaseUnavailable(exception);
+    // An outage fails every request alike: one line each, not a stack trace each.
+    if (databaseUnavailable) this.logger.warn(`database unavailable: ${(exception as Error).message}`);
+    else if (body.statusCode >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
     const response = host.switchToHttp().getResponse<Response>();
     if (exception instanceof TooManyAttemptsException) response.set('Retry-After', String(exception.retryAfterSeconds));
+    if (databaseUnavailable) response.set('Retry-After', String(DATABASE_RETRY_AFTER_SECONDS));
     response.status(body.statusCode).json(body);
   }
 }
@@ -39,5 +44,6 @@ export function toErrorBody(exception: unknown): ApiErrorBody {
       ...(errors ? { errors } : {}),
     };
   }
+  if (isDatabaseUnavailable(exception)) return { statusCode: HttpStatus.SERVICE_UNAVAILABLE, message: DATABASE_UNAVAILABLE_MESSAGE };
   return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Something went wrong on the server.' };
 }

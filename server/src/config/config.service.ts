@@ -41,6 +41,17 @@ export class ConfigService {
   /** Pairing codes one client address may ask for per quarter hour (a kiosk asks once per code, every 10 minutes). */
   readonly pairingStartsPerAddress = intFromEnv('PAIRING_STARTS_PER_ADDRESS', 60);
 
+  /**
+   * Bounded waits on the database, so a stalled MariaDB costs a request seconds and a 503, never an
+   * endless wait: opening a connection, waiting for a free one in the pool, and one statement
+   * (MariaDB's max_statement_time; 0 lifts that limit). Migrations through the CLI are not bounded.
+   */
+  readonly dbConnectTimeoutMs = intFromEnv('DB_CONNECT_TIMEOUT_MS', 5000);
+  readonly dbAcquireTimeoutMs = intFromEnv('DB_ACQUIRE_TIMEOUT_MS', 5000);
+  readonly dbStatementTimeoutMs = intFromEnv('DB_STATEMENT_TIMEOUT_MS', 5000);
+  /** How long `GET /api/health` waits for the database before it answers `db: down`. */
+  readonly healthDbTimeoutMs = intFromEnv('HEALTH_DB_TIMEOUT_MS', 1000);
+
   readonly studioDist = process.env.STUDIO_DIST;
   readonly kioskDist = process.env.KIOSK_DIST;
   readonly demoPassword = process.env.DEMO_PASSWORD ?? 'mantlepiece-demo';
@@ -86,9 +97,14 @@ export class ConfigService {
     return this.jwtSecret;
   }
 
+  /** People reach us over HTTPS (else over plain HTTP on a venue's own network). */
+  get overHttps(): boolean {
+    return this.publicUrl.startsWith('https:');
+  }
+
   /** Cookies go out as Secure only when people reach us over HTTPS. */
   get secureCookies(): boolean {
-    return this.publicUrl.startsWith('https:');
+    return this.overHttps;
   }
 }
 

@@ -1,7 +1,7 @@
 import { Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
 import { ConfigService } from '../config/config.service.js';
-import { sequelizeOptions } from './sequelize-options.js';
+import { boundedSequelizeOptions } from './sequelize-options.js';
 
 /** The app's connection. Models come from each feature's forFeature; the schema only from migrations. */
 @Module({
@@ -9,7 +9,11 @@ import { sequelizeOptions } from './sequelize-options.js';
     SequelizeModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService) => ({
-        ...sequelizeOptions(config.databaseUrl),
+        ...boundedSequelizeOptions(config.databaseUrl, {
+          connectTimeoutMs: config.dbConnectTimeoutMs,
+          acquireTimeoutMs: config.dbAcquireTimeoutMs,
+          statementTimeoutMs: config.dbStatementTimeoutMs,
+        }),
         autoLoadModels: true,
         synchronize: false,
       }),
