@@ -41,6 +41,17 @@ async function apiAs(email: string) {
   };
 }
 
+const submissionNote = 'First draft of the plate-speed panel; please check the rate.';
+
+/** Submit for review through its dialog, with a note to the educator. */
+async function submitWithNote(page: Page, text: string) {
+  await page.getByRole('button', { name: 'Submit for review' }).click();
+  const dialog = page.getByRole('dialog');
+  await dialog.getByRole('textbox', { name: 'Note to the educator (optional)' }).fill(text);
+  await dialog.getByRole('button', { name: 'Submit for review' }).click();
+  await dialog.waitFor({ state: 'detached' });
+}
+
 const stateBadge = (page: Page) => page.locator('header').getByText(/^(Draft|In review|Changes requested|Approved|Retired)$/).first().textContent();
 
 /** Every captured message the stand-in wrote for one recipient, parsed. */
@@ -68,14 +79,17 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 describe('a story goes through review in the browser', () => {
-  it('the curator submits the story and sees its preflight and the In review badge', async () => {
+  it('the curator sees the draft’s preflight, submits the story with a note through the dialog, and sees the In review badge', async () => {
     await curator.goto(`/stories/${storyId}`);
     await curator.getByRole('heading', { level: 1, name: title }).waitFor();
     expect(await stateBadge(curator)).toBe('Draft');
-    await curator.getByRole('button', { name: 'Submit for review' }).click();
+    await curator.locator('[data-draft-preflight]').getByText('Preflight: nothing blocks a submission').waitFor();
+    await submitWithNote(curator, submissionNote);
     await curator.getByText('Revision 1 is submitted', { exact: false }).waitFor();
-    expect(await curator.getByText(/No blockers/).count()).toBeGreaterThan(0);
     await expect.poll(() => stateBadge(curator), settled).toBe('In review');
+    // The editor is closed while an educator reads it; Withdraw would open it again.
+    await curator.getByRole('button', { name: 'Withdraw' }).waitFor();
+    expect(await curator.getByRole('button', { name: 'Submit for review' }).count()).toBe(0);
   });
 
   it('the educator finds it in the review queue and asks for changes with a note', async () => {
@@ -83,6 +97,8 @@ describe('a story goes through review in the browser', () => {
     await educator.getByRole('heading', { level: 1, name: 'Reviews' }).waitFor();
     await educator.getByRole('link', { name: title }).click();
     await educator.getByRole('heading', { level: 1, name: `${title} · revision 1` }).waitFor();
+    await educator.locator('[data-submission-note]').getByText(submissionNote).waitFor();
+    await educator.locator('[data-comparison-basis="first_review"]').waitFor();
     await educator.getByRole('radio', { name: 'Request changes' }).check();
     // A request for changes without a note is refused before it is sent.
     await educator.getByRole('button', { name: 'Send back for changes' }).click();
@@ -107,17 +123,21 @@ describe('a story goes through review in the browser', () => {
     await curator.keyboard.press('ControlOrMeta+a');
     await curator.keyboard.type(fixedText);
     await expect.poll(() => curator.locator('[data-save-status]').getAttribute('data-save-status'), settled).toBe('saved');
-    await curator.getByRole('button', { name: 'Submit for review' }).click();
+    await submitWithNote(curator, 'The rate is fixed.');
     await curator.getByText('Revision 2 is submitted', { exact: false }).waitFor();
     await expect.poll(() => stateBadge(curator), settled).toBe('In review');
   });
 
-  it('the educator sees the word-level change against nothing approved yet, and approves', async () => {
+  it('the educator sees the word-level change since the revision they asked changes on, and approves', async () => {
     await educator.goto('/reviews');
     await educator.getByRole('link', { name: title }).click();
     await educator.getByRole('heading', { level: 1, name: `${title} · revision 2` }).waitFor();
-    // Nothing was approved before, so every word of the panel is new.
-    await expect.poll(() => educator.locator('[data-text-diff] ins').first().textContent(), settled).toContain('a few centimetres');
+    // Nothing is approved yet, so the comparison is with revision 1, where the changes were asked for: only the rate changed.
+    await educator.locator('[data-comparison-basis="changes_requested"]').waitFor();
+    const marked = async (tag: 'ins' | 'del') => (await educator.locator(`[data-text-diff] ${tag}`).allTextContents()).join(' ');
+    await expect.poll(() => marked('ins'), settled).toContain('centimetres');
+    expect(await marked('ins')).not.toContain('plates under our feet');
+    expect(await marked('del')).toContain('50');
     await educator.getByRole('radio', { name: 'Approve' }).check();
     await educator.getByRole('button', { name: 'Approve this revision' }).click();
     // The state is what counts; the confirmation stays once the verdict form has left with the open revision.
@@ -150,5 +170,69 @@ describe('a story goes through review in the browser', () => {
     expect(to).toContain('curator@demo.test');
     const link = await curator.getByRole('link', { name: subject }).getAttribute('href');
     expect(approval!.text, 'the mail links to the revision page the notification opens').toContain(`${(process.env.PUBLIC_URL ?? baseUrl).replace(/\/$/, '')}${link}`);
+  });
+});
+
+describe('an approved story is fixed in the browser', () => {
+  const typoTitle = `Ridges and trenches ${Date.now().toString(36)}`;
+  const typo = 'New sea floor forms at mid-ocean rdiges and sinks at trenches.';
+  const fixed = 'New sea floor forms at mid-ocean ridges and sinks at trenches.';
+  let typoStoryId: number;
+  let firstRevisionId: number;
+  const badge = (page: Page) => page.locator('header [data-story-state]').first().textContent();
+
+  beforeAll(async () => {
+    const asCurator = await apiAs('curator@demo.test');
+    const asEducator = await apiAs('educator@demo.test');
+    typoStoryId = (await asCurator<{ id: number }>('POST', '/stories', { title: typoTitle, audience: 'family' })).id;
+    await asCurator('POST', `/stories/${typoStoryId}/panels`, { doc: panelDoc(typo), position: 0, wordBudget: 60 });
+    firstRevisionId = (await asCurator<{ revisionId: number }>('POST', `/stories/${typoStoryId}/submit`, {})).revisionId;
+    await asEducator('POST', `/revisions/${firstRevisionId}/reviews`, { verdict: 'approve' });
+  });
+
+  it('the curator revises it, fixes the typo and submits; the educator sees only the fix against the approved revision and approves', async () => {
+    await curator.goto(`/stories/${typoStoryId}`);
+    await curator.getByRole('heading', { level: 1, name: typoTitle }).waitFor();
+    expect(await badge(curator)).toBe('Approved');
+    expect(await curator.getByRole('textbox', { name: 'Panel text' }).getAttribute('contenteditable')).toBe('false');
+
+    await curator.getByRole('button', { name: 'Revise' }).click();
+    await expect.poll(() => badge(curator), settled).toBe('Approved · draft in progress');
+    const editor = curator.getByRole('textbox', { name: 'Panel text' });
+    await expect.poll(() => editor.getAttribute('contenteditable'), settled).toBe('true');
+    await editor.click();
+    await curator.keyboard.press('ControlOrMeta+a');
+    await curator.keyboard.type(fixed);
+    await expect.poll(() => curator.locator('[data-save-status]').getAttribute('data-save-status'), settled).toBe('saved');
+    await submitWithNote(curator, 'Typo: “rdiges”.');
+    await curator.getByText('Revision 2 is submitted', { exact: false }).waitFor();
+    await expect.poll(() => badge(curator), settled).toBe('Approved · new revision in review');
+
+    await educator.goto('/reviews');
+    await educator.getByRole('link', { name: typoTitle }).click();
+    await educator.getByRole('heading', { level: 1, name: `${typoTitle} · revision 2` }).waitFor();
+    await educator.locator('[data-comparison-basis="approved"]').getByRole('link', { name: 'Revision 1' }).waitFor();
+    const marked = async (tag: 'ins' | 'del') => (await educator.locator(`[data-text-diff] ${tag}`).allTextContents()).join(' ');
+    await expect.poll(() => marked('ins'), settled).toContain('ridges');
+    expect(await marked('del')).toContain('rdiges');
+    expect(await marked('ins')).not.toContain('sea floor');
+    await educator.getByRole('radio', { name: 'Approve' }).check();
+    await educator.getByRole('button', { name: 'Approve this revision' }).click();
+    await educator.locator('[data-verdict-outcome="approved"]').waitFor();
+
+    await curator.reload();
+    await expect.poll(() => badge(curator), settled).toBe('Approved');
+  });
+
+  it('does not offer Submit on a draft whose preflight has a blocker, and says which panel to fix', async () => {
+    const asCurator = await apiAs('curator@demo.test');
+    const blocked = await asCurator<{ id: number }>('POST', '/stories', { title: `Empty panel ${Date.now().toString(36)}`, audience: 'family' });
+    await asCurator('POST', `/stories/${blocked.id}/panels`, { doc: panelDoc(fixed), position: 0, wordBudget: 60 });
+    await asCurator('POST', `/stories/${blocked.id}/panels`, { doc: { type: 'doc', content: [{ type: 'paragraph' }] }, position: 1, wordBudget: 60 });
+    await curator.goto(`/stories/${blocked.id}`);
+    const preflight = curator.locator('[data-draft-preflight]');
+    await preflight.getByText('Preflight: 1 blocker to fix before this story can be submitted').waitFor();
+    await preflight.locator('[data-preflight="blocker"]').getByText('Panel 2 is empty', { exact: false }).waitFor();
+    expect(await curator.getByRole('button', { name: 'Submit for review' }).count()).toBe(0);
   });
 });
