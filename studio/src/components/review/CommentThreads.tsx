@@ -33,7 +33,7 @@ function CommentBody({ comment }: { comment: CommentView }) {
         <Text className={shared.muted}>{formatDate(comment.createdAt)}</Text>
         {comment.carriedFromRevisionId !== null ? <Badge appearance="outline" color="informative">{t('comments.carried')}</Badge> : null}
         {comment.anchorChanged === true ? <Badge appearance="tint" color="warning" data-anchor-changed>{t('comments.anchorChanged')}</Badge> : null}
-        {comment.anchorChanged === false ? <Badge appearance="outline" color="subtle">{t('comments.anchorSame')}</Badge> : null}
+        {comment.anchorChanged === false ? <Badge appearance="tint" color="success">{t('comments.anchorSame')}</Badge> : null}
       </div>
       {comment.range ? <blockquote className={styles.quote}>{comment.range.quote}</blockquote> : null}
       <p className={styles.body}>{comment.body}</p>
