@@ -1,7 +1,8 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { paragraphDoc } from '../../test/authoring-fixtures.js';
-import { createReviewApp, member, reviewVenue, storyWithPanels, submit, verdict, type Headers } from '../../test/review-fixtures.js';
+import { approvedGallery, buildRelease } from '../../test/release-fixtures.js';
+import { createReviewApp, imageDoc, member, reviewVenue, storyWithPanels, submit, verdict, type Headers } from '../../test/review-fixtures.js';
 import { bearer, createPerson, signIn, type TestApp } from '../../test/test-app.js';
 
 // Issue 12, "the living story": an approved story is revised, a submission withdrawn, and what
@@ -73,6 +74,34 @@ describe('POST /api/stories/:id/revise', () => {
     expect((await move(story.storyId, 'revise', educator)).status).toBe(403);
     expect((await move(story.storyId, 'revise', admin)).status).toBe(403);
     expect((await storyOf(story.storyId)).state).toBe('approved');
+  });
+});
+
+describe('releases of a revised story', () => {
+  const releasedStory = async (technician: Headers, releaseId: number) => {
+    const { manifest } = (await request(t.http).get(`/api/releases/${releaseId}/manifest`).set(technician).expect(200)).body;
+    return JSON.parse(manifest).stories[0] as { revisionId: number; panels: { docs: Record<string, unknown> }[] };
+  };
+
+  it('carry the approved revision while a newer draft is written and reviewed, and the newer revision once it is approved', async () => {
+    const g = await approvedGallery(t, 'living-story-release');
+    await move(g.story.storyId, 'revise', g.curator.auth).expect(200);
+    const fixed = imageDoc(g.imageId);
+    (fixed.content[0] as { content: { text: string }[] }).content[0]!.text = 'The map shows where the plates meet.';
+    await request(t.http).put(`/api/panels/${g.story.panelIds[0]}`).set(g.curator.auth).send({ doc: fixed, version: 1 }).expect(200);
+    const { revisionId: newer } = await submit(t, g.curator.auth, g.story.storyId);
+
+    const during = await buildRelease(t, g.technician.auth, g.gallery.id);
+    expect(during.state).toBe('ready');
+    const carried = await releasedStory(g.technician.auth, during.id);
+    expect(carried.revisionId).toBe(g.revisionId);
+    expect(JSON.stringify(carried.panels[0]!.docs.en)).toContain('The map shows where plates meet.');
+
+    await verdict(t, g.educator.auth, newer, { verdict: 'approve' }).expect(201);
+    const after = await buildRelease(t, g.technician.auth, g.gallery.id);
+    const released = await releasedStory(g.technician.auth, after.id);
+    expect(released.revisionId).toBe(newer);
+    expect(JSON.stringify(released.panels[0]!.docs.en)).toContain('The map shows where the plates meet.');
   });
 });
 
