@@ -1,7 +1,8 @@
 import type { TFunction } from 'i18next';
+import { MIN_PASSWORD_LENGTH, passwordProblem } from '@mantlepiece/shared';
 
-/** Passwords: at least 12 characters, as the server requires (team API contract). */
-export const MIN_PASSWORD_LENGTH = 12;
+/** The server's own length rule; it also refuses common passwords, and its message shows at the field. */
+export { MIN_PASSWORD_LENGTH };
 
 export type FieldProblems<F extends string> = Partial<Record<F, string>>;
 
@@ -19,7 +20,7 @@ export function requiredProblem(t: TFunction, value: string): string | undefined
 
 export function newPasswordProblems(t: TFunction, password: string, confirm: string): FieldProblems<'password' | 'confirm'> {
   const problems: FieldProblems<'password' | 'confirm'> = {};
-  if (password.length < MIN_PASSWORD_LENGTH) problems.password = t('validation.passwordLength', { min: MIN_PASSWORD_LENGTH });
+  if (passwordProblem(password) === 'tooShort') problems.password = t('validation.passwordLength', { min: MIN_PASSWORD_LENGTH });
   if (confirm !== password) problems.confirm = t('validation.passwordMismatch');
   return problems;
 }
