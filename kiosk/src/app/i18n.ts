@@ -1,14 +1,14 @@
 import i18next from 'i18next';
 import { initReactI18next } from 'react-i18next';
-import type { Translated } from '@mantlepiece/shared';
+import { UI_LANGUAGE_CODES, type Translated, type UiLanguage } from '@mantlepiece/shared';
 import { ar } from './locales/ar';
 import { en, type KioskMessages } from './locales/en';
 import { es } from './locales/es';
 import { fr } from './locales/fr';
 
-/** The languages the kiosk's own words come in; a venue's other languages fall back to English. */
-export const KIOSK_LANGUAGES = ['en', 'fr', 'es', 'ar'] as const;
-export type KioskLanguage = (typeof KIOSK_LANGUAGES)[number];
+/** The kiosk's own words come in our UI languages; a venue's other languages fall back to English. */
+export const KIOSK_LANGUAGES = UI_LANGUAGE_CODES;
+export type KioskLanguage = UiLanguage;
 
 export const resources = {
   en: { translation: en },

@@ -1,13 +1,13 @@
 import { useState } from 'react';
 import { FluentProvider } from '@fluentui/react-components';
 import { QueryClientProvider } from '@tanstack/react-query';
+import { languageDirection } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { RouterProvider } from 'react-router-dom';
 import { createQueryClient } from './query-client';
 import { router } from './router';
 import { useSessionLanguage } from './session-language';
 import { mantlepieceTheme } from './theme';
-import { languageDirection } from './i18n';
 
 function Routes() {
   useSessionLanguage();

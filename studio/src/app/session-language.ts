@@ -1,6 +1,7 @@
 import { useEffect, useRef } from 'react';
 import { useSession } from '../api/session';
-import { i18next, matchUiLanguage } from './i18n';
+import { matchUiLanguage } from '@mantlepiece/shared';
+import { i18next } from './i18n';
 
 /**
  * When someone signs in (or their session is restored), the studio speaks the language they

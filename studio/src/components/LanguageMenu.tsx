@@ -1,8 +1,8 @@
 import { Button, Menu, MenuItemRadio, MenuList, MenuPopover, MenuTrigger, type MenuProps } from '@fluentui/react-components';
 import { GlobeRegular } from '@fluentui/react-icons';
+import { UI_LANGUAGES, matchUiLanguage } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useSession, useUpdateMe } from '../api/session';
-import { UI_LANGUAGES, matchUiLanguage } from '../app/i18n';
 
 /** Switches the studio's language; a signed-in person's choice is also saved to their account. */
 export function LanguageMenu({ appearance = 'subtle', className }: { appearance?: 'subtle' | 'transparent'; className?: string }) {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { translationGaps } from '@mantlepiece/shared';
 import { workbenchStrings } from '../../routes/widgets/workbench-strings';
 import { i18next, resources } from './index';
-import { languageDirection, matchUiLanguage, UI_LANGUAGES } from './languages';
+import { languageDirection, matchUiLanguage, UI_LANGUAGES } from '@mantlepiece/shared';
 
 const codes = UI_LANGUAGES.map((language) => language.code);
 const complete = { missing: [], extra: [], empty: [], placeholders: [] };

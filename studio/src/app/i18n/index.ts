@@ -1,11 +1,10 @@
 import i18next from 'i18next';
 import { initReactI18next } from 'react-i18next';
-import type { Translated } from '@mantlepiece/shared';
+import { DEFAULT_UI_LANGUAGE, languageDirection, matchUiLanguage, type Translated, type UiLanguage } from '@mantlepiece/shared';
 import { ar } from './locales/ar';
 import { en } from './locales/en';
 import { es } from './locales/es';
 import { fr } from './locales/fr';
-import { DEFAULT_UI_LANGUAGE, languageDirection, matchUiLanguage, type UiLanguage } from './languages';
 
 export const resources = {
   en: { translation: en },
@@ -49,4 +48,3 @@ void i18next.use(initReactI18next).init({
 });
 
 export { i18next };
-export * from './languages';

@@ -1,4 +1,4 @@
-import { matchUiLanguage, type UiLanguage } from '../../app/i18n';
+import { matchUiLanguage, type UiLanguage } from '@mantlepiece/shared';
 
 /** The workbench page's own words; the widgets' words come from @mantlepiece/shared's widget resources. */
 const english = {

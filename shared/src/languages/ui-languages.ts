@@ -1,6 +1,7 @@
 /**
- * The languages the studio's own screens come in, each named in itself. Adding one means a locale
- * file and one entry here; `dir` flips the whole layout for a right-to-left language.
+ * The languages the studio, the kiosk's own words and our mail come in, each named in itself.
+ * Adding one means locale files in each app and one entry here; `dir` flips a whole layout for a
+ * right-to-left language.
  */
 export const UI_LANGUAGES = [
   { code: 'en', name: 'English', dir: 'ltr' },
@@ -11,9 +12,11 @@ export const UI_LANGUAGES = [
 
 export type UiLanguage = (typeof UI_LANGUAGES)[number]['code'];
 
+export const UI_LANGUAGE_CODES: readonly UiLanguage[] = UI_LANGUAGES.map((language) => language.code);
+
 export const DEFAULT_UI_LANGUAGE: UiLanguage = 'en';
 
-/** The first candidate (a BCP 47 tag such as "fr-CA") whose language the studio speaks. */
+/** The first candidate (a BCP 47 tag such as "fr-CA") whose language we speak. */
 export function matchUiLanguage(candidates: readonly (string | null | undefined)[]): UiLanguage | undefined {
   for (const candidate of candidates) {
     const base = candidate?.toLowerCase().split('-')[0];
@@ -23,4 +26,7 @@ export function matchUiLanguage(candidates: readonly (string | null | undefined)
   return undefined;
 }
 
-export const languageDirection = (code: string) => UI_LANGUAGES.find((language) => language.code === code)?.dir ?? 'ltr';
+/** A stored or requested language as one we speak, English when we do not. */
+export const asUiLanguage = (tag: string): UiLanguage => matchUiLanguage([tag]) ?? DEFAULT_UI_LANGUAGE;
+
+export const languageDirection = (code: string): 'ltr' | 'rtl' => UI_LANGUAGES.find((language) => language.code === code)?.dir ?? 'ltr';
