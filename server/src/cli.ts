@@ -1,10 +1,12 @@
 import 'reflect-metadata';
 import { NestFactory } from '@nestjs/core';
 import { parseArgs } from 'node:util';
+import { PASSWORD_PROBLEMS, passwordProblem } from '@mantlepiece/shared';
 import { ConfigService } from './config/config.service.js';
 import { migrate } from './database/migrator.js';
 import { SeedModule } from './seed/seed.module.js';
 import { SeedService } from './seed/seed.service.js';
+import { isCommonPassword } from './users/password-rules.js';
 
 const USAGE = `Usage: node dist/cli.js <command>
   migrate                                   apply pending database migrations
@@ -42,7 +44,8 @@ const commands: Record<string, (args: string[]) => Promise<string>> = {
     const { values } = parseArgs({ args, options: { email: { type: 'string' }, name: { type: 'string' } } });
     if (!values.email || !values.name) throw new Error('create-admin needs --email and --name');
     const password = process.env.ADMIN_PASSWORD ?? (await readStdin());
-    if (password.length < 12) throw new Error('the password needs at least 12 characters');
+    const problem = passwordProblem(password, isCommonPassword);
+    if (problem) throw new Error(`the password: ${PASSWORD_PROBLEMS[problem]}`);
     const user = await withSeedService((seed) => seed.createAdmin(values.email!, values.name!, password));
     return `admin ${user.email} created`;
   },

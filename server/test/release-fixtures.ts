@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { ReleasesWorker } from '../src/releases/releases.worker.js';
 import { imageDoc, libraryImage, member, reviewVenue, storyWithPanels, submit, verdict, type Headers } from './review-fixtures.js';
-import type { TestApp } from './test-app.js';
+import { SUITE_ADDRESS, type TestApp } from './test-app.js';
 
 function expectStatus(res: request.Response, status: number, what: string): request.Response {
   if (res.status !== status) throw new Error(`${what}: expected ${status}, got ${res.status} ${JSON.stringify(res.body)}`);
@@ -49,7 +49,7 @@ export async function pairedKiosk(t: TestApp, admin: Headers, technician: Header
   const station = expectStatus(await request(t.http).post('/api/stations').set(admin).send({
     galleryId, name: `Station ${Math.random().toString(36).slice(2, 7)}`, screenWidthPx: 1920, screenHeightPx: 1080, orientation: 'landscape', mountingHeightMm: 1000,
   }), 201, 'station').body;
-  const started = expectStatus(await request(t.http).post('/api/kiosk/pair/start'), 201, 'pair start').body;
+  const started = expectStatus(await request(t.http).post('/api/kiosk/pair/start').set(SUITE_ADDRESS), 201, 'pair start').body;
   expectStatus(await request(t.http).post(`/api/stations/${station.id}/pair`).set(technician).send({ pairingCode: started.pairingCode }), 201, 'pair station');
   const credential = expectStatus(await request(t.http).post('/api/kiosk/pair/complete').send({ pollToken: started.pollToken }), 200, 'pair complete').body;
   return { station, credential, device: { Authorization: `Bearer ${credential.deviceToken}` } };

@@ -3,7 +3,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { PasswordResetsService } from '../auth/password-resets.service.js';
 import { MailOutboxWorker } from '../mail/mail-outbox.worker.js';
 import { discardUnsentMail } from '../../test/mail-helpers.js';
-import { bearer, createPerson, createTestApp, signIn } from '../../test/test-app.js';
+import { bearer, createPerson, createTestApp, signIn, SUITE_ADDRESS } from '../../test/test-app.js';
 
 const t = await createTestApp();
 await discardUnsentMail(t.app);
@@ -14,7 +14,7 @@ const { accessToken } = await signIn(t, admin.email);
 describe('captured mail (development)', () => {
   it('lists the stand-in’s messages, newest first, and shows one with its text and HTML', async () => {
     const person = await createPerson(t, { roles: ['curator'], name: 'Oskar Lind' });
-    await request(t.http).post('/api/auth/password-reset').send({ email: person.email });
+    await request(t.http).post('/api/auth/password-reset').set(SUITE_ADDRESS).send({ email: person.email });
     await t.app.get(PasswordResetsService).mailRequestedLinks();
     await t.app.get(MailOutboxWorker).deliverDue();
 

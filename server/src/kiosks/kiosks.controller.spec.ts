@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseManifest } from '@mantlepiece/shared';
 import { approvedGallery, buildRelease, pairedKiosk, publish } from '../../test/release-fixtures.js';
 import { ROLE_MATRIX } from '../../test/role-matrix.js';
-import { createTestApp, TestClock, type TestApp } from '../../test/test-app.js';
+import { createTestApp, SUITE_ADDRESS, TestClock, type TestApp } from '../../test/test-app.js';
 import { sha256Of } from '../releases/release-file-store.js';
 import { KioskEvent } from './models/kiosk-event.model.js';
 import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
@@ -40,12 +40,12 @@ async function newStation() {
   return res.body as { id: number };
 }
 
-const startPairing = async () => (await request(t.http).post('/api/kiosk/pair/start')).body as { pairingCode: string; pollToken: string; expiresAt: string };
+const startPairing = async () => (await request(t.http).post('/api/kiosk/pair/start').set(SUITE_ADDRESS)).body as { pairingCode: string; pollToken: string; expiresAt: string };
 
 describe('pairing', () => {
   it('shows a code, waits, and once a technician enters it hands the kiosk its device token and the venue key, once', async () => {
     const station = await newStation();
-    const started = await request(t.http).post('/api/kiosk/pair/start');
+    const started = await request(t.http).post('/api/kiosk/pair/start').set(SUITE_ADDRESS);
     expect(started.status).toBe(201);
     expect(started.body.pairingCode).toMatch(new RegExp(`^[${PAIRING_ALPHABET}]{6}$`));
     expect(started.body.expiresAt).toBe(new Date(clock.now().getTime() + PAIRING_TTL_MS).toISOString());
