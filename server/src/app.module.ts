@@ -13,6 +13,7 @@ import { InsightsModule } from './insights/insights.module.js';
 import { KiosksModule } from './kiosks/kiosks.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { MediaModule } from './media/media.module.js';
+import { MyWorkModule } from './my-work/my-work.module.js';
 import { NotificationsModule } from './notifications/notifications.module.js';
 import { PanelsModule } from './panels/panels.module.js';
 import { ReleasesModule } from './releases/releases.module.js';
@@ -30,7 +31,7 @@ import { WidgetsModule } from './widgets/widgets.module.js';
     DevMailModule, HealthModule, VenuesModule, WidgetsModule,
     ExhibitsModule, StoriesModule, PanelsModule, MediaModule, TranslationsModule,
     NotificationsModule, CommentsModule, RevisionsModule, ReviewsModule,
-    ReleasesModule, KiosksModule, FleetModule, InsightsModule,
+    ReleasesModule, KiosksModule, FleetModule, InsightsModule, MyWorkModule,
   ],
 })
 export class AppModule {}

@@ -124,6 +124,7 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'POST /api/kiosk/events': 'kiosk',
 
   'GET /api/insights': ['curator', 'educator', 'technician', 'admin'],
+  'GET /api/me/work': 'signed-in',
 };
 
 /**

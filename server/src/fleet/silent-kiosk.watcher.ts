@@ -59,11 +59,13 @@ export class SilentKioskWatcher implements OnApplicationBootstrap, OnApplication
   async check(now: Date = this.clock.now()): Promise<WatchReport> {
     const offlineSince = new Date(now.getTime() - this.states.thresholds.offlineAfterS * 1000);
     const placed = { include: [{ model: Station, required: true, include: [Gallery] }] };
+    // The demo kiosk has no device behind it: it falls silent after the first start, and nobody should be mailed about it.
     const [silent, back] = await Promise.all([
       // A kiosk that never reported is silent since it was paired.
       this.kiosks.findAll({
         where: {
           revokedAt: null,
+          demo: false,
           silenceAlertedAt: null,
           [Op.or]: [{ lastHeartbeatAt: { [Op.lte]: offlineSince } }, { lastHeartbeatAt: null, pairedAt: { [Op.lte]: offlineSince } }],
         },

@@ -59,7 +59,7 @@ const expected: Omit<InsightsView, 'stories' | 'panels'> & { stories: unknown[];
   galleryId: gallery.id,
   from: '2025-05-10',
   to: '2025-05-12',
-  totals: { events: 27, storyOpens: 5, panelViews: 9, widgetTouches: 7 },
+  totals: { events: 27, storyOpens: 5, panelViews: 9, widgetTouches: 7, demoEvents: 0 },
   stories: [{ storyId: plates.storyId, title: expect.any(String), opens: 3 }, { storyId: ridge.storyId, title: expect.any(String), opens: 2 }],
   panels: [
     { panelId: p2, storyId: plates.storyId, storyTitle: expect.any(String), position: 2, views: 4, medianDwellMs: 4000 },

@@ -42,9 +42,13 @@ export class InsightsService {
         { replacements: { ...scope, type }, type: QueryTypes.SELECT },
       );
 
-    const [totals, stories, dwells, widgets, languages, switches] = await Promise.all([
+    const [totals, [demo], stories, dwells, widgets, languages, switches] = await Promise.all([
       this.sequelize.query<{ type: KioskEventType; n: number }>(
         'SELECT type, COUNT(*) AS n FROM kiosk_events WHERE gallery_id = :galleryId AND at >= :start AND at < :end GROUP BY type',
+        { replacements: scope, type: QueryTypes.SELECT },
+      ),
+      this.sequelize.query<{ n: number }>(
+        'SELECT COUNT(*) AS n FROM kiosk_events e JOIN kiosks k ON k.id = e.kiosk_id WHERE k.demo AND e.gallery_id = :galleryId AND e.at >= :start AND e.at < :end',
         { replacements: scope, type: QueryTypes.SELECT },
       ),
       events('story_opened', 'e.story_id AS storyId, s.title, COUNT(*) AS opens', 'LEFT JOIN stories s ON s.id = e.story_id',
@@ -65,6 +69,7 @@ export class InsightsService {
         storyOpens: count('story_opened'),
         panelViews: count('panel_viewed'),
         widgetTouches: count('widget_touched'),
+        demoEvents: Number(demo?.n ?? 0),
       },
       stories: stories.map((row) => ({ storyId: row.storyId, title: row.title, opens: Number(row.opens) })),
       panels: await this.placePanels(dwells.map((row) => ({ panelId: row.panelId, dwellMs: Number(row.dwellMs) }))),

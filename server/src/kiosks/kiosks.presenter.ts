@@ -18,6 +18,7 @@ export const toKioskView = (kiosk: Kiosk & { station: Station & { gallery: Galle
   uptimeS: kiosk.uptimeS,
   storageUsedBytes: kiosk.storageUsedBytes === null ? null : Number(kiosk.storageUsedBytes),
   lastError: kiosk.lastError,
+  demo: kiosk.demo,
   releasePlaying: releaseRef(kiosk.lastReleaseId === null ? undefined : releases.get(kiosk.lastReleaseId)),
   releaseLive: releaseRef(live.get(kiosk.station.galleryId)),
 });

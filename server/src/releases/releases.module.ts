@@ -35,6 +35,6 @@ import { VenueSigningKeysModule } from './venue-signing-keys.module.js';
   ],
   controllers: [ReleasesController],
   providers: [ReleasesService, ReleasesWorker, ReleaseBuilder, ReleaseContentService, ReleaseFileStore, ReleaseTranslations, ReleaseBuildFaults],
-  exports: [ReleasesService, ReleaseFileStore, VenueSigningKeysModule],
+  exports: [ReleasesService, ReleasesWorker, ReleaseFileStore, VenueSigningKeysModule],
 })
 export class ReleasesModule {}

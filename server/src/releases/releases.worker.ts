@@ -49,6 +49,11 @@ export class ReleasesWorker implements OnApplicationBootstrap, OnApplicationShut
     this.running = this.poll().finally(() => (this.running = undefined));
   }
 
+  /** Resolves once the poll in progress, if any, has finished, so a caller that builds by hand does not race it. */
+  async idle(): Promise<void> {
+    await this.running;
+  }
+
   /** Builds every queued release, one after another. */
   async buildQueued(): Promise<BuildReport> {
     const report: BuildReport = { ready: [], failed: [] };

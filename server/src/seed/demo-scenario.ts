@@ -19,6 +19,15 @@ export const DEMO_STATION = {
   mountingHeightMm: 1000,
 };
 
+/** Where the demo kiosk stands: a station of its own, so pairing a real screen at the Rift Table leaves it be. */
+export const DEMO_KIOSK_STATION = {
+  name: 'Plate Map Wall',
+  screenWidthPx: 1920,
+  screenHeightPx: 1080,
+  orientation: 'landscape' as Orientation,
+  mountingHeightMm: 1100,
+};
+
 export const DEMO_ACCOUNTS: { email: string; name: string; roles: Role[]; locales: string[] }[] = [
   { email: 'admin@demo.test', name: 'Noor Haddad', roles: ['admin'], locales: [] },
   { email: 'curator@demo.test', name: 'Tomás Reyes', roles: ['curator'], locales: [] },

@@ -5,9 +5,14 @@ import { ClockModule } from '../clock/clock.module.js';
 import { ConfigModule } from '../config/config.module.js';
 import { DatabaseModule } from '../database/database.module.js';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
+import { KioskEvent } from '../kiosks/models/kiosk-event.model.js';
+import { KioskHeartbeat } from '../kiosks/models/kiosk-heartbeat.model.js';
+import { Kiosk } from '../kiosks/models/kiosk.model.js';
 import { MediaModule } from '../media/media.module.js';
 import { PanelsModule } from '../panels/panels.module.js';
+import { ReleasesModule } from '../releases/releases.module.js';
 import { ReviewsModule } from '../reviews/reviews.module.js';
+import { Revision } from '../revisions/models/revision.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { TRANSLATION_MODELS, TRANSLATION_SERVICES } from '../translations/translations.module.js';
 import { User } from '../users/models/user.model.js';
@@ -15,18 +20,19 @@ import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { DemoFleet } from './demo-fleet.js';
 import { DemoReviews } from './demo-reviews.js';
 import { DemoStories } from './demo-stories.js';
 import { DemoTranslations } from './demo-translations.js';
 import { SeedService } from './seed.service.js';
 
-/** What the CLI's seed and create-admin need: the database, no HTTP and no mail worker. */
+/** What the CLI's seed and create-admin need: the database and the release builder, no HTTP and no mail worker. */
 @Module({
   imports: [
     ConfigModule, ClockModule, DatabaseModule, AuditModule,
-    SequelizeModule.forFeature([User, Venue, Gallery, Station, Exhibit, Story, ...TRANSLATION_MODELS]),
-    MediaModule, PanelsModule, ReviewsModule,
+    SequelizeModule.forFeature([User, Venue, Gallery, Station, Exhibit, Story, Revision, Kiosk, KioskHeartbeat, KioskEvent, ...TRANSLATION_MODELS]),
+    MediaModule, PanelsModule, ReviewsModule, ReleasesModule,
   ],
-  providers: [SeedService, PasswordHasher, DemoStories, DemoReviews, DemoTranslations, ...TRANSLATION_SERVICES],
+  providers: [SeedService, PasswordHasher, DemoStories, DemoReviews, DemoTranslations, DemoFleet, ...TRANSLATION_SERVICES],
 })
 export class SeedModule {}

@@ -7,6 +7,7 @@ import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { DemoFleet } from './demo-fleet.js';
 import { DemoReviews } from './demo-reviews.js';
 import { DemoStories } from './demo-stories.js';
 import { DemoTranslations } from './demo-translations.js';
@@ -25,6 +26,7 @@ export class SeedService {
     private readonly demoStories: DemoStories,
     private readonly demoTranslations: DemoTranslations,
     private readonly demoReviews: DemoReviews,
+    private readonly demoFleet: DemoFleet,
   ) {}
 
   /** Seeds the demo on a database that has nobody in it yet; returns false when it left it alone. */
@@ -43,6 +45,7 @@ export class SeedService {
     await this.demoStories.seed('curator@demo.test');
     await this.demoTranslations.seed('translator@demo.test');
     await this.demoReviews.seed('curator@demo.test', 'educator@demo.test');
+    await this.demoFleet.seed('technician@demo.test');
     return true;
   }
 

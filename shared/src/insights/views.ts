@@ -10,7 +10,8 @@ export interface InsightsView {
   /** YYYY-MM-DD, UTC, both days included. */
   from: string;
   to: string;
-  totals: { events: number; storyOpens: number; panelViews: number; widgetTouches: number };
+  /** `demoEvents`: how many of the events are invented ones from the demo venue's kiosk. */
+  totals: { events: number; storyOpens: number; panelViews: number; widgetTouches: number; demoEvents: number };
   stories: { storyId: number; title: string | null; opens: number }[];
   panels: {
     panelId: number;

@@ -50,6 +50,8 @@ export interface KioskView {
   uptimeS: number | null;
   storageUsedBytes: number | null;
   lastError: string | null;
+  /** The demo venue's invented kiosk, whose heartbeats and visitor events are made up. */
+  demo: boolean;
   /** What the kiosk said it plays in its last heartbeat. */
   releasePlaying: { id: number; number: number } | null;
   /** What is Live for its gallery now. */

@@ -13,6 +13,7 @@ import * as kiosks from './0402-kiosks.js';
 import * as fleetWatch from './0500-fleet-watch.js';
 import * as rateLimitsAndSessions from './0610-rate-limits-and-sessions.js';
 import * as livingStory from './0650-living-story.js';
+import * as demoKiosk from './0660-demo-kiosk.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -35,6 +36,7 @@ const modules: [string, MigrationModule][] = [
   ['0500-fleet-watch', fleetWatch],
   ['0610-rate-limits-and-sessions', rateLimitsAndSessions],
   ['0650-living-story', livingStory],
+  ['0660-demo-kiosk', demoKiosk],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

@@ -43,6 +43,10 @@ export class Kiosk extends Model {
   @Column({ type: DataType.STRING(1000), allowNull: true })
   lastError: string | null;
 
+  /** The demo venue's invented kiosk: no device behind it, its heartbeats and visitor events made up by the seed. */
+  @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: false })
+  demo: boolean;
+
   /** When technicians were told it went silent; cleared when told it is back (the fleet watcher's). */
   @Column({ type: DataType.DATE(3), allowNull: true })
   silenceAlertedAt: Date | null;

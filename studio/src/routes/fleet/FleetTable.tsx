@@ -2,6 +2,7 @@ import { Fragment } from 'react';
 import { makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens } from '@fluentui/react-components';
 import type { FleetKioskView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import { DemoBadge } from '../../components/fleet/DemoBadge';
 import { KioskStateBadge } from '../../components/fleet/KioskStateBadge';
 import { LastHeartbeat } from '../../components/fleet/LastHeartbeat';
 import { ReleasePlaying } from '../../components/fleet/ReleasePlaying';
@@ -46,6 +47,7 @@ export function FleetTable({ kiosks, now, busy }: { kiosks: FleetKioskView[]; no
               <TableRow key={kiosk.id} data-kiosk-id={kiosk.id}>
                 <TableCell>
                   <span className={styles.station}><TextLink to={`/fleet/${kiosk.id}`}>{kiosk.station.name}</TextLink></span>
+                  {kiosk.demo ? <> <DemoBadge /></> : null}
                 </TableCell>
                 <TableCell><KioskStateBadge kiosk={kiosk} /></TableCell>
                 <TableCell><ReleasePlaying kiosk={kiosk} /></TableCell>

@@ -89,6 +89,7 @@ function KioskDetail({ kiosk, now, busy, onPage }: { kiosk: FleetKioskDetail; no
           kiosk.revokedAt ? null : <Button icon={<ProhibitedRegular />} onClick={() => setRevoking(true)}>{t('fleetKiosk.revoke')}</Button>
         }
       />
+      {kiosk.demo ? <FormAlert intent="info">{t('fleet.demoHint')}</FormAlert> : null}
       {kiosk.revokedAt ? <FormAlert intent="warning">{t('fleetKiosk.revokedNote', { date: formatDate(kiosk.revokedAt) })}</FormAlert> : null}
       <dl className={styles.facts}>
         {facts.map(([term, value]) => (

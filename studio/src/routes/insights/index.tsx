@@ -71,6 +71,7 @@ export function InsightsPage() {
         <EmptyState icon={<DataBarVerticalRegular />} title={t('insights.emptyTitle')}>{t('insights.emptyBody')}</EmptyState>
       ) : (
         <div aria-busy={insights.isFetching}>
+          {insights.data.totals.demoEvents > 0 ? <FormAlert intent="info">{t('insights.demoEvents', { count: insights.data.totals.demoEvents })}</FormAlert> : null}
           <InsightsFigures insights={insights.data} />
         </div>
       )}

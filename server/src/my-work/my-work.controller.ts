@@ -1,0 +1,18 @@
+import { Controller, Get } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { CurrentUser } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
+import { MyWorkService } from './my-work.service.js';
+
+/** The studio's home page: what is waiting for the signed-in person, for every role. */
+@ApiTags('me')
+@ApiBearerAuth()
+@Controller('me')
+export class MyWorkController {
+  constructor(private readonly myWork: MyWorkService) {}
+
+  @Get('work')
+  work(@CurrentUser() user: User) {
+    return this.myWork.workOf(user);
+  }
+}
