@@ -1,6 +1,6 @@
 import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, newContext, signIn } from '../support/browser.js';
+import { baseUrl, demoPassword, launchBrowser, newContext, signIn } from '../support/browser.js';
 
 let browser: Browser;
 let page: Page;
@@ -68,5 +68,46 @@ describe('a translator takes a demo story into French', () => {
     await page.locator('[data-unit-row]').first().waitFor();
     await eventually(() => page.locator('[data-unit-row]').first().getAttribute('data-unit-status')).toBe('translated');
     await eventually(() => editor().getByRole('textbox', { name: /^Translation \(French\)/ }).inputValue()).toContain(mark);
+  });
+});
+
+describe('the translator brings an XLIFF file back', () => {
+  /** The workspace's story id and the XLIFF export of it in French, fetched as the translator. */
+  async function exportedFile(): Promise<{ storyId: number; xml: string }> {
+    const storyId = Number(new URL(page.url()).pathname.split('/')[2]);
+    const login = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: 'translator@demo.test', password: demoPassword }) });
+    const { accessToken } = (await login.json()) as { accessToken: string };
+    const res = await fetch(`${baseUrl}/api/stories/${storyId}/translations/fr/xliff`, { headers: { Authorization: `Bearer ${accessToken}` } });
+    expect(res.status).toBe(200);
+    return { storyId, xml: await res.text() };
+  }
+  const uploadFile = (xml: string) =>
+    page.locator('[data-testid="xliff-file-input"]').setInputFiles({ name: 'story.fr.xlf', mimeType: 'application/xliff+xml', buffer: Buffer.from(xml) });
+
+  it('imports a target over its length budget and lists it, a link that opens the unit with the budget warning', async () => {
+    const { xml } = await exportedFile();
+    // The first unit whose target has no inline codes, its target made far longer than any budget.
+    const long = `${mark} ${'une phrase bien trop longue pour cet écran, '.repeat(12).trim()}`;
+    const units = xml.split('<unit ');
+    const index = units.findIndex((unit, i) => i > 0 && /<target>[^<]*<\/target>/.test(unit));
+    expect(index, 'a translated unit without inline codes in the export').toBeGreaterThan(0);
+    const unitId = /^id="([^"]+)"/.exec(units[index]!)?.[1];
+    units[index] = units[index]!.replace(/<target>[^<]*<\/target>/, `<target>${long}</target>`);
+    const edited = units.join('<unit ');
+    await uploadFile(edited);
+    const warning = page.locator(`[data-xliff-warnings] [data-xliff-warning="${unitId}"]`);
+    await warning.waitFor();
+    await warning.getByRole('link').click();
+    await eventually(editorUnitId).toBe(unitId);
+    await eventually(() => editor().getByRole('textbox', { name: /^Translation \(French\)/ }).inputValue()).toBe(long);
+    await editor().locator('[data-budget-over]').waitFor();
+  });
+
+  it('refuses a file from another story whole, saying so', async () => {
+    const { storyId, xml } = await exportedFile();
+    await uploadFile(xml.replace(`original="story/${storyId}"`, 'original="story/999999"'));
+    const problems = page.locator('[data-xliff-problems]');
+    await problems.waitFor();
+    expect(await problems.textContent()).toContain('"story/999999": it was exported from another story');
   });
 });

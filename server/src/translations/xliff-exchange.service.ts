@@ -61,7 +61,7 @@ export class XliffExchangeService {
       if (!plan.ok && plan.otherStory) {
         throw new UnprocessableEntityException({
           statusCode: HttpStatus.UNPROCESSABLE_ENTITY,
-          message: 'The file is from another story; it was not imported, and nothing was changed.',
+          message: 'The file is from another story.',
           errors: plan.problems.map((problem) => ({ path: ['file', plan.otherStory!.attribute], message: problem.message })),
         });
       }

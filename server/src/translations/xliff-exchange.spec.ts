@@ -144,7 +144,7 @@ describe('an XLIFF file from another story', () => {
     expect(res.status).toBe(422);
     expect(res.body).toEqual({
       statusCode: 422,
-      message: 'The file is from another story; it was not imported, and nothing was changed.',
+      message: 'The file is from another story.',
       errors: [{ path: ['file', 'original'], message: `The file's original is "story/${other.story.id}": it was exported from another story, and this story's is "story/${world.story.id}". Export this story's own file and translate that.` }],
     });
     expect(await translationRowCounts(t)).toEqual(before);

@@ -14,8 +14,15 @@ export function ProgressMeter({ progress, label }: { progress: Pick<LocaleComple
   const { total, translated } = progress;
   const words = t('translations.progress', { translated, total });
   return (
-    <Field className={styles.root} validationMessage={words} validationState="none" label={label} aria-label={label ?? words}>
-      <ProgressBar value={total === 0 ? 0 : translated / total} max={1} thickness="large" color={total > 0 && translated === total ? 'success' : 'brand'} aria-valuetext={words} />
+    <Field className={styles.root} validationMessage={words} validationState="none" label={label}>
+      <ProgressBar
+        value={total === 0 ? 0 : translated / total}
+        max={1}
+        thickness="large"
+        color={total > 0 && translated === total ? 'success' : 'brand'}
+        aria-label={label ?? words}
+        aria-valuetext={words}
+      />
     </Field>
   );
 }

@@ -1,13 +1,14 @@
 import { useState } from 'react';
 import { Button, makeStyles, mergeClasses, shorthands, Text, tokens } from '@fluentui/react-components';
 import { ArrowDownloadRegular, DocumentArrowUpRegular } from '@fluentui/react-icons';
-import type { XliffImportResult } from '@mantlepiece/shared';
+import type { LengthBudgetWarning, XliffImportResult } from '@mantlepiece/shared';
 import { useDropzone, type FileRejection } from 'react-dropzone';
 import { useTranslation } from 'react-i18next';
 import { ApiError } from '../../api/client';
 import { useDownloadXliff, useUploadXliff, type TranslationTarget } from '../../api/translations';
 import { describeError } from '../forms/describe-error';
 import { FormAlert } from '../forms/FormAlert';
+import { TextLink } from '../links';
 import { saveFile } from '../save-file';
 
 /** What the file chooser offers; the server decides from the content, this only steers the chooser. */
@@ -23,6 +24,7 @@ const useStyles = makeStyles({
   },
   active: { ...shorthands.borderColor(tokens.colorBrandStroke1), backgroundColor: tokens.colorBrandBackground2 },
   problems: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, color: tokens.colorPaletteRedForeground1, maxHeight: '12rem', overflow: 'auto' },
+  warnings: { margin: 0, paddingLeft: tokens.spacingHorizontalXL, maxHeight: '12rem', overflow: 'auto' },
 });
 
 type Outcome = { kind: 'imported'; result: XliffImportResult } | { kind: 'refused'; message: string; problems: string[] } | { kind: 'wrongType' };
@@ -78,6 +80,7 @@ export function XliffExchange({ target, canUpload }: { target: TranslationTarget
       </div>
       {download.isError ? <FormAlert intent="error">{`${t('xliff.downloadError')} ${describeError(t, download.error)}`}</FormAlert> : null}
       {outcome?.kind === 'imported' ? <FormAlert intent="success">{t('xliff.result', { ...outcome.result })}</FormAlert> : null}
+      {outcome?.kind === 'imported' && outcome.result.warnings.length > 0 ? <OverBudget warnings={outcome.result.warnings} /> : null}
       {outcome?.kind === 'wrongType' ? <FormAlert intent="error">{t('xliff.wrongType')}</FormAlert> : null}
       {outcome?.kind === 'refused' ? (
         <div role="alert" data-xliff-problems>
@@ -86,5 +89,29 @@ export function XliffExchange({ target, canUpload }: { target: TranslationTarget
         </div>
       ) : null}
     </section>
+  );
+}
+
+/** Units the file took over their length budget, each a link that opens it in the editor to shorten it. */
+function OverBudget({ warnings }: { warnings: readonly LengthBudgetWarning[] }) {
+  const { t } = useTranslation();
+  const styles = useStyles();
+  return (
+    <div data-xliff-warnings>
+      <FormAlert intent="warning">{t('xliff.overBudget')}</FormAlert>
+      <ul className={styles.warnings}>
+        {warnings.map((warning) => (
+          <li key={warning.unitId} data-xliff-warning={warning.unitId}>
+            <TextLink to={{ search: `?unit=${encodeURIComponent(warning.unitId)}` }}>
+              {t('unitEditor.heading', {
+                where: warning.panelNumber === null ? t('workspace.image') : t('workspace.panelNumber', { number: warning.panelNumber }),
+                kind: t(`workspace.kinds.${warning.kind}`),
+              })}
+            </TextLink>
+            {` — ${t('unitEditor.overBudget', { over: warning.length - warning.budget, budget: warning.budget })}`}
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }

@@ -121,5 +121,6 @@ export const translationAr: Translated<typeof translationEn> = {
     result: 'اكتمل الاستيراد: حُدّث {{updated}}، وبقي {{unchanged}} دون تغيير، ولا يزال {{stale}} متقادمًا.',
     refused: 'رُفض الملف ولم يتغيّر شيء:',
     wrongType: 'اختر ملف XLIFF (‎.xlf أو ‎.xliff).',
+    overBudget: 'اكتمل الاستيراد رغم ذلك، لكن هذه الوحدات تتجاوز ميزانية طولها؛ افتح كل واحدة منها لتقصيرها:',
   },
 };

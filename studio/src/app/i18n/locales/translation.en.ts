@@ -110,5 +110,6 @@ export const translationEn = {
     result: 'Imported: {{updated}} updated, {{unchanged}} unchanged, {{stale}} still stale.',
     refused: 'The file was refused and nothing changed:',
     wrongType: 'Choose an XLIFF file (.xlf or .xliff).',
+    overBudget: 'Imported all the same, but these units are over their length budget; open each one to shorten it:',
   },
 };

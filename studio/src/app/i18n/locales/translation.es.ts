@@ -113,5 +113,6 @@ export const translationEs: Translated<typeof translationEn> = {
     result: 'Importado: {{updated}} actualizadas, {{unchanged}} sin cambios, {{stale}} aún desactualizadas.',
     refused: 'Se rechazó el archivo y no ha cambiado nada:',
     wrongType: 'Elija un archivo XLIFF (.xlf o .xliff).',
+    overBudget: 'Importado de todos modos, pero estas unidades superan su presupuesto de longitud; abra cada una para acortarla:',
   },
 };

@@ -112,5 +112,6 @@ export const translationFr: typeof translationEn = {
     result: 'Importé : {{updated}} mises à jour, {{unchanged}} inchangées, {{stale}} encore à revoir.',
     refused: 'Le fichier a été refusé et rien n’a changé :',
     wrongType: 'Choisissez un fichier XLIFF (.xlf ou .xliff).',
+    overBudget: 'Importé malgré tout, mais ces unités dépassent leur budget de longueur ; ouvrez-les une à une pour les raccourcir :',
   },
 };
