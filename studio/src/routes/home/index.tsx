@@ -11,6 +11,7 @@ import { CallToAction } from '../../components/CallToAction';
 import { useRoleList } from '../../components/formatting';
 import { PageHeader } from '../../components/PageHeader';
 import { TextLink } from '../../components/links';
+import { MyWorkLists } from './MyWorkLists';
 
 const useStyles = makeStyles({
   grid: { display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(24rem, 1fr))', gap: tokens.spacingHorizontalXL, alignItems: 'start', maxWidth: '72rem' },
@@ -71,6 +72,7 @@ function RoleCard({ role, title, body, children }: { role: Role; title: string; 
       <Text as="h2" size={500} weight="semibold" id={`role-${role}`} className={styles.heading}>{title}</Text>
       <Text as="p" className={styles.body}>{body}</Text>
       {children}
+      <MyWorkLists role={role} />
       <AreaLinks areas={AREAS_BY_ROLE[role]} />
     </section>
   );

@@ -1,0 +1,12 @@
+import { useQuery } from '@tanstack/react-query';
+import type { MyWorkView } from '@mantlepiece/shared';
+import { api } from './client';
+
+/** What is waiting for the signed-in person, per role; refreshed every minute while the home page is open. */
+export function useMyWork() {
+  return useQuery({
+    queryKey: ['me', 'work'],
+    queryFn: () => api<MyWorkView>('/me/work'),
+    refetchInterval: 60_000,
+  });
+}
