@@ -7,6 +7,7 @@ import { createValidationPipe } from './common/validation.js';
 import { ConfigService } from './config/config.service.js';
 import { MEDIA_FILES_PATH } from './media/media-files.controller.js';
 import { answerUnknownPaths, serveApps } from './static/serve-apps.js';
+import { securityHeaders } from './static/security-headers.js';
 
 /** Configures and initialises the app the same way for the running server and for the tests. */
 export async function initApp(app: NestExpressApplication): Promise<void> {
@@ -20,6 +21,8 @@ function configureApp(app: NestExpressApplication): void {
   const config = app.get(ConfigService);
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
+  // First, so that every answer carries them: pages, assets, API responses and errors alike.
+  app.use(securityHeaders({ https: config.overHttps }));
   app.setGlobalPrefix('api', { exclude: [{ path: MEDIA_FILES_PATH, method: RequestMethod.GET }] });
   app.use(cookieParser());
   app.useGlobalPipes(createValidationPipe());

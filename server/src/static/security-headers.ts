@@ -1,0 +1,56 @@
+import type { NextFunction, Request, Response } from 'express';
+import helmet, { type HelmetOptions } from 'helmet';
+
+type Directives = NonNullable<Exclude<HelmetOptions['contentSecurityPolicy'], boolean | undefined>['directives']>;
+
+/**
+ * What the studio, the kiosk and the API reference at /api/docs need, and no more. No script runs
+ * unless it is one of our built files (no inline script, no eval). Styles may be inline: Fluent
+ * UI's Griffel and Tiptap insert style elements at run time, and Swagger UI's page carries its own.
+ * The convection solver's Web Worker and the kiosk's service worker are built files too; images
+ * may be data: or blob: URLs (icons; the kiosk shows release images from IndexedDB); fonts ship
+ * with the apps. Nobody may frame a page (clickjacking).
+ */
+const directives: Directives = {
+  'default-src': ["'self'"],
+  'base-uri': ["'self'"],
+  'script-src': ["'self'"],
+  'script-src-attr': ["'none'"],
+  'style-src': ["'self'", "'unsafe-inline'"],
+  'img-src': ["'self'", 'data:', 'blob:'],
+  'font-src': ["'self'"],
+  'connect-src': ["'self'"],
+  'worker-src': ["'self'"],
+  'manifest-src': ["'self'"],
+  'object-src': ["'none'"],
+  'form-action': ["'self'"],
+  'frame-ancestors': ["'none'"],
+};
+
+/**
+ * Browser features no screen of ours uses are switched off for every page; the kiosk may ask for
+ * fullscreen. Helmet does not set this header.
+ */
+const PERMISSIONS_POLICY = [
+  'fullscreen=(self)',
+  ...['accelerometer', 'bluetooth', 'browsing-topics', 'camera', 'display-capture', 'geolocation', 'gyroscope', 'hid', 'magnetometer',
+    'microphone', 'midi', 'payment', 'publickey-credentials-get', 'serial', 'usb', 'xr-spatial-tracking'].map((feature) => `${feature}=()`),
+].join(', ');
+
+/**
+ * Security headers on every response (pages, assets, API answers and errors alike), through helmet
+ * with our policy. Over HTTPS, browsers are also told to keep to it (HSTS, upgrade-insecure-requests);
+ * over plain HTTP on a venue's own network those would only break the page.
+ */
+export function securityHeaders(options: { https: boolean }): (req: Request, res: Response, next: NextFunction) => void {
+  const headers = helmet({
+    contentSecurityPolicy: { useDefaults: false, directives: { ...directives, 'upgrade-insecure-requests': options.https ? [] : null } },
+    strictTransportSecurity: options.https ? { maxAge: 31_536_000 } : false,
+    xFrameOptions: { action: 'deny' },
+    referrerPolicy: { policy: 'no-referrer' },
+  });
+  return (req, res, next) => {
+    res.setHeader('Permissions-Policy', PERMISSIONS_POLICY);
+    headers(req, res, next);
+  };
+}
