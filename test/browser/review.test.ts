@@ -224,6 +224,23 @@ describe('an approved story is fixed in the browser', () => {
     await expect.poll(() => badge(curator), settled).toBe('Approved');
   });
 
+  it('the curator withdraws a submission no educator has decided on, and can write again', async () => {
+    const asCurator = await apiAs('curator@demo.test');
+    const story = await asCurator<{ id: number }>('POST', '/stories', { title: `Withdrawn ${Date.now().toString(36)}`, audience: 'family' });
+    await asCurator('POST', `/stories/${story.id}/panels`, { doc: panelDoc(fixed), position: 0, wordBudget: 60 });
+    await asCurator('POST', `/stories/${story.id}/submit`, {});
+    await curator.goto(`/stories/${story.id}`);
+    await expect.poll(() => badge(curator), settled).toBe('In review');
+    expect(await curator.getByRole('textbox', { name: 'Panel text' }).getAttribute('contenteditable')).toBe('false');
+    await curator.getByRole('button', { name: 'Withdraw' }).click();
+    await curator.getByRole('alertdialog').getByRole('button', { name: 'Withdraw submission' }).click();
+    await curator.getByText('The submission is withdrawn; the story is a draft again.').waitFor();
+    await expect.poll(() => badge(curator), settled).toBe('Draft');
+    await expect.poll(() => curator.getByRole('textbox', { name: 'Panel text' }).getAttribute('contenteditable'), settled).toBe('true');
+    await curator.getByText(/^Revisions? \(1\)$/).click();
+    await curator.locator('[data-story-revisions]').getByText('Withdrawn').waitFor();
+  });
+
   it('does not offer Submit on a draft whose preflight has a blocker, and says which panel to fix', async () => {
     const asCurator = await apiAs('curator@demo.test');
     const blocked = await asCurator<{ id: number }>('POST', '/stories', { title: `Empty panel ${Date.now().toString(36)}`, audience: 'family' });
