@@ -1,9 +1,11 @@
 import 'reflect-metadata';
+import type { INestApplicationContext } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { parseArgs } from 'node:util';
 import { PASSWORD_PROBLEMS, passwordProblem } from '@mantlepiece/shared';
 import { ConfigService } from './config/config.service.js';
 import { migrate } from './database/migrator.js';
+import { MediaService } from './media/media.service.js';
 import { SeedModule } from './seed/seed.module.js';
 import { SeedService } from './seed/seed.service.js';
 import { isCommonPassword } from './users/password-rules.js';
@@ -11,12 +13,17 @@ import { isCommonPassword } from './users/password-rules.js';
 const USAGE = `Usage: node dist/cli.js <command>
   migrate                                   apply pending database migrations
   seed                                      add the demo scenario to an empty database (not in production)
-  create-admin --email <address> --name <n> create the first admin; password from ADMIN_PASSWORD or stdin`;
+  create-admin --email <address> --name <n> create the first admin; password from ADMIN_PASSWORD or stdin
+  strip-originals                           keep again, without EXIF, GPS, XMP or IPTC, images uploaded before originals were kept that way`;
 
 async function withSeedService<T>(work: (seed: SeedService) => Promise<T>): Promise<T> {
+  return withSeedContext((context) => work(context.get(SeedService)));
+}
+
+async function withSeedContext<T>(work: (context: INestApplicationContext) => Promise<T>): Promise<T> {
   const context = await NestFactory.createApplicationContext(SeedModule, { logger: ['error', 'warn'] });
   try {
-    return await work(context.get(SeedService));
+    return await work(context);
   } finally {
     await context.close();
   }
@@ -48,6 +55,10 @@ const commands: Record<string, (args: string[]) => Promise<string>> = {
     if (problem) throw new Error(`the password: ${PASSWORD_PROBLEMS[problem]}`);
     const user = await withSeedService((seed) => seed.createAdmin(values.email!, values.name!, password));
     return `admin ${user.email} created`;
+  },
+  async 'strip-originals'() {
+    const stripped = await withSeedContext((context) => context.get(MediaService, { strict: false }).stripStoredOriginals());
+    return `${stripped} original${stripped === 1 ? '' : 's'} kept again without metadata`;
   },
 };
 

@@ -116,6 +116,17 @@ export class ImageProcessing {
     }
   }
 
+  /** Whether a stored original still carries what `encodeOriginal` leaves out: EXIF, XMP, IPTC or an orientation to apply. */
+  async carriesMetadata(bytes: Buffer): Promise<boolean> {
+    const { exif, xmp, iptc, orientation } = await sharp(bytes, { limitInputPixels: false }).metadata();
+    return Boolean(exif || xmp || iptc || (orientation !== undefined && orientation !== 1));
+  }
+
+  /** An original stored as it was uploaded, kept again as `process` keeps one now. */
+  stripMetadata(bytes: Buffer, kind: ImageKind): Promise<Buffer> {
+    return encodeOriginal(sharp(bytes, { limitInputPixels: this.config.mediaMaxPixels, failOn: 'error' }).rotate(), kind);
+  }
+
   private async decode(bytes: Buffer, kind: ImageKind): Promise<ProcessedImage> {
     // Each output decodes the original again: libvips streams it and shrinks on load, which
     // keeps memory far below holding a 100-megapixel bitmap.

@@ -10,6 +10,7 @@ import { getModelToken } from '@nestjs/sequelize';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { signedInAs } from '../../test/authoring-fixtures.js';
 import { createTestApp, type TestApp } from '../../test/test-app.js';
+import { MediaService } from './media.service.js';
 import { MediaAsset } from './models/media-asset.model.js';
 import { MediaRendition } from './models/media-rendition.model.js';
 
@@ -154,6 +155,22 @@ describe('POST /api/media', () => {
     const stored = fs.readFileSync(storedOriginal(asset.sha256));
     expect(await personalMetadata(stored)).toBeUndefined();
     expect((await sharp(stored).metadata()).exif).toBeUndefined();
+  });
+
+  it('keeps again without metadata an original stored with it before (the CLI\'s strip-originals), and leaves clean ones alone', async () => {
+    const data = await picture(300, 150).jpeg().withExif(GPS_EXIF).withMetadata({ orientation: 6 }).toBuffer();
+    const [asset] = (await upload([data, 'stored-before.jpg'])).body;
+    // As an upload was kept before originals were stripped: the bytes as they came.
+    fs.writeFileSync(storedOriginal(asset.sha256), data);
+    expect(await exifr.gps(fs.readFileSync(storedOriginal(asset.sha256)))).toMatchObject({ latitude: expect.closeTo(64.133, 2) });
+
+    const media = t.app.get(MediaService);
+    expect(await media.stripStoredOriginals()).toBe(1);
+    const stored = fs.readFileSync(storedOriginal(asset.sha256));
+    expect(await personalMetadata(stored)).toBeUndefined();
+    expect(await sharp(stored).metadata()).toMatchObject({ width: 150, height: 300 });
+    expect((await request(t.http).get(`/api/media/${asset.id}`).set(curator)).body.bytes).toBe(stored.length);
+    expect(await media.stripStoredOriginals()).toBe(0);
   });
 
   it('stores the same upload once and answers with the asset already there', async () => {

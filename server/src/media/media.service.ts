@@ -13,7 +13,7 @@ import { Panel } from '../panels/models/panel.model.js';
 import { Story } from '../stories/models/story.model.js';
 import type { User } from '../users/models/user.model.js';
 import type { ListMediaQuery, UpdateMediaDto } from './dto/media.dto.js';
-import { ImageProcessing, MIME_TYPES, type ImageKind, type InspectedImage, type ProcessedImage } from './image-processing.js';
+import { ImageProcessing, MIME_TYPES, sniffImageKind, type ImageKind, type InspectedImage, type ProcessedImage } from './image-processing.js';
 import { toMediaView } from './media.presenter.js';
 import { MEDIA_STORE, originalKey, renditionKey, type MediaStore } from './media-store.js';
 import { MediaAltText } from './models/media-alt-text.model.js';
@@ -86,6 +86,29 @@ export class MediaService {
       throw error;
     }
     return this.viewsOf(inspected.map(({ sha256 }) => known.get(sha256) ?? created.get(sha256)!));
+  }
+
+  /**
+   * Keeps again, without metadata, the originals stored before uploads were kept that way (the CLI's
+   * `strip-originals`); an original already clean is left as it is, so running it twice changes
+   * nothing. Returns how many it re-encoded.
+   */
+  async stripStoredOriginals(): Promise<number> {
+    let stripped = 0;
+    for (let after = 0; ;) {
+      const batch = await this.assets.findAll({ where: { id: { [Op.gt]: after } }, attributes: ['id', 'sha256'], order: [['id', 'ASC']], limit: 100 });
+      if (batch.length === 0) return stripped;
+      for (const { id, sha256 } of batch) {
+        const data = await this.store.get(originalKey(sha256));
+        const kind = data && sniffImageKind(data);
+        if (!data || !kind || !(await this.images.carriesMetadata(data))) continue;
+        const clean = await this.images.stripMetadata(data, kind);
+        await this.store.put(originalKey(sha256), clean);
+        await this.assets.update({ bytes: clean.length }, { where: { id } });
+        stripped += 1;
+      }
+      after = batch.at(-1)!.id;
+    }
   }
 
   /** The Media library: searched, filtered, sorted and paged by the database. */
