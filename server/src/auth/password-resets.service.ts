@@ -44,8 +44,8 @@ export class PasswordResetsService {
   /** Queues the request, within the limits per typed address and per client address; says nothing more. */
   async requestReset(email: string, clientAddress: string): Promise<void> {
     await this.limits.take([
-      { scope: 'password-reset:account', subject: email, max: this.config.passwordResetsPerAccountPerHour, windowMs: HOUR_MS },
       { scope: 'password-reset:address', subject: clientAddress, max: this.config.passwordResetsPerAddressPerHour, windowMs: HOUR_MS },
+      { scope: 'password-reset:account', subject: email, max: this.config.passwordResetsPerAccountPerHour, windowMs: HOUR_MS },
     ], 'Too many password reset requests.');
     await this.requests.create({ email, clientAddress });
   }

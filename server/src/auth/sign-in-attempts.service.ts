@@ -24,14 +24,14 @@ export class SignInAttemptsService {
     private readonly config: ConfigService,
   ) {}
 
-  /** Takes one password check from the limits, narrowest first, or throws 429. */
+  /** Takes one password check from the limits, the account's slow-down last, or throws 429. */
   async take(email: string, clientAddress: string): Promise<RateLimit[]> {
     return this.limits.take(this.limitsOf(email, clientAddress), 'Too many failed sign-ins.');
   }
 
   /** The right password: the account's counts start afresh and the address's check is given back. */
   async succeeded(email: string, clientAddress: string): Promise<void> {
-    const [accountAndAddress, address, account] = this.limitsOf(email, clientAddress);
+    const [address, accountAndAddress, account] = this.limitsOf(email, clientAddress);
     await this.limits.clear(accountAndAddress.scope, accountAndAddress.subject);
     await this.limits.clear(account.scope, account.subject);
     await this.limits.refund([address]);
@@ -56,9 +56,10 @@ export class SignInAttemptsService {
 
   private limitsOf(email: string, clientAddress: string): [RateLimit, RateLimit, RateLimit] {
     const windowMs = this.config.signInWindowMinutes * 60_000;
+    // The address first: once it is locked out, a flood of made-up addresses adds no rows.
     return [
-      { scope: ACCOUNT_AND_ADDRESS, subject: `${email} ${clientAddress}`, max: this.config.signInMaxFailuresPerAccountAndAddress, windowMs },
       { scope: ADDRESS, subject: clientAddress, max: this.config.signInMaxFailuresPerAddress, windowMs },
+      { scope: ACCOUNT_AND_ADDRESS, subject: `${email} ${clientAddress}`, max: this.config.signInMaxFailuresPerAccountAndAddress, windowMs },
       // About 20 tries in the first quarter hour, then one per window: roughly a hundred a day (NIST SP 800-63B 5.2.2).
       { scope: ACCOUNT, subject: email, max: this.config.signInFreeFailuresPerAccount, windowMs: DAY_MS, slowDown: { baseMs: 1000, maxMs: windowMs } },
     ];

@@ -67,8 +67,8 @@ export class RateLimitsService {
   /**
    * Takes one from every limit, or from none and throws a 429 saying `refusal` and when to try
    * again. Returns the limits this take used up, for the caller to record. Limits are taken in
-   * the order given, narrowest first, and one that refuses gives back what the others took: a
-   * flood that one narrow limit stops never reaches the wider ones.
+   * the order given, and one that refuses gives back what the earlier ones took, so a flood that
+   * one limit stops never reaches the limits after it (put a slow-down last).
    */
   async take(limits: RateLimit[], refusal: string): Promise<RateLimit[]> {
     const taken: RateLimit[] = [];
