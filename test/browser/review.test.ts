@@ -173,7 +173,7 @@ describe('a story goes through review in the browser', () => {
   });
 });
 
-describe('an approved story is fixed in the browser', () => {
+describe('an approved, translated, released story is fixed in the browser', () => {
   const typoTitle = `Ridges and trenches ${Date.now().toString(36)}`;
   const typo = 'New sea floor forms at mid-ocean rdiges and sinks at trenches.';
   const fixed = 'New sea floor forms at mid-ocean ridges and sinks at trenches.';
@@ -181,13 +181,51 @@ describe('an approved story is fixed in the browser', () => {
   let firstRevisionId: number;
   const badge = (page: Page) => page.locator('header [data-story-state]').first().textContent();
 
+  let galleryId: number;
+  type Unit = { unitId: string; source: string; status: string; version: number };
+  type Release = { id: number; state: string };
+
+  /** The translator puts every French unit that is not translated from its current source into French. */
+  async function translateIntoFrench(): Promise<Unit[]> {
+    const asTranslator = await apiAs('translator@demo.test');
+    const units = (await asTranslator<{ items: Unit[] }>('GET', `/stories/${typoStoryId}/translations/fr/units?pageSize=100`)).items;
+    for (const unit of units.filter((each) => each.status !== 'translated')) {
+      await asTranslator('PUT', `/stories/${typoStoryId}/translations/fr/units/${encodeURIComponent(unit.unitId)}`, { text: `FR: ${unit.source}`, version: unit.version });
+    }
+    return units;
+  }
+
+  /** The technician builds a release of the story's gallery, waits for it to be Ready and publishes it; answers its manifest's story. */
+  async function releaseAndPublish() {
+    const asTechnician = await apiAs('technician@demo.test');
+    const asked = await asTechnician<Release>('POST', `/galleries/${galleryId}/releases`, {});
+    // The build is a job beside the API: wait for it to leave Building (expect.poll is for tests, and this also runs before them).
+    let release = asked;
+    for (const deadline = Date.now() + 60_000; release.state === 'building' && Date.now() < deadline;) {
+      await new Promise((resolve) => setTimeout(resolve, 500));
+      release = await asTechnician<Release>('GET', `/releases/${asked.id}`);
+    }
+    expect(release, 'the release build').toMatchObject({ state: 'ready' });
+    await asTechnician('POST', `/releases/${asked.id}/publish`);
+    const { manifest } = await asTechnician<{ manifest: string }>('GET', `/releases/${asked.id}/manifest`);
+    return JSON.parse(manifest).stories.find((story: { id: number }) => story.id === typoStoryId) as { revisionId: number; panels: { docs: Record<string, unknown> }[] };
+  }
+
+  // A venue of the test's own, translated into French without falling back to English, so a release needs every text in French.
   beforeAll(async () => {
+    const suffix = Date.now().toString(36);
+    const asAdmin = await apiAs('admin@demo.test');
+    const venue = await asAdmin<{ id: number }>('POST', '/venues', { name: `Typo venue ${suffix}`, slug: `typo-${suffix}`, sourceLocale: 'en', targetLocales: ['fr'], fallbackToSource: false });
+    galleryId = (await asAdmin<{ id: number }>('POST', '/galleries', { venueId: venue.id, name: 'Ocean hall' })).id;
+    const exhibit = await asAdmin<{ id: number }>('POST', '/exhibits', { galleryId, name: 'The moving sea floor' });
     const asCurator = await apiAs('curator@demo.test');
     const asEducator = await apiAs('educator@demo.test');
-    typoStoryId = (await asCurator<{ id: number }>('POST', '/stories', { title: typoTitle, audience: 'family' })).id;
+    typoStoryId = (await asCurator<{ id: number }>('POST', '/stories', { title: typoTitle, audience: 'family', exhibitId: exhibit.id })).id;
     await asCurator('POST', `/stories/${typoStoryId}/panels`, { doc: panelDoc(typo), position: 0, wordBudget: 60 });
     firstRevisionId = (await asCurator<{ revisionId: number }>('POST', `/stories/${typoStoryId}/submit`, {})).revisionId;
     await asEducator('POST', `/revisions/${firstRevisionId}/reviews`, { verdict: 'approve' });
+    await translateIntoFrench();
+    expect((await releaseAndPublish()).revisionId).toBe(firstRevisionId);
   });
 
   it('the curator revises it, fixes the typo and submits; the educator sees only the fix against the approved revision and approves', async () => {
@@ -222,6 +260,15 @@ describe('an approved story is fixed in the browser', () => {
 
     await curator.reload();
     await expect.poll(() => badge(curator), settled).toBe('Approved');
+  });
+
+  it('the fixed sentence’s French goes stale, is translated again, and a new release carries the fix', async () => {
+    const units = await translateIntoFrench();
+    expect(units.map((unit) => [unit.source, unit.status])).toEqual([[fixed, 'stale']]);
+    const released = await releaseAndPublish();
+    expect(released.revisionId).not.toBe(firstRevisionId);
+    expect(JSON.stringify(released.panels[0]!.docs.en)).toContain('mid-ocean ridges');
+    expect(JSON.stringify(released.panels[0]!.docs.fr)).toContain(`FR: ${fixed}`);
   });
 
   it('the curator withdraws a submission no educator has decided on, and can write again', async () => {
