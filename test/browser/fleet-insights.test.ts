@@ -120,6 +120,8 @@ describe('Fleet and Insights follow a kiosk running in a browser', () => {
     const angleTouches = () => widgets.getByRole('row').filter({ hasText: 'Slope angle (°)' }).getByRole('cell').last().textContent({ timeout: 1_000 }).catch(() => null);
     await expect.poll(async () => {
       await studio.reload();
+      // Thirty days of the demo kiosk's visits are counted too, so the figures take a moment after a reload.
+      await stories.waitFor({ timeout: 10_000 }).catch(() => null);
       return [await opens(), await angleTouches()];
     }, { timeout: 30_000, interval: 2_000 }).toEqual([String(opensBefore + 1), String(angleBefore + 1)]);
     // The same numbers are drawn as charts.

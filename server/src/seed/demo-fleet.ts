@@ -21,6 +21,8 @@ const DAYS = 30;
 const HEARTBEAT_EVERY_MS = 5 * MINUTE_MS;
 const HEARTBEATS = 72;
 const APP_VERSION = '0.1.0';
+/** What a visitor can move on a kiosk: the slope's tilt; the convection cell only plays, pauses and steps. */
+const VISITOR_PARAMS: Record<string, string[]> = { 'slope-force': ['angleDeg'] };
 
 /** A small seeded generator (mulberry32), so every first start invents the same gallery. */
 function seededRandom(seed: number): () => number {
@@ -140,10 +142,7 @@ export class DemoFleet {
       storyId,
       panels: (revisions.get(revisionId)?.panels ?? []).map((panel) => ({
         id: panel.id,
-        widgets: panel.widgets.map((widget) => ({
-          widgetType: widget.widgetType,
-          params: Object.entries(widget.params).filter(([, value]) => typeof value === 'number').map(([name]) => name),
-        })),
+        widgets: panel.widgets.map((widget) => ({ widgetType: widget.widgetType, params: VISITOR_PARAMS[widget.widgetType] ?? [] })),
       })),
     }));
   }
@@ -179,9 +178,7 @@ export class DemoFleet {
           for (const widget of panel.widgets) {
             if (widget.params.length === 0 || random() < 0.3) continue;
             for (let touch = Math.floor(random() * 4); touch >= 0; touch -= 1) {
-              // The slope angle is what a visitor reaches for first; the other settings less often.
-              const param = random() < 0.6 && widget.params.includes('angleDeg') ? 'angleDeg' : pick(random, widget.params);
-              add('widget_touched', at + Math.floor(random() * dwellMs), { storyId: story.storyId, panelId: panel.id, widgetType: widget.widgetType, param });
+              add('widget_touched', at + Math.floor(random() * dwellMs), { storyId: story.storyId, panelId: panel.id, widgetType: widget.widgetType, param: pick(random, widget.params) });
             }
           }
           add('panel_viewed', (at += dwellMs), { storyId: story.storyId, panelId: panel.id, dwellMs });
