@@ -116,6 +116,8 @@ describe('Fleet and Insights follow a kiosk running in a browser', () => {
     await studio.getByLabel('Gallery').selectOption({ label: GALLERY });
     const stories = studio.getByRole('table', { name: 'Stories by opens' });
     const widgets = studio.getByRole('table', { name: 'Widget use' });
+    // Counts as the English studio writes them, with a thousands separator (the demo's visits pass a thousand).
+    const shown = (count: number) => new Intl.NumberFormat('en').format(count);
     const opens = () => stories.getByRole('row').filter({ hasText: WIDGET_STORY }).getByRole('cell').last().textContent({ timeout: 1_000 }).catch(() => null);
     const angleTouches = () => widgets.getByRole('row').filter({ hasText: 'Slope angle (°)' }).getByRole('cell').last().textContent({ timeout: 1_000 }).catch(() => null);
     await expect.poll(async () => {
@@ -123,7 +125,7 @@ describe('Fleet and Insights follow a kiosk running in a browser', () => {
       // Thirty days of the demo kiosk's visits are counted too, so the figures take a moment after a reload.
       await stories.waitFor({ timeout: 10_000 }).catch(() => null);
       return [await opens(), await angleTouches()];
-    }, { timeout: 30_000, interval: 2_000 }).toEqual([String(opensBefore + 1), String(angleBefore + 1)]);
+    }, { timeout: 30_000, interval: 2_000 }).toEqual([shown(opensBefore + 1), shown(angleBefore + 1)]);
     // The same numbers are drawn as charts.
     await studio.getByRole('img', { name: 'Opens per story' }).waitFor();
     await studio.getByRole('img', { name: 'Touches per widget and setting' }).waitFor();
