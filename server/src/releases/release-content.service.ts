@@ -103,10 +103,7 @@ export class ReleaseContentService {
       for (const gap of await this.translations.gapsFor(chosen.map((c) => c.revision), venue.targetLocales)) {
         const story = chosen.find((c) => c.revision.id === gap.revisionId)!.story;
         const parts = [gap.untranslated && `${gap.untranslated} untranslated`, gap.stale && `${gap.stale} stale`].filter(Boolean).join(' and ');
-        const message = gap.draftChanged
-          ? `“${story.title}” in ${gap.locale}: the story has changed since revision ${chosen.find((c) => c.story.id === story.id)!.revision.number} was approved, and its translations follow the draft.`
-          : `“${story.title}” in ${gap.locale}: ${parts} of ${gap.total} texts.`;
-        problems.push({ path: ['locales', gap.locale, story.id], message });
+        problems.push({ path: ['locales', gap.locale, story.id], message: `“${story.title}” in ${gap.locale}: ${parts} of ${gap.total} texts.` });
       }
     }
     for (const { story, revision } of chosen) {

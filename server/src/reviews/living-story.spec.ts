@@ -83,25 +83,39 @@ describe('releases of a revised story', () => {
     return JSON.parse(manifest).stories[0] as { revisionId: number; panels: { docs: Record<string, unknown> }[] };
   };
 
-  it('carry the approved revision while a newer draft is written and reviewed, and the newer revision once it is approved', async () => {
-    const g = await approvedGallery(t, 'living-story-release');
+  it('carry the approved revision and its translations while a newer draft is written and reviewed, and the newer revision once it is approved and translated', async () => {
+    const g = await approvedGallery(t, 'living-story-release', { fallbackToSource: false });
+    const frenchUnits = async () => (await request(t.http).get(`/api/stories/${g.story.storyId}/translations/fr/units?pageSize=100`).set(translator).expect(200)).body.items as { unitId: string; source: string; status: string; version: number }[];
+    const translateAll = async () => {
+      for (const unit of (await frenchUnits()).filter((each) => each.status !== 'translated')) {
+        await request(t.http).put(`/api/stories/${g.story.storyId}/translations/fr/units/${encodeURIComponent(unit.unitId)}`).set(translator).send({ text: `FR ${unit.source}`, version: unit.version }).expect(200);
+      }
+    };
+    await translateAll();
+
     await move(g.story.storyId, 'revise', g.curator.auth).expect(200);
-    const fixed = imageDoc(g.imageId);
-    (fixed.content[0] as { content: { text: string }[] }).content[0]!.text = 'The map shows where the plates meet.';
+    const fixed = { type: 'doc', content: [paragraphDoc('The map shows where the plates meet.').content[0], imageDoc(g.imageId).content![1]] };
     await request(t.http).put(`/api/panels/${g.story.panelIds[0]}`).set(g.curator.auth).send({ doc: fixed, version: 1 }).expect(200);
     const { revisionId: newer } = await submit(t, g.curator.auth, g.story.storyId);
 
+    // The venue does not fall back to English, yet the release builds: the approved revision's French is complete.
     const during = await buildRelease(t, g.technician.auth, g.gallery.id);
     expect(during.state).toBe('ready');
     const carried = await releasedStory(g.technician.auth, during.id);
     expect(carried.revisionId).toBe(g.revisionId);
     expect(JSON.stringify(carried.panels[0]!.docs.en)).toContain('The map shows where plates meet.');
+    expect(JSON.stringify(carried.panels[0]!.docs.fr)).toContain('FR The map shows where plates meet.');
 
     await verdict(t, g.educator.auth, newer, { verdict: 'approve' }).expect(201);
+    const refused = await request(t.http).post(`/api/galleries/${g.gallery.id}/releases`).set(g.technician.auth).send({});
+    expect(refused.status).toBe(422);
+    expect(refused.body.errors).toContainEqual({ path: ['locales', 'fr', g.story.storyId], message: expect.stringMatching(/in fr: 1 stale of \d+ texts/) });
+
+    await translateAll();
     const after = await buildRelease(t, g.technician.auth, g.gallery.id);
     const released = await releasedStory(g.technician.auth, after.id);
     expect(released.revisionId).toBe(newer);
-    expect(JSON.stringify(released.panels[0]!.docs.en)).toContain('The map shows where the plates meet.');
+    expect(JSON.stringify(released.panels[0]!.docs.fr)).toContain('FR The map shows where the plates meet.');
   });
 });
 

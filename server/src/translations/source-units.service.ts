@@ -1,7 +1,7 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
-import { mediaIdsIn, segmentAltText, segmentPanel, type PanelDocJSON, type TranslationUnit } from '@mantlepiece/shared';
+import { mediaIdsIn, segmentAltText, segmentPanel, type PanelDocJSON, type RevisionSnapshot, type TranslationUnit } from '@mantlepiece/shared';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { PanelDocument } from '../panels/models/panel-document.model.js';
@@ -37,6 +37,22 @@ export interface StorySource {
   altTexts: AltTextSource[];
 }
 
+/** A revision as the release build holds it: its id and its frozen snapshot. */
+export interface FrozenSource {
+  id: number;
+  storyId: number;
+  snapshot: RevisionSnapshot;
+}
+
+/** One panel's source document as units are cut from it, and the memo key its units are remembered under. */
+interface PanelInput {
+  panelId: number;
+  position: number;
+  version: number;
+  doc: PanelDocJSON | null;
+  memoKey: string;
+}
+
 /** Enough for every panel of a few dozen busy stories; past it the oldest entries are cut again on demand. */
 const MEMO_LIMIT = 5000;
 
@@ -45,6 +61,7 @@ const MEMO_LIMIT = 5000;
  * disagree with what the curator last saved, whoever saved it and however. Hashing is the costly
  * part, so each panel's units are remembered under its document's id, version and locale and its
  * position: a save bumps the version, a reorder moves the position, and either misses the memo.
+ * A revision's panels never change, so theirs are remembered under the revision and panel.
  * Nothing in the memo is shared state: another server instance simply cuts the units itself.
  */
 @Injectable()
@@ -67,11 +84,7 @@ export class SourceUnitsService {
   /** The sources of these stories, in the order given, skipping ids that do not exist. */
   async sourcesOf(storyIds: readonly number[], transaction?: Transaction): Promise<StorySource[]> {
     if (storyIds.length === 0) return [];
-    const stories = await this.stories.findAll({
-      where: { id: [...storyIds] },
-      include: [{ model: Exhibit, include: [{ model: Gallery, include: [Venue] }] }],
-      transaction,
-    });
+    const stories = await this.storiesWithVenues(storyIds, transaction);
     const firstVenue = await this.venues.findOne({ order: [['id', 'ASC']], transaction });
     const panels = await this.panels.findAll({
       where: { storyId: stories.map((story) => story.id) },
@@ -84,35 +97,59 @@ export class SourceUnitsService {
       storyIds.flatMap((id) => {
         const story = byId.get(id);
         if (!story) return [];
+        const inputs = panels.filter((panel) => panel.storyId === id).map((panel): PanelInput => {
+          const document = panel.documents?.find((each) => each.locale === story.sourceLocale);
+          return {
+            panelId: panel.id, position: panel.position, version: document?.version ?? 0, doc: document?.doc ?? null,
+            memoKey: document ? `panel:${document.id}:${document.version}:${document.locale}` : '',
+          };
+        });
         // A story outside any exhibit is written for the first venue set up, as the stories module decides.
-        const venue = story.exhibit?.gallery?.venue ?? firstVenue;
-        return [this.build(story, venue, panels.filter((panel) => panel.storyId === id), transaction)];
+        return [this.build(story, story.exhibit?.gallery?.venue ?? firstVenue, story.sourceLocale, inputs, transaction)];
       }),
     );
   }
 
-  private async build(story: Story, venue: Venue | null, panels: Panel[], transaction?: Transaction): Promise<StorySource> {
+  /**
+   * The source a revision froze, cut into units the same way, so a release reads the translations
+   * made from what was approved even while a newer draft of the story is written.
+   */
+  async sourceAt(revision: FrozenSource, transaction?: Transaction): Promise<StorySource> {
+    const [story] = await this.storiesWithVenues([revision.storyId], transaction);
+    if (!story) throw new NotFoundException('There is no such story.');
+    const venue = story.exhibit?.gallery?.venue ?? (await this.venues.findOne({ order: [['id', 'ASC']], transaction }));
+    const { sourceLocale } = revision.snapshot.story;
+    const inputs = revision.snapshot.panels.map((panel): PanelInput => ({
+      panelId: panel.id, position: panel.position, version: 0, doc: panel.docs[sourceLocale] ?? null, memoKey: `revision:${revision.id}:${panel.id}`,
+    }));
+    return this.build(story, venue, sourceLocale, inputs, transaction);
+  }
+
+  private storiesWithVenues(storyIds: readonly number[], transaction?: Transaction): Promise<Story[]> {
+    return this.stories.findAll({
+      where: { id: [...storyIds] },
+      include: [{ model: Exhibit, include: [{ model: Gallery, include: [Venue] }] }],
+      transaction,
+    });
+  }
+
+  private async build(story: Story, venue: Venue | null, sourceLocale: string, panels: PanelInput[], transaction?: Transaction): Promise<StorySource> {
     const panelSources = await Promise.all(
       panels.map(async (panel, index) => {
-        const document = panel.documents?.find((each) => each.locale === story.sourceLocale);
-        const doc = document?.doc ?? { type: 'doc', content: [] };
-        const units = document ? await this.panelUnits(document, panel.id, index + 1, story.sourceLocale) : [];
-        return { panelId: panel.id, position: panel.position, panelNumber: index + 1, version: document?.version ?? 0, doc, units };
+        const panelNumber = index + 1;
+        const units = panel.doc
+          ? await this.remember(`${panel.memoKey}:${panelNumber}`, () => segmentPanel(panel.doc!, { panelId: panel.panelId, sourceLocale, panelNumber }))
+          : [];
+        return { panelId: panel.panelId, position: panel.position, panelNumber, version: panel.version, doc: panel.doc ?? { type: 'doc' as const, content: [] }, units };
       }),
     );
     return {
       story,
       venue,
-      targetLocales: (venue?.targetLocales ?? []).filter((locale) => locale !== story.sourceLocale),
+      targetLocales: (venue?.targetLocales ?? []).filter((locale) => locale !== sourceLocale),
       panels: panelSources,
-      altTexts: await this.altTextSources(panelSources, story.sourceLocale, transaction),
+      altTexts: await this.altTextSources(panelSources, sourceLocale, transaction),
     };
-  }
-
-  private panelUnits(document: PanelDocument, panelId: number, panelNumber: number, sourceLocale: string): Promise<TranslationUnit[]> {
-    return this.remember(`panel:${document.id}:${document.version}:${document.locale}:${panelNumber}`, () =>
-      segmentPanel(document.doc, { panelId, sourceLocale, panelNumber }),
-    );
   }
 
   /** One unit per image the story shows that has alt text in the source locale, in order of first use. */

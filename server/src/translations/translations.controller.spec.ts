@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PanelNodeJSON, TranslationUnitView } from '@mantlepiece/shared';
+import { buildRevisionSnapshot, type PanelNodeJSON, type TranslationUnitView } from '@mantlepiece/shared';
 import { signedInAs } from '../../test/authoring-fixtures.js';
 import { bearer, createPerson, signIn, type TestApp } from '../../test/test-app.js';
 import { createTranslationTestApp, examplePanelWithImage, translationRowCounts, translationWorld } from '../../test/translation-fixtures.js';
@@ -179,7 +179,13 @@ describe('completeness and preview', () => {
   });
 
   it('gives the release build each story’s completeness and what is missing', async () => {
-    const [fr, es] = await t.app.get(TranslationsService).completenessForRelease([world.story.id], ['fr', 'es']);
+    // The story as a revision would freeze it; the release build asks about revisions.
+    const story = (await request(t.http).get(`/api/stories/${world.story.id}`).set(world.curator).expect(200)).body;
+    const snapshot = buildRevisionSnapshot({
+      ...story,
+      panels: story.panels.map((panel: { id: number; position: number; wordBudget: number; doc: object }) => ({ ...panel, docs: { en: panel.doc } })),
+    });
+    const [fr, es] = await t.app.get(TranslationsService).completenessForRelease([{ id: 0, storyId: world.story.id, snapshot }], ['fr', 'es']);
     expect(fr).toMatchObject({ storyId: world.story.id, locale: 'fr', total: 9, translated: 3, stale: 0, complete: false });
     expect(fr!.missing.map((unit) => unit.unitId)).toEqual([
       paragraph(), `p${world.panel.id}.heading.2`, `p${world.panel.id}.listItem.1`, `p${world.panel.id}.listItem.2`, `p${world.panel.id}.listItem.3`, `p${world.panel.id}.quote.1`,

@@ -14,7 +14,7 @@ import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { User } from '../users/models/user.model.js';
 import type { ListUnitsQuery, ListWorklistQuery, SaveTranslationUnitDto } from './dto/translation.dto.js';
 import { Translation } from './models/translation.model.js';
-import { SourceUnitsService, type StorySource } from './source-units.service.js';
+import { SourceUnitsService, type FrozenSource, type StorySource } from './source-units.service.js';
 import { assertMayRead, assertMayWrite, assertTargetLocale, readableLocales } from './translation-access.js';
 import { completenessOf, currentTranslationsOf, unitStates, type UnitState } from './translation-state.js';
 import { toTranslationUnitView } from './translations.presenter.js';
@@ -140,14 +140,18 @@ export class TranslationsService {
     return { storyId, locale, ...(await this.draw(source, locale)) };
   }
 
-  /** For the release build: the story's panels and alt texts in `locale`, the source shown where a translation is missing or stale. */
-  async targetDocuments(storyId: number, locale: string): Promise<TargetDocuments> {
-    return this.draw(await this.sources.sourceOf(storyId), locale);
+  /**
+   * For the release build: a revision's panels and alt texts in `locale`, from the translations
+   * made from its own source (so a newer draft being written does not take them away), the source
+   * shown where a translation is missing or stale.
+   */
+  async targetDocumentsAt(revision: FrozenSource, locale: string): Promise<TargetDocuments> {
+    return this.draw(await this.sources.sourceAt(revision), locale);
   }
 
-  /** For the release build: how complete each story is in each locale, and what is missing. */
-  async completenessForRelease(storyIds: readonly number[], locales: readonly string[]): Promise<ReleaseCompleteness[]> {
-    const sources = await this.sources.sourcesOf(storyIds);
+  /** For the release build: how complete each revision is in each locale, and what is missing. */
+  async completenessForRelease(revisions: readonly FrozenSource[], locales: readonly string[]): Promise<ReleaseCompleteness[]> {
+    const sources = await Promise.all(revisions.map((revision) => this.sources.sourceAt(revision)));
     const figures = await Promise.all(
       sources.flatMap((source) =>
         locales.map(async (locale) => {
