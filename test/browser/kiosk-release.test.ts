@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { chromium, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
-import type { KioskView, ReleaseManifest, ReleaseView } from '@mantlepiece/shared';
+import type { FleetKioskView, KioskManifestResponse, KioskView, PublicationRecord, ReleaseManifest, ReleaseView } from '@mantlepiece/shared';
 import { baseUrl, chromiumOptions, demoPassword, launchBrowser, newContext, signIn } from '../support/browser';
 
 // The seeded demo (server/src/seed): one gallery, one station, three approved stories.
@@ -25,6 +25,9 @@ let technicianToken: string;
 let firstRelease: number;
 let secondRelease: number;
 let kioskId: number;
+/** Every answer the kiosk got from the manifest route, by its publication's sequence: what a replay would send again. */
+const answers = new Map<number, KioskManifestResponse>();
+const sequenceOf = (answer: KioskManifestResponse) => (JSON.parse(answer.publication.record) as PublicationRecord).sequence;
 
 /** The staff API as the technician, for checks the studio pages do not show in full. */
 async function staff<T>(path: string): Promise<T> {
@@ -83,7 +86,14 @@ beforeAll(async () => {
     ...chromiumOptions, baseURL: baseUrl, locale: 'en-GB', viewport: { width: 1920, height: 1080 }, hasTouch: true,
   });
   screen = kiosk.pages()[0] ?? (await kiosk.newPage());
+  screen.on('response', (response) => {
+    if (!response.url().endsWith('/api/kiosk/manifest') || response.status() !== 200) return;
+    void response.json().then((answer: KioskManifestResponse) => answers.set(sequenceOf(answer), answer));
+  });
 });
+
+/** The kiosk as the Fleet list shows it, from its last heartbeat. */
+const fleetRow = async () => (await staff<{ items: FleetKioskView[] }>('/kiosks?pageSize=100')).items.find((item) => item.id === kioskId);
 
 afterAll(async () => {
   await kiosk?.close();
@@ -208,5 +218,42 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
     const release = await staff<ReleaseView>(`/releases/${firstRelease}`);
     expect(release.state).toBe('live');
     await expect.poll(async () => (await staff<{ items: KioskView[] }>('/kiosks?pageSize=100')).items.find((item) => item.id === kioskId)?.releaseLive?.id).toBe(firstRelease);
+
+    // The rollback is a new publication, two after the one the kiosk first followed: it follows it.
+    const [firstSequence] = [...answers.keys()].sort((a, b) => a - b);
+    expect(firstSequence, 'the first publication the kiosk received').toBeDefined();
+    await expect.poll(async () => (await fleetRow())?.publication?.sequence, { timeout: 30_000 }).toBe(firstSequence! + 2);
+    expect((await fleetRow())?.releasePlaying?.id).toBe(firstRelease);
+  });
+
+  it('refuses the withdrawn release’s answer sent again, signed as it is, and keeps playing the rollback', async () => {
+    const followed = (await fleetRow())!.publication!.sequence;
+    const withdrawn = answers.get(followed - 1);
+    expect(withdrawn && JSON.parse(withdrawn.manifest).releaseId, 'the answer that carried the second release').toBe(secondRelease);
+    // Someone on the gallery network answers the kiosk's manifest request with that old, correctly signed answer.
+    await kiosk.route('**/api/kiosk/manifest', (route) => route.fulfill({ status: 200, contentType: 'application/json', headers: { ETag: '"replayed"' }, body: JSON.stringify(withdrawn) }));
+    try {
+      await expect.poll(async () => (await fleetRow())?.lastError ?? '', { timeout: 30_000 })
+        .toBe(`Publication ${followed - 1} is older than publication ${followed}, which this kiosk already follows: an old answer sent again is refused.`);
+      expect(await fleetRow()).toMatchObject({ releasePlaying: { id: firstRelease }, publication: { sequence: followed, expired: false } });
+    } finally {
+      await kiosk.unroute('**/api/kiosk/manifest');
+    }
+  });
+
+  it('keeps playing once its publication has expired by its clock, says so, and the Fleet page shows it', async () => {
+    const followed = (await fleetRow())!.publication!;
+    // The kiosk's clock moves past the record's expiry, as when nothing fresh reached it for weeks.
+    await screen.clock.setFixedTime(new Date(Date.parse(followed.expiresAt) + 86_400_000));
+    await expect.poll(async () => (await fleetRow())?.publication?.expired, { timeout: 30_000 }).toBe(true);
+    await screen.reload();
+    await screen.getByRole('button', { name: /Touch to begin/ }).tap();
+    await expect.poll(() => screen.locator('.story-card-title').allTextContents()).toEqual(KEPT);
+
+    await studio.goto('/fleet');
+    const row = studio.locator(`tr[data-kiosk-id="${kioskId}"]`);
+    await row.getByText(`Publication ${followed.sequence} expired`).waitFor();
+    await studio.goto(`/fleet/${kioskId}`);
+    await studio.locator('[data-publication-expired]').getByText(new RegExp(`^Number ${followed.sequence}, expired .+ The kiosk plays on`)).waitFor();
   });
 });

@@ -1,4 +1,6 @@
-import type { EventsBody, EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, ManifestResponse, PairCompleteWaiting, PairStartResponse } from '@mantlepiece/shared';
+import type {
+  EventsBody, EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, KioskManifestResponse, PairCompleteWaiting, PairStartResponse,
+} from '@mantlepiece/shared';
 
 /** The public view of the default venue, for the attract loop before the kiosk is paired. */
 export interface KioskVenue {
@@ -16,7 +18,7 @@ export class KioskApiError extends Error {
 export type ManifestAnswer =
   | { status: 'unchanged' }
   | { status: 'none' }
-  | { status: 'release'; body: ManifestResponse; etag: string | null };
+  | { status: 'release'; body: KioskManifestResponse; etag: string | null };
 
 export type PairAnswer = { status: 'waiting' } | { status: 'expired' } | { status: 'paired'; credential: KioskCredential };
 
@@ -71,7 +73,7 @@ export class KioskApi {
     if (response.status === 304) return { status: 'unchanged' };
     if (response.status === 404) return { status: 'none' };
     if (response.status !== 200) throw new KioskApiError(response.status, `GET /api/kiosk/manifest answered ${response.status}.`);
-    return { status: 'release', body: (await response.json()) as ManifestResponse, etag: response.headers.get('ETag') };
+    return { status: 'release', body: (await response.json()) as KioskManifestResponse, etag: response.headers.get('ETag') };
   }
 
   /** A release file from byte `from` on (a Range request when resuming). */

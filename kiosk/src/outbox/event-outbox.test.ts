@@ -35,11 +35,23 @@ describe('heartbeat', () => {
     const store = await testStore();
     await store.setMeta('lastError', 'Release 2 refused: a file did not match its SHA-256.');
     const body = await heartbeatBody(store, 1, '0.1.0', 1_000, 91_400);
-    expect(body).toEqual({ releaseId: 1, appVersion: '0.1.0', uptimeS: 90, storageUsedBytes: null, lastError: 'Release 2 refused: a file did not match its SHA-256.' });
+    expect(body).toEqual({
+      releaseId: 1, appVersion: '0.1.0', uptimeS: 90, storageUsedBytes: null, lastError: 'Release 2 refused: a file did not match its SHA-256.',
+      publicationSequence: null, publicationExpiresAt: null, publicationExpired: false,
+    });
     const server = new FakeKioskServer();
     expect(await sendHeartbeat(new KioskApi(server.fetch), body)).toBe(true);
     expect(server.requestsTo('/api/kiosk/heartbeat')[0]!.body).toEqual(body);
     server.reachable = false;
     expect(await sendHeartbeat(new KioskApi(server.fetch), body)).toBe(false);
+  });
+
+  it('says when the publication it follows has expired by its clock, and sends its last error as plain text', async () => {
+    const store = await testStore();
+    await store.setMeta('publication', { sequence: 4, releaseId: 2, expiresAt: '2025-06-01T00:00:00.000Z' });
+    await store.setMeta('lastError', 'The manifest does not match:\n "title"\u202E');
+    const fresh = await heartbeatBody(store, 2, '0.1.0', 0, Date.parse('2025-05-31T23:59:59.999Z'));
+    expect(fresh).toMatchObject({ publicationSequence: 4, publicationExpiresAt: '2025-06-01T00:00:00.000Z', publicationExpired: false, lastError: 'The manifest does not match: "title"' });
+    expect((await heartbeatBody(store, 2, '0.1.0', 0, Date.parse('2025-06-01T00:00:00.000Z'))).publicationExpired).toBe(true);
   });
 });

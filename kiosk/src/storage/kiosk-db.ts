@@ -1,5 +1,5 @@
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
-import type { KioskCredential, KioskEvent } from '@mantlepiece/shared';
+import type { FollowedPublication, KioskCredential, KioskEvent } from '@mantlepiece/shared';
 
 /** A file of a release, checked against its SHA-256 before it is stored here. */
 export interface StoredFile {
@@ -31,6 +31,11 @@ export interface KioskMeta {
   pending: number | null;
   manifestEtag: string | null;
   lastError: string | null;
+  /**
+   * The publication the kiosk follows: never replaced by a lower sequence, so an old answer sent
+   * again is refused (issue 11).
+   */
+  publication: FollowedPublication | null;
 }
 
 interface KioskSchema extends DBSchema {

@@ -1,7 +1,7 @@
 import { parseManifest, type KioskCredential } from '@mantlepiece/shared';
 import type { KioskDb, KioskMeta, StoredChunk, StoredFile, StoredRelease } from './kiosk-db';
 
-const EMPTY_META: KioskMeta = { current: null, previous: null, pending: null, manifestEtag: null, lastError: null };
+const EMPTY_META: KioskMeta = { current: null, previous: null, pending: null, manifestEtag: null, lastError: null, publication: null };
 
 /** Everything the kiosk keeps between restarts: its credential, releases and their files. */
 export class KioskStore {

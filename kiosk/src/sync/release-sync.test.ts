@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { KioskApi } from '../app/kiosk-api';
 import type { KioskStore } from '../storage/kiosk-store';
 import { FakeKioskServer } from '../test-support/fake-server';
-import { fixtureCredential, fixtureRelease, sha256Of, venueKey } from '../test-support/release-fixture';
+import { fixtureCredential, fixtureRelease, published, sha256Of, venueKey } from '../test-support/release-fixture';
 import { testStore } from '../test-support/test-store';
 import { CHUNK_BYTES } from './file-download';
 import { bootRelease } from './playable-release';
@@ -43,7 +43,7 @@ describe('release sync', () => {
     const before = server.requests.length;
     expect(await syncRelease(api, store, credential)).toEqual({ kind: 'unchanged' });
     expect(server.requests.slice(before).map((request) => request.path)).toEqual(['/api/kiosk/manifest']);
-    expect(server.requests.at(-1)!.headers.get('If-None-Match')).toBe('"release-1"');
+    expect(server.requests.at(-1)!.headers.get('If-None-Match')).toBe(server.live!.etag);
   });
 
   it('refuses a file whose hash does not match, keeps the current release and remembers why', async () => {
@@ -98,17 +98,62 @@ describe('release sync', () => {
     expect(server.requests.slice(before).filter((request) => request.path.startsWith('/api/kiosk/files/'))).toEqual([]);
   });
 
-  it('keeps the release it replaced, so a rollback needs no download', async () => {
+  it('follows a technician’s rollback, a new publication of the release it replaced, with no download', async () => {
     await playRelease(1);
     const first = server.live!;
     await playRelease(2, { imageSeed: 5 });
     expect(await store.meta('previous')).toBe(1);
-    server.live = first;
+    server.live = published(key, first, { sequence: 3 });
     const before = server.requests.length;
     expect(await syncRelease(api, store, credential)).toEqual({ kind: 'known', releaseId: 1 });
     expect(server.requests.slice(before).filter((request) => request.path.startsWith('/api/kiosk/files/'))).toEqual([]);
     expect(await promotePendingRelease(store)).toBe(1);
     expect(await store.meta('previous')).toBe(2);
+    expect(await store.meta('publication')).toEqual({ sequence: 3, releaseId: 1, expiresAt: '2099-01-01T00:00:00.000Z' });
+  });
+
+  it('refuses an older signed answer sent again, keeps playing what it plays and says why', async () => {
+    await playRelease(1);
+    const first = server.live!;
+    await playRelease(2, { imageSeed: 5 });
+    // Correctly signed by the venue, but publication 1: withdrawn by publication 2.
+    server.live = first;
+    const before = server.requests.length;
+    const reason = 'Publication 1 is older than publication 2, which this kiosk already follows: an old answer sent again is refused.';
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'rejected', reason });
+    expect(server.requests.slice(before).some((request) => request.path.startsWith('/api/kiosk/files/'))).toBe(false);
+    expect(await store.meta('lastError')).toBe(reason);
+    expect({ current: await store.meta('current'), pending: await store.meta('pending') }).toEqual({ current: 2, pending: null });
+    expect((await store.meta('publication'))?.sequence).toBe(2);
+    // A restart changes nothing: the sequence is kept with the releases.
+    expect((await bootRelease(store, credential.publicKey))?.releaseId).toBe(2);
+    expect((await syncRelease(api, store, credential)).kind).toBe('rejected');
+  });
+
+  it('refuses an answer whose publication record vouches for another manifest', async () => {
+    await playRelease(1);
+    const second = fixtureRelease(key, 2, { imageSeed: 5 });
+    server.live = { ...second, response: { ...second.response, publication: fixtureRelease(key, 3).response.publication } };
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'rejected', reason: 'Publication 3 vouches for another manifest than the one sent with it.' });
+    expect(await store.meta('pending')).toBeNull();
+  });
+
+  it('takes a re-signed record of the publication it plays, keeping its later expiry', async () => {
+    await playRelease(1, { expiresAt: '2025-06-01T00:00:00.000Z' });
+    server.live = published(key, server.live!, { sequence: 1, expiresAt: '2025-07-01T00:00:00.000Z' });
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'known', releaseId: 1 });
+    expect(await store.meta('publication')).toEqual({ sequence: 1, releaseId: 1, expiresAt: '2025-07-01T00:00:00.000Z' });
+    // An earlier copy of that same publication is no step back, and leaves the later expiry.
+    server.live = published(key, server.live!, { sequence: 1, expiresAt: '2025-06-01T00:00:00.000Z' });
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'known', releaseId: 1 });
+    expect((await store.meta('publication'))?.expiresAt).toBe('2025-07-01T00:00:00.000Z');
+  });
+
+  it('still plays a release whose publication has expired', async () => {
+    server.live = fixtureRelease(key, 1, { expiresAt: '2025-06-01T00:00:00.000Z' });
+    expect(await syncRelease(api, store, credential, () => new Date('2025-09-01T00:00:00.000Z'))).toEqual({ kind: 'ready', releaseId: 1 });
+    expect(await promotePendingRelease(store)).toBe(1);
+    expect((await bootRelease(store, credential.publicKey))?.releaseId).toBe(1);
   });
 
   it('drops files no kept release lists once a third release is played', async () => {

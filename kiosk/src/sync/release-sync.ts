@@ -1,4 +1,4 @@
-import { missingFiles, parseManifest, verifyManifest, type KioskCredential } from '@mantlepiece/shared';
+import { checkPublication, laterPublication, missingFiles, parseManifest, verifyManifest, type KioskCredential } from '@mantlepiece/shared';
 import type { KioskApi } from '../app/kiosk-api';
 import type { KioskStore } from '../storage/kiosk-store';
 import { downloadFile } from './file-download';
@@ -19,19 +19,24 @@ async function reject(store: KioskStore, reason: string): Promise<SyncOutcome> {
 }
 
 /**
- * One round of release sync: ask for the gallery's live manifest, and when it is new, verify it,
- * download what is missing and mark it pending. Network failures throw (the caller tries later);
- * a release that fails its checks is rejected and never becomes pending.
+ * One round of release sync: ask for the gallery's live manifest, and when it is new, verify it
+ * and its publication record, download what is missing and mark it pending. Network failures
+ * throw (the caller tries later); a release that fails its checks is rejected and never becomes
+ * pending. A publication older than the one the kiosk follows is refused however well it is
+ * signed, so a rollback reaches the kiosk only as a technician's new publication.
  */
-export async function syncRelease(api: KioskApi, store: KioskStore, credential: KioskCredential): Promise<SyncOutcome> {
+export async function syncRelease(api: KioskApi, store: KioskStore, credential: KioskCredential, now: () => Date = () => new Date()): Promise<SyncOutcome> {
   const answer = await api.manifest(await store.meta('manifestEtag'));
   if (answer.status === 'unchanged') return { kind: 'unchanged' };
   if (answer.status === 'none') return { kind: 'no-release' };
 
-  const { manifest: manifestJson, signature } = answer.body;
+  const { manifest: manifestJson, signature, publication } = answer.body;
   if (!(await verifyManifest(manifestJson, signature, credential.publicKey))) {
     return reject(store, 'The release manifest is not signed by this venue’s key.');
   }
+  const followed = await store.meta('publication');
+  const checked = await checkPublication(publication, manifestJson, credential.publicKey, { galleryId: credential.galleryId, highestSequence: followed?.sequence ?? null, now: now() });
+  if (!checked.ok) return reject(store, checked.reason);
   const parsed = parseManifest(manifestJson);
   if (!parsed.ok) return reject(store, parsed.message);
   const { manifest } = parsed;
@@ -47,7 +52,8 @@ export async function syncRelease(api: KioskApi, store: KioskStore, credential: 
     }
     await store.putRelease({ releaseId: manifest.releaseId, manifestJson, signature, storedAt: new Date().toISOString() });
   }
-  // Only a release that checked completely gets the ETag, so a refused one is asked for again.
+  // Only a release that checked completely gets the ETag and moves the sequence on, so a refused one is asked for again.
+  await store.setMeta('publication', laterPublication(followed, checked.record));
   await store.setMeta('manifestEtag', answer.etag);
 
   if ((await store.meta('current')) === manifest.releaseId) {

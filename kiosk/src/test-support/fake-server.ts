@@ -43,7 +43,7 @@ export class FakeKioskServer {
     }
     if (method === 'GET' && path === '/api/kiosk/manifest') {
       if (!this.live) return json(404, { statusCode: 404, message: 'No live release for this gallery' });
-      const etag = `"release-${this.live.manifest.releaseId}"`;
+      const { etag } = this.live;
       if (headers.get('If-None-Match') === etag) return new Response(null, { status: 304 });
       return json(200, this.live.response, { ETag: etag });
     }

@@ -1,6 +1,8 @@
 /// <reference types="node" />
 import { createHash, generateKeyPairSync, sign } from 'node:crypto';
-import { RELEASE_FORMAT, serializeManifest, type KioskCredential, type ManifestResponse, type ReleaseManifest, type ReleaseStory } from '@mantlepiece/shared';
+import {
+  PUBLICATION_FORMAT, RELEASE_FORMAT, serializeManifest, serializePublication, type KioskCredential, type KioskManifestResponse, type ReleaseManifest, type ReleaseStory,
+} from '@mantlepiece/shared';
 
 /** A venue key pair made with node:crypto, as the server makes and signs with it. */
 export function venueKey() {
@@ -44,12 +46,30 @@ export function fixtureStory(id: number, titles: Record<string, string>, mediaId
 
 export interface FixtureRelease {
   manifest: ReleaseManifest;
-  response: ManifestResponse;
+  response: KioskManifestResponse;
   files: Map<string, Uint8Array>;
+  /** What the server tags this answer with: it changes with the publication record. */
+  etag: string;
 }
 
-/** A signed release of the demo venue's gallery 2 with one image in two renditions. */
-export function fixtureRelease(key: VenueKey, releaseId: number, options: { imageSeed?: number; storyTitle?: string; locales?: string[] } = {}): FixtureRelease {
+export interface PublicationOptions {
+  /** The publication's sequence; by default the release id, as when each release is published once in turn. */
+  sequence?: number;
+  expiresAt?: string;
+}
+
+/** The same release under a publication record of its own, as a technician's publish or rollback (or a re-signing) gives it. */
+export function published(key: VenueKey, release: FixtureRelease, { sequence = release.manifest.releaseId, expiresAt = '2099-01-01T00:00:00.000Z' }: PublicationOptions = {}): FixtureRelease {
+  const record = serializePublication({
+    format: PUBLICATION_FORMAT, galleryId: release.manifest.galleryId, sequence, releaseId: release.manifest.releaseId,
+    manifestSha256: sha256Of(Buffer.from(release.response.manifest, 'utf8')),
+    publishedAt: '2025-05-01T09:30:00.000Z', signedAt: '2025-05-01T09:30:00.000Z', expiresAt,
+  });
+  return { ...release, response: { ...release.response, publication: { record, signature: key.sign(record) } }, etag: `"${sha256Of(Buffer.from(record, 'utf8'))}"` };
+}
+
+/** A signed release of the demo venue's gallery 2 with one image in two renditions, published. */
+export function fixtureRelease(key: VenueKey, releaseId: number, options: { imageSeed?: number; storyTitle?: string; locales?: string[] } & PublicationOptions = {}): FixtureRelease {
   const seed = options.imageSeed ?? 1;
   const small = fakeImage(seed, 300_000);
   const large = fakeImage(seed + 1000);
@@ -70,7 +90,8 @@ export function fixtureRelease(key: VenueKey, releaseId: number, options: { imag
     files: [...files].map(([sha256, bytes]) => ({ sha256, size: bytes.byteLength, mime: 'image/webp' })),
   };
   const text = serializeManifest(manifest);
-  return { manifest, files, response: { manifest: text, signature: key.sign(text) } };
+  const unpublished = { manifest, files, response: { manifest: text, signature: key.sign(text), publication: { record: '', signature: '' } }, etag: '' };
+  return published(key, unpublished, options);
 }
 
 export const fixtureCredential = (key: VenueKey): KioskCredential => ({ deviceToken: 'device-token-1', kioskId: 3, galleryId: 2, stationId: 5, publicKey: key.publicKeySpkiB64 });

@@ -66,6 +66,8 @@ export class ConfigService {
 
   /** 0 turns the release worker's timer off (tests drive builds by hand). */
   readonly releasePollIntervalMs = intFromEnv('RELEASE_POLL_INTERVAL_MS', 1000);
+  /** How long a signed publication record holds; it is signed again once half of that has passed. */
+  readonly publicationLifetimeDays = Math.max(intFromEnv('PUBLICATION_LIFETIME_DAYS', 30), 1);
 
   /** How often kiosks send a heartbeat; two missed make a kiosk stale on the Fleet page. */
   readonly heartbeatIntervalS = Math.max(intFromEnv('HEARTBEAT_INTERVAL_S', 30), 1);

@@ -71,7 +71,7 @@ describe('fleet states', () => {
     expect(detail.heartbeats).toMatchObject({ total: 3, page: 1, pageSize: 2 });
     expect(detail.heartbeats.items.map((h) => h.uptimeS)).toEqual([90, 60]);
     expect(detail.heartbeats.items[0]).toEqual({
-      id: expect.any(Number), receivedAt: expect.any(String), release: { id: first.id, number: first.number }, appVersion: '0.1.0', uptimeS: 90, storageUsedBytes: 4_000_000, lastError: null,
+      id: expect.any(Number), receivedAt: expect.any(String), release: { id: first.id, number: first.number }, appVersion: '0.1.0', uptimeS: 90, storageUsedBytes: 4_000_000, lastError: null, publication: null,
     });
     const second = await request(t.http).get(`/api/kiosks/${credential.kioskId}`).query({ page: 2, pageSize: 2 }).set(g.technician.auth);
     expect(second.body.heartbeats.items.map((h: { uptimeS: number }) => h.uptimeS)).toEqual([30]);

@@ -1,4 +1,5 @@
 import type { HeartbeatView } from '@mantlepiece/shared';
+import { publicationReport } from '../kiosks/kiosks.presenter.js';
 import type { KioskHeartbeat } from '../kiosks/models/kiosk-heartbeat.model.js';
 import type { Release } from '../releases/models/release.model.js';
 
@@ -13,5 +14,6 @@ export const toHeartbeatView = (heartbeat: KioskHeartbeat, releases: Map<number,
     uptimeS: heartbeat.uptimeS,
     storageUsedBytes: heartbeat.storageUsedBytes === null ? null : Number(heartbeat.storageUsedBytes),
     lastError: heartbeat.lastError,
+    publication: publicationReport(heartbeat),
   };
 };

@@ -1,6 +1,7 @@
 import { Body, Controller, Get, Headers, HttpCode, HttpStatus, Ip, NotFoundException, Param, Post, Req, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
+import type { KioskManifestResponse } from '@mantlepiece/shared';
 import { Public } from '../auth/auth.decorators.js';
 import { CurrentKiosk, KioskRoute, type KioskRequest } from './device-token.guard.js';
 import { HeartbeatDto, KioskEventsDto } from './dto/kiosk-report.dto.js';
@@ -35,18 +36,18 @@ export class KioskController {
     return answer;
   }
 
-  /** Revalidated by ETag: a kiosk polling an unchanged release gets 304 and no body. */
+  /** Revalidated by ETag: a kiosk polling an unchanged publication gets 304 and no body. */
   @ApiBearerAuth()
   @KioskRoute()
   @Get('manifest')
   async manifest(@CurrentKiosk() kiosk: PairedKiosk, @Headers('if-none-match') ifNoneMatch: string | undefined, @Res() res: Response): Promise<void> {
-    const { etag, manifest, signature } = await this.kiosks.liveManifest(kiosk);
+    const { etag, ...answer } = await this.kiosks.liveManifest(kiosk);
     res.set({ ETag: etag, 'Cache-Control': 'no-cache' });
     if (ifNoneMatch?.split(',').some((tag) => tag.trim() === etag)) {
       res.status(HttpStatus.NOT_MODIFIED).end();
       return;
     }
-    res.json({ manifest, signature });
+    res.json(answer satisfies KioskManifestResponse);
   }
 
   /** Named by content, so immutable; a byte range resumes a broken download. */

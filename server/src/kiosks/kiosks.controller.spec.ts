@@ -143,7 +143,8 @@ describe('kiosk releases', () => {
     expect(live.status).toBe(200);
     const manifest = parseManifest(live.body.manifest);
     expect(manifest.ok && manifest.manifest.releaseId).toBe(first.id);
-    expect(live.headers.etag).toBe(`"${sha256Of(Buffer.from(live.body.manifest, 'utf8'))}"`);
+    // Tagged by the publication record, which names the manifest's hash: either changing changes the tag.
+    expect(live.headers.etag).toBe(`"${sha256Of(Buffer.from(live.body.publication.record, 'utf8'))}"`);
     const again = await request(t.http).get('/api/kiosk/manifest').set(device).set('If-None-Match', live.headers.etag!);
     expect(again.status).toBe(304);
     expect(again.text).toBe('');
@@ -209,10 +210,10 @@ describe('heartbeats, events and the fleet list', () => {
       { id: randomUUID(), type: 'panel_viewed', at: clock.now().toISOString(), storyId: g.story.storyId, panelId: g.story.panelIds[0], dwellMs: 8200 },
       { id: randomUUID(), type: 'switch_used', at: clock.now().toISOString(), switch: 'large_text' },
     ];
-    expect((await request(t.http).post('/api/kiosk/events').set(device).send({ events })).body).toEqual({ stored: 3, duplicates: 0 });
+    expect((await request(t.http).post('/api/kiosk/events').set(device).send({ events })).body).toEqual({ stored: 3, duplicates: 0, dropped: 0 });
     const retried = await request(t.http).post('/api/kiosk/events').set(device).send({ events: [...events, { id: randomUUID(), type: 'language_chosen', at: clock.now().toISOString(), locale: 'es' }] });
     expect(retried.status).toBe(200);
-    expect(retried.body).toEqual({ stored: 1, duplicates: 3 });
+    expect(retried.body).toEqual({ stored: 1, duplicates: 3, dropped: 0 });
     expect(await t.app.get<typeof KioskEvent>(getModelToken(KioskEvent)).count({ where: { kioskId: credential.kioskId } })).toBe(4);
 
     const personal = await request(t.http).post('/api/kiosk/events').set(device).send({ events: [{ ...events[0], id: randomUUID(), visitorName: 'Lucía' }] });

@@ -2,6 +2,8 @@ import { Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
 import { FleetStatesModule } from '../fleet/fleet-states.module.js';
 import { ReleaseFile } from '../releases/models/release-file.model.js';
+import { ReleasePanel } from '../releases/models/release-panel.model.js';
+import { ReleaseStory } from '../releases/models/release-story.model.js';
 import { Release } from '../releases/models/release.model.js';
 import { RateLimitsModule } from '../rate-limits/rate-limits.module.js';
 import { ReleasesModule } from '../releases/releases.module.js';
@@ -20,7 +22,7 @@ import { PairingService } from './pairing.service.js';
 
 @Module({
   imports: [
-    SequelizeModule.forFeature([Kiosk, PairingRequest, KioskHeartbeat, KioskEvent, Station, Gallery, Release, ReleaseFile]),
+    SequelizeModule.forFeature([Kiosk, PairingRequest, KioskHeartbeat, KioskEvent, Station, Gallery, Release, ReleaseFile, ReleaseStory, ReleasePanel]),
     ReleasesModule, FleetStatesModule, RateLimitsModule,
   ],
   controllers: [KioskController, KiosksController],

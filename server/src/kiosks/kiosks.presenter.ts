@@ -1,10 +1,18 @@
-import type { KioskView } from '@mantlepiece/shared';
+import type { KioskPublicationView, KioskView } from '@mantlepiece/shared';
 import type { Release } from '../releases/models/release.model.js';
 import type { Gallery } from '../venues/models/gallery.model.js';
 import type { Station } from '../venues/models/station.model.js';
 import type { Kiosk } from './models/kiosk.model.js';
 
 const releaseRef = (release: Release | undefined) => (release ? { id: release.id, number: release.number } : null);
+
+type PublicationReport = Pick<Kiosk, 'publicationSequence' | 'publicationExpiresAt' | 'publicationExpired'>;
+
+/** What a kiosk or one of its heartbeats said of its publication; null from kiosks that do not say. */
+export const publicationReport = (report: PublicationReport): KioskPublicationView | null =>
+  report.publicationSequence === null || report.publicationExpiresAt === null
+    ? null
+    : { sequence: report.publicationSequence, expiresAt: report.publicationExpiresAt.toISOString(), expired: Boolean(report.publicationExpired) };
 
 /** `kiosk` with its station and gallery; releases by id, for what it plays and what is Live. */
 export const toKioskView = (kiosk: Kiosk & { station: Station & { gallery: Gallery } }, releases: Map<number, Release>, live: Map<number, Release>): KioskView => ({
@@ -21,4 +29,5 @@ export const toKioskView = (kiosk: Kiosk & { station: Station & { gallery: Galle
   demo: kiosk.demo,
   releasePlaying: releaseRef(kiosk.lastReleaseId === null ? undefined : releases.get(kiosk.lastReleaseId)),
   releaseLive: releaseRef(live.get(kiosk.station.galleryId)),
+  publication: publicationReport(kiosk),
 });

@@ -1,18 +1,21 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import type { EventsResponse, KioskView, ManifestResponse, Page } from '@mantlepiece/shared';
+import type { EventsResponse, KioskManifestResponse, KioskView, Page } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { ReleaseFile } from '../releases/models/release-file.model.js';
+import { ReleasePanel } from '../releases/models/release-panel.model.js';
+import { ReleaseStory } from '../releases/models/release-story.model.js';
 import { Release } from '../releases/models/release.model.js';
-import { ReleaseFileStore } from '../releases/release-file-store.js';
+import { PublicationsService } from '../releases/publications.service.js';
+import { ReleaseFileStore, sha256Of } from '../releases/release-file-store.js';
 import type { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
-import type { HeartbeatDto, KioskEventsDto, ListKiosksQuery } from './dto/kiosk-report.dto.js';
+import type { HeartbeatDto, KioskEventDto, KioskEventsDto, ListKiosksQuery } from './dto/kiosk-report.dto.js';
 import type { KioskRequest } from './device-token.guard.js';
 import { toKioskView } from './kiosks.presenter.js';
 import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
@@ -25,7 +28,7 @@ const SERVABLE_STATES = ['live', 'superseded'];
 
 const EVENT_COLUMNS = ['id', 'kiosk_id', 'gallery_id', 'type', 'at', 'story_id', 'panel_id', 'widget_type', 'param', 'locale', 'dwell_ms', 'switch', 'received_at'];
 
-export interface SignedManifest extends ManifestResponse {
+export interface SignedManifest extends KioskManifestResponse {
   etag: string;
 }
 
@@ -36,25 +39,31 @@ export class KiosksService {
     @InjectModel(KioskHeartbeat) private readonly heartbeats: typeof KioskHeartbeat,
     @InjectModel(Release) private readonly releases: typeof Release,
     @InjectModel(ReleaseFile) private readonly releaseFiles: typeof ReleaseFile,
+    @InjectModel(ReleaseStory) private readonly releaseStories: typeof ReleaseStory,
+    @InjectModel(ReleasePanel) private readonly releasePanels: typeof ReleasePanel,
     private readonly files: ReleaseFileStore,
+    private readonly publications: PublicationsService,
     private readonly audit: AuditService,
     private readonly clock: Clock,
     private readonly sequelize: Sequelize,
   ) {}
 
-  /** The Live release of the kiosk's gallery, as signed; its ETag is the manifest's SHA-256. */
+  /**
+   * The release of the gallery's latest publication (the Live one) as signed, with that
+   * publication's signed record. The ETag is the record's SHA-256: the record names the manifest's
+   * hash, so the tag changes when either does, a re-signed record included.
+   */
   async liveManifest(kiosk: PairedKiosk): Promise<SignedManifest> {
-    const release = await this.releases.findOne({ where: { liveGalleryId: kiosk.station.galleryId } });
-    if (!release?.manifest || !release.signature) throw new NotFoundException({ statusCode: 404, message: 'No live release for this gallery' });
-    return { manifest: release.manifest, signature: release.signature, etag: `"${release.manifestSha256}"` };
+    const latest = await this.publications.latestSigned(kiosk.station.galleryId);
+    const release = latest?.release;
+    if (!latest || !release?.manifest || !release.signature) throw new NotFoundException({ statusCode: 404, message: 'No live release for this gallery' });
+    const { record, signature } = latest.publication;
+    return { manifest: release.manifest, signature: release.signature, publication: { record, signature }, etag: `"${sha256Of(Buffer.from(record, 'utf8'))}"` };
   }
 
   /** A file of one of the gallery's servable releases; any other hash is unknown to this kiosk. */
   async file(kiosk: PairedKiosk, sha256: string): Promise<{ data: Buffer; mime: string }> {
-    const listed = await this.releaseFiles.findOne({
-      where: { sha256 },
-      include: [{ model: Release, attributes: [], where: { galleryId: kiosk.station.galleryId, state: { [Op.in]: SERVABLE_STATES } } }],
-    });
+    const listed = await this.releaseFiles.findOne({ where: { sha256 }, include: [{ model: Release, attributes: [], where: this.servableTo(kiosk) }] });
     const data = listed ? await this.files.get(sha256) : null;
     if (!listed || !data) throw new NotFoundException('This gallery has no such file.');
     return { data, mime: listed.mime };
@@ -62,17 +71,35 @@ export class KiosksService {
 
   /** The latest report on the kiosk row, where the fleet list reads it, and every report as history. */
   async recordHeartbeat(kiosk: PairedKiosk, dto: HeartbeatDto): Promise<void> {
+    // Only a release the kiosk could have been sent: another gallery's, or none, is refused.
+    if (dto.releaseId !== null && !(await this.releases.findOne({ where: { id: dto.releaseId, ...this.servableTo(kiosk) }, attributes: ['id'] }))) {
+      throw new UnprocessableEntityException({
+        statusCode: 422, message: 'Some fields name records that do not exist.',
+        errors: [{ path: ['releaseId'], message: `Release ${dto.releaseId} is not one of this gallery’s published releases.` }],
+      });
+    }
     const receivedAt = this.clock.now();
-    const fields = { appVersion: dto.appVersion, uptimeS: dto.uptimeS, storageUsedBytes: dto.storageUsedBytes, lastError: dto.lastError };
+    const fields = {
+      appVersion: dto.appVersion, uptimeS: dto.uptimeS, storageUsedBytes: dto.storageUsedBytes, lastError: dto.lastError,
+      publicationSequence: dto.publicationSequence ?? null,
+      publicationExpiresAt: dto.publicationExpiresAt ? new Date(dto.publicationExpiresAt) : null,
+      publicationExpired: dto.publicationExpired ?? false,
+    };
     await this.sequelize.transaction(async (transaction) => {
       await this.heartbeats.create({ kioskId: kiosk.id, receivedAt, releaseId: dto.releaseId, ...fields }, { transaction });
       await this.kiosks.update({ lastHeartbeatAt: receivedAt, lastReleaseId: dto.releaseId, ...fields }, { where: { id: kiosk.id }, transaction });
     });
   }
 
-  /** Each event once, by its id: INSERT IGNORE's affected rows are the ones new to us. */
-  async recordEvents(kiosk: PairedKiosk, { events }: KioskEventsDto): Promise<EventsResponse> {
-    if (events.length === 0) return { stored: 0, duplicates: 0 };
+  /**
+   * Each event once, by its id: INSERT IGNORE's affected rows are the ones new to us. An event
+   * naming a story or panel that no published release of the kiosk's gallery carries is dropped
+   * and counted, not refused: the kiosk's outbox would otherwise resend the batch for ever.
+   */
+  async recordEvents(kiosk: PairedKiosk, dto: KioskEventsDto): Promise<EventsResponse> {
+    const events = await this.ofGalleryReleases(kiosk, dto.events);
+    const dropped = dto.events.length - events.length;
+    if (events.length === 0) return { stored: 0, duplicates: 0, dropped };
     const receivedAt = this.clock.now();
     const rows = events.map((event) => [
       event.id.toLowerCase(), kiosk.id, kiosk.station.galleryId, event.type, new Date(event.at), event.storyId ?? null, event.panelId ?? null,
@@ -82,7 +109,29 @@ export class KiosksService {
       `INSERT IGNORE INTO kiosk_events (${EVENT_COLUMNS.join(', ')}) VALUES ${rows.map(() => `(${EVENT_COLUMNS.map(() => '?').join(', ')})`).join(', ')}`,
       { replacements: rows.flat(), type: QueryTypes.INSERT },
     )) as unknown as [number, number];
-    return { stored: affected, duplicates: events.length - affected };
+    return { stored: affected, duplicates: events.length - affected, dropped };
+  }
+
+  /** The events whose story and panel a published release of the kiosk's gallery carries (a panel under its own story). */
+  private async ofGalleryReleases(kiosk: PairedKiosk, events: KioskEventDto[]): Promise<KioskEventDto[]> {
+    const storyIds = [...new Set(events.flatMap((event) => (event.storyId === undefined ? [] : [event.storyId])))];
+    const panelIds = [...new Set(events.flatMap((event) => (event.panelId === undefined ? [] : [event.panelId])))];
+    const released = { model: Release, attributes: [], where: this.servableTo(kiosk) };
+    const [stories, panels] = await Promise.all([
+      storyIds.length ? this.releaseStories.findAll({ attributes: ['storyId'], where: { storyId: storyIds }, include: [released] }) : [],
+      panelIds.length ? this.releasePanels.findAll({ attributes: ['storyId', 'panelId'], where: { panelId: panelIds }, include: [released] }) : [],
+    ]);
+    const knownStories = new Set(stories.map((row) => row.storyId));
+    const knownPanels = new Set(panels.map((row) => `${row.storyId}:${row.panelId}`));
+    const panelsAnyStory = new Set(panels.map((row) => row.panelId));
+    return events.filter((event) =>
+      (event.storyId === undefined || knownStories.has(event.storyId))
+      && (event.panelId === undefined || (event.storyId === undefined ? panelsAnyStory.has(event.panelId) : knownPanels.has(`${event.storyId}:${event.panelId}`))));
+  }
+
+  /** The releases a kiosk may have been sent: its gallery's, once published. */
+  private servableTo(kiosk: PairedKiosk) {
+    return { galleryId: kiosk.station.galleryId, state: { [Op.in]: SERVABLE_STATES } };
   }
 
   /** The fleet: every kiosk with its station, gallery, last heartbeat and the releases it plays and should play. */

@@ -13,7 +13,9 @@ import { Story } from '../stories/models/story.model.js';
 import { TranslationsModule } from '../translations/translations.module.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { Publication } from './models/publication.model.js';
 import { ReleaseFile } from './models/release-file.model.js';
+import { ReleasePanel } from './models/release-panel.model.js';
 import { ReleaseStory } from './models/release-story.model.js';
 import { Release } from './models/release.model.js';
 import { ReleaseBuildFaults } from './release-build-faults.js';
@@ -21,6 +23,7 @@ import { ReleaseBuilder } from './release-builder.js';
 import { ReleaseContentService } from './release-content.service.js';
 import { ReleaseFileStore } from './release-file-store.js';
 import { ReleaseTranslations } from './release-translations.js';
+import { PublicationsService } from './publications.service.js';
 import { ReleasesController } from './releases.controller.js';
 import { ReleasesService } from './releases.service.js';
 import { ReleasesWorker } from './releases.worker.js';
@@ -29,12 +32,12 @@ import { VenueSigningKeysModule } from './venue-signing-keys.module.js';
 @Module({
   imports: [
     SequelizeModule.forFeature([
-      Release, ReleaseStory, ReleaseFile, Gallery, Venue, Exhibit, Story, Revision, Panel, PanelDocument, MediaAsset, MediaRendition, MediaAltText,
+      Release, ReleaseStory, ReleasePanel, ReleaseFile, Publication, Gallery, Venue, Exhibit, Story, Revision, Panel, PanelDocument, MediaAsset, MediaRendition, MediaAltText,
     ]),
     MediaModule, RevisionsModule, TranslationsModule, VenueSigningKeysModule,
   ],
   controllers: [ReleasesController],
-  providers: [ReleasesService, ReleasesWorker, ReleaseBuilder, ReleaseContentService, ReleaseFileStore, ReleaseTranslations, ReleaseBuildFaults],
-  exports: [ReleasesService, ReleasesWorker, ReleaseFileStore, VenueSigningKeysModule],
+  providers: [ReleasesService, PublicationsService, ReleasesWorker, ReleaseBuilder, ReleaseContentService, ReleaseFileStore, ReleaseTranslations, ReleaseBuildFaults],
+  exports: [ReleasesService, ReleasesWorker, PublicationsService, ReleaseFileStore, VenueSigningKeysModule],
 })
 export class ReleasesModule {}

@@ -12,9 +12,11 @@ import type { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import type { ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
+import { ReleasePanel } from './models/release-panel.model.js';
 import { ReleaseStory } from './models/release-story.model.js';
 import { Release } from './models/release.model.js';
 import { releaseRefusal, ReleaseContentService } from './release-content.service.js';
+import { PublicationsService } from './publications.service.js';
 import { toReleaseView } from './releases.presenter.js';
 import { ReleasesWorker } from './releases.worker.js';
 
@@ -26,7 +28,9 @@ export class ReleasesService {
     @InjectModel(Gallery) private readonly galleries: typeof Gallery,
     @InjectModel(Story) private readonly stories: typeof Story,
     @InjectModel(Revision) private readonly revisions: typeof Revision,
+    @InjectModel(ReleasePanel) private readonly releasePanels: typeof ReleasePanel,
     private readonly content: ReleaseContentService,
+    private readonly publications: PublicationsService,
     private readonly worker: ReleasesWorker,
     private readonly audit: AuditService,
     private readonly clock: Clock,
@@ -54,6 +58,10 @@ export class ReleasesService {
       );
       await this.releaseStories.bulkCreate(
         chosen.map(({ story, revision }, position) => ({ releaseId: created.id, storyId: story.id, revisionId: revision.id, position })),
+        { transaction },
+      );
+      await this.releasePanels.bulkCreate(
+        chosen.flatMap(({ story, revision }) => revision.snapshot.panels.map((panel) => ({ releaseId: created.id, storyId: story.id, panelId: panel.id }))),
         { transaction },
       );
       await this.audit.record({
@@ -93,10 +101,19 @@ export class ReleasesService {
 
   /**
    * Makes the release Live for its gallery and the Live one before it Superseded, in one
-   * transaction. Publishing a Superseded release is the rollback.
+   * transaction, as the gallery's next publication. Publishing a Superseded release is the
+   * rollback: a new, higher publication pointing at older content, so kiosks follow it.
    */
   async publish(id: number, user: User): Promise<ReleaseView> {
-    await this.sequelize.transaction(async (transaction) => {
+    // A release never changes gallery, so its gallery is read before the transaction: the gallery's
+    // row must be the transaction's first read, a locking one (see below).
+    const galleryId = (await this.releases.findByPk(id, { attributes: ['galleryId'] }))?.galleryId;
+    if (galleryId === undefined) throw new NotFoundException('There is no such release.');
+    const publication = await this.sequelize.transaction(async (transaction) => {
+      // Every publish of a gallery, on any server instance, queues on the gallery's row, so one
+      // release is Live and one next sequence is taken at a time; taken before any plain read, so
+      // the transaction's snapshot already holds what the publish before it committed.
+      await this.galleries.findByPk(galleryId, { attributes: ['id'], transaction, lock: transaction.LOCK.UPDATE });
       const release = await this.releases.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
       if (!release) throw new NotFoundException('There is no such release.');
       if (release.state !== 'ready' && release.state !== 'superseded') {
@@ -108,11 +125,14 @@ export class ReleasesService {
       const rollback = release.state === 'superseded';
       await release.update({ state: 'live', liveGalleryId: release.galleryId, publishedAt: now, publishedById: user.id }, { transaction });
       await this.markStoriesReleased(release.id, now, transaction);
+      const published = await this.publications.record(release, rollback ? 'rollback' : 'publish', user, now, transaction);
       await this.audit.record({
         actorId: user.id, action: rollback ? 'release.rolled-back' : 'release.published', targetType: 'release', targetId: release.id,
-        detail: { galleryId: release.galleryId, number: release.number, previousReleaseId: previous?.id ?? null },
+        detail: { galleryId: release.galleryId, number: release.number, previousReleaseId: previous?.id ?? null, sequence: published.sequence },
       }, transaction);
+      return published;
     });
+    await this.publications.sign(publication);
     return this.get(id);
   }
 

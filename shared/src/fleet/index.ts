@@ -1,2 +1,3 @@
 export * from './kiosk-state.js';
+export * from './report-text.js';
 export type * from './views.js';

@@ -1,5 +1,5 @@
 import type { Page } from '../auth/views.js';
-import type { KioskView } from '../release/views.js';
+import type { KioskPublicationView, KioskView } from '../release/views.js';
 import type { KioskState } from './kiosk-state.js';
 
 /** One kiosk on the Fleet page: what it reported, and what that means now. */
@@ -18,6 +18,7 @@ export interface HeartbeatView {
   uptimeS: number;
   storageUsedBytes: number | null;
   lastError: string | null;
+  publication: KioskPublicationView | null;
 }
 
 /** The thresholds the server judges states by, so the studio can explain them. */

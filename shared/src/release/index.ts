@@ -1,4 +1,5 @@
 export * from './manifest.js';
+export * from './publication.js';
 export * from './verify.js';
 export * from './kiosk-api.js';
 export type * from './views.js';

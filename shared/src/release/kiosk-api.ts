@@ -28,12 +28,34 @@ export interface ManifestResponse {
   signature: string;
 }
 
+/** A publication record as the venue key signed it (see publication.ts). */
+export interface SignedPublication {
+  /** The record as a JSON string: the exact bytes (UTF-8) the signature covers. */
+  record: string;
+  /** Base64 Ed25519 signature. */
+  signature: string;
+}
+
+/** `GET /api/kiosk/manifest`: the Live release's manifest with the gallery's latest publication record. */
+export interface KioskManifestResponse extends ManifestResponse {
+  publication: SignedPublication;
+}
+
 export interface HeartbeatBody {
   releaseId: number | null;
   appVersion: string;
   uptimeS: number;
   storageUsedBytes: number | null;
+  /** Letters, digits, punctuation, symbols and spaces only (see `reportText`). */
   lastError: string | null;
+  /**
+   * The publication the kiosk follows and whether its `expiresAt` had passed by the kiosk's clock
+   * (it still plays, but has had no fresh word from the server). Kiosks older than issue 11 leave
+   * these out.
+   */
+  publicationSequence?: number | null;
+  publicationExpiresAt?: string | null;
+  publicationExpired?: boolean;
 }
 
 /** What visitors do, anonymously: no event names a person or a device. */
@@ -66,4 +88,6 @@ export interface EventsBody {
 export interface EventsResponse {
   stored: number;
   duplicates: number;
+  /** Events naming a story or panel that no published release of the kiosk's gallery carries: not stored. */
+  dropped: number;
 }

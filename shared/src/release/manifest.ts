@@ -5,12 +5,13 @@ import { canonicalJson } from '../review/revision-snapshot.js';
 /** Bumped when the manifest's shape changes, so a kiosk never plays a shape it does not know. */
 export const RELEASE_FORMAT = 'mantlepiece-release/1';
 
-const sha256 = z.string().regex(/^[0-9a-f]{64}$/, 'SHA-256 as 64 lower-case hex digits');
+/** A SHA-256 as the manifest and the publication record write it. */
+export const sha256Schema = z.string().regex(/^[0-9a-f]{64}$/, 'SHA-256 as 64 lower-case hex digits');
 const localeText = z.record(z.string(), z.string());
 const panelDoc = z.looseObject({ type: z.literal('doc') }) as unknown as z.ZodType<PanelDocJSON>;
 
 const releaseFileSchema = z.object({
-  sha256,
+  sha256: sha256Schema,
   size: z.number().int().nonnegative(),
   mime: z.string().min(1),
   path: z.string().optional(),
@@ -21,7 +22,7 @@ const releaseMediaSchema = z.object({
   mediaId: z.union([z.string(), z.number()]).transform(String),
   alt: localeText,
   credit: z.string().nullable(),
-  renditions: z.array(z.object({ width: z.number().int().positive(), sha256 })),
+  renditions: z.array(z.object({ width: z.number().int().positive(), sha256: sha256Schema })),
 });
 
 const releasePanelSchema = z.object({
@@ -61,21 +62,26 @@ export type ReleaseFile = ReleaseManifest['files'][number];
 export type ManifestParse = { ok: true; manifest: ReleaseManifest } | { ok: false; message: string };
 
 /**
- * Reads a manifest the signature has already vouched for. Still checked, since a kiosk that plays
- * for months must say "I cannot read this release" rather than crash on a server it is newer or
- * older than.
+ * Reads JSON a signature has already vouched for against its format's schema. Still checked, since
+ * a kiosk that plays for months must say "I cannot read this" rather than crash on a server it is
+ * newer or older than.
  */
-export function parseManifest(manifestJson: string): ManifestParse {
+export function readSignedJson<S extends z.ZodType>(json: string, schema: S, what: string, format: string): { ok: true; value: z.output<S> } | { ok: false; message: string } {
   let value: unknown;
   try {
-    value = JSON.parse(manifestJson);
+    value = JSON.parse(json);
   } catch {
-    return { ok: false, message: 'The manifest is not JSON.' };
+    return { ok: false, message: `${what} is not JSON.` };
   }
-  const parsed = releaseManifestSchema.safeParse(value);
-  if (parsed.success) return { ok: true, manifest: parsed.data };
+  const parsed = schema.safeParse(value);
+  if (parsed.success) return { ok: true, value: parsed.data };
   const first = parsed.error.issues[0];
-  return { ok: false, message: `The manifest does not match ${RELEASE_FORMAT}: ${first ? `${first.path.join('.')} ${first.message}` : 'unknown shape'}.` };
+  return { ok: false, message: `${what} does not match ${format}: ${first ? `${first.path.join('.')} ${first.message}` : 'unknown shape'}.` };
+}
+
+export function parseManifest(manifestJson: string): ManifestParse {
+  const read = readSignedJson(manifestJson, releaseManifestSchema, 'The manifest', RELEASE_FORMAT);
+  return read.ok ? { ok: true, manifest: read.value } : read;
 }
 
 /**

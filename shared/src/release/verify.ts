@@ -21,18 +21,21 @@ export async function sha256HexOfBytes(bytes: BufferSource): Promise<string> {
 }
 
 /**
- * True only when `signatureB64` is the venue key's Ed25519 signature over the manifest's UTF-8
- * bytes. Any malformed input (bad base64, a key that is not Ed25519 SPKI) is a refusal, not an
+ * True only when `signatureB64` is the venue key's Ed25519 signature over the text's UTF-8 bytes.
+ * Any malformed input (bad base64, a key that is not Ed25519 SPKI) is a refusal, not an
  * exception: to a kiosk an unreadable signature and a wrong one mean the same thing.
  */
-export async function verifyManifest(manifestJson: string, signatureB64: string, publicKeySpkiB64: string): Promise<boolean> {
+export async function verifySignedText(text: string, signatureB64: string, publicKeySpkiB64: string): Promise<boolean> {
   const signature = base64ToBytes(signatureB64);
   const spki = base64ToBytes(publicKeySpkiB64);
   if (!signature || !spki) return false;
   try {
     const key = await crypto.subtle.importKey('spki', spki, { name: 'Ed25519' }, false, ['verify']);
-    return await crypto.subtle.verify({ name: 'Ed25519' }, key, signature, new TextEncoder().encode(manifestJson));
+    return await crypto.subtle.verify({ name: 'Ed25519' }, key, signature, new TextEncoder().encode(text));
   } catch {
     return false;
   }
 }
+
+/** A release manifest's signature check; the manifest and the publication record share the venue key. */
+export const verifyManifest = verifySignedText;

@@ -56,4 +56,14 @@ export interface KioskView {
   releasePlaying: { id: number; number: number } | null;
   /** What is Live for its gallery now. */
   releaseLive: { id: number; number: number } | null;
+  /** The publication it said it follows in its last heartbeat; null before it reported one. */
+  publication: KioskPublicationView | null;
+}
+
+/** A kiosk's word on the publication it follows (issue 11). */
+export interface KioskPublicationView {
+  sequence: number;
+  expiresAt: string;
+  /** Past `expiresAt` by the kiosk's clock: it plays on, but has had no fresh word from the server. */
+  expired: boolean;
 }

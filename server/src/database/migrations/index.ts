@@ -12,6 +12,8 @@ import * as releases from './0401-releases.js';
 import * as kiosks from './0402-kiosks.js';
 import * as fleetWatch from './0500-fleet-watch.js';
 import * as rateLimitsAndSessions from './0610-rate-limits-and-sessions.js';
+import * as releasePanels from './0620-release-panels.js';
+import * as publications from './0621-publications.js';
 import * as livingStory from './0650-living-story.js';
 import * as demoKiosk from './0660-demo-kiosk.js';
 
@@ -35,6 +37,8 @@ const modules: [string, MigrationModule][] = [
   ['0402-kiosks', kiosks],
   ['0500-fleet-watch', fleetWatch],
   ['0610-rate-limits-and-sessions', rateLimitsAndSessions],
+  ['0620-release-panels', releasePanels],
+  ['0621-publications', publications],
   ['0650-living-story', livingStory],
   ['0660-demo-kiosk', demoKiosk],
 ];

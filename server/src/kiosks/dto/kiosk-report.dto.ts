@@ -1,10 +1,15 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
-  ArrayMaxSize, IsArray, IsIn, IsInt, IsISO8601, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested,
+  ArrayMaxSize, IsArray, IsBoolean, IsIn, IsInt, IsISO8601, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested,
 } from 'class-validator';
-import { KIOSK_EVENT_TYPES, KIOSK_SWITCHES, type KioskEventType, type KioskSwitch } from '@mantlepiece/shared';
+import {
+  APP_VERSION_PATTERN, KIOSK_EVENT_TYPES, KIOSK_SWITCHES, REPORT_TEXT_MAX, REPORT_TEXT_PATTERN, type KioskEventType, type KioskSwitch,
+} from '@mantlepiece/shared';
 import { PageQuery } from '../../common/page.js';
+
+/** A UTC instant as a kiosk writes it (toISOString), from the year 2000 on: inside what DATETIME holds. */
+const UTC_INSTANT_FROM_2000 = /^[2-9]\d{3}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z$/;
 
 export class HeartbeatDto {
   @ApiProperty({ nullable: true, description: 'The release the kiosk plays' })
@@ -15,7 +20,7 @@ export class HeartbeatDto {
 
   @ApiProperty({ example: '0.1.0' })
   @IsString()
-  @MaxLength(40)
+  @Matches(APP_VERSION_PATTERN, { message: 'appVersion must be a version of up to 40 letters, digits and . + - (such as 0.1.0).' })
   appVersion: string;
 
   @ApiProperty()
@@ -29,11 +34,30 @@ export class HeartbeatDto {
   @Min(0)
   storageUsedBytes: number | null;
 
-  @ApiProperty({ nullable: true })
+  @ApiProperty({ nullable: true, maxLength: REPORT_TEXT_MAX })
   @ValidateIf((_, value) => value !== null)
   @IsString()
-  @MaxLength(1000)
+  @MaxLength(REPORT_TEXT_MAX)
+  @Matches(REPORT_TEXT_PATTERN, { message: 'lastError may hold letters, digits, punctuation, symbols and spaces only: no line breaks or control characters.' })
   lastError: string | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'The sequence of the publication the kiosk follows' })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  @Max(4_294_967_295)
+  publicationSequence?: number | null;
+
+  @ApiPropertyOptional({ nullable: true, format: 'date-time' })
+  @IsOptional()
+  @IsISO8601({ strict: true })
+  @Matches(UTC_INSTANT_FROM_2000, { message: 'publicationExpiresAt must be a UTC instant (…Z) from the year 2000 on.' })
+  publicationExpiresAt?: string | null;
+
+  @ApiPropertyOptional({ description: 'Whether that publication had expired by the kiosk’s clock' })
+  @ValidateIf((_, value) => value !== undefined)
+  @IsBoolean()
+  publicationExpired?: boolean;
 }
 
 /** One visitor interaction. Only these fields: anything else (a name, a device id) is refused. */

@@ -29,5 +29,15 @@ export class KioskHeartbeat extends Model {
   @Column({ type: DataType.STRING(1000), allowNull: true })
   lastError: string | null;
 
+  /** The publication the kiosk said it follows, and whether it said that had expired (issue 11). */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  publicationSequence: number | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: true })
+  publicationExpiresAt: Date | null;
+
+  @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: false })
+  publicationExpired: boolean;
+
   declare id: number;
 }

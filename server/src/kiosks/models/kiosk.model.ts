@@ -43,6 +43,16 @@ export class Kiosk extends Model {
   @Column({ type: DataType.STRING(1000), allowNull: true })
   lastError: string | null;
 
+  /** The publication the kiosk said it follows, and whether it said that had expired (issue 11). */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  publicationSequence: number | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: true })
+  publicationExpiresAt: Date | null;
+
+  @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: false })
+  publicationExpired: boolean;
+
   /** The demo venue's invented kiosk: no device behind it, its heartbeats and visitor events made up by the seed. */
   @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: false })
   demo: boolean;

@@ -1,5 +1,5 @@
 import { makeStyles, Text, tokens } from '@fluentui/react-components';
-import { WarningFilled } from '@fluentui/react-icons';
+import { ClockDismissFilled, WarningFilled } from '@fluentui/react-icons';
 import type { FleetKioskView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 
@@ -9,8 +9,11 @@ const useStyles = makeStyles({
   muted: { color: tokens.colorNeutralForeground3 },
 });
 
-/** The release on the screen, and under it the live one when they differ (in words and an icon). */
-export function ReleasePlaying({ kiosk }: { kiosk: Pick<FleetKioskView, 'releasePlaying' | 'releaseLive' | 'playsLiveRelease' | 'revokedAt'> }) {
+/**
+ * The release on the screen, and under it the live one when they differ, and the kiosk's word that
+ * its publication expired (in words and an icon each).
+ */
+export function ReleasePlaying({ kiosk }: { kiosk: Pick<FleetKioskView, 'releasePlaying' | 'releaseLive' | 'playsLiveRelease' | 'revokedAt' | 'publication'> }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const playing = kiosk.releasePlaying ? t('fleet.release', { number: kiosk.releasePlaying.number }) : t('fleet.noRelease');
@@ -24,6 +27,12 @@ export function ReleasePlaying({ kiosk }: { kiosk: Pick<FleetKioskView, 'release
           {t('fleet.mismatch')} · {t('fleet.live', { number: kiosk.releaseLive!.number })}
         </span>
       ) : kiosk.releaseLive === null ? <Text size={200} className={styles.muted}>{t('fleet.noLive')}</Text> : null}
+      {!kiosk.revokedAt && kiosk.publication?.expired ? (
+        <span className={styles.mismatch} data-publication-expired={kiosk.publication.sequence}>
+          <ClockDismissFilled aria-hidden />
+          {t('fleet.publicationExpired', { sequence: kiosk.publication.sequence })}
+        </span>
+      ) : null}
     </span>
   );
 }

@@ -32,6 +32,7 @@ const useStyles = makeStyles({
   term: { color: tokens.colorNeutralForeground2, fontWeight: tokens.fontWeightSemibold },
   value: { margin: 0, overflowWrap: 'anywhere' },
   error: { color: tokens.colorPaletteRedForeground1 },
+  warning: { color: tokens.colorPaletteDarkOrangeForeground1, fontWeight: tokens.fontWeightSemibold },
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
   heading: { margin: `0 0 ${tokens.spacingVerticalM}` },
   muted: { color: tokens.colorNeutralForeground3 },
@@ -75,6 +76,11 @@ function KioskDetail({ kiosk, now, busy, onPage }: { kiosk: FleetKioskDetail; no
     [t('fleetKiosk.facts.lastHeartbeat'), <LastHeartbeat at={kiosk.lastHeartbeatAt} now={now} />],
     [t('fleetKiosk.facts.releasePlaying'), <ReleasePlaying kiosk={kiosk} />],
     [t('fleetKiosk.facts.releaseLive'), kiosk.releaseLive ? t('fleet.release', { number: kiosk.releaseLive.number }) : t('fleet.noLive')],
+    [t('fleetKiosk.facts.publication'), kiosk.publication === null ? unknown : (
+      <span className={kiosk.publication.expired ? styles.warning : undefined} data-publication-expired={kiosk.publication.expired || undefined}>
+        {t(kiosk.publication.expired ? 'fleetKiosk.publicationExpired' : 'fleetKiosk.publicationValid', { sequence: kiosk.publication.sequence, date: formatDate(kiosk.publication.expiresAt) })}
+      </span>
+    )],
     [t('fleetKiosk.facts.appVersion'), kiosk.appVersion ? <span className={styles.code}>{kiosk.appVersion}</span> : unknown],
     [t('fleetKiosk.facts.uptime'), kiosk.uptimeS === null ? unknown : durationText(kiosk.uptimeS)],
     [t('fleetKiosk.facts.storage'), kiosk.storageUsedBytes === null ? unknown : bytesText(kiosk.storageUsedBytes, language)],
@@ -120,7 +126,10 @@ function KioskDetail({ kiosk, now, busy, onPage }: { kiosk: FleetKioskDetail; no
               {kiosk.heartbeats.items.map((beat) => (
                 <TableRow key={beat.id}>
                   <TableCell>{formatDate(beat.receivedAt)}</TableCell>
-                  <TableCell>{beat.release ? t('fleet.release', { number: beat.release.number }) : t('fleet.noRelease')}</TableCell>
+                  <TableCell>
+                    {beat.release ? t('fleet.release', { number: beat.release.number }) : t('fleet.noRelease')}
+                    {beat.publication?.expired ? <span className={styles.warning}> · {t('fleet.publicationExpired', { sequence: beat.publication.sequence })}</span> : null}
+                  </TableCell>
                   <TableCell><span className={styles.code}>{beat.appVersion}</span></TableCell>
                   <TableCell>{durationText(beat.uptimeS)}</TableCell>
                   <TableCell>{beat.storageUsedBytes === null ? '—' : bytesText(beat.storageUsedBytes, language)}</TableCell>
