@@ -174,10 +174,15 @@ describe('the media library', () => {
     await eventually(() => spdx.getAttribute('aria-invalid')).toBe('true');
     const describedBy = (await spdx.getAttribute('aria-describedby')) ?? '';
     expect(await page.locator(describedBy.split(' ').map((id) => `#${id}`).join(', ')).allTextContents()).toContainEqual(expect.stringContaining('SPDX licence identifier'));
-    // Typing offers the common licences that match.
-    await spdx.fill('CC-BY-S');
-    await eventually(() => page.getByRole('option', { name: 'CC-BY-SA-4.0' }).count()).toBe(1);
-    await spdx.fill('CC-BY-4.0');
+    // Typing offers the common licences that match; choosing one fills the box.
+    await spdx.fill('');
+    await spdx.pressSequentially('CC-BY-S');
+    await page.getByRole('option', { name: 'CC-BY-SA-4.0' }).waitFor();
+    expect(await page.getByRole('option', { name: 'CC-BY-4.0', exact: true }).count()).toBe(0);
+    await spdx.fill('');
+    await spdx.pressSequentially('CC-BY-4');
+    await page.getByRole('option', { name: 'CC-BY-4.0', exact: true }).click();
+    expect(await spdx.inputValue()).toBe('CC-BY-4.0');
     await page.getByRole('button', { name: 'Save' }).click();
     await eventually(() => page.getByText('Saved.').count()).toBe(1);
   });

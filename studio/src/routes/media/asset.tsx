@@ -72,6 +72,8 @@ function AssetDetails({ asset }: { asset: MediaView }) {
   const [problems, setProblems] = useState<ReturnType<typeof assetProblems>>({});
   const [confirming, setConfirming] = useState(false);
   const [saved, setSaved] = useState(false);
+  // Typing opens the licence suggestions, as a search box does; Fluent's combobox opens only on click or arrow keys.
+  const [suggesting, setSuggesting] = useState(false);
   const locales = useAltLocales(asset);
   const largest = [...asset.renditions].sort((a, b) => b.width - a.width)[0];
   const set = (changes: Partial<AssetValues>) => {
@@ -160,7 +162,9 @@ function AssetDetails({ asset }: { asset: MediaView }) {
                   disabled={!writer}
                   value={values.spdxId}
                   selectedOptions={[values.spdxId]}
-                  onChange={(event) => set({ spdxId: event.target.value })}
+                  open={suggesting && spdxSuggestions.length > 0}
+                  onOpenChange={(_event, data) => setSuggesting(data.open)}
+                  onChange={(event) => { set({ spdxId: event.target.value }); setSuggesting(true); }}
                   onOptionSelect={(_event, data) => set({ spdxId: data.optionValue ?? '' })}
                 >
                   {spdxSuggestions.map((id) => <Option key={id}>{id}</Option>)}
