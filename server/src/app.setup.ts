@@ -2,7 +2,9 @@ import { RequestMethod } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
+import { json } from 'express';
 import { ApiExceptionFilter } from './common/api-exception.filter.js';
+import { jsonBodyOptions } from './common/json-body.js';
 import { createValidationPipe } from './common/validation.js';
 import { ConfigService } from './config/config.service.js';
 import { MEDIA_FILES_PATH } from './media/media-files.controller.js';
@@ -25,6 +27,8 @@ function configureApp(app: NestExpressApplication): void {
   app.use(securityHeaders({ https: config.overHttps }));
   app.setGlobalPrefix('api', { exclude: [{ path: MEDIA_FILES_PATH, method: RequestMethod.GET }] });
   app.use(cookieParser());
+  // Express names this parser jsonParser, so Nest sees one applied and adds none of its own.
+  app.use(json(jsonBodyOptions));
   app.useGlobalPipes(createValidationPipe());
   app.useGlobalFilters(new ApiExceptionFilter());
 

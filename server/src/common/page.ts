@@ -1,23 +1,20 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsInt, IsOptional, Max, Min } from 'class-validator';
+import { IsOptional } from 'class-validator';
 import type { Page } from '@mantlepiece/shared';
+import { ID_MAX, QueryInt } from './validation.js';
 
-/** `?page=&pageSize=` of every paged list. */
+export const MAX_PAGE_SIZE = 100;
+
+/** `?page=&pageSize=` of every paged list. A page number is bounded like a row id, so its offset stays an exact number. */
 export class PageQuery {
-  @ApiPropertyOptional({ default: 1, minimum: 1 })
+  @ApiPropertyOptional({ default: 1, minimum: 1, maximum: ID_MAX })
   @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
+  @QueryInt(1, ID_MAX)
   page: number = 1;
 
-  @ApiPropertyOptional({ default: 25, minimum: 1, maximum: 100 })
+  @ApiPropertyOptional({ default: 25, minimum: 1, maximum: MAX_PAGE_SIZE })
   @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(100)
+  @QueryInt(1, MAX_PAGE_SIZE)
   pageSize: number = 25;
 }
 

@@ -1,4 +1,4 @@
-import { Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
@@ -6,6 +6,7 @@ import type { EventsResponse, KioskManifestResponse, KioskView, Page } from '@ma
 import { AuditService } from '../audit/audit.service.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
+import { unknownReference } from '../common/validation.js';
 import { ReleaseFile } from '../releases/models/release-file.model.js';
 import { ReleasePanel } from '../releases/models/release-panel.model.js';
 import { ReleaseStory } from '../releases/models/release-story.model.js';
@@ -73,10 +74,7 @@ export class KiosksService {
   async recordHeartbeat(kiosk: PairedKiosk, dto: HeartbeatDto): Promise<void> {
     // Only a release the kiosk could have been sent: another gallery's, or none, is refused.
     if (dto.releaseId !== null && !(await this.releases.findOne({ where: { id: dto.releaseId, ...this.servableTo(kiosk) }, attributes: ['id'] }))) {
-      throw new UnprocessableEntityException({
-        statusCode: 422, message: 'Some fields name records that do not exist.',
-        errors: [{ path: ['releaseId'], message: `Release ${dto.releaseId} is not one of this gallery’s published releases.` }],
-      });
+      throw unknownReference(['releaseId'], `Release ${dto.releaseId} is not one of this gallery’s published releases.`);
     }
     const receivedAt = this.clock.now();
     const fields = {

@@ -5,6 +5,7 @@ import { Sequelize } from 'sequelize-typescript';
 import type { Page, StoryDetailView, StoryView } from '@mantlepiece/shared';
 import { likePattern, orderOf } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
+import { unknownReference } from '../common/validation.js';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { PanelDocument } from '../panels/models/panel-document.model.js';
 import { Panel } from '../panels/models/panel.model.js';
@@ -130,7 +131,7 @@ export class StoriesService {
 
   private async findExhibit(id: number, transaction?: Transaction): Promise<Exhibit> {
     const exhibit = await this.exhibits.findByPk(id, { include: [{ model: Gallery, include: [Venue] }], transaction });
-    if (!exhibit) throw new NotFoundException('There is no such exhibit.');
+    if (!exhibit) throw unknownReference(['exhibitId'], 'There is no such exhibit.');
     return exhibit;
   }
 

@@ -28,8 +28,9 @@ export interface SettingsKind<M, V> {
 
 /**
  * What venues, galleries, stations and exhibits share: paged lists searched by the database,
- * reads, writes whose constraint failures become 409/404 answers, and deletes that the schema's
- * RESTRICT keys refuse while anything points at the record.
+ * reads, writes whose duplicates become 409 answers (a parent that does not exist is the API
+ * filter's 422, naming the field), and deletes that the schema's RESTRICT keys refuse while
+ * anything points at the record.
  */
 export abstract class SettingsService<M extends Model & { id: number }, V> {
   protected constructor(
@@ -85,7 +86,6 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
       if (error instanceof UniqueConstraintError) {
         throw new ConflictException(`Another ${this.kind.label} already uses this ${Object.keys(error.fields).join(', ') || 'value'}.`);
       }
-      if (error instanceof ForeignKeyConstraintError) throw new NotFoundException(`The ${this.kind.label} refers to something that does not exist.`);
       throw error;
     }
   }

@@ -1,7 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsInt, IsISO8601, IsOptional, IsString, MaxLength, Min } from 'class-validator';
+import { IsISO8601, IsOptional, IsString, MaxLength } from 'class-validator';
 import { PageQuery } from '../../common/page.js';
+import { QueryRowId } from '../../common/validation.js';
 
 const WHEN = 'A date (YYYY-MM-DD, UTC) or a moment (ISO 8601)';
 const WHEN_MESSAGE = { message: 'Use a date (YYYY-MM-DD, UTC) or a moment (ISO 8601).' };
@@ -15,9 +15,7 @@ export class ListAuditEventsQuery extends PageQuery {
 
   @ApiPropertyOptional({ description: 'Only events done by this person' })
   @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
+  @QueryRowId()
   actorId?: number;
 
   @ApiPropertyOptional({ description: `${WHEN}: events from then on` })

@@ -1,12 +1,12 @@
-import { IsOptional } from 'class-validator';
+import { Omittable } from '../../common/validation.js';
 import { PersonNameField, UiLanguageField } from '../../users/dto/user-fields.js';
 
 export class UpdateProfileDto {
-  @IsOptional()
+  @Omittable()
   @PersonNameField()
   name?: string;
 
-  @IsOptional()
+  @Omittable()
   @UiLanguageField()
   uiLanguage?: string;
 }

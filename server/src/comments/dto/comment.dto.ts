@@ -1,19 +1,18 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Transform, Type } from 'class-transformer';
-import { IsBoolean, IsInt, IsOptional, IsString, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
+import { Transform } from 'class-transformer';
+import { IsBoolean, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsIntBetween, IsRowId, NestedObject, UNSIGNED_INT_MAX } from '../../common/validation.js';
 
 const trimmed = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 
 /** Character offsets in the panel's source-locale text, and the text they held. */
 export class CommentRangeDto {
   @ApiProperty()
-  @IsInt()
-  @Min(0)
+  @IsIntBetween(0, UNSIGNED_INT_MAX)
   from: number;
 
   @ApiProperty()
-  @IsInt()
-  @Min(0)
+  @IsIntBetween(0, UNSIGNED_INT_MAX)
   to: number;
 
   @ApiProperty()
@@ -25,14 +24,12 @@ export class CommentRangeDto {
 export class CreateCommentDto {
   @ApiPropertyOptional({ nullable: true, description: "A panel of the revision's snapshot; none for the story as a whole" })
   @IsOptional()
-  @IsInt()
-  @Min(1)
+  @IsRowId()
   panelId?: number | null;
 
   @ApiPropertyOptional({ type: CommentRangeDto, nullable: true })
   @IsOptional()
-  @ValidateNested()
-  @Type(() => CommentRangeDto)
+  @NestedObject(() => CommentRangeDto)
   range?: CommentRangeDto | null;
 
   @ApiProperty({ example: 'Families may not know the word “friction”; can we say “grip”?' })
@@ -44,8 +41,7 @@ export class CreateCommentDto {
 
   @ApiPropertyOptional({ nullable: true, description: 'The comment this one answers' })
   @IsOptional()
-  @IsInt()
-  @Min(1)
+  @IsRowId()
   parentId?: number | null;
 }
 

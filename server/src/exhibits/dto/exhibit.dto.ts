@@ -1,5 +1,6 @@
-import { OmitType, PartialType } from '@nestjs/swagger';
+import { OmitType } from '@nestjs/swagger';
 import { OptionalDateOnlyField } from '../../common/date-only.js';
+import { PatchType } from '../../common/validation.js';
 import { ParentFilterField, ParentIdField, SettingsNameField } from '../../venues/dto/settings-fields.js';
 import { ListSettingsQuery } from '../../venues/settings.service.js';
 
@@ -17,7 +18,7 @@ export class CreateExhibitDto {
   plannedEnd?: string | null;
 }
 
-export class UpdateExhibitDto extends PartialType(OmitType(CreateExhibitDto, ['galleryId'] as const)) {}
+export class UpdateExhibitDto extends PatchType(OmitType(CreateExhibitDto, ['galleryId'] as const)) {}
 
 export class ListExhibitsQuery extends ListSettingsQuery {
   @ParentFilterField()

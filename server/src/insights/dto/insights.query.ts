@@ -1,13 +1,10 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsInt, Min } from 'class-validator';
 import { OptionalDateOnlyField } from '../../common/date-only.js';
+import { QueryRowId } from '../../common/validation.js';
 
 export class InsightsQuery {
   @ApiProperty()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
+  @QueryRowId()
   galleryId: number;
 
   @OptionalDateOnlyField('First day (UTC) counted; 29 days before `to` when left out')

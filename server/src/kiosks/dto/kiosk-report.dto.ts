@@ -1,12 +1,10 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import {
-  ArrayMaxSize, IsArray, IsBoolean, IsIn, IsInt, IsISO8601, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested,
-} from 'class-validator';
+import { ArrayMaxSize, IsBoolean, IsIn, IsISO8601, IsOptional, IsString, IsUUID, Matches, MaxLength, ValidateIf } from 'class-validator';
 import {
   APP_VERSION_PATTERN, KIOSK_EVENT_TYPES, KIOSK_SWITCHES, REPORT_TEXT_MAX, REPORT_TEXT_PATTERN, type KioskEventType, type KioskSwitch,
 } from '@mantlepiece/shared';
 import { PageQuery } from '../../common/page.js';
+import { IsIntBetween, IsRowId, NestedObjects, Omittable, QueryRowId, UNSIGNED_BIGINT_MAX, UNSIGNED_INT_MAX } from '../../common/validation.js';
 
 /** A UTC instant as a kiosk writes it (toISOString), from the year 2000 on: inside what DATETIME holds. */
 const UTC_INSTANT_FROM_2000 = /^[2-9]\d{3}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z$/;
@@ -14,8 +12,7 @@ const UTC_INSTANT_FROM_2000 = /^[2-9]\d{3}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,
 export class HeartbeatDto {
   @ApiProperty({ nullable: true, description: 'The release the kiosk plays' })
   @ValidateIf((_, value) => value !== null)
-  @IsInt()
-  @Min(1)
+  @IsRowId()
   releaseId: number | null;
 
   @ApiProperty({ example: '0.1.0' })
@@ -24,14 +21,12 @@ export class HeartbeatDto {
   appVersion: string;
 
   @ApiProperty()
-  @IsInt()
-  @Min(0)
+  @IsIntBetween(0, UNSIGNED_INT_MAX)
   uptimeS: number;
 
   @ApiProperty({ nullable: true })
   @ValidateIf((_, value) => value !== null)
-  @IsInt()
-  @Min(0)
+  @IsIntBetween(0, UNSIGNED_BIGINT_MAX)
   storageUsedBytes: number | null;
 
   @ApiProperty({ nullable: true, maxLength: REPORT_TEXT_MAX })
@@ -43,9 +38,7 @@ export class HeartbeatDto {
 
   @ApiPropertyOptional({ nullable: true, description: 'The sequence of the publication the kiosk follows' })
   @IsOptional()
-  @IsInt()
-  @Min(1)
-  @Max(4_294_967_295)
+  @IsIntBetween(1, UNSIGNED_INT_MAX)
   publicationSequence?: number | null;
 
   @ApiPropertyOptional({ nullable: true, format: 'date-time' })
@@ -55,7 +48,7 @@ export class HeartbeatDto {
   publicationExpiresAt?: string | null;
 
   @ApiPropertyOptional({ description: 'Whether that publication had expired by the kiosk’s clock' })
-  @ValidateIf((_, value) => value !== undefined)
+  @Omittable()
   @IsBoolean()
   publicationExpired?: boolean;
 }
@@ -75,60 +68,52 @@ export class KioskEventDto {
   at: string;
 
   @ApiPropertyOptional()
-  @IsOptional()
-  @IsInt()
-  @Min(1)
+  @Omittable()
+  @IsRowId()
   storyId?: number;
 
   @ApiPropertyOptional()
-  @IsOptional()
-  @IsInt()
-  @Min(1)
+  @Omittable()
+  @IsRowId()
   panelId?: number;
 
   @ApiPropertyOptional()
-  @IsOptional()
+  @Omittable()
   @Matches(/^[A-Za-z][A-Za-z0-9-]{0,59}$/)
   widgetType?: string;
 
   @ApiPropertyOptional()
-  @IsOptional()
+  @Omittable()
   @Matches(/^[A-Za-z][A-Za-z0-9_.-]{0,59}$/)
   param?: string;
 
   @ApiPropertyOptional()
-  @IsOptional()
+  @Omittable()
   @Matches(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{2,8})*$/, { message: 'A BCP 47 language tag.' })
   @MaxLength(35)
   locale?: string;
 
   @ApiPropertyOptional()
-  @IsOptional()
-  @IsInt()
-  @Min(0)
-  @Max(86_400_000)
+  @Omittable()
+  @IsIntBetween(0, 86_400_000)
   dwellMs?: number;
 
   @ApiPropertyOptional({ enum: KIOSK_SWITCHES })
-  @IsOptional()
+  @Omittable()
   @IsIn(KIOSK_SWITCHES)
   switch?: KioskSwitch;
 }
 
 export class KioskEventsDto {
   @ApiProperty({ type: [KioskEventDto] })
-  @IsArray()
+  @NestedObjects(() => KioskEventDto)
   @ArrayMaxSize(500)
-  @ValidateNested({ each: true })
-  @Type(() => KioskEventDto)
   events: KioskEventDto[];
 }
 
 export class ListKiosksQuery extends PageQuery {
   @ApiPropertyOptional()
   @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
+  @QueryRowId()
   galleryId?: number;
 }

@@ -1,11 +1,11 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min, registerDecorator, ValidateIf } from 'class-validator';
+import { IsIn, IsOptional, IsString, MaxLength, registerDecorator, ValidateIf } from 'class-validator';
 import { createRequire } from 'node:module';
 import { MEDIA_MISSING_FILTERS, type MediaLicence, type MediaMissingFilter } from '@mantlepiece/shared';
 import { OptionalDateOnlyField } from '../../common/date-only.js';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
+import { Omittable, QueryInt } from '../../common/validation.js';
 import { canonicalLocale } from '../../venues/dto/locale-tag.js';
 
 export const MEDIA_SORT_KEYS = ['createdAt', 'filename', 'bytes', 'licenceExpiresOn'] as const;
@@ -24,10 +24,7 @@ export class ListMediaQuery extends PageQuery {
 
   @ApiPropertyOptional({ description: 'Only assets whose licence ends within this many days (or has ended)' })
   @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(0)
-  @Max(3650)
+  @QueryInt(0, 3650)
   expiringWithinDays?: number;
 
   @SortField(MEDIA_SORT_KEYS, '-createdAt')
@@ -84,7 +81,7 @@ export class UpdateMediaDto {
   licenceExpiresOn?: string | null;
 
   @ApiPropertyOptional({ example: { en: 'A pan of soup with arrows rising in the middle' }, description: 'Per locale; an empty text removes that locale' })
-  @IsOptional()
+  @Omittable()
   @ValidWith(altTextsProblem)
   alt?: Record<string, string>;
 }

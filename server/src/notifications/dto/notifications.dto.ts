@@ -1,8 +1,8 @@
 import { applyDecorators } from '@nestjs/common';
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { ArrayMaxSize, Equals, IsArray, IsBoolean, IsIn, IsInt, IsOptional, Min, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, Equals, IsArray, IsBoolean, IsIn, IsOptional } from 'class-validator';
 import { PageQuery } from '../../common/page.js';
+import { IsRowId, NestedObject, Omittable } from '../../common/validation.js';
 
 export class ListNotificationsQuery extends PageQuery {
   @ApiPropertyOptional({ enum: ['true', 'false'], description: 'true: only unread ones' })
@@ -14,15 +14,14 @@ export class ListNotificationsQuery extends PageQuery {
 /** Either the ids to mark read, or all: true. */
 export class MarkReadDto {
   @ApiPropertyOptional({ type: [Number] })
-  @IsOptional()
+  @Omittable()
   @IsArray()
   @ArrayMaxSize(500)
-  @IsInt({ each: true })
-  @Min(1, { each: true })
+  @IsRowId({ each: true })
   ids?: number[];
 
   @ApiPropertyOptional({ enum: [true] })
-  @IsOptional()
+  @Omittable()
   @Equals(true, { message: 'Send all: true to mark every notification read.' })
   all?: true;
 }
@@ -33,7 +32,7 @@ export class KindPreferenceDto {
 }
 
 const KindPreferenceField = () =>
-  applyDecorators(ApiPropertyOptional({ type: KindPreferenceDto }), IsOptional(), ValidateNested(), Type(() => KindPreferenceDto));
+  applyDecorators(ApiPropertyOptional({ type: KindPreferenceDto }), Omittable(), NestedObject(() => KindPreferenceDto));
 
 /** `{[kind]: {email}}`, one property per NotificationKind; a kind left out keeps its setting. */
 export class NotificationPreferencesDto {

@@ -1,47 +1,44 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Allow, ArrayMaxSize, ArrayUnique, IsArray, IsInt, IsOptional, Max, Min } from 'class-validator';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsObject } from 'class-validator';
+import { IsIntBetween, IsRowId, Omittable, UNSIGNED_INT_MAX } from '../../common/validation.js';
 
 // The document itself is checked by checkPanelDocument from @mantlepiece/shared, which answers with
-// a path into the document; class-validator only sees that it is there.
+// a path into the document; class-validator only sees that it is an object.
+const DOC_MESSAGE = { message: 'The document is a Tiptap JSON object.' };
 const DOC_EXAMPLE = { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Hot rock rises.' }] }] };
 
 export const MAX_WORD_BUDGET = 400;
 
 export class CreatePanelDto {
   @ApiPropertyOptional({ example: DOC_EXAMPLE, description: 'Tiptap JSON; an empty paragraph when left out' })
-  @Allow()
+  @Omittable()
+  @IsObject(DOC_MESSAGE)
   doc?: unknown;
 
   @ApiPropertyOptional({ description: '0-based place in the story; at the end when left out' })
-  @IsOptional()
-  @IsInt()
-  @Min(0)
+  @Omittable()
+  @IsIntBetween(0, UNSIGNED_INT_MAX)
   position?: number;
 
   @ApiPropertyOptional({ description: 'Words that fit the screen' })
-  @IsOptional()
-  @IsInt()
-  @Min(1)
-  @Max(MAX_WORD_BUDGET)
+  @Omittable()
+  @IsIntBetween(1, MAX_WORD_BUDGET)
   wordBudget?: number;
 }
 
 export class SavePanelDocumentDto {
   @ApiProperty({ example: DOC_EXAMPLE })
-  @Allow()
+  @IsObject(DOC_MESSAGE)
   doc: unknown;
 
   @ApiProperty({ description: 'The version this edit started from' })
-  @IsInt()
-  @Min(1)
+  @IsIntBetween(1, UNSIGNED_INT_MAX)
   version: number;
 }
 
 export class UpdatePanelDto {
   @ApiProperty()
-  @IsInt()
-  @Min(1)
-  @Max(MAX_WORD_BUDGET)
+  @IsIntBetween(1, MAX_WORD_BUDGET)
   wordBudget: number;
 }
 
@@ -50,6 +47,6 @@ export class ReorderPanelsDto {
   @IsArray()
   @ArrayMaxSize(500)
   @ArrayUnique({ message: 'Each panel appears once.' })
-  @IsInt({ each: true })
+  @IsRowId({ each: true })
   panelIds: number[];
 }

@@ -11,7 +11,7 @@ export class RecordVerdictDto {
   @IsIn(VERDICTS, { message: `The verdict is one of ${VERDICTS.join(', ')}.` })
   verdict: Verdict;
 
-  @ApiPropertyOptional({ description: 'Required when asking for changes: what should change' })
+  @ApiPropertyOptional({ nullable: true, description: 'Required when asking for changes: what should change' })
   @IsOptional()
   @IsString()
   @MaxLength(5000)

@@ -1,10 +1,11 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsString, MaxLength } from 'class-validator';
 import type { SubmitRequest } from '@mantlepiece/shared';
+import { Omittable } from '../../common/validation.js';
 
 export class SubmitForReviewDto implements SubmitRequest {
   @ApiPropertyOptional({ description: 'A note to the educators, kept with the revision' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(5000)
   note?: string;

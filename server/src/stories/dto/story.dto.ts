@@ -1,10 +1,11 @@
 import { applyDecorators } from '@nestjs/common';
-import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
-import { Transform, Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, MaxLength, Min, MinLength } from 'class-validator';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Transform } from 'class-transformer';
+import { IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import { AUDIENCES, STORY_STATES, type Audience, type StoryState } from '@mantlepiece/shared';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
+import { IsRowId, Omittable, PatchType, QueryRowId } from '../../common/validation.js';
 import { LocaleTagField } from '../../venues/dto/locale-tag.js';
 
 export const STORY_SORT_KEYS = ['title', 'updatedAt', 'createdAt', 'state'] as const;
@@ -24,22 +25,21 @@ export class CreateStoryDto {
 
   @ApiPropertyOptional({ nullable: true, description: 'The exhibit the story belongs to' })
   @IsOptional()
-  @IsInt()
-  @Min(1)
+  @IsRowId()
   exhibitId?: number | null;
 
   @ApiPropertyOptional({ enum: AUDIENCES, default: 'family' })
-  @IsOptional()
+  @Omittable()
   @IsIn(AUDIENCES, { message: `The audience is one of ${AUDIENCES.join(', ')}.` })
   audience?: Audience;
 
   @ApiPropertyOptional({ example: 'en', description: "BCP 47; by default the venue's source locale" })
-  @IsOptional()
+  @Omittable()
   @LocaleTagField()
   sourceLocale?: string;
 }
 
-export class UpdateStoryDto extends PartialType(CreateStoryDto) {}
+export class UpdateStoryDto extends PatchType(CreateStoryDto) {}
 
 export class ListStoriesQuery extends PageQuery {
   @SearchField()
@@ -52,9 +52,7 @@ export class ListStoriesQuery extends PageQuery {
 
   @ApiPropertyOptional()
   @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
+  @QueryRowId()
   exhibitId?: number;
 
   @ApiPropertyOptional({ enum: AUDIENCES })

@@ -1,8 +1,9 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsInt, IsOptional, IsString, MaxLength, Min } from 'class-validator';
+import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
 import { UNIT_STATUSES, type UnitStatus } from '@mantlepiece/shared';
 import { SearchField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
+import { IsIntBetween, UNSIGNED_INT_MAX } from '../../common/validation.js';
 import { LocaleTagField } from '../../venues/dto/locale-tag.js';
 
 export class ListWorklistQuery extends PageQuery {
@@ -29,7 +30,6 @@ export class SaveTranslationUnitDto {
   text: string;
 
   @ApiProperty({ description: 'The version the translator started from; 0 for a unit never translated' })
-  @IsInt()
-  @Min(0)
+  @IsIntBetween(0, UNSIGNED_INT_MAX)
   version: number;
 }

@@ -1,6 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsOptional } from 'class-validator';
 import type { Role } from '@mantlepiece/shared';
+import { Omittable } from '../../common/validation.js';
 import { EmailField, LocalesField, PersonNameField, RolesField, UiLanguageField } from './user-fields.js';
 
 export class InviteUserDto {
@@ -18,7 +18,7 @@ export class InviteUserDto {
 
   /** The language of the invitation mail and of the new account's studio; the inviting admin's by default. */
   @ApiPropertyOptional()
-  @IsOptional()
+  @Omittable()
   @UiLanguageField()
   uiLanguage?: string;
 }

@@ -1,23 +1,24 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsOptional } from 'class-validator';
+import { IsBoolean } from 'class-validator';
 import type { Role } from '@mantlepiece/shared';
+import { Omittable } from '../../common/validation.js';
 import { LocalesField, PersonNameField, RolesField } from './user-fields.js';
 
 export class UpdateUserDto {
-  @IsOptional()
+  @Omittable()
   @PersonNameField()
   name?: string;
 
-  @IsOptional()
+  @Omittable()
   @RolesField()
   roles?: Role[];
 
-  @IsOptional()
+  @Omittable()
   @LocalesField()
   locales?: string[];
 
   @ApiPropertyOptional()
-  @IsOptional()
+  @Omittable()
   @IsBoolean()
   active?: boolean;
 }

@@ -1,4 +1,5 @@
-import { OmitType, PartialType } from '@nestjs/swagger';
+import { OmitType } from '@nestjs/swagger';
+import { PatchType } from '../../common/validation.js';
 import { ListSettingsQuery } from '../settings.service.js';
 import { ParentFilterField, ParentIdField, SettingsNameField } from './settings-fields.js';
 
@@ -11,7 +12,7 @@ export class CreateGalleryDto {
 }
 
 /** A gallery stays in its venue: its stations and exhibits are set up for that building. */
-export class UpdateGalleryDto extends PartialType(OmitType(CreateGalleryDto, ['venueId'] as const)) {}
+export class UpdateGalleryDto extends PatchType(OmitType(CreateGalleryDto, ['venueId'] as const)) {}
 
 export class ListGalleriesQuery extends ListSettingsQuery {
   @ParentFilterField()

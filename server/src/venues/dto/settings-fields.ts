@@ -1,7 +1,8 @@
 import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Transform, Type } from 'class-transformer';
-import { IsInt, IsOptional, IsString, MaxLength, Min, MinLength } from 'class-validator';
+import { Transform } from 'class-transformer';
+import { IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsRowId, QueryRowId } from '../../common/validation.js';
 
 /** The name of a Settings record: venue, gallery, station or exhibit. */
 export const SettingsNameField = () =>
@@ -15,7 +16,7 @@ export const SettingsNameField = () =>
 
 /** The id of the record this one belongs to, in a body. */
 export const ParentIdField = (description: string) =>
-  applyDecorators(ApiProperty({ description }), IsInt({ message: `Choose the ${description}.` }), Min(1));
+  applyDecorators(ApiProperty({ description }), IsRowId({ message: `Choose the ${description}.` }));
 
 /** `?venueId=` and the like: narrows a list to one parent. */
-export const ParentFilterField = () => applyDecorators(ApiPropertyOptional(), IsOptional(), Type(() => Number), IsInt(), Min(1));
+export const ParentFilterField = () => applyDecorators(ApiPropertyOptional(), IsOptional(), QueryRowId());

@@ -1,5 +1,6 @@
-import { ApiProperty, OmitType, PartialType } from '@nestjs/swagger';
-import { IsIn, IsInt, Max, Min } from 'class-validator';
+import { ApiProperty, OmitType } from '@nestjs/swagger';
+import { IsIn } from 'class-validator';
+import { IsIntBetween, PatchType } from '../../common/validation.js';
 import { ORIENTATIONS, type Orientation } from '../models/station.model.js';
 import { ListSettingsQuery } from '../settings.service.js';
 import { ParentFilterField, ParentIdField, SettingsNameField } from './settings-fields.js';
@@ -12,15 +13,11 @@ export class CreateStationDto {
   name: string;
 
   @ApiProperty({ example: 1920 })
-  @IsInt()
-  @Min(320)
-  @Max(16_384)
+  @IsIntBetween(320, 16_384)
   screenWidthPx: number;
 
   @ApiProperty({ example: 1080 })
-  @IsInt()
-  @Min(320)
-  @Max(16_384)
+  @IsIntBetween(320, 16_384)
   screenHeightPx: number;
 
   @ApiProperty({ enum: ORIENTATIONS })
@@ -29,13 +26,11 @@ export class CreateStationDto {
 
   /** Reach ranges follow local building and accessibility codes; this only bounds typing errors. */
   @ApiProperty({ example: 1000, description: "Height of the screen's centre above the floor, mm" })
-  @IsInt()
-  @Min(0)
-  @Max(5000)
+  @IsIntBetween(0, 5000)
   mountingHeightMm: number;
 }
 
-export class UpdateStationDto extends PartialType(OmitType(CreateStationDto, ['galleryId'] as const)) {}
+export class UpdateStationDto extends PatchType(OmitType(CreateStationDto, ['galleryId'] as const)) {}
 
 export class ListStationsQuery extends ListSettingsQuery {
   @ParentFilterField()

@@ -1,5 +1,6 @@
-import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
-import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, IsOptional, Matches, MaxLength } from 'class-validator';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, Matches, MaxLength } from 'class-validator';
+import { Omittable, PatchType } from '../../common/validation.js';
 import { LocaleTagField, LocaleTagsField } from './locale-tag.js';
 import { SettingsNameField } from './settings-fields.js';
 
@@ -24,14 +25,14 @@ export class CreateVenueDto {
   targetLocales: string[];
 
   @ApiPropertyOptional({ enum: [1, 2], default: 1, description: 'How many different educators must approve a revision' })
-  @IsOptional()
+  @Omittable()
   @IsIn([1, 2], { message: 'A revision needs 1 or 2 approvals.' })
   requiredApprovals?: number;
 
   @ApiPropertyOptional({ default: false, description: 'Whether a release may show the source text where a target locale is incomplete or stale' })
-  @IsOptional()
+  @Omittable()
   @IsBoolean({ message: 'Say true or false.' })
   fallbackToSource?: boolean;
 }
 
-export class UpdateVenueDto extends PartialType(CreateVenueDto) {}
+export class UpdateVenueDto extends PatchType(CreateVenueDto) {}

@@ -1,5 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { Allow, IsString } from 'class-validator';
+import { IsObject, IsString } from 'class-validator';
 
 export class ValidateWidgetDto {
   @ApiProperty({ example: 'slope-force', description: 'A widget type from GET /api/widgets.' })
@@ -8,6 +8,6 @@ export class ValidateWidgetDto {
 
   // Checked by the widget's own schema in @mantlepiece/shared, which knows each type's fields.
   @ApiProperty({ example: { massKg: 10, angleDeg: 30, staticFriction: 0.85, kineticFriction: 0.6 } })
-  @Allow()
+  @IsObject({ message: 'The parameters are an object of values by name.' })
   params!: unknown;
 }
