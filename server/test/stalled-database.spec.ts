@@ -122,7 +122,7 @@ describe('a database that does not answer', () => {
     relay.stall();
     try {
       const error = await sequelize.query('SELECT 1').catch((caught: unknown) => caught);
-      expect({ unavailable: isDatabaseUnavailable(error), code: (error as DatabaseError).parent?.code })
+      expect({ unavailable: isDatabaseUnavailable(error), code: ((error as DatabaseError).parent as Error & { code?: string } | undefined)?.code })
         .toEqual({ unavailable: true, code: 'PROTOCOL_SEQUENCE_TIMEOUT' });
     } finally {
       relay.resume();

@@ -21,7 +21,7 @@ describe('isDatabaseUnavailable', () => {
 
   it('leaves the database refusing a statement for its content, and any other error, alone', () => {
     expect(isDatabaseUnavailable(statementError({ errno: 1064, code: 'ER_PARSE_ERROR' }))).toBe(false);
-    expect(isDatabaseUnavailable(new ForeignKeyConstraintError({ reltype: 'child', fields: ['gallery_id'] }))).toBe(false);
+    expect(isDatabaseUnavailable(new ForeignKeyConstraintError({ fields: { gallery_id: '1' } }))).toBe(false);
     expect(isDatabaseUnavailable(new Error('connect ETIMEDOUT'))).toBe(false);
   });
 });

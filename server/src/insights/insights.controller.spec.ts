@@ -4,7 +4,7 @@ import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import type { InsightsView, KioskEvent } from '@mantlepiece/shared';
 import { galleryWithExhibit, paragraphDoc } from '../../test/authoring-fixtures.js';
-import { pairedKiosk } from '../../test/release-fixtures.js';
+import { approve, buildRelease, pairedKiosk, publish } from '../../test/release-fixtures.js';
 import { member, storyWithPanels } from '../../test/review-fixtures.js';
 import { createTestApp } from '../../test/test-app.js';
 
@@ -14,12 +14,17 @@ afterAll(() => t.close());
 const admin = await member(t, ['admin']);
 const technician = await member(t, ['technician']);
 const curator = await member(t, ['curator']);
-const { gallery, exhibit } = await galleryWithExhibit(t, admin.auth, 'insights');
+const educator = await member(t, ['educator']);
+const { venue, gallery, exhibit } = await galleryWithExhibit(t, admin.auth, 'insights');
 const other = await galleryWithExhibit(t, admin.auth, 'elsewhere');
 const plates = await storyWithPanels(t, curator.auth, exhibit.id, [paragraphDoc('Plates move.'), paragraphDoc('A few centimetres a year.')]);
 const ridge = await storyWithPanels(t, curator.auth, exhibit.id, [paragraphDoc('New sea floor.')]);
 const [p1, p2] = plates.panelIds as [number, number];
 const [p3] = ridge.panelIds as [number];
+// A kiosk's events count only for stories and panels a published release of its gallery carries.
+await request(t.http).patch(`/api/venues/${venue.id}`).set(admin.auth).send({ fallbackToSource: true });
+for (const story of [plates, ridge]) await approve(t, curator.auth, educator.auth, story.storyId);
+await publish(t, technician.auth, (await buildRelease(t, technician.auth, gallery.id)).id);
 const kiosk = await pairedKiosk(t, admin.auth, technician.auth, gallery.id);
 const elsewhere = await pairedKiosk(t, admin.auth, technician.auth, other.gallery.id);
 
@@ -80,12 +85,12 @@ describe('kiosk event upload', () => {
   it('stores each event once when a batch is uploaded twice', async () => {
     const first = await request(t.http).post('/api/kiosk/events').set(kiosk.device).send({ events: fixture });
     expect(first.status).toBe(200);
-    expect(first.body).toEqual({ stored: fixture.length, duplicates: 0 });
+    expect(first.body).toEqual({ stored: fixture.length, duplicates: 0, dropped: 0 });
     const again = await request(t.http).post('/api/kiosk/events').set(kiosk.device).send({ events: [...fixture.slice(0, 5), ...events([{ type: 'language_chosen', locale: 'fr', at: '2025-05-20T10:00:00.000Z' }])] });
-    expect(again.body).toEqual({ stored: 1, duplicates: 5 });
-    // Another gallery's visitors are not this gallery's.
+    expect(again.body).toEqual({ stored: 1, duplicates: 5, dropped: 0 });
+    // A story no release of another gallery carries is not that gallery's: its kiosk's events naming it are dropped and counted.
     const away = await request(t.http).post('/api/kiosk/events').set(elsewhere.device).send({ events: events(times(4, { type: 'story_opened', storyId: plates.storyId, at: '2025-05-11T09:00:00.000Z' })) });
-    expect(away.body).toEqual({ stored: 4, duplicates: 0 });
+    expect(away.body).toEqual({ stored: 0, duplicates: 0, dropped: 4 });
   });
 });
 

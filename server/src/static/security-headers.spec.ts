@@ -18,7 +18,7 @@ afterAll(async () => {
 /** The policy as a map of directive → sources, so a test reads one directive at a time. */
 function policyOf(res: request.Response): Record<string, string[]> {
   const header = res.headers['content-security-policy'] as string | undefined;
-  expect(header, `a Content-Security-Policy header on ${res.req.path}`).toBeTruthy();
+  expect(header, `a Content-Security-Policy header on ${(res as unknown as { req: { path: string } }).req.path}`).toBeTruthy();
   return Object.fromEntries(header!.split(';').map((d) => d.trim().split(/\s+/)).map(([name, ...sources]) => [name, sources]));
 }
 
