@@ -13,8 +13,8 @@ describe('isDatabaseUnavailable', () => {
   });
 
   it('takes a statement out of time or cut off for an outage', () => {
-    // MariaDB's ER_STATEMENT_TIMEOUT (max_statement_time), InnoDB's lock wait timeout, mysql2 giving up.
-    for (const fields of [{ errno: 1969 }, { errno: 1205 }, { code: 'PROTOCOL_SEQUENCE_TIMEOUT' }, { code: 'PROTOCOL_CONNECTION_LOST' }]) {
+    // MariaDB's ER_STATEMENT_TIMEOUT (max_statement_time), InnoDB's lock wait timeout and deadlock, mysql2 giving up.
+    for (const fields of [{ errno: 1969 }, { errno: 1205 }, { errno: 1213 }, { code: 'PROTOCOL_SEQUENCE_TIMEOUT' }, { code: 'PROTOCOL_CONNECTION_LOST' }]) {
       expect(isDatabaseUnavailable(statementError(fields)), JSON.stringify(fields)).toBe(true);
     }
   });

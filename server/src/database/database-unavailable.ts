@@ -6,9 +6,10 @@ export const DATABASE_RETRY_AFTER_SECONDS = 5;
 
 /**
  * Statement stopped by MariaDB's max_statement_time (1969; MySQL's own is 3024), lock wait timed
- * out (1205), connection killed (1927) or server shutting down (1053).
+ * out (1205), deadlock (1213: InnoDB rolled the transaction back, so nothing of it stays and the
+ * same request may be sent again), connection killed (1927) or server shutting down (1053).
  */
-const SERVER_ERRNOS = new Set([1969, 3024, 1205, 1927, 1053]);
+const SERVER_ERRNOS = new Set([1969, 3024, 1205, 1213, 1927, 1053]);
 /** mysql2's own: the client gave up on a statement, or the connection went away under it. */
 const CLIENT_CODES = new Set(['PROTOCOL_SEQUENCE_TIMEOUT', 'PROTOCOL_CONNECTION_LOST', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT']);
 
