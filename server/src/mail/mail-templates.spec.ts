@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { UI_LANGUAGES } from '../common/ui-languages.js';
+import { UI_LANGUAGE_CODES } from '@mantlepiece/shared';
 import { renderMail, type MailContent } from './mail-templates.js';
 
 const at = new Date('2031-03-14T09:30:00Z');
@@ -15,7 +15,7 @@ const contents: MailContent[] = [
 ];
 
 describe('mail templates', () => {
-  it.each(UI_LANGUAGES)('writes every kind of message in %s, with the link, differently from English', (language) => {
+  it.each(UI_LANGUAGE_CODES)('writes every kind of message in %s, with the link, differently from English', (language) => {
     for (const content of contents) {
       const mail = renderMail(content, language);
       expect(mail.text, `${language} ${content.kind}`).toContain(link);

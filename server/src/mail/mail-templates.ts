@@ -1,4 +1,4 @@
-import { asUiLanguage, type UiLanguage } from '../common/ui-languages.js';
+import { asUiLanguage, type UiLanguage } from '@mantlepiece/shared';
 
 export type MailContent =
   | { kind: 'invitation'; name: string; inviterName: string; link: string; expiresAt: Date }

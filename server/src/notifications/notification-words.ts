@@ -1,5 +1,4 @@
-import type { NotificationKind, StoryState, Verdict } from '@mantlepiece/shared';
-import type { UiLanguage } from '../common/ui-languages.js';
+import type { NotificationKind, StoryState, UiLanguage, Verdict } from '@mantlepiece/shared';
 
 /** What happened, with the facts a notification tells; each kind is worded below in every UI language. */
 export type NotificationEvent =

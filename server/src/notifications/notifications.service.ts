@@ -1,10 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
-import { NOTIFICATION_KINDS, type NotificationKind, type NotificationPage, type NotificationPreferences } from '@mantlepiece/shared';
+import { asUiLanguage, NOTIFICATION_KINDS, type NotificationKind, type NotificationPage, type NotificationPreferences } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
-import { asUiLanguage } from '../common/ui-languages.js';
 import { MailService } from '../mail/mail.service.js';
 import type { User } from '../users/models/user.model.js';
 import type { ListNotificationsQuery, MarkReadDto, NotificationPreferencesDto } from './dto/notifications.dto.js';

@@ -1,6 +1,6 @@
 import { ForbiddenException, NotFoundException } from '@nestjs/common';
 import type { User } from '../users/models/user.model.js';
-import { canonicalLocale } from '../venues/dto/locale-tag.js';
+import { canonicalLocale } from '../common/locale-tag.js';
 
 /** Admins and curators read every locale; they look after the stories the translations belong to. */
 const readsEveryLocale = (user: User) => user.roles.includes('admin') || user.roles.includes('curator');

@@ -6,7 +6,7 @@ import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
 import { MailService } from '../mail/mail.service.js';
 import { User } from '../users/models/user.model.js';
-import { canonicalLocale } from '../venues/dto/locale-tag.js';
+import { canonicalLocale } from '../common/locale-tag.js';
 import { Translation } from './models/translation.model.js';
 import { TranslatorAssignment } from './models/translator-assignment.model.js';
 import { SourceUnitsService } from './source-units.service.js';

@@ -64,6 +64,12 @@ describe('POST /api/users/invitations', () => {
       expect.objectContaining({ path: ['roles'] }), expect.objectContaining({ path: ['locales'] }),
     ]));
   });
+
+  it('stores a translator\'s locales in canonical BCP 47 form, as a venue\'s are (pt-br → pt-BR, Intl.getCanonicalLocales)', async () => {
+    const person = await createPerson(t, { roles: ['translator'], locales: ['fr'], name: `${tag} Canonical` });
+    const res = await request(t.http).patch(`/api/users/${person.id}`).set(bearer(accessToken)).send({ locales: ['pt-br', 'ZH-hant'] });
+    expect({ status: res.status, locales: res.body.locales }).toEqual({ status: 200, locales: ['pt-BR', 'zh-Hant'] });
+  });
 });
 
 describe('PATCH /api/users/:id', () => {

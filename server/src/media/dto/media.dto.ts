@@ -6,7 +6,7 @@ import { OptionalDateOnlyField } from '../../common/date-only.js';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
 import { Omittable, QueryInt } from '../../common/validation.js';
-import { canonicalLocale } from '../../venues/dto/locale-tag.js';
+import { canonicalLocale } from '../../common/locale-tag.js';
 
 export const MEDIA_SORT_KEYS = ['createdAt', 'filename', 'bytes', 'licenceExpiresOn'] as const;
 // The SPDX list as a JSON array, kept current by its package rather than by us.

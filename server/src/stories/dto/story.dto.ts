@@ -6,7 +6,7 @@ import { AUDIENCES, STORY_STATES, type Audience, type StoryState } from '@mantle
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
 import { IsRowId, Omittable, PatchType, QueryRowId } from '../../common/validation.js';
-import { LocaleTagField } from '../../venues/dto/locale-tag.js';
+import { LocaleTagField } from '../../common/locale-tag.js';
 
 export const STORY_SORT_KEYS = ['title', 'updatedAt', 'createdAt', 'state'] as const;
 

@@ -4,7 +4,7 @@ import { UNIT_STATUSES, type UnitStatus } from '@mantlepiece/shared';
 import { SearchField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
 import { IsIntBetween, UNSIGNED_INT_MAX } from '../../common/validation.js';
-import { LocaleTagField } from '../../venues/dto/locale-tag.js';
+import { LocaleTagField } from '../../common/locale-tag.js';
 
 export class ListWorklistQuery extends PageQuery {
   @SearchField()

@@ -1,9 +1,9 @@
 import { applyDecorators } from '@nestjs/common';
 import { ApiProperty } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsEmail, IsIn, IsString, Matches, MaxLength, MinLength } from 'class-validator';
-import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH, ROLES } from '@mantlepiece/shared';
-import { BCP47, UI_LANGUAGES } from '../../common/ui-languages.js';
+import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH, ROLES, UI_LANGUAGE_CODES } from '@mantlepiece/shared';
+import { LocaleTagsField } from '../../common/locale-tag.js';
 import { IsAcceptablePassword } from '../password-rules.js';
 
 /** Field rules that several DTOs share, so an e-mail or a role list is checked the same everywhere. */
@@ -39,13 +39,14 @@ export const LocalesField = () =>
     IsArray(),
     ArrayUnique(),
     ArrayMaxSize(20),
-    Matches(BCP47, { each: true, message: 'Each locale must be a BCP 47 tag such as fr or pt-BR.' }),
+    // The same rule and canonical form as a venue's locales, so a translator's pt-br meets the venue's pt-BR.
+    LocaleTagsField(),
   );
 
 export const UiLanguageField = () =>
   applyDecorators(
-    ApiProperty({ enum: UI_LANGUAGES }),
-    IsIn(UI_LANGUAGES, { message: `The UI language must be one of ${UI_LANGUAGES.join(', ')}.` }),
+    ApiProperty({ enum: UI_LANGUAGE_CODES }),
+    IsIn(UI_LANGUAGE_CODES, { message: `The UI language must be one of ${UI_LANGUAGE_CODES.join(', ')}.` }),
   );
 
 /** A password someone chooses: the rules of shared's passwords.ts, and the list of common ones. */

@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, Matches, MaxLength } from 'class-validator';
 import { Omittable, PatchType } from '../../common/validation.js';
-import { LocaleTagField, LocaleTagsField } from './locale-tag.js';
+import { LocaleTagField, LocaleTagsField } from '../../common/locale-tag.js';
 import { SettingsNameField } from './settings-fields.js';
 
 export class CreateVenueDto {
