@@ -10,7 +10,7 @@ const t = await createReviewApp();
 afterAll(() => t.close());
 
 // Names that sort first, so this suite's rows lead lists that other suites have filled too.
-const { admin, exhibit } = await reviewVenue(t, '000-my-work');
+const { admin, venue, exhibit } = await reviewVenue(t, '000-my-work');
 const curator = await member(t, ['curator']);
 const educator = await member(t, ['educator']);
 const technician = await member(t, ['technician']);
@@ -59,16 +59,18 @@ describe('GET /api/me/work', () => {
   });
 
   it('gives a translator each story and locale of theirs with units untranslated or stale', async () => {
-    const translatorPerson = await createPerson(t, { roles: ['translator'], locales: ['fr'] });
+    // Kalaallisut (kl) is this suite's alone, so other suites' stories cannot crowd its worklist.
+    expect((await request(t.http).patch(`/api/venues/${venue.id}`).set(admin).send({ targetLocales: ['fr', 'kl'] })).status).toBe(200);
+    const translatorPerson = await createPerson(t, { roles: ['translator'], locales: ['kl'] });
     const translator = bearer((await signIn(t, translatorPerson.email)).accessToken);
     const story = await storyWithPanels(t, curator.auth, exhibit.id, [paragraphDoc('The sea floor sinks as it cools.')]);
     await approve(t, curator.auth, educator.auth, story.storyId);
     const { translator: work, curator: none } = await workOf(translator);
     expect(none).toBeUndefined();
     const item = work!.translations.items.find((entry) => entry.storyId === story.storyId);
-    // One paragraph is one unit, not yet translated into French.
-    expect(item).toEqual({ storyId: story.storyId, title: await titleOf(story.storyId), locale: 'fr', untranslated: 1, stale: 0, link: `/translations/${story.storyId}/fr` });
-    expect(work!.translations.items.every((entry) => entry.locale === 'fr' && entry.untranslated + entry.stale > 0)).toBe(true);
+    // One paragraph is one unit, not yet translated into Kalaallisut.
+    expect(item).toEqual({ storyId: story.storyId, title: await titleOf(story.storyId), locale: 'kl', untranslated: 1, stale: 0, link: `/translations/${story.storyId}/kl` });
+    expect(work!.translations.items.every((entry) => entry.locale === 'kl' && entry.untranslated + entry.stale > 0)).toBe(true);
   });
 
   it('gives a technician silent kiosks and releases ready to publish, each linked to its page', async () => {
