@@ -1,5 +1,3 @@
-// First: no schema may be built before zod is told not to probe for eval (our CSP forbids it).
-import '@mantlepiece/shared/zod-jitless';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/App';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../zod.js';
 import type { PanelDocJSON } from '../panel/panel-json.js';
 import { canonicalJson } from '../review/revision-snapshot.js';
 

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../zod.js';
 import { canonicalJson, sha256Hex } from '../review/revision-snapshot.js';
 import type { SignedPublication } from './kiosk-api.js';
 import { readSignedJson, sha256Schema } from './manifest.js';

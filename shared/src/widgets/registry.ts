@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../zod.js';
 import { convectionCell } from './convection-cell/index.js';
 import { slopeForce } from './slope-force/index.js';
 import type { ModelLimitWarning, WidgetIssue, WidgetModule } from './types.js';

@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import type { z } from '../zod.js';
 import type { LiveValueUnit } from '../panel/live-value/live-value-format.js';
 
 /** One problem with a widget's params: where it is (property names from the params root) and what to do. */

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../zod.js';
 import type { WidgetIssue, WidgetValidation } from './types.js';
 
 const englishNumber = new Intl.NumberFormat('en', { maximumSignificantDigits: 6 });

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../../zod.js';
 import { boundedNumber } from '../validation.js';
 import { COLOUR_RAMP_NAMES } from './colour-ramps.js';
 

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '../../zod.js';
 import { boundedNumber, whenFieldsValid } from '../validation.js';
 
 /** Standard acceleration of gravity, g0 = 9.80665 m/s², as fixed by the 3rd CGPM (1901). */
