@@ -44,6 +44,25 @@ export const WIDGET_STATES = ['holds', 'slides'] as const;
 export type WidgetState = (typeof WIDGET_STATES)[number];
 
 /**
+ * The states a widget can be in, declared once so a live phrase can offer one wording per state,
+ * the kiosk can pick the wording that matches what the visitor sees, and preflight can tell when
+ * plain text names a state that may no longer hold.
+ */
+export interface WidgetStates<P, R, S extends string = string> {
+  /** Every state, in the order the studio offers them; a live phrase keeps one wording per state. */
+  values: readonly S[];
+  /** The state for these params; a kiosk passes the params the visitor has just set. */
+  read: (result: R, params: P) => S;
+  /** Whether a visitor can move the widget from one state to another on the kiosk (tilting the slope). */
+  visitorChangesState: boolean;
+  /**
+   * Words that name a state in running text, per visitor language (lower case, whole words).
+   * Plain text holding one, on a panel where the visitor changes the state, may contradict the widget.
+   */
+  stateWords: Readonly<Record<string, readonly string[]>>;
+}
+
+/**
  * An optional group of params (the convection cell's physical properties) as a curator switches it
  * on or off: the whole params it leads to, so the form never opens on a page of errors, and where
  * each starting value comes from.
@@ -71,6 +90,8 @@ export interface WidgetModule<P, R, T extends string = string> {
   describe(params: P, locale: string): string;
   modelLimits(params: P): ModelLimitWarning[];
   outputs: readonly WidgetOutput<P, R>[];
+  /** The states a live phrase can follow; left out by widgets that have none. */
+  states?: WidgetStates<P, R>;
   /** Optional param groups by name, for those whose empty start would not validate. */
   paramGroups?: Readonly<Record<string, WidgetParamGroup>>;
 }

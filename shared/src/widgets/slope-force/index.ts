@@ -4,11 +4,13 @@ import { validateWith } from '../validation.js';
 import { computeSlopeForce, type SlopeForceResult } from './compute.js';
 import { slopeForceOutputs } from './outputs.js';
 import { slopeForceDefaults, slopeForceSchema, type SlopeForceParams } from './params.js';
+import { slopeForceStates } from './states.js';
 import { formatAcceleration, formatAngle, formatForce, formatMass } from './units.js';
 
 export { computeSlopeForce, criticalAngleDeg, type SlopeForceResult } from './compute.js';
 export * from './outputs.js';
 export * from './params.js';
+export * from './states.js';
 export * from './units.js';
 
 function describeSlopeForce(params: SlopeForceParams, locale: string): string {
@@ -59,4 +61,5 @@ export const slopeForce: WidgetModule<SlopeForceParams, SlopeForceResult, 'slope
   describe: describeSlopeForce,
   modelLimits: slopeForceLimits,
   outputs: slopeForceOutputs,
+  states: slopeForceStates,
 };

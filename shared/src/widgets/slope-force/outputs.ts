@@ -1,6 +1,7 @@
 import type { WidgetOutput } from '../types.js';
 import type { SlopeForceResult } from './compute.js';
 import type { SlopeForceParams } from './params.js';
+import { slopeForceStates } from './states.js';
 
 type Output = WidgetOutput<SlopeForceParams, SlopeForceResult>;
 
@@ -20,7 +21,7 @@ export const slopeForceOutputs: readonly Output[] = [
   force('maxStaticFrictionN'),
   force('frictionN'),
   force('netForceN'),
-  { name: 'state', kind: 'state', states: ['holds', 'slides'], source: 'settings', read: (result) => (result.slides ? 'slides' : 'holds') },
+  { name: 'state', kind: 'state', states: ['holds', 'slides'], source: 'settings', read: slopeForceStates.read },
   { name: 'criticalAngleDeg', kind: 'number', unit: '°', source: 'settings', read: (result) => result.criticalAngleDeg },
   { name: 'accelerationMs2', kind: 'number', unit: 'm/s²', source: 'settings', read: (result) => result.accelerationMs2 },
 ];
