@@ -37,6 +37,7 @@ try {
     dataDir,
     dbPort: await freePort(),
     smtpPort: await freePort(),
+    s3Port: await freePort(),
     port: await freePort(),
     demoPassword: 'mantlepiece-demo',
     nodeEnv: 'test',

@@ -84,8 +84,25 @@ function build(workspace, phaseName, output, sources, env) {
   npmRun('build', workspace, phaseName, env);
 }
 
+/**
+ * The S3 stand-in, for the suites that check object storage. The server keeps the disk: its
+ * settings name the stand-in under S3_STAND_IN_*, which a suite turns into S3_* for its own app.
+ */
+async function startS3StandIn({ dataDir, port, env }) {
+  const standIn = { S3_STAND_IN_ENDPOINT: `http://127.0.0.1:${port}`, S3_STAND_IN_BUCKET: 'mantlepiece', S3_STAND_IN_KEY: 'S3RVER' };
+  phase('object storage', `S3 stand-in on 127.0.0.1:${port}`);
+  const s3 = startOwned('s3-stand-in', 'node', [path.join(root, 'scripts/lib/s3-stand-in.mjs')], {
+    env: { ...env, S3_STAND_IN_PORT: String(port), S3_STAND_IN_DIR: path.resolve(dataDir, 's3'), S3_BUCKET: standIn.S3_STAND_IN_BUCKET },
+  });
+  await waitFor(() => /listening/.test(s3.recentOutput()), {
+    what: 'S3 stand-in', timeoutMs: 15000,
+    failIf: () => (s3.child.exitCode !== null ? `S3 stand-in exited: ${s3.recentOutput().trim()}` : null),
+  }).catch((error) => { throw new PhaseError('object storage', error.message); });
+  return { process: s3, env: standIn };
+}
+
 export async function startStack(options) {
-  const { dataDir, dbPort, smtpPort, port, demoPassword, nodeEnv = 'development', extraDatabases = [] } = options;
+  const { dataDir, dbPort, smtpPort, s3Port, port, demoPassword, nodeEnv = 'development', extraDatabases = [] } = options;
   const owned = [];
   const stop = async () => {
     for (const proc of owned.reverse()) await proc.stop();
@@ -97,6 +114,7 @@ export async function startStack(options) {
     phase('ports', `server ${port}, SMTP ${smtpPort}${external ? '' : `, MariaDB ${dbPort}`}`);
     await assertPortFree(port, 'server');
     await assertPortFree(smtpPort, 'SMTP stand-in');
+    if (s3Port) await assertPortFree(s3Port, 'S3 stand-in');
     if (!external) await assertPortFree(dbPort, 'MariaDB');
 
     let databaseUrls = { mantlepiece: external };
@@ -149,6 +167,12 @@ export async function startStack(options) {
       what: 'SMTP stand-in', timeoutMs: 15000,
       failIf: () => (smtp.child.exitCode !== null ? `SMTP stand-in exited: ${smtp.recentOutput().trim()}` : null),
     }).catch((error) => { throw new PhaseError('mail', error.message); });
+
+    if (s3Port) {
+      const s3 = await startS3StandIn({ dataDir, port: s3Port, env });
+      owned.push(s3.process);
+      Object.assign(env, s3.env);
+    }
 
     phase('apps', 'building studio and kiosk');
     build('studio', 'apps', 'studio/dist/index.html', ['studio/src', 'studio/index.html', 'studio/vite.config.ts', 'shared/src'], env);

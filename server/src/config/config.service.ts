@@ -1,5 +1,6 @@
 import path from 'node:path';
 import { Injectable } from '@nestjs/common';
+import type { S3Settings } from '../media/s3-media-store.js';
 
 /** Settings from the environment, read once, each with the default a single-machine start needs. */
 @Injectable()
@@ -60,6 +61,22 @@ export class ConfigService {
   readonly dataDir = path.resolve(process.env.DATA_DIR ?? '.data');
   /** Uploaded images, their renditions and release files, content-addressed: in the data folder, so its backup has them. */
   readonly mediaDir = path.resolve(process.env.MEDIA_DIR ?? path.join(this.dataDir, 'media'));
+  /**
+   * With S3_BUCKET set, media and release files live in that S3-compatible bucket instead of MEDIA_DIR,
+   * so several server instances share them; the SDK finds credentials itself when the keys are unset.
+   */
+  readonly objectStorage: S3Settings | null = process.env.S3_BUCKET
+    ? {
+        bucket: process.env.S3_BUCKET,
+        endpoint: process.env.S3_ENDPOINT || undefined,
+        region: process.env.S3_REGION || 'us-east-1',
+        accessKeyId: process.env.S3_ACCESS_KEY_ID || undefined,
+        secretAccessKey: process.env.S3_SECRET_ACCESS_KEY || undefined,
+        forcePathStyle: process.env.S3_FORCE_PATH_STYLE === 'true',
+      }
+    : null;
+  /** How long a kiosk's redirect to a presigned bucket URL holds; 0 streams kiosk files through the server (a CDN in front). */
+  readonly presignedUrlSeconds = intFromEnv('S3_PRESIGNED_URL_SECONDS', 300);
   readonly mediaMaxBytes = intFromEnv('MEDIA_MAX_BYTES', 25 * 1024 * 1024);
   /** Width × height above which an upload is refused before it is decoded (decompression bombs). */
   readonly mediaMaxPixels = intFromEnv('MEDIA_MAX_PIXELS', 100_000_000);

@@ -6,11 +6,11 @@ import { PanelMediaUsage } from '../panels/models/panel-media-usage.model.js';
 import { Panel } from '../panels/models/panel.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { ImageProcessing } from './image-processing.js';
-import { LocalMediaStore } from './local-media-store.js';
 import { MediaFilesController } from './media-files.controller.js';
 import { MAX_FILES_PER_UPLOAD, MediaController } from './media.controller.js';
 import { MediaService } from './media.service.js';
 import { MEDIA_STORE } from './media-store.js';
+import { mediaStoreOf } from './media-store.factory.js';
 import { MediaAltText } from './models/media-alt-text.model.js';
 import { MediaAsset } from './models/media-asset.model.js';
 import { MediaRendition } from './models/media-rendition.model.js';
@@ -29,7 +29,7 @@ import { MediaRendition } from './models/media-rendition.model.js';
   providers: [
     MediaService,
     ImageProcessing,
-    { provide: MEDIA_STORE, inject: [ConfigService], useFactory: (config: ConfigService) => new LocalMediaStore(config.mediaDir) },
+    { provide: MEDIA_STORE, inject: [ConfigService], useFactory: mediaStoreOf },
   ],
   exports: [MediaService, MEDIA_STORE],
 })
