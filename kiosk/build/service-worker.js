@@ -19,6 +19,20 @@ self.addEventListener('activate', (event) => {
   );
 });
 
+// An unpaired kiosk keeps nothing from its pairing: every cache goes, and the app's own files are
+// fetched again into a fresh one, so the next restart still boots without the network.
+self.addEventListener('message', (event) => {
+  if (event.data?.type !== 'forget-stored-content') return;
+  const [reply] = event.ports;
+  event.waitUntil(
+    caches.keys()
+      .then((names) => Promise.all(names.map((name) => caches.delete(name))))
+      .then(() => caches.open(CACHE))
+      .then((cache) => cache.addAll(PRECACHE))
+      .then(() => reply?.postMessage({ ok: true }), () => reply?.postMessage({ ok: false })),
+  );
+});
+
 self.addEventListener('fetch', (event) => {
   const request = event.request;
   const url = new URL(request.url);

@@ -83,4 +83,75 @@ describe('kiosk app', () => {
     expect(await store.credential()).toEqual(credential);
     expect(server.requestsTo('/api/kiosk/heartbeat')[0]!.body).toMatchObject({ appVersion: '0.1.0', lastError: null });
   });
+
+  it('once revoked, lets the visitor finish, forgets its pairing and releases, and shows that it was unpaired with a new code, also after a restart', async () => {
+    await pairedKioskWithRelease();
+    await store.db.put('outbox', { id: 'e-1', at: new Date().toISOString(), type: 'story_opened', storyId: 1, locale: 'en' } as never);
+    server.pairing.start.push(
+      { pairingCode: 'R3NEW1', pollToken: 'poll-2', expiresAt: new Date(Date.now() + 600_000).toISOString() },
+      { pairingCode: 'R3NEW2', pollToken: 'poll-3', expiresAt: new Date(Date.now() + 600_000).toISOString() },
+    );
+    const view = render(<KioskApp api={new KioskApi(server.fetch)} store={store} config={config} appVersion="0.1.0" />);
+    await vi.waitFor(() => screen.getByText('Why rock slides'));
+    fireEvent.click(screen.getByRole('button', { name: /Touch to begin/ }));
+    fireEvent.click(screen.getByRole('button', { name: /Why rock slides/ }));
+
+    server.revoked = true;
+    await act(() => vi.advanceTimersByTimeAsync(config.manifestPollMs));
+    const callsWhenRefused = server.requests.length;
+    // The visitor is mid-story: it plays on, and the kiosk stops calling a server that refuses it.
+    await act(() => vi.advanceTimersByTimeAsync(config.idleMs - config.manifestPollMs - 1_000));
+    expect(screen.getByRole('heading', { level: 2 }).textContent).toBe('Why rock slides 1');
+    expect(server.requests.slice(callsWhenRefused).filter((request) => !request.path.startsWith('/api/kiosk/pair/'))).toEqual([]);
+    expect(await store.credential()).toEqual(credential);
+
+    // The visitor walks away; at the reset the pairing is forgotten and a new code shows.
+    await act(() => vi.advanceTimersByTimeAsync(config.warningMs + 1_000));
+    await vi.waitFor(() => expect(document.querySelector('[data-pairing-code]')?.getAttribute('data-pairing-code')).toBe('R3NEW1'));
+    expect(screen.getByText(/This screen was unpaired in the studio/)).toBeTruthy();
+    expect(await store.credential()).toBeUndefined();
+    expect({ releases: await store.db.count('releases'), files: await store.db.count('files'), outbox: await store.db.count('outbox'), current: await store.meta('current') })
+      .toEqual({ releases: 0, files: 0, outbox: 0, current: null });
+
+    // A restart: still unpaired, still saying so, with a code of its own.
+    view.unmount();
+    render(<KioskApp api={new KioskApi(server.fetch)} store={store} config={config} appVersion="0.1.0" />);
+    await vi.waitFor(() => expect(document.querySelector('[data-pairing-code]')?.getAttribute('data-pairing-code')).toBe('R3NEW2'));
+    expect(screen.getByText(/This screen was unpaired in the studio/)).toBeTruthy();
+
+    // Paired anew: the notice goes for good.
+    server.revoked = false;
+    server.pairing.completes.push({ status: 200, body: credential });
+    await act(() => vi.advanceTimersByTimeAsync(2_000));
+    await vi.waitFor(() => screen.getByText('Why rock slides'));
+    expect(await store.meta('unpairedAt')).toBeNull();
+  });
+
+  it('unpairs at once when it is revoked while waiting for its first release', async () => {
+    server = new FakeKioskServer();
+    store = await testStore();
+    await store.saveCredential(credential);
+    server.revoked = true;
+    server.pairing.start.push({ pairingCode: 'W4ITED', pollToken: 'poll-4', expiresAt: new Date(Date.now() + 600_000).toISOString() });
+    render(<KioskApp api={new KioskApi(server.fetch)} store={store} config={config} appVersion="0.1.0" />);
+    await vi.waitFor(() => expect(document.querySelector('[data-pairing-code]')?.getAttribute('data-pairing-code')).toBe('W4ITED'));
+    expect(await store.credential()).toBeUndefined();
+  });
+
+  it('names a release refused for a bad file on its waiting screen and in its heartbeat, and does not download it again on the next poll', async () => {
+    server = new FakeKioskServer();
+    store = await testStore();
+    await store.saveCredential(credential);
+    server.live = fixtureRelease(key, 4, { imageSeed: 8 });
+    server.tampered.add(server.live.manifest.files[0]!.sha256);
+    render(<KioskApp api={new KioskApi(server.fetch)} store={store} config={config} appVersion="0.1.0" />);
+    await vi.waitFor(() => expect(document.querySelector('[data-refused-release]')?.getAttribute('data-refused-release')).toBe('4'));
+    expect(screen.getAllByText(/Release 4 was refused: a file did not match/)).toHaveLength(1);
+    const downloads = () => server.requests.filter((request) => request.path.startsWith('/api/kiosk/files/')).length;
+    const before = downloads();
+    await act(() => vi.advanceTimersByTimeAsync(Math.max(config.manifestPollMs * 3, config.heartbeatMs)));
+    expect(downloads()).toBe(before);
+    const heartbeat = server.requestsTo('/api/kiosk/heartbeat').at(-1)!.body as { lastError: string };
+    expect(heartbeat.lastError).toMatch(/^Release 4 refused: File [0-9a-f]{64} came as .* Not downloaded again before \S+ unless the release changes\.$/);
+  });
 });

@@ -9,3 +9,28 @@ export function registerAppCache(): void {
     () => undefined,
   );
 }
+
+/** Longest wait for the service worker to empty its caches; the kiosk pairs anew either way. */
+const FORGET_TIMEOUT_MS = 30_000;
+
+/**
+ * Empties Cache Storage after an unpairing. The service worker does it when it controls the page,
+ * since it alone knows which files to fetch back for the next offline boot.
+ */
+export async function forgetCachedContent(): Promise<void> {
+  if (typeof caches === 'undefined') return;
+  const worker = navigator.serviceWorker?.controller;
+  if (!worker) {
+    await Promise.all((await caches.keys()).map((name) => caches.delete(name)));
+    return;
+  }
+  await new Promise<void>((resolve) => {
+    const channel = new MessageChannel();
+    const timer = setTimeout(resolve, FORGET_TIMEOUT_MS);
+    channel.port1.onmessage = () => {
+      clearTimeout(timer);
+      resolve();
+    };
+    worker.postMessage({ type: 'forget-stored-content' }, [channel.port2]);
+  });
+}

@@ -27,6 +27,7 @@ export type Fetch = typeof fetch;
 /** Every route the kiosk calls (issue 7 contract), in one place: nothing else calls fetch. */
 export class KioskApi {
   private deviceToken: string | null = null;
+  private unpaired: (() => void) | null = null;
 
   constructor(private readonly fetchImpl: Fetch = (input, init) => fetch(input, init), private readonly origin = '') {}
 
@@ -34,15 +35,27 @@ export class KioskApi {
     this.deviceToken = token;
   }
 
+  /**
+   * `listener` runs when the server refuses the device token (401 or 403): a technician revoked
+   * this kiosk, and no later call will be answered either.
+   */
+  whenUnpaired(listener: (() => void) | null): void {
+    this.unpaired = listener;
+  }
+
   private async send(path: string, init: RequestInit = {}): Promise<Response> {
     const headers = new Headers(init.headers);
-    if (this.deviceToken && !path.startsWith('/api/kiosk/pair/')) headers.set('Authorization', `Bearer ${this.deviceToken}`);
+    const withToken = this.deviceToken !== null && !path.startsWith('/api/kiosk/pair/');
+    if (withToken) headers.set('Authorization', `Bearer ${this.deviceToken}`);
     if (init.body !== undefined) headers.set('Content-Type', 'application/json');
+    let response: Response;
     try {
-      return await this.fetchImpl(`${this.origin}${path}`, { ...init, headers, cache: 'no-store' });
+      response = await this.fetchImpl(`${this.origin}${path}`, { ...init, headers, cache: 'no-store' });
     } catch (error) {
       throw new KioskApiError(0, `${init.method ?? 'GET'} ${path} could not reach the server (${(error as Error).message}).`);
     }
+    if (withToken && (response.status === 401 || response.status === 403)) this.unpaired?.();
+    return response;
   }
 
   private async json<T>(path: string, init: RequestInit = {}, expected: number[] = [200]): Promise<{ status: number; body: T }> {

@@ -1,6 +1,7 @@
 import type { KioskCredential } from '@mantlepiece/shared';
 import { EventOutbox } from '../outbox/event-outbox';
 import { heartbeatBody, sendHeartbeat } from '../outbox/heartbeat';
+import type { ReleaseRefusal } from '../storage/kiosk-db';
 import type { KioskStore } from '../storage/kiosk-store';
 import { syncRelease } from '../sync/release-sync';
 import type { KioskConfig } from './config';
@@ -20,25 +21,31 @@ export interface RuntimeHooks {
   playing: () => number | null;
   /** A release finished downloading and checking. */
   onReleaseReady: () => void;
+  /** After each sync round: the release refused for a bad file and not tried again yet, or null. */
+  onRefusal: (refusal: ReleaseRefusal | null) => void;
 }
 
 /**
  * The paired kiosk's background work: release sync, heartbeats and event uploads, each on its
  * own clock, none of which stops the stories playing when the server is away.
  */
-export function startKioskRuntime(api: KioskApi, store: KioskStore, outbox: EventOutbox, credential: KioskCredential, config: KioskConfig, appVersion: string, hooks: RuntimeHooks): () => void {
+export function startKioskRuntime(api: KioskApi, store: KioskStore, outbox: EventOutbox, credential: KioskCredential, config: KioskConfig, appVersion: string, hooks: RuntimeHooks): () => Promise<void> {
   const controller = new AbortController();
   const startedAt = Date.now();
-  void every(config.manifestPollMs, controller.signal, async () => {
-    const outcome = await syncRelease(api, store, credential);
-    if (outcome.kind === 'ready' || outcome.kind === 'known') hooks.onReleaseReady();
-  });
-  void every(config.heartbeatMs, controller.signal, async () => sendHeartbeat(api, await heartbeatBody(store, hooks.playing(), appVersion, startedAt, Date.now())));
-  void every(config.eventUploadMs, controller.signal, () => outbox.upload(api));
+  const loops = [
+    every(config.manifestPollMs, controller.signal, async () => {
+      const outcome = await syncRelease(api, store, credential).finally(async () => hooks.onRefusal(await store.meta('refusal')));
+      if (outcome.kind === 'ready' || outcome.kind === 'known') hooks.onReleaseReady();
+    }),
+    every(config.heartbeatMs, controller.signal, async () => sendHeartbeat(api, await heartbeatBody(store, hooks.playing(), appVersion, startedAt, Date.now()))),
+    every(config.eventUploadMs, controller.signal, () => outbox.upload(api)),
+  ];
   const uploadNow = () => void outbox.upload(api);
   window.addEventListener('online', uploadNow);
+  // Resolves once no round is running, so nothing writes to storage after the caller's next step.
   return () => {
     controller.abort();
     window.removeEventListener('online', uploadNow);
+    return Promise.all(loops).then(() => undefined);
   };
 }

@@ -3,8 +3,11 @@ import type { KioskVenue } from '../app/kiosk-api';
 import { Multilingual } from '../screens/Multilingual';
 import type { PairingStatus } from './pairing';
 
-/** A kiosk with no credential: the pairing code, very large, and what a technician does with it. */
-export function PairingScreen({ status, venue }: { status: PairingStatus | null; venue: KioskVenue }) {
+/**
+ * A kiosk with no credential: the pairing code, very large, and what a technician does with it;
+ * after a revocation, first that this screen was unpaired.
+ */
+export function PairingScreen({ status, venue, unpairedAt = null }: { status: PairingStatus | null; venue: KioskVenue; unpairedAt?: string | null }) {
   const languages = kioskLanguages(venue.locales);
   const code = status?.kind === 'code' ? status.code.pairingCode : null;
   return (
@@ -13,6 +16,11 @@ export function PairingScreen({ status, venue }: { status: PairingStatus | null;
       <Multilingual languages={languages}>
         {(t, primary) => (primary ? <h1>{t('notPaired.title')}</h1> : <h2>{t('notPaired.title')}</h2>)}
       </Multilingual>
+      {unpairedAt ? (
+        <div role="status" data-unpaired-at={unpairedAt}>
+          <Multilingual languages={languages}>{(t) => <p>{t('pairing.unpaired')}</p>}</Multilingual>
+        </div>
+      ) : null}
       {code ? (
         <figure className="pairing-code">
           <figcaption><Multilingual languages={languages} inline>{(t) => t('pairing.codeLabel')}</Multilingual></figcaption>

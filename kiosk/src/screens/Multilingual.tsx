@@ -9,14 +9,14 @@ import { i18next, type KioskLanguage } from '../app/i18n';
 export function Multilingual({ languages, inline = false, children }: {
   languages: readonly KioskLanguage[];
   inline?: boolean;
-  children: (t: TFunction, primary: boolean) => ReactNode;
+  children: (t: TFunction, primary: boolean, language: KioskLanguage) => ReactNode;
 }) {
   const Line = inline ? 'span' : 'div';
   return (
     <>
       {languages.map((language, index) => (
         <Line key={language} lang={language} className={index === 0 ? 'ml-line ml-primary' : 'ml-line ml-secondary'}>
-          {children(i18next.getFixedT(language), index === 0)}
+          {children(i18next.getFixedT(language), index === 0, language)}
         </Line>
       ))}
     </>

@@ -23,6 +23,21 @@ export interface StoredRelease {
   storedAt: string;
 }
 
+/**
+ * A release refused because a file failed its hash. The same manifest is not downloaded again
+ * until `retryAt`, which moves further out after each refusal; a changed manifest is tried at once.
+ */
+export interface ReleaseRefusal {
+  releaseId: number;
+  /** SHA-256 of the refused manifest: the manifest has changed when this does. */
+  manifestSha256: string;
+  /** The answer's ETag, sent back while backing off so an unchanged publication costs a 304. */
+  etag: string | null;
+  reason: string;
+  attempts: number;
+  retryAt: string;
+}
+
 /** Which releases the kiosk plays, kept and may switch to, and what to tell the next heartbeat. */
 export interface KioskMeta {
   current: number | null;
@@ -36,6 +51,9 @@ export interface KioskMeta {
    * again is refused (issue 11).
    */
   publication: FollowedPublication | null;
+  refusal: ReleaseRefusal | null;
+  /** When a technician's revocation was carried out here; shown on the pairing screen until paired anew. */
+  unpairedAt: string | null;
 }
 
 interface KioskSchema extends DBSchema {

@@ -1,7 +1,7 @@
 import { parseManifest, type KioskCredential } from '@mantlepiece/shared';
 import type { KioskDb, KioskMeta, StoredChunk, StoredFile, StoredRelease } from './kiosk-db';
 
-const EMPTY_META: KioskMeta = { current: null, previous: null, pending: null, manifestEtag: null, lastError: null, publication: null };
+const EMPTY_META: KioskMeta = { current: null, previous: null, pending: null, manifestEtag: null, lastError: null, publication: null, refusal: null, unpairedAt: null };
 
 /** Everything the kiosk keeps between restarts: its credential, releases and their files. */
 export class KioskStore {
@@ -12,7 +12,23 @@ export class KioskStore {
   }
 
   async saveCredential(credential: KioskCredential): Promise<void> {
-    await this.db.put('credential', credential, 'device');
+    const transaction = this.db.transaction(['credential', 'meta'], 'readwrite');
+    await Promise.all([transaction.objectStore('credential').put(credential, 'device'), transaction.objectStore('meta').delete('unpairedAt'), transaction.done]);
+  }
+
+  /**
+   * Forgets everything the pairing gave: the credential, every release and file, the sync state and
+   * the events not yet sent (the server refuses them now). One transaction, so a restart never finds
+   * half of it; only the moment of the unpairing is kept, for the pairing screen.
+   */
+  async forgetPairing(at: Date): Promise<void> {
+    const stores = ['credential', 'files', 'chunks', 'releases', 'meta', 'outbox'] as const;
+    const transaction = this.db.transaction(stores, 'readwrite');
+    await Promise.all([
+      ...stores.map((name) => transaction.objectStore(name).clear()),
+      transaction.objectStore('meta').put(at.toISOString(), 'unpairedAt'),
+      transaction.done,
+    ]);
   }
 
   async meta<K extends keyof KioskMeta>(key: K): Promise<KioskMeta[K]> {

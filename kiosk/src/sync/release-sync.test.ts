@@ -6,7 +6,7 @@ import { fixtureCredential, fixtureRelease, published, sha256Of, venueKey } from
 import { testStore } from '../test-support/test-store';
 import { CHUNK_BYTES } from './file-download';
 import { bootRelease } from './playable-release';
-import { promotePendingRelease, syncRelease } from './release-sync';
+import { promotePendingRelease, REFUSAL_RETRY, syncRelease } from './release-sync';
 
 const key = venueKey();
 const credential = fixtureCredential(key);
@@ -58,6 +58,44 @@ describe('release sync', () => {
     expect(await store.meta('pending')).toBeNull();
     expect((await store.fileHashes()).has(bad)).toBe(false);
     expect((await bootRelease(store, credential.publicKey))?.releaseId).toBe(1);
+  });
+
+  it('backs off after a file fails its hash: no download of the same manifest, even re-signed, until the retry time, which then doubles', async () => {
+    await playRelease(1);
+    server.live = fixtureRelease(key, 2, { imageSeed: 9 });
+    server.tampered.add(server.live.manifest.files[1]!.sha256);
+    const refusedAt = new Date('2030-01-01T12:00:00.000Z');
+    const at = (ms: number) => () => new Date(refusedAt.getTime() + ms);
+    const fileRequests = () => server.requests.filter((request) => request.path.startsWith('/api/kiosk/files/')).length;
+    expect((await syncRelease(api, store, credential, at(0))).kind).toBe('rejected');
+    const firstRetryAt = new Date(refusedAt.getTime() + REFUSAL_RETRY.firstMs).toISOString();
+    expect(await store.meta('lastError')).toMatch(new RegExp(`Not downloaded again before ${firstRetryAt} unless the release changes\\.$`));
+    const downloaded = fileRequests();
+
+    expect(await syncRelease(api, store, credential, at(60_000))).toEqual({ kind: 'backing-off', releaseId: 2, retryAt: firstRetryAt });
+    expect(server.requests.at(-1)!.headers.get('If-None-Match')).toBe(server.live.etag);
+    // The server re-signs the same publication (a new ETag, the same manifest): still nothing downloaded.
+    server.live = published(key, server.live, { sequence: 2, expiresAt: '2099-02-01T00:00:00.000Z' });
+    expect(await syncRelease(api, store, credential, at(120_000))).toEqual({ kind: 'backing-off', releaseId: 2, retryAt: firstRetryAt });
+    expect(await syncRelease(api, store, credential, at(180_000))).toEqual({ kind: 'backing-off', releaseId: 2, retryAt: firstRetryAt });
+    expect(fileRequests()).toBe(downloaded);
+
+    // Past the retry time it is tried once more, and refused again for twice as long.
+    expect((await syncRelease(api, store, credential, at(REFUSAL_RETRY.firstMs))).kind).toBe('rejected');
+    expect(fileRequests()).toBeGreaterThan(downloaded);
+    expect(await store.meta('refusal')).toMatchObject({ attempts: 2, retryAt: new Date(refusedAt.getTime() + 3 * REFUSAL_RETRY.firstMs).toISOString() });
+    expect(await store.meta('current')).toBe(1);
+  });
+
+  it('downloads at once when the manifest changes after a refusal, and forgets the refusal once a release checks', async () => {
+    await playRelease(1);
+    server.live = fixtureRelease(key, 2, { imageSeed: 9 });
+    server.tampered.add(server.live.manifest.files[1]!.sha256);
+    expect((await syncRelease(api, store, credential)).kind).toBe('rejected');
+    server.live = fixtureRelease(key, 3, { imageSeed: 10 });
+    expect(await syncRelease(api, store, credential)).toEqual({ kind: 'ready', releaseId: 3 });
+    expect(await store.meta('refusal')).toBeNull();
+    expect(await store.meta('lastError')).toBeNull();
   });
 
   it('refuses a manifest whose signature does not verify', async () => {

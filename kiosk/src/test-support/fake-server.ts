@@ -20,6 +20,8 @@ export class FakeKioskServer {
   cutAfter = new Map<string, number>();
   /** Files whose served bytes differ from what the manifest says. */
   tampered = new Set<string>();
+  /** A technician revoked the kiosk: every device-token route answers 401, as the server's guard does. */
+  revoked = false;
   pairing: { start: PairStartResponse[]; completes: Array<{ status: number; body?: unknown }> } = { start: [], completes: [] };
   readonly requests: RecordedRequest[] = [];
 
@@ -41,6 +43,7 @@ export class FakeKioskServer {
       const next = this.pairing.completes.shift() ?? { status: 202, body: { status: 'waiting' } };
       return json(next.status, next.body);
     }
+    if (this.revoked && !path.startsWith('/api/kiosk/pair/')) return json(401, { statusCode: 401, message: 'Pair this kiosk to continue.' });
     if (method === 'GET' && path === '/api/kiosk/manifest') {
       if (!this.live) return json(404, { statusCode: 404, message: 'No live release for this gallery' });
       const { etag } = this.live;

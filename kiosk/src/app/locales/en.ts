@@ -11,9 +11,11 @@ export const en = {
     steps: 'For staff: in the studio, open Stations, then this screen’s station, and enter this code there.',
     renew: 'When the code runs out, a new one appears here by itself.',
     unreachable: 'Cannot reach the server to get a pairing code. Trying again.',
+    unpaired: 'This screen was unpaired in the studio. To use it again, pair it with the code below.',
   },
   waiting: {
     body: 'This screen is paired and is waiting for its first release from the studio.',
+    refused: 'Release {{release}} was refused: a file did not match the release’s signed list. It is tried again after {{time}}, or at once when a new release is published.',
   },
   menu: {
     title: 'Choose a story',

@@ -13,9 +13,11 @@ export const es: Translated<KioskMessages> = {
     steps: 'Para el personal: en el estudio, abra Puestos, luego el puesto de esta pantalla, e introduzca allí este código.',
     renew: 'Cuando el código caduque, aparecerá aquí uno nuevo automáticamente.',
     unreachable: 'No se puede conectar con el servidor para obtener un código de emparejamiento. Volviendo a intentarlo.',
+    unpaired: 'Esta pantalla se desemparejó en el estudio. Para volver a usarla, emparéjela con el código de abajo.',
   },
   waiting: {
     body: 'Esta pantalla está emparejada y espera su primera publicación desde el estudio.',
+    refused: 'La publicación {{release}} fue rechazada: un archivo no coincide con la lista firmada de la publicación. Se volverá a intentar después de {{time}}, o en cuanto se publique una nueva.',
   },
   menu: {
     title: 'Elija una historia',
