@@ -45,6 +45,41 @@ export interface WidgetStrings {
     overlays: { streamlines: string; particles: string; arrows: string; none: string };
     ramps: { magma: string; seafloor: string; greys: string };
   };
+  seaFloorDepth: {
+    title: string;
+    instructions: string;
+    ageLabel: string;
+    older: string;
+    younger: string;
+    modelLabel: string;
+    halfSpace: string;
+    plate: string;
+    ridge: string;
+    seaLevel: string;
+    depth: string;
+    heatFlow: string;
+    thickness: string;
+    describe: string;
+  };
+  plateForces: {
+    title: string;
+    instructions: string;
+    ageLabel: string;
+    slabLengthLabel: string;
+    more: string;
+    less: string;
+    ridgePush: string;
+    slabPull: string;
+    perMetre: string;
+    ridge: string;
+    trench: string;
+    resistance: string;
+    caution: string;
+    slabPullDominates: string;
+    ridgePushDominates: string;
+    ratio: string;
+    describe: string;
+  };
   /** A widget's state as a live value shows it inside a sentence ("the block {{state}}"), so in lower case. */
   states: { holds: string; slides: string };
 }

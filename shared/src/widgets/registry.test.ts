@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { checkWidget, describeWidgetTypes, WIDGET_TYPES, widgetJsonSchema, widgetRegistry } from './registry.js';
 
 describe('widget registry', () => {
-  it('lists the slope force box and the convection cell by type', () => {
-    expect(WIDGET_TYPES).toEqual(['slope-force', 'convection-cell']);
+  it('lists the slope force box, the convection cell, sea-floor depth and plate forces by type', () => {
+    expect(WIDGET_TYPES).toEqual(['slope-force', 'convection-cell', 'sea-floor-depth', 'plate-forces']);
     for (const type of WIDGET_TYPES) expect(widgetRegistry[type].type).toBe(type);
   });
 
@@ -19,6 +19,10 @@ describe('widget registry', () => {
     const convection = widgetJsonSchema('convection-cell') as { properties: Record<string, Record<string, unknown>> };
     expect(convection.properties.nx).toMatchObject({ enum: [16, 32, 64, 128, 256, 512] });
     expect(convection.properties.overlay).toMatchObject({ enum: ['streamlines', 'particles', 'arrows', 'none'] });
+  });
+
+  it('gives each type its model card', () => {
+    for (const descriptor of describeWidgetTypes()) expect(descriptor.model).toBe(widgetRegistry[descriptor.type].model);
   });
 
   it('checks params for a type and returns the computed result with any model-limit warnings', () => {
@@ -40,7 +44,7 @@ describe('widget registry', () => {
   it('refuses an unknown type, naming the known ones', () => {
     expect(checkWidget('slab-pull', {})).toEqual({
       ok: false,
-      errors: [{ path: ['type'], message: 'Unknown widget type "slab-pull"; the known types are slope-force, convection-cell.' }],
+      errors: [{ path: ['type'], message: 'Unknown widget type "slab-pull"; the known types are slope-force, convection-cell, sea-floor-depth, plate-forces.' }],
     });
     expect(checkWidget('constructor', {}).ok).toBe(false);
   });

@@ -1,12 +1,16 @@
 import { z } from '../zod.js';
 import { convectionCell } from './convection-cell/index.js';
+import { plateForces } from './plate-forces/index.js';
+import { seaFloorDepth } from './sea-floor-depth/index.js';
 import { slopeForce } from './slope-force/index.js';
-import type { ModelLimitWarning, WidgetIssue, WidgetModule } from './types.js';
+import type { ModelCard, ModelLimitWarning, WidgetIssue, WidgetModule } from './types.js';
 
 /** Every widget a panel can hold, keyed by its type. */
 export const widgetRegistry = {
   [slopeForce.type]: slopeForce,
   [convectionCell.type]: convectionCell,
+  [seaFloorDepth.type]: seaFloorDepth,
+  [plateForces.type]: plateForces,
 } as const;
 
 export type WidgetRegistry = typeof widgetRegistry;
@@ -19,13 +23,14 @@ export const isWidgetType = (type: unknown): type is WidgetType => typeof type =
 export type AnyWidgetModule = WidgetModule<unknown, unknown>;
 export const widgetModule = (type: WidgetType): AnyWidgetModule => widgetRegistry[type] as unknown as AnyWidgetModule;
 
-/** A widget type as the studio's forms need it: JSON Schema of its params (what a curator may type) and defaults. */
+/** A widget type as the studio needs it: JSON Schema of its params (what a curator may type), defaults and its model card. */
 export interface WidgetDescriptor {
   type: WidgetType;
   version: number;
   title: string;
   jsonSchema: Record<string, unknown>;
   defaults: unknown;
+  model: ModelCard;
 }
 
 export function widgetJsonSchema(type: WidgetType): Record<string, unknown> {
@@ -42,6 +47,7 @@ export function describeWidgetTypes(): WidgetDescriptor[] {
       title: typeof jsonSchema.title === 'string' ? jsonSchema.title : type,
       jsonSchema,
       defaults: widgetRegistry[type].defaults,
+      model: widgetRegistry[type].model,
     };
   });
 }

@@ -1,4 +1,5 @@
 import type { z } from '../zod.js';
+import type { WidgetLocale } from '../i18n/index.js';
 import type { LiveValueUnit } from '../panel/live-value/live-value-format.js';
 
 /** One problem with a widget's params: where it is (property names from the params root) and what to do. */
@@ -74,6 +75,33 @@ export interface WidgetParamGroup {
   sources: Readonly<Record<string, string>>;
 }
 
+/** A published work a widget's model rests on. */
+export interface ModelSource {
+  citation: string;
+  /** Left out for works without one (a book chapter, a resolution of the CGPM). */
+  doi?: string;
+}
+
+/** A model card's words in one language; `equations[i]` says in words what the card's i-th equation is. */
+export interface ModelCardWords {
+  summary: string;
+  equations: readonly string[];
+  assumptions: readonly string[];
+  /** Where the model holds; preflight warns (modelLimits) when a widget is set outside it. */
+  range: readonly string[];
+}
+
+/**
+ * What a widget's model is, what it assumes, where it holds and where it comes from: shown to
+ * reviewers beside the settings and, where a curator wants it, to visitors. The equations are
+ * written in symbols, the same in every language; the words come in every UI language.
+ */
+export interface ModelCard {
+  equations: readonly string[];
+  sources: readonly ModelSource[];
+  words: Readonly<Record<WidgetLocale, ModelCardWords>>;
+}
+
 /**
  * Every widget has this shape so the studio form, the kiosk renderer and the server's checks handle
  * any widget the same way.
@@ -90,6 +118,7 @@ export interface WidgetModule<P, R, T extends string = string> {
   describe(params: P, locale: string): string;
   modelLimits(params: P): ModelLimitWarning[];
   outputs: readonly WidgetOutput<P, R>[];
+  model: ModelCard;
   /** The states a live phrase can follow; left out by widgets that have none. */
   states?: WidgetStates<P, R>;
   /** Optional param groups by name, for those whose empty start would not validate. */

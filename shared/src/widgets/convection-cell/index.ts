@@ -1,5 +1,6 @@
 import { formatQuantity, interpolate, widgetStrings } from '../../i18n/index.js';
 import type { ModelLimitWarning, WidgetModule } from '../types.js';
+import { convectionCellModel } from './model-card.js';
 import { formatLimit, validateWith, whenFieldsValid } from '../validation.js';
 import { deriveConvectionCell, type ConvectionCellDerived } from './derived.js';
 import { convectionCellDefaults, convectionCellFields, type ConvectionCellParams } from './params.js';
@@ -9,6 +10,7 @@ import { physicalGroup } from './upper-mantle.js';
 
 export * from './colour-ramps.js';
 export * from './derived.js';
+export * from './model-card.js';
 export * from './outputs.js';
 export * from './params.js';
 export * from './solver.js';
@@ -83,5 +85,6 @@ export const convectionCell: WidgetModule<ConvectionCellParams, ConvectionCellDe
   describe: describeConvectionCell,
   modelLimits: convectionCellLimits,
   outputs: convectionCellOutputs,
+  model: convectionCellModel,
   paramGroups: { physical: physicalGroup },
 };

@@ -1,5 +1,6 @@
 import { interpolate, widgetStrings } from '../../i18n/index.js';
 import type { ModelLimitWarning, WidgetModule } from '../types.js';
+import { slopeForceModel } from './model-card.js';
 import { validateWith } from '../validation.js';
 import { computeSlopeForce, type SlopeForceResult } from './compute.js';
 import { slopeForceOutputs } from './outputs.js';
@@ -8,6 +9,7 @@ import { slopeForceStates } from './states.js';
 import { formatAcceleration, formatAngle, formatForce, formatMass } from './units.js';
 
 export { computeSlopeForce, criticalAngleDeg, type SlopeForceResult } from './compute.js';
+export * from './model-card.js';
 export * from './outputs.js';
 export * from './params.js';
 export * from './states.js';
@@ -61,5 +63,6 @@ export const slopeForce: WidgetModule<SlopeForceParams, SlopeForceResult, 'slope
   describe: describeSlopeForce,
   modelLimits: slopeForceLimits,
   outputs: slopeForceOutputs,
+  model: slopeForceModel,
   states: slopeForceStates,
 };
