@@ -6,6 +6,7 @@ export const ar: WidgetStrings = {
   slopeForce: {
     title: 'صندوق القوى على المنحدر',
     instructions: 'اسحب المنحدر إلى أعلى أو إلى أسفل، أو استخدم مفاتيح الأسهم، لتغيير ميله.',
+    instructionsTouch: 'اسحب المنحدر إلى أعلى أو إلى أسفل بإصبعك لتغيير ميله.',
     angleLabel: 'زاوية المنحدر',
     criticalAngle: 'يبدأ بالانزلاق عند {{angle}}',
     weight: 'الوزن',

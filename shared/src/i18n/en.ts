@@ -6,6 +6,7 @@ export const en: WidgetStrings = {
   slopeForce: {
     title: 'Slope force box',
     instructions: 'Drag the slope up or down, or use the arrow keys, to change its tilt.',
+    instructionsTouch: 'Drag the slope up or down with your finger to change its tilt.',
     angleLabel: 'Slope angle',
     criticalAngle: 'Starts to slide at {{angle}}',
     weight: 'Weight',

@@ -6,6 +6,7 @@ export const es: WidgetStrings = {
   slopeForce: {
     title: 'Caja de fuerzas en la pendiente',
     instructions: 'Arrastre la pendiente hacia arriba o hacia abajo, o use las flechas del teclado, para cambiar su inclinación.',
+    instructionsTouch: 'Arrastre la pendiente hacia arriba o hacia abajo con el dedo para cambiar su inclinación.',
     angleLabel: 'Ángulo de la pendiente',
     criticalAngle: 'Empieza a deslizar a {{angle}}',
     weight: 'Peso',

@@ -6,6 +6,7 @@ export const fr: WidgetStrings = {
   slopeForce: {
     title: 'Bloc sur une pente',
     instructions: 'Faites glisser la pente vers le haut ou vers le bas, ou utilisez les flèches du clavier, pour changer son inclinaison.',
+    instructionsTouch: 'Faites glisser la pente vers le haut ou vers le bas avec le doigt pour changer son inclinaison.',
     angleLabel: 'Angle de la pente',
     criticalAngle: 'Commence à glisser à {{angle}}',
     weight: 'Poids',

@@ -9,6 +9,8 @@ export interface WidgetStrings {
   slopeForce: {
     title: string;
     instructions: string;
+    /** The same for a touchscreen, where there are no arrow keys. */
+    instructionsTouch: string;
     angleLabel: string;
     criticalAngle: string;
     weight: string;
