@@ -151,10 +151,10 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
     // Seeded at 35° with static friction 0.6: steeper than arctan 0.6 ≈ 31.0°, so it slides.
     await expect.poll(() => state.getAttribute('data-state')).toBe('slides');
     const box = (await slider.boundingBox())!;
-    // The drawing is 480 × 330 with the hinge at (60, 290); its free end at 35° is 360 units up the slope.
-    const at = (x: number, y: number) => ({ x: box.x + (x / 480) * box.width, y: box.y + (y / 330) * box.height });
+    // The drawing is 480 × 360 with the hinge at (56, 292); its free end at 35° is 250 units up the slope.
+    const at = (x: number, y: number) => ({ x: box.x + (x / 480) * box.width, y: box.y + (y / 360) * box.height });
     const rad = (deg: number) => (deg * Math.PI) / 180;
-    await touchDrag(screen, at(60 + 360 * Math.cos(rad(35)), 290 - 360 * Math.sin(rad(35))), at(60 + 300 * Math.cos(rad(15)), 290 - 300 * Math.sin(rad(15))));
+    await touchDrag(screen, at(56 + 250 * Math.cos(rad(35)), 292 - 250 * Math.sin(rad(35))), at(56 + 200 * Math.cos(rad(15)), 292 - 200 * Math.sin(rad(15))));
     await expect.poll(async () => Number(await slider.getAttribute('aria-valuenow'))).toBeLessThan(31);
     await expect.poll(() => state.getAttribute('data-state')).toBe('holds');
   });

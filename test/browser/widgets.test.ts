@@ -30,11 +30,11 @@ describe('widget workbench', () => {
     const status = page.getByRole('status').filter({ hasText: /Holds|Slides/ });
     await expect.poll(() => status.textContent()).toMatch(/^■Holds/);
     const box = (await slider.boundingBox())!;
-    // The drawing is 480 × 330 with the slope's hinge at (60, 290) and its free end at 30°, (372, 110).
-    const at = (x: number, y: number) => [box.x + (x / 480) * box.width, box.y + (y / 330) * box.height] as const;
-    await page.mouse.move(...at(372, 110));
+    // The drawing is 480 × 360 with the slope's hinge at (56, 292) and its 250-unit board's free end at 30°, (272.5, 167).
+    const at = (x: number, y: number) => [box.x + (x / 480) * box.width, box.y + (y / 360) * box.height] as const;
+    await page.mouse.move(...at(272.5, 167));
     await page.mouse.down();
-    // 70 units right of the hinge and 260 above it: a tilt of about 75°.
+    // 74 units right of the hinge and 262 above it: a tilt of about 74°.
     await page.mouse.move(...at(130, 30), { steps: 12 });
     await page.mouse.up();
     await expect.poll(async () => Number(await slider.getAttribute('aria-valuenow'))).toBeGreaterThan(40.4);

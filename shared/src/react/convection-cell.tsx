@@ -18,6 +18,7 @@ import { FlashGuard } from './flash-guard.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { useReducedMotion } from './use-reduced-motion.js';
 import { visuallyHidden } from './visually-hidden.js';
+import { widgetButtonStyle, widgetControlRowStyle } from './widget-controls.js';
 
 export interface ConvectionCellProps {
   params: ConvectionCellParams;
@@ -43,7 +44,6 @@ const SHORTEST_DEMAND_INTERVAL_MS = 1000 / 3;
 /** One press of "step" advances as much as half a second of playback would. */
 const FRAMES_PER_DEMANDED_STEP = 30;
 
-const buttonStyle = { minHeight: 44, minWidth: 44, padding: '0 1em' } as const;
 
 /**
  * A box of mantle rock heated from below, overturning: the temperature field in one of our ramps,
@@ -208,20 +208,20 @@ export function ConvectionCell({ params, locale, showCaution = false, reducedMot
       </div>
       <dl style={{ display: 'grid', gridTemplateColumns: 'auto 1fr', gap: '0.2em 1em', margin: '0.5em 0' }}>
         <dt>{scales ? strings.timeMyr : strings.time}</dt>
-        <dd data-readout="time" style={{ margin: 0, fontVariantNumeric: 'tabular-nums' }}>{time}</dd>
+        <dd data-readout="time" style={{ margin: 0, fontVariantNumeric: 'tabular-nums' }}><bdi dir="ltr">{time}</bdi></dd>
         <dt>{strings.nusselt}</dt>
-        <dd data-readout="nusselt" style={{ margin: 0, fontVariantNumeric: 'tabular-nums' }}>{nusselt}</dd>
+        <dd data-readout="nusselt" style={{ margin: 0, fontVariantNumeric: 'tabular-nums' }}><bdi dir="ltr">{nusselt}</bdi></dd>
         <dt>{strings.vrms}</dt>
-        <dd data-readout="vrms" style={{ margin: 0, fontVariantNumeric: 'tabular-nums' }}>{vrms}</dd>
+        <dd data-readout="vrms" style={{ margin: 0, fontVariantNumeric: 'tabular-nums' }}><bdi dir="ltr">{vrms}</bdi></dd>
       </dl>
-      <div style={{ display: 'flex', gap: '0.5em' }}>
+      <div style={widgetControlRowStyle}>
         {reduce ? null : (
-          <button type="button" aria-pressed={!playing} onClick={() => setPlaying((value) => !value)} style={buttonStyle}>
+          <button type="button" aria-pressed={!playing} onClick={() => setPlaying((value) => !value)} style={widgetButtonStyle}>
             {playing ? strings.pause : strings.play}
           </button>
         )}
         {animating ? null : (
-          <button type="button" onClick={stepOnDemand} style={buttonStyle}>
+          <button type="button" onClick={stepOnDemand} style={widgetButtonStyle}>
             {strings.step}
           </button>
         )}

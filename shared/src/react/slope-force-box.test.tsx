@@ -45,19 +45,35 @@ describe('SlopeForceBox', () => {
     expect(slider.getAttribute('aria-valuenow')).toBe('0');
   });
 
-  it('labels each force arrow with its value in newtons, to scale', () => {
+  it('names each force arrow with its value in newtons in the key below the drawing, and the critical angle on the drawing', () => {
     const { container } = render(<SlopeForceBox params={params} locale="en" />);
-    const labels = [...container.querySelectorAll('text')].map((text) => text.textContent);
-    expect(labels).toContain('Weight 98.1\u00a0N');
-    expect(labels).toContain('Presses into slope 77.3\u00a0N');
-    expect(labels).toContain('Pulls down slope 60.4\u00a0N');
-    expect(labels).toContain('Starts to slide at 40.4°');
+    const key = [...container.querySelectorAll('.mp-slope-forces li')].map((item) => item.textContent);
+    // W = m·g0 = 10 kg × 9.80665 m/s² = 98.1 N; N = W·cos 38° = 77.3 N; S = W·sin 38° = 60.4 N (textbook statics, 3 significant digits).
+    expect(key).toEqual(['Weight 98.1\u00a0N', 'Presses into slope 77.3\u00a0N', 'Pulls down slope 60.4\u00a0N', 'Friction 60.4\u00a0N']);
+    const labels = [...container.querySelectorAll('svg text')].map((text) => text.textContent);
+    // arctan 0.85 = 40.36°; numbers are wrapped in left-to-right isolates (U+2066 … U+2069) so they read in order in Arabic too.
+    expect(labels).toContain('Starts to slide at \u206640.4°\u2069');
+    expect(labels).toContain('\u206638°\u2069');
+  });
+
+  it('rounds the critical angle as the live value on its panel does, when the panel shows one', () => {
+    const { container } = render(<SlopeForceBox params={params} locale="en" outputDigits={{ criticalAngleDeg: 2 }} />);
+    expect([...container.querySelectorAll('svg text')].map((text) => text.textContent)).toContain('Starts to slide at \u206640°\u2069');
+  });
+
+  it('tells a kiosk visitor to drag with a finger, not to use arrow keys', () => {
+    render(<SlopeForceBox params={params} locale="en" input="touch" />);
+    expect(screen.getByText('Drag the slope up or down with your finger to change its tilt.')).toBeTruthy();
+    expect(screen.queryByText(/arrow keys/)).toBeNull();
   });
 
   it('in reduced motion, moves a sliding block by steps the visitor asks for, then offers to put it back', () => {
     render(<SlopeForceBox params={{ ...params, angleDeg: 60 }} locale="en" reducedMotion />);
     act(() => screen.getByRole('button', { name: 'Step forward' }).click());
-    expect(screen.getByRole('button', { name: 'Put the block back' })).toBeTruthy();
+    const putBack = screen.getByRole('button', { name: 'Put the block back' });
+    // Kiosk controls: at least 64 CSS px once the kiosk scales a panel down (96 at full size). Their text follows the panel's size (the kiosk browser test measures it).
+    expect(putBack.style.minHeight).toBe('96px');
+    expect(putBack.style.minWidth).toBe('96px');
   });
 
   it('speaks French and shows the caution when asked', () => {

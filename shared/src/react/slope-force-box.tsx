@@ -1,9 +1,13 @@
 import { useCallback, useEffect, useId, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import { interpolate, widgetStrings } from '../i18n/index.js';
-import { computeSlopeForce, formatAngle, formatForce, slopeForce, type SlopeForceParams } from '../widgets/slope-force/index.js';
+import { formatLiveValue } from '../panel/live-value/live-value-format.js';
+import { directionOf } from '../panel/panel-presentation.js';
+import { computeSlopeForce, formatAngle, formatForce, slopeForce, slopeForceOutputs, type SlopeForceParams, type SlopeForceResult } from '../widgets/slope-force/index.js';
 import { SimulationCaution } from './simulation-caution.js';
+import { BOARD, FOOT, LABEL_FONT, layoutSlope, PIVOT, SLOPE_PALETTE, SLOPE_VIEW, START, type ForceName, type LabelLayout, type Point } from './slope-force-layout.js';
 import { useReducedMotion } from './use-reduced-motion.js';
 import { visuallyHidden } from './visually-hidden.js';
+import { widgetButtonStyle, widgetControlRowStyle, type WidgetInput } from './widget-controls.js';
 
 export interface SlopeForceBoxProps {
   params: SlopeForceParams;
@@ -16,55 +20,53 @@ export interface SlopeForceBoxProps {
   reducedMotion?: boolean;
   /** Largest drawn width in CSS px; the drawing scales down to fit. */
   maxWidth?: number;
+  /** How the visitor moves it, for the instructions: a finger on a kiosk. */
+  input?: WidgetInput;
+  /** Significant digits of the live values on the same panel, by output name, so drawing and caption round alike. */
+  outputDigits?: Readonly<Record<string, number>>;
 }
 
-const VIEW = { width: 480, height: 330 };
-const PIVOT = { x: 60, y: 290 };
-const BOARD = 360;
-const BLOCK = 48;
-/** The drawn board stands for 3 m, so a sliding block crosses it in about a second at typical accelerations. */
+/** The drawing's world units per metre: the board stands for 3 m, so a sliding block crosses it in about a second. */
 const PIXELS_PER_METRE = BOARD / 3;
-const START = BOARD * 0.62;
-const BOTTOM = BLOCK / 2 + 4;
-/** Longest drawn force arrow, for the weight; the components are drawn to the same scale. */
-const WEIGHT_ARROW = 110;
 /** A reduced-motion step shows where the block is a quarter of a second later. */
 const REDUCED_MOTION_STEP_S = 0.25;
 const DEG = Math.PI / 180;
+const FORCES = ['weight', 'normal', 'shear', 'friction'] as const satisfies readonly ForceName[];
+const FORCE_OUTPUT = { weight: 'weightN', normal: 'normalN', shear: 'shearN', friction: 'frictionN' } as const satisfies Record<ForceName, keyof SlopeForceResult>;
+/** The weight solid, its two parts dashed, friction dotted: told apart by more than colour. */
+const FORCE_DASH: Record<ForceName, string | undefined> = { weight: undefined, normal: '10 6', shear: '10 6', friction: '2 5' };
 
-const COLOURS = { weight: '#2f3a44', normal: '#1b5e8c', shear: '#b3470c', friction: '#4f5d1f', board: '#6b5a45', block: '#8a9199' };
+/** Left to right whatever the language around it, so "562 N" and "38.7°" never come out reversed. */
+const isolated = (text: string) => `\u2066${text}\u2069`;
 
-interface Point {
-  x: number;
-  y: number;
-}
+const points = (list: Point[]) => list.map((p) => `${p.x},${p.y}`).join(' ');
 
-const along = (from: Point, direction: Point, length: number): Point => ({ x: from.x + direction.x * length, y: from.y + direction.y * length });
-
-function Arrow({ from, direction, length, colour, label }: { from: Point; direction: Point; length: number; colour: string; label: string }) {
+function ArrowShape({ from, to, colour, dash, width = 4 }: { from: Point; to: Point; colour: string; dash?: string; width?: number }) {
+  const length = Math.hypot(to.x - from.x, to.y - from.y);
   if (length < 1) return null;
-  const tip = along(from, direction, length);
-  const head = 9;
+  const direction = { x: (to.x - from.x) / length, y: (to.y - from.y) / length };
+  const head = Math.min(10, length);
   const normal = { x: -direction.y, y: direction.x };
-  const back = along(tip, direction, -head);
-  const points = [tip, along(back, normal, head / 2), along(back, normal, -head / 2)].map((p) => `${p.x},${p.y}`).join(' ');
-  const labelAt = along(tip, direction, 14);
+  const back = { x: to.x - direction.x * head, y: to.y - direction.y * head };
+  const tip = [to, { x: back.x + (normal.x * head) / 2, y: back.y + (normal.y * head) / 2 }, { x: back.x - (normal.x * head) / 2, y: back.y - (normal.y * head) / 2 }];
   return (
     <g>
-      <line x1={from.x} y1={from.y} x2={back.x} y2={back.y} stroke={colour} strokeWidth={4} strokeLinecap="round" />
-      <polygon points={points} fill={colour} />
-      <text x={labelAt.x} y={labelAt.y} fill={colour} fontSize={13} fontWeight={600} textAnchor={direction.x < -0.3 ? 'end' : direction.x > 0.3 ? 'start' : 'middle'} dominantBaseline="middle" paintOrder="stroke" stroke="#fffdf7" strokeWidth={4}>
-        {label}
-      </text>
+      {/* A light casing under each arrow, so it stands out from the board, the block and the ground alike. */}
+      <line x1={from.x} y1={from.y} x2={back.x} y2={back.y} stroke={SLOPE_PALETTE.casing} strokeWidth={width + 4} strokeLinecap="round" />
+      <polygon points={points(tip)} fill={SLOPE_PALETTE.casing} stroke={SLOPE_PALETTE.casing} strokeWidth={4} strokeLinejoin="round" />
+      <line x1={from.x} y1={from.y} x2={back.x} y2={back.y} stroke={colour} strokeWidth={width} strokeDasharray={dash} />
+      <polygon points={points(tip)} fill={colour} />
     </g>
   );
 }
 
 /**
  * A block on a tilting slope: its weight split into the part pressing into the slope and the part
- * pulling it down, against friction. Tilt it by dragging (mouse or touch) or with the arrow keys.
+ * pulling it down, against friction. Tilt it by dragging (finger or mouse) or with the arrow keys.
+ * The forces are named, with their values, in a key below the drawing, where the words can wrap
+ * and grow with the panel's text; the drawing keeps only the angle and the critical angle.
  */
-export function SlopeForceBox({ params, locale, onParamsChange, showCaution = false, reducedMotion, maxWidth = 560 }: SlopeForceBoxProps) {
+export function SlopeForceBox({ params, locale, onParamsChange, showCaution = false, reducedMotion, maxWidth = 560, input = 'desk', outputDigits = {} }: SlopeForceBoxProps) {
   const strings = widgetStrings(locale).slopeForce;
   const reduce = useReducedMotion(reducedMotion);
   const [angle, setAngle] = useState(params.angleDeg);
@@ -73,7 +75,7 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
   const positionRef = useRef(START);
   const velocity = useRef(0);
   const moveTo = (next: number) => {
-    positionRef.current = Math.max(BOTTOM, next);
+    positionRef.current = Math.max(FOOT, next);
     setPosition(positionRef.current);
   };
   const descriptionId = useId();
@@ -99,9 +101,9 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
     if (!slides) velocity.current = 0;
   }, [slides]);
 
-  const atBottom = position <= BOTTOM;
+  const atFoot = position <= FOOT;
   useEffect(() => {
-    if (!slides || reduce || atBottom) return undefined;
+    if (!slides || reduce || atFoot) return undefined;
     let frame = 0;
     let last: number | undefined;
     const tick = (now: number) => {
@@ -109,11 +111,11 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
       last = now;
       velocity.current += accelerationMs2 * PIXELS_PER_METRE * dt;
       moveTo(positionRef.current - velocity.current * dt);
-      if (positionRef.current > BOTTOM) frame = requestAnimationFrame(tick);
+      if (positionRef.current > FOOT) frame = requestAnimationFrame(tick);
     };
     frame = requestAnimationFrame(tick);
     return () => cancelAnimationFrame(frame);
-  }, [slides, reduce, accelerationMs2, atBottom]);
+  }, [slides, reduce, accelerationMs2, atFoot]);
 
   const stepForward = () => {
     const a = accelerationMs2 * PIXELS_PER_METRE;
@@ -130,8 +132,8 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
   const angleFromPointer = (event: PointerEvent<SVGSVGElement>) => {
     const box = event.currentTarget.getBoundingClientRect();
     if (box.width === 0 || box.height === 0) return;
-    const x = ((event.clientX - box.left) / box.width) * VIEW.width;
-    const y = ((event.clientY - box.top) / box.height) * VIEW.height;
+    const x = ((event.clientX - box.left) / box.width) * SLOPE_VIEW.width;
+    const y = ((event.clientY - box.top) / box.height) * SLOPE_VIEW.height;
     changeAngle(Math.atan2(PIVOT.y - y, Math.max(x - PIVOT.x, 0)) / DEG);
   };
 
@@ -162,82 +164,101 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
     changeAngle(next);
   };
 
+  // One formatter for the drawing and the live values beside it: a value a caption shows rounds as the caption does.
+  const shown = (output: keyof SlopeForceResult, value: number, own: (value: number, locale: string) => string) => {
+    const digits = outputDigits[output];
+    const declared = slopeForceOutputs.find((candidate) => candidate.name === output);
+    const unit = declared?.kind === 'number' ? declared.unit : undefined;
+    return digits !== undefined && unit !== undefined ? formatLiveValue(value, { digits, unit }, locale) : own(value, locale);
+  };
+  const angleText = formatAngle(angle, locale);
+  const criticalText = interpolate(strings.criticalAngle, { angle: isolated(shown('criticalAngleDeg', result.criticalAngleDeg, formatAngle)) });
+  const layout = layoutSlope({ angleDeg: angle, position, result, angleText, criticalText });
+  const dir = directionOf(locale);
+  const anchor = (label: LabelLayout) => ({
+    x: label.edge === 'left' ? label.box.x : label.box.x + label.box.width,
+    y: label.box.y + label.box.height / 2,
+    // SVG anchors by the text's own direction: in Arabic its start is on the right.
+    textAnchor: (label.edge === 'left') === (dir === 'ltr') ? ('start' as const) : ('end' as const),
+  });
+  const { pivot, boardEnd, arc, criticalLine, handle } = layout;
   const cos = Math.cos(angle * DEG);
   const sin = Math.sin(angle * DEG);
-  const uphill = { x: cos, y: -sin };
-  const downhill = { x: -cos, y: sin };
-  const intoSlope = { x: sin, y: cos };
-  const outOfSlope = { x: -sin, y: -cos };
-  const end = along(PIVOT, uphill, BOARD);
-  const contact = along(PIVOT, uphill, position);
-  const centre = along(contact, outOfSlope, BLOCK / 2);
-  const scale = WEIGHT_ARROW / result.weightN;
-  const arc = 56;
-  const critical = result.criticalAngleDeg;
-  const criticalEnd = along(PIVOT, { x: Math.cos(critical * DEG), y: -Math.sin(critical * DEG) }, BOARD * 0.85);
   const stateText = slides ? strings.slides : strings.holds;
   const description = slopeForce.describe(current, locale);
 
   return (
     <figure className="mp-slope-force-box" style={{ margin: 0, maxWidth }}>
       <svg
-        viewBox={`0 0 ${VIEW.width} ${VIEW.height}`}
+        viewBox={`0 0 ${SLOPE_VIEW.width} ${SLOPE_VIEW.height}`}
         role="slider"
         tabIndex={0}
         aria-label={`${strings.title}: ${strings.angleLabel}`}
         aria-valuemin={0}
         aria-valuemax={90}
         aria-valuenow={angle}
-        aria-valuetext={`${formatAngle(angle, locale)}, ${stateText}`}
+        aria-valuetext={`${angleText}, ${stateText}`}
         aria-describedby={`${statusId} ${descriptionId}`}
         onPointerDown={onPointerDown}
         onPointerMove={onPointerMove}
         onKeyDown={onKeyDown}
-        style={{ width: '100%', aspectRatio: `${VIEW.width} / ${VIEW.height}`, touchAction: 'none', cursor: 'grab', display: 'block', background: '#f6efe2', borderRadius: 8 }}
+        style={{ width: '100%', aspectRatio: `${SLOPE_VIEW.width} / ${SLOPE_VIEW.height}`, touchAction: 'none', cursor: 'grab', display: 'block', background: SLOPE_PALETTE.background, borderRadius: 8 }}
       >
         <title>{strings.title}</title>
-        <line x1={20} y1={PIVOT.y} x2={VIEW.width - 20} y2={PIVOT.y} stroke="#4a4a4a" strokeWidth={2} />
-        <polygon points={`${PIVOT.x},${PIVOT.y} ${end.x},${end.y} ${end.x},${PIVOT.y}`} fill="#e4d6bd" />
-        <line x1={PIVOT.x} y1={PIVOT.y} x2={criticalEnd.x} y2={criticalEnd.y} stroke="#4a4a4a" strokeWidth={1.5} strokeDasharray="6 5" />
-        <text x={criticalEnd.x + 6} y={criticalEnd.y - 6} fontSize={12} fill="#3a3a3a">
-          {interpolate(strings.criticalAngle, { angle: formatAngle(critical, locale) })}
+        <line x1={12} y1={pivot.y} x2={SLOPE_VIEW.width - 12} y2={pivot.y} stroke={SLOPE_PALETTE.ink} strokeWidth={2} />
+        <polygon points={points([pivot, boardEnd, { x: boardEnd.x, y: pivot.y }])} fill={SLOPE_PALETTE.wedge} />
+        <line x1={criticalLine.from.x} y1={criticalLine.from.y} x2={criticalLine.to.x} y2={criticalLine.to.y} stroke={SLOPE_PALETTE.ink} strokeWidth={1.5} strokeDasharray="6 5" />
+        <line x1={pivot.x} y1={pivot.y} x2={boardEnd.x} y2={boardEnd.y} stroke={SLOPE_PALETTE.board} strokeWidth={8} strokeLinecap="round" />
+        <path d={`M ${pivot.x + arc.radius} ${pivot.y} A ${arc.radius} ${arc.radius} 0 0 0 ${pivot.x + arc.radius * cos} ${pivot.y - arc.radius * sin}`} fill="none" stroke={SLOPE_PALETTE.ink} strokeWidth={2} />
+        <polygon points={points(layout.block)} fill={SLOPE_PALETTE.block} stroke={SLOPE_PALETTE.ink} strokeWidth={2} strokeLinejoin="round" />
+        {layout.arrows.map((arrow) => <ArrowShape key={arrow.force} from={arrow.from} to={arrow.to} colour={SLOPE_PALETTE.arrows[arrow.force]} dash={FORCE_DASH[arrow.force]} />)}
+        <text {...anchor(layout.angleLabel)} fontSize={LABEL_FONT.angle} fontWeight={700} fill={SLOPE_PALETTE.ink} dominantBaseline="middle">
+          {isolated(angleText)}
         </text>
-        <line x1={PIVOT.x} y1={PIVOT.y} x2={end.x} y2={end.y} stroke={COLOURS.board} strokeWidth={8} strokeLinecap="round" />
-        <path d={`M ${PIVOT.x + arc} ${PIVOT.y} A ${arc} ${arc} 0 0 0 ${PIVOT.x + arc * cos} ${PIVOT.y - arc * sin}`} fill="none" stroke="#3a3a3a" strokeWidth={2} />
-        <text x={PIVOT.x + (arc + 22) * Math.cos((angle / 2) * DEG)} y={PIVOT.y - (arc + 12) * Math.sin((angle / 2) * DEG)} fontSize={15} fontWeight={700} fill="#222" dominantBaseline="middle">
-          {formatAngle(angle, locale)}
-        </text>
-        <g transform={`rotate(${-angle} ${contact.x} ${contact.y})`}>
-          <rect x={contact.x - BLOCK / 2} y={contact.y - BLOCK} width={BLOCK} height={BLOCK} rx={4} fill={COLOURS.block} stroke="#2f3a44" strokeWidth={2} />
+        <g>
+          <line x1={layout.criticalKey.from.x} y1={layout.criticalKey.from.y} x2={layout.criticalKey.to.x} y2={layout.criticalKey.to.y} stroke={SLOPE_PALETTE.ink} strokeWidth={1.5} strokeDasharray="6 5" />
+          <text {...anchor(layout.criticalLabel)} direction={dir} fontSize={LABEL_FONT.critical} fill={SLOPE_PALETTE.ink} dominantBaseline="middle">
+            {criticalText}
+          </text>
         </g>
-        <Arrow from={centre} direction={{ x: 0, y: 1 }} length={result.weightN * scale} colour={COLOURS.weight} label={`${strings.weight} ${formatForce(result.weightN, locale)}`} />
-        <Arrow from={centre} direction={intoSlope} length={result.normalN * scale} colour={COLOURS.normal} label={`${strings.normal} ${formatForce(result.normalN, locale)}`} />
-        <Arrow from={centre} direction={downhill} length={result.shearN * scale} colour={COLOURS.shear} label={`${strings.shear} ${formatForce(result.shearN, locale)}`} />
-        <Arrow from={contact} direction={uphill} length={result.frictionN * scale} colour={COLOURS.friction} label={`${strings.friction} ${formatForce(result.frictionN, locale)}`} />
-        <circle cx={end.x} cy={end.y} r={20} fill="#fffdf7" stroke={COLOURS.board} strokeWidth={3} />
-        <path d={`M ${end.x - 7} ${end.y - 3} L ${end.x} ${end.y - 10} L ${end.x + 7} ${end.y - 3} M ${end.x - 7} ${end.y + 3} L ${end.x} ${end.y + 10} L ${end.x + 7} ${end.y + 3}`} stroke={COLOURS.board} strokeWidth={2.5} fill="none" />
+        <circle cx={handle.centre.x} cy={handle.centre.y} r={handle.radius} fill={SLOPE_PALETTE.casing} stroke={SLOPE_PALETTE.board} strokeWidth={3} />
+        <path d={`M ${boardEnd.x - 7} ${boardEnd.y - 3} L ${boardEnd.x} ${boardEnd.y - 10} L ${boardEnd.x + 7} ${boardEnd.y - 3} M ${boardEnd.x - 7} ${boardEnd.y + 3} L ${boardEnd.x} ${boardEnd.y + 10} L ${boardEnd.x + 7} ${boardEnd.y + 3}`} stroke={SLOPE_PALETTE.board} strokeWidth={2.5} fill="none" />
       </svg>
-      <p id={statusId} role="status" data-state={slides ? 'slides' : 'holds'} style={{ display: 'flex', alignItems: 'center', gap: '0.5em', fontWeight: 700, fontSize: '1.15em', margin: '0.5em 0' }}>
-        <span aria-hidden="true" style={{ fontSize: '1.2em' }}>{slides ? '↘' : '■'}</span>
+      <p id={statusId} role="status" data-state={slides ? 'slides' : 'holds'} style={{ display: 'flex', flexWrap: 'wrap', alignItems: 'baseline', gap: '0 0.5em', fontWeight: 700, fontSize: '1.1em', margin: '0.4em 0' }}>
+        <span aria-hidden="true">{slides ? '↘' : '■'}</span>
         <span>{stateText}</span>
-        <span style={{ fontWeight: 400 }}>{slides ? strings.slidesDetail : strings.holdsDetail}</span>
+        <span style={{ fontWeight: 400, fontSize: '0.85em' }}>{slides ? strings.slidesDetail : strings.holdsDetail}</span>
       </p>
-      <figcaption style={{ fontSize: '0.9em' }}>{strings.instructions}</figcaption>
+      <ul className="mp-slope-forces" style={{ listStyle: 'none', margin: '0.3em 0', padding: 0, display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(12em, 1fr))', gap: '0.2em 1em', fontSize: '0.85em' }}>
+        {FORCES.map((force) => (
+          <li key={force} data-force={force} style={{ display: 'flex', alignItems: 'center', gap: '0.4em' }}>
+            <svg viewBox="0 0 48 20" aria-hidden="true" style={{ width: '2.4em', height: '1em', flex: 'none', background: SLOPE_PALETTE.background, borderRadius: 4 }}>
+              <ArrowShape from={{ x: 6, y: 10 }} to={{ x: 44, y: 10 }} colour={SLOPE_PALETTE.arrows[force]} dash={FORCE_DASH[force]} width={3} />
+            </svg>
+            <span>
+              {strings[force]} <bdi dir="ltr" style={{ fontWeight: 700, whiteSpace: 'nowrap' }}>{shown(FORCE_OUTPUT[force], result[FORCE_OUTPUT[force]], formatForce)}</bdi>
+            </span>
+          </li>
+        ))}
+      </ul>
+      <figcaption style={{ fontSize: '0.85em' }}>{input === 'touch' ? strings.instructionsTouch : strings.instructions}</figcaption>
       <p id={descriptionId} style={visuallyHidden}>
         {description}
       </p>
-      <div style={{ display: 'flex', gap: '0.5em', marginTop: '0.5em' }}>
-        {reduce && slides && !atBottom ? (
-          <button type="button" onClick={stepForward} style={{ minHeight: 44, minWidth: 44 }}>
-            {strings.step}
-          </button>
-        ) : null}
-        {position < START ? (
-          <button type="button" onClick={reset} style={{ minHeight: 44, minWidth: 44 }}>
-            {strings.reset}
-          </button>
-        ) : null}
-      </div>
+      {(reduce && slides && !atFoot) || position < START ? (
+        <div style={widgetControlRowStyle}>
+          {reduce && slides && !atFoot ? (
+            <button type="button" onClick={stepForward} style={widgetButtonStyle}>
+              {strings.step}
+            </button>
+          ) : null}
+          {position < START ? (
+            <button type="button" onClick={reset} style={widgetButtonStyle}>
+              {strings.reset}
+            </button>
+          ) : null}
+        </div>
+      ) : null}
       {showCaution ? <SimulationCaution locale={locale} /> : null}
     </figure>
   );
