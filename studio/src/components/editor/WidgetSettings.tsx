@@ -1,8 +1,9 @@
-import { makeStyles, MessageBar, MessageBarBody, Text, tokens } from '@fluentui/react-components';
+import { Accordion, AccordionHeader, AccordionItem, AccordionPanel, makeStyles, MessageBar, MessageBarBody, Text, tokens } from '@fluentui/react-components';
 import type { Editor } from '@tiptap/react';
 import { isWidgetType, widgetModule, type PanelWidgetRef } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { WidgetParamsForm } from '../widget-params/WidgetParamsForm';
+import { WidgetModelCard } from '../widget-model/WidgetModelCard';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
@@ -31,6 +32,14 @@ export function WidgetSettings({ editor, widget }: { editor: Editor; widget: Pan
         <MessageBar key={warning.code} intent="warning" layout="multiline"><MessageBarBody>{warning.message}</MessageBarBody></MessageBar>
       ))}
       {checked.ok ? <Text size={200}>{module.describe(checked.params, i18n.resolvedLanguage ?? 'en')}</Text> : null}
+      <Accordion collapsible>
+        <AccordionItem value="model">
+          <AccordionHeader as="h3">{t('modelCard.title')}</AccordionHeader>
+          <AccordionPanel>
+            <WidgetModelCard widgetType={widget.widgetType} headingLevel={3} />
+          </AccordionPanel>
+        </AccordionItem>
+      </Accordion>
     </section>
   );
 }

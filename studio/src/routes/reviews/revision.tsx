@@ -20,6 +20,7 @@ import { PanelComparison } from '../../components/review/PanelComparison';
 import { groupPreflight } from '../../components/review/preflight-groups';
 import { PreflightList } from '../../components/review/PreflightList';
 import { useReviewStyles } from '../../components/review/review-styles';
+import { RevisionModelCards } from '../../components/review/RevisionModelCards';
 import { RevisionStateBadge } from '../../components/review/RevisionStateBadge';
 import { VerdictForm } from '../../components/review/VerdictForm';
 import { VerdictHistory } from '../../components/review/VerdictHistory';
@@ -164,6 +165,8 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
           ))}
         </div>
       )}
+
+      <RevisionModelCards snapshot={revision.snapshot} />
 
       <section className={shared.card} aria-labelledby="general-comments-heading">
         <Text as="h2" id="general-comments-heading" size={500} weight="semibold" className={shared.heading}>{t('comments.onRevision')}</Text>
