@@ -1,14 +1,26 @@
+import type { CSSProperties } from 'react';
 import type { TFunction } from 'i18next';
 import type { PlayableRelease } from '../sync/playable-release';
+import { menuGrid } from './menu-grid';
 import { storyImage, storyTitle } from './release-content';
 
-/** Every story of the release as a large card, titled in the visitor's language. */
+/** Every story of the release as a large card, titled in the visitor's language, the cards sharing out the whole screen. */
 export function StoryMenu({ t, release, locale, onOpen }: { t: TFunction; release: PlayableRelease; locale: string; onOpen: (storyId: number) => void }) {
   const { manifest } = release;
+  const count = manifest.stories.length;
+  const landscape = menuGrid(count, 'landscape');
+  const portrait = menuGrid(count, 'portrait');
+  // The stylesheet picks the pair for the screen's orientation.
+  const grid = {
+    '--menu-columns-landscape': landscape.columns,
+    '--menu-rows-landscape': landscape.rows,
+    '--menu-columns-portrait': portrait.columns,
+    '--menu-rows-portrait': portrait.rows,
+  } as CSSProperties;
   return (
     <main className="menu">
       <h1>{t('menu.title')}</h1>
-      <ul className="story-cards">
+      <ul className="story-cards" style={grid}>
         {manifest.stories.map((story) => {
           const title = storyTitle(story, locale, manifest);
           const imageId = storyImage(story, manifest);

@@ -5,6 +5,7 @@ import { PanelFrame, PanelView } from '@mantlepiece/shared/react';
 import type { VisitorEvent } from '../outbox/event-outbox';
 import type { PlayableRelease } from '../sync/playable-release';
 import { mediaResolver, panelDoc, panelsInOrder } from './release-content';
+import { Chevron } from './Chevron';
 import type { VisitorSettings } from './visitor-settings';
 import { WidgetTouches } from './widget-touches';
 
@@ -81,13 +82,13 @@ export function StoryScreen({ t, release, story, settings, reducedMotion, panelI
     <main className="story" dir={dir} lang={settings.locale}>
       <div className="story-top">
         <button type="button" className="chip back-to-menu" onClick={onExit}>
-          <span className="arrow" aria-hidden="true">‹</span> {t('story.allStories')}
+          <Chevron towards="back" /> {t('story.allStories')}
         </button>
         <span className="position" aria-live="polite">{t('story.position', { current: panelIndex + 1, total: panels.length })}</span>
       </div>
       <div className="story-body">
         <button type="button" className="turn" onClick={() => go(-1)} disabled={panelIndex === 0} aria-label={t('story.previous')}>
-          <span className="arrow" aria-hidden="true">‹</span>
+          <Chevron towards="back" />
         </button>
         <div ref={stage} className="stage" onPointerDown={onPointerDown} onPointerUp={onPointerUp} onPointerCancel={() => { touches?.gestureEnded(); swipe.current = null; }}>
           {shown ? (
@@ -109,7 +110,7 @@ export function StoryScreen({ t, release, story, settings, reducedMotion, panelI
           ) : null}
         </div>
         <button type="button" className="turn" onClick={() => go(1)} disabled={panelIndex >= panels.length - 1} aria-label={t('story.next')}>
-          <span className="arrow" aria-hidden="true">›</span>
+          <Chevron towards="forward" />
         </button>
       </div>
       <ol className="dots" aria-hidden="true">

@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useLayoutEffect, useMemo, useRef, useState, type RefObject } from 'react';
 import { readPanelWidgets } from '../../panel/live-value/live-value-reading.js';
 import { PANEL_IMAGE_NODE, WIDGET_NODE, type PanelDocJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
 import { directionOf, PANEL_LAYOUTS, type PanelLayout, type TextDirection } from '../../panel/panel-presentation.js';
@@ -41,6 +41,45 @@ function usePerWidget<T>(doc: PanelDocJSON) {
 }
 
 /**
+ * Whether a scrolling panel has more below what shows: watched on scroll and whenever the panel or
+ * anything in it changes size (a picture arriving, a widget growing, larger text).
+ */
+function useMoreBelow(scroller: RefObject<HTMLElement | null>, doc: PanelDocJSON): boolean {
+  const [more, setMore] = useState(false);
+  useLayoutEffect(() => {
+    const element = scroller.current;
+    if (!element) return undefined;
+    const check = () => setMore(element.scrollHeight - element.scrollTop - element.clientHeight > 2);
+    check();
+    element.addEventListener('scroll', check, { passive: true });
+    const observer = typeof ResizeObserver === 'undefined' ? null : new ResizeObserver(check);
+    observer?.observe(element);
+    for (const child of element.children) observer?.observe(child);
+    return () => {
+      element.removeEventListener('scroll', check);
+      observer?.disconnect();
+    };
+  }, [scroller, doc]);
+  return more;
+}
+
+/**
+ * The cue that a panel goes on below the screen's edge: the words fade out and a down arrow sits at
+ * the foot, until the visitor has scrolled to the end. Drawn only, as the scrolling itself is what a
+ * screen reader follows.
+ */
+function MoreBelowCue() {
+  return (
+    <div className="mp-more-below" aria-hidden="true" style={{ position: 'sticky', bottom: 0, height: 0, pointerEvents: 'none' }}>
+      <div style={{ position: 'absolute', insetInline: '-2em', bottom: '-1em', height: '4.5em', background: 'linear-gradient(to bottom, transparent, var(--mp-surface) 70%)' }} />
+      <svg viewBox="0 0 24 24" style={{ position: 'absolute', left: '50%', bottom: '-0.6em', width: '2.6em', height: '2.6em', marginLeft: '-1.3em', borderRadius: '50%', background: 'var(--mp-control-surface)', color: 'var(--mp-control-text)', border: '3px solid var(--mp-control-border)' }}>
+        <path d="M6 9 L12 15 L18 9" fill="none" stroke="currentColor" strokeWidth={2.5} strokeLinecap="round" strokeLinejoin="round" />
+      </svg>
+    </div>
+  );
+}
+
+/**
  * A panel as a gallery screen draws it: the Tiptap JSON walked into React elements, with no editor
  * and no raw HTML. Widgets stay live under touch, and live values follow what the visitor sets.
  */
@@ -58,6 +97,8 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
     [setVisitorParams, onVisitorParamsChange],
   );
 
+  const scroller = useRef<HTMLElement>(null);
+  const moreBelow = useMoreBelow(scroller, doc);
   const { width, height } = PANEL_LAYOUTS[layout];
   const context: PanelRenderContext = {
     locale,
@@ -73,6 +114,7 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
   };
   return (
     <article
+      ref={scroller}
       className="mp-panel"
       lang={locale}
       dir={dir ?? directionOf(locale)}
@@ -80,9 +122,11 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
       data-large-text={largeText || undefined}
       data-high-contrast={highContrast || undefined}
       data-reduced-motion={reducedMotion || undefined}
+      data-more-below={moreBelow || undefined}
       style={panelRootStyle(layout, width, height, largeText, highContrast)}
     >
       {layout === 'landscape' ? <LandscapeColumns doc={doc} context={context} /> : renderPanelNode(doc, context, 0)}
+      {moreBelow ? <MoreBelowCue /> : null}
     </article>
   );
 }

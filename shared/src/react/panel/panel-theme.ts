@@ -5,8 +5,8 @@ import type { CSSProperties } from 'react';
  * high-contrast pair. Text pairs stay well above WCAG 2.2 AA's 4.5:1 (basalt on sand is about 12:1).
  */
 export const PANEL_COLOURS = {
-  standard: { surface: '#f4ebdd', text: '#24282c', heading: '#0b3f5c', link: '#0a5479', liveValue: '#8a3412' },
-  highContrast: { surface: '#000000', text: '#ffffff', heading: '#ffffff', link: '#ffe16b', liveValue: '#ffe16b' },
+  standard: { surface: '#f4ebdd', text: '#24282c', heading: '#0b3f5c', link: '#0a5479', liveValue: '#8a3412', control: '#0b3f5c', controlText: '#ffffff', controlBorder: '#0b3f5c' },
+  highContrast: { surface: '#000000', text: '#ffffff', heading: '#ffffff', link: '#ffe16b', liveValue: '#ffe16b', control: '#ffe16b', controlText: '#000000', controlBorder: '#ffffff' },
 } as const;
 
 /** Body text size in CSS px at the station's full size; large text is the visitor's switch. */
@@ -31,6 +31,10 @@ export function panelRootStyle(layout: keyof typeof BODY_SIZE, width: number, he
     ['--mp-heading' as string]: colours.heading,
     ['--mp-link' as string]: colours.link,
     ['--mp-live-value' as string]: colours.liveValue,
+    ['--mp-surface' as string]: colours.surface,
+    ['--mp-control-surface' as string]: colours.control,
+    ['--mp-control-text' as string]: colours.controlText,
+    ['--mp-control-border' as string]: colours.controlBorder,
   };
 }
 
