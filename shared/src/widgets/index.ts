@@ -1,6 +1,7 @@
 export * from './types.js';
 export * from './validation.js';
 export * from './registry.js';
+export * from './widget-title.js';
 export * from './slope-force/index.js';
 export * from './convection-cell/index.js';
 export * from './sea-floor-depth/index.js';

@@ -1,6 +1,17 @@
 import type { CSSProperties } from 'react';
-import { isWidgetType, widgetModule, type ConvectionCellParams, type SimulationReport, type SlopeForceParams, type WidgetType } from '../../widgets/index.js';
+import {
+  isWidgetType,
+  widgetModule,
+  type ConvectionCellParams,
+  type PlateForcesParams,
+  type SeaFloorDepthParams,
+  type SimulationReport,
+  type SlopeForceParams,
+  type WidgetType,
+} from '../../widgets/index.js';
 import { ConvectionCell } from '../convection-cell.js';
+import { PlateForces } from '../plate-forces.js';
+import { SeaFloorDepth } from '../sea-floor-depth.js';
 import { SlopeForceBox } from '../slope-force-box.js';
 
 export interface PanelWidgetProps {
@@ -44,6 +55,10 @@ function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = fa
       return (
         <ConvectionCell params={params as ConvectionCellParams} locale={locale} reducedMotion={reducedMotion} showCaution={editing} width={maxWidth} onReport={onReport} />
       );
+    case 'sea-floor-depth':
+      return <SeaFloorDepth params={params as SeaFloorDepthParams} locale={locale} showCaution={editing} maxWidth={maxWidth} onParamsChange={(next) => onParamsChange({ ...next })} />;
+    case 'plate-forces':
+      return <PlateForces params={params as PlateForcesParams} locale={locale} showCaution={editing} maxWidth={maxWidth} onParamsChange={(next) => onParamsChange({ ...next })} />;
   }
 }
 

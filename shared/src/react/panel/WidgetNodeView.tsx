@@ -1,7 +1,7 @@
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import type { CSSProperties } from 'react';
-import { widgetStrings } from '../../i18n/index.js';
 import { isPlainObject } from '../../panel/panel-json.js';
+import { widgetTitle } from '../../widgets/widget-title.js';
 import { PanelWidget } from './PanelWidget.js';
 import type { PanelEditorOptions } from './panel-editor-options.js';
 
@@ -17,14 +17,6 @@ export function isWidgetDrawingEvent({ event }: { event: Event }): boolean {
   if (event.type.startsWith('drag') || event.type === 'drop') return false;
   const target = event.target;
   return target instanceof Element && target.closest(`.${DRAWING_CLASS}`) !== null;
-}
-
-/** The widget's name on its grip, in the panel's language; an unknown type shows as itself so the problem stays visible. */
-function widgetTitle(widgetType: string, locale: string): string {
-  const strings = widgetStrings(locale);
-  if (widgetType === 'slope-force') return strings.slopeForce.title;
-  if (widgetType === 'convection-cell') return strings.convectionCell.title;
-  return widgetType;
 }
 
 /** The widget block in the studio editor, drawn live by the same component the kiosk uses. */

@@ -1,11 +1,23 @@
 import { useMemo, useState } from 'react';
 import { Card, makeStyles, MessageBar, MessageBarBody, Select, Field, Spinner, Tab, TabList, Text, tokens } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
-import { checkWidget, isWidgetType, WIDGET_LOCALES, widgetModule, widgetStrings, type ConvectionCellParams, type SlopeForceParams, type WidgetType } from '@mantlepiece/shared';
-import { ConvectionCell, SimulationCaution, SlopeForceBox } from '@mantlepiece/shared/react';
+import {
+  checkWidget,
+  isWidgetType,
+  WIDGET_LOCALES,
+  widgetModule,
+  widgetTitle,
+  type ConvectionCellParams,
+  type PlateForcesParams,
+  type SeaFloorDepthParams,
+  type SlopeForceParams,
+  type WidgetType,
+} from '@mantlepiece/shared';
+import { ConvectionCell, PlateForces, SeaFloorDepth, SimulationCaution, SlopeForceBox } from '@mantlepiece/shared/react';
 import { useWidgetTypes } from '../../api/widgets';
 import { RequireArea } from '../area';
 import { PageHeader } from '../../components/PageHeader';
+import { WidgetModelCard } from '../../components/widget-model/WidgetModelCard';
 import { WidgetParamsForm } from '../../components/widget-params/WidgetParamsForm';
 import { workbenchStrings } from './workbench-strings';
 
@@ -26,15 +38,21 @@ function resultRows(value: unknown, prefix = ''): [string, string][] {
 }
 
 function Preview({ type, params, locale, onParamsChange }: { type: WidgetType; params: Params; locale: string; onParamsChange: (params: Params) => void }) {
-  if (type === 'slope-force') {
-    return <SlopeForceBox params={params as SlopeForceParams} locale={locale} onParamsChange={(next) => onParamsChange({ ...next })} />;
+  switch (type) {
+    case 'slope-force':
+      return <SlopeForceBox params={params as SlopeForceParams} locale={locale} onParamsChange={(next) => onParamsChange({ ...next })} />;
+    case 'convection-cell':
+      return <ConvectionCell params={params as ConvectionCellParams} locale={locale} />;
+    case 'sea-floor-depth':
+      return <SeaFloorDepth params={params as SeaFloorDepthParams} locale={locale} onParamsChange={(next) => onParamsChange({ ...next })} />;
+    case 'plate-forces':
+      return <PlateForces params={params as PlateForcesParams} locale={locale} onParamsChange={(next) => onParamsChange({ ...next })} />;
   }
-  return <ConvectionCell params={params as ConvectionCellParams} locale={locale} />;
 }
 
 function Workbench() {
   const styles = useStyles();
-  const { i18n } = useTranslation();
+  const { t, i18n } = useTranslation();
   const words = workbenchStrings(i18n.resolvedLanguage);
   const types = useWidgetTypes();
   const [chosen, setChosen] = useState<WidgetType>('slope-force');
@@ -60,7 +78,7 @@ function Workbench() {
       <TabList selectedValue={chosen} onTabSelect={(_, data) => isWidgetType(data.value) && setChosen(data.value)} aria-label={words.widget}>
         {types.data.items.map((item) => (
           <Tab key={item.type} value={item.type}>
-            {item.type === 'slope-force' ? widgetStrings(locale).slopeForce.title : widgetStrings(locale).convectionCell.title}
+            {widgetTitle(item.type, locale)}
           </Tab>
         ))}
       </TabList>
@@ -74,6 +92,8 @@ function Workbench() {
             </Select>
           </Field>
           <WidgetParamsForm key={chosen} widgetType={chosen} params={params} onChange={update} />
+          <Text as="h2" size={500} weight="semibold">{t('modelCard.title')}</Text>
+          <WidgetModelCard key={`model-${chosen}`} widgetType={chosen} headingLevel={2} />
         </section>
         <section className={styles.column} aria-labelledby="workbench-preview">
           <Text as="h2" size={500} weight="semibold" id="workbench-preview">{words.preview}</Text>
