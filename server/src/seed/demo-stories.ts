@@ -73,8 +73,10 @@ const IMAGES: DemoImage[] = [
 const OVERTURN = { rayleigh: 3e4, aspectRatio: 2, nx: 128, nz: 64, playbackSpeed: 2, colourRamp: 'mantle-heat', overlay: 'streamlines', units: 'non-dimensional' };
 /** Steeper than arctan(0.6) ≈ 31°, so the block slides. */
 const RIDGE_FLANK = { massKg: 100, angleDeg: 35, staticFriction: 0.6, kineticFriction: 0.5 };
-/** A slab dipping at 60° pulls far harder down its slope than a gentle ridge flank. */
-const STEEP_SLAB = { massKg: 100, angleDeg: 60, staticFriction: 0.6, kineticFriction: 0.5 };
+/** Old Pacific floor, by the plate model fitted to measured depths (GDH1, Stein and Stein 1992). */
+const OLD_FLOOR = { ageMyr: 100, model: 'plate' };
+/** An old plate whose slab reaches the bottom of the upper mantle: the pull is over ten times the push. */
+const OLD_SLAB = { ageMyr: 100, slabLengthKm: 700, slabDipDeg: 60 };
 
 const STORIES: { title: string; panels: PanelDocJSON[] }[] = [
   {
@@ -125,9 +127,14 @@ const STORIES: { title: string; panels: PanelDocJSON[] }[] = [
         IMAGE('sinkingSlab'),
       ),
       doc(
-        heading('Steep slopes pull harder'),
-        widget('slope-force', 'steep-slab', STEEP_SLAB),
-        paragraph('On this steep slope, gravity pulls the 100 kg block downhill with ', liveValue('steep-slab', 'shearN', 3, 'N'), '. A sinking slab is steep too, and it drags the rest of its plate behind it.'),
+        heading('Old sea floor sits deep'),
+        widget('sea-floor-depth', 'old-floor', OLD_FLOOR),
+        paragraph('Sea floor this old lies ', liveValue('old-floor', 'depthM', 2, 'm'), ' down. The cold rock under it is ', liveValue('old-floor', 'lithosphereThicknessKm', 2, 'km'), ' thick. Drag to older floor and watch it sink.'),
+      ),
+      doc(
+        heading('The slab pulls its plate'),
+        widget('plate-forces', 'old-slab', OLD_SLAB),
+        paragraph('Here the sinking slab pulls about ', liveValue('old-slab', 'slabToRidgeRatio', 2, ''), ' times as hard as the ridge pushes. Make the slab short and see which wins.'),
       ),
     ],
   },

@@ -46,11 +46,13 @@ const DEMO_TRANSLATIONS: Record<string, Record<'fr' | 'es', string[][]>> = {
   'Sinking Slabs': {
     fr: [
       ['Les vieilles plaques s’enfoncent', 'Loin de la dorsale, une plaque océanique est vieille, froide et lourde. Dans une fosse profonde, elle se courbe et plonge dans le manteau.'],
-      ['Les pentes raides tirent plus fort', 'Sur cette pente raide, la gravité tire le bloc de 100 kg vers le bas avec {1}. Une plaque qui plonge est raide elle aussi, et elle entraîne le reste de sa plaque derrière elle.'],
+      ['Le vieux fond marin est profond', 'Un fond marin aussi vieux se trouve à {1} de profondeur. La roche froide dessous a {2} d’épaisseur. Faites glisser vers un fond plus vieux et regardez-le s’enfoncer.'],
+      ['La plaque plongeante tire sa plaque', 'Ici, la plaque qui plonge tire environ {1} fois plus fort que la dorsale ne pousse. Raccourcissez la plaque plongeante et voyez qui l’emporte.'],
     ],
     es: [
       ['Las placas viejas se hunden', 'Lejos de la dorsal, una placa oceánica es vieja, fría y pesada. En una fosa profunda se dobla y se hunde en el manto.'],
-      ['Las pendientes empinadas tiran más', 'En esta pendiente empinada, la gravedad tira del bloque de 100 kg cuesta abajo con {1}. Una placa que se hunde también es empinada, y arrastra al resto de su placa tras ella.'],
+      ['El fondo marino viejo está hondo', 'Un fondo marino tan viejo está a {1} de profundidad. La roca fría de debajo tiene {2} de espesor. Arrastra hacia un fondo más viejo y mira cómo se hunde.'],
+      ['La placa que se hunde tira de su placa', 'Aquí la placa que se hunde tira unas {1} veces más fuerte de lo que empuja la dorsal. Acorta la placa hundida y mira quién gana.'],
     ],
   },
 };
