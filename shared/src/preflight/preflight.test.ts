@@ -223,6 +223,21 @@ describe('preflight: widget model limits (warning)', () => {
     expect(finding?.message).toContain('Static friction 1.5 is more than rock on rock reaches');
   });
 
+  it('warns about the half-space model on sea floor older than about 70 Myr, where measured depths flatten (Parsons and Sclater 1977)', () => {
+    const floor = (model: string) => ({ type: 'widget', attrs: { widgetType: 'sea-floor-depth', widgetId: 'old-floor', params: { ageMyr: 120, model } } });
+    const [finding, ...rest] = failures(widgetModelLimits, { panels: [{ en: doc(paragraph(text('Old floor sits deep.')), floor('half-space')) }] });
+    expect(rest).toEqual([]);
+    expect(finding?.message).toMatch(/the sea-floor depth “old-floor” is set outside the range where its simplified model holds\. The half-space model matches measured depths only up to about 70 Myr/);
+    expect(passes(widgetModelLimits, { panels: [{ en: doc(paragraph(text('Old floor sits deep.')), floor('plate')) }] })).toBe(true);
+  });
+
+  it('warns about a slab whose tip reaches below the 660 km discontinuity, which the plate-forces model leaves out', () => {
+    // 1000 km at 60° reaches 1000 × sin 60° = 866 km down.
+    const slab = { type: 'widget', attrs: { widgetType: 'plate-forces', widgetId: 'slab', params: { ageMyr: 100, slabLengthKm: 1000, slabDipDeg: 60 } } };
+    const [finding] = failures(widgetModelLimits, { panels: [{ en: doc(paragraph(text('The slab pulls.')), slab) }] });
+    expect(finding?.message).toContain('The slab\'s tip is 866 km down, below the 660 km discontinuity');
+  });
+
   it('leaves widgets that fail validation to the params check', () => {
     expect(widgetModelLimits.run(context({ panels: [{ en: doc(slope({ angleDeg: 120 })) }] }))).toEqual([{ passed: true, message: 'No panel has a widget with valid settings.' }]);
   });
