@@ -6,13 +6,18 @@ import { capturedMailTo, mailDir } from '../../test/mail-helpers.js';
 import { galleryWithExhibit } from '../../test/authoring-fixtures.js';
 import { pairedKiosk } from '../../test/release-fixtures.js';
 import { member } from '../../test/review-fixtures.js';
-import { createTestApp } from '../../test/test-app.js';
+import { createTestApp, type TestApp } from '../../test/test-app.js';
 import { Kiosk } from '../kiosks/models/kiosk.model.js';
 import { MailOutboxWorker } from '../mail/mail-outbox.worker.js';
 import { SilentKioskWatcher } from './silent-kiosk.watcher.js';
 
 const t = await createTestApp();
-afterAll(() => t.close());
+/** The same server started again, on the same database and clock; closed last, as closing an app ends the models' connection. */
+let restarted: TestApp | undefined;
+afterAll(async () => {
+  await restarted?.close();
+  await t.close();
+});
 
 const admin = await member(t, ['admin']);
 const technician = await member(t, ['technician'], { name: 'Tomás Reyes' });
@@ -25,15 +30,17 @@ async function deliverAll(): Promise<void> {
   while ((await t.app.get(MailOutboxWorker).deliverDue()).sent.length) { /* next batch */ }
 }
 
+/** The suites share one database: the kiosks others left count as announced for good, so a check mails about this suite's kiosks alone. */
+const setAsideKiosksBut = (kioskIds: number[]) =>
+  t.app.get<typeof Kiosk>(getModelToken(Kiosk)).update({ silenceAlertedAt: new Date('9999-12-31T00:00:00Z') }, { where: { id: { [Op.notIn]: kioskIds } } });
+
 const mailAbout = async (email: string, station: string) => (await capturedMailTo(email)).filter((mail) => mail.subject?.includes(station));
 
 describe('silent-kiosk watcher', () => {
   it('mails the technicians once when a kiosk goes silent past the threshold and once when it is back, however often it checks', async () => {
     mailDir();
     const { station, credential, device } = await pairedKiosk(t, admin.auth, technician.auth, gallery.id);
-    // The suites share one database: the kiosks other suites left count as announced for good, so
-    // this check mails about this suite's kiosk alone.
-    await t.app.get<typeof Kiosk>(getModelToken(Kiosk)).update({ silenceAlertedAt: new Date('9999-12-31T00:00:00Z') }, { where: { id: { [Op.ne]: credential.kioskId } } });
+    await setAsideKiosksBut([credential.kioskId]);
     const beat = () => request(t.http).post('/api/kiosk/heartbeat').set(device).send({ releaseId: null, appVersion: '0.1.0', uptimeS: 5, storageUsedBytes: null, lastError: null });
     expect((await beat()).status).toBe(204);
     const lastHeartbeat = t.clock.now();
@@ -67,5 +74,32 @@ describe('silent-kiosk watcher', () => {
     t.clock.advance(300_000);
     expect((await watcher.check()).silent).toContain(credential.kioskId);
     expect((await watcher.check()).silent).not.toContain(credential.kioskId);
+  }, 90_000);
+
+  it('judges silence only once an offline threshold has passed since the server started, so a restart mails no silent and back pair', async () => {
+    mailDir();
+    const playing = await pairedKiosk(t, admin.auth, technician.auth, gallery.id);
+    const unplugged = await pairedKiosk(t, admin.auth, technician.auth, gallery.id);
+    await setAsideKiosksBut([playing.credential.kioskId, unplugged.credential.kioskId]);
+    const beat = (device: Record<string, string>, app = t) =>
+      request(app.http).post('/api/kiosk/heartbeat').set(device).send({ releaseId: null, appVersion: '0.1.0', uptimeS: 5, storageUsedBytes: null, lastError: null });
+    expect((await beat(playing.device)).status).toBe(204);
+    expect((await beat(unplugged.device)).status).toBe(204);
+
+    // The server is down for ten minutes (twice the 300 s threshold), then starts again on the same database.
+    t.clock.advance(600_000);
+    restarted = await createTestApp({ clock: t.clock });
+    const restartedWatcher = restarted.app.get(SilentKioskWatcher);
+    expect(await restartedWatcher.check()).toEqual({ silent: [], back: [] });
+    t.clock.advance(30_000);
+    expect((await beat(playing.device, restarted)).status).toBe(204);
+    t.clock.advance(269_000);
+    expect((await restartedWatcher.check()).silent).toEqual([]);
+    // One threshold after the start: the kiosk that played throughout is not silent; the one that never reported again is.
+    t.clock.advance(1_000);
+    expect(await restartedWatcher.check()).toEqual({ silent: [unplugged.credential.kioskId], back: [] });
+    await deliverAll();
+    expect(await mailAbout(technician.person.email, playing.station.name)).toEqual([]);
+    expect((await mailAbout(technician.person.email, unplugged.station.name)).map((m) => m.subject)).toEqual([`Kiosk silent: ${unplugged.station.name}, ${gallery.name}`]);
   }, 90_000);
 });

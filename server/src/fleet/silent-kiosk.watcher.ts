@@ -33,6 +33,12 @@ const isTechnician = Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col
 export class SilentKioskWatcher implements OnApplicationBootstrap, OnApplicationShutdown {
   private readonly logger = new Logger('SilentKioskWatcher');
   private timer?: NodeJS.Timeout;
+  /**
+   * No kiosk could report while this server was down, so silence is judged only once a whole
+   * offline threshold has passed since it started: kiosks that played throughout report in that
+   * time, and a restart mails no "silent" and "back" pair.
+   */
+  private readonly judgesSilenceFrom: Date;
 
   constructor(
     @InjectModel(Kiosk) private readonly kiosks: typeof Kiosk,
@@ -42,7 +48,9 @@ export class SilentKioskWatcher implements OnApplicationBootstrap, OnApplication
     private readonly clock: Clock,
     private readonly config: ConfigService,
     private readonly sequelize: Sequelize,
-  ) {}
+  ) {
+    this.judgesSilenceFrom = new Date(clock.now().getTime() + states.thresholds.offlineAfterS * 1000);
+  }
 
   onApplicationBootstrap(): void {
     if (this.config.fleetWatchIntervalMs === 0) return;
@@ -60,9 +68,10 @@ export class SilentKioskWatcher implements OnApplicationBootstrap, OnApplication
     const offlineSince = new Date(now.getTime() - this.states.thresholds.offlineAfterS * 1000);
     const placed = { include: [{ model: Station, required: true, include: [Gallery] }] };
     // The demo kiosk has no device behind it: it falls silent after the first start, and nobody should be mailed about it.
+    const judgesSilence = now >= this.judgesSilenceFrom;
     const [silent, back] = await Promise.all([
       // A kiosk that never reported is silent since it was paired.
-      this.kiosks.findAll({
+      !judgesSilence ? [] : this.kiosks.findAll({
         where: {
           revokedAt: null,
           demo: false,
