@@ -26,7 +26,7 @@ export const releaseAr: Translated<typeof releaseEn> = {
       goForward: 'تقدّم…',
       goForwardLabel: 'التقدّم إلى {{name}}',
       compare: 'مقارنة بالمعروض',
-      compareLabel: 'مقارنة {{name}} بالإصدار المعروض',
+      compareLabel: 'مقارنة بالمعروض: {{name}}',
     },
     problems: {
       revisions: 'النسخ',

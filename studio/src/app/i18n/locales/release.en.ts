@@ -23,7 +23,7 @@ export const releaseEn = {
       goForward: 'Go forward…',
       goForwardLabel: 'Go forward to {{name}}',
       compare: 'Compare with live',
-      compareLabel: 'Compare {{name}} with the live release',
+      compareLabel: 'Compare with live: {{name}}',
     },
     problems: {
       revisions: 'Revisions',

@@ -26,7 +26,7 @@ export const releaseEs: Translated<typeof releaseEn> = {
       goForward: 'Avanzar…',
       goForwardLabel: 'Avanzar a la {{name}}',
       compare: 'Comparar con la de servicio',
-      compareLabel: 'Comparar la {{name}} con la publicación en servicio',
+      compareLabel: 'Comparar con la de servicio: {{name}}',
     },
     problems: {
       revisions: 'Versiones',

@@ -25,7 +25,7 @@ export const releaseFr: typeof releaseEn = {
       goForward: 'Avancer…',
       goForwardLabel: 'Avancer à la {{name}}',
       compare: 'Comparer à celle en service',
-      compareLabel: 'Comparer la {{name}} à la version en service',
+      compareLabel: 'Comparer à celle en service : {{name}}',
     },
     problems: {
       revisions: 'Révisions',
