@@ -6,13 +6,14 @@ import { getModelToken } from '@nestjs/sequelize';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseManifest } from '@mantlepiece/shared';
+import { PAIRING_ALPHABET } from '@mantlepiece/shared';
 import { approvedGallery, buildRelease, pairedKiosk, publish } from '../../test/release-fixtures.js';
 import { ROLE_MATRIX } from '../../test/role-matrix.js';
 import { createTestApp, SUITE_ADDRESS, TestClock, type TestApp } from '../../test/test-app.js';
 import { sha256Of } from '../releases/release-file-store.js';
 import { KioskEvent } from './models/kiosk-event.model.js';
 import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
-import { PAIRING_ALPHABET, PAIRING_TTL_MS } from './pairing.service.js';
+import { PAIRING_TTL_MS } from './pairing.service.js';
 import { PAIRING_MAX_FAILURES_PER_ADDRESS, PAIRING_MAX_FAILURES_PER_STATION } from './pairing-attempts.service.js';
 
 const mediaDir = fs.mkdtempSync(path.join(os.tmpdir(), 'mantlepiece-kiosks-'));

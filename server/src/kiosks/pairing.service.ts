@@ -3,7 +3,7 @@ import { GoneException, Injectable, NotFoundException, UnprocessableEntityExcept
 import { InjectModel } from '@nestjs/sequelize';
 import { Op } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import type { KioskCredential, PairCompleteWaiting, PairStartResponse } from '@mantlepiece/shared';
+import { normalisePairingCode, PAIRING_ALPHABET, PAIRING_CODE_LENGTH, type KioskCredential, type PairCompleteWaiting, type PairStartResponse } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
 import { Clock } from '../clock/clock.service.js';
 import { hashToken, newToken } from '../common/tokens.js';
@@ -16,15 +16,9 @@ import { Kiosk } from './models/kiosk.model.js';
 import { PairingRequest } from './models/pairing-request.model.js';
 import { PairingAttemptsService } from './pairing-attempts.service.js';
 
-/** No 0/O, 1/I/L or U/V pairs: a code read off a screen across a gallery is typed right. */
-export const PAIRING_ALPHABET = '23456789ABCDEFGHJKMNPQRSTWXYZ';
-export const PAIRING_CODE_LENGTH = 6;
 export const PAIRING_TTL_MS = 10 * 60_000;
 
 const newPairingCode = () => Array.from({ length: PAIRING_CODE_LENGTH }, () => PAIRING_ALPHABET[randomInt(PAIRING_ALPHABET.length)]).join('');
-
-/** What a technician types, as stored: upper case, without the spaces or dashes a code may be written with. */
-export const normalisePairingCode = (typed: string) => typed.toUpperCase().replace(/[\s-]/g, '');
 
 @Injectable()
 export class PairingService {

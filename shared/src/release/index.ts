@@ -3,3 +3,4 @@ export * from './publication.js';
 export * from './verify.js';
 export * from './kiosk-api.js';
 export type * from './views.js';
+export * from './pairing-code.js';

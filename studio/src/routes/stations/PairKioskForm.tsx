@@ -4,7 +4,7 @@ import { useTranslation } from 'react-i18next';
 import { usePairKiosk } from '../../api/kiosks';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError, shownAtField, serverFieldMessage } from '../../components/forms/describe-error';
-import { looksLikePairingCode, normalisePairingCode } from './pairing-code';
+import { looksLikePairingCode, normalisePairingCode } from '@mantlepiece/shared';
 
 const useStyles = makeStyles({
   form: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM, maxWidth: '36rem' },

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { looksLikePairingCode, normalisePairingCode } from './pairing-code';
+import { looksLikePairingCode, normalisePairingCode } from './pairing-code.js';
 
 describe('a pairing code as a technician types it', () => {
   it('ignores case, spaces and dashes', () => {
