@@ -3,7 +3,7 @@ import { isWidgetType, widgetModule } from '../widgets/index.js';
 import { isPanelHref, panelHrefMessage } from './panel-link/panel-href.js';
 import { isNodeLike, isPlainObject, LINK_MARK, type PanelDocJSON, type PanelIssue, type PanelPath } from './panel-json.js';
 import { panelSchema } from './panel-extensions.js';
-import { widgetsIn } from './panel-queries.js';
+import { livePhrasesIn, widgetsIn } from './panel-queries.js';
 
 export type PanelDocumentCheck = { ok: true; doc: PanelDocJSON } | { ok: false; errors: PanelIssue[] };
 
@@ -95,6 +95,18 @@ function widgetIssues(doc: PanelDocJSON): PanelIssue[] {
   return issues;
 }
 
+/** A live phrase's id names its translation units, so two phrases of one panel cannot share one. */
+function livePhraseIdIssues(doc: PanelDocJSON): PanelIssue[] {
+  const seen = new Set<string>();
+  return livePhrasesIn(doc).flatMap(({ path, phraseId }) => {
+    if (!seen.has(phraseId)) {
+      seen.add(phraseId);
+      return [];
+    }
+    return [{ path: [...path, 'attrs', 'phraseId'], message: `Another live phrase on this panel already has the id ${phraseId}.` }];
+  });
+}
+
 /**
  * The server's check of a panel document. The schema comes from `panelExtensions`, the same list
  * the studio editor runs, so editor and server cannot disagree on what a panel may contain.
@@ -111,7 +123,7 @@ export function checkPanelDocument(json: unknown): PanelDocumentCheck {
   const schemaIssue = locateSchemaIssue(schema, doc);
   if (schemaIssue) return { ok: false, errors: [schemaIssue] };
 
-  const widgets = widgetIssues(doc);
+  const widgets = [...widgetIssues(doc), ...livePhraseIdIssues(doc)];
   if (widgets.length > 0) return { ok: false, errors: widgets };
   // Round-tripped through the schema so defaults are filled in and the stored JSON is canonical.
   return { ok: true, doc: ProseMirrorNode.fromJSON(schema, doc).toJSON() as PanelDocJSON };

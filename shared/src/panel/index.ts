@@ -4,6 +4,7 @@ export * from './panel-link/index.js';
 export * from './panel-image/index.js';
 export * from './widget/index.js';
 export * from './live-value/index.js';
+export * from './live-phrase/index.js';
 export * from './panel-queries.js';
 export * from './panel-text.js';
 export * from './reading-level.js';

@@ -7,14 +7,17 @@ describe('panel schema', () => {
   it('holds exactly the nodes and marks a panel uses', () => {
     const schema = panelSchema();
     expect(Object.keys(schema.nodes).sort()).toEqual(
-      ['blockquote', 'bulletList', 'doc', 'hardBreak', 'heading', 'listItem', 'liveValue', 'orderedList', 'panelImage', 'paragraph', 'text', 'widget'].sort(),
+      ['blockquote', 'bulletList', 'doc', 'hardBreak', 'heading', 'listItem', 'livePhrase', 'liveValue', 'orderedList', 'panelImage', 'paragraph', 'text', 'widget'].sort(),
     );
     expect(Object.keys(schema.marks).sort()).toEqual(['bold', 'italic', 'link']);
   });
 
   it('round-trips a document with every node and mark type unchanged', () => {
     const schema = panelSchema();
-    const doc = examplePanelDoc();
+    const example = examplePanelDoc();
+    // The example panel, plus a live phrase following its slope.
+    const livePhrase = { type: 'livePhrase', attrs: { phraseId: 'ph-1', widgetId: 'ridge-slope', wordings: { holds: 'holds', slides: 'slides' } } };
+    const doc = { ...example, content: [...(example.content ?? []), { type: 'paragraph', content: [{ type: 'text', text: 'Now it ' }, livePhrase] }] };
     const node = ProseMirrorNode.fromJSON(schema, doc);
     node.check();
     expect(node.toJSON()).toEqual(doc);

@@ -2,6 +2,7 @@ import { getSchema, type Extensions } from '@tiptap/core';
 import type { Schema } from '@tiptap/pm/model';
 import { Heading } from '@tiptap/extension-heading';
 import { StarterKit } from '@tiptap/starter-kit';
+import { LivePhrase } from './live-phrase/live-phrase.js';
 import { LiveValue } from './live-value/live-value.js';
 import { PanelImage } from './panel-image/panel-image.js';
 import { PanelLink } from './panel-link/panel-link.js';
@@ -41,7 +42,7 @@ export const PanelStarterKit = StarterKit.configure({
 });
 
 /** The one extension list for a panel: the studio editor, the server's check and the renderer agree on it. */
-export const panelExtensions: Extensions = [PanelStarterKit, PanelHeading, PanelLink, PanelImage, Widget, LiveValue];
+export const panelExtensions: Extensions = [PanelStarterKit, PanelHeading, PanelLink, PanelImage, Widget, LiveValue, LivePhrase];
 
 let schema: Schema | undefined;
 

@@ -26,6 +26,7 @@ export interface PanelIssue {
 
 export const WIDGET_NODE = 'widget';
 export const LIVE_VALUE_NODE = 'liveValue';
+export const LIVE_PHRASE_NODE = 'livePhrase';
 export const PANEL_IMAGE_NODE = 'panelImage';
 export const LINK_MARK = 'link';
 

@@ -1,5 +1,6 @@
 import { isLiveValueFormat, DEFAULT_LIVE_VALUE_FORMAT, type LiveValueFormat } from './live-value/live-value-format.js';
-import { isPlainObject, LIVE_VALUE_NODE, PANEL_IMAGE_NODE, visitPanelNodes, WIDGET_NODE, type PanelPath } from './panel-json.js';
+import { isLivePhraseWordings, type LivePhraseWordings } from './live-phrase/live-phrase-wordings.js';
+import { isPlainObject, LIVE_PHRASE_NODE, LIVE_VALUE_NODE, PANEL_IMAGE_NODE, visitPanelNodes, WIDGET_NODE, type PanelPath } from './panel-json.js';
 
 export interface PanelWidgetRef {
   path: PanelPath;
@@ -37,6 +38,24 @@ export function liveValuesIn(doc: unknown): PanelLiveValueRef[] {
     values.push({ path, widgetId: text(attrs.widgetId), output: text(attrs.output), format: isLiveValueFormat(attrs.format) ? attrs.format : DEFAULT_LIVE_VALUE_FORMAT });
   });
   return values;
+}
+
+export interface PanelLivePhraseRef {
+  path: PanelPath;
+  phraseId: string;
+  widgetId: string;
+  wordings: LivePhraseWordings;
+}
+
+/** Every live phrase in document order. */
+export function livePhrasesIn(doc: unknown): PanelLivePhraseRef[] {
+  const phrases: PanelLivePhraseRef[] = [];
+  visitPanelNodes(doc, (node, path) => {
+    if (node.type !== LIVE_PHRASE_NODE) return;
+    const attrs = node.attrs ?? {};
+    phrases.push({ path, phraseId: text(attrs.phraseId), widgetId: text(attrs.widgetId), wordings: isLivePhraseWordings(attrs.wordings) ? attrs.wordings : {} });
+  });
+  return phrases;
 }
 
 /** The media assets a panel shows, each once, in order of first use (for rights checks and "where used"). */

@@ -1,6 +1,8 @@
 import { isLiveValueFormat, DEFAULT_LIVE_VALUE_FORMAT } from './live-value/live-value-format.js';
 import { liveValueText, readLiveValue, readPanelWidgets, type WidgetReading } from './live-value/live-value-reading.js';
-import { isNodeLike, LIVE_VALUE_NODE, type PanelNodeJSON } from './panel-json.js';
+import { readLivePhrase } from './live-phrase/live-phrase-reading.js';
+import { isLivePhraseWordings } from './live-phrase/live-phrase-wordings.js';
+import { isNodeLike, LIVE_PHRASE_NODE, LIVE_VALUE_NODE, type PanelNodeJSON } from './panel-json.js';
 import { widgetsIn } from './panel-queries.js';
 
 export interface PanelTextOptions {
@@ -16,6 +18,11 @@ function inlineText(node: PanelNodeJSON, readings: ReadonlyMap<string, WidgetRea
     const reading = readLiveValue({ widgetId: String(attrs.widgetId), output: String(attrs.output) }, readings);
     return reading.ok ? liveValueText(reading, isLiveValueFormat(attrs.format) ? attrs.format : DEFAULT_LIVE_VALUE_FORMAT, locale) : '';
   }
+  if (node.type === LIVE_PHRASE_NODE) {
+    const attrs = node.attrs ?? {};
+    const reading = readLivePhrase({ widgetId: String(attrs.widgetId), wordings: isLivePhraseWordings(attrs.wordings) ? attrs.wordings : {} }, readings);
+    return reading.ok ? reading.text : '';
+  }
   return (node.content ?? []).filter(isNodeLike).map((child) => inlineText(child, readings, locale)).join('');
 }
 
@@ -26,7 +33,7 @@ function blockTexts(node: PanelNodeJSON, readings: ReadonlyMap<string, WidgetRea
 }
 
 /**
- * The words a visitor reads on a panel, one text block (paragraph, heading, list item) per line,
+ * The words a visitor reads on a panel (live values and phrases as the stored settings show them), one text block (paragraph, heading, list item) per line,
  * for word counts and reading level. Widgets and images carry no running text.
  */
 export function panelText(doc: unknown, { locale = 'en' }: PanelTextOptions = {}): string {

@@ -34,7 +34,7 @@ const image = (mediaId = '31'): PanelNodeJSON => ({ type: 'panelImage', attrs: {
 const doc = (...content: PanelNodeJSON[]): PanelDocJSON => ({ type: 'doc', content });
 
 const slopePanel = (...extra: PanelNodeJSON[]) =>
-  doc(heading('Rock on a slope'), paragraph(text('Tilt the board. The block slides above '), liveValue('ridge-slope'), text('.')), slope(), image(), ...extra);
+  doc(heading('Rock on a slope'), paragraph(text('Tilt the board. The block moves above '), liveValue('ridge-slope'), text('.')), slope(), image(), ...extra);
 
 const photo = (changes: Partial<PreflightMedia> = {}): PreflightMedia => ({
   id: 31,

@@ -3,6 +3,8 @@ import { imageCredit } from './image-credit.js';
 import { imageInLibrary } from './image-in-library.js';
 import { imageLicenceExpiry } from './image-licence-expiry.js';
 import { imageLicenceRecorded } from './image-licence-recorded.js';
+import { livePhraseStateWords } from './live-phrase-state-words.js';
+import { livePhraseTarget } from './live-phrase-target.js';
 import { liveValueTarget } from './live-value-target.js';
 import { panelContent } from './panel-content.js';
 import { readingLevelRule } from './reading-level.js';
@@ -17,11 +19,13 @@ export const PREFLIGHT_RULES: readonly PreflightRule[] = [
   panelContent,
   widgetParams,
   liveValueTarget,
+  livePhraseTarget,
   imageInLibrary,
   imageAltText,
   imageCredit,
   imageLicenceExpiry,
   widgetModelLimits,
+  livePhraseStateWords,
   readingLevelRule,
   wordBudget,
   imageLicenceRecorded,

@@ -1,5 +1,5 @@
-import { isNodeLike, isPlainObject, type PanelDocJSON, type PanelNodeJSON, type PanelPath } from '../panel/panel-json.js';
-import { widgetsIn } from '../panel/panel-queries.js';
+import { isNodeLike, isPlainObject, LIVE_PHRASE_NODE, visitPanelNodes, type PanelDocJSON, type PanelNodeJSON, type PanelPath } from '../panel/panel-json.js';
+import { livePhrasesIn, widgetsIn } from '../panel/panel-queries.js';
 import { checkPlaceholders, type PlaceholderProblem } from './check-placeholders.js';
 import { inlineNodes } from './inline-runs.js';
 import { runsFromText, type TranslationUnit, type UnitRun } from './translation-unit.js';
@@ -24,6 +24,8 @@ function setParam(params: Record<string, unknown>, path: readonly string[], text
   if (rest.length === 0) params[head] = text;
   else if (isPlainObject(params[head])) setParam(params[head], rest, text);
 }
+
+const plainText = (runs: readonly UnitRun[]) => runs.map((run) => (run.type === 'text' ? run.text : '')).join('');
 
 /**
  * The target-locale document: the source structure, each unit's text replaced by its translation
@@ -57,10 +59,19 @@ export function applyTranslations(doc: PanelDocJSON, units: readonly Translation
       const content = inlineNodes(runs, unit.placeholders);
       if (content.length > 0) block.content = content;
       else delete block.content;
+    } else if (unit.location.type === 'livePhrase') {
+      const plain = plainText(runs);
+      const { phraseId, state } = unit.location;
+      const phrase = livePhrasesIn(target).find((candidate) => candidate.phraseId === phraseId);
+      if (!phrase) throw new Error(`Unit ${unit.id} was not cut from this document.`);
+      // Every copy: a translated block restores its phrase from the source placeholder, so the wording goes on that node.
+      visitPanelNodes(target, (node) => {
+        if (node.type === LIVE_PHRASE_NODE && node.attrs?.phraseId === phraseId) node.attrs = { ...node.attrs, wordings: { ...phrase.wordings, [state]: plain } };
+      });
     } else {
       const widget = widgets.get(unit.location.widgetId);
       if (!widget) throw new Error(`Unit ${unit.id} was not cut from this document.`);
-      setParam(widget.params, unit.location.param, runs.map((run) => (run.type === 'text' ? run.text : '')).join(''));
+      setParam(widget.params, unit.location.param, plainText(runs));
     }
   }
   return { doc: target, untranslated, refused };

@@ -1,4 +1,5 @@
-import { isNodeLike, LIVE_VALUE_NODE, type PanelMarkJSON, type PanelNodeJSON } from '../panel/panel-json.js';
+import { isLivePhraseWordings } from '../panel/live-phrase/live-phrase-wordings.js';
+import { isNodeLike, LIVE_PHRASE_NODE, LIVE_VALUE_NODE, type PanelMarkJSON, type PanelNodeJSON } from '../panel/panel-json.js';
 import { DEFAULT_LIVE_VALUE_FORMAT, isLiveValueFormat } from '../panel/live-value/live-value-format.js';
 import { panelSchema } from '../panel/panel-extensions.js';
 import { canonicalJson } from '../review/revision-snapshot.js';
@@ -101,12 +102,21 @@ function liveValueWidth(node: PanelNodeJSON): number {
 const graphemes = new Intl.Segmenter('und', { granularity: 'grapheme' });
 export const characterCount = (text: string) => Array.from(graphemes.segment(text)).length;
 
-/** Visible length of a unit: text in user-perceived characters, live values at their drawn width. */
+/** A live phrase takes the room of its longest wording, the one that may be showing. */
+function livePhraseWidth(node: PanelNodeJSON): number {
+  const wordings = isLivePhraseWordings(node.attrs?.wordings) ? Object.values(node.attrs.wordings) : [];
+  return Math.max(0, ...wordings.map(characterCount));
+}
+
+function placeholderWidth(placeholder: Placeholder | undefined): number {
+  if (placeholder?.kind !== 'standalone') return 0;
+  if (placeholder.node.type === LIVE_VALUE_NODE) return liveValueWidth(placeholder.node);
+  if (placeholder.node.type === LIVE_PHRASE_NODE) return livePhraseWidth(placeholder.node);
+  return 0;
+}
+
+/** Visible length of a unit: text in user-perceived characters, live values and phrases at their drawn width. */
 export function visibleLength(runs: readonly UnitRun[], placeholders: readonly Placeholder[]): number {
   const byId = new Map(placeholders.map((placeholder) => [placeholder.id, placeholder]));
-  return runs.reduce((length, run) => {
-    if (run.type === 'text') return length + characterCount(run.text);
-    const placeholder = byId.get(run.id);
-    return placeholder?.kind === 'standalone' && placeholder.node.type === LIVE_VALUE_NODE ? length + liveValueWidth(placeholder.node) : length;
-  }, 0);
+  return runs.reduce((length, run) => length + (run.type === 'text' ? characterCount(run.text) : placeholderWidth(byId.get(run.id))), 0);
 }

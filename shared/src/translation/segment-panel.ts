@@ -1,4 +1,5 @@
 import { isNodeLike, WIDGET_NODE, type PanelNodeJSON, type PanelPath } from '../panel/panel-json.js';
+import { livePhrasesIn, widgetsIn } from '../panel/panel-queries.js';
 import { isWidgetType, widgetJsonSchema } from '../widgets/index.js';
 import { inlineSource, visibleLength } from './inline-runs.js';
 import { translatableParams } from './translatable-params.js';
@@ -101,9 +102,38 @@ function widgetUnits(doc: PanelNodeJSON, options: SegmentPanelOptions): Unhashed
   return units;
 }
 
-/** Cuts a panel's source document into translation units: its text blocks, then its widgets' text. */
+/**
+ * Each wording of each live phrase: `p42.phrase.ph-x1.slides`. The sentence around a phrase
+ * carries it as a placeholder; its wordings are translated on their own, each with its state named.
+ */
+function livePhraseUnits(doc: PanelNodeJSON, options: SegmentPanelOptions): UnhashedUnit[] {
+  const widgetTypes = new Map(widgetsIn(doc).map((widget) => [widget.widgetId, widget.widgetType]));
+  return livePhrasesIn(doc).flatMap(({ phraseId, widgetId, wordings }) =>
+    Object.entries(wordings)
+      .filter(([, text]) => text.trim() !== '')
+      .map(([state, text]) =>
+        plainUnit(
+          {
+            id: `${panelUnitPrefix(options.panelId)}.phrase.${phraseId}.${state}`,
+            kind: 'livePhrase',
+            sourceLocale: options.sourceLocale,
+            location: { type: 'livePhrase', phraseId, state },
+            context: { panelId: String(options.panelId), panelNumber: options.panelNumber, widgetType: widgetTypes.get(widgetId), state },
+          },
+          text,
+        ),
+      ),
+  );
+}
+
+/** Cuts a panel's source document into translation units: its text blocks, its widgets' text, then its live phrases' wordings. */
 export async function segmentPanel(doc: PanelNodeJSON, options: SegmentPanelOptions): Promise<TranslationUnit[]> {
-  const units = [...textBlocksOf(doc, options.panelId).map((segment) => textBlockUnit(segment, options)), ...widgetUnits(doc, options)];
+  const units = [
+    ...textBlocksOf(doc, options.panelId).map((segment) => textBlockUnit(segment, options)),
+    ...widgetUnits(doc, options),
+    // After the text blocks: applying a block's translation puts its phrases back from the source, and the wordings go in after.
+    ...livePhraseUnits(doc, options),
+  ];
   return Promise.all(units.map(withSourceHash));
 }
 

@@ -1,8 +1,8 @@
-import type { PanelMarkJSON, PanelNodeJSON, PanelPath } from '../panel/panel-json.js';
+import { LIVE_PHRASE_NODE, LIVE_VALUE_NODE, type PanelMarkJSON, type PanelNodeJSON, type PanelPath } from '../panel/panel-json.js';
 import { canonicalJson, sha256Hex } from '../review/revision-snapshot.js';
 
 /** What a unit is on screen; the translator's table filters and the XLIFF context note use it. */
-export type UnitKind = 'heading' | 'paragraph' | 'listItem' | 'quote' | 'widgetText' | 'altText';
+export type UnitKind = 'heading' | 'paragraph' | 'listItem' | 'quote' | 'widgetText' | 'livePhrase' | 'altText';
 
 /**
  * A piece of unit content. Paired placeholders (bold, italic, link) open and close around text;
@@ -22,6 +22,8 @@ export type Placeholder =
 export type UnitLocation =
   | { type: 'textBlock'; path: PanelPath }
   | { type: 'widgetParam'; widgetId: string; param: string[] }
+  /** One wording of a live phrase, found by its id wherever the translated block put it. */
+  | { type: 'livePhrase'; phraseId: string; state: string }
   | { type: 'altText'; mediaId: string };
 
 export interface UnitContext {
@@ -30,6 +32,8 @@ export interface UnitContext {
   panelNumber?: number;
   headingLevel?: number;
   widgetType?: string;
+  /** The widget state a live phrase's wording is shown in. */
+  state?: string;
   mediaId?: string;
 }
 
@@ -97,14 +101,18 @@ export function runsFromText(unit: Pick<TranslationUnit, 'placeholders'>, text: 
 }
 
 /**
- * What a placeholder is, for the hash: the mark type, or the live value's widget and output. Left
- * out on purpose: a link's href and a live value's rounding. They are restored from the current
- * source whenever a translation is applied, so changing them does not call for a new translation.
+ * What a placeholder is, for the hash: the mark type, the live value's widget and output, or the
+ * live phrase's id. Left out on purpose: a link's href, a live value's rounding and a live phrase's
+ * wordings. The first two are restored from the current source whenever a translation is applied,
+ * and each wording is a unit of its own, so changing them does not call for a new translation of
+ * the sentence around them.
  */
 function placeholderIdentity(placeholder: Placeholder): unknown {
   if (placeholder.kind === 'paired') return { mark: placeholder.mark.type };
   const { type, attrs = {} } = placeholder.node;
-  return type === 'liveValue' ? { node: type, widgetId: attrs.widgetId, output: attrs.output } : { node: type };
+  if (type === LIVE_VALUE_NODE) return { node: type, widgetId: attrs.widgetId, output: attrs.output };
+  if (type === LIVE_PHRASE_NODE) return { node: type, widgetId: attrs.widgetId, phraseId: attrs.phraseId };
+  return { node: type };
 }
 
 /** The canonical source: the runs, each placeholder spelt out as what it is. */

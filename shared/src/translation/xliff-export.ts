@@ -56,6 +56,7 @@ function codeAttributes(placeholder: Placeholder): Record<string, string | undef
   const { type, attrs = {} } = placeholder.node;
   if (type === 'hardBreak') return { ...fixed, type: 'fmt', subType: 'xlf:lb', equiv: ' ' };
   if (type === 'liveValue') return { ...fixed, type: 'ui', subType: 'xlf:var', disp: `{${String(attrs.output)}}` };
+  if (type === 'livePhrase') return { ...fixed, type: 'ui', subType: 'xlf:var', disp: `{${String(attrs.phraseId)}}` };
   return { ...fixed, type: 'other', disp: type };
 }
 
@@ -78,15 +79,17 @@ const KIND_WORDS: Record<UnitKind, string> = {
   listItem: 'list item',
   quote: 'quotation',
   widgetText: 'widget text',
+  livePhrase: 'live phrase (shown while the widget is in the state named)',
   altText: 'image alt text (read aloud, not shown)',
 };
 
 function contextNote(unit: TranslationUnit): string {
-  const { panelNumber, headingLevel, widgetType, mediaId } = unit.context;
+  const { panelNumber, headingLevel, widgetType, state, mediaId } = unit.context;
   const parts = [
     panelNumber === undefined ? undefined : `Panel ${panelNumber}`,
     `${KIND_WORDS[unit.kind]}${headingLevel === undefined ? '' : ` (level ${headingLevel})`}`,
     widgetType === undefined ? undefined : `widget ${widgetType}`,
+    state === undefined ? undefined : `state ${state}`,
     mediaId === undefined ? undefined : `media ${mediaId}`,
   ];
   return parts.filter((part) => part !== undefined).join(', ');

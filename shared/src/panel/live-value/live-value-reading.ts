@@ -1,5 +1,5 @@
 import { widgetStrings } from '../../i18n/index.js';
-import { isWidgetType, widgetModule, type SimulationReport, type WidgetOutput, type WidgetState } from '../../widgets/index.js';
+import { isWidgetType, widgetModule, type AnyWidgetModule, type SimulationReport, type WidgetOutput, type WidgetState } from '../../widgets/index.js';
 import { liveValuesIn, widgetsIn, type PanelLiveValueRef, type PanelWidgetRef } from '../panel-queries.js';
 import type { PanelPath } from '../panel-json.js';
 import { formatLiveValue, type LiveValueFormat } from './live-value-format.js';
@@ -9,7 +9,8 @@ export type OutputValue = number | WidgetState | null;
 
 /** What a widget on the panel puts out with its current params, or why it cannot. */
 export type WidgetReading =
-  | { ok: true; outputs: Readonly<Record<string, OutputValue>> }
+  /** `state` is the widget's declared state now (a live phrase's choice), null for a widget without states. */
+  | { ok: true; outputs: Readonly<Record<string, OutputValue>>; state: string | null }
   | { ok: false; reason: 'unknown-widget-type' | 'invalid-params' };
 
 /** One output a live value can show, with its value now: what the studio's live-value menu lists. */
@@ -32,30 +33,45 @@ function valueOf(output: AnyOutput, result: unknown, params: unknown, report: Si
   return output.read(result, params);
 }
 
-/** The widget's declared outputs that apply to these params, with their values; null when the params are not valid. */
-export function widgetOutputChoices(widgetType: string, params: unknown, report?: SimulationReport): WidgetOutputChoice[] | null {
+interface ComputedWidget {
+  widget: AnyWidgetModule;
+  params: unknown;
+  result: unknown;
+}
+
+function computeWidget(widgetType: string, params: unknown): ComputedWidget | null {
   if (!isWidgetType(widgetType)) return null;
   const widget = widgetModule(widgetType);
   const checked = widget.validate(params);
-  if (!checked.ok) return null;
-  const result = widget.compute(checked.params);
+  return checked.ok ? { widget, params: checked.params, result: widget.compute(checked.params) } : null;
+}
+
+function outputChoices({ widget, params, result }: ComputedWidget, report: SimulationReport | undefined): WidgetOutputChoice[] {
   return (widget.outputs as readonly AnyOutput[])
-    .filter((output) => output.appliesTo?.(checked.params) ?? true)
+    .filter((output) => output.appliesTo?.(params) ?? true)
     .map((output) => ({
       name: output.name,
       kind: output.kind,
       unit: output.kind === 'number' ? output.unit : '',
       source: output.source,
-      value: valueOf(output, result, checked.params, report),
+      value: valueOf(output, result, params, report),
     }));
+}
+
+/** The widget's declared outputs that apply to these params, with their values; null when the params are not valid. */
+export function widgetOutputChoices(widgetType: string, params: unknown, report?: SimulationReport): WidgetOutputChoice[] | null {
+  const computed = computeWidget(widgetType, params);
+  return computed && outputChoices(computed, report);
 }
 
 /** `report` is what the widget's running simulation last said, where it has one. */
 export function readWidget(widgetType: string, params: unknown, report?: SimulationReport): WidgetReading {
   if (!isWidgetType(widgetType)) return { ok: false, reason: 'unknown-widget-type' };
-  const choices = widgetOutputChoices(widgetType, params, report);
-  if (!choices) return { ok: false, reason: 'invalid-params' };
-  return { ok: true, outputs: Object.fromEntries(choices.map((choice) => [choice.name, choice.value])) };
+  const computed = computeWidget(widgetType, params);
+  if (!computed) return { ok: false, reason: 'invalid-params' };
+  const outputs = Object.fromEntries(outputChoices(computed, report).map((choice) => [choice.name, choice.value]));
+  const states = computed.widget.states;
+  return { ok: true, outputs, state: states ? states.read(computed.result, computed.params) : null };
 }
 
 /**

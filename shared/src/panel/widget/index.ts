@@ -1,3 +1,3 @@
 export * from './widget.js';
 export * from './widget-id.js';
-export { uniqueWidgetIds, uniqueWidgetIdsKey } from './unique-widget-ids.js';
+export { uniqueWidgetIds } from './unique-widget-ids.js';

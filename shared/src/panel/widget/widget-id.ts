@@ -12,7 +12,9 @@ const ALPHABET = '0123456789abcdefghijklmnopqrstuvwxyz';
  * Short ids unique within one panel. getRandomValues rather than randomUUID because the studio may
  * be served over plain http on a venue network, where randomUUID does not exist.
  */
-export function newWidgetId(): string {
+export function newPanelId(prefix: string): string {
   const bytes = crypto.getRandomValues(new Uint8Array(10));
-  return `w-${Array.from(bytes, (byte) => ALPHABET[byte % ALPHABET.length]).join('')}`;
+  return `${prefix}-${Array.from(bytes, (byte) => ALPHABET[byte % ALPHABET.length]).join('')}`;
 }
+
+export const newWidgetId = (): string => newPanelId('w');

@@ -8,5 +8,6 @@ export * from './panel-editor-options.js';
 export * from './panel-editor-extensions.js';
 export { isWidgetDrawingEvent, WidgetNodeView } from './WidgetNodeView.js';
 export { LiveValueNodeView } from './LiveValueNodeView.js';
+export { LivePhraseNodeView } from './LivePhraseNodeView.js';
 export { PanelImageNodeView } from './PanelImageNodeView.js';
 export { SimulationReports } from './simulation-reports.js';

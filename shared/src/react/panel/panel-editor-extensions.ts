@@ -2,7 +2,8 @@ import type { AnyExtension, Extensions } from '@tiptap/core';
 import { ReactNodeViewRenderer, type ReactNodeViewProps } from '@tiptap/react';
 import type { ComponentType } from 'react';
 import { panelExtensions } from '../../panel/panel-extensions.js';
-import { LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE } from '../../panel/panel-json.js';
+import { LIVE_PHRASE_NODE, LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE } from '../../panel/panel-json.js';
+import { LivePhraseNodeView } from './LivePhraseNodeView.js';
 import { LiveValueNodeView } from './LiveValueNodeView.js';
 import type { PanelEditorOptions } from './panel-editor-options.js';
 import { PanelImageNodeView } from './PanelImageNodeView.js';
@@ -12,6 +13,7 @@ import { isWidgetDrawingEvent, WidgetNodeView } from './WidgetNodeView.js';
 const nodeViews: Record<string, ComponentType<ReactNodeViewProps>> = {
   [WIDGET_NODE]: WidgetNodeView,
   [LIVE_VALUE_NODE]: LiveValueNodeView,
+  [LIVE_PHRASE_NODE]: LivePhraseNodeView,
   [PANEL_IMAGE_NODE]: PanelImageNodeView,
 };
 
@@ -24,7 +26,7 @@ function withNodeView(extension: AnyExtension, options: PanelEditorOptions): Any
     },
     addNodeView() {
       return ReactNodeViewRenderer(view, {
-        as: extension.name === LIVE_VALUE_NODE ? 'span' : 'div',
+        as: extension.name === LIVE_VALUE_NODE || extension.name === LIVE_PHRASE_NODE ? 'span' : 'div',
         stopEvent: extension.name === WIDGET_NODE ? isWidgetDrawingEvent : null,
       });
     },

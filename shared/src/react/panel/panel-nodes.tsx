@@ -2,7 +2,9 @@ import { Fragment, type CSSProperties, type ReactNode } from 'react';
 import { isPanelHref } from '../../panel/panel-link/panel-href.js';
 import { DEFAULT_LIVE_VALUE_FORMAT, isLiveValueFormat } from '../../panel/live-value/live-value-format.js';
 import { liveValueText, readLiveValue, type WidgetReading } from '../../panel/live-value/live-value-reading.js';
-import { isNodeLike, isPlainObject, LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE, type PanelMarkJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
+import { livePhraseText, readLivePhrase } from '../../panel/live-phrase/live-phrase-reading.js';
+import { isLivePhraseWordings } from '../../panel/live-phrase/live-phrase-wordings.js';
+import { isNodeLike, isPlainObject, LIVE_PHRASE_NODE, LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE, type PanelMarkJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
 import type { SimulationReport } from '../../widgets/index.js';
 import type { ResolveMedia } from './panel-media.js';
 import { PanelImageFigure } from './PanelImageFigure.js';
@@ -98,6 +100,15 @@ export function renderPanelNode(node: PanelNodeJSON, context: PanelRenderContext
       return (
         <span key={key} className="mp-live-value" style={liveValueStyle} data-widget-id={str(attrs.widgetId)} data-output={str(attrs.output)}>
           {liveValueText(reading, format, context.locale)}
+        </span>
+      );
+    }
+    case LIVE_PHRASE_NODE: {
+      const reading = readLivePhrase({ widgetId: str(attrs.widgetId), wordings: isLivePhraseWordings(attrs.wordings) ? attrs.wordings : {} }, context.readings);
+      // Polite, so a screen reader hears the new wording when the visitor tips the block over.
+      return (
+        <span key={key} className="mp-live-phrase" aria-live="polite" data-widget-id={str(attrs.widgetId)} data-state={reading.ok ? reading.state : undefined}>
+          {livePhraseText(reading)}
         </span>
       );
     }
