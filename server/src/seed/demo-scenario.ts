@@ -1,5 +1,4 @@
-import type { Role } from '@mantlepiece/shared';
-import type { Orientation } from '../venues/models/station.model.js';
+import type { Orientation, Role } from '@mantlepiece/shared';
 
 /** Our invented demo venue: nothing here describes a real place or person. */
 export const DEMO_VENUE = {

@@ -1,7 +1,7 @@
 import { ApiProperty, OmitType } from '@nestjs/swagger';
 import { IsIn } from 'class-validator';
+import { ORIENTATIONS, type Orientation } from '@mantlepiece/shared';
 import { IsIntBetween, PatchType } from '../../common/validation.js';
-import { ORIENTATIONS, type Orientation } from '../models/station.model.js';
 import { ListSettingsQuery } from '../settings.service.js';
 import { ParentFilterField, ParentIdField, SettingsNameField } from './settings-fields.js';
 

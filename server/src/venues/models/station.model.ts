@@ -1,8 +1,6 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { ORIENTATIONS, type Orientation } from '@mantlepiece/shared';
 import { Gallery } from './gallery.model.js';
-
-export const ORIENTATIONS = ['landscape', 'portrait'] as const;
-export type Orientation = (typeof ORIENTATIONS)[number];
 
 /** One fixed screen position in a gallery. */
 @Table({ tableName: 'stations' })
