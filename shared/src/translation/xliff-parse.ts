@@ -35,6 +35,12 @@ const SUPPORTED_VERSIONS = ['2.0', '2.1'];
 
 class Refusal extends Error {}
 
+/** saxes starts its messages with "line:column: "; the place is said once, in words, before the parser's reason. */
+function malformedMessage(error: unknown, line: number, column: number): string {
+  const reason = (error instanceof Error ? error.message : String(error)).replace(/^(?:[^:]*:)?\d+:\d+:\s*/, '');
+  return `The file is not well-formed XML at line ${line}, column ${column}: ${reason}.`;
+}
+
 interface PartContent {
   source: UnitRun[];
   target?: UnitRun[];
@@ -213,7 +219,7 @@ export function parseXliff(xml: string): XliffParse {
   try {
     parser.write(xml).close();
   } catch (error) {
-    if (!(error instanceof Refusal)) problems.push({ message: `The file is not well-formed XML: ${error instanceof Error ? error.message : String(error)}` });
+    if (!(error instanceof Refusal)) problems.push({ message: malformedMessage(error, parser.line, parser.column) });
   }
   if (problems.length > 0) return { ok: false, problems };
   if (!root) return { ok: false, problems: [{ message: 'The file has no <xliff> element.' }] };

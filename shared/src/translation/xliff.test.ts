@@ -139,6 +139,15 @@ describe('planXliffImport refuses the whole file', () => {
     expect(problemsOf(plan)[0]?.message).toMatch(/^The file is not well-formed XML/);
   });
 
+  it('naming the line of a malformed file once, in words', async () => {
+    const broken = (await exported()).replace('</source>', '</sauce>');
+    const line = broken.slice(0, broken.indexOf('</sauce>')).split('\n').length;
+    const plan = planXliffImport({ parsed: parseXliff(broken), expected, currentUnits: await storyUnits() });
+    const message = problemsOf(plan)[0]?.message ?? '';
+    expect(message).toMatch(new RegExp(`^The file is not well-formed XML at line ${line}, column \\d+: `));
+    expect(message).not.toMatch(/\d+:\d+:/);
+  });
+
   it('when it is not XLIFF 2.0 or 2.1', () => {
     expect(problemsOf(planXliffImport({ parsed: parseXliff('<xliff version="1.2" xmlns="urn:oasis:names:tc:xliff:document:1.2"/>'), expected, currentUnits: [] }))[0]?.message).toMatch(/not an XLIFF 2 file/);
     expect(problemsOf(planXliffImport({ parsed: parseXliff('<xliff version="2.2" xmlns="urn:oasis:names:tc:xliff:document:2.0" srcLang="en"/>'), expected, currentUnits: [] }))[0]?.message).toMatch(/version 2.2 is not supported/);

@@ -50,7 +50,8 @@ export function XliffExchange({ target, canUpload }: { target: TranslationTarget
         setOutcome({
           kind: 'refused',
           message: describeError(t, error),
-          problems: error instanceof ApiError ? error.errors.map((problem) => (problem.path.length ? `${problem.path.join(' › ')}: ${problem.message}` : problem.message)) : [],
+          // Each problem names its unit and place in words; the path repeats it in code form.
+          problems: error instanceof ApiError ? error.errors.map((problem) => problem.message) : [],
         }),
     });
   };
@@ -84,7 +85,7 @@ export function XliffExchange({ target, canUpload }: { target: TranslationTarget
       {outcome?.kind === 'wrongType' ? <FormAlert intent="error">{t('xliff.wrongType')}</FormAlert> : null}
       {outcome?.kind === 'refused' ? (
         <div role="alert" data-xliff-problems>
-          <FormAlert intent="error">{`${t('xliff.refused')} ${outcome.message}`}</FormAlert>
+          <FormAlert intent="error">{outcome.problems.length > 0 ? t('xliff.refused') : `${t('xliff.refused')} ${outcome.message}`}</FormAlert>
           {outcome.problems.length > 0 ? <ul className={styles.problems}>{outcome.problems.map((problem, index) => <li key={index}>{problem}</li>)}</ul> : null}
         </div>
       ) : null}
