@@ -10,7 +10,8 @@ export interface PanelTextOptions {
   locale?: string;
 }
 
-function inlineText(node: PanelNodeJSON, readings: ReadonlyMap<string, WidgetReading>, locale: string): string {
+/** One inline node's text as `panelText` writes it; the studio maps comment ranges into the editor with it. */
+export function inlineText(node: PanelNodeJSON, readings: ReadonlyMap<string, WidgetReading>, locale: string): string {
   if (node.type === 'text') return typeof node.text === 'string' ? node.text : '';
   if (node.type === 'hardBreak') return ' ';
   if (node.type === LIVE_VALUE_NODE) {
