@@ -1,9 +1,9 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
-import type { KioskCredential } from '@mantlepiece/shared';
+import { lazy, Suspense, useCallback, useEffect, useRef, useState } from 'react';
+import type { KioskCredential } from '@mantlepiece/shared/kiosk';
 import { EventOutbox, type VisitorEvent } from '../outbox/event-outbox';
 import { pairKiosk, type PairingStatus } from '../pairing/pairing';
 import { PairingScreen } from '../pairing/PairingScreen';
-import { Player, type PlayerScreen } from '../player/Player';
+import type { PlayerScreen } from '../player/Player';
 import { WaitingScreen } from '../screens/WaitingScreen';
 import type { ReleaseRefusal } from '../storage/kiosk-db';
 import type { KioskStore } from '../storage/kiosk-store';
@@ -25,6 +25,13 @@ export interface KioskAppProps {
   config: KioskConfig;
   appVersion: string;
 }
+
+/**
+ * The player (stories, panels, widget drawings) is a chunk of its own: a kiosk that pairs or waits
+ * never loads it, and the first chunk stays small (see the kiosk bench). The service worker keeps
+ * it on the device with everything else, so it loads offline too.
+ */
+const Player = lazy(() => import('../player/Player').then((module) => ({ default: module.Player })));
 
 /**
  * The whole kiosk: pairs when it has no credential, boots into the last good release from storage
@@ -133,6 +140,10 @@ export function KioskApp({ api, store, config, appVersion }: KioskAppProps) {
     case 'waiting':
       return <WaitingScreen venueLocales={venue.locales} refusal={refusal} />;
     case 'playing':
-      return <Player key={phase.release.releaseId} release={phase.release} config={config} record={record} onScreen={onScreen} />;
+      return (
+        <Suspense fallback={<div className="blank" aria-busy="true" />}>
+          <Player key={phase.release.releaseId} release={phase.release} config={config} record={record} onScreen={onScreen} />
+        </Suspense>
+      );
   }
 }

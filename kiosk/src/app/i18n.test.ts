@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { translationGaps } from '@mantlepiece/shared';
+import { translationGaps } from '@mantlepiece/shared/kiosk';
 import { chromeLanguage, KIOSK_LANGUAGES, kioskLanguages, resources } from './i18n';
 
 describe('kiosk words', () => {

@@ -1,6 +1,6 @@
 import i18next from 'i18next';
 import { initReactI18next } from 'react-i18next';
-import { UI_LANGUAGE_CODES, type Translated, type UiLanguage } from '@mantlepiece/shared';
+import { UI_LANGUAGE_CODES, type Translated, type UiLanguage } from '@mantlepiece/shared/kiosk';
 import { ar } from './locales/ar';
 import { en, type KioskMessages } from './locales/en';
 import { es } from './locales/es';

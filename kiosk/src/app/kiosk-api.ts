@@ -1,6 +1,6 @@
 import type {
   EventsBody, EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, KioskManifestResponse, PairCompleteWaiting, PairStartResponse,
-} from '@mantlepiece/shared';
+} from '@mantlepiece/shared/kiosk';
 
 /** The public view of the default venue, for the attract loop before the kiosk is paired. */
 export interface KioskVenue {

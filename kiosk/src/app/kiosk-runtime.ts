@@ -1,4 +1,4 @@
-import type { KioskCredential } from '@mantlepiece/shared';
+import type { KioskCredential } from '@mantlepiece/shared/kiosk';
 import { EventOutbox } from '../outbox/event-outbox';
 import { heartbeatBody, sendHeartbeat } from '../outbox/heartbeat';
 import type { ReleaseRefusal } from '../storage/kiosk-db';

@@ -1,4 +1,4 @@
-import type { KioskEvent } from '@mantlepiece/shared';
+import type { KioskEvent } from '@mantlepiece/shared/kiosk';
 import type { KioskApi } from '../app/kiosk-api';
 import type { KioskDb } from '../storage/kiosk-db';
 

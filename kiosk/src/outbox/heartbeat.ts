@@ -1,4 +1,4 @@
-import { publicationExpired, toReportText, type HeartbeatBody } from '@mantlepiece/shared';
+import { publicationExpired, toReportText, type HeartbeatBody } from '@mantlepiece/shared/kiosk';
 import type { KioskApi } from '../app/kiosk-api';
 import type { KioskStore } from '../storage/kiosk-store';
 

@@ -1,4 +1,4 @@
-import type { KioskCredential, PairStartResponse } from '@mantlepiece/shared';
+import type { KioskCredential, PairStartResponse } from '@mantlepiece/shared/kiosk';
 import type { KioskApi } from '../app/kiosk-api';
 import { wait } from '../app/wait';
 import type { KioskStore } from '../storage/kiosk-store';

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { useReducedMotion } from '@mantlepiece/shared/react';
+import { useReducedMotion } from '@mantlepiece/shared/kiosk';
 import { kioskLanguages } from '../app/i18n';
 import { Multilingual } from '../screens/Multilingual';
 import type { PlayableRelease } from '../sync/playable-release';

@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useMemo, useState } from 'react';
-import { directionOf, type KioskSwitch } from '@mantlepiece/shared';
-import { useReducedMotion } from '@mantlepiece/shared/react';
+import { directionOf, type KioskSwitch } from '@mantlepiece/shared/kiosk';
+import { useReducedMotion } from '@mantlepiece/shared/kiosk';
 import type { KioskConfig } from '../app/config';
 import { chromeLanguage, i18next } from '../app/i18n';
 import type { VisitorEvent } from '../outbox/event-outbox';

@@ -1,7 +1,7 @@
 import { useEffect, useLayoutEffect, useMemo, useRef, useState, type PointerEvent } from 'react';
 import type { TFunction } from 'i18next';
-import { directionOf, type PanelLayout, type ReleaseStory } from '@mantlepiece/shared';
-import { PanelFrame, PanelView } from '@mantlepiece/shared/react';
+import { directionOf, type PanelLayout, type ReleaseStory } from '@mantlepiece/shared/kiosk';
+import { PanelFrame, PanelView } from '@mantlepiece/shared/kiosk';
 import type { VisitorEvent } from '../outbox/event-outbox';
 import type { PlayableRelease } from '../sync/playable-release';
 import { mediaResolver, panelDoc, panelsInOrder } from './release-content';

@@ -1,6 +1,6 @@
-import { useReducedMotion } from '@mantlepiece/shared/react';
+import { useReducedMotion } from '@mantlepiece/shared/kiosk';
 import type { TFunction } from 'i18next';
-import type { KioskSwitch } from '@mantlepiece/shared';
+import type { KioskSwitch } from '@mantlepiece/shared/kiosk';
 import { endonym } from './language-names';
 import { SWITCH_SETTING, type VisitorSettings } from './visitor-settings';
 

@@ -1,6 +1,6 @@
-import type { PanelDocJSON, ReleaseManifest, ReleasePanel, ReleaseStory } from '@mantlepiece/shared';
-import type { ResolveMedia } from '@mantlepiece/shared/react';
-import { mediaIdsIn } from '@mantlepiece/shared';
+import type { PanelDocJSON, ReleaseManifest, ReleasePanel, ReleaseStory } from '@mantlepiece/shared/kiosk';
+import type { ResolveMedia } from '@mantlepiece/shared/kiosk';
+import { mediaIdsIn } from '@mantlepiece/shared/kiosk';
 import type { PlayableRelease } from '../sync/playable-release';
 
 /** A panel's document in the visitor's language, or in the source language when it has none. */

@@ -1,4 +1,4 @@
-import type { KioskSwitch } from '@mantlepiece/shared';
+import type { KioskSwitch } from '@mantlepiece/shared/kiosk';
 
 /** What one visitor chose; the idle reset puts it all back for the next one. */
 export interface VisitorSettings {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { PanelDocJSON } from '@mantlepiece/shared';
+import type { PanelDocJSON } from '@mantlepiece/shared/kiosk';
 import type { VisitorEvent } from '../outbox/event-outbox';
 import { WidgetTouches } from './widget-touches';
 

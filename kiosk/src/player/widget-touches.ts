@@ -1,4 +1,4 @@
-import { widgetsIn, type PanelDocJSON } from '@mantlepiece/shared';
+import { widgetsIn, type PanelDocJSON } from '@mantlepiece/shared/kiosk';
 import type { VisitorEvent } from '../outbox/event-outbox';
 
 const sameValue = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);

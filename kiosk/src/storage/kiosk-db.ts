@@ -1,5 +1,5 @@
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
-import type { FollowedPublication, KioskCredential, KioskEvent } from '@mantlepiece/shared';
+import type { FollowedPublication, KioskCredential, KioskEvent } from '@mantlepiece/shared/kiosk';
 
 /** A file of a release, checked against its SHA-256 before it is stored here. */
 export interface StoredFile {

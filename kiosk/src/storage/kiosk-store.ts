@@ -1,4 +1,4 @@
-import { parseManifest, type KioskCredential } from '@mantlepiece/shared';
+import { parseManifest, type KioskCredential } from '@mantlepiece/shared/kiosk';
 import type { KioskDb, KioskMeta, StoredChunk, StoredFile, StoredRelease } from './kiosk-db';
 
 const EMPTY_META: KioskMeta = { current: null, previous: null, pending: null, manifestEtag: null, lastError: null, publication: null, refusal: null, unpairedAt: null };

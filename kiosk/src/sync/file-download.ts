@@ -1,4 +1,4 @@
-import { sha256HexOfBytes, type ReleaseFile } from '@mantlepiece/shared';
+import { sha256HexOfBytes, type ReleaseFile } from '@mantlepiece/shared/kiosk';
 import type { KioskApi } from '../app/kiosk-api';
 import type { KioskStore } from '../storage/kiosk-store';
 

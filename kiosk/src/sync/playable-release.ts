@@ -1,4 +1,4 @@
-import { parseManifest, verifyManifest, type ReleaseManifest, type ReleaseMedia } from '@mantlepiece/shared';
+import { parseManifest, verifyManifest, type ReleaseManifest, type ReleaseMedia } from '@mantlepiece/shared/kiosk';
 import type { KioskStore } from '../storage/kiosk-store';
 import { promotePendingRelease } from './release-sync';
 

@@ -1,4 +1,4 @@
-import { checkPublication, laterPublication, missingFiles, parseManifest, sha256Hex, verifyManifest, type KioskCredential } from '@mantlepiece/shared';
+import { checkPublication, laterPublication, missingFiles, parseManifest, sha256Hex, verifyManifest, type KioskCredential } from '@mantlepiece/shared/kiosk';
 import type { KioskApi } from '../app/kiosk-api';
 import type { ReleaseRefusal } from '../storage/kiosk-db';
 import type { KioskStore } from '../storage/kiosk-store';

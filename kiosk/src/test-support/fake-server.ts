@@ -1,4 +1,4 @@
-import type { PairStartResponse } from '@mantlepiece/shared';
+import type { PairStartResponse } from '@mantlepiece/shared/kiosk';
 import type { Fetch } from '../app/kiosk-api';
 import type { FixtureRelease } from './release-fixture';
 

@@ -2,7 +2,7 @@
 import { createHash, generateKeyPairSync, sign } from 'node:crypto';
 import {
   PUBLICATION_FORMAT, RELEASE_FORMAT, serializeManifest, serializePublication, type KioskCredential, type KioskManifestResponse, type ReleaseManifest, type ReleaseStory,
-} from '@mantlepiece/shared';
+} from '@mantlepiece/shared/kiosk';
 
 /** A venue key pair made with node:crypto, as the server makes and signs with it. */
 export function venueKey() {

@@ -1,4 +1,4 @@
-import type { Translated } from '@mantlepiece/shared';
+import type { Translated } from '@mantlepiece/shared/kiosk';
 import type { KioskMessages } from './en';
 
 export const ar: Translated<KioskMessages> = {
