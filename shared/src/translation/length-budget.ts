@@ -100,6 +100,6 @@ export function lengthBudgetWarning(unit: TranslationUnit, targetRuns: readonly 
     panelNumber: unit.context.panelNumber ?? null,
     length,
     budget,
-    message: `Unit ${unit.id} is ${length} characters long, ${length - budget} over its budget of ${budget}: the text may not fit on the screen.`,
+    message: `Unit ${unit.id} is ${length} characters long, ${length - budget} over its budget of ${budget}: ${unit.kind === 'altText' ? 'alt text is read aloud by screen readers, not shown, and a long one is tiring to listen to' : 'the text may not fit on the screen'}.`,
   };
 }

@@ -154,7 +154,7 @@ export function UnitEditor({ unit, target, sourceLocale, languageName, heading, 
               aria-keyshortcuts="Control+Enter Alt+ArrowUp Alt+ArrowDown"
             />
           </Field>
-          <LengthBudget length={visibleLength(runs, unit.placeholders)} budget={unit.budget} />
+          <LengthBudget length={visibleLength(runs, unit.placeholders)} budget={unit.budget} kind={unit.kind} />
           {text ? (
             <div>
               <Text size={200} weight="semibold" className={styles.label}>{t('unitEditor.readsAs')}</Text>

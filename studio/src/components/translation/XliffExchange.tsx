@@ -109,7 +109,7 @@ function OverBudget({ warnings }: { warnings: readonly LengthBudgetWarning[] }) 
                 kind: t(`workspace.kinds.${warning.kind}`),
               })}
             </TextLink>
-            {` — ${t('unitEditor.overBudget', { over: warning.length - warning.budget, budget: warning.budget })}`}
+            {` — ${t(warning.kind === 'altText' ? 'unitEditor.overBudgetAltText' : 'unitEditor.overBudget', { over: warning.length - warning.budget, budget: warning.budget })}`}
           </li>
         ))}
       </ul>
