@@ -8,23 +8,32 @@ import { jsonBodyOptions } from './common/json-body.js';
 import { createValidationPipe } from './common/validation.js';
 import { ConfigService } from './config/config.service.js';
 import { MEDIA_FILES_PATH } from './media/media-files.controller.js';
+import { MEDIA_STORE, type MediaStore } from './media/media-store.js';
+import { releaseFileKey } from './releases/release-file-store.js';
 import { answerUnknownPaths, serveApps } from './static/serve-apps.js';
 import { securityHeaders } from './static/security-headers.js';
 
 /** Configures and initialises the app the same way for the running server and for the tests. */
 export async function initApp(app: NestExpressApplication): Promise<void> {
-  configureApp(app);
+  configureApp(app, await presignedFileOrigin(app));
   await app.init();
   answerUnknownPaths(app);
 }
 
+/** Where kiosks are sent for release files: the origin of the store's presigned URLs, when it gives them. */
+async function presignedFileOrigin(app: NestExpressApplication): Promise<string | null> {
+  const seconds = app.get(ConfigService).presignedUrlSeconds;
+  const url = seconds > 0 ? await app.get<MediaStore>(MEDIA_STORE).presignedUrl(releaseFileKey('0'.repeat(64)), { contentType: 'application/octet-stream', expiresInS: seconds }) : null;
+  return url ? new URL(url).origin : null;
+}
+
 /** Everything around the modules, before Nest mounts its routes. */
-function configureApp(app: NestExpressApplication): void {
+function configureApp(app: NestExpressApplication, fileOrigin: string | null): void {
   const config = app.get(ConfigService);
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
   // First, so that every answer carries them: pages, assets, API responses and errors alike.
-  app.use(securityHeaders({ https: config.overHttps }));
+  app.use(securityHeaders({ https: config.overHttps, fileOrigin }));
   app.setGlobalPrefix('api', { exclude: [{ path: MEDIA_FILES_PATH, method: RequestMethod.GET }] });
   app.use(cookieParser());
   // Express names this parser jsonParser, so Nest sees one applied and adds none of its own.

@@ -1,17 +1,16 @@
 import { Body, Controller, Get, Headers, HttpCode, HttpStatus, Ip, NotFoundException, Param, Post, Req, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
-import type { KioskManifestResponse } from '@mantlepiece/shared';
 import { Public } from '../auth/auth.decorators.js';
-import { CurrentKiosk, KioskRoute, type KioskRequest } from './device-token.guard.js';
+import { IMMUTABLE, sendStoredObject } from '../media/stored-file-response.js';
+import { CurrentKiosk, KioskRoute, type PairedKiosk } from './device-token.guard.js';
 import { HeartbeatDto, KioskEventsDto } from './dto/kiosk-report.dto.js';
+import { KioskReleasesService } from './kiosk-releases.service.js';
 import { CompletePairingDto } from './dto/pairing.dto.js';
 import { KiosksService } from './kiosks.service.js';
 import { PairingService } from './pairing.service.js';
 
 const SHA256 = /^[0-9a-f]{64}$/;
-
-type PairedKiosk = KioskRequest['kiosk'];
 
 /** What a kiosk calls: pairing without a credential, everything else with its device token. */
 @ApiTags('kiosk')
@@ -20,6 +19,7 @@ export class KioskController {
   constructor(
     private readonly pairing: PairingService,
     private readonly kiosks: KiosksService,
+    private readonly releases: KioskReleasesService,
   ) {}
 
   @Public()
@@ -41,34 +41,32 @@ export class KioskController {
   @KioskRoute()
   @Get('manifest')
   async manifest(@CurrentKiosk() kiosk: PairedKiosk, @Headers('if-none-match') ifNoneMatch: string | undefined, @Res() res: Response): Promise<void> {
-    const { etag, ...answer } = await this.kiosks.liveManifest(kiosk);
+    const { etag, body } = await this.releases.liveManifest(kiosk.station.galleryId);
     res.set({ ETag: etag, 'Cache-Control': 'no-cache' });
     if (ifNoneMatch?.split(',').some((tag) => tag.trim() === etag)) {
       res.status(HttpStatus.NOT_MODIFIED).end();
       return;
     }
-    res.json(answer satisfies KioskManifestResponse);
+    res.set({ 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': String(body.length) }).end(body);
   }
 
-  /** Named by content, so immutable; a byte range resumes a broken download. */
+  /**
+   * Named by content, so immutable; a byte range resumes a broken download. From object storage
+   * the kiosk is sent to a short-lived presigned URL of the bucket (it checks every hash anyway).
+   */
   @ApiBearerAuth()
   @KioskRoute()
   @Get('files/:sha256')
   async file(@CurrentKiosk() kiosk: PairedKiosk, @Param('sha256') sha256: string, @Req() req: Request, @Res() res: Response): Promise<void> {
     if (!SHA256.test(sha256)) throw new NotFoundException('This gallery has no such file.');
-    const { data, mime } = await this.kiosks.file(kiosk, sha256);
-    res.set({ 'Content-Type': mime, 'Cache-Control': 'public, max-age=31536000, immutable', 'Accept-Ranges': 'bytes', 'X-Content-Type-Options': 'nosniff', ETag: `"${sha256}"` });
-    const ranges = req.headers.range ? req.range(data.length, { combine: true }) : undefined;
-    if (ranges === -1) {
-      res.status(HttpStatus.REQUESTED_RANGE_NOT_SATISFIABLE).set('Content-Range', `bytes */${data.length}`).end();
+    const { mime, redirectTo, source } = await this.releases.file(kiosk.station.galleryId, sha256);
+    if (redirectTo) {
+      // The URL outlives no more than its signature: nothing may keep the redirect.
+      res.set('Cache-Control', 'no-store').redirect(HttpStatus.FOUND, redirectTo);
       return;
     }
-    if (Array.isArray(ranges) && ranges.type === 'bytes' && ranges.length === 1) {
-      const { start, end } = ranges[0]!;
-      res.status(HttpStatus.PARTIAL_CONTENT).set({ 'Content-Range': `bytes ${start}-${end}/${data.length}`, 'Content-Length': String(end - start + 1) }).end(data.subarray(start, end + 1));
-      return;
-    }
-    res.set('Content-Length', String(data.length)).end(data);
+    const sent = await sendStoredObject(req, res, source, { 'Content-Type': mime, 'Cache-Control': IMMUTABLE, 'X-Content-Type-Options': 'nosniff', ETag: `"${sha256}"` });
+    if (!sent) throw new NotFoundException('This gallery has no such file.');
   }
 
   @ApiBearerAuth()

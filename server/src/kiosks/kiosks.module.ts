@@ -11,6 +11,7 @@ import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { DeviceTokenGuard } from './device-token.guard.js';
 import { KioskController } from './kiosk.controller.js';
+import { KioskReleasesService } from './kiosk-releases.service.js';
 import { KiosksController } from './kiosks.controller.js';
 import { KiosksService } from './kiosks.service.js';
 import { KioskEvent } from './models/kiosk-event.model.js';
@@ -26,7 +27,7 @@ import { PairingService } from './pairing.service.js';
     ReleasesModule, FleetStatesModule, RateLimitsModule,
   ],
   controllers: [KioskController, KiosksController],
-  providers: [PairingService, PairingAttemptsService, KiosksService, DeviceTokenGuard],
+  providers: [PairingService, PairingAttemptsService, KiosksService, KioskReleasesService, DeviceTokenGuard],
   exports: [KiosksService],
 })
 export class KiosksModule {}

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import type { Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import { PUBLICATION_FORMAT, serializePublication } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
@@ -16,6 +16,12 @@ const DAY_MS = 86_400_000;
 export interface SignedPublicationOf {
   publication: Publication & { record: string; signature: string };
   release: Release;
+}
+
+/** One signing of a gallery's latest publication. */
+export interface PublicationVersion {
+  id: number;
+  expiresAt: Date | null;
 }
 
 /**
@@ -62,6 +68,24 @@ export class PublicationsService {
   }
 
   /**
+   * Which publication is the gallery's latest, and which signing of it: one read on the unique
+   * (gallery, sequence) key, so a cache of the signed answer can check on every request, on every
+   * server instance, that a publish, rollback or re-signing elsewhere has not made it stale.
+   */
+  async latestVersion(galleryId: number): Promise<PublicationVersion | null> {
+    const [row] = await this.publications.sequelize!.query<{ id: number; expires_at: Date | null }>(
+      'SELECT id, expires_at FROM publications WHERE gallery_id = ? ORDER BY sequence DESC LIMIT 1',
+      { replacements: [galleryId], type: QueryTypes.SELECT },
+    );
+    return row ? { id: row.id, expiresAt: row.expires_at } : null;
+  }
+
+  /** When a record that expires at `expiresAt` is signed again: half its lifetime before. */
+  resignsAt(expiresAt: Date): number {
+    return expiresAt.getTime() - this.lifetimeMs / 2;
+  }
+
+  /**
    * Signs the record with a fresh expiry. Two instances may sign at once: the update is
    * conditional on the copy this one read, and the loser takes the winner's copy.
    */
@@ -88,6 +112,6 @@ export class PublicationsService {
 
   private needsSigning(publication: Publication): boolean {
     if (!publication.record || !publication.signature || !publication.expiresAt) return true;
-    return publication.expiresAt.getTime() - this.clock.now().getTime() <= this.lifetimeMs / 2;
+    return this.clock.now().getTime() >= this.resignsAt(publication.expiresAt);
   }
 }

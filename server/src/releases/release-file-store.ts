@@ -3,6 +3,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op } from 'sequelize';
 import { MEDIA_STORE, type MediaStore } from '../media/media-store.js';
+import { storedObject, type StoredObjectSource } from '../media/stored-file-response.js';
 import { ReleaseFile } from './models/release-file.model.js';
 
 /** Release files by hash, apart from the media library's keys, so deleting an image never breaks a release. */
@@ -47,6 +48,15 @@ export class ReleaseFileStore {
 
   get(sha256: string): Promise<Buffer | null> {
     return this.store.get(releaseFileKey(sha256));
+  }
+
+  source(sha256: string): StoredObjectSource {
+    return storedObject(this.store, releaseFileKey(sha256));
+  }
+
+  /** A short-lived URL of the file in the bucket, or null on the local disk. */
+  presignedUrl(sha256: string, mime: string, expiresInS: number): Promise<string | null> {
+    return this.store.presignedUrl(releaseFileKey(sha256), { contentType: mime, expiresInS });
   }
 
   /** Forgets the release's files and deletes the bytes no other release lists. */

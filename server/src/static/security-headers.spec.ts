@@ -67,7 +67,7 @@ describe('security headers', () => {
   });
 
   it('keeps browsers on HTTPS once people reach the server over it', async () => {
-    const res = await request(express().use(securityHeaders({ https: true })).get('/', (_req, reply) => reply.send('ok'))).get('/');
+    const res = await request(express().use(securityHeaders({ https: true, fileOrigin: null })).get('/', (_req, reply) => reply.send('ok'))).get('/');
     expect(res.headers['strict-transport-security']).toBe('max-age=31536000; includeSubDomains');
     expect(policyOf(res)['upgrade-insecure-requests']).toEqual([]);
   });

@@ -42,9 +42,11 @@ const PERMISSIONS_POLICY = [
  * with our policy. Over HTTPS, browsers are also told to keep to it (HSTS, upgrade-insecure-requests);
  * over plain HTTP on a venue's own network those would only break the page.
  */
-export function securityHeaders(options: { https: boolean }): (req: Request, res: Response, next: NextFunction) => void {
+export function securityHeaders(options: { https: boolean; fileOrigin: string | null }): (req: Request, res: Response, next: NextFunction) => void {
+  // A kiosk sent to a presigned URL of the bucket fetches from the bucket's origin.
+  const connectSrc = options.fileOrigin ? ["'self'", options.fileOrigin] : ["'self'"];
   const headers = helmet({
-    contentSecurityPolicy: { useDefaults: false, directives: { ...directives, 'upgrade-insecure-requests': options.https ? [] : null } },
+    contentSecurityPolicy: { useDefaults: false, directives: { ...directives, 'connect-src': connectSrc, 'upgrade-insecure-requests': options.https ? [] : null } },
     strictTransportSecurity: options.https ? { maxAge: 31_536_000 } : false,
     xFrameOptions: { action: 'deny' },
     referrerPolicy: { policy: 'no-referrer' },
