@@ -40,7 +40,7 @@ export function PlaceholderChips({ placeholders, uses, onInsert }: {
                 shape="circular"
                 appearance={use === 'placed' ? 'secondary' : 'outline'}
                 icon={use === 'placed' ? <CheckmarkCircleRegular className={styles.placed} /> : <ErrorCircleRegular className={styles.problem} />}
-                aria-label={`${label} (${t(`unitEditor.${use}`)})`}
+                // The name is the chip's own words (WCAG 2.5.3 Label in Name); what pressing does is its description.
                 title={label}
                 data-placeholder-chip={placeholder.id}
                 data-use={use}
@@ -49,7 +49,7 @@ export function PlaceholderChips({ placeholders, uses, onInsert }: {
                 onClick={() => onInsert(placeholder)}
               >
                 <span className={styles.token}>{token}</span>&nbsp;{meaning}
-                {use === 'placed' ? null : <span className={styles.problem}>&nbsp;· {t(`unitEditor.${use}`)}</span>}
+                <span className={use === 'placed' ? styles.placed : styles.problem}>&nbsp;· {t(`unitEditor.${use}`)}</span>
               </Button>
             </li>
           );
