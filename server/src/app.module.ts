@@ -10,6 +10,7 @@ import { ExhibitsModule } from './exhibits/exhibits.module.js';
 import { FleetModule } from './fleet/fleet.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InsightsModule } from './insights/insights.module.js';
+import { JobsModule } from './jobs/jobs.module.js';
 import { KiosksModule } from './kiosks/kiosks.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { MediaModule } from './media/media.module.js';
@@ -27,7 +28,7 @@ import { WidgetsModule } from './widgets/widgets.module.js';
 
 @Module({
   imports: [
-    ConfigModule, ClockModule, DatabaseModule, AuditModule, MailModule, UsersModule, AuthModule,
+    ConfigModule, ClockModule, DatabaseModule, JobsModule, AuditModule, MailModule, UsersModule, AuthModule,
     DevMailModule, HealthModule, VenuesModule, WidgetsModule,
     ExhibitsModule, StoriesModule, PanelsModule, MediaModule, TranslationsModule,
     NotificationsModule, CommentsModule, RevisionsModule, ReviewsModule,

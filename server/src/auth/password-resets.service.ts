@@ -6,6 +6,8 @@ import { AuditService } from '../audit/audit.service.js';
 import { Clock } from '../clock/clock.service.js';
 import { hashToken, newToken } from '../common/tokens.js';
 import { ConfigService } from '../config/config.service.js';
+import type { ClaimQueue } from '../jobs/claim-queue.js';
+import { JobClaims } from '../jobs/job-claims.service.js';
 import { MailService } from '../mail/mail.service.js';
 import { RateLimitsService } from '../rate-limits/rate-limits.service.js';
 import { User } from '../users/models/user.model.js';
@@ -18,6 +20,7 @@ import { SignInAttemptsService } from './sign-in-attempts.service.js';
 
 const HOUR_MS = 3_600_000;
 const BATCH = 20;
+const CLAIM_MS = 60_000;
 
 /**
  * Password reset by e-mail link: works once, until it expires, and only while it is the
@@ -26,9 +29,12 @@ const BATCH = 20;
  */
 @Injectable()
 export class PasswordResetsService {
+  private readonly queue: ClaimQueue<PasswordResetRequest>;
+
   constructor(
     @InjectModel(PasswordReset) private readonly resets: typeof PasswordReset,
     @InjectModel(PasswordResetRequest) private readonly requests: typeof PasswordResetRequest,
+    claims: JobClaims,
     private readonly sequelize: Sequelize,
     private readonly users: UsersService,
     private readonly hasher: PasswordHasher,
@@ -39,7 +45,9 @@ export class PasswordResetsService {
     private readonly audit: AuditService,
     private readonly clock: Clock,
     private readonly config: ConfigService,
-  ) {}
+  ) {
+    this.queue = claims.queue(requests, CLAIM_MS);
+  }
 
   /** Queues the request, within the limits per typed address and per client address; says nothing more. */
   async requestReset(email: string, clientAddress: string): Promise<void> {
@@ -50,16 +58,16 @@ export class PasswordResetsService {
     await this.requests.create({ email, clientAddress });
   }
 
-  /** The worker's part: a link for each queued request whose address has an active account; older links stop working. */
+  /**
+   * The worker's part: a link for each queued request whose address has an active account; older
+   * links stop working. Requests are claimed (see ClaimQueue), and each is marked processed in the
+   * transaction that queues its mail, so a request is mailed once however many instances poll.
+   * Returns how many requests it processed.
+   */
   async mailRequestedLinks(): Promise<number> {
-    const queued = await this.requests.findAll({ where: { processedAt: null }, order: [['id', 'ASC']], limit: BATCH });
-    let mailed = 0;
-    for (const request of queued) {
-      // Claimed by a conditional update, so two server instances never mail one request twice.
-      const [claimed] = await this.requests.update({ processedAt: this.clock.now() }, { where: { id: request.id, processedAt: null } });
-      if (claimed === 1 && (await this.mailLink(request))) mailed += 1;
-    }
-    return mailed;
+    const claimed = await this.queue.claim({ processedAt: null }, { order: [['id', 'ASC']], limit: BATCH });
+    for (const request of claimed) await this.process(request);
+    return claimed.length;
   }
 
   /** Sets the new password, uses up the link, voids the account's other links and ends all its sessions. */
@@ -88,11 +96,13 @@ export class PasswordResetsService {
     await this.signInAttempts.clearAccount(email);
   }
 
-  private async mailLink(request: PasswordResetRequest): Promise<boolean> {
+  private async process(request: PasswordResetRequest): Promise<void> {
     const user = await this.users.findByEmail(request.email);
-    if (!user?.active) return false;
     const token = newToken();
     await this.sequelize.transaction(async (transaction) => {
+      // Lost to another instance after this one's claim ran out: that one mails it.
+      if (!(await this.queue.settle(request.id, { processedAt: this.clock.now() }, transaction))) return;
+      if (!user?.active) return;
       await this.voidLinksOf(user.id, transaction);
       const reset = await this.resets.create({
         userId: user.id,
@@ -103,7 +113,6 @@ export class PasswordResetsService {
         kind: 'password-reset', name: user.name, link: this.mail.studioLink(`/reset-password/${token}`), expiresAt: reset.expiresAt,
       }, transaction);
     });
-    return true;
   }
 
   private async voidLinksOf(userId: number, transaction: Transaction): Promise<void> {

@@ -1,9 +1,10 @@
-import { Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import { Injectable, type OnModuleInit } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
+import { BackgroundJobs } from '../jobs/background-jobs.service.js';
 import { Kiosk } from '../kiosks/models/kiosk.model.js';
 import type { MailContent } from '../mail/mail-templates.js';
 import { MailService } from '../mail/mail.service.js';
@@ -27,12 +28,11 @@ const isTechnician = Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col
  * Tells technicians when a kiosk has been silent past the offline threshold, and again when it
  * reports back. The alert is claimed on the kiosk row with a conditional update before the mail
  * is queued in the same transaction, so each goes out once however often (and on however many
- * server instances) the check runs.
+ * server instances) the check runs. The timer's checks run as a singleton background job: one
+ * instance at a time judges, under the `fleet-watch` lease.
  */
 @Injectable()
-export class SilentKioskWatcher implements OnApplicationBootstrap, OnApplicationShutdown {
-  private readonly logger = new Logger('SilentKioskWatcher');
-  private timer?: NodeJS.Timeout;
+export class SilentKioskWatcher implements OnModuleInit {
   /**
    * No kiosk could report while this server was down, so silence is judged only once a whole
    * offline threshold has passed since it started: kiosks that played throughout report in that
@@ -48,20 +48,21 @@ export class SilentKioskWatcher implements OnApplicationBootstrap, OnApplication
     private readonly clock: Clock,
     private readonly config: ConfigService,
     private readonly sequelize: Sequelize,
+    private readonly jobs: BackgroundJobs,
   ) {
     this.judgesSilenceFrom = new Date(clock.now().getTime() + states.thresholds.offlineAfterS * 1000);
   }
 
-  onApplicationBootstrap(): void {
-    if (this.config.fleetWatchIntervalMs === 0) return;
-    this.timer = setInterval(() => {
-      this.check().catch((error: unknown) => this.logger.error(error instanceof Error ? error.message : String(error)));
-    }, this.config.fleetWatchIntervalMs);
-    this.timer.unref();
-  }
-
-  onApplicationShutdown(): void {
-    clearInterval(this.timer);
+  onModuleInit(): void {
+    this.jobs.register({
+      name: 'fleet-watch',
+      intervalMs: this.config.fleetWatchIntervalMs,
+      singleton: true,
+      run: async () => {
+        const { silent, back } = await this.check();
+        return silent.length + back.length;
+      },
+    });
   }
 
   async check(now: Date = this.clock.now()): Promise<WatchReport> {

@@ -28,7 +28,7 @@ describe('mail outbox', () => {
       const worker = down.app.get(MailOutboxWorker);
       expect((await worker.deliverDue()).failed).toContain(message.id);
       await message.reload();
-      expect(message).toMatchObject({ attempts: 1, sentAt: null, lockedUntil: null, lastError: expect.stringMatching(/ECONNREFUSED/) });
+      expect(message).toMatchObject({ attempts: 1, sentAt: null, claimedBy: null, claimExpiresAt: null, lastError: expect.stringMatching(/ECONNREFUSED/) });
       expect(message.nextAttemptAt).toEqual(new Date(clock.now().getTime() + retryDelayMs(1)));
       // Not due again until the back-off has passed.
       expect((await worker.deliverDue()).failed).not.toContain(message.id);

@@ -1,8 +1,11 @@
-import { Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import { Injectable, Logger, OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op } from 'sequelize';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
+import { BackgroundJobs } from '../jobs/background-jobs.service.js';
+import type { ClaimQueue } from '../jobs/claim-queue.js';
+import { JobClaims } from '../jobs/job-claims.service.js';
 import { MailTransport } from './mail-transport.js';
 import { OutboxMessage } from './models/outbox-message.model.js';
 
@@ -21,49 +24,48 @@ export interface DeliveryReport {
 }
 
 /**
- * Sends what is due in the outbox. Each message is claimed with a conditional update first, so
- * several server instances can poll the same table without sending a message twice.
+ * Sends what is due in the outbox. Messages are claimed first (see ClaimQueue), so several server
+ * instances can poll the same table without sending a message twice; a message claimed by an
+ * instance that died is sent by another once the claim runs out.
  */
 @Injectable()
-export class MailOutboxWorker implements OnApplicationBootstrap, OnApplicationShutdown {
+export class MailOutboxWorker implements OnModuleInit, OnApplicationShutdown {
   private readonly logger = new Logger('MailOutbox');
-  private timer?: NodeJS.Timeout;
-  private running = false;
+  private readonly queue: ClaimQueue<OutboxMessage>;
 
   constructor(
-    @InjectModel(OutboxMessage) private readonly outbox: typeof OutboxMessage,
+    @InjectModel(OutboxMessage) outbox: typeof OutboxMessage,
+    claims: JobClaims,
+    private readonly jobs: BackgroundJobs,
     private readonly transport: MailTransport,
     private readonly clock: Clock,
     private readonly config: ConfigService,
-  ) {}
+  ) {
+    this.queue = claims.queue(outbox, CLAIM_MS);
+  }
 
-  onApplicationBootstrap(): void {
-    if (this.config.mailPollIntervalMs === 0) return;
-    this.timer = setInterval(() => void this.poll(), this.config.mailPollIntervalMs);
-    this.timer.unref();
+  onModuleInit(): void {
+    this.jobs.register({
+      name: 'mail-outbox',
+      intervalMs: this.config.mailPollIntervalMs,
+      run: async () => {
+        const { sent, failed } = await this.deliverDue();
+        return sent.length + failed.length;
+      },
+    });
   }
 
   onApplicationShutdown(): void {
-    clearInterval(this.timer);
     this.transport.close();
   }
 
   async deliverDue(): Promise<DeliveryReport> {
     const report: DeliveryReport = { sent: [], failed: [] };
-    const now = this.clock.now();
-    const unclaimed = { [Op.or]: [{ lockedUntil: null }, { lockedUntil: { [Op.lt]: now } }] };
-    const due = await this.outbox.findAll({
-      where: { sentAt: null, nextAttemptAt: { [Op.lte]: now }, ...unclaimed },
-      order: [['nextAttemptAt', 'ASC'], ['id', 'ASC']],
-      limit: BATCH,
-    });
-    for (const message of due) {
-      const [claimed] = await this.outbox.update(
-        { lockedUntil: new Date(now.getTime() + CLAIM_MS) },
-        { where: { id: message.id, sentAt: null, ...unclaimed } },
-      );
-      if (claimed === 1) await this.deliver(message, report);
-    }
+    const due = await this.queue.claim(
+      { sentAt: null, nextAttemptAt: { [Op.lte]: this.clock.now() } },
+      { order: [['nextAttemptAt', 'ASC'], ['id', 'ASC']], limit: BATCH },
+    );
+    for (const message of due) await this.deliver(message, report);
     return report;
   }
 
@@ -71,35 +73,13 @@ export class MailOutboxWorker implements OnApplicationBootstrap, OnApplicationSh
     const attempts = message.attempts + 1;
     try {
       await this.transport.send({ to: message.recipient, subject: message.subject, text: message.textBody, html: message.htmlBody });
-      await this.settle(message, { attempts, sentAt: this.clock.now(), lockedUntil: null, lastError: null });
+      await this.queue.settle(message.id, { attempts, sentAt: this.clock.now(), lastError: null });
       report.sent.push(message.id);
     } catch (error) {
       const reason = error instanceof Error ? error.message : String(error);
-      await this.settle(message, {
-        attempts,
-        nextAttemptAt: this.clock.fromNow(retryDelayMs(attempts)),
-        lockedUntil: null,
-        lastError: reason.slice(0, 1000),
-      });
+      await this.queue.settle(message.id, { attempts, nextAttemptAt: this.clock.fromNow(retryDelayMs(attempts)), lastError: reason.slice(0, 1000) });
       report.failed.push(message.id);
       this.logger.warn(`message ${message.id} to ${message.recipient} not sent (try ${attempts}): ${reason}`);
-    }
-  }
-
-  /** By id, not through the instance: the instance never saw the claim, so it would skip clearing it. */
-  private async settle(message: OutboxMessage, outcome: Partial<OutboxMessage>): Promise<void> {
-    await this.outbox.update(outcome, { where: { id: message.id } });
-  }
-
-  private async poll(): Promise<void> {
-    if (this.running) return;
-    this.running = true;
-    try {
-      await this.deliverDue();
-    } catch (error) {
-      this.logger.error(`outbox poll failed: ${error instanceof Error ? error.message : String(error)}`);
-    } finally {
-      this.running = false;
     }
   }
 }

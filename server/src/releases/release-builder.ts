@@ -2,32 +2,32 @@ import { Inject, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { RELEASE_FORMAT, serializeManifest, type ReleaseFile as ManifestFile, type ReleaseManifest } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
+import type { ClaimQueue } from '../jobs/claim-queue.js';
 import { MEDIA_STORE, type MediaStore } from '../media/media-store.js';
 import { Revision } from '../revisions/models/revision.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { ReleaseStory } from './models/release-story.model.js';
-import { Release } from './models/release.model.js';
+import type { Release } from './models/release.model.js';
 import { ReleaseBuildFaults } from './release-build-faults.js';
 import { localesOf, ReleaseContentService, type ChosenRevision } from './release-content.service.js';
 import { ReleaseFileStore, sha256Of } from './release-file-store.js';
 import { VenueSigningKeysService } from './venue-signing-keys.service.js';
 
-/** How long a worker holds a build between two steps before it counts as dead. */
+/** How long a worker holds a build's claim between two steps before it counts as dead. */
 export const BUILD_LEASE_MS = 60_000;
 
-/** The build lost its claim (the lease ran out and the build was failed): stop, change nothing. */
+/** The build lost its claim (it ran out and the build was failed): stop, change nothing. */
 export class BuildLeaseLost extends Error {}
 
 /**
  * Builds one claimed release: manifest, files by hash, signature, then Ready. Each step pushes the
- * lease on and records its phase, so the Releases page shows progress and a dead worker is noticed.
+ * claim on and records its phase, so the Releases page shows progress and a dead worker is noticed.
  */
 @Injectable()
 export class ReleaseBuilder {
   constructor(
-    @InjectModel(Release) private readonly releases: typeof Release,
     @InjectModel(ReleaseStory) private readonly releaseStories: typeof ReleaseStory,
     @InjectModel(Revision) private readonly revisions: typeof Revision,
     @InjectModel(Story) private readonly stories: typeof Story,
@@ -40,8 +40,11 @@ export class ReleaseBuilder {
     private readonly clock: Clock,
   ) {}
 
-  async build(release: Release): Promise<void> {
-    await this.step(release, 'Collecting stories and translations', 0.05);
+  async build(release: Release, claim: ClaimQueue<Release>): Promise<void> {
+    const step = async (phase: string, progress: number) => {
+      if (!(await claim.extend(release.id, { phase, progress }))) throw new BuildLeaseLost();
+    };
+    await step('Collecting stories and translations', 0.05);
     const gallery = await this.galleries.findByPk(release.galleryId, { include: [Venue] });
     const venue = gallery?.venue;
     if (!venue) throw new Error('The gallery or its venue no longer exists.');
@@ -51,7 +54,7 @@ export class ReleaseBuilder {
 
     const manifestFiles: ManifestFile[] = [];
     for (const [index, rendition] of renditions.entries()) {
-      await this.step(release, `Storing files (${index + 1} of ${renditions.length})`, 0.1 + 0.75 * (index / renditions.length));
+      await step(`Storing files (${index + 1} of ${renditions.length})`, 0.1 + 0.75 * (index / renditions.length));
       const data = await this.mediaStore.get(rendition.storeKey);
       if (!data) throw new Error(`The rendition ${rendition.storeKey} is missing from the media store.`);
       if (sha256Of(data) !== rendition.sha256) throw new Error(`The rendition ${rendition.storeKey} does not match its SHA-256.`);
@@ -60,7 +63,7 @@ export class ReleaseBuilder {
     }
     await this.faults.reach('files-stored');
 
-    await this.step(release, 'Signing the manifest', 0.9);
+    await step('Signing the manifest', 0.9);
     const manifest: ReleaseManifest = {
       format: RELEASE_FORMAT,
       releaseId: release.id,
@@ -77,19 +80,16 @@ export class ReleaseBuilder {
     const signature = await this.keys.signText(venue.id, text);
     await this.faults.reach('signed');
 
-    await this.step(release, 'Checking every file is stored', 0.95);
+    await step('Checking every file is stored', 0.95);
     const missing = await this.files.missing(release.id);
     if (missing.length) throw new Error(`${missing.length} file(s) did not reach the store.`);
 
-    const [ready] = await this.releases.update(
-      {
-        state: 'ready', progress: 1, phase: 'Ready to publish', leaseUntil: null, readyAt: this.clock.now(),
-        manifest: text, signature, manifestSha256: sha256Of(Buffer.from(text, 'utf8')),
-        fileCount: manifestFiles.length, bytes: manifestFiles.reduce((sum, file) => sum + file.size, 0),
-      },
-      { where: { id: release.id, state: 'building' } },
-    );
-    if (ready !== 1) throw new BuildLeaseLost();
+    const ready = await claim.settle(release.id, {
+      state: 'ready', progress: 1, phase: 'Ready to publish', readyAt: this.clock.now(),
+      manifest: text, signature, manifestSha256: sha256Of(Buffer.from(text, 'utf8')),
+      fileCount: manifestFiles.length, bytes: manifestFiles.reduce((sum, file) => sum + file.size, 0),
+    });
+    if (!ready) throw new BuildLeaseLost();
   }
 
   /** The revisions fixed when the release was asked for, in menu order. */
@@ -98,13 +98,5 @@ export class ReleaseBuilder {
     const revisions = new Map((await this.revisions.findAll({ where: { id: rows.map((r) => r.revisionId) } })).map((r) => [r.id, r]));
     const stories = new Map((await this.stories.findAll({ where: { id: rows.map((r) => r.storyId) } })).map((s) => [s.id, s]));
     return rows.map((row) => ({ story: stories.get(row.storyId)!, revision: revisions.get(row.revisionId)! }));
-  }
-
-  private async step(release: Release, phase: string, progress: number): Promise<void> {
-    const [held] = await this.releases.update(
-      { phase, progress, leaseUntil: this.clock.fromNow(BUILD_LEASE_MS) },
-      { where: { id: release.id, state: 'building' } },
-    );
-    if (held !== 1) throw new BuildLeaseLost();
   }
 }

@@ -5,6 +5,7 @@ import { ClockModule } from '../clock/clock.module.js';
 import { ConfigModule } from '../config/config.module.js';
 import { DatabaseModule } from '../database/database.module.js';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
+import { JobsModule } from '../jobs/jobs.module.js';
 import { KioskEvent } from '../kiosks/models/kiosk-event.model.js';
 import { KioskHeartbeat } from '../kiosks/models/kiosk-heartbeat.model.js';
 import { Kiosk } from '../kiosks/models/kiosk.model.js';
@@ -29,7 +30,7 @@ import { SeedService } from './seed.service.js';
 /** What the CLI's seed and create-admin need: the database and the release builder, no HTTP and no mail worker. */
 @Module({
   imports: [
-    ConfigModule, ClockModule, DatabaseModule, AuditModule,
+    ConfigModule, ClockModule, DatabaseModule, JobsModule, AuditModule,
     SequelizeModule.forFeature([User, Venue, Gallery, Station, Exhibit, Story, Revision, Kiosk, KioskHeartbeat, KioskEvent, ...TRANSLATION_MODELS]),
     MediaModule, PanelsModule, ReviewsModule, ReleasesModule,
   ],

@@ -1,9 +1,10 @@
-import { Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import { Injectable, type OnModuleInit } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
+import { BackgroundJobs } from '../jobs/background-jobs.service.js';
 import { MailService } from '../mail/mail.service.js';
 import { User } from '../users/models/user.model.js';
 import { canonicalLocale } from '../common/locale-tag.js';
@@ -52,12 +53,12 @@ interface DigestLine {
  * Translation mail, through the outbox: an assignment message when a translator is given a locale
  * (the trigger is the person's locales as an admin left them, compared with what was announced,
  * so invitations, People edits and the seed all count), and a digest of newly stale units per
- * translator. Paced by the clock, so tests move time instead of waiting.
+ * translator. Paced by the clock, so tests move time instead of waiting. Runs on one instance at a
+ * time (a singleton background job); each message is still claimed on its rows, so a run that
+ * overlaps a lease handover sends nothing twice.
  */
 @Injectable()
-export class TranslationNoticesJob implements OnApplicationBootstrap, OnApplicationShutdown {
-  private readonly logger = new Logger('TranslationNotices');
-  private timer?: NodeJS.Timeout;
+export class TranslationNoticesJob implements OnModuleInit {
 
   constructor(
     @InjectModel(User) private readonly users: typeof User,
@@ -69,18 +70,19 @@ export class TranslationNoticesJob implements OnApplicationBootstrap, OnApplicat
     private readonly clock: Clock,
     private readonly config: ConfigService,
     private readonly sequelize: Sequelize,
+    private readonly jobs: BackgroundJobs,
   ) {}
 
-  onApplicationBootstrap(): void {
-    if (this.config.translationNoticeIntervalMs === 0) return;
-    this.timer = setInterval(() => {
-      this.runDue().catch((error: unknown) => this.logger.error(error instanceof Error ? error.stack : String(error)));
-    }, this.config.translationNoticeIntervalMs);
-    this.timer.unref();
-  }
-
-  onApplicationShutdown(): void {
-    clearInterval(this.timer);
+  onModuleInit(): void {
+    this.jobs.register({
+      name: 'translation-notices',
+      intervalMs: this.config.translationNoticeIntervalMs,
+      singleton: true,
+      run: async () => {
+        const { assignments, digests } = await this.runDue();
+        return assignments + digests;
+      },
+    });
   }
 
   async runDue(): Promise<{ assignments: number; digests: number }> {

@@ -15,5 +15,12 @@ export class PasswordResetRequest extends Model {
   @Column({ type: DataType.DATE(3), allowNull: true })
   processedAt: Date | null;
 
+  /** The instance mailing it, until when (see ClaimQueue). */
+  @Column({ type: DataType.STRING(100), allowNull: true })
+  claimedBy: string | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: true })
+  claimExpiresAt: Date | null;
+
   declare id: number;
 }

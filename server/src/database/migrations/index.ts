@@ -16,6 +16,7 @@ import * as releasePanels from './0620-release-panels.js';
 import * as publications from './0621-publications.js';
 import * as livingStory from './0650-living-story.js';
 import * as demoKiosk from './0660-demo-kiosk.js';
+import * as backgroundJobs from './0730-background-jobs.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -41,6 +42,7 @@ const modules: [string, MigrationModule][] = [
   ['0621-publications', publications],
   ['0650-living-story', livingStory],
   ['0660-demo-kiosk', demoKiosk],
+  ['0730-background-jobs', backgroundJobs],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

@@ -21,8 +21,12 @@ export class OutboxMessage extends Model {
   @Column({ type: DataType.DATE(3), allowNull: false })
   nextAttemptAt: Date;
 
+  /** The instance sending it, until when (see ClaimQueue). */
+  @Column({ type: DataType.STRING(100), allowNull: true })
+  claimedBy: string | null;
+
   @Column({ type: DataType.DATE(3), allowNull: true })
-  lockedUntil: Date | null;
+  claimExpiresAt: Date | null;
 
   @Column({ type: DataType.STRING(1000), allowNull: true })
   lastError: string | null;

@@ -31,8 +31,12 @@ export class Release extends Model {
   @Column({ type: DataType.STRING(1000), allowNull: true })
   failure: string | null;
 
+  /** The instance building it, until when (see ClaimQueue); a claim that ran out fails the build. */
+  @Column({ type: DataType.STRING(100), allowNull: true })
+  claimedBy: string | null;
+
   @Column({ type: DataType.DATE(3), allowNull: true })
-  leaseUntil: Date | null;
+  claimExpiresAt: Date | null;
 
   /** The manifest JSON exactly as signed. */
   @Column({ type: DataType.TEXT('long'), allowNull: true })
