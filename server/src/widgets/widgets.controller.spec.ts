@@ -14,14 +14,32 @@ afterAll(() => t.close());
 const slope = { massKg: 10, angleDeg: 30, staticFriction: 0.85, kineticFriction: 0.6 };
 
 describe('GET /api/widgets', () => {
-  it('lists both widget types with JSON Schema generated from the shared zod schemas, and defaults', async () => {
+  it('lists every widget type with JSON Schema generated from the shared zod schemas, and defaults', async () => {
     const res = await request(t.http).get('/api/widgets').set(bearer(token));
     expect(res.status).toBe(200);
-    expect(res.body.items.map((item: { type: string }) => item.type)).toEqual(['slope-force', 'convection-cell']);
+    expect(res.body.items.map((item: { type: string }) => item.type)).toEqual(['slope-force', 'convection-cell', 'sea-floor-depth', 'plate-forces']);
     const [slopeForce, convection] = res.body.items;
     expect(slopeForce).toMatchObject({ version: 1, title: 'Slope force box', defaults: slope });
     expect(slopeForce.jsonSchema.properties.angleDeg).toMatchObject({ type: 'number', minimum: 0, maximum: 90, unit: '°' });
     expect(convection.jsonSchema.properties.overlay.enum).toEqual(['streamlines', 'particles', 'arrows', 'none']);
+  });
+
+  it('sends each type’s model card: equations, sources with DOIs, and its words in every UI language', async () => {
+    const res = await request(t.http).get('/api/widgets').set(bearer(token));
+    const seaFloor = res.body.items.find((item: { type: string }) => item.type === 'sea-floor-depth');
+    expect(Object.keys(seaFloor.model.words).sort()).toEqual(['ar', 'en', 'es', 'fr']);
+    expect(seaFloor.model.equations[1]).toBe('q = k·ΔT / √(πκt)');
+    // Stein and Stein (1992), Nature 359, 123–129: the GDH1 plate model.
+    expect(seaFloor.model.sources).toContainEqual(expect.objectContaining({ doi: '10.1038/359123a0' }));
+    for (const item of res.body.items) expect(item.model.words.en.range.length).toBeGreaterThan(0);
+  });
+
+  it('computes plate forces on the server: ridge push on a 100 Myr plate about 3.9 × 10¹² N/m (Turcotte and Schubert, from memory)', async () => {
+    const params = { ageMyr: 100, slabLengthKm: 700, slabDipDeg: 60, gravityMs2: 10, deltaTK: 1200 };
+    const res = await request(t.http).post('/api/widgets/validate').set(bearer(token)).send({ type: 'plate-forces', params });
+    expect(res.status).toBe(200);
+    // By hand: 10 × 3300 × 3e-5 × 1200 × 1e-6 × 3.15576e15 × (1 + 237.6/(π × 2300)) = 3.8723e12 N/m.
+    expect(res.body.result.ridgePushNPerM).toBeCloseTo(3.8723e12, -8);
   });
 
   it('needs a signed-in person', async () => {
@@ -77,8 +95,8 @@ describe('POST /api/widgets/validate', () => {
     expect(res.status).toBe(422);
     expect(res.body).toEqual({
       statusCode: 422,
-      message: 'Unknown widget type "slab-pull"; the known types are slope-force, convection-cell.',
-      errors: [{ path: ['type'], message: 'Unknown widget type "slab-pull"; the known types are slope-force, convection-cell.' }],
+      message: 'Unknown widget type "slab-pull"; the known types are slope-force, convection-cell, sea-floor-depth, plate-forces.',
+      errors: [{ path: ['type'], message: 'Unknown widget type "slab-pull"; the known types are slope-force, convection-cell, sea-floor-depth, plate-forces.' }],
     });
   });
 
