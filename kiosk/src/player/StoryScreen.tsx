@@ -104,6 +104,7 @@ export function StoryScreen({ t, release, story, settings, reducedMotion, panelI
                 reducedMotion={reducedMotion}
                 resolveMedia={resolveMedia}
                 links="text"
+                widgetInput="touch"
                 onVisitorParamsChange={(widgetId, params) => touches?.paramsChanged(widgetId, params)}
               />
             </PanelFrame>

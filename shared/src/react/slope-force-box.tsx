@@ -33,8 +33,8 @@ const REDUCED_MOTION_STEP_S = 0.25;
 const DEG = Math.PI / 180;
 const FORCES = ['weight', 'normal', 'shear', 'friction'] as const satisfies readonly ForceName[];
 const FORCE_OUTPUT = { weight: 'weightN', normal: 'normalN', shear: 'shearN', friction: 'frictionN' } as const satisfies Record<ForceName, keyof SlopeForceResult>;
-/** The weight solid, its two parts dashed, friction dotted: told apart by more than colour. */
-const FORCE_DASH: Record<ForceName, string | undefined> = { weight: undefined, normal: '10 6', shear: '10 6', friction: '2 5' };
+/** The weight and friction solid, the weight's two parts dashed: told apart by more than colour. */
+const FORCE_DASH: Record<ForceName, string | undefined> = { weight: undefined, normal: '10 6', shear: '10 6', friction: undefined };
 
 /** Left to right whatever the language around it, so "562 N" and "38.7°" never come out reversed. */
 const isolated = (text: string) => `\u2066${text}\u2069`;

@@ -182,8 +182,8 @@ export function layoutSlope({ angleDeg, position, result, angleText, criticalTex
   const clear = (candidate: LabelLayout) => insideFrame(candidate.box) && obstacles.every((segment) => !segmentMeetsBox(segment, candidate.box));
   const angleLabel = candidates.find(clear) ?? candidates[candidates.length - 1]!;
 
-  // The critical angle is named along the top, pinned to the right, away from the handle and the arrows.
-  const criticalLabel = label('right', SLOPE_VIEW.width - 12, TOP_BAND_Y, criticalText, LABEL_FONT.critical);
+  // The critical angle is named along the top, away from the handle and the arrows, its text starting just after its dashed key.
+  const criticalLabel = label('left', SLOPE_VIEW.width - 12 - textWidth(criticalText, LABEL_FONT.critical), TOP_BAND_Y, criticalText, LABEL_FONT.critical);
   const criticalKey = { from: { x: criticalLabel.box.x - 30, y: TOP_BAND_Y }, to: { x: criticalLabel.box.x - 8, y: TOP_BAND_Y } };
 
   return {

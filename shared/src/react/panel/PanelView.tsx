@@ -2,10 +2,11 @@ import { useCallback, useLayoutEffect, useMemo, useRef, useState, type RefObject
 import { readPanelWidgets } from '../../panel/live-value/live-value-reading.js';
 import { PANEL_IMAGE_NODE, WIDGET_NODE, type PanelDocJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
 import { directionOf, PANEL_LAYOUTS, type PanelLayout, type TextDirection } from '../../panel/panel-presentation.js';
-import { widgetsIn } from '../../panel/panel-queries.js';
+import { liveValuesIn, widgetsIn } from '../../panel/panel-queries.js';
 import type { SimulationReport } from '../../widgets/index.js';
 import { renderPanelNode, type PanelRenderContext } from './panel-nodes.js';
 import type { ResolveMedia } from './panel-media.js';
+import type { WidgetInput } from '../widget-controls.js';
 import { landscapeColumnStyle, panelRootStyle, WIDGET_MAX_WIDTH } from './panel-theme.js';
 
 export interface PanelViewProps {
@@ -22,6 +23,8 @@ export interface PanelViewProps {
   links?: 'anchor' | 'text';
   /** Told each time a visitor moves a widget's params (the kiosk counts widget use from it). */
   onVisitorParamsChange?: (widgetId: string, params: Record<string, unknown>) => void;
+  /** How visitors move the widgets, for their instructions: 'touch' on a kiosk. */
+  widgetInput?: WidgetInput;
 }
 
 /** Something kept per widget that belongs to the document it was set on; a new panel starts without it. */
@@ -38,6 +41,17 @@ function usePerWidget<T>(doc: PanelDocJSON) {
     [doc],
   );
   return [current, set] as const;
+}
+
+/** The digits each live value on the panel shows, by widget and output; the first live value of an output sets them. */
+function outputDigitsIn(doc: PanelDocJSON): ReadonlyMap<string, Readonly<Record<string, number>>> {
+  const byWidget = new Map<string, Record<string, number>>();
+  for (const { widgetId, output, format } of liveValuesIn(doc)) {
+    const outputs = byWidget.get(widgetId) ?? {};
+    outputs[output] ??= format.digits;
+    byWidget.set(widgetId, outputs);
+  }
+  return byWidget;
 }
 
 /**
@@ -70,9 +84,9 @@ function useMoreBelow(scroller: RefObject<HTMLElement | null>, doc: PanelDocJSON
  */
 function MoreBelowCue() {
   return (
-    <div className="mp-more-below" aria-hidden="true" style={{ position: 'sticky', bottom: 0, height: 0, pointerEvents: 'none' }}>
-      <div style={{ position: 'absolute', insetInline: '-2em', bottom: '-1em', height: '4.5em', background: 'linear-gradient(to bottom, transparent, var(--mp-surface) 70%)' }} />
-      <svg viewBox="0 0 24 24" style={{ position: 'absolute', left: '50%', bottom: '-0.6em', width: '2.6em', height: '2.6em', marginLeft: '-1.3em', borderRadius: '50%', background: 'var(--mp-control-surface)', color: 'var(--mp-control-text)', border: '3px solid var(--mp-control-border)' }}>
+    <div className="mp-more-below" aria-hidden="true" style={{ position: 'sticky', bottom: 'calc(-1 * var(--mp-panel-pad-block))', height: 0, pointerEvents: 'none' }}>
+      <div style={{ position: 'absolute', insetInline: 'calc(-1 * var(--mp-panel-pad-inline))', bottom: 0, height: '5em', background: 'linear-gradient(to bottom, transparent, var(--mp-surface) 75%)' }} />
+      <svg viewBox="0 0 24 24" style={{ position: 'absolute', left: '50%', bottom: '0.4em', width: '2.6em', height: '2.6em', marginLeft: '-1.3em', borderRadius: '50%', background: 'var(--mp-control-surface)', color: 'var(--mp-control-text)', border: '3px solid var(--mp-control-border)' }}>
         <path d="M6 9 L12 15 L18 9" fill="none" stroke="currentColor" strokeWidth={2.5} strokeLinecap="round" strokeLinejoin="round" />
       </svg>
     </div>
@@ -83,11 +97,12 @@ function MoreBelowCue() {
  * A panel as a gallery screen draws it: the Tiptap JSON walked into React elements, with no editor
  * and no raw HTML. Widgets stay live under touch, and live values follow what the visitor sets.
  */
-export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = false, highContrast = false, reducedMotion = false, resolveMedia, links = 'anchor', onVisitorParamsChange }: PanelViewProps) {
+export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = false, highContrast = false, reducedMotion = false, resolveMedia, links = 'anchor', onVisitorParamsChange, widgetInput = 'desk' }: PanelViewProps) {
   const [paramsById, setVisitorParams] = usePerWidget<unknown>(doc);
   // What each running simulation last reported, for live values of its outputs (Nu, speed, time).
   const [reportsById, setReport] = usePerWidget<SimulationReport>(doc);
   const widgets = useMemo(() => widgetsIn(doc), [doc]);
+  const outputDigits = useMemo(() => outputDigitsIn(doc), [doc]);
   const readings = useMemo(() => readPanelWidgets(widgets, paramsById, reportsById), [widgets, paramsById, reportsById]);
   const onWidgetParamsChange = useCallback(
     (widgetId: string, params: Record<string, unknown>) => {
@@ -109,6 +124,8 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
     reducedMotion,
     highContrast,
     widgetMaxWidth: WIDGET_MAX_WIDTH[layout],
+    widgetInput,
+    outputDigits,
     onWidgetParamsChange,
     onWidgetReport: setReport,
   };

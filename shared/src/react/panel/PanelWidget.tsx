@@ -13,6 +13,7 @@ import { ConvectionCell } from '../convection-cell.js';
 import { PlateForces } from '../plate-forces.js';
 import { SeaFloorDepth } from '../sea-floor-depth.js';
 import { SlopeForceBox } from '../slope-force-box.js';
+import type { WidgetInput } from '../widget-controls.js';
 
 export interface PanelWidgetProps {
   widgetType: string;
@@ -27,6 +28,10 @@ export interface PanelWidgetProps {
   onParamsChange: (params: Record<string, unknown>) => void;
   /** Told what a running simulation reports, for the live values that show its outputs. */
   onReport?: (report: SimulationReport) => void;
+  /** How the visitor moves it, for its instructions: a finger on a kiosk. */
+  input?: WidgetInput;
+  /** Digits of the live values of its outputs on the same panel, by output name. */
+  outputDigits?: Readonly<Record<string, number>>;
 }
 
 const blockStyle: CSSProperties = { margin: '0.75em 0' };
@@ -38,7 +43,7 @@ interface DrawingProps extends Omit<PanelWidgetProps, 'widgetType' | 'params'> {
 }
 
 /** The shared component of each widget type, given params the registry has already accepted. */
-function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, onParamsChange, onReport }: DrawingProps) {
+function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, onParamsChange, onReport, input, outputDigits }: DrawingProps) {
   switch (widgetType) {
     case 'slope-force':
       return (
@@ -48,6 +53,8 @@ function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = fa
           reducedMotion={reducedMotion}
           showCaution={editing}
           maxWidth={maxWidth}
+          input={input}
+          outputDigits={outputDigits}
           onParamsChange={(next) => onParamsChange({ ...next })}
         />
       );

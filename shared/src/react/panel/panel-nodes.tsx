@@ -6,6 +6,7 @@ import { livePhraseText, readLivePhrase } from '../../panel/live-phrase/live-phr
 import { isLivePhraseWordings } from '../../panel/live-phrase/live-phrase-wordings.js';
 import { isNodeLike, isPlainObject, LIVE_PHRASE_NODE, LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE, type PanelMarkJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
 import type { SimulationReport } from '../../widgets/index.js';
+import type { WidgetInput } from '../widget-controls.js';
 import type { ResolveMedia } from './panel-media.js';
 import { PanelImageFigure } from './PanelImageFigure.js';
 import { PanelWidget } from './PanelWidget.js';
@@ -20,6 +21,10 @@ export interface PanelRenderContext {
   reducedMotion: boolean;
   highContrast: boolean;
   widgetMaxWidth: number;
+  /** How visitors move widgets here: a finger on a kiosk. */
+  widgetInput: WidgetInput;
+  /** Digits of the panel's live values, by widget and output, so a drawing rounds a value as its caption does. */
+  outputDigits: ReadonlyMap<string, Readonly<Record<string, number>>>;
   onWidgetParamsChange: (widgetId: string, params: Record<string, unknown>) => void;
   onWidgetReport: (widgetId: string, report: SimulationReport) => void;
 }
@@ -97,8 +102,9 @@ export function renderPanelNode(node: PanelNodeJSON, context: PanelRenderContext
     case LIVE_VALUE_NODE: {
       const reading = readLiveValue({ widgetId: str(attrs.widgetId), output: str(attrs.output) }, context.readings);
       const format = isLiveValueFormat(attrs.format) ? attrs.format : DEFAULT_LIVE_VALUE_FORMAT;
+      // A number with its unit is isolated left to right, so "562 N" and "38.7°" keep their order inside Arabic; a state is a word of the text's own language.
       return (
-        <span key={key} className="mp-live-value" style={liveValueStyle} data-widget-id={str(attrs.widgetId)} data-output={str(attrs.output)}>
+        <span key={key} className="mp-live-value" dir={reading.ok && 'value' in reading ? 'ltr' : undefined} style={liveValueStyle} data-widget-id={str(attrs.widgetId)} data-output={str(attrs.output)}>
           {liveValueText(reading, format, context.locale)}
         </span>
       );
@@ -123,6 +129,8 @@ export function renderPanelNode(node: PanelNodeJSON, context: PanelRenderContext
           reducedMotion={context.reducedMotion}
           highContrast={context.highContrast}
           maxWidth={context.widgetMaxWidth}
+          input={context.widgetInput}
+          outputDigits={context.outputDigits.get(widgetId)}
           onParamsChange={(params) => context.onWidgetParamsChange(widgetId, params)}
           onReport={(report) => context.onWidgetReport(widgetId, report)}
         />

@@ -12,6 +12,8 @@ export const PANEL_COLOURS = {
 /** Body text size in CSS px at the station's full size; large text is the visitor's switch. */
 const BODY_SIZE = { landscape: 34, portrait: 38 } as const;
 const LARGE_TEXT_SCALE = 1.35;
+/** Space between the screen's edge and the words, in CSS px at full size. */
+const PANEL_PADDING = { landscape: { block: 72, inline: 96 }, portrait: { block: 96, inline: 72 } } as const;
 
 export function panelRootStyle(layout: keyof typeof BODY_SIZE, width: number, height: number, largeText: boolean, highContrast: boolean): CSSProperties {
   const colours = highContrast ? PANEL_COLOURS.highContrast : PANEL_COLOURS.standard;
@@ -22,7 +24,9 @@ export function panelRootStyle(layout: keyof typeof BODY_SIZE, width: number, he
     // A panel longer than its screen scrolls under the visitor's finger rather than losing its end.
     overflowX: 'hidden',
     overflowY: 'auto',
-    padding: layout === 'landscape' ? '72px 96px' : '96px 72px',
+    padding: 'var(--mp-panel-pad-block) var(--mp-panel-pad-inline)',
+    ['--mp-panel-pad-block' as string]: `${PANEL_PADDING[layout].block}px`,
+    ['--mp-panel-pad-inline' as string]: `${PANEL_PADDING[layout].inline}px`,
     background: colours.surface,
     color: colours.text,
     fontFamily: 'Lexend, system-ui, sans-serif',
