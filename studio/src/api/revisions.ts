@@ -13,8 +13,8 @@ export function useStoryRevisions(storyId: number) {
   });
 }
 
-export function useRevision(id: number) {
-  return useQuery({ queryKey: revisionKey(id), queryFn: () => api<RevisionView>(`/revisions/${id}`) });
+export function useRevision(id: number, enabled = true) {
+  return useQuery({ queryKey: revisionKey(id), queryFn: () => api<RevisionView>(`/revisions/${id}`), enabled });
 }
 
 /** The revision beside the last approved one; the diff never changes, since both sides are frozen. */

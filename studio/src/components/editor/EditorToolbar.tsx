@@ -3,19 +3,20 @@ import {
 } from '@fluentui/react-components';
 import {
   ArrowRedoRegular, ArrowUndoRegular, ImageAddRegular, LinkRegular, NumberSymbolRegular, TextBoldRegular, TextBulletListLtrRegular,
-  TextHeader2Regular, TextHeader3Regular, TextItalicRegular, TextNumberListLtrRegular, TextQuoteRegular, BeakerAddRegular,
+  TextHeader2Regular, TextHeader3Regular, TextItalicRegular, TextNumberListLtrRegular, TextQuoteRegular, BeakerAddRegular, TextEditStyleRegular,
 } from '@fluentui/react-icons';
 import { useEditorState, type Editor } from '@tiptap/react';
 import { liveValueText, PANEL_HEADING_LEVELS, WIDGET_TYPES, widgetOutputChoices, widgetRegistry, widgetsIn, type WidgetOutputChoice, type WidgetType } from '@mantlepiece/shared';
 import type { ReactElement } from 'react';
 import { useTranslation } from 'react-i18next';
 import { insertionChain } from './insert-point';
+import { phraseStatesOf, stateWord } from './live-phrase-states';
 import { useLiveValueLabel } from './live-value-labels';
 
 const HEADING_ICONS: Record<(typeof PANEL_HEADING_LEVELS)[number], ReactElement> = { 2: <TextHeader2Regular />, 3: <TextHeader3Regular /> };
 
 /** Formatting a panel uses, and the things a curator inserts: images, widgets and live values. */
-export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Editor; onPickImage: () => void; onEditLink: () => void }) {
+export function EditorToolbar({ editor, locale: storyLocale, onPickImage, onEditLink }: { editor: Editor; locale: string; onPickImage: () => void; onEditLink: () => void }) {
   const { t, i18n } = useTranslation();
   const outputLabel = useLiveValueLabel();
   const state = useEditorState({
@@ -45,6 +46,10 @@ export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Edi
   const chain = () => editor.chain().focus();
   const insertWidget = (type: WidgetType) => insertionChain(editor).insertWidget({ widgetType: type, params: { ...widgetRegistry[type].defaults } }).run();
   const locale = i18n.resolvedLanguage ?? 'en';
+  // A new phrase starts with each state's own word in the story's language, ready to be reworded.
+  const insertLivePhrase = (widgetId: string, states: readonly string[]) =>
+    insertionChain(editor).insertLivePhrase({ widgetId, wordings: Object.fromEntries(states.map((state) => [state, stateWord(state, storyLocale)])) }).run();
+  const phraseWidgets = state.widgets.map((widget, index) => ({ widget, index, states: phraseStatesOf(widget) })).filter(({ states }) => states.length > 0);
   // What the menu shows beside an output: its value now, or, for one the running simulation reports, its unit and "live".
   const preview = (choice: WidgetOutputChoice) => {
     if (choice.source === 'simulation') return [t('editor.liveFromSimulation'), choice.unit].filter(Boolean).join(' · ');
@@ -102,6 +107,22 @@ export function EditorToolbar({ editor, onPickImage, onEditLink }: { editor: Edi
                 </MenuItem>
               )),
             )}
+          </MenuList>
+        </MenuPopover>
+      </Menu>
+      <Menu>
+        <MenuTrigger disableButtonEnhancement>
+          <MenuButton appearance="subtle" size="small" icon={<TextEditStyleRegular />} disabled={phraseWidgets.length === 0}>
+            {t('livePhrase.menu')}
+          </MenuButton>
+        </MenuTrigger>
+        <MenuPopover>
+          <MenuList>
+            {phraseWidgets.map(({ widget, index, states }) => (
+              <MenuItem key={widget.widgetId} secondaryContent={states.map((name) => stateWord(name, locale)).join(' / ')} onClick={() => insertLivePhrase(widget.widgetId, states)}>
+                {`${t(`widgetTypes.${widget.widgetType as WidgetType}`)} ${index + 1}`}
+              </MenuItem>
+            ))}
           </MenuList>
         </MenuPopover>
       </Menu>

@@ -3,10 +3,12 @@ import { useEditor } from '@tiptap/react';
 import type { PanelDocJSON } from '@mantlepiece/shared';
 import { panelEditorExtensions, type ResolveMedia } from '@mantlepiece/shared/react';
 import { useTranslation } from 'react-i18next';
+import { CommentHighlights } from './comment-highlights';
 
 /**
  * The Tiptap editor of one panel: the shared extension list (the server checks documents against
- * the same one) with the shared React node views, so widgets and live values draw as on the kiosk.
+ * the same one) with the shared React node views, so widgets and live values draw as on the kiosk,
+ * plus the studio's marks over words that review comments are about.
  */
 export function usePanelEditor({ initialDoc, locale, resolveMedia, onChange }: {
   initialDoc: PanelDocJSON;
@@ -16,7 +18,7 @@ export function usePanelEditor({ initialDoc, locale, resolveMedia, onChange }: {
 }) {
   const { t } = useTranslation();
   const missingMediaLabel = t('editor.missingImage');
-  const extensions = useMemo(() => panelEditorExtensions({ locale, resolveMedia, missingMediaLabel }), [locale, resolveMedia, missingMediaLabel]);
+  const extensions = useMemo(() => [...panelEditorExtensions({ locale, resolveMedia, missingMediaLabel }), CommentHighlights], [locale, resolveMedia, missingMediaLabel]);
   return useEditor(
     {
       extensions,

@@ -80,10 +80,12 @@ export interface CommentThreadsProps {
   canComment: boolean;
   range?: CommentRange | null;
   onClearRange?: () => void;
+  /** False where only existing threads are answered (the story editor); new comments are written on the revision page. */
+  allowNew?: boolean;
 }
 
 /** The threads on one panel (or on the whole revision), oldest first, with a box for a new one. */
-export function CommentThreads({ revisionId, comments, panelId, canComment, range, onClearRange }: CommentThreadsProps) {
+export function CommentThreads({ revisionId, comments, panelId, canComment, range, onClearRange, allowNew = true }: CommentThreadsProps) {
   const { t } = useTranslation();
   const styles = useStyles();
   const shared = useReviewStyles();
@@ -100,7 +102,7 @@ export function CommentThreads({ revisionId, comments, panelId, canComment, rang
       ) : (
         <Text className={shared.muted}>{t('comments.none')}</Text>
       )}
-      {canComment ? (
+      {canComment && allowNew ? (
         <CommentComposer
           revisionId={revisionId}
           anchor={panelId === null ? {} : { panelId }}

@@ -2,15 +2,19 @@ import { useDeferredValue, useEffect, useRef, useState } from 'react';
 import { Field, makeStyles, Select, SpinButton, Spinner, Tab, TabList, Text, tokens } from '@fluentui/react-components';
 import { EditorContent, useEditorState } from '@tiptap/react';
 import { NodeSelection } from '@tiptap/pm/state';
-import { mediaIdsIn, widgetsIn, WIDGET_NODE, type MediaView, type PanelDocJSON, type PanelView, type StoryDetailView, type WidgetType } from '@mantlepiece/shared';
+import { livePhrasesIn, LIVE_PHRASE_NODE, mediaIdsIn, openThreadCount, widgetsIn, WIDGET_NODE, type MediaView, type PanelDocJSON, type PanelView, type StoryDetailView, type WidgetType } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import { useDraftComments } from '../../api/draft-comments';
 import { useMediaAssets } from '../../api/media';
+import { useCurrentUser } from '../../api/session';
 import { useRememberSavedPanel, useUpdatePanelBudget } from '../../api/stories';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { ConflictDialog } from '../../components/editor/ConflictDialog';
+import { DraftComments } from '../../components/editor/DraftComments';
 import { EditorToolbar } from '../../components/editor/EditorToolbar';
 import { insertionChain } from '../../components/editor/insert-point';
 import { LinkDialog } from '../../components/editor/LinkDialog';
+import { LivePhraseSettings } from '../../components/editor/LivePhraseSettings';
 import { useResolveMedia } from '../../components/editor/media-resolver';
 import { MediaPickerDialog } from '../../components/editor/MediaPickerDialog';
 import { PanelPreview } from '../../components/editor/PanelPreview';
@@ -22,6 +26,8 @@ import { WidgetSettings } from '../../components/editor/WidgetSettings';
 import { useEditorStyles } from './editor-styles';
 
 const SIDE_WIDTH = 400;
+
+type SideTab = 'widget' | 'comments' | 'preview';
 
 const useStyles = makeStyles({
   root: { display: 'grid', gridTemplateColumns: `minmax(0, 1fr) ${SIDE_WIDTH}px`, gap: tokens.spacingHorizontalL, alignItems: 'start', '@media (max-width: 1280px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
@@ -61,7 +67,12 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
   const [doc, setDoc] = useState<PanelDocJSON>(autosave.initialDoc);
   const shownDoc = useDeferredValue(doc);
   const [dialog, setDialog] = useState<'image' | 'link' | 'conflict' | null>(null);
-  const [sideTab, setSideTab] = useState<'widget' | 'preview'>('widget');
+  const [sideTab, setSideTab] = useState<SideTab>('widget');
+  const me = useCurrentUser();
+  const draftComments = useDraftComments(story.id);
+  const openHere = draftComments.revision ? openThreadCount(draftComments.revision.comments.filter((comment) => comment.panelId === panel.id)) : 0;
+  // The revision page's rule for who answers comments, until comment views carry the server's `can`.
+  const canComment = me.roles.includes('curator') || me.roles.includes('educator');
   const [chosenWidget, setChosenWidget] = useState<string | null>(null);
   const budget = useUpdatePanelBudget(story.id);
   const change = useRef(autosave.change);
@@ -81,20 +92,30 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
     editor.setEditable(!readOnly, false);
   }, [editor, readOnly]);
 
-  // Selecting a widget block in the text brings up its settings beside the editor.
-  const selectedWidget = useEditorState({
+  // Selecting a widget block or a live phrase in the text brings up its settings beside the editor.
+  const selected = useEditorState({
     editor,
     selector: ({ editor: current }) => {
       const { selection } = current.state;
-      return selection instanceof NodeSelection && selection.node.type.name === WIDGET_NODE ? String(selection.node.attrs.widgetId) : null;
+      const name = selection instanceof NodeSelection ? selection.node.type.name : null;
+      return {
+        widget: name === WIDGET_NODE ? String((selection as NodeSelection).node.attrs.widgetId) : null,
+        phrase: name === LIVE_PHRASE_NODE ? String((selection as NodeSelection).node.attrs.phraseId) : null,
+      };
     },
   });
   useEffect(() => {
-    if (selectedWidget) {
-      setChosenWidget(selectedWidget);
+    if (selected.widget) {
+      setChosenWidget(selected.widget);
       setSideTab('widget');
     }
-  }, [selectedWidget]);
+    if (selected.phrase) setSideTab('widget');
+  }, [selected.widget, selected.phrase]);
+
+  const shownRevision = draftComments.revision;
+  useEffect(() => {
+    if (shownRevision) editor.commands.showComments(shownRevision.comments, panel.id, locale);
+  }, [editor, shownRevision, panel.id, locale]);
 
   useEffect(() => {
     if (autosave.state.status === 'conflict') setDialog('conflict');
@@ -102,6 +123,7 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
 
   const widgets = widgetsIn(doc);
   const widget = widgets.find((candidate) => candidate.widgetId === chosenWidget) ?? widgets[0];
+  const phrase = selected.phrase ? livePhrasesIn(doc).find((candidate) => candidate.phraseId === selected.phrase) : undefined;
 
   const pick = (asset: MediaView) => {
     setDialog(null);
@@ -126,7 +148,7 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
         <div className={styles.frame}>
           {readOnly ? null : (
             <div className={styles.toolbar}>
-              <EditorToolbar editor={editor} onPickImage={() => setDialog('image')} onEditLink={() => setDialog('link')} />
+              <EditorToolbar editor={editor} locale={locale} onPickImage={() => setDialog('image')} onEditLink={() => setDialog('link')} />
             </div>
           )}
           <EditorContent editor={editor} className={editorStyles.content} />
@@ -155,13 +177,22 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
       </div>
 
       <aside className={styles.side} aria-label={t('editor.side')}>
-        <TabList selectedValue={sideTab} onTabSelect={(_event, data) => setSideTab(data.value as 'widget' | 'preview')}>
+        <TabList selectedValue={sideTab} onTabSelect={(_event, data) => setSideTab(data.value as SideTab)}>
           <Tab value="widget">{t('editor.widget.tab')}</Tab>
+          <Tab value="comments" data-open-comments={openHere}>{t('draftComments.tab', { open: openHere })}</Tab>
           <Tab value="preview">{t('editor.preview.title')}</Tab>
         </TabList>
         <div className={styles.sideBody}>
           {sideTab === 'preview' ? (
             <PanelPreview doc={shownDoc} locale={locale} resolveMedia={resolveMedia} width={SIDE_WIDTH - 34} />
+          ) : sideTab === 'comments' ? (
+            shownRevision ? (
+              <DraftComments revision={shownRevision} panelId={panel.id} doc={shownDoc} locale={locale} canComment={canComment} />
+            ) : (
+              <Text className={styles.muted}>{draftComments.isError ? t('draftComments.loadError') : t('draftComments.noRevision')}</Text>
+            )
+          ) : phrase && !readOnly ? (
+            <LivePhraseSettings editor={editor} phrase={phrase} doc={doc} />
           ) : widget ? (
             <>
               {widgets.length > 1 ? (

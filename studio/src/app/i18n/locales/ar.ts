@@ -1,5 +1,6 @@
 import type { Translated } from '@mantlepiece/shared';
 import { authoringAr } from './authoring.ar';
+import { editorReviewAr } from './editor-review.ar';
 import { fleetInsightsAr } from './fleet-insights.ar';
 import { releaseAr } from './release.ar';
 import { reviewAr } from './review.ar';
@@ -10,6 +11,7 @@ import type { Messages } from './en';
 export const ar: Translated<Messages> = {
   ...authoringAr,
   ...reviewAr,
+  ...editorReviewAr,
   ...translationAr,
   ...releaseAr,
   ...fleetInsightsAr,

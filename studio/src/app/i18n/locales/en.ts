@@ -1,4 +1,5 @@
 import { authoringEn } from './authoring.en';
+import { editorReviewEn } from './editor-review.en';
 import { fleetInsightsEn } from './fleet-insights.en';
 import { releaseEn } from './release.en';
 import { reviewEn } from './review.en';
@@ -8,6 +9,7 @@ import { translationEn } from './translation.en';
 export const en = {
   ...authoringEn,
   ...reviewEn,
+  ...editorReviewEn,
   ...translationEn,
   ...releaseEn,
   ...fleetInsightsEn,

@@ -1,5 +1,6 @@
 import type { Translated } from '@mantlepiece/shared';
 import { authoringEs } from './authoring.es';
+import { editorReviewEs } from './editor-review.es';
 import { fleetInsightsEs } from './fleet-insights.es';
 import { releaseEs } from './release.es';
 import { reviewEs } from './review.es';
@@ -10,6 +11,7 @@ import type { Messages } from './en';
 export const es: Translated<Messages> = {
   ...authoringEs,
   ...reviewEs,
+  ...editorReviewEs,
   ...translationEs,
   ...releaseEs,
   ...fleetInsightsEs,

@@ -1,4 +1,5 @@
 import { authoringFr } from './authoring.fr';
+import { editorReviewFr } from './editor-review.fr';
 import { fleetInsightsFr } from './fleet-insights.fr';
 import { releaseFr } from './release.fr';
 import { reviewFr } from './review.fr';
@@ -9,6 +10,7 @@ import type { Messages } from './en';
 export const fr: Messages = {
   ...authoringFr,
   ...reviewFr,
+  ...editorReviewFr,
   ...translationFr,
   ...releaseFr,
   ...fleetInsightsFr,

@@ -1,0 +1,19 @@
+import type { editorReviewEn } from './editor-review.en';
+
+export const editorReviewFr: typeof editorReviewEn = {
+  draftComments: {
+    tab: 'Commentaires ({{open}})',
+    title: 'Commentaires de relecture ouverts',
+    summary: 'Ouverts sur ce panneau : {{panel}}. Ouverts dans le récit : {{story}}. Révision {{number}}.',
+    none: 'Aucun commentaire ouvert sur ce panneau.',
+    noRevision: 'Ce récit n’a pas encore été envoyé en relecture ; il n’a donc aucun commentaire.',
+    loadError: 'Les commentaires de relecture n’ont pas pu être chargés.',
+  },
+  livePhrase: {
+    menu: 'Phrase vivante',
+    title: 'Phrase vivante',
+    intro: 'Des mots qui suivent le widget {{widget}} : la borne affiche la formulation de l’état où il se trouve, et change quand un visiteur le modifie.',
+    wordingFor: 'Formulation quand il {{state}}',
+    noWidget: 'Son widget n’est plus sur ce panneau, ou n’a pas d’états à suivre. Supprimez la phrase ou remettez le widget.',
+  },
+};
