@@ -56,7 +56,7 @@ export const fleetInsightsEn = {
     historyPagination: 'Pages of the heartbeat history',
     revoke: 'Revoke…',
     revokeTitle: 'Revoke this kiosk?',
-    revokeBody: 'The kiosk at {{station}} loses its access at once: it gets no new releases and its heartbeats and visitor figures are refused. It keeps playing what it holds until it is paired again.',
+    revokeBody: 'The kiosk at {{station}} loses its access at once: it gets no new releases and its heartbeats and visitor figures are refused. Once the visitor on screen has finished, it forgets what it stored and shows a new pairing code.',
     revokeConfirm: 'Revoke the kiosk',
     revoking: 'Revoking…',
     revokedNote: 'Revoked {{date}}. To use this screen again, pair it anew from its station.',

@@ -59,7 +59,7 @@ export const fleetInsightsEs: Translated<typeof fleetInsightsEn> = {
     historyPagination: 'Páginas del historial de latidos',
     revoke: 'Revocar…',
     revokeTitle: '¿Revocar este quiosco?',
-    revokeBody: 'El quiosco del puesto {{station}} pierde su acceso al instante: no recibe publicaciones nuevas y se rechazan sus latidos y sus cifras de visitantes. Sigue mostrando lo que guarda hasta que se empareje de nuevo.',
+    revokeBody: 'El quiosco del puesto {{station}} pierde su acceso al instante: no recibe publicaciones nuevas y se rechazan sus latidos y sus cifras de visitantes. Cuando termina el visitante que lo usa, borra lo que guardó y muestra un nuevo código de emparejamiento.',
     revokeConfirm: 'Revocar el quiosco',
     revoking: 'Revocando…',
     revokedNote: 'Revocado el {{date}}. Para usar esta pantalla de nuevo, emparéjela desde su puesto.',

@@ -58,7 +58,7 @@ export const fleetInsightsFr: typeof fleetInsightsEn = {
     historyPagination: 'Pages de l’historique',
     revoke: 'Révoquer…',
     revokeTitle: 'Révoquer cette borne ?',
-    revokeBody: 'La borne du poste {{station}} perd son accès immédiatement : elle ne reçoit plus de publication et ses signaux de vie et statistiques sont refusés. Elle continue de diffuser ce qu’elle a jusqu’à un nouvel appairage.',
+    revokeBody: 'La borne du poste {{station}} perd son accès immédiatement : elle ne reçoit plus de publication et ses signaux de vie et statistiques sont refusés. Une fois le visiteur présent parti, elle efface ce qu’elle a gardé et affiche un nouveau code d’appairage.',
     revokeConfirm: 'Révoquer la borne',
     revoking: 'Révocation…',
     revokedNote: 'Révoquée le {{date}}. Pour réutiliser cet écran, appairez-le de nouveau depuis son poste.',

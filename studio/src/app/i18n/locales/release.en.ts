@@ -126,7 +126,7 @@ export const releaseEn = {
       revoke: 'Revoke…',
       revokeLabel: 'Revoke {{name}}',
       revokeTitle: 'Revoke {{name}} at {{station}}?',
-      revokeBody: 'Its credential stops working at once: it gets no new release and its reports are refused. The screen keeps playing the release it has stored; pair a kiosk anew to change what it shows.',
+      revokeBody: 'Its credential stops working at once: it gets no new release and its reports are refused. Once the visitor on screen has finished, the screen forgets what it stored and shows a new pairing code; pair it anew from this page.',
       revokeConfirm: 'Revoke',
     },
   },

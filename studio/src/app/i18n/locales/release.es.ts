@@ -129,7 +129,7 @@ export const releaseEs: Translated<typeof releaseEn> = {
       revoke: 'Revocar…',
       revokeLabel: 'Revocar el {{name}}',
       revokeTitle: '¿Revocar el {{name}} del puesto {{station}}?',
-      revokeBody: 'Su credencial deja de funcionar al instante: no recibe publicaciones nuevas y sus informes se rechazan. La pantalla sigue mostrando la publicación que guardó; empareje un quiosco de nuevo para cambiar lo que muestra.',
+      revokeBody: 'Su credencial deja de funcionar al instante: no recibe publicaciones nuevas y sus informes se rechazan. Cuando termina el visitante que la usa, la pantalla borra lo que guardó y muestra un nuevo código de emparejamiento; vuelva a emparejarla desde esta página.',
       revokeConfirm: 'Revocar',
     },
   },

@@ -128,7 +128,7 @@ export const releaseFr: typeof releaseEn = {
       revoke: 'Révoquer…',
       revokeLabel: 'Révoquer la {{name}}',
       revokeTitle: 'Révoquer la {{name}} du poste {{station}} ?',
-      revokeBody: 'Son identifiant cesse aussitôt de fonctionner : elle ne reçoit plus de version et ses rapports sont refusés. L’écran continue d’afficher la version qu’il a gardée ; associez une borne à nouveau pour changer ce qu’il montre.',
+      revokeBody: 'Son identifiant cesse aussitôt de fonctionner : elle ne reçoit plus de version et ses rapports sont refusés. Une fois le visiteur présent parti, l’écran efface ce qu’il a gardé et affiche un nouveau code d’association ; associez-le à nouveau depuis cette page.',
       revokeConfirm: 'Révoquer',
     },
   },
