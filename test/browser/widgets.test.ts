@@ -15,10 +15,10 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 describe('widget workbench', () => {
-  it('offers both widgets, with the simplified-model caution', async () => {
+  it('offers every widget, with the simplified-model caution', async () => {
     // Fluent's Tab repeats its label in a hidden element that reserves the bold width, so the tabs are
     // read by accessible name, as a screen reader would.
-    await expect.poll(() => page.getByRole('tab').count()).toBe(2);
+    await expect.poll(() => page.getByRole('tab').count()).toBe(4);
     await expect(page.getByRole('tab', { name: 'Slope force box', exact: true }).count()).resolves.toBe(1);
     await expect(page.getByRole('tab', { name: 'Convection cell', exact: true }).count()).resolves.toBe(1);
     expect(await page.getByRole('note').first().textContent()).toMatch(/^Simplified teaching model/);

@@ -30,14 +30,16 @@ export interface SeaFloorDepthProps {
 const VIEW = { width: 480, height: 330 };
 /** Age runs left to right, from the ridge crest to the oldest floor the widget takes. */
 const AGE_AXIS = { left: 56, right: 464 };
-/** Upper band: the sea, from sea level down to 7 km. */
-const SEA = { top: 34, bottom: 180, deepestM: 7000 };
+/** Upper band: the sea, from sea level down to 8 km (the half-space floor reaches 7.5 km at 200 Myr). */
+const SEA = { top: 34, bottom: 180, deepestM: 8000 };
 /** Lower band: the cooled lithosphere under the floor, down to 150 km (a different scale, said on the drawing). */
 const LITHOSPHERE = { top: 206, bottom: 316, deepestKm: 150 };
 const COLOURS = { water: '#cfe3ee', floor: '#0b3f5c', halfSpace: '#0b3f5c', plate: '#8a3412', lithosphere: '#b9a68a', text: '#24282c', marker: '#24282c' };
 /** Smallest age a finger or key can pick: the models need some cooling to speak of. */
 const MIN_AGE_MYR = 0.5;
 const AGE_STEP_MYR = 5;
+/** Half the width of the longest age label ("200 million years" and its translations), so it stays inside the drawing. */
+const AGE_LABEL_INSET = 80;
 const SAMPLES = 120;
 /** The model not chosen: outlined in the panel's text colour, so it keeps its contrast in either theme. */
 const unchosenButtonStyle = { ...widgetButtonStyle, background: 'transparent', color: 'inherit' };
@@ -154,7 +156,7 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
         <line x1={markerX} y1={SEA.top} x2={markerX} y2={LITHOSPHERE.bottom} stroke={COLOURS.marker} strokeWidth={2} />
         <circle cx={markerX} cy={seaY(result.depthM)} r={9} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={3} />
         <circle cx={markerX} cy={lithosphereY(result.lithosphereThicknessKm)} r={6} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={2} />
-        <text x={Math.min(markerX + 8, AGE_AXIS.right - 90)} y={VIEW.height - 2} fontSize={13} fontWeight={700} fill={COLOURS.text}>{age}</text>
+        <text x={Math.min(Math.max(markerX, AGE_LABEL_INSET), VIEW.width - AGE_LABEL_INSET)} y={VIEW.height - 2} fontSize={13} fontWeight={700} textAnchor="middle" fill={COLOURS.text}>{age}</text>
       </svg>
       <p id={statusId} role="status" data-model={shown.model} style={{ margin: '0.5em 0', display: 'grid', gridTemplateColumns: 'auto 1fr', gap: '0 0.75em' }}>
         <span>{strings.depth}</span>
