@@ -4,6 +4,7 @@ import type { Request } from 'express';
 import { QueryTypes } from 'sequelize';
 import { Public } from '../auth/auth.decorators.js';
 import { hashToken } from '../common/tokens.js';
+import type { PublicationVersion } from '../releases/publications.service.js';
 import { bearerOf, isDeviceToken } from './device-token.js';
 import { Kiosk } from './models/kiosk.model.js';
 
@@ -14,17 +15,37 @@ export interface PairedKiosk {
   id: number;
   stationId: number;
   station: { id: number; galleryId: number };
+  /** The gallery's latest publication as last signed, null before the first: what the manifest poll checks its kept answer against. */
+  latestPublication: PublicationVersion | null;
 }
 
 export interface KioskRequest extends Request {
   kiosk: PairedKiosk;
 }
 
+interface PairedKioskRow {
+  id: number;
+  stationId: number;
+  galleryId: number;
+  publicationId: number | null;
+  publicationExpiresAt: Date | null;
+}
+
+/**
+ * The kiosk of a device token, with its gallery and that gallery's latest publication: one read on
+ * the unique token-hash key, the station's primary key and the unique (gallery, sequence) key.
+ */
+const PAIRED_KIOSK = `SELECT k.id, k.station_id AS stationId, s.gallery_id AS galleryId, p.id AS publicationId, p.expires_at AS publicationExpiresAt
+  FROM kiosks k
+  JOIN stations s ON s.id = k.station_id
+  LEFT JOIN publications p ON p.id = (SELECT latest.id FROM publications latest WHERE latest.gallery_id = s.gallery_id ORDER BY latest.sequence DESC LIMIT 1)
+  WHERE k.device_token_hash = ? AND k.revoked_at IS NULL`;
+
 /**
  * Lets a paired kiosk through with its own device token, read from the database on each request
  * so a revoked kiosk is refused at once. A person's access token is refused here, as a device
- * token is refused on staff routes. Kiosks poll all day, so the check is one lookup on the unique
- * token-hash key, joined to the kiosk's station.
+ * token is refused on staff routes. Kiosks poll all day, so this is the poll's only database read
+ * while the gallery's manifest is unchanged.
  */
 @Injectable()
 export class DeviceTokenGuard implements CanActivate {
@@ -34,14 +55,14 @@ export class DeviceTokenGuard implements CanActivate {
     const request = context.switchToHttp().getRequest<KioskRequest>();
     const token = bearerOf(request.headers.authorization);
     if (token && !isDeviceToken(token)) throw new ForbiddenException('Kiosk routes take a kiosk’s device token, not a person’s sign-in.');
-    const [row] = token
-      ? await this.kiosks.sequelize!.query<{ id: number; stationId: number; galleryId: number }>(
-          'SELECT k.id, k.station_id AS stationId, s.gallery_id AS galleryId FROM kiosks k JOIN stations s ON s.id = k.station_id WHERE k.device_token_hash = ? AND k.revoked_at IS NULL',
-          { replacements: [hashToken(token)], type: QueryTypes.SELECT },
-        )
-      : [];
+    const [row] = token ? await this.kiosks.sequelize!.query<PairedKioskRow>(PAIRED_KIOSK, { replacements: [hashToken(token)], type: QueryTypes.SELECT }) : [];
     if (!row) throw new UnauthorizedException(KIOSK_UNPAIRED_MESSAGE);
-    request.kiosk = { id: row.id, stationId: row.stationId, station: { id: row.stationId, galleryId: row.galleryId } };
+    request.kiosk = {
+      id: row.id,
+      stationId: row.stationId,
+      station: { id: row.stationId, galleryId: row.galleryId },
+      latestPublication: row.publicationId === null ? null : { id: row.publicationId, expiresAt: row.publicationExpiresAt },
+    };
     return true;
   }
 }
