@@ -21,7 +21,7 @@ export const useEditorStyles = makeStyles({
     '& .mp-widget-node[data-selected], & .mp-panel-image-node[data-selected]': { outline: `3px solid ${tokens.colorBrandStroke1}`, outlineOffset: '2px' },
     // The figure's own inline size suits a wall screen; in the editor an image only needs to be recognised.
     '& .mp-panel-image-node img': { maxHeight: '16rem !important', maxWidth: '100%', width: 'auto !important', height: 'auto !important' },
-    '& .mp-live-value-node': {
+    '& .mp-live-value-node, & .mp-live-phrase-node': {
       padding: `0 ${tokens.spacingHorizontalXXS}`,
       borderRadius: tokens.borderRadiusSmall,
       backgroundColor: magma.tint,
@@ -29,7 +29,11 @@ export const useEditorStyles = makeStyles({
       fontWeight: tokens.fontWeightSemibold,
       fontVariantNumeric: 'tabular-nums',
     },
-    '& .mp-live-value-node[data-selected]': { outline: `2px solid ${tokens.colorBrandStroke1}` },
-    '& .mp-live-value-node[data-dangling]': { backgroundColor: tokens.colorPaletteRedBackground2, color: tokens.colorPaletteRedForeground1 },
+    '& .mp-live-value-node[data-selected], & .mp-live-phrase-node[data-selected]': { outline: `2px solid ${tokens.colorBrandStroke1}` },
+    '& .mp-live-value-node[data-dangling], & .mp-live-phrase-node[data-dangling]': { backgroundColor: tokens.colorPaletteRedBackground2, color: tokens.colorPaletteRedForeground1 },
+    // A phrase reads as words, not a number: dotted underline rather than tabular figures.
+    '& .mp-live-phrase-node': { fontVariantNumeric: 'normal', textDecoration: `underline dotted ${magma.foreground}` },
+    // Words a review comment is about, marked like a highlighter pen over the text.
+    '& .mp-comment-anchor': { backgroundColor: tokens.colorPaletteYellowBackground2, borderBottom: `2px solid ${tokens.colorPaletteDarkOrangeBorderActive}` },
   },
 });
