@@ -111,6 +111,8 @@ describe('every studio screen meets WCAG 2.2 AA as axe-core checks it', () => {
       await page.keyboard.press('Escape');
       await throughDialog(page, where, page.getByRole('button', { name: 'Submit for review' }));
       await throughDialog(page, where, page.getByRole('button', { name: 'Delete panel' }).first());
+      await page.getByRole('link', { name: 'Back to stories' }).click();
+      await page.waitForURL(/\/stories$/);
       await visit(page, '/media');
       await visit(page, `/media/${mediaId}`);
       await throughDialog(page, `/media/${mediaId}`, page.getByRole('button', { name: 'Delete image' }));

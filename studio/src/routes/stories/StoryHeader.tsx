@@ -7,6 +7,7 @@ import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError, serverFieldMessage, shownAtField } from '../../components/forms/describe-error';
 import { hasProblems, type FieldProblems } from '../../components/forms/validation';
 import { useDateFormat } from '../../components/formatting';
+import { TextLink } from '../../components/links';
 import { usePageTitle } from '../../app/page-title';
 import { STORY_FIELDS, storyProblems, storyToSend, type StoryField, type StoryValues } from './story-fields';
 import { StoryFieldsForm } from './StoryFieldsForm';
@@ -50,6 +51,9 @@ export function StoryHeader({ story, readOnly }: { story: StoryDetailView; readO
 
   return (
     <header className={styles.root}>
+      <div>
+        <TextLink to="/stories">{t('story.backToStories')}</TextLink>
+      </div>
       <div className={styles.top}>
         <Text as="h1" size={700} weight="semibold">{story.title}</Text>
         <StoryStateBadge state={story.state} approvedRevision={story.approvedRevision} />
