@@ -2,9 +2,10 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { chromium, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Locator, type Page, type Request } from 'playwright-core';
 import type { FleetKioskView, KioskManifestResponse, KioskView, PublicationRecord, ReleaseManifest, ReleaseView } from '@mantlepiece/shared';
 import { baseUrl, chromiumOptions, demoPassword, launchBrowser, newContext, signIn } from '../support/browser';
+import { touchDrag } from '../support/touch';
 
 // The seeded demo (server/src/seed): one gallery, one station, three approved stories.
 const GALLERY = 'Moving Plates Hall';
@@ -38,19 +39,6 @@ async function staff<T>(path: string): Promise<T> {
 
 async function manifestOf(releaseId: number): Promise<ReleaseManifest> {
   return JSON.parse((await staff<{ manifest: string }>(`/releases/${releaseId}/manifest`)).manifest) as ReleaseManifest;
-}
-
-/** A finger on the kiosk's screen, through Chromium's touch input: press, slide, lift. */
-async function touchDrag(page: Page, from: { x: number; y: number }, to: { x: number; y: number }, steps = 8): Promise<void> {
-  const cdp = await page.context().newCDPSession(page);
-  await cdp.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: [from] });
-  for (let step = 1; step <= steps; step++) {
-    const x = from.x + ((to.x - from.x) * step) / steps;
-    const y = from.y + ((to.y - from.y) * step) / steps;
-    await cdp.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: [{ x, y }] });
-  }
-  await cdp.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
-  await cdp.detach();
 }
 
 /** Builds a release in the studio, waits for the build to finish and returns the release id the page follows. */
@@ -197,6 +185,18 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
     expect(served).toBeGreaterThan(0);
     expect((await report())?.releasePlaying?.id).toBe(firstRelease);
 
+    // It backs off: the polls that follow ask for the manifest and never fetch the refused file again.
+    const servedWhenRefused = served;
+    let polls = 0;
+    const countPoll = (request: Request) => {
+      if (request.url().endsWith('/api/kiosk/manifest')) polls++;
+    };
+    screen.on('request', countPoll);
+    await expect.poll(() => polls, { timeout: 30_000 }).toBeGreaterThanOrEqual(3);
+    screen.off('request', countPoll);
+    expect(served).toBe(servedWhenRefused);
+    expect((await report())?.lastError).toMatch(/Not downloaded again before \S+ unless the release changes\.$/);
+
     // Restarted, it boots into the release it kept: still without the left-out story.
     await screen.reload();
     await screen.getByRole('button', { name: /Touch to begin/ }).tap();
@@ -256,5 +256,72 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
     await row.getByText(`Publication ${followed.sequence} expired`).waitFor();
     await studio.goto(`/fleet/${kioskId}`);
     await studio.locator('[data-publication-expired]').getByText(new RegExp(`^Number ${followed.sequence}, expired .+ The kiosk plays on`)).waitFor();
+  });
+});
+
+describe('a kiosk revoked in the studio', () => {
+  /** What the kiosk keeps in IndexedDB, counted in its own page. */
+  const stored = () => screen.evaluate(async () => {
+    const db = await new Promise<IDBDatabase>((resolve, reject) => {
+      const request = indexedDB.open('mantlepiece-kiosk');
+      request.onsuccess = () => resolve(request.result);
+      request.onerror = () => reject(request.error);
+    });
+    const count = (name: string) => new Promise<number>((resolve, reject) => {
+      const request = db.transaction(name).objectStore(name).count();
+      request.onsuccess = () => resolve(request.result);
+      request.onerror = () => reject(request.error);
+    });
+    const counts = { credential: await count('credential'), releases: await count('releases'), files: await count('files'), outbox: await count('outbox') };
+    db.close();
+    return counts;
+  });
+  const unpairedNotice = () => screen.getByText('This screen was unpaired in the studio. To use it again, pair it with the code below.');
+
+  it('lets the visitor finish, then forgets its pairing and releases and shows that it was unpaired with a new pairing code, also after a restart, and pairs anew', async () => {
+    // Its clock back to the present (the test before moved it weeks on), and a visitor who walks away after two seconds.
+    await screen.clock.setFixedTime(new Date());
+    await screen.goto('/kiosk/?poll=1&heartbeat=1&idle=2');
+    await screen.getByRole('button', { name: /Touch to begin/ }).tap();
+    await screen.getByRole('button', { name: new RegExp(KEPT[1]!.replace('?', '\\?')) }).tap();
+    await screen.getByRole('heading', { name: 'Hot rock rises' }).waitFor();
+    expect((await stored()).releases).toBeGreaterThan(0);
+    // Something else kept in the browser's caches must go too.
+    await screen.evaluate(async () => (await caches.open('mantlepiece-kiosk-leftover')).put('/kiosk/leftover', new Response('kept')));
+
+    const station = (await fleetRow())!.station;
+    await studio.goto(`/stations/${station.id}`);
+    const refused = screen.waitForResponse((response) => response.url().includes('/api/kiosk/') && response.status() === 401);
+    await studio.getByRole('button', { name: `Revoke Kiosk ${kioskId}` }).click();
+    await studio.getByRole('dialog').getByRole('button', { name: 'Revoke', exact: true }).click();
+    await studio.locator(`tr[data-kiosk-id="${kioskId}"]`).getByText('Revoked').waitFor();
+    await refused;
+    // The visitor is still reading: nothing is taken from them mid-story.
+    expect(await screen.getByRole('heading', { name: 'Hot rock rises' }).isVisible()).toBe(true);
+
+    // They walk away; after the warning the screen resets, and the pairing is forgotten.
+    const code = screen.locator('[data-pairing-code]');
+    await code.waitFor({ timeout: 60_000 });
+    await unpairedNotice().waitFor();
+    const firstCode = await code.getAttribute('data-pairing-code');
+    expect(firstCode).toMatch(/^[2-9A-HJKMNP-TW-Z]{6}$/);
+    expect(await stored()).toEqual({ credential: 0, releases: 0, files: 0, outbox: 0 });
+    const cached = await screen.evaluate(async () => Promise.all((await caches.keys()).map(async (name) => ({ name, index: Boolean(await (await caches.open(name)).match('/kiosk/index.html')) }))));
+    // Only the app's own files are back, fetched afresh by the service worker for the next offline start.
+    expect(cached).toEqual([{ name: expect.stringMatching(/^mantlepiece-kiosk-app-/), index: true }]);
+
+    // Restarted, it is still unpaired, says so, and shows a code of its own.
+    await screen.reload();
+    await code.waitFor();
+    await unpairedNotice().waitFor();
+    const secondCode = (await code.getAttribute('data-pairing-code'))!;
+    expect(secondCode).not.toBe(firstCode);
+
+    // The technician pairs it anew from the station page: it plays again and the notice is gone.
+    await studio.getByLabel('Pairing code shown on the screen').fill(secondCode);
+    await studio.getByRole('button', { name: 'Pair', exact: true }).click();
+    await studio.getByRole('status').filter({ hasText: /Kiosk \d+ is paired/ }).waitFor();
+    await screen.getByRole('button', { name: /Touch to begin/ }).waitFor({ timeout: 60_000 });
+    expect(await unpairedNotice().count()).toBe(0);
   });
 });
