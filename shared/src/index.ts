@@ -1,5 +1,6 @@
 export * from './auth/roles.js';
 export * from './auth/passwords.js';
+export * from './auth/can.js';
 export type * from './auth/views.js';
 export * from './widgets/index.js';
 export * from './i18n/index.js';

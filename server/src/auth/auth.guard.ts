@@ -6,6 +6,7 @@ import { isDeviceToken } from '../kiosks/device-token.js';
 import type { User } from '../users/models/user.model.js';
 import { IS_PUBLIC, REQUIRED_ROLES } from './auth.decorators.js';
 import type { AuthenticatedRequest } from './authenticated-request.js';
+import { holdsAny } from './policy.js';
 
 const SIGN_IN_REQUIRED = 'Sign in to continue.';
 
@@ -34,7 +35,7 @@ export class AuthGuard extends PassportAuthGuard('bearer') {
     await super.canActivate(context);
 
     const required = this.reflector.getAllAndOverride<Role[] | undefined>(REQUIRED_ROLES, targets);
-    if (required?.length && !required.some((role) => request.user.roles.includes(role))) {
+    if (required?.length && !holdsAny(request.user, required)) {
       throw new ForbiddenException('Your role does not allow this.');
     }
     return true;

@@ -1,9 +1,11 @@
 import type { CommentView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import { personRef } from '../revisions/revisions.presenter.js';
+import { commentCan } from './comment-policy.js';
 import type { Comment } from './models/comment.model.js';
 
-/** `comment` with its author and resolver. */
-export const toCommentView = (comment: Comment): CommentView => ({
+/** `comment` with its author and resolver, and what `person` may do to it. */
+export const toCommentView = (comment: Comment, person: Person): CommentView => ({
   id: comment.id,
   revisionId: comment.revisionId,
   panelId: comment.panelId,
@@ -16,4 +18,5 @@ export const toCommentView = (comment: Comment): CommentView => ({
   createdAt: comment.createdAt.toISOString(),
   carriedFromRevisionId: comment.carriedFromRevisionId,
   anchorChanged: comment.anchorChanged ?? null,
+  can: commentCan(person),
 });

@@ -3,6 +3,7 @@ import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { carryAnchor, panelText, type CommentView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { invalidField } from '../common/validation.js';
 import { NotificationsService } from '../notifications/notifications.service.js';
@@ -32,9 +33,9 @@ export class CommentsService {
   ) {}
 
   /** Oldest first, so threads read in order. */
-  async listForRevision(revisionId: number, transaction?: Transaction): Promise<CommentView[]> {
+  async listForRevision(revisionId: number, person: Person, transaction?: Transaction): Promise<CommentView[]> {
     const rows = await this.comments.findAll({ where: { revisionId }, include: people, order: [['createdAt', 'ASC'], ['id', 'ASC']], transaction });
-    return rows.map(toCommentView);
+    return rows.map((comment) => toCommentView(comment, person));
   }
 
   /** A reply sits on its parent's panel; its parent's author is told. */
@@ -66,7 +67,7 @@ export class CommentsService {
         anchorChanged: null,
       }, { transaction });
       await this.notifyParentAuthor(parent, author, revision, dto.body, transaction);
-      return this.view(comment.id, transaction);
+      return this.view(comment.id, author, transaction);
     });
   }
 
@@ -75,7 +76,7 @@ export class CommentsService {
       const comment = await this.comments.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
       if (!comment) throw new NotFoundException('There is no such comment.');
       await comment.update(resolved ? { resolvedAt: this.clock.now(), resolvedById: person.id } : { resolvedAt: null, resolvedById: null }, { transaction });
-      return this.view(id, transaction);
+      return this.view(id, person, transaction);
     });
   }
 
@@ -125,8 +126,8 @@ export class CommentsService {
     );
   }
 
-  private async view(id: number, transaction: Transaction): Promise<CommentView> {
+  private async view(id: number, person: Person, transaction: Transaction): Promise<CommentView> {
     const comment = await this.comments.findByPk(id, { include: people, transaction });
-    return toCommentView(comment!);
+    return toCommentView(comment!, person);
   }
 }

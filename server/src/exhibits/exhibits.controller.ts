@@ -1,7 +1,8 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
-import { Roles } from '../auth/auth.decorators.js';
+import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
 import { CreateExhibitDto, ListExhibitsQuery, UpdateExhibitDto } from './dto/exhibit.dto.js';
 import { ExhibitsService } from './exhibits.service.js';
 
@@ -14,24 +15,24 @@ export class ExhibitsController {
 
   @Roles(...ROLES)
   @Get()
-  list(@Query() query: ListExhibitsQuery) {
-    return this.exhibits.list(query);
+  list(@Query() query: ListExhibitsQuery, @CurrentUser() person: User) {
+    return this.exhibits.list(query, person);
   }
 
   @Roles(...ROLES)
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number) {
-    return this.exhibits.get(id);
+  get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.exhibits.get(id, person);
   }
 
   @Post()
-  create(@Body() dto: CreateExhibitDto) {
-    return this.exhibits.create(dto);
+  create(@Body() dto: CreateExhibitDto, @CurrentUser() person: User) {
+    return this.exhibits.create(dto, person);
   }
 
   @Patch(':id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateExhibitDto) {
-    return this.exhibits.update(id, dto);
+  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateExhibitDto, @CurrentUser() person: User) {
+    return this.exhibits.update(id, dto, person);
   }
 
   @Delete(':id')

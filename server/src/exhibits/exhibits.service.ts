@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { ExhibitView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import { invalidField } from '../common/validation.js';
 import { SettingsService } from '../venues/settings.service.js';
 import type { CreateExhibitDto, UpdateExhibitDto } from './dto/exhibit.dto.js';
@@ -18,15 +19,15 @@ export class ExhibitsService extends SettingsService<Exhibit, ExhibitView> {
     });
   }
 
-  override create(dto: CreateExhibitDto) {
+  override create(dto: CreateExhibitDto, person: Person) {
     assertPlannedDates(dto.plannedStart, dto.plannedEnd);
-    return super.create(dto);
+    return super.create(dto, person);
   }
 
-  override async update(id: number, dto: UpdateExhibitDto) {
+  override async update(id: number, dto: UpdateExhibitDto, person: Person) {
     const exhibit = await this.find(id);
     assertPlannedDates(dto.plannedStart === undefined ? exhibit.plannedStart : dto.plannedStart, dto.plannedEnd === undefined ? exhibit.plannedEnd : dto.plannedEnd);
-    return super.update(id, dto);
+    return super.update(id, dto, person);
   }
 }
 

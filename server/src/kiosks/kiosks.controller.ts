@@ -1,19 +1,19 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Ip, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { KioskStates } from '../fleet/kiosk-states.service.js';
 import { ListKiosksQuery } from './dto/kiosk-report.dto.js';
 import { PairStationDto } from './dto/pairing.dto.js';
+import { FLEET_KEEPERS } from './kiosk-policy.js';
 import { KiosksService } from './kiosks.service.js';
 import { PairingService } from './pairing.service.js';
-
-const TECHNICIANS = ['technician', 'admin'] as const;
 
 /** The fleet as technicians handle it: pairing at a station, the kiosk list, revoking. */
 @ApiTags('kiosks')
 @ApiBearerAuth()
-@Roles(...TECHNICIANS)
+@Roles(...FLEET_KEEPERS)
 @Controller()
 export class KiosksController {
   constructor(
@@ -27,12 +27,14 @@ export class KiosksController {
     return this.pairing.pairStation(stationId, dto.pairingCode, user, address);
   }
 
+  @ApiCan('kiosk', { page: true })
   @Get('kiosks')
-  async list(@Query() query: ListKiosksQuery) {
-    const page = await this.kiosks.list(query);
+  async list(@Query() query: ListKiosksQuery, @CurrentUser() person: User) {
+    const page = await this.kiosks.list(query, person);
     return { ...page, items: page.items.map((kiosk) => this.states.present(kiosk)), thresholds: this.states.thresholds };
   }
 
+  @ApiCan('kiosk')
   @Post('kiosks/:id/revoke')
   @HttpCode(HttpStatus.OK)
   revoke(@Param('id', ParseIntPipe) id: number, @CurrentUser() user: User) {

@@ -1,7 +1,9 @@
 import type { KioskPublicationView, KioskView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import type { Release } from '../releases/models/release.model.js';
 import type { Gallery } from '../venues/models/gallery.model.js';
 import type { Station } from '../venues/models/station.model.js';
+import { kioskCan } from './kiosk-policy.js';
 import type { Kiosk } from './models/kiosk.model.js';
 
 const releaseRef = (release: Release | undefined) => (release ? { id: release.id, number: release.number } : null);
@@ -14,8 +16,8 @@ export const publicationReport = (report: PublicationReport): KioskPublicationVi
     ? null
     : { sequence: report.publicationSequence, expiresAt: report.publicationExpiresAt.toISOString(), expired: Boolean(report.publicationExpired) };
 
-/** `kiosk` with its station and gallery; releases by id, for what it plays and what is Live. */
-export const toKioskView = (kiosk: Kiosk & { station: Station & { gallery: Gallery } }, releases: Map<number, Release>, live: Map<number, Release>): KioskView => ({
+/** `kiosk` with its station and gallery; releases by id, for what it plays and what is Live; what `person` may do to it. */
+export const toKioskView = (kiosk: Kiosk & { station: Station & { gallery: Gallery } }, releases: Map<number, Release>, live: Map<number, Release>, person: Person): KioskView => ({
   id: kiosk.id,
   station: { id: kiosk.station.id, name: kiosk.station.name },
   gallery: { id: kiosk.station.gallery.id, name: kiosk.station.gallery.name },
@@ -30,4 +32,5 @@ export const toKioskView = (kiosk: Kiosk & { station: Station & { gallery: Galle
   releasePlaying: releaseRef(kiosk.lastReleaseId === null ? undefined : releases.get(kiosk.lastReleaseId)),
   releaseLive: releaseRef(live.get(kiosk.station.galleryId)),
   publication: publicationReport(kiosk),
+  can: kioskCan(person, kiosk),
 });

@@ -4,6 +4,7 @@ import { Op, QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { EventsResponse, KioskManifestResponse, KioskView, Page } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
+import type { Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { unknownReference } from '../common/validation.js';
@@ -18,6 +19,7 @@ import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import type { HeartbeatDto, KioskEventDto, KioskEventsDto, ListKiosksQuery } from './dto/kiosk-report.dto.js';
 import type { KioskRequest } from './device-token.guard.js';
+import { refuseIfRevoked } from './kiosk-policy.js';
 import { toKioskView } from './kiosks.presenter.js';
 import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
 import { Kiosk } from './models/kiosk.model.js';
@@ -133,37 +135,36 @@ export class KiosksService {
   }
 
   /** The fleet: every kiosk with its station, gallery, last heartbeat and the releases it plays and should play. */
-  async list(query: ListKiosksQuery): Promise<Page<KioskView>> {
+  async list(query: ListKiosksQuery, person: Person): Promise<Page<KioskView>> {
     const { rows, count } = await this.kiosks.findAndCountAll({
       include: [{ model: Station, required: true, where: query.galleryId ? { galleryId: query.galleryId } : {}, include: [Gallery] }],
       // By gallery, so the Fleet page can head each gallery's rows; revoked kiosks last within it.
       order: [['station', 'gallery', 'name', 'ASC'], ['station', 'galleryId', 'ASC'], ['revokedAt', 'ASC'], ['station', 'name', 'ASC'], ['id', 'ASC']],
       ...pageWindow(query),
     });
-    return toPage(await this.views(rows as (Kiosk & { station: Station & { gallery: Gallery } })[]), count, query);
+    return toPage(await this.views(rows as (Kiosk & { station: Station & { gallery: Gallery } })[], person), count, query);
   }
 
   /** Ends the kiosk's access at once: the guard reads the kiosk on every request. */
   async revoke(id: number, technician: User): Promise<KioskView> {
-    const kiosk = await this.kiosks.findByPk(id);
-    if (!kiosk) throw new NotFoundException('There is no such kiosk.');
-    if (!kiosk.revokedAt) {
-      await this.sequelize.transaction(async (transaction) => {
-        await kiosk.update({ revokedAt: this.clock.now(), deviceTokenHash: null }, { transaction });
-        await this.audit.record({ actorId: technician.id, action: 'kiosk.revoked', targetType: 'kiosk', targetId: kiosk.id, detail: { stationId: kiosk.stationId } }, transaction);
-      });
-    }
-    return this.get(id);
+    await this.sequelize.transaction(async (transaction) => {
+      const kiosk = await this.kiosks.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!kiosk) throw new NotFoundException('There is no such kiosk.');
+      refuseIfRevoked(kiosk);
+      await kiosk.update({ revokedAt: this.clock.now(), deviceTokenHash: null }, { transaction });
+      await this.audit.record({ actorId: technician.id, action: 'kiosk.revoked', targetType: 'kiosk', targetId: kiosk.id, detail: { stationId: kiosk.stationId } }, transaction);
+    });
+    return this.get(id, technician);
   }
 
-  async get(id: number): Promise<KioskView> {
+  async get(id: number, person: Person): Promise<KioskView> {
     const kiosk = await this.kiosks.findByPk(id, { include: [{ model: Station, include: [Gallery] }] });
     if (!kiosk) throw new NotFoundException('There is no such kiosk.');
-    const [view] = await this.views([kiosk as Kiosk & { station: Station & { gallery: Gallery } }]);
+    const [view] = await this.views([kiosk as Kiosk & { station: Station & { gallery: Gallery } }], person);
     return view!;
   }
 
-  private async views(kiosks: (Kiosk & { station: Station & { gallery: Gallery } })[]): Promise<KioskView[]> {
+  private async views(kiosks: (Kiosk & { station: Station & { gallery: Gallery } })[], person: Person): Promise<KioskView[]> {
     const playing = kiosks.flatMap((k) => (k.lastReleaseId === null ? [] : [k.lastReleaseId]));
     const galleryIds = [...new Set(kiosks.map((k) => k.station.galleryId))];
     const [played, live] = await Promise.all([
@@ -172,6 +173,6 @@ export class KiosksService {
     ]);
     const byId = new Map(played.map((r) => [r.id, r]));
     const liveByGallery = new Map(live.map((r) => [r.galleryId, r]));
-    return kiosks.map((kiosk) => toKioskView(kiosk, byId, liveByGallery));
+    return kiosks.map((kiosk) => toKioskView(kiosk, byId, liveByGallery, person));
   }
 }

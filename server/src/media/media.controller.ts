@@ -2,9 +2,11 @@ import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPip
 import { FilesInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiConsumes, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
+import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { ListMediaQuery, UpdateMediaDto } from './dto/media.dto.js';
+import { MEDIA_KEEPERS } from './media-policy.js';
 import { MediaService, type UploadedFile } from './media.service.js';
 
 /** How many images one upload may carry; the size limit per file comes from MEDIA_MAX_BYTES. */
@@ -12,11 +14,12 @@ export const MAX_FILES_PER_UPLOAD = 20;
 
 @ApiTags('media')
 @ApiBearerAuth()
-@Roles('curator')
+@Roles(...MEDIA_KEEPERS)
 @Controller('media')
 export class MediaController {
   constructor(private readonly media: MediaService) {}
 
+  @ApiCan('media', { array: true, created: true })
   @Post()
   @ApiConsumes('multipart/form-data')
   @UseInterceptors(FilesInterceptor('file', MAX_FILES_PER_UPLOAD))
@@ -24,21 +27,24 @@ export class MediaController {
     return this.media.upload(uploader, files);
   }
 
+  @ApiCan('media', { page: true, listCan: 'mediaLibrary' })
   @Roles(...ROLES)
   @Get()
-  list(@Query() query: ListMediaQuery) {
-    return this.media.list(query);
+  list(@Query() query: ListMediaQuery, @CurrentUser() person: User) {
+    return this.media.list(query, person);
   }
 
+  @ApiCan('media')
   @Roles(...ROLES)
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number) {
-    return this.media.get(id);
+  get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.media.get(id, person);
   }
 
+  @ApiCan('media')
   @Patch(':id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateMediaDto) {
-    return this.media.updateDetails(id, dto);
+  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateMediaDto, @CurrentUser() person: User) {
+    return this.media.updateDetails(id, dto, person);
   }
 
   @Delete(':id')

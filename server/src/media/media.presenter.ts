@@ -1,4 +1,6 @@
 import type { MediaLicence, MediaUsageView, MediaView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
+import { mediaCan } from './media-policy.js';
 import type { MediaAsset } from './models/media-asset.model.js';
 
 /** The public URL of a rendition: immutable, so kiosks, browsers and a CDN may keep it for a year. */
@@ -11,7 +13,7 @@ export function licenceOf(asset: MediaAsset): MediaLicence | null {
 }
 
 /** `asset` with its renditions and alt texts loaded; usage comes from panel_media_usages. */
-export const toMediaView = (asset: MediaAsset, usedIn: MediaUsageView[]): MediaView => ({
+export const toMediaView = (asset: MediaAsset, usedIn: MediaUsageView[], person: Person): MediaView => ({
   id: asset.id,
   sha256: asset.sha256,
   filename: asset.originalFilename,
@@ -29,4 +31,5 @@ export const toMediaView = (asset: MediaAsset, usedIn: MediaUsageView[]): MediaV
   alt: Object.fromEntries((asset.altTexts ?? []).map((alt) => [alt.locale, alt.text])),
   createdAt: asset.createdAt.toISOString(),
   usedIn,
+  can: mediaCan(person, { usedIn }),
 });

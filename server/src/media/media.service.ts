@@ -2,7 +2,8 @@ import { ConflictException, Inject, Injectable, NotFoundException } from '@nestj
 import { InjectModel } from '@nestjs/sequelize';
 import { ForeignKeyConstraintError, Op, UniqueConstraintError, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import type { MediaUsageView, MediaView, Page } from '@mantlepiece/shared';
+import type { MediaPage, MediaUsageView, MediaView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { dateOnlyOf } from '../common/date-only.js';
 import { likePattern, orderOf } from '../common/list-query.js';
@@ -14,6 +15,7 @@ import { Story } from '../stories/models/story.model.js';
 import type { User } from '../users/models/user.model.js';
 import type { ListMediaQuery, UpdateMediaDto } from './dto/media.dto.js';
 import { ImageProcessing, MIME_TYPES, sniffImageKind, type ImageKind, type InspectedImage, type ProcessedImage } from './image-processing.js';
+import { mediaLibraryCan } from './media-policy.js';
 import { toMediaView } from './media.presenter.js';
 import { MEDIA_STORE, originalKey, renditionKey, type MediaStore } from './media-store.js';
 import { MediaAltText } from './models/media-alt-text.model.js';
@@ -62,7 +64,7 @@ export class MediaService {
    * takes back the files this upload wrote. Stored once per content: the same bytes uploaded
    * again give the asset that exists.
    */
-  async upload(uploader: User | null, files: UploadedFile[]): Promise<MediaView[]> {
+  async upload(uploader: User, files: UploadedFile[]): Promise<MediaView[]> {
     if (!files?.length) {
       throw invalidField(['file'], 'Choose at least one image to upload.');
     }
@@ -85,7 +87,7 @@ export class MediaService {
       await this.removeUnclaimed(written);
       throw error;
     }
-    return this.viewsOf(inspected.map(({ sha256 }) => known.get(sha256) ?? created.get(sha256)!));
+    return this.viewsOf(inspected.map(({ sha256 }) => known.get(sha256) ?? created.get(sha256)!), uploader);
   }
 
   /**
@@ -112,7 +114,7 @@ export class MediaService {
   }
 
   /** The Media library: searched, filtered, sorted and paged by the database. */
-  async list(query: ListMediaQuery): Promise<Page<MediaView>> {
+  async list(query: ListMediaQuery, person: Person): Promise<MediaPage> {
     const conditions: WhereOptions<MediaAsset>[] = [];
     if (query.q) {
       const pattern = likePattern(query.q);
@@ -131,17 +133,17 @@ export class MediaService {
       order: orderOf(query.sort, { filename: 'originalFilename' }),
       ...pageWindow(query),
     });
-    return toPage(await this.viewsOf(rows.map((row) => row.id)), count, query);
+    return { ...toPage(await this.viewsOf(rows.map((row) => row.id), person), count, query), can: mediaLibraryCan(person) };
   }
 
-  async get(id: number): Promise<MediaView> {
-    const [view] = await this.viewsOf([id]);
+  async get(id: number, person: Person): Promise<MediaView> {
+    const [view] = await this.viewsOf([id], person);
     if (!view) throw new NotFoundException('There is no such image.');
     return view;
   }
 
   /** Credit, licence, expiry and alt text; an alt text set to "" removes that locale's. */
-  async updateDetails(id: number, dto: UpdateMediaDto): Promise<MediaView> {
+  async updateDetails(id: number, dto: UpdateMediaDto, person: Person): Promise<MediaView> {
     await this.sequelize.transaction(async (transaction) => {
       const asset = await this.lockAsset(id, transaction);
       if (dto.credit !== undefined) asset.credit = dto.credit?.trim() || null;
@@ -154,7 +156,7 @@ export class MediaService {
       await asset.save({ transaction });
       if (dto.alt) await this.setAltTexts(id, dto.alt, transaction);
     });
-    return this.get(id);
+    return this.get(id, person);
   }
 
   /** Refused while any panel shows the image; the answer says where. */
@@ -274,7 +276,7 @@ export class MediaService {
   }
 
   /** Views of these assets in this order, each with renditions, alt texts and where it is used. */
-  private async viewsOf(ids: number[]): Promise<MediaView[]> {
+  private async viewsOf(ids: number[], person: Person): Promise<MediaView[]> {
     if (ids.length === 0) return [];
     const assets = await this.assets.findAll({ where: { id: ids }, include: [MediaRendition, MediaAltText] });
     const usage = await this.usageOf(ids);
@@ -282,7 +284,7 @@ export class MediaService {
     return ids
       .map((id) => byId.get(id))
       .filter((asset): asset is MediaAsset => asset !== undefined)
-      .map((asset) => toMediaView(asset, usage.filter((use) => use.mediaAssetId === asset.id).map(({ mediaAssetId: _, ...use }) => use)));
+      .map((asset) => toMediaView(asset, usage.filter((use) => use.mediaAssetId === asset.id).map(({ mediaAssetId: _, ...use }) => use), person));
   }
 
   private async usageOf(ids: number[], transaction?: Transaction): Promise<(MediaUsageView & { mediaAssetId: number })[]> {

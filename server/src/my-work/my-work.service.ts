@@ -54,8 +54,8 @@ export class MyWorkService {
       has('curator') ? this.curatorWork(user) : undefined,
       has('educator') ? this.educatorWork() : undefined,
       has('translator') ? this.translatorWork(user) : undefined,
-      has('technician') ? this.technicianWork() : undefined,
-      has('admin') ? this.adminWork() : undefined,
+      has('technician') ? this.technicianWork(user) : undefined,
+      has('admin') ? this.adminWork(user) : undefined,
     ]);
     return { ...(curator && { curator }), ...(educator && { educator }), ...(translator && { translator }), ...(technician && { technician }), ...(admin && { admin }) };
   }
@@ -63,7 +63,7 @@ export class MyWorkService {
   /** Their own stories: drafts to finish, changes an educator asked for, comments still open. */
   private async curatorWork(user: User): Promise<NonNullable<MyWorkView['curator']>> {
     const own = async (state: StoryState) => {
-      const page = await this.stories.list({ ...WIDE_PAGE, state, sort: '-updatedAt' });
+      const page = await this.stories.list({ ...WIDE_PAGE, state, sort: '-updatedAt' }, user);
       return workList(page.items.filter((story) => story.createdBy?.id === user.id).map(toStoryWork));
     };
     const [drafts, changesRequested, openComments] = await Promise.all([own('draft'), own('changes_requested'), this.openComments(user)]);
@@ -103,9 +103,9 @@ export class MyWorkService {
   }
 
   /** Kiosks that stopped reporting, and releases waiting to be published or that failed to build. */
-  private async technicianWork(): Promise<NonNullable<MyWorkView['technician']>> {
+  private async technicianWork(user: User): Promise<NonNullable<MyWorkView['technician']>> {
     const [fleet, releases] = await Promise.all([
-      this.kiosks.list({ ...WIDE_PAGE }),
+      this.kiosks.list({ ...WIDE_PAGE }, user),
       this.releases.findAll({
         where: {
           [Op.or]: [{ state: 'ready' }, { state: 'failed', createdAt: { [Op.gte]: this.clock.fromNow(-FAILED_RELEASE_DAYS * DAY_MS) } }],
@@ -120,7 +120,7 @@ export class MyWorkService {
   }
 
   /** Invitations nobody has accepted yet, newest first, and media licences that end within 60 days (or have ended), soonest first. */
-  private async adminWork(): Promise<NonNullable<MyWorkView['admin']>> {
+  private async adminWork(user: User): Promise<NonNullable<MyWorkView['admin']>> {
     const now = this.clock.now();
     const [invitations, licences] = await Promise.all([
       this.invitations.findAndCountAll({
@@ -128,7 +128,7 @@ export class MyWorkService {
         order: [['createdAt', 'DESC'], ['id', 'DESC']],
         limit: MY_WORK_LIST_LENGTH,
       }),
-      this.media.list({ ...FIRST_PAGE, expiringWithinDays: LICENCE_WARNING_DAYS, sort: 'licenceExpiresOn' }),
+      this.media.list({ ...FIRST_PAGE, expiringWithinDays: LICENCE_WARNING_DAYS, sort: 'licenceExpiresOn' }, user),
     ]);
     return {
       invitations: { items: invitations.rows.map(toInvitationWork), total: invitations.count },

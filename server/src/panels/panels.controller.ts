@@ -2,13 +2,14 @@ import { Body, Controller, Delete, HttpCode, HttpStatus, Param, ParseIntPipe, Pa
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/auth.decorators.js';
 import { VersionConflictFilter } from '../common/version-conflict.js';
+import { STORY_WRITERS } from '../stories/story-policy.js';
 import { CreatePanelDto, ReorderPanelsDto, SavePanelDocumentDto, UpdatePanelDto } from './dto/panel.dto.js';
 import { PanelsService } from './panels.service.js';
 
 /** Panels are read with their story (GET /api/stories/:id); these are the curator's writes. */
 @ApiTags('panels')
 @ApiBearerAuth()
-@Roles('curator')
+@Roles(...STORY_WRITERS)
 @UseFilters(VersionConflictFilter)
 @Controller()
 export class PanelsController {

@@ -9,6 +9,7 @@ import {
 import { VersionConflictException } from '../common/version-conflict.js';
 import { MediaAsset } from '../media/models/media-asset.model.js';
 import { Story } from '../stories/models/story.model.js';
+import { refuseUnlessEditable } from '../stories/story-policy.js';
 import type { CreatePanelDto, SavePanelDocumentDto, UpdatePanelDto } from './dto/panel.dto.js';
 import { PanelDocument } from './models/panel-document.model.js';
 import { PanelMediaUsage } from './models/panel-media-usage.model.js';
@@ -143,10 +144,14 @@ export class PanelsService {
     await this.usages.bulkCreate([...ids].map((mediaAssetId) => ({ panelId, mediaAssetId })), { transaction });
   }
 
-  /** Every change to a story's panels goes through its row lock, so positions never interleave. */
+  /**
+   * Every change to a story's panels goes through its row lock, so positions never interleave and
+   * no change slips in after a submission; only a story the curator may write in is changed.
+   */
   private async lockStory(storyId: number, transaction: Transaction): Promise<Story> {
     const story = await this.stories.findByPk(storyId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!story) throw new NotFoundException('There is no such story.');
+    refuseUnlessEditable(story);
     return story;
   }
 

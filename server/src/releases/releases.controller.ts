@@ -1,13 +1,13 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
+import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { CompareReleasesQuery, ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
 import { ReleasesService } from './releases.service.js';
+import { PUBLISHERS } from './release-policy.js';
 import { VenueSigningKeysService } from './venue-signing-keys.service.js';
-
-const PUBLISHERS = ['technician', 'admin'] as const;
 
 @ApiTags('releases')
 @ApiBearerAuth()
@@ -25,10 +25,11 @@ export class ReleasesController {
     return this.releases.requestRelease(galleryId, dto, user);
   }
 
+  @ApiCan('release', { page: true, listCan: 'releases' })
   @Roles(...ROLES)
   @Get('galleries/:id/releases')
-  list(@Param('id', ParseIntPipe) galleryId: number, @Query() query: ListReleasesQuery) {
-    return this.releases.listForGallery(galleryId, query);
+  list(@Param('id', ParseIntPipe) galleryId: number, @Query() query: ListReleasesQuery, @CurrentUser() person: User) {
+    return this.releases.listForGallery(galleryId, query, person);
   }
 
   @Roles(...ROLES)
@@ -37,10 +38,11 @@ export class ReleasesController {
     return this.releases.compare(a, b);
   }
 
+  @ApiCan('release')
   @Roles(...ROLES)
   @Get('releases/:id')
-  get(@Param('id', ParseIntPipe) id: number) {
-    return this.releases.get(id);
+  get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.releases.get(id, person);
   }
 
   @Roles(...ROLES)
@@ -49,6 +51,7 @@ export class ReleasesController {
     return this.releases.signedManifest(id);
   }
 
+  @ApiCan('release')
   @Roles(...PUBLISHERS)
   @Post('releases/:id/publish')
   @HttpCode(HttpStatus.OK)

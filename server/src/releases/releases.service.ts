@@ -2,8 +2,9 @@ import { ConflictException, Injectable, NotFoundException } from '@nestjs/common
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import type { ManifestResponse, Page, ReleaseComparison, ReleaseStoryView, ReleaseView } from '@mantlepiece/shared';
+import type { ManifestResponse, ReleaseComparison, ReleasePage, ReleaseStoryView, ReleaseView } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
+import type { Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { Revision } from '../revisions/models/revision.model.js';
@@ -16,6 +17,7 @@ import { ReleasePanel } from './models/release-panel.model.js';
 import { ReleaseStory } from './models/release-story.model.js';
 import { Release } from './models/release.model.js';
 import { releaseRefusal, ReleaseContentService } from './release-content.service.js';
+import { isPublishable, releasesCan } from './release-policy.js';
 import { PublicationsService } from './publications.service.js';
 import { toReleaseView } from './releases.presenter.js';
 import { ReleasesWorker } from './releases.worker.js';
@@ -74,13 +76,13 @@ export class ReleasesService {
     return { id: release.id, state: 'building' };
   }
 
-  async get(id: number): Promise<ReleaseView> {
+  async get(id: number, person: Person): Promise<ReleaseView> {
     const release = await this.find(id);
-    return toReleaseView(release, await this.storiesOf(release.id));
+    return toReleaseView(release, await this.storiesOf(release.id), person);
   }
 
   /** Newest first. */
-  async listForGallery(galleryId: number, query: ListReleasesQuery): Promise<Page<ReleaseView>> {
+  async listForGallery(galleryId: number, query: ListReleasesQuery, person: Person): Promise<ReleasePage> {
     if (!(await this.galleries.findByPk(galleryId, { attributes: ['id'] }))) throw new NotFoundException('There is no such gallery.');
     const { rows, count } = await this.releases.findAndCountAll({
       where: { galleryId },
@@ -88,8 +90,8 @@ export class ReleasesService {
       order: [['number', 'DESC']],
       ...pageWindow(query),
     });
-    const items = await Promise.all(rows.map(async (release) => toReleaseView(release, await this.storiesOf(release.id))));
-    return toPage(items, count, query);
+    const items = await Promise.all(rows.map(async (release) => toReleaseView(release, await this.storiesOf(release.id), person)));
+    return { ...toPage(items, count, query), can: releasesCan(person) };
   }
 
   /** The signed manifest as a kiosk receives it, for staff to read. */
@@ -116,7 +118,7 @@ export class ReleasesService {
       await this.galleries.findByPk(galleryId, { attributes: ['id'], transaction, lock: transaction.LOCK.UPDATE });
       const release = await this.releases.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
       if (!release) throw new NotFoundException('There is no such release.');
-      if (release.state !== 'ready' && release.state !== 'superseded') {
+      if (!isPublishable(release.state)) {
         throw new ConflictException(`Release ${release.number} is ${release.state}; only a Ready or Superseded release can go Live.`);
       }
       const previous = await this.releases.findOne({ where: { liveGalleryId: release.galleryId }, transaction, lock: transaction.LOCK.UPDATE });
@@ -133,7 +135,7 @@ export class ReleasesService {
       return published;
     });
     await this.publications.sign(publication);
-    return this.get(id);
+    return this.get(id, user);
   }
 
   /** What changed from release `a` to release `b`, story by story. */

@@ -1,5 +1,6 @@
 import { Body, Controller, Get, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { STORY_WORKFLOW } from '@mantlepiece/shared';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { RecordVerdictDto, ReviewQueueQuery } from './dto/review.dto.js';
@@ -8,7 +9,7 @@ import { ReviewsService } from './reviews.service.js';
 /** The educator's side of review: the queue and verdicts. */
 @ApiTags('reviews')
 @ApiBearerAuth()
-@Roles('educator')
+@Roles(...STORY_WORKFLOW.approve.roles)
 @Controller()
 export class ReviewsController {
   constructor(private readonly reviews: ReviewsService) {}

@@ -159,7 +159,7 @@ export class ReviewsService {
       await story.update({ state }, { transaction });
       await this.audit.record({ actorId: curator.id, action: 'revision.withdrawn', targetType: 'revision', targetId: open!.id, detail: { storyId, number: open!.number } }, transaction);
     });
-    return this.storyViews.view(storyId);
+    return this.storyViews.view(storyId, curator);
   }
 
   /**
@@ -177,7 +177,7 @@ export class ReviewsService {
         detail: { approvedRevisionId: approved?.id ?? null, approvedNumber: approved?.number ?? null },
       }, transaction);
     });
-    return this.storyViews.view(storyId);
+    return this.storyViews.view(storyId, curator);
   }
 
   /** Takes an approved story out of future releases; bringing it back means a new review. */
@@ -188,7 +188,7 @@ export class ReviewsService {
       await story.update({ state }, { transaction });
       await this.audit.record({ actorId: actor.id, action: 'story.retired', targetType: 'story', targetId: storyId }, transaction);
     });
-    return this.storyViews.view(storyId);
+    return this.storyViews.view(storyId, actor);
   }
 
   /** Open revisions waiting for verdicts, searched by story title, paged by the database. */

@@ -1,11 +1,13 @@
 import { Body, Controller, HttpCode, HttpStatus, Param, ParseIntPipe, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { STORY_WORKFLOW } from '@mantlepiece/shared';
+import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { SubmitForReviewDto } from './dto/submit.dto.js';
 import { ReviewsService } from './reviews.service.js';
 
-/** The moves of a story through review that its curator makes. */
+/** The moves of a story through review that its curator makes; who may call each is the shared workflow's table, which `decide` and the story policy read too. */
 @ApiTags('stories')
 @ApiBearerAuth()
 @Controller('stories')
@@ -13,27 +15,30 @@ export class StoryWorkflowController {
   constructor(private readonly reviews: ReviewsService) {}
 
   @Post(':id/submit')
-  @Roles('curator')
+  @Roles(...STORY_WORKFLOW.submit.roles)
   submit(@Param('id', ParseIntPipe) id: number, @Body() dto: SubmitForReviewDto, @CurrentUser() curator: User) {
     return this.reviews.submitForReview(id, curator, dto);
   }
 
+  @ApiCan('story')
   @Post(':id/withdraw')
-  @Roles('curator')
+  @Roles(...STORY_WORKFLOW.withdraw.roles)
   @HttpCode(HttpStatus.OK)
   withdraw(@Param('id', ParseIntPipe) id: number, @CurrentUser() curator: User) {
     return this.reviews.withdrawSubmission(id, curator);
   }
 
+  @ApiCan('story')
   @Post(':id/revise')
-  @Roles('curator')
+  @Roles(...STORY_WORKFLOW.revise.roles)
   @HttpCode(HttpStatus.OK)
   revise(@Param('id', ParseIntPipe) id: number, @CurrentUser() curator: User) {
     return this.reviews.reviseStory(id, curator);
   }
 
+  @ApiCan('story')
   @Post(':id/retire')
-  @Roles('curator', 'admin')
+  @Roles(...STORY_WORKFLOW.retire.roles)
   @HttpCode(HttpStatus.OK)
   retire(@Param('id', ParseIntPipe) id: number, @CurrentUser() actor: User) {
     return this.reviews.retireStory(id, actor);

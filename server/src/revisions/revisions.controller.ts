@@ -1,7 +1,9 @@
 import { Controller, Get, Param, ParseIntPipe } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
-import { Roles } from '../auth/auth.decorators.js';
+import { ApiCan } from '../auth/api-can.js';
+import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
 import { RevisionsService } from './revisions.service.js';
 
 /** Read-only on purpose: a revision is never edited, only superseded by a new submission. */
@@ -23,13 +25,15 @@ export class RevisionsController {
     return this.revisions.draftPreflight(storyId);
   }
 
+  @ApiCan('revision')
   @Get('revisions/:id')
-  get(@Param('id', ParseIntPipe) id: number) {
-    return this.revisions.get(id);
+  get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.revisions.get(id, person);
   }
 
+  @ApiCan('revision', { comparison: true })
   @Get('revisions/:id/compare')
-  compare(@Param('id', ParseIntPipe) id: number) {
-    return this.revisions.compare(id);
+  compare(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.revisions.compare(id, person);
   }
 }

@@ -1,4 +1,4 @@
-import type { CommentView, PersonRef, ReviewView, RevisionSummary, RevisionView } from '@mantlepiece/shared';
+import type { CommentView, PersonRef, ReviewView, RevisionCan, RevisionSummary, RevisionView } from '@mantlepiece/shared';
 import type { User } from '../users/models/user.model.js';
 import type { Revision } from './models/revision.model.js';
 
@@ -20,6 +20,7 @@ export interface RevisionParts {
   reviews: ReviewView[];
   comments: CommentView[];
   previousApprovedRevisionId: number | null;
+  can: RevisionCan;
 }
 
 /** The title is the one submitted, like every other part of the snapshot. */

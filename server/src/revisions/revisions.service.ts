@@ -6,6 +6,7 @@ import {
   buildRevisionSnapshot, diffRevisions, runPreflight,
   type ComparisonBasis, type PreflightEntry, type PreflightMedia, type RevisionComparison, type RevisionSnapshot, type RevisionState, type RevisionSummary, type RevisionView,
 } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { CommentsService } from '../comments/comments.service.js';
 import { dateOnlyOf } from '../common/date-only.js';
@@ -22,6 +23,7 @@ import { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { Revision } from './models/revision.model.js';
+import { revisionCan } from './revision-policy.js';
 import { toRevisionSummary, toRevisionView } from './revisions.presenter.js';
 
 /** Approvals recorded on the row's revision, as a column of a Revision query. */
@@ -113,8 +115,8 @@ export class RevisionsService {
     return rows.map(toRevisionSummary);
   }
 
-  async get(id: number): Promise<RevisionView> {
-    return this.view(await this.find(id));
+  async get(id: number, person: Person): Promise<RevisionView> {
+    return this.view(await this.find(id), person);
   }
 
   /**
@@ -122,21 +124,30 @@ export class RevisionsService {
    * the last one sent back with changes requested: the educator who asked sees what changed in
    * answer, rather than every panel marked new. Every panel is new only on a first review.
    */
-  async compare(id: number): Promise<RevisionComparison> {
+  async compare(id: number, person: Person): Promise<RevisionComparison> {
     const revision = await this.find(id);
     const approved = await this.lastApprovedBefore(revision);
     const base = approved ?? (await this.lastBefore(revision, 'changes_requested'));
     const basis: ComparisonBasis = approved ? 'approved' : base ? 'changes_requested' : 'first_review';
-    return { basis, base: base && (await this.view(base)), diff: diffRevisions(base?.snapshot ?? null, revision.snapshot) };
+    return { basis, base: base && (await this.view(base, person)), diff: diffRevisions(base?.snapshot ?? null, revision.snapshot) };
   }
 
-  private async view(revision: Revision): Promise<RevisionView> {
-    const [reviews, comments, previous] = await Promise.all([
+  private async view(revision: Revision, person: Person): Promise<RevisionView> {
+    const [reviews, comments, previous, story] = await Promise.all([
       this.reviews.findAll({ where: { revisionId: revision.id }, include: [{ model: User, attributes: ['id', 'name'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
-      this.comments.listForRevision(revision.id),
+      this.comments.listForRevision(revision.id, person),
       this.lastApprovedBefore(revision, ['id']),
+      this.stories.findByPk(revision.storyId),
     ]);
-    return toRevisionView(revision, { reviews: reviews.map(toReviewView), comments, previousApprovedRevisionId: previous?.id ?? null });
+    const can = revisionCan(person, {
+      state: revision.state,
+      storyState: story!.state,
+      authorId: revision.submittedById,
+      approverIds: reviews.filter((review) => review.verdict === 'approve').map((review) => review.reviewerId),
+      requiredApprovals: (await this.venueOf(story!))?.requiredApprovals ?? 1,
+      blockers: revision.blockerCount,
+    });
+    return toRevisionView(revision, { reviews: reviews.map(toReviewView), comments, previousApprovedRevisionId: previous?.id ?? null, can });
   }
 
   private lastApprovedBefore(revision: Revision, attributes?: string[]): Promise<Revision | null> {

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { KIOSK_SWITCHES, type KioskEventType, type KioskSwitch, type RevisionSnapshot } from '@mantlepiece/shared';
+import { NOBODY } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { KioskEvent } from '../kiosks/models/kiosk-event.model.js';
 import { KioskHeartbeat } from '../kiosks/models/kiosk-heartbeat.model.js';
@@ -101,7 +102,7 @@ export class DemoFleet {
     const { id } = await this.releases.requestRelease(galleryId, {}, technician);
     await this.worker.idle();
     await this.worker.buildQueued();
-    const built = await this.releases.get(id);
+    const built = await this.releases.get(id, technician);
     if (built.state !== 'ready') throw new Error(`the demo release ended ${built.state}: ${built.failure ?? 'no reason given'}`);
     await this.releases.publish(id, technician);
     return id;
@@ -136,7 +137,7 @@ export class DemoFleet {
   }
 
   private async releasedStories(releaseId: number): Promise<ReleasedStory[]> {
-    const { stories } = await this.releases.get(releaseId);
+    const { stories } = await this.releases.get(releaseId, NOBODY);
     const revisions = new Map((await this.revisions.findAll({ where: { id: stories.map((s) => s.revisionId) } })).map((r) => [r.id, r.snapshot as RevisionSnapshot]));
     return stories.map(({ storyId, revisionId }) => ({
       storyId,

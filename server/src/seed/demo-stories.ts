@@ -167,7 +167,7 @@ export class DemoStories {
     const ids = new Map<string, number>();
     for (const image of IMAGES) {
       const [asset] = await this.media.upload(curator, [{ originalname: image.filename, buffer: await renderDemoImage(image.name) }]);
-      await this.media.updateDetails(asset!.id, { credit: CREDIT, licence: { kind: 'spdx', id: 'CC-BY-4.0' }, licenceExpiresOn: LICENCE_EXPIRES_ON, alt: image.alt });
+      await this.media.updateDetails(asset!.id, { credit: CREDIT, licence: { kind: 'spdx', id: 'CC-BY-4.0' }, licenceExpiresOn: LICENCE_EXPIRES_ON, alt: image.alt }, curator);
       ids.set(`demo-${image.name}`, asset!.id);
     }
 

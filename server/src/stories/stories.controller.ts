@@ -1,38 +1,44 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
+import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { CreateStoryDto, ListStoriesQuery, UpdateStoryDto } from './dto/story.dto.js';
 import { StoriesService } from './stories.service.js';
+import { STORY_WRITERS } from './story-policy.js';
 
 @ApiTags('stories')
 @ApiBearerAuth()
-@Roles('curator')
+@Roles(...STORY_WRITERS)
 @Controller('stories')
 export class StoriesController {
   constructor(private readonly stories: StoriesService) {}
 
+  @ApiCan('story', { page: true, listCan: 'stories' })
   @Roles(...ROLES)
   @Get()
-  list(@Query() query: ListStoriesQuery) {
-    return this.stories.list(query);
+  list(@Query() query: ListStoriesQuery, @CurrentUser() person: User) {
+    return this.stories.list(query, person);
   }
 
+  @ApiCan('story')
   @Roles(...ROLES)
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number) {
-    return this.stories.get(id);
+  get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.stories.get(id, person);
   }
 
+  @ApiCan('story', { one: true, created: true })
   @Post()
   create(@CurrentUser() author: User, @Body() dto: CreateStoryDto) {
     return this.stories.createStory(author, dto);
   }
 
+  @ApiCan('story')
   @Patch(':id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateStoryDto) {
-    return this.stories.updateStory(id, dto);
+  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateStoryDto, @CurrentUser() person: User) {
+    return this.stories.updateStory(id, dto, person);
   }
 
   @Delete(':id')

@@ -2,7 +2,8 @@ import { ConflictException, Injectable, NotFoundException } from '@nestjs/common
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, UniqueConstraintError, type FindOptions, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import type { Page, StoryDetailView, StoryView } from '@mantlepiece/shared';
+import type { StoryDetailView, StoryPage, StoryView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import { likePattern, orderOf } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { unknownReference } from '../common/validation.js';
@@ -16,6 +17,7 @@ import { Venue } from '../venues/models/venue.model.js';
 import type { CreateStoryDto, ListStoriesQuery, UpdateStoryDto } from './dto/story.dto.js';
 import { Story } from './models/story.model.js';
 import { toStoryView } from './stories.presenter.js';
+import { refuseUnlessEditable, storiesCan } from './story-policy.js';
 
 /** Used when there is neither an exhibit nor a venue to take the language from. */
 const FALLBACK_SOURCE_LOCALE = 'en';
@@ -25,12 +27,19 @@ const APPROVED_REVISION_COLUMN = Sequelize.literal(
   "(SELECT CONCAT(`r`.`id`, ':', `r`.`number`) FROM `revisions` AS `r` WHERE `r`.`story_id` = `Story`.`id` AND `r`.`state` = 'approved' ORDER BY `r`.`number` DESC LIMIT 1)",
 );
 
-/** What every StoryView needs: the exhibit's name, the author, the number of panels and the approved revision, in one query. */
+/** Approvals on the story's open submission, or -1 when none is open. */
+const OPEN_APPROVALS_COLUMN = Sequelize.literal(
+  "COALESCE((SELECT (SELECT COUNT(*) FROM `reviews` AS `v` WHERE `v`.`revision_id` = `r`.`id` AND `v`.`verdict` = 'approve') " +
+    "FROM `revisions` AS `r` WHERE `r`.`story_id` = `Story`.`id` AND `r`.`state` = 'open' ORDER BY `r`.`number` DESC LIMIT 1), -1)",
+);
+
+/** What every StoryView needs: the exhibit's name, the author, the number of panels, the approved and the open revision, in one query. */
 const storyColumns: FindOptions<Story> = {
   attributes: {
     include: [
       [Sequelize.literal('(SELECT COUNT(*) FROM `panels` WHERE `panels`.`story_id` = `Story`.`id`)'), 'panelCount'],
       [APPROVED_REVISION_COLUMN, 'approvedRevision'],
+      [OPEN_APPROVALS_COLUMN, 'openApprovals'],
     ],
   },
   include: [
@@ -52,7 +61,7 @@ export class StoriesService {
   ) {}
 
   /** The Stories table: filtered, sorted and paged by the database. */
-  async list(query: ListStoriesQuery): Promise<Page<StoryView>> {
+  async list(query: ListStoriesQuery, person: Person): Promise<StoryPage> {
     const conditions: WhereOptions<Story>[] = [];
     if (query.q) conditions.push({ title: { [Op.like]: likePattern(query.q) } });
     if (query.state) conditions.push({ state: query.state });
@@ -65,17 +74,17 @@ export class StoriesService {
       distinct: true,
       ...pageWindow(query),
     });
-    return toPage(rows.map(toStoryView), count, query);
+    return { ...toPage(rows.map((story) => toStoryView(story, person)), count, query), can: storiesCan(person) };
   }
 
   /** One row of the Stories table, as review moves answer with it. */
-  async view(id: number): Promise<StoryView> {
-    return toStoryView(await this.find(id));
+  async view(id: number, person: Person): Promise<StoryView> {
+    return toStoryView(await this.find(id), person);
   }
 
-  async get(id: number): Promise<StoryDetailView> {
+  async get(id: number, person: Person): Promise<StoryDetailView> {
     const story = await this.find(id);
-    return { ...toStoryView(story), panels: await this.panels.listForStory(story) };
+    return { ...toStoryView(story, person), panels: await this.panels.listForStory(story) };
   }
 
   async createStory(author: User, dto: CreateStoryDto): Promise<StoryView> {
@@ -89,23 +98,24 @@ export class StoriesService {
       createdById: author.id,
       state: 'draft',
     });
-    return toStoryView(await this.find(story.id));
+    return toStoryView(await this.find(story.id), author);
   }
 
   /**
    * Changing the source locale relabels the panels' source documents, so the studio keeps editing
    * the same text; it is refused if a translation into that locale already exists.
    */
-  async updateStory(id: number, dto: UpdateStoryDto): Promise<StoryView> {
+  async updateStory(id: number, dto: UpdateStoryDto, person: Person): Promise<StoryView> {
     await this.sequelize.transaction(async (transaction) => {
       const story = await this.lock(id, transaction);
+      refuseUnlessEditable(story);
       if (dto.exhibitId) await this.findExhibit(dto.exhibitId, transaction);
       if (dto.sourceLocale && dto.sourceLocale !== story.sourceLocale) {
         await this.relabelSourceDocuments(story, dto.sourceLocale, transaction);
       }
       await story.update(dto, { transaction });
     });
-    return toStoryView(await this.find(id));
+    return toStoryView(await this.find(id), person);
   }
 
   /** Once a release has carried the story, kiosks may be playing it: it can be retired, not deleted. */

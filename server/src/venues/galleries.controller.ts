@@ -1,7 +1,8 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
-import { Roles } from '../auth/auth.decorators.js';
+import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
 import { CreateGalleryDto, ListGalleriesQuery, UpdateGalleryDto } from './dto/gallery.dto.js';
 import { GalleriesService } from './galleries.service.js';
 
@@ -14,24 +15,24 @@ export class GalleriesController {
 
   @Roles(...ROLES)
   @Get()
-  list(@Query() query: ListGalleriesQuery) {
-    return this.galleries.list(query);
+  list(@Query() query: ListGalleriesQuery, @CurrentUser() person: User) {
+    return this.galleries.list(query, person);
   }
 
   @Roles(...ROLES)
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number) {
-    return this.galleries.get(id);
+  get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.galleries.get(id, person);
   }
 
   @Post()
-  create(@Body() dto: CreateGalleryDto) {
-    return this.galleries.create(dto);
+  create(@Body() dto: CreateGalleryDto, @CurrentUser() person: User) {
+    return this.galleries.create(dto, person);
   }
 
   @Patch(':id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateGalleryDto) {
-    return this.galleries.update(id, dto);
+  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateGalleryDto, @CurrentUser() person: User) {
+    return this.galleries.update(id, dto, person);
   }
 
   @Delete(':id')

@@ -2,6 +2,7 @@ import { ConflictException, NotFoundException } from '@nestjs/common';
 import { ForeignKeyConstraintError, Op, UniqueConstraintError } from 'sequelize';
 import type { Model, ModelCtor } from 'sequelize-typescript';
 import type { Page } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import { likePattern, orderOf, SearchField, SortField } from '../common/list-query.js';
 import { PageQuery, pageWindow, toPage } from '../common/page.js';
 
@@ -19,7 +20,8 @@ export class ListSettingsQuery extends PageQuery {
 export interface SettingsKind<M, V> {
   /** For messages: "There is no such gallery." */
   label: string;
-  toView: (record: M) => V;
+  /** The record as the API shows it to `person`. */
+  toView: (record: M, person: Person) => V;
   /** Why a delete is refused while other records point at this one. */
   inUse: string;
   /** The column a list query may narrow to one parent by (`?venueId=`). */
@@ -38,7 +40,7 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
     private readonly kind: SettingsKind<M, V>,
   ) {}
 
-  async list(query: ListSettingsQuery): Promise<Page<V>> {
+  async list(query: ListSettingsQuery, person: Person): Promise<Page<V>> {
     const parent = this.kind.parentKey ? (query as unknown as Record<string, unknown>)[this.kind.parentKey] : undefined;
     const where = {
       [Op.and]: [
@@ -47,7 +49,7 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
       ],
     };
     const { rows, count } = await this.model.findAndCountAll({ where, order: orderOf(query.sort), ...pageWindow(query) });
-    return toPage(rows.map(this.kind.toView), count, query);
+    return toPage(rows.map((record) => this.kind.toView(record, person)), count, query);
   }
 
   async find(id: number): Promise<M> {
@@ -56,17 +58,17 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
     return record;
   }
 
-  async get(id: number): Promise<V> {
-    return this.kind.toView(await this.find(id));
+  async get(id: number, person: Person): Promise<V> {
+    return this.kind.toView(await this.find(id), person);
   }
 
-  create(values: object): Promise<V> {
-    return this.write(() => this.model.create({ ...values } as never));
+  create(values: object, person: Person): Promise<V> {
+    return this.write(() => this.model.create({ ...values } as never), person);
   }
 
-  async update(id: number, changes: object): Promise<V> {
+  async update(id: number, changes: object, person: Person): Promise<V> {
     const record = await this.find(id);
-    return this.write(() => record.update(changes as never));
+    return this.write(() => record.update(changes as never), person);
   }
 
   async delete(id: number): Promise<void> {
@@ -79,9 +81,9 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
     }
   }
 
-  private async write(work: () => Promise<M>): Promise<V> {
+  private async write(work: () => Promise<M>, person: Person): Promise<V> {
     try {
-      return this.kind.toView(await work());
+      return this.kind.toView(await work(), person);
     } catch (error) {
       if (error instanceof UniqueConstraintError) {
         throw new ConflictException(`Another ${this.kind.label} already uses this ${Object.keys(error.fields).join(', ') || 'value'}.`);

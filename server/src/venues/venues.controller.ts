@@ -1,7 +1,8 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
-import { Public, Roles } from '../auth/auth.decorators.js';
+import { CurrentUser, Public, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
 import { CreateVenueDto, UpdateVenueDto } from './dto/venue.dto.js';
 import { ListSettingsQuery } from './settings.service.js';
 import { VenuesService } from './venues.service.js';
@@ -21,29 +22,29 @@ export class VenuesController {
   @ApiBearerAuth()
   @Roles(...ROLES)
   @Get('venues')
-  list(@Query() query: ListSettingsQuery) {
-    return this.venues.list(query);
+  list(@Query() query: ListSettingsQuery, @CurrentUser() person: User) {
+    return this.venues.list(query, person);
   }
 
   @ApiBearerAuth()
   @Roles(...ROLES)
   @Get('venues/:id')
-  get(@Param('id', ParseIntPipe) id: number) {
-    return this.venues.get(id);
+  get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.venues.get(id, person);
   }
 
   @ApiBearerAuth()
   @Roles('admin')
   @Post('venues')
-  create(@Body() dto: CreateVenueDto) {
-    return this.venues.create(dto);
+  create(@Body() dto: CreateVenueDto, @CurrentUser() person: User) {
+    return this.venues.create(dto, person);
   }
 
   @ApiBearerAuth()
   @Roles('admin')
   @Patch('venues/:id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateVenueDto) {
-    return this.venues.update(id, dto);
+  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateVenueDto, @CurrentUser() person: User) {
+    return this.venues.update(id, dto, person);
   }
 
   @ApiBearerAuth()

@@ -1,7 +1,9 @@
 import type { GalleryView, StationView, VenueView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import type { Gallery } from './models/gallery.model.js';
 import type { Station } from './models/station.model.js';
 import type { Venue } from './models/venue.model.js';
+import { stationCan } from './station-policy.js';
 
 export const toVenueView = (venue: Venue): VenueView => ({
   id: venue.id,
@@ -16,7 +18,7 @@ export const toVenueView = (venue: Venue): VenueView => ({
 
 export const toGalleryView = (gallery: Gallery): GalleryView => ({ id: gallery.id, venueId: gallery.venueId, name: gallery.name });
 
-export const toStationView = (station: Station): StationView => ({
+export const toStationView = (station: Station, person: Person): StationView => ({
   id: station.id,
   galleryId: station.galleryId,
   name: station.name,
@@ -24,4 +26,5 @@ export const toStationView = (station: Station): StationView => ({
   screenHeightPx: station.screenHeightPx,
   orientation: station.orientation,
   mountingHeightMm: station.mountingHeightMm,
+  can: stationCan(person),
 });

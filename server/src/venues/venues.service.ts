@@ -1,6 +1,7 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { VenueView } from '@mantlepiece/shared';
+import type { Person } from '../auth/policy.js';
 import { invalidField } from '../common/validation.js';
 import { VenueSigningKeysService } from '../releases/venue-signing-keys.service.js';
 import type { CreateVenueDto, UpdateVenueDto } from './dto/venue.dto.js';
@@ -25,17 +26,17 @@ export class VenuesService extends SettingsService<Venue, VenueView> {
   }
 
   /** A new venue gets its release signing key at once. */
-  override async create(dto: CreateVenueDto) {
+  override async create(dto: CreateVenueDto, person: Person) {
     assertLocales(dto.sourceLocale, dto.targetLocales);
-    const venue = await super.create(dto);
+    const venue = await super.create(dto, person);
     await this.signingKeys.createFor(venue.id);
     return venue;
   }
 
-  override async update(id: number, dto: UpdateVenueDto) {
+  override async update(id: number, dto: UpdateVenueDto, person: Person) {
     const venue = await this.find(id);
     assertLocales(dto.sourceLocale ?? venue.sourceLocale, dto.targetLocales ?? venue.targetLocales);
-    return super.update(id, dto);
+    return super.update(id, dto, person);
   }
 }
 

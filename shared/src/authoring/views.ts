@@ -1,3 +1,5 @@
+import type { Page } from '../auth/views.js';
+import type { Can, MediaCan, StationCan, StoryCan } from '../auth/can.js';
 import type { PanelDocJSON } from '../panel/panel-json.js';
 
 /** The views of issue 4 (authoring) as the API sends them; studio and server both code against these. */
@@ -26,7 +28,12 @@ export interface StoryView {
    * is written and reviewed ("Approved · draft in progress"). Null before the first approval.
    */
   approvedRevision: { id: number; number: number } | null;
+  /** What the signed-in person may do to it, as the server decides. */
+  can: StoryCan;
 }
+
+/** GET /api/stories: a page, and whether the signed-in person may start a new story. */
+export type StoryPage = Page<StoryView> & { can: Can<'stories'> };
 
 export interface PanelView {
   id: number;
@@ -85,7 +92,11 @@ export interface MediaView {
   alt: Record<string, string>;
   createdAt: string;
   usedIn: MediaUsageView[];
+  can: MediaCan;
 }
+
+/** GET /api/media: a page, and whether the signed-in person may upload. */
+export type MediaPage = Page<MediaView> & { can: Can<'mediaLibrary'> };
 
 export const MEDIA_MISSING_FILTERS = ['alt', 'credit'] as const;
 export type MediaMissingFilter = (typeof MEDIA_MISSING_FILTERS)[number];
@@ -121,6 +132,7 @@ export interface StationView {
   screenHeightPx: number;
   orientation: Orientation;
   mountingHeightMm: number;
+  can: StationCan;
 }
 
 export interface ExhibitView {

@@ -1,3 +1,6 @@
+import type { Page } from '../auth/views.js';
+import type { Can, KioskCan, ReleaseCan } from '../auth/can.js';
+
 /** Release and kiosk views of the staff API (issue 7), shared by the server and the studio. */
 export type ReleaseState = 'building' | 'ready' | 'live' | 'superseded' | 'failed';
 
@@ -28,7 +31,11 @@ export interface ReleaseView {
   files: number;
   bytes: number;
   stories: ReleaseStoryView[];
+  can: ReleaseCan;
 }
+
+/** GET /api/galleries/:id/releases: a page, and whether the signed-in person may build a release. */
+export type ReleasePage = Page<ReleaseView> & { can: Can<'releases'> };
 
 export interface ReleaseComparison {
   a: { id: number; number: number };
@@ -58,6 +65,7 @@ export interface KioskView {
   releaseLive: { id: number; number: number } | null;
   /** The publication it said it follows in its last heartbeat; null before it reported one. */
   publication: KioskPublicationView | null;
+  can: KioskCan;
 }
 
 /** A kiosk's word on the publication it follows (issue 11). */

@@ -1,4 +1,5 @@
 import type { Page } from '../auth/views.js';
+import type { CommentCan, RevisionCan } from '../auth/can.js';
 import type { StoryState } from '../authoring/views.js';
 import type { PanelDocJSON } from '../panel/panel-json.js';
 import type { PreflightEntry } from '../preflight/types.js';
@@ -90,6 +91,7 @@ export interface CommentView {
    * revision's panel (edited or deleted). Null when the comment has no range or was not carried.
    */
   anchorChanged: boolean | null;
+  can: CommentCan;
 }
 
 export interface RevisionView {
@@ -109,6 +111,7 @@ export interface RevisionView {
   comments: CommentView[];
   /** The story's last approved revision before this one, the base of /compare. */
   previousApprovedRevisionId: number | null;
+  can: RevisionCan;
 }
 
 /**

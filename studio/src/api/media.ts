@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { MediaLicence, MediaMissingFilter, MediaView, Page } from '@mantlepiece/shared';
+import type { MediaLicence, MediaMissingFilter, MediaPage, MediaView, Page } from '@mantlepiece/shared';
 import { api, ApiError, authorizationHeader, NETWORK_FAILURE, refreshSession } from './client';
 
 export const MEDIA_SORTS = ['-createdAt', 'createdAt', 'filename', '-filename'] as const;
@@ -22,7 +22,7 @@ export function useMediaList(params: MediaListParams, enabled = true) {
   return useQuery({
     queryKey: [...mediaListKey, params],
     queryFn: async () => {
-      const page = await api<Page<MediaView>>('/media', { query: { ...params } });
+      const page = await api<MediaPage>('/media', { query: { ...params } });
       // Each asset is also cached on its own, so the editor can draw a picked image at once.
       for (const asset of page.items) queryClient.setQueryData(mediaKey(asset.id), asset);
       return page;

@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ExhibitView, Page, ReleaseComparison, ReleaseState, ReleaseView, RevisionSummary, StoryView } from '@mantlepiece/shared';
+import type { ExhibitView, Page, ReleaseComparison, ReleasePage, ReleaseState, ReleaseView, RevisionSummary, StoryView } from '@mantlepiece/shared';
 import { api } from './client';
 
 export interface ReleaseListParams {
@@ -20,7 +20,7 @@ export const isFinished = (state: ReleaseState) => state !== 'building';
 export function useGalleryReleases(galleryId: number | undefined, { page, pageSize }: ReleaseListParams) {
   return useQuery({
     queryKey: [...galleryReleasesKey(galleryId ?? 0), { page, pageSize }],
-    queryFn: () => api<Page<ReleaseView>>(`/galleries/${galleryId}/releases`, { query: { page, pageSize } }),
+    queryFn: () => api<ReleasePage>(`/galleries/${galleryId}/releases`, { query: { page, pageSize } }),
     enabled: galleryId !== undefined,
     placeholderData: keepPreviousData,
     refetchInterval: (query) => (query.state.data?.items.some((release) => !isFinished(release.state)) ? BUILD_POLL_MS : false),

@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Audience, Page, PanelDocJSON, PanelView, PreflightEntry, StoryDetailView, StoryState, StoryView } from '@mantlepiece/shared';
+import type { Audience, Page, PanelDocJSON, PanelView, PreflightEntry, StoryDetailView, StoryPage, StoryState, StoryView } from '@mantlepiece/shared';
 import { api } from './client';
 
 export const STORY_SORTS = ['title', '-title', 'updatedAt', '-updatedAt', 'createdAt', '-createdAt', 'state', '-state'] as const;
@@ -22,7 +22,7 @@ const draftPreflightKey = (id: number) => ['story', id, 'preflight'] as const;
 export function useStories(params: StoryListParams) {
   return useQuery({
     queryKey: [...storiesKey, params],
-    queryFn: () => api<Page<StoryView>>('/stories', { query: { ...params } }),
+    queryFn: () => api<StoryPage>('/stories', { query: { ...params } }),
     placeholderData: keepPreviousData,
   });
 }

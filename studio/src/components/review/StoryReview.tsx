@@ -1,9 +1,8 @@
 import { useState } from 'react';
 import { Button, makeStyles, MessageBar, MessageBarBody, MessageBarTitle, Text, tokens } from '@fluentui/react-components';
 import { ArchiveRegular, ArrowUndoRegular, EditRegular, SendRegular } from '@fluentui/react-icons';
-import { EDITABLE_STORY_STATES, mayTake, type PreflightEntry, type RevisionSummary, type StoryDetailView } from '@mantlepiece/shared';
+import { type PreflightEntry, type RevisionSummary, type StoryDetailView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { useCurrentUser } from '../../api/session';
 import { useRetireStory, useReviseStory, useRevision, useStoryRevisions, useSubmitStory, useWithdrawSubmission } from '../../api/revisions';
 import { useDraftPreflight } from '../../api/stories';
 import { ConfirmDialog } from '../ConfirmDialog';
@@ -31,7 +30,6 @@ const useStyles = makeStyles({
  * it is in review, so it would only repeat it: the studio offers Withdraw instead. A retired story
  * comes back through review as it is.
  */
-const SUBMIT_OFFERED: readonly StoryDetailView['state'][] = [...EDITABLE_STORY_STATES, 'retired'];
 
 /** What the educator asked for, on the story the curator is about to fix. */
 function ChangesRequested({ revisionId }: { revisionId: number }) {
@@ -106,15 +104,13 @@ type Dialog = 'submit' | 'withdraw' | 'retire';
 
 /**
  * The story's way through review: preflight of the draft, submit (with a note, once nothing
- * blocks), withdraw, revise, retire, and its revisions. The workflow table decides which moves
- * a person's roles and the story's state allow; the latest revision decides whether a withdrawal
- * still can come before a verdict.
+ * blocks), withdraw, revise, retire, and its revisions. The story's `can`, decided by the server,
+ * says which moves are offered.
  */
 export function StoryReview({ story }: { story: StoryDetailView }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const shared = useReviewStyles();
-  const me = useCurrentUser();
   const submit = useSubmitStory(story.id);
   const withdraw = useWithdrawSubmission(story.id);
   const revise = useReviseStory(story.id);
@@ -124,12 +120,12 @@ export function StoryReview({ story }: { story: StoryDetailView }) {
   const revisions = useStoryRevisions(story.id);
   const latest = revisions.data?.reduce<RevisionSummary | undefined>((last, revision) => (!last || revision.number > last.number ? revision : last), undefined);
 
-  const mayWrite = mayTake('submit', me.roles, story.state) && SUBMIT_OFFERED.includes(story.state);
+  const mayWrite = story.can.submit;
   const preflight = useDraftPreflight(story.id, mayWrite);
   const { blockers, warnings } = groupPreflight(preflight.data ?? []);
-  const offerSubmit = mayWrite && preflight.isSuccess && blockers.length === 0 && story.panels.length > 0;
-  const offerWithdraw = mayTake('withdraw', me.roles, story.state) && latest?.state === 'open' && latest.approvals === 0;
-  const offerRevise = mayTake('revise', me.roles, story.state);
+  const offerSubmit = mayWrite && preflight.isSuccess && blockers.length === 0;
+  const offerWithdraw = story.can.withdraw;
+  const offerRevise = story.can.revise;
   const submitted = submit.data;
   const close = () => setDialog(null);
   const moved = (what: NonNullable<typeof done>) => () => { setDone(what); close(); };
@@ -146,7 +142,7 @@ export function StoryReview({ story }: { story: StoryDetailView }) {
           </Button>
         ) : null}
         {offerWithdraw ? <Button icon={<ArrowUndoRegular />} onClick={() => setDialog('withdraw')}>{t('storyReview.withdraw')}</Button> : null}
-        {mayTake('retire', me.roles, story.state) ? (
+        {story.can.retire ? (
           <Button icon={<ArchiveRegular />} onClick={() => setDialog('retire')}>{t('storyReview.retire')}</Button>
         ) : null}
         {mayWrite && blockers.length > 0 ? <Text className={shared.muted}>{t('storyReview.fixBlockersFirst', { count: blockers.length })}</Text> : null}

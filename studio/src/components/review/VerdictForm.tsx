@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Button, Field, makeStyles, Radio, RadioGroup, Text, Textarea, tokens } from '@fluentui/react-components';
-import type { PreflightEntry, StoryState, Verdict } from '@mantlepiece/shared';
+import type { PreflightEntry, RevisionCan, StoryState, Verdict } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { ApiError } from '../../api/client';
 import { useRecordVerdict } from '../../api/reviews';
@@ -15,6 +15,8 @@ const useStyles = makeStyles({
 });
 
 export interface VerdictFormProps {
+  /** Which verdicts the server would take from this person. */
+  can: RevisionCan;
   revisionId: number;
   storyId: number;
   blockers: PreflightEntry[];
@@ -25,12 +27,12 @@ export interface VerdictFormProps {
 }
 
 /** Approve, or ask for changes with a note that says what to change. */
-export function VerdictForm({ revisionId, storyId, blockers, onSettled, onRecorded }: VerdictFormProps) {
+export function VerdictForm({ can, revisionId, storyId, blockers, onSettled, onRecorded }: VerdictFormProps) {
   const { t } = useTranslation();
   const styles = useStyles();
   const shared = useReviewStyles();
   const record = useRecordVerdict(revisionId, storyId);
-  const [verdict, setVerdict] = useState<Verdict>(blockers.length > 0 ? 'request_changes' : 'approve');
+  const [verdict, setVerdict] = useState<Verdict>(can.approve ? 'approve' : 'request_changes');
   const [note, setNote] = useState('');
   const [noteMissing, setNoteMissing] = useState(false);
   const blocked = verdict === 'approve' && blockers.length > 0;
@@ -55,8 +57,8 @@ export function VerdictForm({ revisionId, storyId, blockers, onSettled, onRecord
     <form className={styles.form} onSubmit={submit} noValidate aria-labelledby="verdict-heading">
       <Text as="h2" id="verdict-heading" size={500} weight="semibold" className={shared.heading}>{t('verdict.title')}</Text>
       <RadioGroup value={verdict} onChange={(_event, data) => setVerdict(data.value as Verdict)} aria-label={t('verdict.title')}>
-        <Radio value="approve" label={t('verdict.approve')} disabled={blockers.length > 0} />
-        <Radio value="request_changes" label={t('verdict.requestChanges')} />
+        <Radio value="approve" label={t('verdict.approve')} disabled={!can.approve} />
+        <Radio value="request_changes" label={t('verdict.requestChanges')} disabled={!can.requestChanges} />
       </RadioGroup>
       {blockers.length > 0 ? (
         <FormAlert intent="warning">{t('verdict.blocked', { count: blockers.length })}</FormAlert>

@@ -92,7 +92,7 @@ function KioskDetail({ kiosk, now, busy, onPage }: { kiosk: FleetKioskDetail; no
       <PageHeader
         title={t('fleetKiosk.title', { station: kiosk.station.name })}
         actions={
-          kiosk.revokedAt ? null : <Button icon={<ProhibitedRegular />} onClick={() => setRevoking(true)}>{t('fleetKiosk.revoke')}</Button>
+          kiosk.can.revoke ? <Button icon={<ProhibitedRegular />} onClick={() => setRevoking(true)}>{t('fleetKiosk.revoke')}</Button> : null
         }
       />
       {kiosk.demo ? <FormAlert intent="info">{t('fleet.demoHint')}</FormAlert> : null}

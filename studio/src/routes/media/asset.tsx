@@ -7,7 +7,6 @@ import { useTranslation } from 'react-i18next';
 import { useNavigate, useParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
 import { useDeleteMedia, useMediaAsset, useUpdateMedia } from '../../api/media';
-import { useCurrentUser } from '../../api/session';
 import { useVenues } from '../../api/settings';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { EmptyState } from '../../components/EmptyState';
@@ -17,7 +16,6 @@ import { hasProblems } from '../../components/forms/validation';
 import { useDateFormat } from '../../components/formatting';
 import { LinkButton, TextLink } from '../../components/links';
 import { PageHeader } from '../../components/PageHeader';
-import { canWriteStories } from '../stories/permissions';
 import { ASSET_FIELDS, assetChanges, assetProblems, assetValues, type AssetValues } from './asset-form';
 import { COMMON_SPDX_IMAGE_LICENCES } from './licence';
 import { formatBytes } from './media-facts';
@@ -64,8 +62,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
   const styles = useStyles();
   const navigate = useNavigate();
   const formatDate = useDateFormat();
-  const me = useCurrentUser();
-  const writer = canWriteStories(me.roles);
+  const writer = asset.can.edit;
   const update = useUpdateMedia(asset.id);
   const remove = useDeleteMedia();
   const [values, setValues] = useState<AssetValues>(() => assetValues(asset));
@@ -99,7 +96,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
       <PageHeader
         title={asset.filename}
         intro={<MediaBadges asset={asset} />}
-        actions={writer ? <Button onClick={() => setConfirming(true)}>{t('asset.delete')}</Button> : null}
+        actions={asset.can.delete ? <Button onClick={() => setConfirming(true)}>{t('asset.delete')}</Button> : null}
       />
       <div className={styles.layout}>
         <figure className={styles.figure}>

@@ -2,14 +2,12 @@ import { Button, Field, makeStyles, SearchBox, Select, tokens, ToggleButton } fr
 import { GridRegular, ImageMultipleRegular, TableRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { useMediaList } from '../../api/media';
-import { useCurrentUser } from '../../api/session';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
 import { Pager } from '../../components/lists/Pager';
 import { useListSearch } from '../../components/lists/use-list-search';
 import { MediaDropzone } from '../../components/media/MediaDropzone';
 import { PageHeader } from '../../components/PageHeader';
-import { canWriteStories } from '../stories/permissions';
 import { MEDIA_FILTERS, readMediaListParams } from './list-params';
 import { MediaGrid } from './MediaGrid';
 import { MediaTable } from './MediaTable';
@@ -24,7 +22,6 @@ const useStyles = makeStyles({
 export function MediaPage() {
   const { t } = useTranslation();
   const styles = useStyles();
-  const me = useCurrentUser();
   const { search, query, setQuery, change, clear } = useListSearch();
   const { view, ...params } = readMediaListParams(search);
   const media = useMediaList(params);
@@ -34,7 +31,7 @@ export function MediaPage() {
   return (
     <>
       <PageHeader title={t('media.title')} intro={t('media.intro')} />
-      {canWriteStories(me.roles) ? <div className={styles.upload}><MediaDropzone /></div> : null}
+      {media.data?.can.upload ? <div className={styles.upload}><MediaDropzone /></div> : null}
       <div className={styles.toolbar} role="search">
         <Field label={t('media.search')} className={styles.search}>
           <SearchBox value={query} onChange={(_event, data) => setQuery(data.value)} />

@@ -54,7 +54,7 @@ export function ReleasesTable({ items, live, busy, onPublish }: {
               <TableCell className={styles.number}>{release.state === 'building' || release.state === 'failed' ? '—' : formatBytes(release.bytes, i18n.resolvedLanguage ?? 'en')}</TableCell>
               <TableCell>
                 <span className={styles.actions}>
-                  {kind ? (
+                  {kind && release.can.publish ? (
                     <Button size="small" appearance={kind === 'publish' ? 'primary' : 'secondary'} onClick={() => onPublish(release)} aria-label={t(`releases.actions.${kind}Label`, { name })}>
                       {t(`releases.actions.${kind}`)}
                     </Button>

@@ -6,7 +6,6 @@ import { useParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
 import { useMediaAssets } from '../../api/media';
 import { useRevision, useRevisionComparison } from '../../api/revisions';
-import { useCurrentUser } from '../../api/session';
 import { useStory } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
 import { useResolveMedia } from '../../components/editor/media-resolver';
@@ -71,14 +70,12 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
   const styles = useStyles();
   const shared = useReviewStyles();
   const formatDate = useDateFormat();
-  const me = useCurrentUser();
   const story = useStory(revision.storyId);
   const locale = story.data?.sourceLocale ?? 'en';
   const resolveMedia = useResolveMedia(locale);
   const mediaReady = useRevisionMedia([revision, comparison.data?.base]);
   const { blockers } = groupPreflight(revision.preflight);
-  const isEducator = me.roles.includes('educator');
-  const canComment = me.roles.includes('educator') || me.roles.includes('curator');
+  const canComment = revision.can.comment;
   const numberOf = (panelId: number) => revision.snapshot.findIndex((panel) => panel.panelId === panelId) + 1;
 
   const refreshStory = () => void story.refetch();
@@ -122,9 +119,9 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
           />
         </section>
         <div className={styles.column}>
-          {isEducator && revision.state === 'open' ? (
+          {revision.can.approve || revision.can.requestChanges ? (
             <section className={shared.card}>
-              <VerdictForm revisionId={revision.id} storyId={revision.storyId} blockers={blockers} onSettled={refreshStory} onRecorded={setRecorded} />
+              <VerdictForm can={revision.can} revisionId={revision.id} storyId={revision.storyId} blockers={blockers} onSettled={refreshStory} onRecorded={setRecorded} />
             </section>
           ) : null}
           {recorded ? <div data-verdict-outcome={recorded}><FormAlert intent="success">{t(`verdict.recorded.${outcome}`)}</FormAlert></div> : null}

@@ -72,9 +72,9 @@ export function StationKiosks({ station }: { station: StationView }) {
                   </TableCell>
                   <TableCell>
                     <span className={styles.actions}>
-                      {kiosk.revokedAt ? null : (
+                      {kiosk.can.revoke ? (
                         <Button size="small" onClick={() => { revoke.reset(); setRevoking(kiosk); }} aria-label={t('stations.kiosks.revokeLabel', { name })}>{t('stations.kiosks.revoke')}</Button>
-                      )}
+                      ) : null}
                     </span>
                   </TableCell>
                 </TableRow>

@@ -50,10 +50,12 @@ export function StationPage() {
         })}
         actions={back}
       />
-      <section className={styles.section} aria-labelledby="pair-heading">
-        <Text as="h2" id="pair-heading" size={500} weight="semibold" className={styles.heading}>{t('stations.pair.title')}</Text>
-        <PairKioskForm stationId={view.id} stationName={view.name} />
-      </section>
+      {view.can.pair ? (
+        <section className={styles.section} aria-labelledby="pair-heading">
+          <Text as="h2" id="pair-heading" size={500} weight="semibold" className={styles.heading}>{t('stations.pair.title')}</Text>
+          <PairKioskForm stationId={view.id} stationName={view.name} />
+        </section>
+      ) : null}
       <section className={styles.section} aria-labelledby="kiosks-heading">
         <Text as="h2" id="kiosks-heading" size={500} weight="semibold" className={styles.heading}>{t('stations.kiosks.title')}</Text>
         <StationKiosks station={view} />

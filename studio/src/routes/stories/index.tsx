@@ -4,14 +4,12 @@ import { AddRegular, BookOpenRegular } from '@fluentui/react-icons';
 import { AUDIENCES, STORY_STATES } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate } from 'react-router-dom';
-import { useCurrentUser } from '../../api/session';
 import { useStories } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
 import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
 import { CreateStoryDialog } from './CreateStoryDialog';
 import { readStoryListParams } from './list-params';
-import { canWriteStories } from './permissions';
 import { StoryList } from './StoryList';
 import { useExhibitChoices } from './StoryFieldsForm';
 
@@ -24,7 +22,6 @@ export function StoriesPage() {
   const { t } = useTranslation();
   const styles = useStyles();
   const navigate = useNavigate();
-  const me = useCurrentUser();
   const { search, query, setQuery, change, clear } = useListSearch();
   const params = readStoryListParams(search);
   const stories = useStories(params);
@@ -32,8 +29,7 @@ export function StoriesPage() {
   const [creating, setCreating] = useState(false);
 
   const filtered = Boolean(params.q || params.state || params.exhibitId || params.audience);
-  const writer = canWriteStories(me.roles);
-  const createButton = writer ? (
+  const createButton = stories.data?.can.create ? (
     <Button appearance="primary" icon={<AddRegular />} onClick={() => setCreating(true)}>{t('stories.new')}</Button>
   ) : null;
 

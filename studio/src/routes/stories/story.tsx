@@ -1,11 +1,10 @@
 import { useState } from 'react';
 import { Button, makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { DocumentAddRegular } from '@fluentui/react-icons';
-import { EDITABLE_STORY_STATES, emptyPanelDoc, type PanelView } from '@mantlepiece/shared';
+import { emptyPanelDoc, type PanelView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
-import { useCurrentUser } from '../../api/session';
 import { useCreatePanel, useDeletePanel, useReorderPanels, useStory } from '../../api/stories';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { EmptyState } from '../../components/EmptyState';
@@ -13,7 +12,6 @@ import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
 import { LinkButton } from '../../components/links';
 import { StoryReview } from '../../components/review/StoryReview';
-import { canWriteStories } from './permissions';
 import { PanelStrip } from './PanelStrip';
 import { PanelWorkspace } from './PanelWorkspace';
 import { StoryHeader } from './StoryHeader';
@@ -31,7 +29,6 @@ export function StoryPage() {
   const { id } = useParams();
   const storyId = Number(id);
   const story = useStory(storyId);
-  const me = useCurrentUser();
   const [search, setSearch] = useSearchParams();
   const createPanel = useCreatePanel(storyId);
   const reorder = useReorderPanels(storyId);
@@ -52,7 +49,7 @@ export function StoryPage() {
   }
 
   const { panels } = story.data;
-  const readOnly = !canWriteStories(me.roles) || !EDITABLE_STORY_STATES.includes(story.data.state);
+  const readOnly = !story.data.can.edit;
   const selectedId = Number(search.get('panel')) || panels[0]?.id || null;
   const selected = panels.find((panel) => panel.id === selectedId) ?? panels[0];
   const select = (panelId: number) => setSearch((current) => { const next = new URLSearchParams(current); next.set('panel', String(panelId)); return next; }, { replace: true });
