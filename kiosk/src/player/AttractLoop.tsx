@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { useReducedMotion } from '@mantlepiece/shared/kiosk';
+import { directionOf, useReducedMotion } from '@mantlepiece/shared/kiosk';
 import { kioskLanguages } from '../app/i18n';
 import { Multilingual } from '../screens/Multilingual';
 import type { PlayableRelease } from '../sync/playable-release';
@@ -32,7 +32,7 @@ export function AttractLoop({ release, intervalMs, onBegin }: { release: Playabl
       <span className="strata" aria-hidden="true" />
       <span className="venue venue-small">{manifest.venue.name}</span>
       {title ? (
-        <span key={story!.id} className="highlight" lang={title.locale}>
+        <span key={story!.id} className="highlight" lang={title.locale} dir={directionOf(title.locale)}>
           {image ? <img src={image} alt="" className="highlight-image" /> : null}
           <span className="highlight-title">{title.text}</span>
         </span>

@@ -1,5 +1,6 @@
 import type { CSSProperties } from 'react';
 import type { TFunction } from 'i18next';
+import { directionOf } from '@mantlepiece/shared/kiosk';
 import type { PlayableRelease } from '../sync/playable-release';
 import { menuGrid } from './menu-grid';
 import { storyImage, storyTitle } from './release-content';
@@ -29,7 +30,7 @@ export function StoryMenu({ t, release, locale, onOpen }: { t: TFunction; releas
             <li key={story.id}>
               <button type="button" className="story-card" onClick={() => onOpen(story.id)}>
                 {image ? <img src={image} alt="" /> : <span className="story-card-blank" aria-hidden="true" />}
-                <span className="story-card-title" lang={title.locale}>{title.text}</span>
+                <span className="story-card-title" lang={title.locale} dir={directionOf(title.locale)}>{title.text}</span>
                 <span className="story-card-count">{t('menu.panels', { count: story.panels.length })}</span>
               </button>
             </li>
