@@ -80,6 +80,8 @@ describe('comments on a revision', () => {
     await request(t.http).patch(`/api/comments/${done.body.id}`).set(curator.auth).send({ resolved: true });
     await comment(educator, first.revisionId, { panelId: dropped, body: 'On a panel about to go.' });
     const storyWide = await comment(educator, first.revisionId, { body: 'The story as a whole.' });
+    // In review the panels are closed; withdrawn, the story is a draft again and the panel can go.
+    expect((await request(t.http).post(`/api/stories/${storyId}/withdraw`).set(curator.auth)).status).toBe(200);
     expect((await request(t.http).delete(`/api/panels/${dropped}`).set(curator.auth)).status).toBe(204);
 
     const second = await submit(t, curator.auth, storyId);
