@@ -14,6 +14,7 @@ const key = new PluginKey<HighlightState>('commentHighlights');
 
 /** Marks the words each open comment is about, found in the current text by the carry-over rule. */
 function decorate(state: Pick<EditorState, 'doc'>, comments: readonly CommentView[], panelId: number, locale: string): DecorationSet {
+  if (comments.length === 0) return DecorationSet.empty;
   const drafted = commentsOnDraft(comments, panelId, state.doc.toJSON() as PanelDocJSON, locale);
   if (drafted.every(({ range }) => range === null)) return DecorationSet.empty;
   const index = panelTextIndex(state.doc, locale);
