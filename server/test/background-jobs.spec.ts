@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { getModelToken } from '@nestjs/sequelize';
+import sharp from 'sharp';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { PasswordResetRequest } from '../src/auth/models/password-reset-request.model.js';
@@ -9,14 +10,19 @@ import { PasswordResetsService } from '../src/auth/password-resets.service.js';
 import { SilentKioskWatcher } from '../src/fleet/silent-kiosk.watcher.js';
 import { BackgroundJobs } from '../src/jobs/background-jobs.service.js';
 import { JobClaims } from '../src/jobs/job-claims.service.js';
+import { JobOwner } from '../src/jobs/job-owner.js';
 import { JobLease } from '../src/jobs/models/job-lease.model.js';
 import { MailOutboxWorker } from '../src/mail/mail-outbox.worker.js';
 import { MailService } from '../src/mail/mail.service.js';
 import { OutboxMessage } from '../src/mail/models/outbox-message.model.js';
+import { MediaAsset } from '../src/media/models/media-asset.model.js';
+import { RENDITION_CLAIM_MS, RenditionsWorker } from '../src/media/renditions.worker.js';
 import { ReleaseBuilder } from '../src/releases/release-builder.js';
 import { ReleasesWorker } from '../src/releases/releases.worker.js';
 import { capturedMailTo, discardUnsentMail, mailDir } from './mail-helpers.js';
+import { prepareRenditions } from './media-fixtures.js';
 import { approvedGallery } from './release-fixtures.js';
+import { member } from './review-fixtures.js';
 import { createPerson, createTestApp, TestClock, uniqueEmail, type TestApp } from './test-app.js';
 
 // Two instances of the app on one database, as behind a load balancer; one clock, so a test can let a claim run out.
@@ -108,6 +114,45 @@ describe('background jobs on two instances', () => {
     expect(await capturedMailTo(message!.recipient)).toHaveLength(1);
   }, 60_000);
 
+  it('makes each uploaded image\'s renditions once when both instances work the queue at once', async () => {
+    const curator = await member(one, ['curator']);
+    const ids: number[] = [];
+    for (let i = 0; i < 4; i += 1) ids.push((await request(one.http).post('/api/media').set(curator.auth).attach('file', await newPicture(), `queued-${i}.png`).expect(201)).body[0].id);
+    const assets = one.app.get<typeof MediaAsset>(getModelToken(MediaAsset));
+    const claimed: number[] = [];
+    // Images other suites left pending are worked off too, so the rounds go on until this test's are done.
+    while ((await assets.count({ where: { id: ids, renditionState: 'pending' } })) > 0) {
+      claimed.push(...(await inParallel((t) => t.app.get(RenditionsWorker).makePending(), 2)).flat());
+    }
+    expect(claimed.filter((id) => ids.includes(id)).sort((a, b) => a - b)).toEqual(ids);
+    for (const id of ids) expect((await request(two.http).get(`/api/media/${id}`).set(curator.auth)).body.renditionStatus).toEqual({ state: 'ready', progress: 1, failure: null });
+  }, 120_000);
+
+  it('takes over an image whose instance died while making its renditions, once the claim has run out', async () => {
+    const curator = await member(one, ['curator']);
+    const { id } = (await request(one.http).post('/api/media').set(curator.auth).attach('file', await newPicture(), 'orphaned.png').expect(201)).body[0];
+    const assets = one.app.get<typeof MediaAsset>(getModelToken(MediaAsset));
+    await one.app.get(JobClaims).queue(MediaAsset, RENDITION_CLAIM_MS).claim({ id }, { order: [['id', 'ASC']], limit: 1 });
+    expect(await assets.findByPk(id)).toMatchObject({ renditionState: 'pending', claimedBy: one.app.get(JobOwner).id });
+    clock.advance(RENDITION_CLAIM_MS + 1);
+    expect(await prepareRenditions(two, id)).toBe('ready');
+    expect(await assets.findByPk(id)).toMatchObject({ claimedBy: null, claimExpiresAt: null });
+  }, 60_000);
+
+  it('refuses a release while an image it shows is still preparing or failed, naming the image', async () => {
+    const g = await approvedGallery(one, 'jobs-unprepared');
+    const assets = one.app.get<typeof MediaAsset>(getModelToken(MediaAsset));
+    const ask = () => request(two.http).post(`/api/galleries/${g.gallery.id}/releases`).set(g.technician.auth).send({});
+    await assets.update({ renditionState: 'pending', renditionProgress: 0.5 }, { where: { id: g.imageId } });
+    const preparing = await ask();
+    expect(preparing.status).toBe(422);
+    expect(preparing.body.errors).toContainEqual({ path: ['media', g.imageId], message: 'The image “plate-map.png” is still preparing; ask for the release once its renditions are made.' });
+    await assets.update({ renditionState: 'failed', renditionFailure: 'The WebP renditions could not be made: the disk is full' }, { where: { id: g.imageId } });
+    expect((await ask()).body.errors).toContainEqual({ path: ['media', g.imageId], message: expect.stringMatching(/^The renditions of the image “plate-map.png” failed \(.*the disk is full\); retry them/) });
+    await assets.update({ renditionState: 'ready', renditionProgress: 1, renditionFailure: null }, { where: { id: g.imageId } });
+    expect((await ask()).status).toBe(202);
+  }, 120_000);
+
   it('lets one instance at a time judge the fleet, and another take over once the holder\'s lease has run out', async () => {
     await one.app.get<typeof JobLease>(getModelToken(JobLease)).destroy({ where: { name: 'fleet-watch' } });
     const checks = [one, two].map((t) => vi.spyOn(t.app.get(SilentKioskWatcher), 'check').mockResolvedValue({ silent: [], back: [] }));
@@ -133,3 +178,8 @@ describe('background jobs on two instances', () => {
   });
 });
 
+/** A picture no other test has uploaded (its colour is random), so the upload is a new image. */
+const newPicture = () => {
+  const background = { r: Math.floor(Math.random() * 256), g: Math.floor(Math.random() * 256), b: Math.floor(Math.random() * 256) };
+  return sharp({ create: { width: 700, height: 400, channels: 3, background } }).png().toBuffer();
+};

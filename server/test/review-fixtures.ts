@@ -10,6 +10,7 @@ import { MailOutboxWorker } from '../src/mail/mail-outbox.worker.js';
 import { OutboxMessage } from '../src/mail/models/outbox-message.model.js';
 import type { User } from '../src/users/models/user.model.js';
 import { galleryWithExhibit, paragraphDoc, signedInAs } from './authoring-fixtures.js';
+import { prepareRenditions } from './media-fixtures.js';
 import { bearer, createPerson, createTestApp, signIn, type TestApp } from './test-app.js';
 
 export type Headers = Record<string, string>;
@@ -70,12 +71,13 @@ export async function submit(t: TestApp, curator: Headers, storyId: number) {
 export const verdict = (t: TestApp, educator: Headers, revisionId: number, body: { verdict: string; note?: string }) =>
   request(t.http).post(`/api/revisions/${revisionId}/reviews`).set(educator).send(body);
 
-/** An image in the library with the rights and alt text given. */
+/** An image in the library, its renditions made, with the rights and alt text given. */
 export async function libraryImage(t: TestApp, curator: Headers, details: Record<string, unknown>): Promise<number> {
   const colour = { r: Math.floor(Math.random() * 256), g: Math.floor(Math.random() * 256), b: Math.floor(Math.random() * 256) };
   const png = await sharp({ create: { width: 64, height: 48, channels: 3, background: colour } }).png().toBuffer();
   const uploaded = expectStatus(await request(t.http).post('/api/media').set(curator).attach('file', png, 'plate-map.png'), 201, 'upload');
   const id = uploaded.body[0].id as number;
+  if ((await prepareRenditions(t, id)) !== 'ready') throw new Error(`renditions of image ${id} were not made`);
   expectStatus(await request(t.http).patch(`/api/media/${id}`).set(curator).send(details), 200, 'media details');
   return id;
 }

@@ -79,6 +79,7 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'POST /api/media': CURATOR,
   'PATCH /api/media/:id': CURATOR,
   'DELETE /api/media/:id': CURATOR,
+  'POST /api/media/:id/renditions/retry': CURATOR,
 
   'GET /api/translations/stories': TRANSLATION_READERS,
   'GET /api/stories/:id/translations': TRANSLATION_READERS,

@@ -8,6 +8,7 @@ import { examplePanelDoc, type PanelDocJSON, type PanelNodeJSON } from '@mantlep
 import { MediaAltText } from '../src/media/models/media-alt-text.model.js';
 import { Translation } from '../src/translations/models/translation.model.js';
 import { galleryWithExhibit, paragraphDoc, signedInAs } from './authoring-fixtures.js';
+import { prepareRenditions } from './media-fixtures.js';
 import { bearer, createPerson, createTestApp, signIn, type TestApp } from './test-app.js';
 
 /** The app with a media folder of its own, removed on close. */
@@ -41,6 +42,7 @@ export async function translationWorld(t: TestApp, label: string) {
   const background = { r: Math.floor(Math.random() * 256), g: Math.floor(Math.random() * 256), b: Math.floor(Math.random() * 256) };
   const png = await sharp({ create: { width: 64, height: 48, channels: 3, background } }).png().toBuffer();
   const [image] = (await request(t.http).post('/api/media').set(curator).attach('file', png, 'ridge.png').expect(201)).body;
+  await prepareRenditions(t, image.id);
   await request(t.http).patch(`/api/media/${image.id}`).set(curator).send({ alt: { en: 'Dark basalt on a ridge.' } }).expect(200);
 
   const story = (await request(t.http).post('/api/stories').set(curator).send({ title: `${label} story`, exhibitId: exhibit.id }).expect(201)).body;

@@ -164,6 +164,9 @@ describe('the media library', () => {
     await page.getByRole('combobox', { name: 'Show' }).selectOption('missing-credit');
     await page.getByRole('link', { name: new RegExp(altText) }).first().click();
     await page.getByRole('heading', { level: 1, name: 'basalt-slab.png' }).waitFor();
+    // The server's renditions job made the WebP renditions after the upload answered; the page shows them once ready.
+    await eventually(() => page.getByText('Screen renditions: 640 px wide').count()).toBe(1);
+    expect(await page.getByText('Preparing…').count()).toBe(0);
     await eventually(() => page.getByRole('link', { name: new RegExp(title) }).count()).toBeGreaterThan(0);
     await page.getByRole('textbox', { name: 'Credit line' }).fill('Drawing: Basalt Point Earth Science Centre');
     await page.getByRole('radio', { name: 'An open licence (SPDX identifier)' }).check();

@@ -81,6 +81,8 @@ export class ConfigService {
   /** Width × height above which an upload is refused before it is decoded (decompression bombs). */
   readonly mediaMaxPixels = intFromEnv('MEDIA_MAX_PIXELS', 100_000_000);
 
+  /** How often the renditions worker looks for uploaded images to make WebP renditions of; 0 turns its timer off (tests drive it by hand). */
+  readonly renditionPollIntervalMs = intFromEnv('RENDITION_POLL_INTERVAL_MS', 1000);
   /** 0 turns the release worker's timer off (tests drive builds by hand). */
   readonly releasePollIntervalMs = intFromEnv('RELEASE_POLL_INTERVAL_MS', 1000);
   /** How long a signed publication record holds; it is signed again once half of that has passed. */

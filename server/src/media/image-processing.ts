@@ -56,7 +56,6 @@ export interface ProcessedImage {
   height: number;
   /** The original as it is kept: upright, in its own format, without EXIF, XMP or IPTC. */
   original: Buffer;
-  renditions: Rendition[];
   placeholder: string;
 }
 
@@ -103,9 +102,10 @@ export class ImageProcessing {
   }
 
   /**
-   * Decodes the whole image: auto-orients it, makes the original to keep (see `encodeOriginal`),
-   * the renditions and the placeholder, none of them carrying EXIF, XMP or IPTC. A file whose
-   * header reads but whose pixels do not (truncated, corrupt) is refused with 422.
+   * Decodes the whole image: auto-orients it, makes the original to keep (see `encodeOriginal`)
+   * and the placeholder, neither carrying EXIF, XMP or IPTC. A file whose header reads but whose
+   * pixels do not (truncated, corrupt) is refused with 422. Renditions are made later, from the
+   * kept original, by `renditionsOf`.
    */
   async process(bytes: Buffer, filename: string, kind: ImageKind): Promise<ProcessedImage> {
     try {
@@ -127,24 +127,27 @@ export class ImageProcessing {
     return encodeOriginal(sharp(bytes, { limitInputPixels: this.config.mediaMaxPixels, failOn: 'error' }).rotate(), kind);
   }
 
-  private async decode(bytes: Buffer, kind: ImageKind): Promise<ProcessedImage> {
+  /**
+   * The WebP renditions of a kept original (upright already), one width after another, each
+   * handed to `made` as it is done so the caller can store it and show progress.
+   */
+  async renditionsOf(original: Buffer, made: (rendition: Rendition, index: number, total: number) => Promise<void>): Promise<void> {
     // Each output decodes the original again: libvips streams it and shrinks on load, which
     // keeps memory far below holding a 100-megapixel bitmap.
-    const oriented = sharp(bytes, { limitInputPixels: this.config.mediaMaxPixels, failOn: 'error' }).rotate();
+    const oriented = sharp(original, { limitInputPixels: this.config.mediaMaxPixels, failOn: 'error' }).rotate();
     const { autoOrient } = await oriented.metadata();
     const widths = [...new Set(RENDITION_WIDTHS.map((width) => Math.min(width, autoOrient.width)))];
-    const renditions = await Promise.all(
-      widths.map(async (width) => {
-        const { data, info } = await oriented
-          .clone()
-          .resize({ width, withoutEnlargement: true })
-          .webp({ quality: 82 })
-          .toBuffer({ resolveWithObject: true });
-        return { width: info.width, height: info.height, data, sha256: sha256Of(data) };
-      }),
-    );
+    for (const [index, width] of widths.entries()) {
+      const { data, info } = await oriented.clone().resize({ width, withoutEnlargement: true }).webp({ quality: 82 }).toBuffer({ resolveWithObject: true });
+      await made({ width: info.width, height: info.height, data, sha256: sha256Of(data) }, index, widths.length);
+    }
+  }
+
+  private async decode(bytes: Buffer, kind: ImageKind): Promise<ProcessedImage> {
+    const oriented = sharp(bytes, { limitInputPixels: this.config.mediaMaxPixels, failOn: 'error' }).rotate();
+    const { autoOrient } = await oriented.metadata();
     const tiny = await oriented.clone().resize({ width: PLACEHOLDER_WIDTH }).blur(1).webp({ quality: 40 }).toBuffer();
     const original = await encodeOriginal(oriented.clone(), kind);
-    return { width: autoOrient.width, height: autoOrient.height, original, renditions, placeholder: `data:image/webp;base64,${tiny.toString('base64')}` };
+    return { width: autoOrient.width, height: autoOrient.height, original, placeholder: `data:image/webp;base64,${tiny.toString('base64')}` };
   }
 }

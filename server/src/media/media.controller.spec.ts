@@ -9,10 +9,10 @@ import request from 'supertest';
 import { getModelToken } from '@nestjs/sequelize';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { signedInAs } from '../../test/authoring-fixtures.js';
+import { prepareRenditions } from '../../test/media-fixtures.js';
 import { createTestApp, type TestApp } from '../../test/test-app.js';
 import { MediaService } from './media.service.js';
 import { MediaAsset } from './models/media-asset.model.js';
-import { MediaRendition } from './models/media-rendition.model.js';
 
 const MAX_BYTES = 400_000;
 const MAX_PIXELS = 4_000_000;
@@ -41,6 +41,12 @@ const upload = (...files: [Buffer, string][]) => {
 };
 
 const storedOriginal = (sha256: string) => path.join(mediaDir, 'originals', sha256);
+
+/** The image as the library shows it once the renditions worker (its timer is off in the suites) has made its renditions. */
+async function prepared(asset: { id: number }) {
+  expect(await prepareRenditions(t, asset.id)).toBe('ready');
+  return (await request(t.http).get(`/api/media/${asset.id}`).set(curator)).body;
+}
 
 /** Every file under the media folder, to show a refused upload stored nothing. */
 const storedFiles = () => (fs.existsSync(mediaDir) ? fs.readdirSync(mediaDir, { recursive: true, withFileTypes: true }).filter((entry) => entry.isFile()).length : 0);
@@ -93,7 +99,7 @@ describe('POST /api/media', () => {
     // The name says something else: the type must come from the bytes.
     const res = await upload([data, `photo.${extension === 'png' ? 'jpg' : 'png'}`]);
     expect(res.status).toBe(201);
-    const [asset] = res.body;
+    const asset = await prepared(res.body[0]);
     expect(asset).toMatchObject({ mime, width: 1000, height: 750, credit: null, licence: null, alt: {}, usedIn: [] });
     // The size of the original as kept, re-encoded without metadata (see the EXIF tests below).
     expect(asset.bytes).toBe(fs.statSync(storedOriginal(asset.sha256)).size);
@@ -106,7 +112,7 @@ describe('POST /api/media', () => {
 
   it('writes 640, 1280 and 1920 px renditions of a large image, served publicly as immutable WebP', async () => {
     const data = await picture(2400, 1200).png().toBuffer();
-    const [asset] = (await upload([data, 'wide.png'])).body;
+    const asset = await prepared((await upload([data, 'wide.png'])).body[0]);
     expect(asset.renditions.map((r: { width: number }) => r.width)).toEqual([640, 1280, 1920]);
     const file = await request(t.http).get(asset.renditions[1].url).buffer(true);
     expect(file.status).toBe(200);
@@ -122,7 +128,7 @@ describe('POST /api/media', () => {
     // The check below can see GPS in a WebP: a WebP written with the same EXIF shows it.
     expect(await gpsOfWebp(await picture(40, 20).webp().withExif(GPS_EXIF).toBuffer())).toMatchObject({ latitude: expect.closeTo(64.133, 2) });
 
-    const [asset] = (await upload([data, 'field-trip.jpg'])).body;
+    const asset = await prepared((await upload([data, 'field-trip.jpg'])).body[0]);
     expect(asset).toMatchObject({ width: 200, height: 400 });
     for (const rendition of asset.renditions) {
       const file = (await request(t.http).get(rendition.url).buffer(true)).body as Buffer;
@@ -215,13 +221,13 @@ describe('POST /api/media', () => {
   });
 
   it('takes back the files it wrote when recording the rows fails, leaving no row and no file', async () => {
-    const renditions = t.app.get<typeof MediaRendition>(getModelToken(MediaRendition));
-    const bulkCreate = renditions.bulkCreate.bind(renditions);
+    const assets = t.app.get<typeof MediaAsset>(getModelToken(MediaAsset));
+    const create = assets.create.bind(assets);
     let calls = 0;
-    const spy = vi.spyOn(renditions, 'bulkCreate').mockImplementation(((...args: Parameters<typeof bulkCreate>) => {
+    const spy = vi.spyOn(assets, 'create').mockImplementation(((...args: Parameters<typeof create>) => {
       calls += 1;
-      return calls === 2 ? Promise.reject(new Error('the database went away')) : bulkCreate(...args);
-    }) as typeof renditions.bulkCreate);
+      return calls === 2 ? Promise.reject(new Error('the database went away')) : create(...args);
+    }) as typeof assets.create);
     try {
       const [files, assets] = [storedFiles(), await assetCount()];
       const res = await upload([await picture(100, 80).png().toBuffer(), 'first.png'], [await picture(90, 80).png().toBuffer(), 'second.png']);
@@ -281,6 +287,48 @@ describe('POST /api/media', () => {
   });
 });
 
+describe('renditions as a queued job', () => {
+  it('answers an upload at once with the original kept and the renditions pending, and shows them ready once the worker has made them', async () => {
+    const res = await upload([await picture(900, 600).png().toBuffer(), 'queued.png']);
+    expect(res.status).toBe(201);
+    const [asset] = res.body;
+    expect(asset).toMatchObject({ renditions: [], renditionStatus: { state: 'pending', progress: 0, failure: null } });
+    expect(fs.existsSync(storedOriginal(asset.sha256))).toBe(true);
+    expect(fs.existsSync(path.join(mediaDir, 'renditions', asset.sha256))).toBe(false);
+    expect((await request(t.http).get(`/api/media/${asset.id}`).set(curator)).body.renditionStatus.state).toBe('pending');
+
+    const ready = await prepared(asset);
+    expect(ready).toMatchObject({ renditionStatus: { state: 'ready', progress: 1, failure: null } });
+    expect(ready.renditions.map((r: { width: number }) => r.width)).toEqual([640, 900]);
+    expect((await request(t.http).get(ready.renditions[0].url)).status).toBe(200);
+  });
+
+  it('keeps a failure with its reason, and makes the renditions when a curator retries once the cause is gone', async () => {
+    const good = await picture(700, 500).png().toBuffer();
+    const [asset] = (await upload([good, 'will-fail.png'])).body;
+    // The kept original is damaged after the upload (a disk fault): the worker cannot decode it.
+    fs.writeFileSync(storedOriginal(asset.sha256), truncated(fs.readFileSync(storedOriginal(asset.sha256))));
+    expect(await prepareRenditions(t, asset.id)).toBe('failed');
+    const failed = (await request(t.http).get(`/api/media/${asset.id}`).set(curator)).body;
+    expect(failed).toMatchObject({ renditions: [], renditionStatus: { state: 'failed', failure: expect.stringMatching(/^The WebP renditions could not be made: /) } });
+
+    fs.writeFileSync(storedOriginal(asset.sha256), await sharp(good).png().toBuffer());
+    const retried = await request(t.http).post(`/api/media/${asset.id}/renditions/retry`).set(curator);
+    expect({ status: retried.status, body: retried.body }).toEqual({ status: 202, body: { state: 'pending', progress: 0, failure: null } });
+    const again = await request(t.http).post(`/api/media/${asset.id}/renditions/retry`).set(curator);
+    expect(again.status).toBe(409);
+    expect(again.body.message).toMatch(/being prepared/);
+    expect((await prepared(asset)).renditionStatus).toEqual({ state: 'ready', progress: 1, failure: null });
+    expect((await request(t.http).post(`/api/media/${asset.id}/renditions/retry`).set(curator)).status).toBe(409);
+  });
+
+  it('answers a retry of an image that does not exist with 404, and one by an educator with 403', async () => {
+    expect((await request(t.http).post('/api/media/2147483000/renditions/retry').set(curator)).status).toBe(404);
+    const educator = await signedInAs(t, 'educator');
+    expect((await request(t.http).post('/api/media/2147483000/renditions/retry').set(educator)).status).toBe(403);
+  });
+});
+
 describe('details, lists and delete', () => {
   it('sets credit, licence, expiry and alt text; removes an alt text set to ""', async () => {
     const [asset] = (await upload([await picture(200, 100).png().toBuffer(), 'rights.png'])).body;
@@ -313,7 +361,7 @@ describe('details, lists and delete', () => {
   });
 
   it('refuses to delete an image a panel shows, saying where, and deletes it once the panel no longer does', async () => {
-    const [asset] = (await upload([await picture(80, 80).png().toBuffer(), 'used.png'])).body;
+    const asset = await prepared((await upload([await picture(80, 80).png().toBuffer(), 'used.png'])).body[0]);
     const story = (await request(t.http).post('/api/stories').set(curator).send({ title: 'Uses an image' })).body;
     const panel = (await request(t.http).post(`/api/stories/${story.id}/panels`).set(curator).send({ doc: { type: 'doc', content: [{ type: 'panelImage', attrs: { mediaId: String(asset.id) } }] } })).body;
     expect((await request(t.http).get(`/api/media/${asset.id}`).set(curator)).body.usedIn).toEqual([{ storyId: story.id, storyTitle: 'Uses an image', panelId: panel.id, panelNumber: 1 }]);

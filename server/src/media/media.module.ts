@@ -14,6 +14,9 @@ import { mediaStoreOf } from './media-store.factory.js';
 import { MediaAltText } from './models/media-alt-text.model.js';
 import { MediaAsset } from './models/media-asset.model.js';
 import { MediaRendition } from './models/media-rendition.model.js';
+import { RenditionsController } from './renditions.controller.js';
+import { RenditionsService } from './renditions.service.js';
+import { RenditionsWorker } from './renditions.worker.js';
 
 @Module({
   imports: [
@@ -25,12 +28,14 @@ import { MediaRendition } from './models/media-rendition.model.js';
       useFactory: (config: ConfigService) => ({ limits: { fileSize: config.mediaMaxBytes, files: MAX_FILES_PER_UPLOAD } }),
     }),
   ],
-  controllers: [MediaController, MediaFilesController],
+  controllers: [MediaController, RenditionsController, MediaFilesController],
   providers: [
     MediaService,
     ImageProcessing,
+    RenditionsWorker,
+    RenditionsService,
     { provide: MEDIA_STORE, inject: [ConfigService], useFactory: mediaStoreOf },
   ],
-  exports: [MediaService, MEDIA_STORE],
+  exports: [MediaService, RenditionsWorker, MEDIA_STORE],
 })
 export class MediaModule {}

@@ -2,6 +2,7 @@ import type { MediaLicence, MediaUsageView, MediaView } from '@mantlepiece/share
 import type { Person } from '../auth/policy.js';
 import { mediaCan } from './media-policy.js';
 import type { MediaAsset } from './models/media-asset.model.js';
+import { renditionStatusOf } from './renditions.presenter.js';
 
 /** The public URL of a rendition: immutable, so kiosks, browsers and a CDN may keep it for a year. */
 export const renditionUrl = (sha256: string, width: number) => `/media/${sha256}/${width}.webp`;
@@ -24,6 +25,7 @@ export const toMediaView = (asset: MediaAsset, usedIn: MediaUsageView[], person:
   renditions: [...(asset.renditions ?? [])]
     .sort((a, b) => a.width - b.width)
     .map((rendition) => ({ width: rendition.width, url: renditionUrl(asset.sha256, rendition.width) })),
+  renditionStatus: renditionStatusOf(asset),
   placeholder: asset.placeholder,
   credit: asset.credit ?? null,
   licence: licenceOf(asset),

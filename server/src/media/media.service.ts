@@ -17,10 +17,11 @@ import type { ListMediaQuery, UpdateMediaDto } from './dto/media.dto.js';
 import { ImageProcessing, MIME_TYPES, sniffImageKind, type ImageKind, type InspectedImage, type ProcessedImage } from './image-processing.js';
 import { mediaLibraryCan } from './media-policy.js';
 import { toMediaView } from './media.presenter.js';
-import { MEDIA_STORE, originalKey, renditionKey, type MediaStore } from './media-store.js';
+import { MEDIA_STORE, originalKey, type MediaStore } from './media-store.js';
 import { MediaAltText } from './models/media-alt-text.model.js';
 import { MediaAsset } from './models/media-asset.model.js';
 import { MediaRendition } from './models/media-rendition.model.js';
+import { RenditionsWorker } from './renditions.worker.js';
 
 const DAY_MS = 86_400_000;
 
@@ -54,6 +55,7 @@ export class MediaService {
     @InjectModel(Panel) private readonly panels: typeof Panel,
     @Inject(MEDIA_STORE) private readonly store: MediaStore,
     private readonly images: ImageProcessing,
+    private readonly renditionsWorker: RenditionsWorker,
     private readonly clock: Clock,
     private readonly sequelize: Sequelize,
   ) {}
@@ -62,7 +64,8 @@ export class MediaService {
    * All or nothing: every file is checked and every new image decoded before any is stored, so a
    * refused upload leaves nothing behind; the rows go in one transaction, and a failure there
    * takes back the files this upload wrote. Stored once per content: the same bytes uploaded
-   * again give the asset that exists.
+   * again give the asset that exists. The answer comes once the originals are kept; a new image's
+   * renditions are pending until the renditions worker has made them.
    */
   async upload(uploader: User, files: UploadedFile[]): Promise<MediaView[]> {
     if (!files?.length) {
@@ -87,6 +90,7 @@ export class MediaService {
       await this.removeUnclaimed(written);
       throw error;
     }
+    if (images.length > 0) this.renditionsWorker.kick();
     return this.viewsOf(inspected.map(({ sha256 }) => known.get(sha256) ?? created.get(sha256)!), uploader);
   }
 
@@ -185,20 +189,15 @@ export class MediaService {
     return new Map(rows.map((row) => [row.sha256, row.id]));
   }
 
-  /** Writes each image's original and renditions; returns the keys it wrote that were not there before. */
+  /** Writes each image's original (its renditions are the renditions worker's); returns the keys it wrote that were not there before. */
   private async writeFiles(images: NewImage[]): Promise<{ sha256: string; key: string }[]> {
     const written: { sha256: string; key: string }[] = [];
     try {
       for (const { sha256, processed } of images) {
-        const files = [
-          { key: originalKey(sha256), data: processed.original },
-          ...processed.renditions.map((rendition) => ({ key: renditionKey(sha256, rendition.width), data: rendition.data })),
-        ];
-        for (const { key, data } of files) {
-          const existed = await this.store.exists(key);
-          await this.store.put(key, data);
-          if (!existed) written.push({ sha256, key });
-        }
+        const key = originalKey(sha256);
+        const existed = await this.store.exists(key);
+        await this.store.put(key, processed.original);
+        if (!existed) written.push({ sha256, key });
       }
     } catch (error) {
       await this.removeUnclaimed(written);
@@ -237,17 +236,6 @@ export class MediaService {
           placeholder: processed.placeholder,
           uploadedById: uploader?.id ?? null,
         },
-        { transaction },
-      );
-      await this.renditions.bulkCreate(
-        processed.renditions.map((rendition) => ({
-          mediaAssetId: asset.id,
-          width: rendition.width,
-          height: rendition.height,
-          sha256: rendition.sha256,
-          storeKey: renditionKey(sha256, rendition.width),
-          bytes: rendition.data.length,
-        })),
         { transaction },
       );
       ids.set(sha256, asset.id);

@@ -106,6 +106,7 @@ export class ReleaseContentService {
         problems.push({ path: ['locales', gap.locale, story.id], message: `“${story.title}” in ${gap.locale}: ${parts} of ${gap.total} texts.` });
       }
     }
+    problems.push(...(await this.unpreparedImages(chosen, transaction)));
     for (const { story, revision } of chosen) {
       const blockers = preflightBlockers(await this.revisionRules.preflightOf(revision.snapshot, story, transaction));
       for (const blocker of blockers) {
@@ -114,6 +115,21 @@ export class ReleaseContentService {
       }
     }
     return problems;
+  }
+
+  /** Images the stories show whose renditions are not made yet, or failed: a kiosk could not show them. */
+  private async unpreparedImages(chosen: ChosenRevision[], transaction: Transaction): Promise<FieldError[]> {
+    const ids = mediaIdsOf(chosen);
+    if (ids.length === 0) return [];
+    const assets = await this.media.findAll({
+      where: { id: ids, renditionState: { [Op.ne]: 'ready' } }, attributes: ['id', 'originalFilename', 'renditionState', 'renditionFailure'], order: [['id', 'ASC']], transaction,
+    });
+    return assets.map((asset) => ({
+      path: ['media', asset.id],
+      message: asset.renditionState === 'pending'
+        ? `The image “${asset.originalFilename}” is still preparing; ask for the release once its renditions are made.`
+        : `The renditions of the image “${asset.originalFilename}” failed (${asset.renditionFailure ?? 'no reason given'}); retry them in the media library.`,
+    }));
   }
 
   /** The manifest's stories: every panel in every venue locale, target locales with their translations applied. */
@@ -139,7 +155,7 @@ export class ReleaseContentService {
 
   /** The images the stories show, with alt text in the venue's locales, credit and renditions to copy. */
   async manifestMedia(venue: Venue, chosen: ChosenRevision[]): Promise<{ media: ReleaseMedia[]; renditions: RenditionSource[] }> {
-    const ids = [...new Set(chosen.flatMap((c) => c.revision.snapshot.mediaIds))].filter((id) => MEDIA_ID.test(id)).map(Number);
+    const ids = mediaIdsOf(chosen);
     const assets = await this.media.findAll({ where: { id: { [Op.in]: ids.length ? ids : [0] } }, include: [MediaRendition, MediaAltText], order: [['id', 'ASC']] });
     const locales = new Set(localesOf(venue));
     const missing = ids.filter((id) => !assets.some((asset) => asset.id === id));
@@ -158,6 +174,10 @@ export class ReleaseContentService {
     return { media, renditions };
   }
 }
+
+/** The library images the chosen revisions show. */
+const mediaIdsOf = (chosen: ChosenRevision[]): number[] =>
+  [...new Set(chosen.flatMap((c) => c.revision.snapshot.mediaIds))].filter((id) => MEDIA_ID.test(id)).map(Number);
 
 /** 422 listing what stops the release, each problem with its path. */
 export function releaseRefusal(message: string, errors: FieldError[]): UnprocessableEntityException {

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { AuditService } from '../audit/audit.service.js';
+import { RenditionsWorker } from '../media/renditions.worker.js';
 import { User } from '../users/models/user.model.js';
 import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
@@ -27,6 +28,7 @@ export class SeedService {
     private readonly demoTranslations: DemoTranslations,
     private readonly demoReviews: DemoReviews,
     private readonly demoFleet: DemoFleet,
+    private readonly renditions: RenditionsWorker,
   ) {}
 
   /** Seeds the demo on a database that has nobody in it yet; returns false when it left it alone. */
@@ -43,6 +45,8 @@ export class SeedService {
       );
     });
     await this.demoStories.seed('curator@demo.test');
+    // The demo release is asked for below: its images' renditions must be made first.
+    await this.renditions.makeAllPending();
     await this.demoTranslations.seed('translator@demo.test');
     await this.demoReviews.seed('curator@demo.test', 'educator@demo.test');
     await this.demoFleet.seed('technician@demo.test');

@@ -73,6 +73,16 @@ export interface MediaUsageView {
   panelNumber: number;
 }
 
+export const RENDITION_STATES = ['pending', 'ready', 'failed'] as const;
+export type RenditionState = (typeof RENDITION_STATES)[number];
+
+/** Whether an image's WebP renditions are made: pending while a worker makes them (progress 0 to 1), failed with the reason why. */
+export interface RenditionStatus {
+  state: RenditionState;
+  progress: number;
+  failure: string | null;
+}
+
 export interface MediaView {
   /** A panel image refers to the asset by `String(id)` in its `mediaId` attribute. */
   id: number;
@@ -82,7 +92,9 @@ export interface MediaView {
   height: number;
   mime: string;
   bytes: number;
+  /** Empty until `renditionStatus` is ready. */
   renditions: MediaRenditionView[];
+  renditionStatus: RenditionStatus;
   /** A data: URI of a tiny blurred WebP, drawn while the rendition loads. */
   placeholder: string;
   credit: string | null;

@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { MediaLicence, MediaMissingFilter, MediaPage, MediaView, Page } from '@mantlepiece/shared';
+import type { MediaLicence, MediaMissingFilter, MediaPage, MediaView, Page, RenditionStatus } from '@mantlepiece/shared';
 import { api, ApiError, authorizationHeader, NETWORK_FAILURE, refreshSession } from './client';
 
 export const MEDIA_SORTS = ['-createdAt', 'createdAt', 'filename', '-filename'] as const;
@@ -17,6 +17,10 @@ export interface MediaListParams {
 const mediaListKey = ['media-list'] as const;
 export const mediaKey = (id: number) => ['media', id] as const;
 
+/** While an image's renditions are being made, its page and the lists showing it ask again this often. */
+const PREPARING_POLL_MS = 2000;
+const preparing = (asset: MediaView | undefined) => asset?.renditionStatus.state === 'pending';
+
 export function useMediaList(params: MediaListParams, enabled = true) {
   const queryClient = useQueryClient();
   return useQuery({
@@ -28,6 +32,7 @@ export function useMediaList(params: MediaListParams, enabled = true) {
       return page;
     },
     placeholderData: keepPreviousData,
+    refetchInterval: (query) => (query.state.data?.items.some(preparing) ? PREPARING_POLL_MS : false),
     enabled,
   });
 }
@@ -35,7 +40,7 @@ export function useMediaList(params: MediaListParams, enabled = true) {
 export const mediaAssetQuery = (id: number) => ({ queryKey: mediaKey(id), queryFn: () => api<MediaView>(`/media/${id}`) });
 
 export function useMediaAsset(id: number) {
-  return useQuery(mediaAssetQuery(id));
+  return useQuery({ ...mediaAssetQuery(id), refetchInterval: (query) => (preparing(query.state.data) ? PREPARING_POLL_MS : false) });
 }
 
 /** Several assets at once: the images a panel shows, loaded before its editor opens. */
@@ -67,6 +72,18 @@ export function useDeleteMedia() {
     mutationFn: (id: number) => api<void>(`/media/${id}`, { method: 'DELETE' }),
     onSuccess: (_nothing, id) => {
       queryClient.removeQueries({ queryKey: mediaKey(id) });
+      void queryClient.invalidateQueries({ queryKey: mediaListKey });
+    },
+  });
+}
+
+/** Asks the server to make a failed image's renditions again. */
+export function useRetryRenditions(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => api<RenditionStatus>(`/media/${id}/renditions/retry`, { method: 'POST' }),
+    onSuccess: (renditionStatus) => {
+      queryClient.setQueryData<MediaView>(mediaKey(id), (asset) => (asset ? { ...asset, renditionStatus } : asset));
       void queryClient.invalidateQueries({ queryKey: mediaListKey });
     },
   });

@@ -17,6 +17,7 @@ import * as publications from './0621-publications.js';
 import * as livingStory from './0650-living-story.js';
 import * as demoKiosk from './0660-demo-kiosk.js';
 import * as backgroundJobs from './0730-background-jobs.js';
+import * as queuedRenditions from './0731-queued-renditions.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -43,6 +44,7 @@ const modules: [string, MigrationModule][] = [
   ['0650-living-story', livingStory],
   ['0660-demo-kiosk', demoKiosk],
   ['0730-background-jobs', backgroundJobs],
+  ['0731-queued-renditions', queuedRenditions],
 ];
 
 export const migrations = modules.map(([name, m]) => ({

@@ -1,4 +1,5 @@
 import { Column, DataType, HasMany, Model, Table } from 'sequelize-typescript';
+import { RENDITION_STATES, type RenditionState } from '@mantlepiece/shared';
 import { MediaAltText } from './media-alt-text.model.js';
 import { MediaRendition } from './media-rendition.model.js';
 
@@ -49,6 +50,25 @@ export class MediaAsset extends Model {
 
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
   uploadedById: number | null;
+
+  /** Whether its WebP renditions are made yet: pending until the renditions worker has made them. */
+  @Column({ type: DataType.ENUM(...RENDITION_STATES), allowNull: false, defaultValue: 'pending' })
+  renditionState: RenditionState;
+
+  /** 0 to 1 while pending. */
+  @Column({ type: DataType.DOUBLE, allowNull: false, defaultValue: 0 })
+  renditionProgress: number;
+
+  /** Why making the renditions failed, for the person who retries. */
+  @Column({ type: DataType.STRING(1000), allowNull: true })
+  renditionFailure: string | null;
+
+  /** The instance making its renditions, until when (see ClaimQueue). */
+  @Column({ type: DataType.STRING(100), allowNull: true })
+  claimedBy: string | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: true })
+  claimExpiresAt: Date | null;
 
   @HasMany(() => MediaRendition)
   renditions?: MediaRendition[];

@@ -6,11 +6,13 @@ import { licenceExpiresWithin, todayIso } from './media-facts';
 
 const useStyles = makeStyles({ badges: { display: 'flex', gap: tokens.spacingHorizontalXS, flexWrap: 'wrap' } });
 
-/** What an asset still lacks before a panel may show it (alt text in any language, credit, licence, time on it), and whether it is in use. */
+/** What an asset still lacks before a panel may show it (renditions, alt text in any language, credit, licence, time on it), and whether it is in use. */
 export function MediaBadges({ asset }: { asset: MediaView }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const badges = [
+    asset.renditionStatus.state === 'pending' && <Badge key="preparing" appearance="tint" color="informative">{t('media.preparation.preparing')}</Badge>,
+    asset.renditionStatus.state === 'failed' && <Badge key="failed" appearance="filled" color="danger">{t('media.preparation.failed')}</Badge>,
     !Object.values(asset.alt).some((text) => text.trim()) && <Badge key="alt" appearance="tint" color="danger">{t('media.badges.noAlt')}</Badge>,
     !asset.credit?.trim() && <Badge key="credit" appearance="tint" color="warning">{t('media.badges.noCredit')}</Badge>,
     !asset.licence && <Badge key="licence" appearance="tint" color="warning">{t('media.badges.noLicence')}</Badge>,

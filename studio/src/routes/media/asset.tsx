@@ -20,6 +20,7 @@ import { ASSET_FIELDS, assetChanges, assetProblems, assetValues, type AssetValue
 import { COMMON_SPDX_IMAGE_LICENCES } from './licence';
 import { formatBytes } from './media-facts';
 import { MediaBadges } from './MediaBadges';
+import { RenditionPreparation } from './RenditionPreparation';
 
 const useStyles = makeStyles({
   layout: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr) minmax(20rem, 32rem)', gap: tokens.spacingHorizontalXXL, alignItems: 'start', '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
@@ -100,6 +101,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
       />
       <div className={styles.layout}>
         <figure className={styles.figure}>
+          <RenditionPreparation asset={asset} canRetry={writer} />
           <img
             className={styles.image}
             src={largest?.url ?? asset.placeholder}
@@ -111,7 +113,9 @@ function AssetDetails({ asset }: { asset: MediaView }) {
           <Text size={200} className={styles.muted}>
             {t('asset.facts', { width: asset.width, height: asset.height, mime: asset.mime, size: formatBytes(asset.bytes, i18n.resolvedLanguage ?? 'en'), date: formatDate(asset.createdAt) })}
           </Text>
-          <Text size={200} className={styles.muted}>{t('asset.renditions', { widths: asset.renditions.map((rendition) => rendition.width).join(', ') })}</Text>
+          {asset.renditions.length > 0 ? (
+            <Text size={200} className={styles.muted}>{t('asset.renditions', { widths: asset.renditions.map((rendition) => rendition.width).join(', ') })}</Text>
+          ) : null}
           <section aria-labelledby="usage-heading">
             <Text as="h2" block size={400} weight="semibold" id="usage-heading">{t('asset.usedIn')}</Text>
             {asset.usedIn.length === 0 ? (

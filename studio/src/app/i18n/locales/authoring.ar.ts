@@ -219,6 +219,14 @@ export const authoringAr: Translated<typeof authoringEn> = {
     grid: 'شبكة',
     table: 'جدول',
     columns: { image: 'الصورة', filename: 'الملف', size: 'الحجم', credit: 'الإسناد', licence: 'الترخيص', status: 'ينقصها', added: 'أُضيفت' },
+    preparation: {
+      preparing: 'جارٍ التحضير…',
+      preparingBody: 'يجري إنشاء نسخ الشاشة (اكتمل {{percent}}). ينتظر الإصدار الذي يعرض هذه الصورة حتى تجهز.',
+      failed: 'تعذّر إنشاء نسخ الشاشة',
+      failedTitle: 'تعذّر إنشاء نسخ الشاشة لهذه الصورة',
+      retry: 'إعادة المحاولة',
+      retrying: 'تجري إعادة المحاولة…',
+    },
     badges: {
       noAlt: 'بلا نص بديل',
       noCredit: 'بلا إسناد',

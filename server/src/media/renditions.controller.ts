@@ -1,0 +1,20 @@
+import { Controller, HttpCode, HttpStatus, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { Roles } from '../auth/auth.decorators.js';
+import { MEDIA_KEEPERS } from './media-policy.js';
+import { RenditionsService } from './renditions.service.js';
+
+@ApiTags('media')
+@ApiBearerAuth()
+@Roles(...MEDIA_KEEPERS)
+@Controller('media/:id/renditions')
+export class RenditionsController {
+  constructor(private readonly renditions: RenditionsService) {}
+
+  /** Makes a failed image's renditions again; the answer is its rendition status, now pending. */
+  @Post('retry')
+  @HttpCode(HttpStatus.ACCEPTED)
+  retry(@Param('id', ParseIntPipe) id: number) {
+    return this.renditions.retry(id);
+  }
+}
