@@ -2,38 +2,30 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import type { EventsResponse, KioskManifestResponse, KioskView, Page } from '@mantlepiece/shared';
+import type { EventsResponse, KioskView, Page } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
 import type { Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { unknownReference } from '../common/validation.js';
-import { ReleaseFile } from '../releases/models/release-file.model.js';
 import { ReleasePanel } from '../releases/models/release-panel.model.js';
 import { ReleaseStory } from '../releases/models/release-story.model.js';
 import { Release } from '../releases/models/release.model.js';
-import { PublicationsService } from '../releases/publications.service.js';
-import { ReleaseFileStore, sha256Of } from '../releases/release-file-store.js';
 import type { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import type { HeartbeatDto, KioskEventDto, KioskEventsDto, ListKiosksQuery } from './dto/kiosk-report.dto.js';
 import type { KioskRequest } from './device-token.guard.js';
 import { refuseIfRevoked } from './kiosk-policy.js';
+import { SERVABLE_STATES } from './kiosk-releases.service.js';
 import { toKioskView } from './kiosks.presenter.js';
 import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
 import { Kiosk } from './models/kiosk.model.js';
 
 type PairedKiosk = KioskRequest['kiosk'];
 
-/** Releases a kiosk may fetch from: the Live one, and those it may still hold to roll back to. */
-const SERVABLE_STATES = ['live', 'superseded'];
 
 const EVENT_COLUMNS = ['id', 'kiosk_id', 'gallery_id', 'type', 'at', 'story_id', 'panel_id', 'widget_type', 'param', 'locale', 'dwell_ms', 'switch', 'received_at'];
-
-export interface SignedManifest extends KioskManifestResponse {
-  etag: string;
-}
 
 @Injectable()
 export class KiosksService {
@@ -41,36 +33,12 @@ export class KiosksService {
     @InjectModel(Kiosk) private readonly kiosks: typeof Kiosk,
     @InjectModel(KioskHeartbeat) private readonly heartbeats: typeof KioskHeartbeat,
     @InjectModel(Release) private readonly releases: typeof Release,
-    @InjectModel(ReleaseFile) private readonly releaseFiles: typeof ReleaseFile,
     @InjectModel(ReleaseStory) private readonly releaseStories: typeof ReleaseStory,
     @InjectModel(ReleasePanel) private readonly releasePanels: typeof ReleasePanel,
-    private readonly files: ReleaseFileStore,
-    private readonly publications: PublicationsService,
     private readonly audit: AuditService,
     private readonly clock: Clock,
     private readonly sequelize: Sequelize,
   ) {}
-
-  /**
-   * The release of the gallery's latest publication (the Live one) as signed, with that
-   * publication's signed record. The ETag is the record's SHA-256: the record names the manifest's
-   * hash, so the tag changes when either does, a re-signed record included.
-   */
-  async liveManifest(kiosk: PairedKiosk): Promise<SignedManifest> {
-    const latest = await this.publications.latestSigned(kiosk.station.galleryId);
-    const release = latest?.release;
-    if (!latest || !release?.manifest || !release.signature) throw new NotFoundException({ statusCode: 404, message: 'No live release for this gallery' });
-    const { record, signature } = latest.publication;
-    return { manifest: release.manifest, signature: release.signature, publication: { record, signature }, etag: `"${sha256Of(Buffer.from(record, 'utf8'))}"` };
-  }
-
-  /** A file of one of the gallery's servable releases; any other hash is unknown to this kiosk. */
-  async file(kiosk: PairedKiosk, sha256: string): Promise<{ data: Buffer; mime: string }> {
-    const listed = await this.releaseFiles.findOne({ where: { sha256 }, include: [{ model: Release, attributes: [], where: this.servableTo(kiosk) }] });
-    const data = listed ? await this.files.get(sha256) : null;
-    if (!listed || !data) throw new NotFoundException('This gallery has no such file.');
-    return { data, mime: listed.mime };
-  }
 
   /** The latest report on the kiosk row, where the fleet list reads it, and every report as history. */
   async recordHeartbeat(kiosk: PairedKiosk, dto: HeartbeatDto): Promise<void> {

@@ -46,10 +46,6 @@ export class ReleaseFileStore {
     return rows.filter((_, i) => !present[i]).map((row) => row.sha256);
   }
 
-  get(sha256: string): Promise<Buffer | null> {
-    return this.store.get(releaseFileKey(sha256));
-  }
-
   source(sha256: string): StoredObjectSource {
     return storedObject(this.store, releaseFileKey(sha256));
   }
