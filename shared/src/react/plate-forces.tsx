@@ -149,14 +149,14 @@ export function PlateForces({ params, locale, onParamsChange, showCaution = fals
         <rect x={0} y={0} width={VIEW.width} height={SEA_LEVEL} fill="#f6efe2" />
         <path d={`M 0 ${SEA_LEVEL} L ${VIEW.width} ${SEA_LEVEL} L ${VIEW.width} ${PLATE.top} L ${TRENCH.x + 14} ${PLATE.top + 8} L ${RIDGE_X + 30} ${PLATE.top} Q ${RIDGE_X} ${SEA_LEVEL + 6} 0 ${PLATE.top} Z`} fill={COLOURS.sea} />
         <line x1={0} y1={discontinuityY} x2={VIEW.width} y2={discontinuityY} stroke={COLOURS.text} strokeDasharray="4 5" />
-        <text x={VIEW.width - 6} y={discontinuityY - 5} fontSize={11} textAnchor="end" fill={COLOURS.text}>{formatQuantity(UPPER_MANTLE_BASE_KM, 'km', locale)}</text>
+        <text x={VIEW.width - 6} y={discontinuityY - 5} fontSize={13} textAnchor="end" fill={COLOURS.text}>{formatQuantity(UPPER_MANTLE_BASE_KM, 'km', locale)}</text>
         <path d={`M ${RIDGE_X} ${PLATE.top - 12} Q ${RIDGE_X + 40} ${PLATE.top} ${TRENCH.x} ${PLATE.top} L ${TRENCH.x} ${PLATE.top + PLATE.thickness} L ${RIDGE_X + 30} ${PLATE.top + PLATE.thickness * 0.4} Z`} fill={COLOURS.plate} />
         {drawnLength > 0 ? (
           <polygon points={[slabTop, tip, { x: tip.x + slabNormal.x, y: tip.y + slabNormal.y }, { x: slabTop.x + slabNormal.x, y: slabTop.y + slabNormal.y }].map((p) => `${p.x},${p.y}`).join(' ')} fill={COLOURS.plate} data-slab="" />
         ) : null}
         <circle cx={tip.x + slabNormal.x / 2} cy={tip.y + slabNormal.y / 2} r={16} fill="#fffdf7" stroke={COLOURS.plate} strokeWidth={3} />
-        <text x={RIDGE_X} y={SEA_LEVEL - 8} fontSize={12} fill={COLOURS.text}>{strings.ridge}</text>
-        <text x={TRENCH.x} y={SEA_LEVEL - 8} fontSize={12} textAnchor="middle" fill={COLOURS.text}>{strings.trench}</text>
+        <text x={RIDGE_X} y={SEA_LEVEL - 8} fontSize={14} fill={COLOURS.text}>{strings.ridge}</text>
+        <text x={TRENCH.x} y={SEA_LEVEL - 8} fontSize={14} textAnchor="middle" fill={COLOURS.text}>{strings.trench}</text>
         <Arrow from={{ x: RIDGE_X + 40, y: PLATE.top + 34 }} to={{ x: RIDGE_X + 130, y: PLATE.top + 34 }} colour={COLOURS.push} label={strings.ridgePush} />
         {drawnLength > 30 ? (
           <Arrow

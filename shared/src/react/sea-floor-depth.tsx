@@ -137,21 +137,21 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
         <title>{strings.title}</title>
         <path d={`${curves[shown.model === 'plate' ? 'plate' : 'halfSpace']} L ${AGE_AXIS.right} ${SEA.top} L ${AGE_AXIS.left} ${SEA.top} Z`} fill={COLOURS.water} />
         <line x1={AGE_AXIS.left} y1={SEA.top} x2={AGE_AXIS.right} y2={SEA.top} stroke={COLOURS.floor} strokeWidth={2} />
-        <text x={AGE_AXIS.right} y={SEA.top - 8} fontSize={12} textAnchor="end" fill={COLOURS.text}>{strings.seaLevel}</text>
-        <text x={AGE_AXIS.left} y={SEA.top - 8} fontSize={12} fill={COLOURS.text}>{strings.ridge}</text>
+        <text x={AGE_AXIS.right} y={SEA.top - 8} fontSize={14} textAnchor="end" fill={COLOURS.text}>{strings.seaLevel}</text>
+        <text x={AGE_AXIS.left} y={SEA.top - 8} fontSize={14} fill={COLOURS.text}>{strings.ridge}</text>
         {[2000, 4000, 6000].map((depthM) => (
           <g key={depthM}>
             <line x1={AGE_AXIS.left - 4} y1={seaY(depthM)} x2={AGE_AXIS.left} y2={seaY(depthM)} stroke={COLOURS.text} />
-            <text x={AGE_AXIS.left - 6} y={seaY(depthM)} fontSize={11} textAnchor="end" dominantBaseline="middle" fill={COLOURS.text}>{formatQuantity(depthM / 1000, 'km', locale)}</text>
+            <text x={AGE_AXIS.left - 6} y={seaY(depthM)} fontSize={13} textAnchor="end" dominantBaseline="middle" fill={COLOURS.text}>{formatQuantity(depthM / 1000, 'km', locale)}</text>
           </g>
         ))}
         <path d={curves.halfSpace} fill="none" stroke={COLOURS.halfSpace} strokeWidth={chosen('half-space') ? 4 : 2} strokeDasharray="8 5" data-curve="half-space" />
         <path d={curves.plate} fill="none" stroke={COLOURS.plate} strokeWidth={chosen('plate') ? 4 : 2} data-curve="plate" />
         <path d={`${curves.lithosphere} L ${AGE_AXIS.right} ${LITHOSPHERE.top} L ${AGE_AXIS.left} ${LITHOSPHERE.top} Z`} fill={COLOURS.lithosphere} />
         <line x1={AGE_AXIS.left} y1={lithosphereY(GDH1.plateThicknessKm)} x2={AGE_AXIS.right} y2={lithosphereY(GDH1.plateThicknessKm)} stroke={COLOURS.plate} strokeDasharray="3 4" />
-        <text x={AGE_AXIS.left + 4} y={LITHOSPHERE.top + 14} fontSize={12} fill={COLOURS.text}>{strings.thickness}</text>
+        <text x={AGE_AXIS.left + 4} y={LITHOSPHERE.top + 14} fontSize={14} fill={COLOURS.text}>{strings.thickness}</text>
         {[50, 100, 150].map((km) => (
-          <text key={km} x={AGE_AXIS.left - 6} y={lithosphereY(km)} fontSize={11} textAnchor="end" dominantBaseline="middle" fill={COLOURS.text}>{formatQuantity(km, 'km', locale)}</text>
+          <text key={km} x={AGE_AXIS.left - 6} y={lithosphereY(km)} fontSize={13} textAnchor="end" dominantBaseline="middle" fill={COLOURS.text}>{formatQuantity(km, 'km', locale)}</text>
         ))}
         <line x1={markerX} y1={SEA.top} x2={markerX} y2={LITHOSPHERE.bottom} stroke={COLOURS.marker} strokeWidth={2} />
         <circle cx={markerX} cy={seaY(result.depthM)} r={9} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={3} />
