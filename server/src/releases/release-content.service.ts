@@ -141,12 +141,12 @@ export class ReleaseContentService {
       stories.push({
         id: snapshot.story.id,
         revisionId: revision.id,
-        title: { [snapshot.story.sourceLocale]: snapshot.story.title },
+        title: { ...targets.titles, [snapshot.story.sourceLocale]: snapshot.story.title },
         audience: snapshot.story.audience,
         panels: snapshot.panels.map((panel) => ({
           id: panel.id,
           position: panel.position,
-          docs: { [snapshot.story.sourceLocale]: panel.docs[snapshot.story.sourceLocale]!, ...(targets[panel.id] ?? {}) },
+          docs: { [snapshot.story.sourceLocale]: panel.docs[snapshot.story.sourceLocale]!, ...(targets.docs[panel.id] ?? {}) },
         })),
       });
     }

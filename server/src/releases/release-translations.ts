@@ -34,13 +34,18 @@ export class ReleaseTranslations {
     );
   }
 
-  /** Per panel id, per target locale, the drawn document. */
-  async documentsFor(revision: Revision, locales: string[]): Promise<Record<number, Record<string, PanelDocJSON>>> {
+  /**
+   * Per panel id, per target locale, the drawn document; and the title in each target locale
+   * where it is translated (elsewhere the kiosk shows the source's, as the venue allowed).
+   */
+  async documentsFor(revision: Revision, locales: string[]): Promise<{ docs: Record<number, Record<string, PanelDocJSON>>; titles: Record<string, string> }> {
     const docs: Record<number, Record<string, PanelDocJSON>> = {};
+    const titles: Record<string, string> = {};
     for (const locale of locales) {
       const drawn = await this.translations.targetDocumentsAt(revision, locale);
       for (const panel of drawn.panels) (docs[panel.panelId] ??= {})[locale] = panel.doc;
+      if (drawn.title !== null) titles[locale] = drawn.title;
     }
-    return docs;
+    return { docs, titles };
   }
 }

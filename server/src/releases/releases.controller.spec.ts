@@ -81,6 +81,8 @@ describe('building a release', () => {
       media: [{ mediaId: String(g.imageId), alt: { en: 'Two plates meeting at a trench', fr: 'Deux plaques qui se rencontrent à une fosse' }, credit: 'Drawing: Tomás Reyes' }],
     });
     expect(manifest.stories[0]!.panels[0]!.docs.en).toMatchObject({ type: 'doc' });
+    // The title is not translated into French: the manifest carries the source's alone, which the kiosk shows as the venue falls back.
+    expect(Object.keys(manifest.stories[0]!.title)).toEqual(['en']);
     expect(manifest.media[0]!.renditions.map((r) => r.sha256).sort()).toEqual(manifest.files.map((f) => f.sha256).sort());
     expect(release.bytes).toBe(manifest.files.reduce((sum, file) => sum + file.size, 0));
   });
@@ -136,6 +138,8 @@ describe('release rules', () => {
     expect(release.state).toBe('ready');
     const manifest = manifestOf((await signedManifest(t, g.technician.auth, release.id)).manifest);
     expect(JSON.stringify(manifest.stories[0]!.panels[0]!.docs.fr)).toContain('FR The map shows where plates meet.');
+    const title = units.find((unit) => unit.unitId === `s${g.story.storyId}.title`)!.source;
+    expect(manifest.stories[0]!.title).toEqual({ en: title, fr: `FR ${title}` });
     expect(manifest.fallbackToSource).toBe(false);
   });
 

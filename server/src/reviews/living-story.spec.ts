@@ -203,7 +203,7 @@ describe('translations of a revised story', () => {
     for (const unit of await units(story.storyId)) {
       await request(t.http).put(`/api/stories/${story.storyId}/translations/fr/units/${encodeURIComponent(unit.unitId)}`).set(translator).send({ text: `FR ${unit.source}`, version: unit.version }).expect(200);
     }
-    expect((await units(story.storyId)).map((unit) => unit.status)).toEqual(['translated', 'translated']);
+    expect((await units(story.storyId)).map((unit) => unit.status)).toEqual(['translated', 'translated', 'translated']);
 
     await move(story.storyId, 'revise').expect(200);
     await edit(story.panelIds[0]!, 'Plates move a few centimetres each year.', 1);
@@ -211,7 +211,8 @@ describe('translations of a revised story', () => {
     await verdict(t, educator, revisionId, { verdict: 'approve' }).expect(201);
 
     const after = await units(story.storyId);
-    expect(after.map((unit) => [unit.panelId, unit.status])).toEqual([[story.panelIds[0], 'stale'], [story.panelIds[1], 'translated']]);
+    // The first unit is the story's title (on no panel), unchanged by the revision.
+    expect(after.map((unit) => [unit.panelId, unit.status])).toEqual([[null, 'translated'], [story.panelIds[0], 'stale'], [story.panelIds[1], 'translated']]);
     const completeness = (await request(t.http).get(`/api/stories/${story.storyId}/translations`).set(translator).expect(200)).body;
     expect(completeness).toContainEqual(expect.objectContaining({ locale: 'fr', stale: 1 }));
   });

@@ -57,6 +57,13 @@ const DEMO_TRANSLATIONS: Record<string, Record<'fr' | 'es', string[][]>> = {
   },
 };
 
+/** The demo stories' titles, which the kiosk's story menu shows in the visitor's language. */
+const DEMO_TITLES: Record<string, Record<'fr' | 'es', string>> = {
+  'Why Does Rock Deep Inside Earth Move?': { fr: 'Pourquoi la roche bouge-t-elle au fond de la Terre ?', es: '¿Por qué se mueve la roca en el interior de la Tierra?' },
+  'Sliding Off the Ridge': { fr: 'Glisser depuis la dorsale', es: 'Deslizarse desde la dorsal' },
+  'Sinking Slabs': { fr: 'Les plaques qui plongent', es: 'Las placas que se hunden' },
+};
+
 /**
  * The demo stories in French and Spanish, saved through the translation service as the demo
  * translator, so the demo venue is complete for a release. The images' alt texts in both languages
@@ -81,9 +88,11 @@ export class DemoTranslations {
       for (const [locale, panels] of Object.entries(byLocale)) {
         const states = await this.translations.statesOf(source, locale);
         for (const state of states) {
-          const text = state.mediaId === null
-            ? panels[state.panelNumber - 1]?.[source.panels[state.panelNumber - 1]!.units.indexOf(state.unit)]
-            : state.translation?.text;
+          const text = state.unit.kind === 'storyTitle'
+            ? DEMO_TITLES[title]?.[locale as 'fr' | 'es']
+            : state.mediaId === null
+              ? panels[state.panelNumber! - 1]?.[source.panels[state.panelNumber! - 1]!.units.indexOf(state.unit)]
+              : state.translation?.text;
           if (text === undefined) throw new Error(`the demo has no ${locale} text for unit ${state.unit.id} of "${title}"`);
           await this.translations.saveUnit(translator, story.id, locale, state.unit.id, { text, version: state.own?.version ?? 0 });
         }

@@ -1,7 +1,7 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
-import { mediaIdsIn, segmentAltText, segmentPanel, type PanelDocJSON, type RevisionSnapshot, type TranslationUnit } from '@mantlepiece/shared';
+import { mediaIdsIn, segmentAltText, segmentPanel, segmentStoryTitle, type PanelDocJSON, type RevisionSnapshot, type TranslationUnit } from '@mantlepiece/shared';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { PanelDocument } from '../panels/models/panel-document.model.js';
@@ -33,6 +33,8 @@ export interface StorySource {
   story: Story;
   venue: Venue | null;
   targetLocales: string[];
+  /** The title's unit: the current title, or the one the revision froze. */
+  title: TranslationUnit;
   panels: PanelSource[];
   altTexts: AltTextSource[];
 }
@@ -105,7 +107,7 @@ export class SourceUnitsService {
           };
         });
         // A story outside any exhibit is written for the first venue set up, as the stories module decides.
-        return [this.build(story, story.exhibit?.gallery?.venue ?? firstVenue, story.sourceLocale, inputs, transaction)];
+        return [this.build(story, story.exhibit?.gallery?.venue ?? firstVenue, story.title, story.sourceLocale, inputs, transaction)];
       }),
     );
   }
@@ -118,11 +120,11 @@ export class SourceUnitsService {
     const [story] = await this.storiesWithVenues([revision.storyId], transaction);
     if (!story) throw new NotFoundException('There is no such story.');
     const venue = story.exhibit?.gallery?.venue ?? (await this.venues.findOne({ order: [['id', 'ASC']], transaction }));
-    const { sourceLocale } = revision.snapshot.story;
+    const { sourceLocale, title } = revision.snapshot.story;
     const inputs = revision.snapshot.panels.map((panel): PanelInput => ({
       panelId: panel.id, position: panel.position, version: 0, doc: panel.docs[sourceLocale] ?? null, memoKey: `revision:${revision.id}:${panel.id}`,
     }));
-    return this.build(story, venue, sourceLocale, inputs, transaction);
+    return this.build(story, venue, title, sourceLocale, inputs, transaction);
   }
 
   private storiesWithVenues(storyIds: readonly number[], transaction?: Transaction): Promise<Story[]> {
@@ -133,7 +135,7 @@ export class SourceUnitsService {
     });
   }
 
-  private async build(story: Story, venue: Venue | null, sourceLocale: string, panels: PanelInput[], transaction?: Transaction): Promise<StorySource> {
+  private async build(story: Story, venue: Venue | null, title: string, sourceLocale: string, panels: PanelInput[], transaction?: Transaction): Promise<StorySource> {
     const panelSources = await Promise.all(
       panels.map(async (panel, index) => {
         const panelNumber = index + 1;
@@ -143,10 +145,12 @@ export class SourceUnitsService {
         return { panelId: panel.panelId, position: panel.position, panelNumber, version: panel.version, doc: panel.doc ?? { type: 'doc' as const, content: [] }, units };
       }),
     );
+    const [titleUnit] = await this.remember(`title:${story.id}:${sourceLocale}:${title}`, async () => [await segmentStoryTitle(story.id, title, { sourceLocale })]);
     return {
       story,
       venue,
       targetLocales: (venue?.targetLocales ?? []).filter((locale) => locale !== sourceLocale),
+      title: titleUnit!,
       panels: panelSources,
       altTexts: await this.altTextSources(panelSources, sourceLocale, transaction),
     };

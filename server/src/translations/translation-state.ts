@@ -18,7 +18,8 @@ export interface StoredUnitTranslation extends StoredTranslation {
 export interface UnitState {
   unit: TranslationUnit;
   panelId: number | null;
-  panelNumber: number;
+  /** Null for the story's title, which is on no panel. */
+  panelNumber: number | null;
   /** The version of the panel's source document; null for alt text. */
   sourceVersion: number | null;
   mediaId: number | null;
@@ -42,15 +43,20 @@ const stored = (row: Translation): StoredUnitTranslation => ({
 export const altDisplay = (text: string) => displayOf([{ type: 'text', text }]);
 
 /**
- * The state of every unit of a story in one locale, in reading order (each panel's units, then the
- * alt text of images it shows first). An alt text is read from the media library, where every other
+ * The state of every unit of a story in one locale, in reading order (the title, then each panel's
+ * units, then the alt text of images it shows first). An alt text is read from the media library, where every other
  * part of the system reads it; its row here only says which source it was made from. An alt text
  * typed straight into the media library has no row, and counts as made from the current source.
  */
 export function unitStates(source: StorySource, rows: readonly Translation[], targetAltTexts: readonly MediaAltText[]): UnitState[] {
   const rowsById = new Map(rows.map((row) => [row.unitId, row]));
   const altTextOf = new Map(targetAltTexts.map((alt) => [alt.mediaAssetId, alt]));
-  const states: UnitState[] = [];
+  const titleRow = rowsById.get(source.title.id);
+  const titleTranslation = titleRow ? stored(titleRow) : undefined;
+  const states: UnitState[] = [{
+    unit: source.title, panelId: null, panelNumber: null, sourceVersion: null, mediaId: null, translation: titleTranslation, own: titleRow,
+    status: unitStatus({ sourceHash: source.title.sourceHash, translation: titleTranslation }),
+  }];
   for (const panel of source.panels) {
     const own = Object.fromEntries(rows.filter((row) => row.panelId === panel.panelId).map((row) => [row.unitId, stored(row)]));
     const carried = carryTranslations(panel.units, own);

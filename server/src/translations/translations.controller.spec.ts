@@ -12,6 +12,7 @@ const units = (locale: string, query = '') => request(t.http).get(`/api/stories/
 const unitPath = (locale: string, unitId: string) => `/api/stories/${world.story.id}/translations/${locale}/units/${unitId}`;
 const heading = () => `p${world.panel.id}.heading.1`;
 const paragraph = () => `p${world.panel.id}.paragraph.1`;
+const storyTitle = () => `s${world.story.id}.title`;
 
 beforeAll(async () => {
   t = await createTranslationTestApp();
@@ -66,12 +67,13 @@ describe('locale scoping', () => {
 describe('units', () => {
   it('lists every unit in reading order with its source, placeholders and budget', async () => {
     const res = await units('fr').set(world.translator).expect(200);
-    expect(res.body.total).toBe(9);
+    expect(res.body.total).toBe(10);
     expect(res.body.items.map((unit: TranslationUnitView) => unit.unitId)).toEqual([
-      heading(), paragraph(), `p${world.panel.id}.heading.2`, `p${world.panel.id}.listItem.1`, `p${world.panel.id}.listItem.2`,
+      storyTitle(), heading(), paragraph(), `p${world.panel.id}.heading.2`, `p${world.panel.id}.listItem.1`, `p${world.panel.id}.listItem.2`,
       `p${world.panel.id}.listItem.3`, `p${world.panel.id}.quote.1`, `m${world.image.id}.alt`, `p${world.second.id}.paragraph.1`,
     ]);
-    const body = res.body.items[1] as TranslationUnitView;
+    expect(res.body.items[0]).toMatchObject({ panelId: null, panelNumber: null, mediaId: null, kind: 'storyTitle', source: world.story.title, placeholders: [] });
+    const body = res.body.items[2] as TranslationUnitView;
     expect(body).toMatchObject({
       panelId: world.panel.id, panelNumber: 1, mediaId: null, kind: 'paragraph', status: 'untranslated', target: null, previousSource: null, version: 0,
       source: 'A block on a slope is pulled {1}down{/1} and pressed {2}into{/2} the rock. It starts to slide above {3}.{4}Read more at {5}our website{/5}.',
@@ -79,7 +81,7 @@ describe('units', () => {
     expect(body.placeholders.map((placeholder) => placeholder.id)).toEqual(['1', '2', '3', '4', '5']);
     // French runs about a quarter longer than English (the shared lengthBudget's rule of thumb).
     expect(body.budget).toBeGreaterThan(body.source.length);
-    expect(res.body.items[7]).toMatchObject({ panelId: null, mediaId: world.image.id, kind: 'altText', source: 'Dark basalt on a ridge.' });
+    expect(res.body.items[8]).toMatchObject({ panelId: null, mediaId: world.image.id, kind: 'altText', source: 'Dark basalt on a ridge.' });
   });
 
   it('saves a unit by compare-and-set: a second save from the same version gets 409 with the current text', async () => {
@@ -118,7 +120,8 @@ describe('units', () => {
     // A world of its own, so the completeness figures below stay as they are.
     const own = await translationWorld(t, 'budget');
     const unitId = `p${own.panel.id}.heading.1`;
-    const [unit] = (await request(t.http).get(`/api/stories/${own.story.id}/translations/fr/units`).set(own.translator).expect(200)).body.items as TranslationUnitView[];
+    const unit = ((await request(t.http).get(`/api/stories/${own.story.id}/translations/fr/units`).set(own.translator).expect(200)).body.items as TranslationUnitView[])
+      .find((each) => each.unitId === unitId);
     const long = 'Pourquoi la roche glisse-t-elle ? '.repeat(10).trim();
     const res = await request(t.http).put(`/api/stories/${own.story.id}/translations/fr/units/${unitId}`).set(own.translator).send({ text: long, version: 0 });
     expect(res.status).toBe(200);
@@ -165,14 +168,14 @@ describe('completeness and preview', () => {
   it('counts total, translated and stale units per locale, the same in the worklist', async () => {
     const res = await request(t.http).get(`/api/stories/${world.story.id}/translations`).set(world.admin).expect(200);
     expect(res.body).toEqual([
-      { locale: 'fr', total: 9, translated: 3, stale: 0 },
-      { locale: 'es', total: 9, translated: 0, stale: 0 },
+      { locale: 'fr', total: 10, translated: 3, stale: 0 },
+      { locale: 'es', total: 10, translated: 0, stale: 0 },
     ]);
     const worklist = await request(t.http).get(`/api/translations/stories?q=${encodeURIComponent(world.story.title)}`).set(world.curator).expect(200);
     expect(worklist.body).toEqual({
       items: [
-        { storyId: world.story.id, storyTitle: world.story.title, locale: 'es', total: 9, translated: 0, stale: 0 },
-        { storyId: world.story.id, storyTitle: world.story.title, locale: 'fr', total: 9, translated: 3, stale: 0 },
+        { storyId: world.story.id, storyTitle: world.story.title, locale: 'es', total: 10, translated: 0, stale: 0 },
+        { storyId: world.story.id, storyTitle: world.story.title, locale: 'fr', total: 10, translated: 3, stale: 0 },
       ],
       total: 2, page: 1, pageSize: 25,
     });
@@ -186,12 +189,12 @@ describe('completeness and preview', () => {
       panels: story.panels.map((panel: { id: number; position: number; wordBudget: number; doc: object }) => ({ ...panel, docs: { en: panel.doc } })),
     });
     const [fr, es] = await t.app.get(TranslationsService).completenessForRelease([{ id: 0, storyId: world.story.id, snapshot }], ['fr', 'es']);
-    expect(fr).toMatchObject({ storyId: world.story.id, locale: 'fr', total: 9, translated: 3, stale: 0, complete: false });
+    expect(fr).toMatchObject({ storyId: world.story.id, locale: 'fr', total: 10, translated: 3, stale: 0, complete: false });
     expect(fr!.missing.map((unit) => unit.unitId)).toEqual([
-      paragraph(), `p${world.panel.id}.heading.2`, `p${world.panel.id}.listItem.1`, `p${world.panel.id}.listItem.2`, `p${world.panel.id}.listItem.3`, `p${world.panel.id}.quote.1`,
+      storyTitle(), paragraph(), `p${world.panel.id}.heading.2`, `p${world.panel.id}.listItem.1`, `p${world.panel.id}.listItem.2`, `p${world.panel.id}.listItem.3`, `p${world.panel.id}.quote.1`,
     ]);
     expect(es).toMatchObject({ translated: 0, complete: false });
-    expect(es!.missing).toHaveLength(9);
+    expect(es!.missing).toHaveLength(10);
   });
 
   it('previews the target documents, with the source where a unit is untranslated and marks and live values kept', async () => {
@@ -199,7 +202,8 @@ describe('completeness and preview', () => {
       .send({ text: 'Au-delà de {3}, le bloc glisse : il est {2}pressé{/2} contre la roche et tiré vers le {1}bas{/1}.{4}En savoir plus sur {5}notre site{/5}.', version: 0 })
       .expect(200);
     const res = await request(t.http).get(`/api/stories/${world.story.id}/translations/fr/preview`).set(world.translator).expect(200);
-    expect(res.body).toMatchObject({ storyId: world.story.id, locale: 'fr', dir: 'ltr', alt: { [String(world.image.id)]: 'Basalte sombre sur une dorsale.' } });
+    // The title is not translated yet: null, and the kiosk shows the source's where the venue allows it.
+    expect(res.body).toMatchObject({ storyId: world.story.id, locale: 'fr', dir: 'ltr', title: null, alt: { [String(world.image.id)]: 'Basalte sombre sur une dorsale.' } });
     const [first] = res.body.panels;
     const [title, body, widget, tryIt] = first.doc.content as PanelNodeJSON[];
     expect(title!.content).toEqual([{ type: 'text', text: 'Pourquoi la roche glisse-t-elle ?' }]);
@@ -213,6 +217,34 @@ describe('completeness and preview', () => {
     expect(widget).toEqual((examplePanelWithImage(world.image.id).content as PanelNodeJSON[])[2]);
     expect(tryIt!.content).toEqual([{ type: 'text', text: 'Try it' }]);
     expect(first.fallbackUnitIds).toContain(`p${world.panel.id}.heading.2`);
+  });
+});
+
+describe('story titles', () => {
+  it('are units of their own: translated like any text, stale once the curator renames the story, shown in the preview', async () => {
+    const own = await translationWorld(t, 'titles');
+    const titleUnit = `s${own.story.id}.title`;
+    const ownUnits = (query = '') => request(t.http).get(`/api/stories/${own.story.id}/translations/fr/units${query}`).set(own.translator).expect(200);
+    // Short, as the title is ("titles story"): within its length budget.
+    const saved = await request(t.http).put(`/api/stories/${own.story.id}/translations/fr/units/${titleUnit}`).set(own.translator).send({ text: 'Les titres', version: 0 });
+    expect(saved.body).toEqual({ version: 1, status: 'translated', warnings: [] });
+    expect((await request(t.http).get(`/api/stories/${own.story.id}/translations/fr/preview`).set(own.translator).expect(200)).body.title).toBe('Les titres');
+
+    await request(t.http).patch(`/api/stories/${own.story.id}`).set(own.curator).send({ title: `${own.story.title} again` }).expect(200);
+    expect((await ownUnits('?status=stale')).body.items).toEqual([
+      expect.objectContaining({ unitId: titleUnit, kind: 'storyTitle', status: 'stale', source: `${own.story.title} again`, previousSource: own.story.title, target: 'Les titres', version: 1 }),
+    ]);
+    // Stale is not current: the preview goes back to the source's title until it is translated again.
+    expect((await request(t.http).get(`/api/stories/${own.story.id}/translations/fr/preview`).set(own.translator).expect(200)).body.title).toBeNull();
+    await request(t.http).put(`/api/stories/${own.story.id}/translations/fr/units/${titleUnit}`).set(own.translator).send({ text: 'Les titres encore', version: 1 }).expect(200);
+    expect((await ownUnits('?status=stale')).body.total).toBe(0);
+  });
+
+  it('refuses a title translation that adds a placeholder, as any unit without placeholders does', async () => {
+    const own = await translationWorld(t, 'title-placeholder');
+    const res = await request(t.http).put(`/api/stories/${own.story.id}/translations/fr/units/s${own.story.id}.title`).set(own.translator).send({ text: 'Pourquoi {1}', version: 0 });
+    expect(res.status).toBe(400);
+    expect(res.body.errors).toEqual([{ path: ['text'], message: 'Placeholder {1} is not in the source; remove it.' }]);
   });
 });
 

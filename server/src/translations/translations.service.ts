@@ -31,6 +31,8 @@ export interface ReleaseCompleteness extends LocaleCompleteness {
 /** A story drawn in one locale, each unit without a current translation in the source language. */
 export interface TargetDocuments {
   dir: 'ltr' | 'rtl';
+  /** The title in the locale; null while it has no current translation (the kiosk then shows the source's, by the venue's rule). */
+  title: string | null;
   panels: { panelId: number; position: number; doc: PanelDocJSON; fallbackUnitIds: string[] }[];
   alt: Record<string, string>;
 }
@@ -171,12 +173,13 @@ export class TranslationsService {
     const panelIds = source.panels.map((panel) => panel.panelId);
     const mediaIds = source.altTexts.map((alt) => alt.mediaId);
     const include = [{ model: User, attributes: ['id', 'name'] }];
-    const [panelRows, altRows, targetAltTexts] = await Promise.all([
+    const [titleRows, panelRows, altRows, targetAltTexts] = await Promise.all([
+      this.translations.findAll({ where: { unitId: source.title.id, locale }, include, transaction }),
       panelIds.length ? this.translations.findAll({ where: { panelId: panelIds, locale }, include, transaction }) : [],
       mediaIds.length ? this.translations.findAll({ where: { mediaAssetId: mediaIds, locale }, include, transaction }) : [],
       mediaIds.length ? this.altTexts.findAll({ where: { mediaAssetId: mediaIds, locale }, transaction }) : [],
     ]);
-    return unitStates(source, [...panelRows, ...altRows], targetAltTexts);
+    return unitStates(source, [...titleRows, ...panelRows, ...altRows], targetAltTexts);
   }
 
   /**
@@ -193,7 +196,7 @@ export class TranslationsService {
     if (expectedVersion === 0) {
       try {
         await this.translations.create(
-          { ...where, ...values, version: 1, storyId: state.panelId === null ? null : storyId, panelId: state.panelId, mediaAssetId: state.mediaId },
+          { ...where, ...values, version: 1, storyId: state.mediaId === null ? storyId : null, panelId: state.panelId, mediaAssetId: state.mediaId },
           { transaction },
         );
       } catch (error) {
@@ -218,7 +221,8 @@ export class TranslationsService {
     const alt = Object.fromEntries(
       source.altTexts.map(({ mediaId, unit }) => [String(mediaId), plainText(unit, translations[unit.id] ?? unit.display)]),
     );
-    return { dir: directionOf(locale), panels, alt };
+    const title = Object.hasOwn(translations, source.title.id) ? plainText(source.title, translations[source.title.id]!) : null;
+    return { dir: directionOf(locale), title, panels, alt };
   }
 
   private async writeAltText(state: UnitState, locale: string, text: string, transaction: Transaction): Promise<void> {
@@ -237,6 +241,6 @@ export class TranslationsService {
   }
 }
 
-/** A unit without placeholders (alt text) from the display form back to plain text. */
+/** A unit without placeholders (alt text, a title) from the display form back to plain text. */
 const plainText = (unit: UnitState['unit'], display: string) =>
   runsFromText(unit, display).map((run) => (run.type === 'text' ? run.text : '')).join('');

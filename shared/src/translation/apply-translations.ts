@@ -32,7 +32,8 @@ const plainText = (runs: readonly UnitRun[]) => runs.map((run) => (run.type === 
  * (stored in the display form, `Le {1}roc{/1} monte de {2} cm par an`), marks and live values
  * restored from the source placeholders. A unit without a translation, or with one that breaks a
  * placeholder, keeps its source text; the caller decides whether a release may show that. Alt text
- * units are not in the document and are skipped: they belong to the media asset.
+ * and story title units are not in the document and are skipped: they belong to the media
+ * asset and to the story.
  */
 export function applyTranslations(doc: PanelDocJSON, units: readonly TranslationUnit[], translationsById: Readonly<Record<string, string>>): AppliedTranslations {
   const target = structuredClone(doc);
@@ -41,7 +42,7 @@ export function applyTranslations(doc: PanelDocJSON, units: readonly Translation
   const widgets = new Map(widgetsIn(target).map((widget) => [widget.widgetId, widget]));
 
   for (const unit of units) {
-    if (unit.location.type === 'altText') continue;
+    if (unit.location.type === 'altText' || unit.location.type === 'storyTitle') continue;
     const text = Object.hasOwn(translationsById, unit.id) ? translationsById[unit.id] : undefined;
     if (text === undefined || text === '') {
       untranslated.push(unit.id);

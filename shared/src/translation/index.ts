@@ -1,5 +1,6 @@
 export * from './translation-unit.js';
 export * from './segment-panel.js';
+export * from './segment-title.js';
 export * from './translatable-params.js';
 export * from './check-placeholders.js';
 export * from './apply-translations.js';

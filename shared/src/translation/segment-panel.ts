@@ -71,7 +71,8 @@ function textBlockUnit(segment: TextBlockSegment, options: SegmentPanelOptions):
   };
 }
 
-function plainUnit(fields: Omit<UnhashedUnit, 'runs' | 'placeholders' | 'display' | 'sourceLength'>, text: string): UnhashedUnit {
+/** A unit of plain text: no marks, no placeholders. */
+export function plainUnit(fields: Omit<UnhashedUnit, 'runs' | 'placeholders' | 'display' | 'sourceLength'>, text: string): UnhashedUnit {
   const runs: UnitRun[] = [{ type: 'text', text }];
   return { ...fields, runs, placeholders: [], display: displayOf(runs), sourceLength: visibleLength(runs, []) };
 }

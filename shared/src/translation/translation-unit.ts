@@ -2,7 +2,7 @@ import { LIVE_PHRASE_NODE, LIVE_VALUE_NODE, type PanelMarkJSON, type PanelNodeJS
 import { canonicalJson, sha256Hex } from '../review/revision-snapshot.js';
 
 /** What a unit is on screen; the translator's table filters and the XLIFF context note use it. */
-export type UnitKind = 'heading' | 'paragraph' | 'listItem' | 'quote' | 'widgetText' | 'livePhrase' | 'altText';
+export type UnitKind = 'heading' | 'paragraph' | 'listItem' | 'quote' | 'widgetText' | 'livePhrase' | 'altText' | 'storyTitle';
 
 /**
  * A piece of unit content. Paired placeholders (bold, italic, link) open and close around text;
@@ -24,7 +24,9 @@ export type UnitLocation =
   | { type: 'widgetParam'; widgetId: string; param: string[] }
   /** One wording of a live phrase, found by its id wherever the translated block put it. */
   | { type: 'livePhrase'; phraseId: string; state: string }
-  | { type: 'altText'; mediaId: string };
+  | { type: 'altText'; mediaId: string }
+  /** A story's title: the kiosk's story menu and attract loop show it. */
+  | { type: 'storyTitle'; storyId: string };
 
 export interface UnitContext {
   panelId?: string;
@@ -35,6 +37,7 @@ export interface UnitContext {
   /** The widget state a live phrase's wording is shown in. */
   state?: string;
   mediaId?: string;
+  storyId?: string;
 }
 
 export interface TranslationUnit {

@@ -76,6 +76,8 @@ export interface TranslationPreviewView {
   locale: string;
   /** Writing direction of the locale, for the mirrored right-to-left preview. */
   dir: 'ltr' | 'rtl';
+  /** The story's title in the locale, or null while it has no current translation. */
+  title: string | null;
   panels: TranslationPreviewPanel[];
   /** Alt text per media id in the locale, falling back to the source. */
   alt: Record<string, string>;

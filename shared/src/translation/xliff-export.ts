@@ -81,6 +81,7 @@ const KIND_WORDS: Record<UnitKind, string> = {
   widgetText: 'widget text',
   livePhrase: 'live phrase (shown while the widget is in the state named)',
   altText: 'image alt text (read aloud, not shown)',
+  storyTitle: 'story title (on the story menu and the attract loop)',
 };
 
 function contextNote(unit: TranslationUnit): string {

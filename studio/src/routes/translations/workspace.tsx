@@ -168,7 +168,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
               sourceLocale={sourceLocale}
               languageName={languageName}
               heading={t('unitEditor.heading', {
-                where: selected.panelNumber === null ? t('workspace.image') : t('workspace.panelNumber', { number: selected.panelNumber }),
+                where: selected.kind === 'storyTitle' ? t('workspace.storyMenu') : selected.panelNumber === null ? t('workspace.image') : t('workspace.panelNumber', { number: selected.panelNumber }),
                 kind: t(`workspace.kinds.${selected.kind}`),
               })}
               draft={drafts[selected.unitId]}
@@ -186,7 +186,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
           {selected && selected.panelNumber !== null && previewPanel && preview.data ? (
             <TranslationPreview panel={previewPanel} panelNumber={selected.panelNumber} alt={preview.data.alt} locale={target.locale} languageName={language} />
           ) : selected && selected.panelNumber === null ? (
-            <Text className={styles.muted}>{t('translationPreview.noPanel')}</Text>
+            <Text className={styles.muted}>{t(selected.kind === 'storyTitle' ? 'translationPreview.titleNoPanel' : 'translationPreview.noPanel')}</Text>
           ) : null}
         </div>
       </div>
