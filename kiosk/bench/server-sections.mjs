@@ -1,11 +1,12 @@
 // The kiosk bench's sections that need a server (issue 7): offline boot against a blank page, and
 // release sync against plain downloads of the same files, each pair measured in one headless
-// Chromium run so the machine's speed cancels out of the ratio.
+// Chromium run so the machine's speed cancels out of the ratio; then the soak (soak-section.mjs).
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
 import { benchServer, demoGallery, deviceToken, liveManifest, pairStation } from './bench-server.mjs';
+import { soak } from './soak-section.mjs';
 
 const RUNS = 5;
 const SYNC_RUNS = 3;
@@ -47,9 +48,9 @@ async function kioskProfile(url) {
 }
 
 /** Opens the kiosk in a fresh profile, pairs it at the demo station and waits for the first drawn panel. */
-async function pairedKiosk(server, demo) {
+async function pairedKiosk(server, demo, path = '/kiosk/?poll=1') {
   const kiosk = await kioskProfile(server.url);
-  await kiosk.page.goto(`${server.url}/kiosk/?poll=1`);
+  await kiosk.page.goto(`${server.url}${path}`);
   const shown = kiosk.page.locator('[data-pairing-code]');
   await shown.waitFor({ timeout: 30_000 });
   await pairStation(server.url, demo.token, demo.station.id, await shown.getAttribute('data-pairing-code'));
@@ -141,7 +142,7 @@ export async function serverSections() {
   try {
     const demo = await demoGallery(server.url, server.demoPassword);
     const where = server.started ? `a private stack started for the bench (${server.url})` : `MANTLEPIECE_URL (${server.url})`;
-    const sections = [await offlineBoot(server, demo), await releaseSync(server, demo)];
+    const sections = [await offlineBoot(server, demo), await releaseSync(server, demo), await soak(pairedKiosk, server, demo)];
     for (const section of sections) section.lines.push('', `Server: ${where}. Chromium: ${CHROMIUM.executablePath}, headless.`);
     return sections;
   } finally {
