@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import type { ExhibitView, GalleryView, Page as ListPage, ReleaseView, StationView, StoryView, UserView, VenueView } from '@mantlepiece/shared';
+import { axeFindings } from '../support/axe';
 import { apiAs, baseUrl, launchBrowser } from '../support/browser';
 
 // The seeded demo (server/src/seed): the Basalt Point venue (English, with French and Spanish), its
@@ -32,6 +33,8 @@ let panelCounts: number[];
 let arabicQuantities = 0;
 /** Whether scrolling by wheel and finger was tried on a long panel in this orientation. */
 let scrollingChecked = false;
+/** Whether axe-core looked at a widget panel in this orientation. */
+let axeChecked = false;
 
 const eventually = <T>(read: () => Promise<T> | T, timeout = 15_000) => expect.poll(read, { timeout, interval: 100 });
 
@@ -314,6 +317,12 @@ async function walkPanels(label: string): Promise<string[]> {
       const where = `${label}, story ${storyIndex + 1} panel ${panel}`;
       if (shots) await screen.screenshot({ path: join(shots, `${where.replace(/[^\w]+/g, '-')}.png`) });
       problems.push(...(await hiddenContent(screen)).map((problem) => `${where}: ${problem}`));
+      // axe-core on a widget panel in Arabic with larger text, once per orientation; the kiosk's zoom lock is its one allowed finding.
+      if (!axeChecked && label.endsWith(', ar, larger text') && (await screen.locator('.mp-widget').count())) {
+        axeChecked = true;
+        const findings = await axeFindings(screen, { allowedRules: ['meta-viewport'] });
+        problems.push(...findings.map((finding) => `${where}: axe ${finding.rule} on ${finding.nodes.join(', ').slice(0, 200)}`));
+      }
       if (!scrollingChecked && (await screen.locator('.mp-more-below').count())) {
         scrollingChecked = true;
         problems.push(...(await scrollingProblems(where)));
@@ -337,6 +346,7 @@ describe('every demo panel on the kiosk, in every orientation, language and text
     if (await screen.getByRole('button', { name: /Touch to begin/ }).isVisible()) await screen.getByRole('button', { name: /Touch to begin/ }).tap();
     await screen.locator('.story-cards').waitFor();
     scrollingChecked = false;
+    axeChecked = false;
     const problems: string[] = [];
     for (const locale of locales) {
       await screen.locator(`.languages button[lang="${locale}"]`).tap();
@@ -354,6 +364,7 @@ describe('every demo panel on the kiosk, in every orientation, language and text
     }
     expect(problems).toEqual([]);
     expect(scrollingChecked, 'no panel was long enough to try scrolling').toBe(true);
+    expect(axeChecked, 'axe-core saw no widget panel').toBe(true);
   }, 600_000);
 
   it('read numbers with their units in order in Arabic, on the drawings and in the text', () => {
