@@ -120,7 +120,9 @@ export function StoryReview({ story }: { story: StoryDetailView }) {
   const revisions = useStoryRevisions(story.id);
   const latest = revisions.data?.reduce<RevisionSummary | undefined>((last, revision) => (!last || revision.number > last.number ? revision : last), undefined);
 
-  const mayWrite = story.can.submit;
+  // The API still takes a new submission over an open one, but with the editor closed in review
+  // it would carry the same text: the curator withdraws instead, so it is not offered there.
+  const mayWrite = story.can.submit && story.state !== 'in_review';
   const preflight = useDraftPreflight(story.id, mayWrite);
   const { blockers, warnings } = groupPreflight(preflight.data ?? []);
   const offerSubmit = mayWrite && preflight.isSuccess && blockers.length === 0;
