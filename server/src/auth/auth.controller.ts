@@ -42,11 +42,20 @@ export class AuthController {
     return this.withCookie(res, await this.auth.signIn(user, ip));
   }
 
+  /**
+   * No cookie at all is nobody signed in (the browser drops an expired one itself), an expected
+   * state every signed-out page load asks about: 204, which no browser logs as an error. A cookie
+   * the server does not accept is still 401.
+   */
   @Public()
   @Post('refresh')
-  @HttpCode(HttpStatus.OK)
-  async refresh(@Req() req: Request, @Ip() ip: string, @Res({ passthrough: true }) res: Response): Promise<SessionView> {
-    return this.withCookie(res, await this.auth.refresh(req.cookies?.[REFRESH_COOKIE], ip));
+  async refresh(@Req() req: Request, @Ip() ip: string, @Res() res: Response): Promise<void> {
+    const token: string | undefined = req.cookies?.[REFRESH_COOKIE];
+    if (!token) {
+      res.status(HttpStatus.NO_CONTENT).end();
+      return;
+    }
+    res.status(HttpStatus.OK).json(this.withCookie(res, await this.auth.refresh(token, ip)));
   }
 
   /** Public, so a person whose access token has lapsed can still end the session. */

@@ -104,7 +104,8 @@ function safeJson(text: string): unknown {
  */
 export function refreshSession(): Promise<SessionView | null> {
   refreshing ??= send('/auth/refresh', { method: 'POST' })
-    .then(async (response) => (response.status === 401 ? null : read<SessionView>(response)))
+    // 204: no session cookie, nobody signed in; 401: the cookie was refused.
+    .then(async (response) => (response.status === 204 || response.status === 401 ? null : read<SessionView>(response)))
     .then((session) => {
       setSession(session);
       return session;
