@@ -84,7 +84,7 @@ export class KioskApi {
   async manifest(etag: string | null): Promise<ManifestAnswer> {
     const response = await this.send('/api/kiosk/manifest', { headers: etag ? { 'If-None-Match': etag } : {} });
     if (response.status === 304) return { status: 'unchanged' };
-    if (response.status === 404) return { status: 'none' };
+    if (response.status === 204) return { status: 'none' };
     if (response.status !== 200) throw new KioskApiError(response.status, `GET /api/kiosk/manifest answered ${response.status}.`);
     return { status: 'release', body: (await response.json()) as KioskManifestResponse, etag: response.headers.get('ETag') };
   }

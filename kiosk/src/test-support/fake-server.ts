@@ -45,7 +45,7 @@ export class FakeKioskServer {
     }
     if (this.revoked && !path.startsWith('/api/kiosk/pair/')) return json(401, { statusCode: 401, message: 'Pair this kiosk to continue.' });
     if (method === 'GET' && path === '/api/kiosk/manifest') {
-      if (!this.live) return json(404, { statusCode: 404, message: 'No live release for this gallery' });
+      if (!this.live) return new Response(null, { status: 204 });
       const { etag } = this.live;
       if (headers.get('If-None-Match') === etag) return new Response(null, { status: 304 });
       return json(200, this.live.response, { ETag: etag });
