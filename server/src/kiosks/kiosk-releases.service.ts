@@ -9,6 +9,7 @@ import { ReleaseFile } from '../releases/models/release-file.model.js';
 import { Release } from '../releases/models/release.model.js';
 import { PublicationsService, type PublicationVersion } from '../releases/publications.service.js';
 import { ReleaseFileStore, sha256Of } from '../releases/release-file-store.js';
+import type { PairedKiosk } from './device-token.guard.js';
 
 /** Releases a kiosk may fetch from: the Live one, and those it may still hold to roll back to. */
 export const SERVABLE_STATES = ['live', 'superseded'];
@@ -35,9 +36,9 @@ export interface KioskFile {
 /**
  * What a paired kiosk reads: its gallery's live manifest and the files of its releases. Kiosks
  * poll the manifest all day, so the signed answer is kept per gallery, serialised, and served
- * again while the gallery's latest publication is the same one, signed the same time. That is
- * checked in the database on every request, so a publish, rollback or re-signing on any server
- * instance is seen at once.
+ * again while the gallery's latest publication is the same one, signed the same time. The
+ * device-token guard reads that from the database on every request, so a publish, rollback or
+ * re-signing on any server instance is seen at the next poll.
  */
 @Injectable()
 export class KioskReleasesService {
@@ -53,13 +54,13 @@ export class KioskReleasesService {
 
   /**
    * The release of the gallery's latest publication (the Live one) as signed, with that
-   * publication's signed record; null while the gallery has nothing published.
+   * publication's signed record. The guard read which publication is the latest, with the kiosk.
    */
-  async liveManifest(galleryId: number): Promise<LiveManifest | null> {
-    const version = await this.publications.latestVersion(galleryId);
-    if (!version) return null;
+  async liveManifest(kiosk: PairedKiosk): Promise<LiveManifest> {
+    const { station: { galleryId }, latestPublication } = kiosk;
+    if (!latestPublication) throw noLiveRelease();
     const cached = this.manifests.get(galleryId);
-    if (cached && sameVersion(cached.version, version) && this.clock.now().getTime() < cached.resignsAt) return cached;
+    if (cached && sameVersion(cached.version, latestPublication) && this.clock.now().getTime() < cached.resignsAt) return cached;
     return this.signedAnswer(galleryId);
   }
 
@@ -77,10 +78,10 @@ export class KioskReleasesService {
   }
 
   /** Reads (and if need be signs again) the latest publication, and keeps the answer for the requests after. */
-  private async signedAnswer(galleryId: number): Promise<LiveManifest | null> {
+  private async signedAnswer(galleryId: number): Promise<LiveManifest> {
     const latest = await this.publications.latestSigned(galleryId);
     const release = latest?.release;
-    if (!latest || !release?.manifest || !release.signature) return null;
+    if (!latest || !release?.manifest || !release.signature) throw noLiveRelease();
     const { id, record, signature, expiresAt } = latest.publication;
     const answer: KioskManifestResponse = { manifest: release.manifest, signature: release.signature, publication: { record, signature } };
     const cached: CachedManifest = {
@@ -95,3 +96,5 @@ export class KioskReleasesService {
 }
 
 const sameVersion = (a: PublicationVersion, b: PublicationVersion) => a.id === b.id && a.expiresAt?.getTime() === b.expiresAt?.getTime();
+
+const noLiveRelease = () => new NotFoundException({ statusCode: 404, message: 'No live release for this gallery' });

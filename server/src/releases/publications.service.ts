@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { QueryTypes, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { PUBLICATION_FORMAT, serializePublication } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
@@ -65,19 +65,6 @@ export class PublicationsService {
     if (!publication?.release) return null;
     if (this.needsSigning(publication)) await this.sign(publication);
     return { publication: publication as SignedPublicationOf['publication'], release: publication.release };
-  }
-
-  /**
-   * Which publication is the gallery's latest, and which signing of it: one read on the unique
-   * (gallery, sequence) key, so a cache of the signed answer can check on every request, on every
-   * server instance, that a publish, rollback or re-signing elsewhere has not made it stale.
-   */
-  async latestVersion(galleryId: number): Promise<PublicationVersion | null> {
-    const [row] = await this.publications.sequelize!.query<{ id: number; expires_at: Date | null }>(
-      'SELECT id, expires_at FROM publications WHERE gallery_id = ? ORDER BY sequence DESC LIMIT 1',
-      { replacements: [galleryId], type: QueryTypes.SELECT },
-    );
-    return row ? { id: row.id, expiresAt: row.expires_at } : null;
   }
 
   /** When a record that expires at `expiresAt` is signed again: half its lifetime before. */
