@@ -292,8 +292,10 @@ describe('a kiosk revoked in the studio', () => {
     const station = (await fleetRow())!.station;
     await studio.goto(`/stations/${station.id}`);
     const refused = screen.waitForResponse((response) => response.url().includes('/api/kiosk/') && response.status() === 401);
+    // Awaited below; a failure before that must not surface as an unhandled rejection.
+    refused.catch(() => undefined);
     await studio.getByRole('button', { name: `Revoke Kiosk ${kioskId}` }).click();
-    await studio.getByRole('dialog').getByRole('button', { name: 'Revoke', exact: true }).click();
+    await studio.getByRole('alertdialog').getByRole('button', { name: 'Revoke', exact: true }).click();
     await studio.locator(`tr[data-kiosk-id="${kioskId}"]`).getByText('Revoked').waitFor();
     await refused;
     // The visitor is still reading: nothing is taken from them mid-story.
