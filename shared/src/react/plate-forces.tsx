@@ -143,7 +143,7 @@ export function PlateForces({ params, locale, onParamsChange, showCaution = fals
         onPointerDown={onPointerDown}
         onPointerMove={onPointerMove}
         onKeyDown={onKeyDown}
-        style={{ width: '100%', aspectRatio: `${VIEW.width} / ${VIEW.height}`, touchAction: 'none', cursor: 'grab', display: 'block', background: COLOURS.mantle, borderRadius: 8 }}
+        style={{ direction: 'ltr', width: '100%', aspectRatio: `${VIEW.width} / ${VIEW.height}`, touchAction: 'none', cursor: 'grab', display: 'block', background: COLOURS.mantle, borderRadius: 8 }}
       >
         <title>{strings.title}</title>
         <rect x={0} y={0} width={VIEW.width} height={SEA_LEVEL} fill="#f6efe2" />

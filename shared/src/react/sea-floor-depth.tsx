@@ -132,7 +132,7 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
         onPointerDown={onPointerDown}
         onPointerMove={onPointerMove}
         onKeyDown={onKeyDown}
-        style={{ width: '100%', aspectRatio: `${VIEW.width} / ${VIEW.height}`, touchAction: 'none', cursor: 'ew-resize', display: 'block', background: '#f6efe2', borderRadius: 8 }}
+        style={{ direction: 'ltr', width: '100%', aspectRatio: `${VIEW.width} / ${VIEW.height}`, touchAction: 'none', cursor: 'ew-resize', display: 'block', background: '#f6efe2', borderRadius: 8 }}
       >
         <title>{strings.title}</title>
         <path d={`${curves[shown.model === 'plate' ? 'plate' : 'halfSpace']} L ${AGE_AXIS.right} ${SEA.top} L ${AGE_AXIS.left} ${SEA.top} Z`} fill={COLOURS.water} />
@@ -156,7 +156,7 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
         <line x1={markerX} y1={SEA.top} x2={markerX} y2={LITHOSPHERE.bottom} stroke={COLOURS.marker} strokeWidth={2} />
         <circle cx={markerX} cy={seaY(result.depthM)} r={9} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={3} />
         <circle cx={markerX} cy={lithosphereY(result.lithosphereThicknessKm)} r={6} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={2} />
-        <text x={Math.min(Math.max(markerX, AGE_LABEL_INSET), VIEW.width - AGE_LABEL_INSET)} y={VIEW.height - 2} fontSize={13} fontWeight={700} textAnchor="middle" fill={COLOURS.text}>{age}</text>
+        <text x={Math.min(Math.max(markerX, AGE_LABEL_INSET), VIEW.width - AGE_LABEL_INSET)} y={VIEW.height - 6} fontSize={13} fontWeight={700} textAnchor="middle" fill={COLOURS.text}>{age}</text>
       </svg>
       <p id={statusId} role="status" data-model={shown.model} style={{ margin: '0.5em 0', display: 'grid', gridTemplateColumns: 'auto 1fr', gap: '0 0.75em' }}>
         <span>{strings.depth}</span>
