@@ -54,11 +54,12 @@ export class KioskReleasesService {
 
   /**
    * The release of the gallery's latest publication (the Live one) as signed, with that
-   * publication's signed record. The guard read which publication is the latest, with the kiosk.
+   * publication's signed record; null while the gallery has nothing published. The guard read
+   * which publication is the latest, with the kiosk.
    */
-  async liveManifest(kiosk: PairedKiosk): Promise<LiveManifest> {
+  async liveManifest(kiosk: PairedKiosk): Promise<LiveManifest | null> {
     const { station: { galleryId }, latestPublication } = kiosk;
-    if (!latestPublication) throw noLiveRelease();
+    if (!latestPublication) return null;
     const cached = this.manifests.get(galleryId);
     if (cached && sameVersion(cached.version, latestPublication) && this.clock.now().getTime() < cached.resignsAt) return cached;
     return this.signedAnswer(galleryId);
@@ -78,10 +79,10 @@ export class KioskReleasesService {
   }
 
   /** Reads (and if need be signs again) the latest publication, and keeps the answer for the requests after. */
-  private async signedAnswer(galleryId: number): Promise<LiveManifest> {
+  private async signedAnswer(galleryId: number): Promise<LiveManifest | null> {
     const latest = await this.publications.latestSigned(galleryId);
     const release = latest?.release;
-    if (!latest || !release?.manifest || !release.signature) throw noLiveRelease();
+    if (!latest || !release?.manifest || !release.signature) return null;
     const { id, record, signature, expiresAt } = latest.publication;
     const answer: KioskManifestResponse = { manifest: release.manifest, signature: release.signature, publication: { record, signature } };
     const cached: CachedManifest = {
@@ -96,5 +97,3 @@ export class KioskReleasesService {
 }
 
 const sameVersion = (a: PublicationVersion, b: PublicationVersion) => a.id === b.id && a.expiresAt?.getTime() === b.expiresAt?.getTime();
-
-const noLiveRelease = () => new NotFoundException({ statusCode: 404, message: 'No live release for this gallery' });

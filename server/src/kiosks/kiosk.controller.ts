@@ -36,12 +36,20 @@ export class KioskController {
     return answer;
   }
 
-  /** Revalidated by ETag: a kiosk polling an unchanged publication gets 304 and no body. */
+  /**
+   * Revalidated by ETag: a kiosk polling an unchanged publication gets 304 and no body. A gallery
+   * with nothing published answers 204: an expected state a kiosk polls through, not an error.
+   */
   @ApiBearerAuth()
   @KioskRoute()
   @Get('manifest')
   async manifest(@CurrentKiosk() kiosk: PairedKiosk, @Headers('if-none-match') ifNoneMatch: string | undefined, @Res() res: Response): Promise<void> {
-    const { etag, body } = await this.releases.liveManifest(kiosk);
+    const live = await this.releases.liveManifest(kiosk);
+    if (!live) {
+      res.set({ 'Cache-Control': 'no-cache' }).status(HttpStatus.NO_CONTENT).end();
+      return;
+    }
+    const { etag, body } = live;
     res.set({ ETag: etag, 'Cache-Control': 'no-cache' });
     if (ifNoneMatch?.split(',').some((tag) => tag.trim() === etag)) {
       res.status(HttpStatus.NOT_MODIFIED).end();
