@@ -20,6 +20,14 @@ let passed = 0;
 let failed = 0;
 let skipped = 0;
 const broken = [];
+const failures = [];
+
+/** Each failed test, and each file that failed before its tests ran, from a vitest JSON report. */
+const failedNames = (workspace, summary) => summary.testResults.flatMap((file) => {
+  const where = `${workspace}/${path.relative(path.join(root, workspace), file.name)}`;
+  const tests = file.assertionResults.filter((test) => test.status === 'failed').map((test) => `${where} › ${test.fullName}`);
+  return tests.length || file.status !== 'failed' ? tests : [`${where} (${file.message.split('\n')[0]})`];
+});
 
 async function finish(code) {
   await stack?.stop();
@@ -59,12 +67,15 @@ try {
     passed += summary.numPassedTests;
     failed += summary.numFailedTests;
     skipped += summary.numPendingTests + summary.numTodoTests;
+    failures.push(...failedNames(workspace, summary));
     // A suite that fails to load counts as a failure even though none of its tests ran.
     if (result.status !== 0 && summary.numFailedTests === 0) {
       broken.push(workspace);
       failed += 1;
     }
   }
+  // Named again at the end, beside the count, so a log cut to its tail still says what failed.
+  if (failures.length) console.error(`Failed:\n${failures.map((name) => `  ✖ ${name}`).join('\n')}`);
   if (broken.length) console.error(`Suites that did not run cleanly: ${broken.join(', ')}`);
   await finish(failed === 0 ? 0 : 1);
 } catch (error) {
