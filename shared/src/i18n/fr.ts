@@ -72,7 +72,7 @@ export const fr: WidgetStrings = {
     more: 'Plus',
     less: 'Moins',
     ridgePush: 'Poussée à la dorsale',
-    slabPull: 'Traction de la plaque plongeante',
+    slabPull: 'Traction de la plaque',
     perMetre: 'par mètre de bord de plaque',
     ridge: 'Dorsale',
     trench: 'Fosse',

@@ -24,22 +24,30 @@ const TRENCH = { x: 250, y: PLATE.top };
 /** Drawing units per km of slab, so the longest slab at the gentlest dip still fits to the right of the trench. */
 const UNITS_PER_KM = 0.078;
 const COLOURS = { sea: '#cfe3ee', plate: '#6b5a45', mantle: '#f0d9b5', push: '#0b3f5c', pull: '#8a3412', text: '#24282c' };
+interface ArrowLabel { x: number; y: number; anchor: 'start' | 'middle' | 'end' }
+
+/**
+ * Slab pull is named under the plate, ending just before the trench: a name centred on its arrow
+ * ran into ridge push's in longer languages (French), wherever the slab's dip put it.
+ */
+const SLAB_PULL_LABEL: ArrowLabel = { x: TRENCH.x - 12, y: PLATE.top + PLATE.thickness + 42, anchor: 'end' };
 const AGE_STEP_MYR = 10;
 const LENGTH_STEP_KM = 100;
 const DEG = Math.PI / 180;
 
 const roundLength = (km: number) => Math.round(Math.min(SLAB_LENGTH_MAX_KM, Math.max(0, km)) / 10) * 10;
 
-function Arrow({ from, to, colour, label }: { from: { x: number; y: number }; to: { x: number; y: number }; colour: string; label: string }) {
+function Arrow({ from, to, colour, label, labelAt }: { from: { x: number; y: number }; to: { x: number; y: number }; colour: string; label: string; labelAt?: ArrowLabel }) {
   const length = Math.hypot(to.x - from.x, to.y - from.y);
   const unit = { x: (to.x - from.x) / length, y: (to.y - from.y) / length };
   const back = { x: to.x - unit.x * 12, y: to.y - unit.y * 12 };
   const head = [to, { x: back.x - unit.y * 7, y: back.y + unit.x * 7 }, { x: back.x + unit.y * 7, y: back.y - unit.x * 7 }].map((p) => `${p.x},${p.y}`).join(' ');
+  const at = labelAt ?? { x: (from.x + to.x) / 2, y: (from.y + to.y) / 2 - 10, anchor: 'middle' };
   return (
     <g>
       <line x1={from.x} y1={from.y} x2={back.x} y2={back.y} stroke={colour} strokeWidth={6} strokeLinecap="round" />
       <polygon points={head} fill={colour} />
-      <text x={(from.x + to.x) / 2} y={(from.y + to.y) / 2 - 10} fontSize={13} fontWeight={700} textAnchor="middle" fill={colour} paintOrder="stroke" stroke="#fffdf7" strokeWidth={4}>
+      <text x={at.x} y={at.y} fontSize={13} fontWeight={700} textAnchor={at.anchor} fill={colour} paintOrder="stroke" stroke="#fffdf7" strokeWidth={4}>
         {label}
       </text>
     </g>
@@ -164,6 +172,7 @@ export function PlateForces({ params, locale, onParamsChange, showCaution = fals
             to={{ x: slabTop.x + dip.x * drawnLength * 0.8 - 26 * dip.y, y: slabTop.y + dip.y * drawnLength * 0.8 + 26 * dip.x }}
             colour={COLOURS.pull}
             label={strings.slabPull}
+            labelAt={SLAB_PULL_LABEL}
           />
         ) : null}
       </svg>
