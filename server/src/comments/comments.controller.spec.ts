@@ -29,6 +29,8 @@ describe('comments on a revision', () => {
       id: expect.any(Number), revisionId, panelId: panelIds[0], range: { from: 0, to: 8, quote: 'Hot rock' }, body: 'How hot?',
       author: { id: educator.person.id, name: 'Grace Mensah' }, parentId: null, resolvedAt: null, resolvedBy: null,
       createdAt: expect.any(String), carriedFromRevisionId: null, anchorChanged: null,
+      // The educator who wrote it may answer it and, as a reviewer of the revision, resolve it.
+      can: { reply: true, resolve: true },
     });
     const reply = await comment(curator, revisionId, { parentId: root.body.id, body: 'About 1300 °C at the base.' });
     expect(reply.body).toMatchObject({ parentId: root.body.id, panelId: panelIds[0], range: null });

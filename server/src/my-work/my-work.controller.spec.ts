@@ -68,8 +68,8 @@ describe('GET /api/me/work', () => {
     const { translator: work, curator: none } = await workOf(translator);
     expect(none).toBeUndefined();
     const item = work!.translations.items.find((entry) => entry.storyId === story.storyId);
-    // One paragraph is one unit, not yet translated into Kalaallisut.
-    expect(item).toEqual({ storyId: story.storyId, title: await titleOf(story.storyId), locale: 'kl', untranslated: 1, stale: 0, link: `/translations/${story.storyId}/kl` });
+    // The story's title and its one paragraph are two units, neither yet translated into Kalaallisut.
+    expect(item).toEqual({ storyId: story.storyId, title: await titleOf(story.storyId), locale: 'kl', untranslated: 2, stale: 0, link: `/translations/${story.storyId}/kl` });
     expect(work!.translations.items.every((entry) => entry.locale === 'kl' && entry.untranslated + entry.stale > 0)).toBe(true);
   });
 
