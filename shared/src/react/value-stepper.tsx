@@ -10,13 +10,13 @@ export interface ValueStepperProps {
   onMore?: () => void;
 }
 
+/** A button at the end of its range stays in place, faded, so the row does not jump. */
+const buttonStyle = (enabled: boolean) => (enabled ? widgetButtonStyle : { ...widgetButtonStyle, opacity: 0.4, cursor: 'default' });
+
 /**
  * A setting a visitor changes with two large buttons either side of its value: targets a finger
  * finds on a kiosk, text that grows with Larger text. A button at the end of the range is disabled.
  */
-/** A button at the end of its range stays in place, faded, so the row does not jump. */
-const buttonStyle = (enabled: boolean) => (enabled ? widgetButtonStyle : { ...widgetButtonStyle, opacity: 0.4, cursor: 'default' });
-
 export function ValueStepper({ label, shown, lessLabel, moreLabel, onLess, onMore }: ValueStepperProps) {
   return (
     <div role="group" aria-label={label} style={{ display: 'flex', alignItems: 'center', gap: '0.5em', flexWrap: 'wrap', margin: '0.4em 0' }}>
