@@ -2,9 +2,10 @@ import { mkdir } from 'node:fs/promises';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import type { ExhibitView, GalleryView, Page as ListPage, ReleaseView, StationView, StoryView, UserView, VenueView } from '@mantlepiece/shared';
+import type { ExhibitView, GalleryView, Page as ListPage, StationView, StoryView, UserView, VenueView } from '@mantlepiece/shared';
 import { axeFindings } from '../support/axe';
 import { apiAs, baseUrl, launchBrowser } from '../support/browser';
+import { publishedRelease } from '../support/releases';
 
 // The seeded demo (server/src/seed): the Basalt Point venue (English, with French and Spanish), its
 // Moving Plates Hall and three approved stories. This file adds Arabic, with its own Arabic texts,
@@ -66,20 +67,6 @@ async function translateIntoArabic(asTranslator: Awaited<ReturnType<typeof apiAs
   }
 }
 
-/** Builds a release of the gallery, waits until the build is Ready (polling its state, as the studio page does) and publishes it. */
-async function publishedRelease(galleryId: number): Promise<ReleaseView> {
-  const requested = await technician<ReleaseView>('POST', `/galleries/${galleryId}/releases`, {});
-  const deadline = Date.now() + 90_000;
-  let release = requested;
-  while (release.state !== 'ready') {
-    if (release.state === 'failed' || Date.now() > deadline) throw new Error(`Release ${release.id} of the demo gallery is ${release.state}, not ready`);
-    await new Promise((resolve) => setTimeout(resolve, 250));
-    release = await technician<ReleaseView>('GET', `/releases/${requested.id}`);
-  }
-  await technician('POST', `/releases/${release.id}/publish`);
-  return release;
-}
-
 beforeAll(async () => {
   admin = await apiAs('admin@demo.test');
   technician = await apiAs('technician@demo.test');
@@ -92,7 +79,7 @@ beforeAll(async () => {
   const exhibits = new Set((await admin<ListPage<ExhibitView>>('GET', '/exhibits?pageSize=100')).items.filter((exhibit) => exhibit.galleryId === gallery.id).map((exhibit) => exhibit.id));
   const stories = (await admin<ListPage<StoryView>>('GET', '/stories?pageSize=100')).items.filter((story) => story.approvedRevision && story.exhibitId !== null && exhibits.has(story.exhibitId));
   for (const story of stories) await translateIntoArabic(asTranslator, story.id);
-  const release = await publishedRelease(gallery.id);
+  const release = await publishedRelease(technician, gallery.id);
   station = await admin<StationView>('POST', '/stations', { galleryId: gallery.id, name: `Layout wall ${tag}`, screenWidthPx: 1920, screenHeightPx: 1080, orientation: 'landscape', mountingHeightMm: 1200 });
 
   browser = await launchBrowser();

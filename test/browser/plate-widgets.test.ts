@@ -1,8 +1,9 @@
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Locator, Page } from 'playwright-core';
-import type { GalleryView, Page as ListPage, ReleaseView, StationView } from '@mantlepiece/shared';
+import type { GalleryView, Page as ListPage, StationView } from '@mantlepiece/shared';
 import { apiAs, baseUrl, launchBrowser, signIn } from '../support/browser';
+import { publishedRelease } from '../support/releases';
 import { touchDrag } from '../support/touch';
 
 // The seeded demo (server/src/seed): its Sinking Slabs story shows sea floor 100 Myr old (plate
@@ -31,17 +32,6 @@ const valueOf = async (slider: Locator) => Number(await slider.getAttribute('ari
 /** Set SCREENSHOT_DIR to keep a picture of each widget as the test leaves it. */
 async function picture(page: Page, name: string) {
   if (process.env.SCREENSHOT_DIR) await page.screenshot({ path: join(process.env.SCREENSHOT_DIR, `${name}.png`) });
-}
-
-/** Waits for a release build to finish (expect.poll is for tests, not their set-up). */
-async function releaseReady(releaseId: number, timeoutMs = 60_000): Promise<void> {
-  const until = Date.now() + timeoutMs;
-  for (;;) {
-    const { state } = await technician<ReleaseView>('GET', `/releases/${releaseId}`);
-    if (state === 'ready') return;
-    if (state === 'failed' || Date.now() > until) throw new Error(`Release ${releaseId} is ${state}, not ready`);
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
 }
 
 beforeAll(async () => {
@@ -103,9 +93,7 @@ describe('the sea-floor depth and plate-forces widgets on a kiosk', () => {
 
   beforeAll(async () => {
     const gallery = (await admin<ListPage<GalleryView>>('GET', '/galleries?pageSize=100')).items.find((candidate) => candidate.name === GALLERY)!;
-    const requested = await technician<ReleaseView>('POST', `/galleries/${gallery.id}/releases`, {});
-    await releaseReady(requested.id);
-    await technician('POST', `/releases/${requested.id}/publish`);
+    await publishedRelease(technician, gallery.id);
     station = await admin<StationView>('POST', '/stations', { galleryId: gallery.id, name: `Slab table ${tag}`, screenWidthPx: 1920, screenHeightPx: 1080, orientation: 'landscape', mountingHeightMm: 1100 });
     const context = await browser.newContext({ baseURL: baseUrl, locale: 'en-GB', viewport: { width: 1920, height: 1080 }, hasTouch: true });
     screen = await context.newPage();

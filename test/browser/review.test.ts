@@ -4,6 +4,7 @@ import mailparser, { type ParsedMail } from 'mailparser';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { baseUrl, demoPassword, launchBrowser, newContext, signIn } from '../support/browser.js';
+import { publishedRelease } from '../support/releases.js';
 
 // A fresh title per run, so the test never meets a story an earlier run left behind.
 const title = `How fast plates move ${Date.now().toString(36)}`;
@@ -185,7 +186,6 @@ describe('an approved, translated, released story is fixed in the browser', () =
 
   let galleryId: number;
   type Unit = { unitId: string; source: string; status: string; version: number };
-  type Release = { id: number; state: string };
 
   /** The translator puts every French unit that is not translated from its current source into French. */
   async function translateIntoFrench(): Promise<Unit[]> {
@@ -200,16 +200,9 @@ describe('an approved, translated, released story is fixed in the browser', () =
   /** The technician builds a release of the story's gallery, waits for it to be Ready and publishes it; answers its manifest's story. */
   async function releaseAndPublish() {
     const asTechnician = await apiAs('technician@demo.test');
-    const asked = await asTechnician<Release>('POST', `/galleries/${galleryId}/releases`, {});
-    // The build is a job beside the API: wait for it to leave Building (expect.poll is for tests, and this also runs before them).
-    let release = asked;
-    for (const deadline = Date.now() + 60_000; release.state === 'building' && Date.now() < deadline;) {
-      await new Promise((resolve) => setTimeout(resolve, 500));
-      release = await asTechnician<Release>('GET', `/releases/${asked.id}`);
-    }
+    const release = await publishedRelease(asTechnician, galleryId, 60_000);
     expect(release, 'the release build').toMatchObject({ state: 'ready' });
-    await asTechnician('POST', `/releases/${asked.id}/publish`);
-    const { manifest } = await asTechnician<{ manifest: string }>('GET', `/releases/${asked.id}/manifest`);
+    const { manifest } = await asTechnician<{ manifest: string }>('GET', `/releases/${release.id}/manifest`);
     return JSON.parse(manifest).stories.find((story: { id: number }) => story.id === typoStoryId) as { revisionId: number; panels: { docs: Record<string, unknown> }[] };
   }
 
