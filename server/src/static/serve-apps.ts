@@ -1,12 +1,14 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import type { NextFunction, Request, Response } from 'express';
+import express, { type NextFunction, type Request, type Response } from 'express';
 
 /** Vite names built assets after their content, so a name never changes meaning. */
 const HASHED_ASSET = /[.-][A-Za-z0-9_-]{8,}\.(js|css|woff2?|png|jpe?g|svg|webp|avif|wasm|map)$/;
 const IMMUTABLE = 'public, max-age=31536000, immutable';
 const REVALIDATE = 'no-cache';
+
+const isApi = (req: Request) => req.originalUrl === '/api' || req.originalUrl.startsWith('/api/') || req.originalUrl.startsWith('/api?');
 
 interface SinglePageApp {
   /** URL prefix, ending in a slash. */
@@ -30,15 +32,17 @@ export function serveApps(app: NestExpressApplication, apps: SinglePageApp[]): v
       app.use(bare, (req: Request, res: Response, next: NextFunction) =>
         req.originalUrl === bare ? res.redirect(301, spa.prefix) : next());
     }
-    app.useStaticAssets(spa.dir, {
-      prefix: spa.prefix,
+    const files = express.static(spa.dir, {
       index: false,
       setHeaders: (res, file) => res.setHeader('Cache-Control', HASHED_ASSET.test(file) ? IMMUTABLE : REVALIDATE),
     });
+    // The studio sits at /, so without this every API request (a kiosk's poll too) would cost a
+    // look in its build folder first.
+    app.use(spa.prefix, (req: Request, res: Response, next: NextFunction) => (isApi(req) ? next() : files(req, res, next)));
   }
 
   app.use((req: Request, res: Response, next: NextFunction) => {
-    if (req.path === '/api' || req.path.startsWith('/api/')) return next();
+    if (isApi(req)) return next();
     const isPage = (req.method === 'GET' || req.method === 'HEAD') && !path.posix.basename(req.path).includes('.');
     const spa = isPage ? present.find((candidate) => req.path.startsWith(candidate.prefix)) : undefined;
     if (!spa) return next();
