@@ -1,3 +1,4 @@
+import { PANEL_LAYOUTS, type PanelLayout } from '../panel/panel-presentation.js';
 import type { Page } from '../auth/views.js';
 import type { Can, MediaCan, StationCan, StoryCan } from '../auth/can.js';
 import type { PanelDocJSON } from '../panel/panel-json.js';
@@ -113,8 +114,9 @@ export type MediaPage = Page<MediaView> & { can: Can<'mediaLibrary'> };
 export const MEDIA_MISSING_FILTERS = ['alt', 'credit'] as const;
 export type MediaMissingFilter = (typeof MEDIA_MISSING_FILTERS)[number];
 
-export const ORIENTATIONS = ['landscape', 'portrait'] as const;
-export type Orientation = (typeof ORIENTATIONS)[number];
+/** A station's screen orientation: one of the two layouts a panel is written for. */
+export type Orientation = PanelLayout;
+export const ORIENTATIONS = Object.keys(PANEL_LAYOUTS) as Orientation[];
 
 export interface VenueView {
   id: number;

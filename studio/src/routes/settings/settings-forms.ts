@@ -1,4 +1,4 @@
-import { ORIENTATIONS, type ExhibitView, type GalleryView, type StationView, type VenueView } from '@mantlepiece/shared';
+import { ORIENTATIONS, type ExhibitView, type GalleryView, type Orientation, type StationView, type VenueView } from '@mantlepiece/shared';
 import type { TFunction } from 'i18next';
 import type { SettingsCollection, SettingsFields, SettingsView } from '../../api/settings';
 import { parseLocales, requiredProblem } from '../../components/forms/validation';
@@ -88,7 +88,7 @@ const stationForm: SettingsForm<'stations'> = {
     name: requiredProblem(t, values.name ?? ''),
     screenWidthPx: positiveInteger(t, values.screenWidthPx ?? ''),
     screenHeightPx: positiveInteger(t, values.screenHeightPx ?? ''),
-    orientation: ORIENTATIONS.includes(values.orientation as (typeof ORIENTATIONS)[number]) ? undefined : t('validation.required'),
+    orientation: ORIENTATIONS.includes(values.orientation as Orientation) ? undefined : t('validation.required'),
     mountingHeightMm: positiveInteger(t, values.mountingHeightMm ?? ''),
   }),
   toFields: (values) => ({
@@ -96,7 +96,7 @@ const stationForm: SettingsForm<'stations'> = {
     name: values.name!.trim(),
     screenWidthPx: Number(values.screenWidthPx),
     screenHeightPx: Number(values.screenHeightPx),
-    orientation: values.orientation as (typeof ORIENTATIONS)[number],
+    orientation: values.orientation as Orientation,
     mountingHeightMm: Number(values.mountingHeightMm),
   }),
 };
