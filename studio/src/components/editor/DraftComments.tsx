@@ -13,7 +13,7 @@ const useStyles = makeStyles({
  * (comment-highlights), and replies and resolving as on the revision page. A thread whose words
  * the curator has since rewritten says so.
  */
-export function DraftComments({ revision, panelId, doc, locale, canComment }: { revision: RevisionView; panelId: number; doc: PanelDocJSON; locale: string; canComment: boolean }) {
+export function DraftComments({ revision, panelId, doc, locale }: { revision: RevisionView; panelId: number; doc: PanelDocJSON; locale: string }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const onDraft = commentsOnDraft(revision.comments, panelId, doc, locale);
@@ -30,7 +30,7 @@ export function DraftComments({ revision, panelId, doc, locale, canComment }: { 
       {onDraft.length === 0 ? (
         <Text className={styles.muted}>{t('draftComments.none')}</Text>
       ) : (
-        <CommentThreads revisionId={revision.id} comments={shown} panelId={panelId} canComment={canComment} allowNew={false} />
+        <CommentThreads revisionId={revision.id} comments={shown} panelId={panelId} canComment={revision.can.comment} allowNew={false} />
       )}
     </div>
   );

@@ -6,7 +6,6 @@ import { livePhrasesIn, LIVE_PHRASE_NODE, mediaIdsIn, openThreadCount, widgetsIn
 import { useTranslation } from 'react-i18next';
 import { useDraftComments } from '../../api/draft-comments';
 import { useMediaAssets } from '../../api/media';
-import { useCurrentUser } from '../../api/session';
 import { useRememberSavedPanel, useUpdatePanelBudget } from '../../api/stories';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { ConflictDialog } from '../../components/editor/ConflictDialog';
@@ -68,11 +67,8 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
   const shownDoc = useDeferredValue(doc);
   const [dialog, setDialog] = useState<'image' | 'link' | 'conflict' | null>(null);
   const [sideTab, setSideTab] = useState<SideTab>('widget');
-  const me = useCurrentUser();
   const draftComments = useDraftComments(story.id);
   const openHere = draftComments.revision ? openThreadCount(draftComments.revision.comments.filter((comment) => comment.panelId === panel.id)) : 0;
-  // The revision page's rule for who answers comments, until comment views carry the server's `can`.
-  const canComment = me.roles.includes('curator') || me.roles.includes('educator');
   const [chosenWidget, setChosenWidget] = useState<string | null>(null);
   const budget = useUpdatePanelBudget(story.id);
   const change = useRef(autosave.change);
@@ -187,7 +183,7 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
             <PanelPreview doc={shownDoc} locale={locale} resolveMedia={resolveMedia} width={SIDE_WIDTH - 34} />
           ) : sideTab === 'comments' ? (
             shownRevision ? (
-              <DraftComments revision={shownRevision} panelId={panel.id} doc={shownDoc} locale={locale} canComment={canComment} />
+              <DraftComments revision={shownRevision} panelId={panel.id} doc={shownDoc} locale={locale} />
             ) : (
               <Text className={styles.muted}>{draftComments.isError ? t('draftComments.loadError') : t('draftComments.noRevision')}</Text>
             )
