@@ -2,10 +2,10 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import express, { type NextFunction, type Request, type Response } from 'express';
+import { IMMUTABLE } from '../media/stored-file-response.js';
 
 /** Vite names built assets after their content, so a name never changes meaning. */
 const HASHED_ASSET = /[.-][A-Za-z0-9_-]{8,}\.(js|css|woff2?|png|jpe?g|svg|webp|avif|wasm|map)$/;
-const IMMUTABLE = 'public, max-age=31536000, immutable';
 const REVALIDATE = 'no-cache';
 
 const isApi = (req: Request) => req.originalUrl === '/api' || req.originalUrl.startsWith('/api/') || req.originalUrl.startsWith('/api?');
