@@ -1,7 +1,8 @@
 import { mergeAttributes, Node } from '@tiptap/core';
 import { LIVE_PHRASE_NODE } from '../panel-json.js';
 import { uniqueWidgetIds } from '../widget/unique-widget-ids.js';
-import { assertPanelId, isPanelId, newPanelId } from '../widget/widget-id.js';
+import { jsonFromHTML, panelIdAttribute } from '../node-attributes.js';
+import { isPanelId, newPanelId } from '../widget/widget-id.js';
 import { assertLivePhraseWordings, isLivePhraseWordings, type LivePhraseWordings } from './live-phrase-wordings.js';
 
 export interface InsertLivePhraseOptions {
@@ -27,14 +28,7 @@ declare module '@tiptap/core' {
 /** Like a widget id, with its own prefix so a translator's unit id says what it is. */
 export const newPhraseId = (): string => newPanelId('ph');
 
-function wordingsFromHTML(element: HTMLElement): LivePhraseWordings | null {
-  try {
-    const parsed: unknown = JSON.parse(element.getAttribute('data-wordings') ?? '');
-    return isLivePhraseWordings(parsed) ? parsed : null;
-  } catch {
-    return null;
-  }
-}
+const wordingsFromHTML = (element: HTMLElement) => jsonFromHTML(element, 'data-wordings', isLivePhraseWordings);
 
 /**
  * Words in running text that follow a widget's state: one wording while the block holds, another
@@ -56,18 +50,8 @@ export const LivePhrase = Node.create<LivePhraseOptions>({
 
   addAttributes() {
     return {
-      phraseId: {
-        default: null,
-        validate: assertPanelId,
-        parseHTML: (element: HTMLElement) => element.getAttribute('data-phrase-id'),
-        renderHTML: (attributes: Record<string, unknown>) => ({ 'data-phrase-id': attributes.phraseId }),
-      },
-      widgetId: {
-        default: null,
-        validate: assertPanelId,
-        parseHTML: (element: HTMLElement) => element.getAttribute('data-widget-id'),
-        renderHTML: (attributes: Record<string, unknown>) => ({ 'data-widget-id': attributes.widgetId }),
-      },
+      phraseId: panelIdAttribute('phraseId', 'data-phrase-id'),
+      widgetId: panelIdAttribute('widgetId', 'data-widget-id'),
       wordings: {
         default: null,
         validate: assertLivePhraseWordings,

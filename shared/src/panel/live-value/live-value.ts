@@ -1,6 +1,7 @@
 import { mergeAttributes, Node } from '@tiptap/core';
 import { LIVE_VALUE_NODE } from '../panel-json.js';
-import { assertPanelId, isPanelId } from '../widget/widget-id.js';
+import { jsonFromHTML, panelIdAttribute } from '../node-attributes.js';
+import { isPanelId } from '../widget/widget-id.js';
 import { assertLiveValueFormat, DEFAULT_LIVE_VALUE_FORMAT, isLiveValueFormat, type LiveValueFormat } from './live-value-format.js';
 
 export interface InsertLiveValueOptions {
@@ -28,14 +29,7 @@ function assertOutput(value: unknown): void {
   if (typeof value !== 'string' || !OUTPUT_PATTERN.test(value)) throw new RangeError("A live value's output is the name of a computed result, such as \"criticalAngleDeg\".");
 }
 
-function formatFromHTML(element: HTMLElement): LiveValueFormat {
-  try {
-    const parsed: unknown = JSON.parse(element.getAttribute('data-format') ?? '');
-    return isLiveValueFormat(parsed) ? parsed : DEFAULT_LIVE_VALUE_FORMAT;
-  } catch {
-    return DEFAULT_LIVE_VALUE_FORMAT;
-  }
-}
+const formatFromHTML = (element: HTMLElement): LiveValueFormat => jsonFromHTML(element, 'data-format', isLiveValueFormat) ?? DEFAULT_LIVE_VALUE_FORMAT;
 
 /**
  * A number in running text that is a widget's computed output, so a caption can never disagree
@@ -54,12 +48,7 @@ export const LiveValue = Node.create<LiveValueOptions>({
 
   addAttributes() {
     return {
-      widgetId: {
-        default: null,
-        validate: assertPanelId,
-        parseHTML: (element: HTMLElement) => element.getAttribute('data-widget-id'),
-        renderHTML: (attributes: Record<string, unknown>) => ({ 'data-widget-id': attributes.widgetId }),
-      },
+      widgetId: panelIdAttribute('widgetId', 'data-widget-id'),
       output: {
         default: null,
         validate: assertOutput,

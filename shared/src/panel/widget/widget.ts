@@ -1,7 +1,8 @@
 import { mergeAttributes, Node } from '@tiptap/core';
+import { jsonFromHTML, panelIdAttribute } from '../node-attributes.js';
 import { isPlainObject, WIDGET_NODE } from '../panel-json.js';
 import { uniqueWidgetIds } from './unique-widget-ids.js';
-import { assertPanelId, newWidgetId } from './widget-id.js';
+import { newWidgetId } from './widget-id.js';
 
 export interface InsertWidgetOptions {
   widgetType: string;
@@ -35,14 +36,7 @@ function assertParams(value: unknown): void {
   if (!isPlainObject(value)) throw new RangeError("A widget's params must be an object of named settings.");
 }
 
-function paramsFromHTML(element: HTMLElement): Record<string, unknown> | null {
-  try {
-    const parsed: unknown = JSON.parse(element.getAttribute('data-params') ?? '');
-    return isPlainObject(parsed) ? parsed : null;
-  } catch {
-    return null;
-  }
-}
+const paramsFromHTML = (element: HTMLElement) => jsonFromHTML(element, 'data-params', isPlainObject);
 
 /**
  * An interactive simulation as one block. Its params are checked against the widget registry by
@@ -68,12 +62,7 @@ export const Widget = Node.create<WidgetOptions>({
         parseHTML: (element: HTMLElement) => element.getAttribute('data-widget-type'),
         renderHTML: (attributes: Record<string, unknown>) => ({ 'data-widget-type': attributes.widgetType }),
       },
-      widgetId: {
-        default: null,
-        validate: assertPanelId,
-        parseHTML: (element: HTMLElement) => element.getAttribute('data-widget-id'),
-        renderHTML: (attributes: Record<string, unknown>) => ({ 'data-widget-id': attributes.widgetId }),
-      },
+      widgetId: panelIdAttribute('widgetId', 'data-widget-id'),
       params: {
         default: {},
         validate: assertParams,
