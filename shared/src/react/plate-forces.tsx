@@ -1,7 +1,8 @@
-import { useEffect, useId, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { useEffect, useId, useState } from 'react';
 import { formatQuantity, interpolate, widgetStrings } from '../i18n/index.js';
 import { formatMillionYears } from '../widgets/convection-cell/index.js';
 import { computePlateForces, formatForcePerMetre, plateForces, SLAB_LENGTH_MAX_KM, UPPER_MANTLE_BASE_KM, type PlateForcesParams } from '../widgets/plate-forces/index.js';
+import { drawingSliderHandlers } from './drawing-slider.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { stepWithin, ValueStepper } from './value-stepper.js';
 import { visuallyHidden } from './visually-hidden.js';
@@ -96,34 +97,18 @@ export function PlateForces({ params, locale, onParamsChange, showCaution = fals
   const drawnLength = shown.slabLengthKm * UNITS_PER_KM;
   const tip = { x: slabTop.x + dip.x * drawnLength, y: slabTop.y + dip.y * drawnLength };
 
-  const lengthFromPointer = (event: PointerEvent<SVGSVGElement>) => {
-    const box = event.currentTarget.getBoundingClientRect();
-    if (box.width === 0 || box.height === 0) return;
-    const x = ((event.clientX - box.left) / box.width) * VIEW.width;
-    const y = ((event.clientY - box.top) / box.height) * VIEW.height;
+  const slider = drawingSliderHandlers({
+    view: VIEW,
     // The finger's distance down the slab, along its dip.
-    changeLength(((x - slabTop.x) * dip.x + (y - slabTop.y) * dip.y) / UNITS_PER_KM);
-  };
-  const onPointerDown = (event: PointerEvent<SVGSVGElement>) => {
-    event.currentTarget.setPointerCapture?.(event.pointerId);
-    event.currentTarget.focus();
-    lengthFromPointer(event);
-  };
-  const onPointerMove = (event: PointerEvent<SVGSVGElement>) => {
-    if (event.currentTarget.hasPointerCapture?.(event.pointerId)) lengthFromPointer(event);
-  };
-  const onKeyDown = (event: KeyboardEvent<SVGSVGElement>) => {
-    const length = shown.slabLengthKm;
-    const fine = event.shiftKey ? 10 : 50;
-    const moves: Record<string, number | undefined> = {
-      ArrowRight: length + fine, ArrowUp: length + fine, ArrowLeft: length - fine, ArrowDown: length - fine,
-      PageUp: length + 500, PageDown: length - 500, Home: 0, End: SLAB_LENGTH_MAX_KM,
-    };
-    const next = moves[event.key];
-    if (next === undefined) return;
-    event.preventDefault();
-    changeLength(next);
-  };
+    valueAt: ({ x, y }) => ((x - slabTop.x) * dip.x + (y - slabTop.y) * dip.y) / UNITS_PER_KM,
+    value: shown.slabLengthKm,
+    step: 50,
+    fineStep: 10,
+    pageStep: 500,
+    min: 0,
+    max: SLAB_LENGTH_MAX_KM,
+    onChange: changeLength,
+  });
 
   const result = computePlateForces(shown);
   const largest = Math.max(result.ridgePushNPerM, result.slabPullNPerM);
@@ -148,9 +133,7 @@ export function PlateForces({ params, locale, onParamsChange, showCaution = fals
         aria-valuenow={shown.slabLengthKm}
         aria-valuetext={lengthText}
         aria-describedby={`${statusId} ${descriptionId}`}
-        onPointerDown={onPointerDown}
-        onPointerMove={onPointerMove}
-        onKeyDown={onKeyDown}
+        {...slider}
         style={{ direction: 'ltr', width: '100%', aspectRatio: `${VIEW.width} / ${VIEW.height}`, touchAction: 'none', cursor: 'grab', display: 'block', background: COLOURS.mantle, borderRadius: 8 }}
       >
         <title>{strings.title}</title>

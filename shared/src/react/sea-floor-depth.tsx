@@ -1,4 +1,4 @@
-import { useEffect, useId, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { useEffect, useId, useState } from 'react';
 import { formatQuantity, widgetStrings } from '../i18n/index.js';
 import { formatMillionYears } from '../widgets/convection-cell/index.js';
 import {
@@ -12,6 +12,7 @@ import {
   type SeaFloorDepthParams,
   type SeaFloorModel,
 } from '../widgets/sea-floor-depth/index.js';
+import { drawingSliderHandlers } from './drawing-slider.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { stepWithin, ValueStepper } from './value-stepper.js';
 import { visuallyHidden } from './visually-hidden.js';
@@ -83,31 +84,17 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
     if (next !== shown.ageMyr) change({ ageMyr: next });
   };
 
-  const ageFromPointer = (event: PointerEvent<SVGSVGElement>) => {
-    const box = event.currentTarget.getBoundingClientRect();
-    if (box.width === 0) return;
-    changeAge(ageAt(((event.clientX - box.left) / box.width) * VIEW.width));
-  };
-  const onPointerDown = (event: PointerEvent<SVGSVGElement>) => {
-    event.currentTarget.setPointerCapture?.(event.pointerId);
-    event.currentTarget.focus();
-    ageFromPointer(event);
-  };
-  const onPointerMove = (event: PointerEvent<SVGSVGElement>) => {
-    if (event.currentTarget.hasPointerCapture?.(event.pointerId)) ageFromPointer(event);
-  };
-  const onKeyDown = (event: KeyboardEvent<SVGSVGElement>) => {
-    const fine = event.shiftKey ? 0.5 : 1;
-    const age = shown.ageMyr;
-    const moves: Record<string, number | undefined> = {
-      ArrowRight: age + fine, ArrowUp: age + fine, ArrowLeft: age - fine, ArrowDown: age - fine,
-      PageUp: age + 10, PageDown: age - 10, Home: MIN_AGE_MYR, End: SEA_FLOOR_AGE_MAX_MYR,
-    };
-    const next = moves[event.key];
-    if (next === undefined) return;
-    event.preventDefault();
-    changeAge(next);
-  };
+  const slider = drawingSliderHandlers({
+    view: VIEW,
+    valueAt: ({ x }) => ageAt(x),
+    value: shown.ageMyr,
+    step: 1,
+    fineStep: 0.5,
+    pageStep: 10,
+    min: MIN_AGE_MYR,
+    max: SEA_FLOOR_AGE_MAX_MYR,
+    onChange: changeAge,
+  });
 
   const result = computeSeaFloorDepth(shown);
   const curves = profiles(shown);
@@ -129,9 +116,7 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
         aria-valuenow={shown.ageMyr}
         aria-valuetext={`${age}, ${formatDepthKm(result.depthM, locale)}`}
         aria-describedby={`${statusId} ${descriptionId}`}
-        onPointerDown={onPointerDown}
-        onPointerMove={onPointerMove}
-        onKeyDown={onKeyDown}
+        {...slider}
         style={{ direction: 'ltr', width: '100%', aspectRatio: `${VIEW.width} / ${VIEW.height}`, touchAction: 'none', cursor: 'ew-resize', display: 'block', background: '#f6efe2', borderRadius: 8 }}
       >
         <title>{strings.title}</title>

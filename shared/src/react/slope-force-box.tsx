@@ -1,8 +1,9 @@
-import { useCallback, useEffect, useId, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { useCallback, useEffect, useId, useRef, useState } from 'react';
 import { interpolate, widgetStrings } from '../i18n/index.js';
 import { formatLiveValue } from '../panel/live-value/live-value-format.js';
 import { directionOf } from '../panel/panel-presentation.js';
 import { computeSlopeForce, formatAngle, formatForce, slopeForce, slopeForceOutputs, type SlopeForceParams, type SlopeForceResult } from '../widgets/slope-force/index.js';
+import { drawingSliderHandlers } from './drawing-slider.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { BOARD, FOOT, LABEL_FONT, layoutSlope, PIVOT, SLOPE_PALETTE, SLOPE_VIEW, START, type ForceName, type LabelLayout, type Point } from './slope-force-layout.js';
 import { useReducedMotion } from './use-reduced-motion.js';
@@ -129,40 +130,17 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
     moveTo(START);
   };
 
-  const angleFromPointer = (event: PointerEvent<SVGSVGElement>) => {
-    const box = event.currentTarget.getBoundingClientRect();
-    if (box.width === 0 || box.height === 0) return;
-    const x = ((event.clientX - box.left) / box.width) * SLOPE_VIEW.width;
-    const y = ((event.clientY - box.top) / box.height) * SLOPE_VIEW.height;
-    changeAngle(Math.atan2(PIVOT.y - y, Math.max(x - PIVOT.x, 0)) / DEG);
-  };
-
-  const onPointerDown = (event: PointerEvent<SVGSVGElement>) => {
-    event.currentTarget.setPointerCapture?.(event.pointerId);
-    event.currentTarget.focus();
-    angleFromPointer(event);
-  };
-  const onPointerMove = (event: PointerEvent<SVGSVGElement>) => {
-    if (event.currentTarget.hasPointerCapture?.(event.pointerId)) angleFromPointer(event);
-  };
-
-  const onKeyDown = (event: KeyboardEvent<SVGSVGElement>) => {
-    const fine = event.shiftKey ? 0.1 : 1;
-    const moves: Record<string, number | undefined> = {
-      ArrowUp: angle + fine,
-      ArrowRight: angle + fine,
-      ArrowDown: angle - fine,
-      ArrowLeft: angle - fine,
-      PageUp: angle + 10,
-      PageDown: angle - 10,
-      Home: 0,
-      End: 90,
-    };
-    const next = moves[event.key];
-    if (next === undefined) return;
-    event.preventDefault();
-    changeAngle(next);
-  };
+  const slider = drawingSliderHandlers({
+    view: SLOPE_VIEW,
+    valueAt: ({ x, y }) => Math.atan2(PIVOT.y - y, Math.max(x - PIVOT.x, 0)) / DEG,
+    value: angle,
+    step: 1,
+    fineStep: 0.1,
+    pageStep: 10,
+    min: 0,
+    max: 90,
+    onChange: changeAngle,
+  });
 
   // One formatter for the drawing and the live values beside it: a value a caption shows rounds as the caption does.
   const shown = (output: keyof SlopeForceResult, value: number, own: (value: number, locale: string) => string) => {
@@ -199,9 +177,7 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
         aria-valuenow={angle}
         aria-valuetext={`${angleText}, ${stateText}`}
         aria-describedby={`${statusId} ${descriptionId}`}
-        onPointerDown={onPointerDown}
-        onPointerMove={onPointerMove}
-        onKeyDown={onKeyDown}
+        {...slider}
         style={{ width: '100%', aspectRatio: `${SLOPE_VIEW.width} / ${SLOPE_VIEW.height}`, touchAction: 'none', cursor: 'grab', display: 'block', background: SLOPE_PALETTE.background, borderRadius: 8 }}
       >
         <title>{strings.title}</title>
