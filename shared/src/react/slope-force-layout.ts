@@ -15,9 +15,9 @@ export const BLOCK = 44;
 export const START = BOARD * 0.5;
 /** The block's downhill face rests on the board's first pixels: it stops at the foot, not beyond. */
 export const FOOT = BLOCK / 2 + 2;
-export const HANDLE_RADIUS = 20;
+const HANDLE_RADIUS = 20;
 /** Longest drawn force arrow, for the weight; the components are drawn to the same scale. */
-export const WEIGHT_ARROW = 70;
+const WEIGHT_ARROW = 70;
 /** Components drawn this far beside the weight, so a flat (N = W) or vertical (S = W) slope keeps them apart. */
 const COMPONENT_OFFSET = 12;
 const ARC_RADIUS = 48;
@@ -92,7 +92,7 @@ export interface SlopeLayout {
  * A generous estimate of a label's width: Lexend's widest common glyphs run about 0.62 em, digits
  * and Arabic letters less. Generous, so a label that fits here fits on screen.
  */
-export const textWidth = (text: string, fontSize: number): number => [...text].length * fontSize * 0.62;
+const textWidth = (text: string, fontSize: number): number => [...text].length * fontSize * 0.62;
 
 interface Segment {
   from: Point;

@@ -6,7 +6,7 @@ import type { CSSProperties } from 'react';
  * contrast, and targets of 96 px at the station's full size. The kiosk draws a panel scaled down to
  * its stage (never below about 0.7 of full size), so that stays above 64 CSS px on the glass.
  */
-export const WIDGET_CONTROL_SIZE = 96;
+const WIDGET_CONTROL_SIZE = 96;
 
 export const widgetButtonStyle: CSSProperties = {
   minHeight: WIDGET_CONTROL_SIZE,

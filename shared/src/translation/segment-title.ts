@@ -2,7 +2,7 @@ import { plainUnit } from './segment-panel.js';
 import { withSourceHash, type TranslationUnit } from './translation-unit.js';
 
 /** A story title's unit id: the title belongs to the story, as a panel's texts belong to the panel. */
-export const storyTitleUnitId = (storyId: string | number) => `s${storyId}.title`;
+const storyTitleUnitId = (storyId: string | number) => `s${storyId}.title`;
 
 /**
  * A story's title as a unit. The kiosk's story menu and attract loop show it, so a visitor who

@@ -22,7 +22,7 @@ export function readLivePhrase(phrase: { widgetId: string; wordings: LivePhraseW
 export const livePhraseText = (reading: LivePhraseReading): string => (reading.ok ? reading.text : '—');
 
 /** The states the phrase's widget declares, or null when the widget is not on the panel or declares none. */
-export function declaredStates(doc: unknown, widgetId: string): readonly string[] | null {
+function declaredStates(doc: unknown, widgetId: string): readonly string[] | null {
   const widget = widgetsIn(doc).find((candidate) => candidate.widgetId === widgetId);
   if (!widget || !isWidgetType(widget.widgetType)) return null;
   return widgetModule(widget.widgetType).states?.values ?? null;

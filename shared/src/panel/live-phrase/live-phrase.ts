@@ -26,7 +26,7 @@ declare module '@tiptap/core' {
 }
 
 /** Like a widget id, with its own prefix so a translator's unit id says what it is. */
-export const newPhraseId = (): string => newPanelId('ph');
+const newPhraseId = (): string => newPanelId('ph');
 
 const wordingsFromHTML = (element: HTMLElement) => jsonFromHTML(element, 'data-wordings', isLivePhraseWordings);
 

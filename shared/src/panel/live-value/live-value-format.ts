@@ -4,7 +4,7 @@ import { formatQuantity } from '../../i18n/index.js';
  * Unit symbols a live value may show after its number. A closed list so a document carries a
  * choice, not free text, and so translators never see units as words to translate.
  */
-export const LIVE_VALUE_UNITS = ['', '°', '%', 'N', 'kN', 'MN', 'N/m', 'kg', 't', 'm', 'km', 'm/s', 'm/s²', 'cm/yr', 'K', '°C', 'Pa', 'MPa', 'Pa·s', 'Myr', 'mW/m²'] as const;
+const LIVE_VALUE_UNITS = ['', '°', '%', 'N', 'kN', 'MN', 'N/m', 'kg', 't', 'm', 'km', 'm/s', 'm/s²', 'cm/yr', 'K', '°C', 'Pa', 'MPa', 'Pa·s', 'Myr', 'mW/m²'] as const;
 export type LiveValueUnit = (typeof LIVE_VALUE_UNITS)[number];
 
 export interface LiveValueFormat {

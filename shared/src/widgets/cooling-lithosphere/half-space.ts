@@ -7,7 +7,7 @@ export const SECONDS_PER_MYR = 1e6 * 365.25 * 86_400;
  * 2·erfc⁻¹(0.1) ≈ 2.32: the depth, in units of √(κt), where a cooling half-space has come back to
  * 90 % of the mantle's temperature; Turcotte and Schubert take it as the lithosphere's base.
  */
-export const THICKNESS_FACTOR = 2.32;
+const THICKNESS_FACTOR = 2.32;
 
 type Properties = Pick<LithosphereProperties, 'mantleDensityKgM3' | 'waterDensityKgM3' | 'expansivityPerK' | 'deltaTK' | 'diffusivityM2s'>;
 

@@ -7,7 +7,7 @@ import { STANDARD_GRAVITY } from '../slope-force/params.js';
  * their examples with (from memory of the book, not checked against a copy at hand); the ridge depth
  * is Parsons and Sclater's (1977, Journal of Geophysical Research 82, 803–827) fit.
  */
-export const LITHOSPHERE_DEFAULTS = {
+const LITHOSPHERE_DEFAULTS = {
   mantleDensityKgM3: 3300,
   waterDensityKgM3: 1000,
   expansivityPerK: 3e-5,
@@ -23,7 +23,7 @@ export type LithosphereProperties = { -readonly [K in keyof typeof LITHOSPHERE_D
 const TEXTBOOK = 'Turcotte and Schubert, Geodynamics; value from memory';
 
 /** Where each default comes from, in a few words for a form's range message. */
-export const LITHOSPHERE_SOURCES: Readonly<Record<keyof LithosphereProperties, string>> = {
+const LITHOSPHERE_SOURCES: Readonly<Record<keyof LithosphereProperties, string>> = {
   mantleDensityKgM3: TEXTBOOK,
   waterDensityKgM3: TEXTBOOK,
   expansivityPerK: TEXTBOOK,

@@ -18,7 +18,7 @@ export * from './states.js';
 /** Below the 660 km discontinuity the mantle stiffens and minerals change phase (common practice, no source). */
 export const UPPER_MANTLE_BASE_KM = 660;
 /** Plates younger than this are warm and light, and rarely sink on their own (common practice, no source). */
-export const YOUNGEST_SINKING_PLATE_MYR = 10;
+const YOUNGEST_SINKING_PLATE_MYR = 10;
 
 /** "3.9 × 10¹² N/m": forces per metre of boundary are far past any everyday number. */
 export const formatForcePerMetre = (newtonsPerMetre: number, locale: string): string => formatLiveValue(newtonsPerMetre, { digits: 2, unit: 'N/m' }, locale);

@@ -2,7 +2,7 @@ import type { WidgetStates } from '../types.js';
 import type { PlateForcesResult } from './compute.js';
 import type { PlateForcesParams } from './params.js';
 
-export const PLATE_FORCE_STATES = ['slab-pull-dominates', 'ridge-push-dominates'] as const;
+const PLATE_FORCE_STATES = ['slab-pull-dominates', 'ridge-push-dominates'] as const;
 export type PlateForceState = (typeof PLATE_FORCE_STATES)[number];
 
 /**

@@ -15,9 +15,9 @@ export * from './params.js';
 export * from './units.js';
 
 /** Parsons and Sclater (1977) found depth growing as √age only up to about 70 Myr. */
-export const HALF_SPACE_HOLDS_UP_TO_MYR = 70;
+const HALF_SPACE_HOLDS_UP_TO_MYR = 70;
 /** Hardly any sea floor is older (common practice, no source). */
-export const OLDEST_SEA_FLOOR_MYR = 180;
+const OLDEST_SEA_FLOOR_MYR = 180;
 
 function describeSeaFloorDepth(params: SeaFloorDepthParams, locale: string): string {
   const result = computeSeaFloorDepth(params);

@@ -2,7 +2,7 @@ import { z } from '../../zod.js';
 import { boundedNumber } from '../validation.js';
 import { conductivityField, lithosphereFields, ridgeDepthField } from '../cooling-lithosphere/properties.js';
 
-export const SEA_FLOOR_MODELS = ['half-space', 'plate'] as const;
+const SEA_FLOOR_MODELS = ['half-space', 'plate'] as const;
 export type SeaFloorModel = (typeof SEA_FLOOR_MODELS)[number];
 
 /** From the ridge crest (0) to older than any sea floor left on Earth, about 180 Myr (common practice, no source). */
