@@ -1,9 +1,8 @@
-import { Inject, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { RELEASE_FORMAT, serializeManifest, type ReleaseFile as ManifestFile, type ReleaseManifest } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import type { ClaimQueue } from '../jobs/claim-queue.js';
-import { MEDIA_STORE, type MediaStore } from '../media/media-store.js';
 import { Revision } from '../revisions/models/revision.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
@@ -32,7 +31,6 @@ export class ReleaseBuilder {
     @InjectModel(Revision) private readonly revisions: typeof Revision,
     @InjectModel(Story) private readonly stories: typeof Story,
     @InjectModel(Gallery) private readonly galleries: typeof Gallery,
-    @Inject(MEDIA_STORE) private readonly mediaStore: MediaStore,
     private readonly content: ReleaseContentService,
     private readonly files: ReleaseFileStore,
     private readonly keys: VenueSigningKeysService,
@@ -55,11 +53,9 @@ export class ReleaseBuilder {
     const manifestFiles: ManifestFile[] = [];
     for (const [index, rendition] of renditions.entries()) {
       await step(`Storing files (${index + 1} of ${renditions.length})`, 0.1 + 0.75 * (index / renditions.length));
-      const data = await this.mediaStore.get(rendition.storeKey);
-      if (!data) throw new Error(`The rendition ${rendition.storeKey} is missing from the media store.`);
-      if (sha256Of(data) !== rendition.sha256) throw new Error(`The rendition ${rendition.storeKey} does not match its SHA-256.`);
-      const stored = await this.files.add(release.id, data, 'image/webp');
-      if (!manifestFiles.some((file) => file.sha256 === stored.sha256)) manifestFiles.push(stored);
+      const file: ManifestFile = { sha256: rendition.sha256, size: rendition.bytes, mime: 'image/webp' };
+      await this.files.copy(release.id, file, rendition.storeKey);
+      if (!manifestFiles.some((listed) => listed.sha256 === file.sha256)) manifestFiles.push(file);
     }
     await this.faults.reach('files-stored');
 

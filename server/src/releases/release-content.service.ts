@@ -24,6 +24,7 @@ export interface ChosenRevision {
 export interface RenditionSource {
   sha256: string;
   storeKey: string;
+  bytes: number;
 }
 
 export const localesOf = (venue: Venue): string[] => [venue.sourceLocale, ...venue.targetLocales];
@@ -163,7 +164,7 @@ export class ReleaseContentService {
     const renditions: RenditionSource[] = [];
     const media = assets.map((asset): ReleaseMedia => {
       const sorted = [...(asset.renditions ?? [])].sort((a, b) => a.width - b.width);
-      renditions.push(...sorted.map((r) => ({ sha256: r.sha256, storeKey: r.storeKey })));
+      renditions.push(...sorted.map((r) => ({ sha256: r.sha256, storeKey: r.storeKey, bytes: r.bytes })));
       return {
         mediaId: String(asset.id),
         alt: Object.fromEntries((asset.altTexts ?? []).filter((alt) => locales.has(alt.locale)).map((alt) => [alt.locale, alt.text])),

@@ -1,4 +1,5 @@
 import { createHash } from 'node:crypto';
+import { Transform } from 'node:stream';
 import { Inject, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op } from 'sequelize';
@@ -29,14 +30,20 @@ export class ReleaseFileStore {
   ) {}
 
   /**
-   * Lists the file on the release before writing it: a clean-up running at the same moment then
-   * sees the row and keeps the bytes.
+   * Lists the file on the release, then streams its bytes from `sourceKey` in the same store unless
+   * an earlier release stored them already. Listing first lets a clean-up running at the same
+   * moment see the row and keep the bytes. Bytes that do not hash to `file.sha256` fail the copy
+   * before it is stored.
    */
-  async add(releaseId: number, data: Buffer, mime: string): Promise<StoredFile> {
-    const file = { sha256: sha256Of(data), size: data.length, mime };
+  async copy(releaseId: number, file: StoredFile, sourceKey: string): Promise<void> {
     await this.files.bulkCreate([{ releaseId, ...file }], { ignoreDuplicates: true });
-    if (!(await this.store.exists(releaseFileKey(file.sha256)))) await this.store.put(releaseFileKey(file.sha256), data);
-    return file;
+    const key = releaseFileKey(file.sha256);
+    if (await this.store.exists(key)) return;
+    const source = await this.store.open(sourceKey);
+    if (!source) throw new Error(`The rendition ${sourceKey} is missing from the media store.`);
+    const checked = hashChecked(file.sha256, sourceKey);
+    source.body.once('error', (error) => checked.destroy(error));
+    await this.store.put(key, source.body.pipe(checked));
   }
 
   /** The hashes the release lists whose bytes are not in the store. */
@@ -67,4 +74,18 @@ export class ReleaseFileStore {
     for (const sha256 of orphans) await this.store.remove(releaseFileKey(sha256));
     return orphans;
   }
+}
+
+/** Passes bytes through, and errs at their end, before the writer sees it, unless they hash to `sha256`. */
+function hashChecked(sha256: string, sourceKey: string): Transform {
+  const hash = createHash('sha256');
+  return new Transform({
+    transform(chunk: Buffer, _encoding, done) {
+      hash.update(chunk);
+      done(null, chunk);
+    },
+    flush(done) {
+      done(hash.digest('hex') === sha256 ? null : new Error(`The rendition ${sourceKey} does not match its SHA-256.`));
+    },
+  });
 }
