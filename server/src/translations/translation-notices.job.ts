@@ -59,7 +59,6 @@ interface DigestLine {
  */
 @Injectable()
 export class TranslationNoticesJob implements OnModuleInit {
-
   constructor(
     @InjectModel(User) private readonly users: typeof User,
     @InjectModel(Translation) private readonly translations: typeof Translation,
