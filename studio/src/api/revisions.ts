@@ -26,11 +26,16 @@ export function useRevisionComparison(id: number) {
   });
 }
 
-/** A review move answers with the story's state (and its approved revision); the open story takes them without a reload of its panels. */
+/**
+ * A review move answers with the story's state (and its approved revision and `can`); the open story
+ * takes them without a reload of its panels. A move that does not answer `can` has the story read
+ * again: what the person may do next is the server's to say, never guessed from the new state.
+ */
 function useStoryStateChange(storyId: number) {
   const queryClient = useQueryClient();
-  return (change: Partial<Pick<StoryView, 'state' | 'approvedRevision'>>) => {
+  return (change: Partial<Pick<StoryView, 'state' | 'approvedRevision' | 'can'>>) => {
     queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) => (current ? { ...current, ...change } : current));
+    if (!change.can) void queryClient.invalidateQueries({ queryKey: storyKey(storyId), exact: true });
     void queryClient.invalidateQueries({ queryKey: storyRevisionsKey(storyId) });
     void queryClient.invalidateQueries({ queryKey: ['stories'] });
     void queryClient.invalidateQueries({ queryKey: ['reviews'] });
@@ -50,7 +55,7 @@ function useStoryMove(storyId: number, move: 'withdraw' | 'revise' | 'retire') {
   const changeState = useStoryStateChange(storyId);
   return useMutation({
     mutationFn: () => api<StoryView>(`/stories/${storyId}/${move}`, { method: 'POST' }),
-    onSuccess: (story) => changeState({ state: story.state, approvedRevision: story.approvedRevision }),
+    onSuccess: (story) => changeState({ state: story.state, approvedRevision: story.approvedRevision, can: story.can }),
   });
 }
 
