@@ -10,6 +10,7 @@ import {
   SEA_FLOOR_AGE_MAX_MYR,
   seaFloorDepth,
   type SeaFloorDepthParams,
+  type SeaFloorDepthResult,
   type SeaFloorModel,
 } from '../widgets/sea-floor-depth/index.js';
 import { drawingSliderHandlers } from './drawing-slider.js';
@@ -51,14 +52,20 @@ const seaY = (depthM: number) => SEA.top + (depthM / SEA.deepestM) * (SEA.bottom
 const lithosphereY = (km: number) => LITHOSPHERE.top + (Math.min(km, LITHOSPHERE.deepestKm) / LITHOSPHERE.deepestKm) * (LITHOSPHERE.bottom - LITHOSPHERE.top);
 const clampAge = (ageMyr: number) => Math.round(Math.min(SEA_FLOOR_AGE_MAX_MYR, Math.max(MIN_AGE_MYR, ageMyr)) * 2) / 2;
 
-/** The curves of both models, sampled from the ridge outwards (the first sample just off the crest). */
+/**
+ * The curves of both models, sampled from the ridge outwards (the first sample just off the crest):
+ * one computation per age gives both models' depths and the chosen model's thickness.
+ */
 function profiles(params: SeaFloorDepthParams) {
-  const ages = Array.from({ length: SAMPLES + 1 }, (_, index) => Math.max(0.2, (index / SAMPLES) * SEA_FLOOR_AGE_MAX_MYR));
-  const path = (point: (ageMyr: number) => [number, number]) => ages.map((age, index) => `${index === 0 ? 'M' : 'L'} ${point(age).join(' ')}`).join(' ');
+  const samples = Array.from({ length: SAMPLES + 1 }, (_, index) => {
+    const age = Math.max(0.2, (index / SAMPLES) * SEA_FLOOR_AGE_MAX_MYR);
+    return { x: xOf(age), result: computeSeaFloorDepth({ ...params, ageMyr: age }) };
+  });
+  const path = (y: (result: SeaFloorDepthResult) => number) => samples.map(({ x, result }, index) => `${index === 0 ? 'M' : 'L'} ${x} ${y(result)}`).join(' ');
   return {
-    halfSpace: path((age) => [xOf(age), seaY(computeSeaFloorDepth({ ...params, ageMyr: age, model: 'half-space' }).depthM)]),
-    plate: path((age) => [xOf(age), seaY(computeSeaFloorDepth({ ...params, ageMyr: age, model: 'plate' }).depthM)]),
-    lithosphere: path((age) => [xOf(age), lithosphereY(computeSeaFloorDepth({ ...params, ageMyr: age }).lithosphereThicknessKm)]),
+    halfSpace: path((result) => seaY(result.halfSpaceDepthM)),
+    plate: path((result) => seaY(result.plateDepthM)),
+    lithosphere: path((result) => lithosphereY(result.lithosphereThicknessKm)),
   };
 }
 
