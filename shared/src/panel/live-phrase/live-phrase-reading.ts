@@ -1,6 +1,6 @@
 import { isWidgetType, widgetModule } from '../../widgets/index.js';
 import type { WidgetReading } from '../live-value/live-value-reading.js';
-import { livePhrasesIn, widgetsIn, type PanelLivePhraseRef } from '../panel-queries.js';
+import { livePhrasesIn, widgetsIn, type PanelLivePhraseRef, type PanelWidgetRef } from '../panel-queries.js';
 import type { PanelPath } from '../panel-json.js';
 import type { LivePhraseWordings } from './live-phrase-wordings.js';
 
@@ -21,12 +21,9 @@ export function readLivePhrase(phrase: { widgetId: string; wordings: LivePhraseW
 /** As a visitor reads it: an em dash where no wording fits, as a live value shows one where no number can be read. */
 export const livePhraseText = (reading: LivePhraseReading): string => (reading.ok ? reading.text : '—');
 
-/** The states the phrase's widget declares, or null when the widget is not on the panel or declares none. */
-function declaredStates(doc: unknown, widgetId: string): readonly string[] | null {
-  const widget = widgetsIn(doc).find((candidate) => candidate.widgetId === widgetId);
-  if (!widget || !isWidgetType(widget.widgetType)) return null;
-  return widgetModule(widget.widgetType).states?.values ?? null;
-}
+/** The states a widget declares for live phrases to follow; empty for a widget that has none. */
+export const phraseStatesOf = (widget: Pick<PanelWidgetRef, 'widgetType'>): readonly string[] =>
+  (isWidgetType(widget.widgetType) ? widgetModule(widget.widgetType).states?.values : undefined) ?? [];
 
 export interface DanglingLivePhrase {
   path: PanelPath;
@@ -35,11 +32,11 @@ export interface DanglingLivePhrase {
   message: string;
 }
 
-function problemOf(phrase: PanelLivePhraseRef, doc: unknown): string | null {
-  const widget = widgetsIn(doc).find((candidate) => candidate.widgetId === phrase.widgetId);
+function problemOf(phrase: PanelLivePhraseRef, widgets: readonly PanelWidgetRef[]): string | null {
+  const widget = widgets.find((candidate) => candidate.widgetId === phrase.widgetId);
   if (!widget) return `This live phrase follows widget ${phrase.widgetId}, which is no longer on this panel.`;
-  const states = declaredStates(doc, phrase.widgetId);
-  if (!states) return `Widget ${phrase.widgetId} has no states for a live phrase to follow.`;
+  const states = phraseStatesOf(widget);
+  if (states.length === 0) return `Widget ${phrase.widgetId} has no states for a live phrase to follow.`;
   const missing = states.filter((state) => !Object.hasOwn(phrase.wordings, state));
   if (missing.length > 0) return `This live phrase has no wording for ${missing.map((state) => `"${state}"`).join(' or ')}.`;
   const unknown = Object.keys(phrase.wordings).filter((state) => !states.includes(state));
@@ -53,8 +50,9 @@ function problemOf(phrase: PanelLivePhraseRef, doc: unknown): string | null {
  * so a curator can delete a widget mid-edit.
  */
 export function danglingLivePhrases(doc: unknown): DanglingLivePhrase[] {
+  const widgets = widgetsIn(doc);
   return livePhrasesIn(doc).flatMap((phrase) => {
-    const message = problemOf(phrase, doc);
+    const message = problemOf(phrase, widgets);
     return message === null ? [] : [{ path: phrase.path, phraseId: phrase.phraseId, widgetId: phrase.widgetId, message }];
   });
 }

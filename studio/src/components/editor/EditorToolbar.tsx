@@ -6,11 +6,11 @@ import {
   TextHeader2Regular, TextHeader3Regular, TextItalicRegular, TextNumberListLtrRegular, TextQuoteRegular, BeakerAddRegular, TextEditStyleRegular,
 } from '@fluentui/react-icons';
 import { useEditorState, type Editor } from '@tiptap/react';
-import { liveValueText, PANEL_HEADING_LEVELS, WIDGET_TYPES, widgetOutputChoices, widgetRegistry, widgetsIn, type WidgetOutputChoice, type WidgetType } from '@mantlepiece/shared';
+import { liveValueText, PANEL_HEADING_LEVELS, phraseStatesOf, WIDGET_TYPES, widgetOutputChoices, widgetRegistry, widgetsIn, type WidgetOutputChoice, type WidgetType } from '@mantlepiece/shared';
 import type { ReactElement } from 'react';
 import { useTranslation } from 'react-i18next';
 import { insertionChain } from './insert-point';
-import { phraseStatesOf, stateWord } from './live-phrase-states';
+import { stateWord } from './live-phrase-states';
 import { useLiveValueLabel } from './live-value-labels';
 
 const HEADING_ICONS: Record<(typeof PANEL_HEADING_LEVELS)[number], ReactElement> = { 2: <TextHeader2Regular />, 3: <TextHeader3Regular /> };

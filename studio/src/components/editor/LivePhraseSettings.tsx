@@ -1,8 +1,8 @@
 import { Field, Input, makeStyles, MessageBar, MessageBarBody, Text, tokens } from '@fluentui/react-components';
 import type { Editor } from '@tiptap/react';
-import { MAX_WORDING_LENGTH, widgetsIn, type PanelDocJSON, type PanelLivePhraseRef, type WidgetType } from '@mantlepiece/shared';
+import { MAX_WORDING_LENGTH, phraseStatesOf, widgetsIn, type PanelDocJSON, type PanelLivePhraseRef, type WidgetType } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { phraseStatesOf, stateWord } from './live-phrase-states';
+import { stateWord } from './live-phrase-states';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
