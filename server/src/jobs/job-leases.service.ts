@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op } from 'sequelize';
 import { Clock } from '../clock/clock.service.js';
+import { unclaimedAt } from './claim-queue.js';
 import { JobOwner } from './job-owner.js';
 import { JobLease } from './models/job-lease.model.js';
 
@@ -25,7 +26,7 @@ export class JobLeases {
     // mysql2 counts matched rows (FOUND_ROWS), so keeping a lease at an unchanged expiry still counts as held.
     const [held] = await this.leases.update(
       { claimedBy: this.owner.id, claimExpiresAt: new Date(now.getTime() + leaseMs) },
-      { where: { name, [Op.or]: [{ claimedBy: this.owner.id }, { claimExpiresAt: null }, { claimExpiresAt: { [Op.lt]: now } }] } },
+      { where: { name, [Op.or]: [{ claimedBy: this.owner.id }, unclaimedAt(now)] } },
     );
     return held === 1;
   }
