@@ -1,6 +1,6 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { Op } from 'sequelize';
+import { Op, type WhereOptions } from 'sequelize';
 import type { KioskManifestResponse } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
@@ -11,8 +11,8 @@ import { PublicationsService, type PublicationVersion } from '../releases/public
 import { ReleaseFileStore, sha256Of } from '../releases/release-file-store.js';
 import type { PairedKiosk } from './device-token.guard.js';
 
-/** Releases a kiosk may fetch from: the Live one, and those it may still hold to roll back to. */
-export const SERVABLE_STATES = ['live', 'superseded'];
+/** The gallery's releases its kiosks may fetch from: the Live one, and those a kiosk may still hold to roll back to. */
+export const servableReleasesOf = (galleryId: number): WhereOptions<Release> => ({ galleryId, state: { [Op.in]: ['live', 'superseded'] } });
 
 /** The gallery's signed answer as sent, and its ETag: the SHA-256 of the publication record. */
 export interface LiveManifest {
@@ -70,7 +70,7 @@ export class KioskReleasesService {
     const listed = await this.releaseFiles.findOne({
       where: { sha256 },
       attributes: ['mime'],
-      include: [{ model: Release, attributes: [], where: { galleryId, state: { [Op.in]: SERVABLE_STATES } } }],
+      include: [{ model: Release, attributes: [], where: servableReleasesOf(galleryId) }],
     });
     if (!listed) throw new NotFoundException('This gallery has no such file.');
     const seconds = this.config.presignedUrlSeconds;

@@ -1,6 +1,6 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { Op, QueryTypes } from 'sequelize';
+import { QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { EventsResponse, KioskView, Page } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
@@ -15,15 +15,12 @@ import type { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import type { HeartbeatDto, KioskEventDto, KioskEventsDto, ListKiosksQuery } from './dto/kiosk-report.dto.js';
-import type { KioskRequest } from './device-token.guard.js';
+import type { PairedKiosk } from './device-token.guard.js';
 import { refuseIfRevoked } from './kiosk-policy.js';
-import { SERVABLE_STATES } from './kiosk-releases.service.js';
+import { servableReleasesOf } from './kiosk-releases.service.js';
 import { toKioskView } from './kiosks.presenter.js';
 import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
 import { Kiosk } from './models/kiosk.model.js';
-
-type PairedKiosk = KioskRequest['kiosk'];
-
 
 const EVENT_COLUMNS = ['id', 'kiosk_id', 'gallery_id', 'type', 'at', 'story_id', 'panel_id', 'widget_type', 'param', 'locale', 'dwell_ms', 'switch', 'received_at'];
 
@@ -43,7 +40,7 @@ export class KiosksService {
   /** The latest report on the kiosk row, where the fleet list reads it, and every report as history. */
   async recordHeartbeat(kiosk: PairedKiosk, dto: HeartbeatDto): Promise<void> {
     // Only a release the kiosk could have been sent: another gallery's, or none, is refused.
-    if (dto.releaseId !== null && !(await this.releases.findOne({ where: { id: dto.releaseId, ...this.servableTo(kiosk) }, attributes: ['id'] }))) {
+    if (dto.releaseId !== null && !(await this.releases.findOne({ where: { id: dto.releaseId, ...servableReleasesOf(kiosk.station.galleryId) }, attributes: ['id'] }))) {
       throw unknownReference(['releaseId'], `Release ${dto.releaseId} is not one of this gallery’s published releases.`);
     }
     const receivedAt = this.clock.now();
@@ -84,7 +81,7 @@ export class KiosksService {
   private async ofGalleryReleases(kiosk: PairedKiosk, events: KioskEventDto[]): Promise<KioskEventDto[]> {
     const storyIds = [...new Set(events.flatMap((event) => (event.storyId === undefined ? [] : [event.storyId])))];
     const panelIds = [...new Set(events.flatMap((event) => (event.panelId === undefined ? [] : [event.panelId])))];
-    const released = { model: Release, attributes: [], where: this.servableTo(kiosk) };
+    const released = { model: Release, attributes: [], where: servableReleasesOf(kiosk.station.galleryId) };
     const [stories, panels] = await Promise.all([
       storyIds.length ? this.releaseStories.findAll({ attributes: ['storyId'], where: { storyId: storyIds }, include: [released] }) : [],
       panelIds.length ? this.releasePanels.findAll({ attributes: ['storyId', 'panelId'], where: { panelId: panelIds }, include: [released] }) : [],
@@ -95,11 +92,6 @@ export class KiosksService {
     return events.filter((event) =>
       (event.storyId === undefined || knownStories.has(event.storyId))
       && (event.panelId === undefined || (event.storyId === undefined ? panelsAnyStory.has(event.panelId) : knownPanels.has(`${event.storyId}:${event.panelId}`))));
-  }
-
-  /** The releases a kiosk may have been sent: its gallery's, once published. */
-  private servableTo(kiosk: PairedKiosk) {
-    return { galleryId: kiosk.station.galleryId, state: { [Op.in]: SERVABLE_STATES } };
   }
 
   /** The fleet: every kiosk with its station, gallery, last heartbeat and the releases it plays and should play. */
