@@ -37,13 +37,18 @@ export interface PanelWidgetProps {
 const blockStyle: CSSProperties = { margin: '0.75em 0' };
 const problemStyle: CSSProperties = { ...blockStyle, padding: '1em', border: '2px dashed currentColor' };
 
-interface DrawingProps extends Omit<PanelWidgetProps, 'widgetType' | 'params'> {
+export interface WidgetDrawingProps extends Omit<PanelWidgetProps, 'widgetType' | 'params' | 'reducedMotion' | 'highContrast'> {
   widgetType: WidgetType;
   params: unknown;
+  /** The kiosk's reduced-motion toggle; without it the system setting counts. */
+  reducedMotion?: boolean;
 }
 
-/** The shared component of each widget type, given params the registry has already accepted. */
-function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, onParamsChange, onReport, input, outputDigits }: DrawingProps) {
+/**
+ * The shared component of each widget type, given params the registry has already accepted: a
+ * panel's widget block, and the studio's widget workbench.
+ */
+export function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, onParamsChange, onReport, input, outputDigits }: WidgetDrawingProps) {
   switch (widgetType) {
     case 'slope-force':
       return (

@@ -1,19 +1,8 @@
 import { useMemo, useState } from 'react';
 import { Card, makeStyles, MessageBar, MessageBarBody, Select, Field, Spinner, Tab, TabList, Text, tokens } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
-import {
-  checkWidget,
-  isWidgetType,
-  WIDGET_LOCALES,
-  widgetModule,
-  widgetTitle,
-  type ConvectionCellParams,
-  type PlateForcesParams,
-  type SeaFloorDepthParams,
-  type SlopeForceParams,
-  type WidgetType,
-} from '@mantlepiece/shared';
-import { ConvectionCell, PlateForces, SeaFloorDepth, SimulationCaution, SlopeForceBox } from '@mantlepiece/shared/react';
+import { checkWidget, isWidgetType, WIDGET_LOCALES, widgetModule, widgetTitle, type WidgetType } from '@mantlepiece/shared';
+import { SimulationCaution, WidgetDrawing } from '@mantlepiece/shared/react';
 import { useWidgetTypes } from '../../api/widgets';
 import { RequireArea } from '../area';
 import { PageHeader } from '../../components/PageHeader';
@@ -35,19 +24,6 @@ function resultRows(value: unknown, prefix = ''): [string, string][] {
     return [[prefix, typeof value === 'number' ? Number(value.toPrecision(4)).toLocaleString() : String(value)]];
   }
   return Object.entries(value).flatMap(([key, child]) => resultRows(child, prefix ? `${prefix}.${key}` : key));
-}
-
-function Preview({ type, params, locale, onParamsChange }: { type: WidgetType; params: Params; locale: string; onParamsChange: (params: Params) => void }) {
-  switch (type) {
-    case 'slope-force':
-      return <SlopeForceBox params={params as SlopeForceParams} locale={locale} onParamsChange={(next) => onParamsChange({ ...next })} />;
-    case 'convection-cell':
-      return <ConvectionCell params={params as ConvectionCellParams} locale={locale} />;
-    case 'sea-floor-depth':
-      return <SeaFloorDepth params={params as SeaFloorDepthParams} locale={locale} onParamsChange={(next) => onParamsChange({ ...next })} />;
-    case 'plate-forces':
-      return <PlateForces params={params as PlateForcesParams} locale={locale} onParamsChange={(next) => onParamsChange({ ...next })} />;
-  }
 }
 
 function Workbench() {
@@ -99,7 +75,7 @@ function Workbench() {
           <Text as="h2" size={500} weight="semibold" id="workbench-preview">{words.preview}</Text>
           {check.ok ? null : <MessageBar intent="warning"><MessageBarBody>{words.invalid}</MessageBarBody></MessageBar>}
           <Card>
-            <Preview key={chosen} type={chosen} params={shown} locale={locale} onParamsChange={update} />
+            <WidgetDrawing key={chosen} widgetType={chosen} params={shown} locale={locale} onParamsChange={update} />
           </Card>
           <Text as="h3" size={400} weight="semibold">{words.description}</Text>
           <Text as="p" data-testid="widget-description">{widgetModule(chosen).describe(shown, locale)}</Text>
