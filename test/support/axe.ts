@@ -30,6 +30,11 @@ interface AxeOptions {
 export async function axeFindings(page: Page, options: AxeOptions = {}): Promise<AxeFinding[]> {
   // Evaluated through the DevTools protocol, which the page's Content-Security-Policy does not govern.
   if (!(await page.evaluate(() => 'axe' in window))) await page.evaluate(axeSource);
+  // Colours are judged as the page rests: a menu or dialog still fading in reads as grey on grey.
+  // Endless animations (a spinner) have no end to wait for.
+  await page.evaluate(() => Promise.all(document.getAnimations()
+    .filter((animation) => Number.isFinite(Number(animation.effect?.getComputedTiming().endTime)))
+    .map((animation) => animation.finished.catch(() => undefined))));
   const violations = await page.evaluate(async (tags) => {
     const axe = (window as unknown as { axe: { run: (context: Document, options: unknown) => Promise<{ violations: { id: string; impact: string | null; nodes: { html: string; target: unknown[]; failureSummary?: string }[] }[] }> } }).axe;
     const result = await axe.run(document, { runOnly: { type: 'tag', values: tags }, resultTypes: ['violations'] });

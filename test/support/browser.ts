@@ -42,7 +42,7 @@ export async function signIn(page: Page, email: string, password = demoPassword)
   await page.getByRole('navigation', { name: 'Studio areas' }).waitFor();
 }
 
-/** Calls the API with a demo account's own access token, as a test's setup and clean-up do. */
+/** Calls the API with a demo account's own access token, as a test's setup and clean-up do; a FormData body goes as multipart. */
 export async function apiAs(email: string, password = demoPassword) {
   const login = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }) });
   if (!login.ok) throw new Error(`Sign-in of ${email} answered ${login.status}`);
@@ -50,8 +50,8 @@ export async function apiAs(email: string, password = demoPassword) {
   return async <T>(method: string, path: string, body?: unknown): Promise<T> => {
     const response = await fetch(`${baseUrl}/api${path}`, {
       method,
-      headers: { Authorization: `Bearer ${accessToken}`, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) },
-      body: body === undefined ? undefined : JSON.stringify(body),
+      headers: { Authorization: `Bearer ${accessToken}`, ...(body === undefined || body instanceof FormData ? {} : { 'Content-Type': 'application/json' }) },
+      body: body === undefined || body instanceof FormData ? body : JSON.stringify(body),
     });
     if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}: ${await response.text()}`);
     return (response.status === 204 ? undefined : await response.json()) as T;
