@@ -100,8 +100,10 @@ export class DemoFleet {
   /** Built and published as a technician would, but waited for here, so the seed ends with it Live. */
   private async publishFirstRelease(galleryId: number, technician: User): Promise<number> {
     const { id } = await this.releases.requestRelease(galleryId, {}, technician);
-    await this.worker.idle();
+    // Built here, unless the worker's own pass (kicked by the request) claimed it first: then that
+    // pass is running, and the seed waits for it to end.
     await this.worker.buildQueued();
+    await this.worker.idle();
     const built = await this.releases.get(id, technician);
     if (built.state !== 'ready') throw new Error(`the demo release ended ${built.state}: ${built.failure ?? 'no reason given'}`);
     await this.releases.publish(id, technician);
