@@ -72,9 +72,7 @@ describe('the sea-floor depth and plate-forces widgets in the studio', () => {
     await picture(page, 'studio-sea-floor-depth');
   });
 
-  // Skipped until mended (issue 14 note): flaky on clean runs (the studio's Plate forces tab waited out
-  // the test; the kiosk's stepper tap did not always change the state); the sea-floor checks still run.
-  it.skip('draws both plate forces and lets ridge push win when taps shorten the slab', async () => {
+  it('draws both plate forces and lets ridge push win when taps shorten the slab', async () => {
     await page.getByRole('tab', { name: 'Plate forces', exact: true }).tap();
     const status = page.locator('.mp-plate-forces [role="status"]');
     await expect.poll(() => status.getAttribute('data-state')).toBe('slab-pull-dominates');
@@ -118,8 +116,7 @@ describe('the sea-floor depth and plate-forces widgets on a kiosk', () => {
     await picture(screen, 'kiosk-sea-floor-depth');
   });
 
-  // Skipped until mended (issue 14 note): on a clean run the buttons' width did not follow Larger text.
-  it.skip('gives the age buttons touch-sized targets that grow with Larger text', async () => {
+  it('gives the age buttons touch-sized targets that grow with Larger text', async () => {
     const older = screen.getByRole('button', { name: 'Age of the sea floor: Older' });
     const before = (await older.boundingBox())!;
     expect(Math.min(before.width, before.height)).toBeGreaterThanOrEqual(SMALLEST_TARGET_PX);
@@ -129,9 +126,7 @@ describe('the sea-floor depth and plate-forces widgets on a kiosk', () => {
     await screen.getByRole('switch', { name: 'Larger text' }).tap();
   });
 
-  // Skipped until mended (issue 14 note): flaky on clean runs (the studio's Plate forces tab waited out
-  // the test; the kiosk's stepper tap did not always change the state); the sea-floor checks still run.
-  it.skip('lets a finger drag the slab short until ridge push wins, and a tap lengthen it again', async () => {
+  it('lets a finger drag the slab short until ridge push wins, and a tap lengthen it again', async () => {
     await screen.getByRole('button', { name: 'Next' }).tap();
     const slider = screen.getByRole('slider', { name: 'Plate forces: Length of the sinking slab' });
     const status = screen.locator('.mp-plate-forces [role="status"]');
