@@ -4,8 +4,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import type { ExhibitView, GalleryView, Page as ListPage, StationView, StoryView, UserView, VenueView } from '@mantlepiece/shared';
 import { axeFindings } from '../support/axe';
-import { apiAs, baseUrl, launchBrowser } from '../support/browser';
+import { apiAs, atRest, baseUrl, launchBrowser } from '../support/browser';
 import { publishedRelease } from '../support/releases';
+import { touchDrag } from '../support/touch';
 
 // The seeded demo (server/src/seed): the Basalt Point venue (English, with French and Spanish), its
 // Moving Plates Hall and three approved stories. This file adds Arabic, with its own Arabic texts,
@@ -189,17 +190,6 @@ function menuCoverage(page: Page): Promise<{ across: number; down: number; cards
   });
 }
 
-/** A finger on the glass, through Chromium's touch input: press, slide, lift. */
-async function touchDrag(page: Page, from: { x: number; y: number }, to: { x: number; y: number }, steps = 10): Promise<void> {
-  const cdp = await page.context().newCDPSession(page);
-  await cdp.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: [from] });
-  for (let step = 1; step <= steps; step++) {
-    await cdp.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: [{ x: from.x + ((to.x - from.x) * step) / steps, y: from.y + ((to.y - from.y) * step) / steps }] });
-  }
-  await cdp.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
-  await cdp.detach();
-}
-
 const panelScrollTop = () => screen.locator('article.mp-panel').evaluate((panel) => panel.scrollTop);
 
 /** A long panel scrolls under a finger and under a mouse wheel held over its words, and the cue goes at its end. */
@@ -301,6 +291,7 @@ async function walkPanels(label: string): Promise<string[]> {
       await screen.locator('article.mp-panel').waitFor();
       // Pictures and fonts settle before anything is measured.
       await screen.waitForFunction(() => document.fonts.status === 'loaded' && [...document.querySelectorAll('article.mp-panel img')].every((image) => (image as HTMLImageElement).complete));
+      await atRest(screen);
       const where = `${label}, story ${storyIndex + 1} panel ${panel}`;
       if (shots) await screen.screenshot({ path: join(shots, `${where.replace(/[^\w]+/g, '-')}.png`) });
       problems.push(...(await hiddenContent(screen)).map((problem) => `${where}: ${problem}`));

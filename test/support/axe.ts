@@ -2,6 +2,7 @@
 import { createRequire } from 'node:module';
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
+import { atRest } from './browser';
 
 const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
 
@@ -30,11 +31,7 @@ interface AxeOptions {
 export async function axeFindings(page: Page, options: AxeOptions = {}): Promise<AxeFinding[]> {
   // Evaluated through the DevTools protocol, which the page's Content-Security-Policy does not govern.
   if (!(await page.evaluate(() => 'axe' in window))) await page.evaluate(axeSource);
-  // Colours are judged as the page rests: a menu or dialog still fading in reads as grey on grey.
-  // Endless animations (a spinner) have no end to wait for.
-  await page.evaluate(() => Promise.all(document.getAnimations()
-    .filter((animation) => Number.isFinite(Number(animation.effect?.getComputedTiming().endTime)))
-    .map((animation) => animation.finished.catch(() => undefined))));
+  await atRest(page);
   const violations = await page.evaluate(async (tags) => {
     const axe = (window as unknown as { axe: { run: (context: Document, options: unknown) => Promise<{ violations: { id: string; impact: string | null; nodes: { html: string; target: unknown[]; failureSummary?: string }[] }[] }> } }).axe;
     const result = await axe.run(document, { runOnly: { type: 'tag', values: tags }, resultTypes: ['violations'] });

@@ -1,3 +1,4 @@
+/// <reference lib="dom" />
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
 /** The running Mantlepiece that `npm test` started (or one started by hand with `npm start`). */
@@ -56,4 +57,18 @@ export async function apiAs(email: string, password = demoPassword) {
     if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}: ${await response.text()}`);
     return (response.status === 204 ? undefined : await response.json()) as T;
   };
+}
+
+/**
+ * Waits until the page rests: every animation with an end has ended (endless ones, a spinner, have
+ * none to wait for) and two frames have been drawn, so state set by a resize observer has rendered.
+ * Colours and boxes are judged on a resting page: a dialog fading in reads as grey on grey.
+ */
+export async function atRest(page: Page): Promise<void> {
+  await page.evaluate(async () => {
+    await Promise.all(document.getAnimations()
+      .filter((animation) => Number.isFinite(Number(animation.effect?.getComputedTiming().endTime)))
+      .map((animation) => animation.finished.catch(() => undefined)));
+    await new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(resolve)));
+  });
 }
