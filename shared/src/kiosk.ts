@@ -4,7 +4,8 @@
  * so the editor (Tiptap, ProseMirror), XLIFF, diff and preflight code never reach the kiosk's
  * bundle (`npm run bench -w kiosk` holds its main chunk to a budget).
  */
-export { UI_LANGUAGE_CODES, type UiLanguage } from './languages/ui-languages.js';
+export { matchUiLanguage, UI_LANGUAGE_CODES, type UiLanguage } from './languages/ui-languages.js';
+export { canonicalLanguageTag, lookupLanguage, lookupText } from './languages/language-tags.js';
 export { translationGaps, type Translated } from './i18n/plural-forms.js';
 export type { PanelDocJSON } from './panel/panel-json.js';
 export { directionOf, type PanelLayout } from './panel/panel-presentation.js';

@@ -1,16 +1,10 @@
 import { applyDecorators } from '@nestjs/common';
 import { Transform } from 'class-transformer';
 import { registerDecorator, type ValidationOptions } from 'class-validator';
+import { canonicalLanguageTag } from '@mantlepiece/shared';
 
-/** The canonical form of a BCP 47 tag (`pt-br` → `pt-BR`), or null when it is not one. */
-export function canonicalLocale(value: unknown): string | null {
-  if (typeof value !== 'string' || value.length === 0 || value.length > 35) return null;
-  try {
-    return Intl.getCanonicalLocales(value)[0] ?? null;
-  } catch {
-    return null;
-  }
-}
+/** The canonical form of a BCP 47 tag (`pt-br` → `pt-BR`), or null when it is not one: the apps' own rule. */
+export const canonicalLocale = canonicalLanguageTag;
 
 function IsLocaleTag(options: ValidationOptions = {}) {
   return (target: object, propertyName: string | symbol) =>

@@ -3,6 +3,7 @@ import { en } from './en.js';
 import { es } from './es.js';
 import { fr } from './fr.js';
 import type { WidgetResource, WidgetStrings } from './types.js';
+import { canonicalLanguageTag, lookupLanguage } from '../languages/language-tags.js';
 
 export type { WidgetResource, WidgetStrings } from './types.js';
 export * from './plural-forms.js';
@@ -19,15 +20,8 @@ export type WidgetLocale = keyof typeof widgetResources;
 export const WIDGET_LOCALES = Object.keys(widgetResources) as WidgetLocale[];
 export const FALLBACK_LOCALE: WidgetLocale = 'en';
 
-const isWidgetLocale = (tag: string): tag is WidgetLocale => Object.hasOwn(widgetResources, tag);
-
-/** The best resource for a BCP 47 tag: the exact tag, then its language subtag, then English. */
-export function resolveWidgetLocale(tag: string): WidgetLocale {
-  const lower = tag.toLowerCase();
-  if (isWidgetLocale(lower)) return lower;
-  const language = lower.split('-')[0] ?? '';
-  return isWidgetLocale(language) ? language : FALLBACK_LOCALE;
-}
+/** The best resource for a BCP 47 tag by RFC 4647 lookup (`fr-CA` → `fr`), English when none fits. */
+export const resolveWidgetLocale = (tag: string): WidgetLocale => lookupLanguage([tag], WIDGET_LOCALES, FALLBACK_LOCALE) as WidgetLocale;
 
 export const widgetStrings = (locale: string): WidgetStrings => widgetResources[resolveWidgetLocale(locale)].widgets;
 
@@ -37,14 +31,6 @@ export const interpolate = (template: string, values: Record<string, string>): s
 
 /** Formats a number for a locale with SI spacing (a no-break space before the unit symbol, none before °). */
 export function formatQuantity(value: number, unit: string, locale: string, significantDigits = 3): string {
-  const number = new Intl.NumberFormat(resolveLocaleTag(locale), { maximumSignificantDigits: significantDigits }).format(value);
+  const number = new Intl.NumberFormat(canonicalLanguageTag(locale) ?? FALLBACK_LOCALE, { maximumSignificantDigits: significantDigits }).format(value);
   return unit === '°' || unit === '' ? `${number}${unit}` : `${number}\u00a0${unit}`;
-}
-
-function resolveLocaleTag(tag: string): string {
-  try {
-    return Intl.getCanonicalLocales(tag)[0] ?? FALLBACK_LOCALE;
-  } catch {
-    return FALLBACK_LOCALE;
-  }
 }

@@ -1,3 +1,5 @@
+import { lookupLanguage } from './language-tags.js';
+
 /**
  * The languages the studio, the kiosk's own words and our mail come in, each named in itself.
  * Adding one means locale files in each app and one entry here; `dir` flips a whole layout for a
@@ -16,15 +18,9 @@ export const UI_LANGUAGE_CODES: readonly UiLanguage[] = UI_LANGUAGES.map((langua
 
 export const DEFAULT_UI_LANGUAGE: UiLanguage = 'en';
 
-/** The first candidate (a BCP 47 tag such as "fr-CA") whose language we speak. */
-export function matchUiLanguage(candidates: readonly (string | null | undefined)[]): UiLanguage | undefined {
-  for (const candidate of candidates) {
-    const base = candidate?.toLowerCase().split('-')[0];
-    const match = UI_LANGUAGES.find((language) => language.code === base);
-    if (match) return match.code;
-  }
-  return undefined;
-}
+/** The UI language the candidates (BCP 47 tags such as "fr-CA", best first) find by RFC 4647 lookup. */
+export const matchUiLanguage = (candidates: readonly (string | null | undefined)[]): UiLanguage | undefined =>
+  lookupLanguage(candidates, UI_LANGUAGE_CODES) as UiLanguage | undefined;
 
 /** A stored or requested language as one we speak, English when we do not. */
 export const asUiLanguage = (tag: string): UiLanguage => matchUiLanguage([tag]) ?? DEFAULT_UI_LANGUAGE;

@@ -1,11 +1,12 @@
+import { lookupText } from '../languages/language-tags.js';
 import { imageFindings, languageName } from './panel-findings.js';
 import type { PreflightMedia, PreflightRule } from './types.js';
 
-/** Alt text for a locale, matching the tag without regard to case (BCP 47 tags are case-insensitive). */
-export function altTextFor(asset: PreflightMedia, locale: string): string {
-  const key = Object.keys(asset.alt).find((tag) => tag.toLowerCase() === locale.toLowerCase());
-  return key === undefined ? '' : (asset.alt[key] ?? '').trim();
-}
+/**
+ * Alt text for a locale by RFC 4647 lookup among the languages it is written in, so a story in
+ * en-GB is served by alt text in en; '' when none fits.
+ */
+export const altTextFor = (asset: PreflightMedia, locale: string): string => lookupText(asset.alt, [locale])?.text.trim() ?? '';
 
 /** A visitor who cannot see the image gets its alt text read out; the source locale is the one every translation starts from. */
 export const imageAltText: PreflightRule = {

@@ -146,6 +146,12 @@ describe('preflight: image alt text (blocker)', () => {
     expect(passes(imageAltText, { media: [photo({ alt: { EN: 'Dark rock.' } })] })).toBe(true);
   });
 
+  // RFC 4647 §3.4 lookup: the range en-GB, truncated, finds en; a range never finds a more specific tag.
+  it('passes a story written in en-GB whose image has alt text in en, and not the other way round', () => {
+    expect(passes(imageAltText, { sourceLocale: 'en-GB', panels: [{ docs: { 'en-GB': slopePanel() } }] })).toBe(true);
+    expect(passes(imageAltText, { sourceLocale: 'en', media: [photo({ alt: { 'en-GB': 'Dark rock.' } })] })).toBe(false);
+  });
+
   it('blocks an image whose alt text is only in another language, or blank', () => {
     for (const alt of [{ fr: 'Roche sombre.' }, { en: '   ' }] as Record<string, string>[]) {
       expect(failures(imageAltText, { media: [photo({ alt })] }).map((finding) => finding.message)).toEqual([

@@ -1,3 +1,4 @@
+import { sameLanguageTag } from '../languages/language-tags.js';
 import { checkPlaceholders } from './check-placeholders.js';
 import { lengthBudgetWarning, MAX_TRANSLATION_LENGTH, type LengthBudgetWarning } from './length-budget.js';
 import { displayOf, type TranslationUnit } from './translation-unit.js';
@@ -41,17 +42,6 @@ export interface PlanXliffImportOptions {
   currentTranslations?: Readonly<Record<string, StoredTranslation>>;
 }
 
-function sameLanguage(a: string | undefined, b: string): boolean {
-  if (a === undefined) return false;
-  try {
-    const [left] = Intl.getCanonicalLocales(a);
-    const [right] = Intl.getCanonicalLocales(b);
-    return left === right;
-  } catch {
-    return false;
-  }
-}
-
 /** Our export's file id; a tool's own id (anything else) names no story. */
 const STORY_FILE_ID = /^s\d+$/;
 
@@ -84,8 +74,8 @@ export function planXliffImport({ parsed, expected, currentUnits, currentTransla
     return { ok: false, otherStory, problems: [{ message }] };
   }
   const problems: XliffProblem[] = [];
-  if (!sameLanguage(xliff.srcLang, expected.srcLang)) problems.push({ message: `The file's source language is ${xliff.srcLang}; this story is written in ${expected.srcLang}.` });
-  if (!sameLanguage(xliff.trgLang, expected.trgLang)) problems.push({ message: `The file's target language is ${xliff.trgLang ?? '(none)'}; this upload is for ${expected.trgLang}.` });
+  if (!sameLanguageTag(xliff.srcLang, expected.srcLang)) problems.push({ message: `The file's source language is ${xliff.srcLang}; this story is written in ${expected.srcLang}.` });
+  if (!sameLanguageTag(xliff.trgLang, expected.trgLang)) problems.push({ message: `The file's target language is ${xliff.trgLang ?? '(none)'}; this upload is for ${expected.trgLang}.` });
 
   const byId = new Map(currentUnits.map((unit) => [unit.id, unit]));
   const updates: XliffUpdate[] = [];
