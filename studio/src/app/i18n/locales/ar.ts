@@ -2,6 +2,7 @@ import type { Translated } from '@mantlepiece/shared';
 import { authoringAr } from './authoring.ar';
 import { editorReviewAr } from './editor-review.ar';
 import { fleetInsightsAr } from './fleet-insights.ar';
+import { languagesAr } from './languages.ar';
 import { releaseAr } from './release.ar';
 import { reviewAr } from './review.ar';
 import { translationAr } from './translation.ar';
@@ -15,6 +16,7 @@ export const ar: Translated<Messages> = {
   ...translationAr,
   ...releaseAr,
   ...fleetInsightsAr,
+  ...languagesAr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'جارٍ التحميل…',

@@ -1,6 +1,7 @@
 import { authoringEn } from './authoring.en';
 import { editorReviewEn } from './editor-review.en';
 import { fleetInsightsEn } from './fleet-insights.en';
+import { languagesEn } from './languages.en';
 import { releaseEn } from './release.en';
 import { reviewEn } from './review.en';
 import { translationEn } from './translation.en';
@@ -13,6 +14,7 @@ export const en = {
   ...translationEn,
   ...releaseEn,
   ...fleetInsightsEn,
+  ...languagesEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',

@@ -2,6 +2,7 @@ import type { Translated } from '@mantlepiece/shared';
 import { authoringEs } from './authoring.es';
 import { editorReviewEs } from './editor-review.es';
 import { fleetInsightsEs } from './fleet-insights.es';
+import { languagesEs } from './languages.es';
 import { releaseEs } from './release.es';
 import { reviewEs } from './review.es';
 import { translationEs } from './translation.es';
@@ -15,6 +16,7 @@ export const es: Translated<Messages> = {
   ...translationEs,
   ...releaseEs,
   ...fleetInsightsEs,
+  ...languagesEs,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Cargando…',

@@ -1,6 +1,7 @@
 import { authoringFr } from './authoring.fr';
 import { editorReviewFr } from './editor-review.fr';
 import { fleetInsightsFr } from './fleet-insights.fr';
+import { languagesFr } from './languages.fr';
 import { releaseFr } from './release.fr';
 import { reviewFr } from './review.fr';
 import { translationFr } from './translation.fr';
@@ -14,6 +15,7 @@ export const fr: Messages = {
   ...translationFr,
   ...releaseFr,
   ...fleetInsightsFr,
+  ...languagesFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',

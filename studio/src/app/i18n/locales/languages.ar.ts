@@ -1,0 +1,9 @@
+import type { languagesEn } from './languages.en';
+
+export const languagesAr: typeof languagesEn = {
+  languagePicker: {
+    placeholder: 'ابحث باسم اللغة أو برمزها',
+    noMatch: 'لا توجد لغة تطابق «{{query}}».',
+    remove: 'إزالة {{language}}',
+  },
+};

@@ -1,0 +1,9 @@
+import type { languagesEn } from './languages.en';
+
+export const languagesEs: typeof languagesEn = {
+  languagePicker: {
+    placeholder: 'Buscar por nombre de idioma o por código',
+    noMatch: 'Ningún idioma coincide con «{{query}}».',
+    remove: 'Quitar: {{language}}',
+  },
+};
