@@ -11,9 +11,10 @@ import { MailService } from '../mail/mail.service.js';
 import { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
+import { Venue } from '../venues/models/venue.model.js';
 import { KioskStates } from './kiosk-states.service.js';
 
-type PlacedKiosk = Kiosk & { station: Station & { gallery: Gallery } };
+type PlacedKiosk = Kiosk & { station: Station & { gallery: Gallery & { venue: Venue } } };
 
 export interface WatchReport {
   /** Kiosks whose silence was announced in this check. */
@@ -67,7 +68,7 @@ export class SilentKioskWatcher implements OnModuleInit {
 
   async check(now: Date = this.clock.now()): Promise<WatchReport> {
     const offlineSince = new Date(now.getTime() - this.states.thresholds.offlineAfterS * 1000);
-    const placed = { include: [{ model: Station, required: true, include: [Gallery] }] };
+    const placed = { include: [{ model: Station, required: true, include: [{ model: Gallery, include: [{ model: Venue, attributes: ['id', 'timeZone'] }] }] }] };
     // The demo kiosk has no device behind it: it falls silent after the first start, and nobody should be mailed about it.
     const judgesSilence = now >= this.judgesSilenceFrom;
     const [silent, back] = await Promise.all([
@@ -126,4 +127,4 @@ export class SilentKioskWatcher implements OnModuleInit {
   }
 }
 
-const where = (kiosk: PlacedKiosk) => ({ station: kiosk.station.name, gallery: kiosk.station.gallery.name });
+const where = (kiosk: PlacedKiosk) => ({ station: kiosk.station.name, gallery: kiosk.station.gallery.name, timeZone: kiosk.station.gallery.venue.timeZone });

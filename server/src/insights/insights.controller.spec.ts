@@ -64,6 +64,7 @@ const expected: Omit<InsightsView, 'stories' | 'panels'> & { stories: unknown[];
   galleryId: gallery.id,
   from: '2025-05-10',
   to: '2025-05-12',
+  timeZone: 'UTC',
   totals: { events: 27, storyOpens: 5, panelViews: 9, widgetTouches: 7, demoEvents: 0 },
   stories: [{ storyId: plates.storyId, title: expect.any(String), opens: 3 }, { storyId: ridge.storyId, title: expect.any(String), opens: 2 }],
   panels: [
@@ -115,7 +116,10 @@ describe('insights', () => {
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(res.headers['content-disposition']).toMatch(new RegExp(`^attachment; filename="?insights-gallery-${gallery.id}-2025-05-10_to_2025-05-12\\.csv"?$`));
     const records = parse(res.text, { columns: true }) as Record<string, string>[];
-    expect(Object.keys(records[0]!)).toEqual(['figure', 'story_id', 'story_title', 'panel_id', 'panel_position', 'widget_type', 'param', 'locale', 'switch', 'count', 'median_dwell_ms']);
+    expect(Object.keys(records[0]!)).toEqual([
+      'figure', 'story_id', 'story_title', 'panel_id', 'panel_position', 'widget_type', 'param', 'locale', 'switch', 'count', 'median_dwell_ms', 'from_day', 'to_day', 'time_zone',
+    ]);
+    expect(new Set(records.map((r) => `${r.from_day} ${r.to_day} ${r.time_zone}`))).toEqual(new Set(['2025-05-10 2025-05-12 UTC']));
     const of = (figure: string) => records.filter((r) => r.figure === figure);
     expect(of('story_opens').map((r) => [Number(r.story_id), Number(r.count)])).toEqual([[plates.storyId, 3], [ridge.storyId, 2]]);
     expect(of('panel_views').map((r) => [Number(r.panel_id), Number(r.panel_position), Number(r.count), Number(r.median_dwell_ms)])).toEqual([[p2, 2, 4, 4000], [p1, 1, 3, 6000], [p3, 1, 2, 4750.5]]);

@@ -2,18 +2,18 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import { dwellByPanel, widgetUse, type DwellSample, type InsightsView, type KioskEventType, type KioskSwitch, type WidgetParamCount } from '@mantlepiece/shared';
+import {
+  addDays, dayEndIn, dayIn, dayStartIn, dwellByPanel, widgetUse,
+  type DwellSample, type InsightsView, type KioskEventType, type KioskSwitch, type WidgetParamCount,
+} from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
-import { dateOnlyOf } from '../common/date-only.js';
 import { invalidField } from '../common/validation.js';
 import { Gallery } from '../venues/models/gallery.model.js';
+import { Venue } from '../venues/models/venue.model.js';
 import type { InsightsQuery } from './dto/insights.query.js';
 
-const DAY_MS = 86_400_000;
 /** The range shown when none is asked for: the last 30 days, today included. */
 const DEFAULT_DAYS = 30;
-
-const dayStart = (date: string) => new Date(`${date}T00:00:00Z`);
 
 interface Range {
   from: string;
@@ -33,9 +33,12 @@ export class InsightsService {
   ) {}
 
   async figures(query: InsightsQuery): Promise<InsightsView> {
-    const range = this.rangeOf(query);
-    if (!(await this.galleries.findByPk(query.galleryId, { attributes: ['id'] }))) throw new NotFoundException('There is no such gallery.');
-    const scope = { galleryId: query.galleryId, start: dayStart(range.from), end: new Date(dayStart(range.to).getTime() + DAY_MS) };
+    const gallery = await this.galleries.findByPk(query.galleryId, { attributes: ['id'], include: [{ model: Venue, attributes: ['timeZone'] }] });
+    if (!gallery) throw new NotFoundException('There is no such gallery.');
+    // Days are the venue's: a visit at 23:30 local time counts on that local day, and a day across a clock change has its 23 or 25 hours.
+    const { timeZone } = gallery.venue!;
+    const range = this.rangeOf(query, timeZone);
+    const scope = { galleryId: query.galleryId, start: dayStartIn(range.from, timeZone), end: dayEndIn(range.to, timeZone) };
     const events = (type: KioskEventType, columns: string, extra = '', tail = '') =>
       this.sequelize.query(
         `SELECT ${columns} FROM kiosk_events e ${extra} WHERE e.gallery_id = :galleryId AND e.type = :type AND e.at >= :start AND e.at < :end ${tail}`,
@@ -64,6 +67,7 @@ export class InsightsService {
     return {
       galleryId: query.galleryId,
       ...range,
+      timeZone,
       totals: {
         events: totals.reduce((sum, row) => sum + Number(row.n), 0),
         storyOpens: count('story_opened'),
@@ -94,9 +98,9 @@ export class InsightsService {
     });
   }
 
-  private rangeOf(query: InsightsQuery): Range {
-    const to = query.to ?? dateOnlyOf(this.clock.now());
-    const from = query.from ?? dateOnlyOf(new Date(dayStart(to).getTime() - (DEFAULT_DAYS - 1) * DAY_MS));
+  private rangeOf(query: InsightsQuery, timeZone: string): Range {
+    const to = query.to ?? dayIn(this.clock.now(), timeZone);
+    const from = query.from ?? addDays(to, -(DEFAULT_DAYS - 1));
     if (from > to) {
       throw invalidField(['to'], 'The range ends before it starts.');
     }

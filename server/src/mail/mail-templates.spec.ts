@@ -10,8 +10,8 @@ const contents: MailContent[] = [
   { kind: 'notification', name: 'Lucía Ortega', subject: 'Asunto', body: 'Cuerpo', link },
   { kind: 'translator-assignment', name: 'Lucía Ortega', locales: ['fr', 'es'], link },
   { kind: 'stale-digest', name: 'Lucía Ortega', stories: [{ title: 'Plates on the move', locale: 'es', units: 3 }], link },
-  { kind: 'kiosk-silent', name: 'Lucía Ortega', station: 'Ridge table', gallery: 'Moving Plates Hall', since: at, link },
-  { kind: 'kiosk-back', name: 'Lucía Ortega', station: 'Ridge table', gallery: 'Moving Plates Hall', backAt: at, link },
+  { kind: 'kiosk-silent', name: 'Lucía Ortega', station: 'Ridge table', gallery: 'Moving Plates Hall', since: at, timeZone: 'UTC', link },
+  { kind: 'kiosk-back', name: 'Lucía Ortega', station: 'Ridge table', gallery: 'Moving Plates Hall', backAt: at, timeZone: 'UTC', link },
 ];
 
 describe('mail templates', () => {
@@ -28,6 +28,13 @@ describe('mail templates', () => {
     const mail = renderMail(contents[3]!, 'es');
     expect(mail.subject).toBe('Ahora traduce a francés y español');
     expect(renderMail(contents[0]!, 'es').text).toContain('caduca el 14 de marzo de 2031');
+  });
+
+  // New Zealand keeps daylight time (UTC+13) until the first Sunday of April (New Zealand Daylight Time Order 2007): 09:30 UTC on 14 March is 22:30 there.
+  it("tells a kiosk's moments on its venue's clock and names the zone", () => {
+    const mail = renderMail({ ...contents[5]!, timeZone: 'Pacific/Auckland' } as MailContent, 'en');
+    expect(mail.text).toMatch(/has sent no heartbeat since March 14, 2031 at 10:30\sPM Pacific\/Auckland\./);
+    expect(renderMail(contents[5]!, 'fr').text).toContain('depuis le 14 mars 2031 à 09:30 UTC.');
   });
 
   it('sets Arabic mail right to left', () => {

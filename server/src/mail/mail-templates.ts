@@ -1,4 +1,4 @@
-import { asUiLanguage, type UiLanguage } from '@mantlepiece/shared';
+import { asUiLanguage, DEFAULT_TIME_ZONE, type UiLanguage } from '@mantlepiece/shared';
 
 export type MailContent =
   | { kind: 'invitation'; name: string; inviterName: string; link: string; expiresAt: Date }
@@ -7,8 +7,9 @@ export type MailContent =
   | { kind: 'notification'; name: string; subject: string; body: string; link: string }
   | { kind: 'translator-assignment'; name: string; locales: string[]; link: string }
   | { kind: 'stale-digest'; name: string; stories: { title: string; locale: string; units: number }[]; link: string }
-  | { kind: 'kiosk-silent'; name: string; station: string; gallery: string; since: Date; link: string }
-  | { kind: 'kiosk-back'; name: string; station: string; gallery: string; backAt: Date; link: string };
+  /** `timeZone`: the kiosk's venue's, whose clock the moment is told by. */
+  | { kind: 'kiosk-silent'; name: string; station: string; gallery: string; since: Date; timeZone: string; link: string }
+  | { kind: 'kiosk-back'; name: string; station: string; gallery: string; backAt: Date; timeZone: string; link: string };
 
 /** A message's words: the paragraphs before its link and after it. */
 interface MailWords {
@@ -17,8 +18,12 @@ interface MailWords {
   after: string[];
 }
 
-const when = (date: Date, language: UiLanguage) =>
-  `${new Intl.DateTimeFormat(language, { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }).format(date)} UTC`;
+/**
+ * A moment on a venue's clock, the zone named after it ("… 10:30 PM Pacific/Auckland"). A link's
+ * expiry belongs to a person, not a venue, and is told in UTC.
+ */
+const when = (date: Date, language: UiLanguage, timeZone = DEFAULT_TIME_ZONE) =>
+  `${new Intl.DateTimeFormat(language, { dateStyle: 'long', timeStyle: 'short', timeZone }).format(date)} ${timeZone}`;
 
 /** "French and Spanish", in the reader's language. */
 const languageList = (locales: readonly string[], language: UiLanguage) => {
@@ -80,7 +85,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `Kiosk silent: ${c.station}, ${c.gallery}`,
       before: [
         `Hello ${c.name},`,
-        `The kiosk at ${c.station} in ${c.gallery} has sent no heartbeat since ${when(c.since, l)}. It may have lost power or its network, or its browser may have closed. Its page on the Fleet shows what it last reported:`,
+        `The kiosk at ${c.station} in ${c.gallery} has sent no heartbeat since ${when(c.since, l, c.timeZone)}. It may have lost power or its network, or its browser may have closed. Its page on the Fleet shows what it last reported:`,
       ],
       after: ['You will get one more message when it reports again.'],
     }),
@@ -88,7 +93,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `Kiosk back: ${c.station}, ${c.gallery}`,
       before: [
         `Hello ${c.name},`,
-        `The kiosk at ${c.station} in ${c.gallery} reported again at ${when(c.backAt, l)}. Check on its page that it plays the live release:`,
+        `The kiosk at ${c.station} in ${c.gallery} reported again at ${when(c.backAt, l, c.timeZone)}. Check on its page that it plays the live release:`,
       ],
       after: [],
     }),
@@ -141,7 +146,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `Borne muette : ${c.station}, ${c.gallery}`,
       before: [
         `Bonjour ${c.name},`,
-        `La borne du poste ${c.station} (${c.gallery}) n’a envoyé aucun signal de vie depuis le ${when(c.since, l)}. Elle a peut-être perdu le courant ou le réseau, ou son navigateur s’est fermé. Sa page dans la Flotte montre ce qu’elle a signalé en dernier :`,
+        `La borne du poste ${c.station} (${c.gallery}) n’a envoyé aucun signal de vie depuis le ${when(c.since, l, c.timeZone)}. Elle a peut-être perdu le courant ou le réseau, ou son navigateur s’est fermé. Sa page dans la Flotte montre ce qu’elle a signalé en dernier :`,
       ],
       after: ['Vous recevrez un seul autre message, quand elle se manifestera de nouveau.'],
     }),
@@ -149,7 +154,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `Borne de retour : ${c.station}, ${c.gallery}`,
       before: [
         `Bonjour ${c.name},`,
-        `La borne du poste ${c.station} (${c.gallery}) s’est de nouveau manifestée le ${when(c.backAt, l)}. Vérifiez sur sa page qu’elle diffuse la publication en ligne :`,
+        `La borne du poste ${c.station} (${c.gallery}) s’est de nouveau manifestée le ${when(c.backAt, l, c.timeZone)}. Vérifiez sur sa page qu’elle diffuse la publication en ligne :`,
       ],
       after: [],
     }),
@@ -202,7 +207,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `Quiosco en silencio: ${c.station}, ${c.gallery}`,
       before: [
         `Hola, ${c.name}:`,
-        `El quiosco del puesto ${c.station} (${c.gallery}) no envía ninguna señal de vida desde el ${when(c.since, l)}. Puede que se haya quedado sin corriente o sin red, o que se haya cerrado su navegador. Su página en la Flota muestra lo último que informó:`,
+        `El quiosco del puesto ${c.station} (${c.gallery}) no envía ninguna señal de vida desde el ${when(c.since, l, c.timeZone)}. Puede que se haya quedado sin corriente o sin red, o que se haya cerrado su navegador. Su página en la Flota muestra lo último que informó:`,
       ],
       after: ['Recibirá un único mensaje más, cuando vuelva a dar señales.'],
     }),
@@ -210,7 +215,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `Quiosco de vuelta: ${c.station}, ${c.gallery}`,
       before: [
         `Hola, ${c.name}:`,
-        `El quiosco del puesto ${c.station} (${c.gallery}) volvió a dar señales el ${when(c.backAt, l)}. Compruebe en su página que reproduce la publicación en servicio:`,
+        `El quiosco del puesto ${c.station} (${c.gallery}) volvió a dar señales el ${when(c.backAt, l, c.timeZone)}. Compruebe en su página que reproduce la publicación en servicio:`,
       ],
       after: [],
     }),
@@ -263,7 +268,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `كشك صامت: ${c.station}، ${c.gallery}`,
       before: [
         `مرحبًا ${c.name}،`,
-        `لم يرسل الكشك في المحطة ${c.station} بقاعة ${c.gallery} أي نبضة حالة منذ ${when(c.since, l)}. ربما انقطعت عنه الكهرباء أو الشبكة، أو أُغلق متصفحه. تعرض صفحته في الأسطول آخر ما أبلغ عنه:`,
+        `لم يرسل الكشك في المحطة ${c.station} بقاعة ${c.gallery} أي نبضة حالة منذ ${when(c.since, l, c.timeZone)}. ربما انقطعت عنه الكهرباء أو الشبكة، أو أُغلق متصفحه. تعرض صفحته في الأسطول آخر ما أبلغ عنه:`,
       ],
       after: ['ستصلك رسالة واحدة أخرى حين يعود إلى الإبلاغ.'],
     }),
@@ -271,7 +276,7 @@ const templates: Record<UiLanguage, Templates> = {
       subject: `عاد الكشك: ${c.station}، ${c.gallery}`,
       before: [
         `مرحبًا ${c.name}،`,
-        `عاد الكشك في المحطة ${c.station} بقاعة ${c.gallery} إلى الإبلاغ في ${when(c.backAt, l)}. تحقّق في صفحته من أنه يعرض الإصدار المعروض حاليًا:`,
+        `عاد الكشك في المحطة ${c.station} بقاعة ${c.gallery} إلى الإبلاغ في ${when(c.backAt, l, c.timeZone)}. تحقّق في صفحته من أنه يعرض الإصدار المعروض حاليًا:`,
       ],
       after: [],
     }),

@@ -13,6 +13,7 @@ export const toVenueView = (venue: Venue): VenueView => ({
   targetLocales: venue.targetLocales,
   fallbackToSource: venue.fallbackToSource,
   requiredApprovals: venue.requiredApprovals,
+  timeZone: venue.timeZone,
   createdAt: venue.createdAt.toISOString(),
 });
 

@@ -129,6 +129,8 @@ export interface VenueView {
   fallbackToSource: boolean;
   /** How many different educators must approve a revision: 1 or 2. */
   requiredApprovals: number;
+  /** IANA time zone name (`Pacific/Auckland`): the venue's days, for Insights, licence expiry, preflight, mail and exports. */
+  timeZone: string;
   createdAt: string;
 }
 

@@ -7,9 +7,11 @@ import type { WidgetUse } from './figures.js';
  */
 export interface InsightsView {
   galleryId: number;
-  /** YYYY-MM-DD, UTC, both days included. */
+  /** YYYY-MM-DD, days of the venue's time zone, both included. */
   from: string;
   to: string;
+  /** The venue's IANA time zone, whose days `from` and `to` are. */
+  timeZone: string;
   /** `demoEvents`: how many of the events are invented ones from the demo venue's kiosk. */
   totals: { events: number; storyOpens: number; panelViews: number; widgetTouches: number; demoEvents: number };
   stories: { storyId: number; title: string | null; opens: number }[];

@@ -7,9 +7,9 @@ export class InsightsQuery {
   @QueryRowId()
   galleryId: number;
 
-  @OptionalDateOnlyField('First day (UTC) counted; 29 days before `to` when left out')
+  @OptionalDateOnlyField("First day counted, a day of the venue's time zone; 29 days before `to` when left out")
   from?: string;
 
-  @OptionalDateOnlyField('Last day (UTC) counted, included; today when left out')
+  @OptionalDateOnlyField("Last day counted, included, a day of the venue's time zone; the venue's today when left out")
   to?: string;
 }

@@ -3,6 +3,7 @@ import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, Matches, MaxLength
 import { Omittable, PatchType } from '../../common/validation.js';
 import { LocaleTagField, LocaleTagsField } from '../../common/locale-tag.js';
 import { SettingsNameField } from './settings-fields.js';
+import { TimeZoneField } from './time-zone-field.js';
 
 export class CreateVenueDto {
   @SettingsNameField()
@@ -33,6 +34,10 @@ export class CreateVenueDto {
   @Omittable()
   @IsBoolean({ message: 'Say true or false.' })
   fallbackToSource?: boolean;
+
+  @Omittable()
+  @TimeZoneField()
+  timeZone?: string;
 }
 
 export class UpdateVenueDto extends PatchType(CreateVenueDto) {}

@@ -25,5 +25,9 @@ export class Venue extends Model {
   @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: false })
   fallbackToSource: boolean;
 
+  /** IANA time zone name (canonical, as Intl resolves it) whose calendar days the venue's dates follow. */
+  @Column({ type: DataType.STRING(64), allowNull: false, defaultValue: 'UTC' })
+  timeZone: string;
+
   declare id: number;
 }
