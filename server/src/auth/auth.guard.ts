@@ -6,14 +6,15 @@ import { isDeviceToken } from '../kiosks/device-token.js';
 import type { User } from '../users/models/user.model.js';
 import { IS_PUBLIC, REQUIRED_ROLES } from './auth.decorators.js';
 import type { AuthenticatedRequest } from './authenticated-request.js';
-import { holdsAny } from './policy.js';
+import { holdsAny, rolesAnywhere } from './policy.js';
 
 const SIGN_IN_REQUIRED = 'Sign in to continue.';
 
 /**
  * Guards every route: a route is open only when marked @Public(); otherwise it needs an access
  * token in the Authorization header (the bearer strategy) of an active account whose session has
- * not ended, and, when marked @Roles(...), one of those roles. The account and the session are
+ * not ended, and, when marked @Roles(...), one of those roles at some venue (which venue's object it may touch
+ * is each service's check). The account and the session are
  * read on each request, so a deactivation, a sign-out or a role change counts at once.
  */
 @Injectable()
@@ -35,7 +36,7 @@ export class AuthGuard extends PassportAuthGuard('bearer') {
     await super.canActivate(context);
 
     const required = this.reflector.getAllAndOverride<Role[] | undefined>(REQUIRED_ROLES, targets);
-    if (required?.length && !holdsAny(request.user, required)) {
+    if (required?.length && !holdsAny({ roles: rolesAnywhere(request.user) }, required)) {
       throw new ForbiddenException('Your role does not allow this.');
     }
     return true;

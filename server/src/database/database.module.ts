@@ -1,9 +1,12 @@
 import { Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
 import { ConfigService } from '../config/config.service.js';
+import { User } from '../users/models/user.model.js';
+import { VenueMembership } from '../users/models/venue-membership.model.js';
+import { Venue } from '../venues/models/venue.model.js';
 import { boundedSequelizeOptions } from './sequelize-options.js';
 
-/** The app's connection. Models come from each feature's forFeature; the schema only from migrations. */
+/** The app's connection. Models come from each feature's forFeature (people and venues also here); the schema only from migrations. */
 @Module({
   imports: [
     SequelizeModule.forRootAsync({
@@ -15,6 +18,8 @@ import { boundedSequelizeOptions } from './sequelize-options.js';
           statementTimeoutMs: config.dbStatementTimeoutMs,
         }),
         autoLoadModels: true,
+        // People and venues first: nearly every feature's models point at them, whichever module loads first.
+        models: [User, VenueMembership, Venue],
         synchronize: false,
       }),
     }),

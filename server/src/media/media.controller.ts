@@ -5,7 +5,7 @@ import { ROLES } from '@mantlepiece/shared';
 import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
-import { ListMediaQuery, UpdateMediaDto } from './dto/media.dto.js';
+import { ListMediaQuery, UpdateMediaDto, UploadMediaDto } from './dto/media.dto.js';
 import { MEDIA_KEEPERS } from './media-policy.js';
 import { MediaService, type UploadedFile } from './media.service.js';
 
@@ -23,8 +23,8 @@ export class MediaController {
   @Post()
   @ApiConsumes('multipart/form-data')
   @UseInterceptors(FilesInterceptor('file', MAX_FILES_PER_UPLOAD))
-  upload(@CurrentUser() uploader: User, @UploadedFiles() files: UploadedFile[]) {
-    return this.media.upload(uploader, files);
+  upload(@CurrentUser() uploader: User, @UploadedFiles() files: UploadedFile[], @Body() fields: UploadMediaDto) {
+    return this.media.upload(uploader, files, fields.venueId);
   }
 
   @ApiCan('media', { page: true, listCan: 'mediaLibrary' })

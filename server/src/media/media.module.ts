@@ -4,6 +4,7 @@ import { SequelizeModule } from '@nestjs/sequelize';
 import { ConfigService } from '../config/config.service.js';
 import { PanelMediaUsage } from '../panels/models/panel-media-usage.model.js';
 import { Panel } from '../panels/models/panel.model.js';
+import { Venue } from '../venues/models/venue.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { ImageProcessing } from './image-processing.js';
 import { MediaFilesController } from './media-files.controller.js';
@@ -20,7 +21,7 @@ import { RenditionsWorker } from './renditions.worker.js';
 
 @Module({
   imports: [
-    SequelizeModule.forFeature([MediaAsset, MediaRendition, MediaAltText, PanelMediaUsage, Panel, Story]),
+    SequelizeModule.forFeature([MediaAsset, MediaRendition, MediaAltText, PanelMediaUsage, Panel, Story, Venue]),
     // No storage given, so multer keeps each file in memory: the bytes are checked and hashed before
     // anything is written. Past the size limit multer stops reading and Nest answers 413.
     MulterModule.registerAsync({

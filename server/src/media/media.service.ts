@@ -13,9 +13,11 @@ import { PanelMediaUsage } from '../panels/models/panel-media-usage.model.js';
 import { Panel } from '../panels/models/panel.model.js';
 import { Story } from '../stories/models/story.model.js';
 import type { User } from '../users/models/user.model.js';
+import { Venue } from '../venues/models/venue.model.js';
+import { venueForNewWork } from '../venues/venue-for-new-work.js';
 import type { ListMediaQuery, UpdateMediaDto } from './dto/media.dto.js';
 import { ImageProcessing, MIME_TYPES, sniffImageKind, type ImageKind, type InspectedImage, type ProcessedImage } from './image-processing.js';
-import { mediaLibraryCan } from './media-policy.js';
+import { MEDIA_KEEPERS, mediaLibraryCan } from './media-policy.js';
 import { toMediaView } from './media.presenter.js';
 import { MEDIA_STORE, originalKey, type MediaStore } from './media-store.js';
 import { MediaAltText } from './models/media-alt-text.model.js';
@@ -49,6 +51,7 @@ function filenameOf(file: UploadedFile): string {
 export class MediaService {
   constructor(
     @InjectModel(MediaAsset) private readonly assets: typeof MediaAsset,
+    @InjectModel(Venue) private readonly venues: typeof Venue,
     @InjectModel(MediaRendition) private readonly renditions: typeof MediaRendition,
     @InjectModel(MediaAltText) private readonly altTexts: typeof MediaAltText,
     @InjectModel(PanelMediaUsage) private readonly usages: typeof PanelMediaUsage,
@@ -63,18 +66,19 @@ export class MediaService {
   /**
    * All or nothing: every file is checked and every new image decoded before any is stored, so a
    * refused upload leaves nothing behind; the rows go in one transaction, and a failure there
-   * takes back the files this upload wrote. Stored once per content: the same bytes uploaded
-   * again give the asset that exists. The answer comes once the originals are kept; a new image's
+   * takes back the files this upload wrote. Stored once per content and venue: the same bytes
+   * uploaded again at a venue give the asset it has. The answer comes once the originals are kept; a new image's
    * renditions are pending until the renditions worker has made them.
    */
-  async upload(uploader: User, files: UploadedFile[]): Promise<MediaView[]> {
+  async upload(uploader: User, files: UploadedFile[], venueId?: number): Promise<MediaView[]> {
     if (!files?.length) {
       throw invalidField(['file'], 'Choose at least one image to upload.');
     }
+    const venue = await venueForNewWork(this.venues, uploader, MEDIA_KEEPERS, venueId);
     const named = files.map((file) => ({ buffer: file.buffer, filename: filenameOf(file) }));
     const inspected: InspectedImage[] = [];
     for (const file of named) inspected.push(await this.images.inspect(file.buffer, file.filename));
-    const known = await this.idsOf(inspected.map((image) => image.sha256));
+    const known = await this.idsOf(venue.id, inspected.map((image) => image.sha256));
     const fresh = new Map<string, NewImage>();
     for (const [index, { kind, sha256 }] of inspected.entries()) {
       if (known.has(sha256) || fresh.has(sha256)) continue;
@@ -85,7 +89,7 @@ export class MediaService {
     const written = await this.writeFiles(images);
     let created: Map<string, number>;
     try {
-      created = await this.recordAssets(uploader, images);
+      created = await this.recordAssets(uploader, venue.id, images);
     } catch (error) {
       await this.removeUnclaimed(written);
       throw error;
@@ -176,16 +180,18 @@ export class MediaService {
         if (error instanceof ForeignKeyConstraintError) throw inUse(await this.usageOf([id]));
         throw error;
       }
-      return { sha256: found.sha256, keys };
+      // Another venue's asset of the same bytes shares these files; they stay while it does.
+      if (await this.assets.count({ where: { sha256: found.sha256 }, transaction }) > 0) return { sha256: found.sha256, keys: [] };
+      return { sha256: found.sha256, keys: [originalKey(found.sha256), ...keys] };
     });
     // After the commit: a rolled-back delete must not lose files. A licence that ended must stop being served.
-    for (const key of [originalKey(asset.sha256), ...asset.keys]) await this.store.remove(key);
+    for (const key of asset.keys) await this.store.remove(key);
   }
 
-  /** Asset ids by content hash, for the hashes the library has. */
-  private async idsOf(sha256s: string[], transaction?: Transaction): Promise<Map<string, number>> {
+  /** Asset ids by content hash, for the hashes the venue's library has. */
+  private async idsOf(venueId: number, sha256s: string[], transaction?: Transaction): Promise<Map<string, number>> {
     if (sha256s.length === 0) return new Map();
-    const rows = await this.assets.findAll({ where: { sha256: [...new Set(sha256s)] }, attributes: ['id', 'sha256'], transaction });
+    const rows = await this.assets.findAll({ where: { venueId, sha256: [...new Set(sha256s)] }, attributes: ['id', 'sha256'], transaction });
     return new Map(rows.map((row) => [row.sha256, row.id]));
   }
 
@@ -210,9 +216,9 @@ export class MediaService {
    * The asset and rendition rows of every new image, in one transaction. The same file uploaded
    * twice at once: the first upload's row stands, and the second, on its unique-key error, takes it.
    */
-  private async recordAssets(uploader: User | null, images: NewImage[]): Promise<Map<string, number>> {
+  private async recordAssets(uploader: User | null, venueId: number, images: NewImage[]): Promise<Map<string, number>> {
     if (images.length === 0) return new Map();
-    const record = () => this.sequelize.transaction((transaction) => this.createAssets(uploader, images, transaction));
+    const record = () => this.sequelize.transaction((transaction) => this.createAssets(uploader, venueId, images, transaction));
     try {
       return await record();
     } catch (error) {
@@ -221,12 +227,13 @@ export class MediaService {
     }
   }
 
-  private async createAssets(uploader: User | null, images: NewImage[], transaction: Transaction): Promise<Map<string, number>> {
-    const ids = await this.idsOf(images.map((image) => image.sha256), transaction);
+  private async createAssets(uploader: User | null, venueId: number, images: NewImage[], transaction: Transaction): Promise<Map<string, number>> {
+    const ids = await this.idsOf(venueId, images.map((image) => image.sha256), transaction);
     for (const { sha256, kind, filename, processed } of images) {
       if (ids.has(sha256)) continue;
       const asset = await this.assets.create(
         {
+          venueId,
           sha256,
           originalFilename: filename,
           mime: MIME_TYPES[kind],
@@ -243,9 +250,10 @@ export class MediaService {
     return ids;
   }
 
-  /** After a failed upload: removes the files it wrote, except those of an asset that a simultaneous upload of the same image recorded. */
+  /** After a failed upload: removes the files it wrote, except those of an asset (at any venue) that a simultaneous upload of the same image recorded. */
   private async removeUnclaimed(written: { sha256: string; key: string }[]): Promise<void> {
-    const claimed = await this.idsOf(written.map((file) => file.sha256));
+    if (written.length === 0) return;
+    const claimed = new Set((await this.assets.findAll({ where: { sha256: written.map((file) => file.sha256) }, attributes: ['sha256'] })).map((row) => row.sha256));
     for (const { sha256, key } of written) if (!claimed.has(sha256)) await this.store.remove(key);
   }
 

@@ -117,7 +117,7 @@ export class ReviewsService {
         actor: educator,
         // A deleted account is nobody: 0 matches no person's id.
         revision: { authorId: revision.submittedById ?? 0, approvals: approvals.map((approval) => ({ educatorId: approval.reviewerId ?? 0 })) },
-        requiredApprovals: venue?.requiredApprovals ?? 1,
+        requiredApprovals: venue.requiredApprovals,
         note,
       });
       if (dto.verdict === 'approve') {

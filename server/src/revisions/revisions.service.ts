@@ -20,7 +20,6 @@ import { Review } from '../reviews/models/review.model.js';
 import { toReviewView } from '../reviews/reviews.presenter.js';
 import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
-import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { Revision } from './models/revision.model.js';
 import { revisionCan } from './revision-policy.js';
@@ -95,13 +94,9 @@ export class RevisionsService {
     });
   }
 
-  /** The story's venue: its exhibit's, or else the first venue set up (a story need not be in an exhibit yet). */
-  async venueOf(story: Story, transaction?: Transaction): Promise<Venue | null> {
-    if (story.exhibitId) {
-      const exhibit = await this.exhibits.findByPk(story.exhibitId, { include: [{ model: Gallery, include: [Venue] }], transaction });
-      if (exhibit?.gallery?.venue) return exhibit.gallery.venue;
-    }
-    return this.venues.findOne({ order: [['id', 'ASC']], transaction });
+  /** The story's venue, whose settings (approvals needed, languages) its review follows. */
+  async venueOf(story: Story, transaction?: Transaction): Promise<Venue> {
+    return this.venues.findByPk(story.venueId, { transaction, rejectOnEmpty: true });
   }
 
   /** Newest first. */
@@ -144,7 +139,7 @@ export class RevisionsService {
       storyState: story!.state,
       authorId: revision.submittedById,
       approverIds: reviews.filter((review) => review.verdict === 'approve').map((review) => review.reviewerId),
-      requiredApprovals: (await this.venueOf(story!))?.requiredApprovals ?? 1,
+      requiredApprovals: (await this.venueOf(story!)).requiredApprovals,
       blockers: revision.blockerCount,
     });
     return toRevisionView(revision, { reviews: reviews.map(toReviewView), comments, previousApprovedRevisionId: previous?.id ?? null, can });

@@ -166,13 +166,13 @@ export class DemoStories {
 
     const ids = new Map<string, number>();
     for (const image of IMAGES) {
-      const [asset] = await this.media.upload(curator, [{ originalname: image.filename, buffer: await renderDemoImage(image.name) }]);
+      const [asset] = await this.media.upload(curator, [{ originalname: image.filename, buffer: await renderDemoImage(image.name) }], gallery.venueId);
       await this.media.updateDetails(asset!.id, { credit: CREDIT, licence: { kind: 'spdx', id: 'CC-BY-4.0' }, licenceExpiresOn: LICENCE_EXPIRES_ON, alt: image.alt }, curator);
       ids.set(`demo-${image.name}`, asset!.id);
     }
 
     for (const { title, panels } of STORIES) {
-      const story = await this.stories.create({ title, audience: 'family', sourceLocale: 'en', state: 'draft', exhibitId: exhibit.id, createdById: curator.id });
+      const story = await this.stories.create({ title, audience: 'family', sourceLocale: 'en', state: 'draft', venueId: gallery.venueId, exhibitId: exhibit.id, createdById: curator.id });
       for (const panel of panels) await this.panels.addPanel(story.id, { doc: withImageIds(panel, ids) });
     }
   }

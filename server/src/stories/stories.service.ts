@@ -3,10 +3,10 @@ import { InjectModel } from '@nestjs/sequelize';
 import { Op, UniqueConstraintError, type FindOptions, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { StoryDetailView, StoryPage, StoryView } from '@mantlepiece/shared';
-import type { Person } from '../auth/policy.js';
+import { inScope, venueScope, type Member, type Person } from '../auth/policy.js';
 import { likePattern, orderOf } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
-import { unknownReference } from '../common/validation.js';
+import { invalidField, unknownReference } from '../common/validation.js';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { PanelDocument } from '../panels/models/panel-document.model.js';
 import { Panel } from '../panels/models/panel.model.js';
@@ -17,10 +17,8 @@ import { Venue } from '../venues/models/venue.model.js';
 import type { CreateStoryDto, ListStoriesQuery, UpdateStoryDto } from './dto/story.dto.js';
 import { Story } from './models/story.model.js';
 import { toStoryView } from './stories.presenter.js';
-import { refuseUnlessEditable, storiesCan } from './story-policy.js';
-
-/** Used when there is neither an exhibit nor a venue to take the language from. */
-const FALLBACK_SOURCE_LOCALE = 'en';
+import { refuseUnlessEditable, storiesCan, STORY_WRITERS } from './story-policy.js';
+import { venueForNewWork } from '../venues/venue-for-new-work.js';
 
 /** The story's latest approved revision, as `id:number`, so the list reads it without a query per row. */
 const APPROVED_REVISION_COLUMN = Sequelize.literal(
@@ -87,14 +85,17 @@ export class StoriesService {
     return { ...toStoryView(story, person), panels: await this.panels.listForStory(story) };
   }
 
+  /** A story belongs to its exhibit's venue, or to the venue named, and is written in its language unless told otherwise. */
   async createStory(author: User, dto: CreateStoryDto): Promise<StoryView> {
-    const exhibitId = dto.exhibitId ?? null;
-    const sourceLocale = dto.sourceLocale ?? (await this.defaultSourceLocale(exhibitId));
+    const exhibit = dto.exhibitId ? await this.findExhibit(dto.exhibitId, author) : null;
+    const venue = exhibit?.gallery?.venue ?? (await venueForNewWork(this.venues, author, STORY_WRITERS, dto.venueId));
+    if (dto.venueId != null && dto.venueId !== venue.id) throw invalidField(['venueId'], 'The exhibit is at another venue.');
     const story = await this.stories.create({
       title: dto.title,
       audience: dto.audience ?? 'family',
-      sourceLocale,
-      exhibitId,
+      sourceLocale: dto.sourceLocale ?? venue.sourceLocale,
+      venueId: venue.id,
+      exhibitId: exhibit?.id ?? null,
       createdById: author.id,
       state: 'draft',
     });
@@ -105,11 +106,13 @@ export class StoriesService {
    * Changing the source locale relabels the panels' source documents, so the studio keeps editing
    * the same text; it is refused if a translation into that locale already exists.
    */
-  async updateStory(id: number, dto: UpdateStoryDto, person: Person): Promise<StoryView> {
+  async updateStory(id: number, dto: UpdateStoryDto, person: Member): Promise<StoryView> {
     await this.sequelize.transaction(async (transaction) => {
       const story = await this.lock(id, transaction);
       refuseUnlessEditable(story);
-      if (dto.exhibitId) await this.findExhibit(dto.exhibitId, transaction);
+      if (dto.exhibitId && (await this.findExhibit(dto.exhibitId, person, transaction)).gallery!.venueId !== story.venueId) {
+        throw invalidField(['exhibitId'], 'The exhibit is at another venue; a story stays at its venue.');
+      }
       if (dto.sourceLocale && dto.sourceLocale !== story.sourceLocale) {
         await this.relabelSourceDocuments(story, dto.sourceLocale, transaction);
       }
@@ -139,17 +142,11 @@ export class StoriesService {
     return story;
   }
 
-  private async findExhibit(id: number, transaction?: Transaction): Promise<Exhibit> {
+  /** An exhibit at a venue where the person writes stories; any other answers as if it did not exist. */
+  private async findExhibit(id: number, person: Member, transaction?: Transaction): Promise<Exhibit> {
     const exhibit = await this.exhibits.findByPk(id, { include: [{ model: Gallery, include: [Venue] }], transaction });
-    if (!exhibit) throw unknownReference(['exhibitId'], 'There is no such exhibit.');
+    if (!exhibit || !inScope(venueScope(person, STORY_WRITERS), exhibit.gallery!.venueId)) throw unknownReference(['exhibitId'], 'There is no such exhibit.');
     return exhibit;
-  }
-
-  /** The language the story's venue writes in: the exhibit's venue, or else the first venue set up. */
-  private async defaultSourceLocale(exhibitId: number | null): Promise<string> {
-    if (exhibitId) return (await this.findExhibit(exhibitId)).gallery!.venue!.sourceLocale;
-    const venue = await this.venues.findOne({ order: [['id', 'ASC']] });
-    return venue?.sourceLocale ?? FALLBACK_SOURCE_LOCALE;
   }
 
   private async relabelSourceDocuments(story: Story, locale: string, transaction: Transaction): Promise<void> {

@@ -2,12 +2,10 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import { mediaIdsIn, segmentAltText, segmentPanel, segmentStoryTitle, type PanelDocJSON, type RevisionSnapshot, type TranslationUnit } from '@mantlepiece/shared';
-import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { PanelDocument } from '../panels/models/panel-document.model.js';
 import { Panel } from '../panels/models/panel.model.js';
 import { Story } from '../stories/models/story.model.js';
-import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 
 export interface PanelSource {
@@ -31,7 +29,7 @@ export interface AltTextSource {
 /** A story's current source, cut into translation units, with the locales its venue translates into. */
 export interface StorySource {
   story: Story;
-  venue: Venue | null;
+  venue: Venue;
   targetLocales: string[];
   /** The title's unit: the current title, or the one the revision froze. */
   title: TranslationUnit;
@@ -72,7 +70,6 @@ export class SourceUnitsService {
 
   constructor(
     @InjectModel(Story) private readonly stories: typeof Story,
-    @InjectModel(Venue) private readonly venues: typeof Venue,
     @InjectModel(Panel) private readonly panels: typeof Panel,
     @InjectModel(MediaAltText) private readonly altTexts: typeof MediaAltText,
   ) {}
@@ -87,7 +84,6 @@ export class SourceUnitsService {
   async sourcesOf(storyIds: readonly number[], transaction?: Transaction): Promise<StorySource[]> {
     if (storyIds.length === 0) return [];
     const stories = await this.storiesWithVenues(storyIds, transaction);
-    const firstVenue = await this.venues.findOne({ order: [['id', 'ASC']], transaction });
     const panels = await this.panels.findAll({
       where: { storyId: stories.map((story) => story.id) },
       include: [PanelDocument],
@@ -106,8 +102,7 @@ export class SourceUnitsService {
             memoKey: document ? `panel:${document.id}:${document.version}:${document.locale}` : '',
           };
         });
-        // A story outside any exhibit is written for the first venue set up, as the stories module decides.
-        return [this.build(story, story.exhibit?.gallery?.venue ?? firstVenue, story.title, story.sourceLocale, inputs, transaction)];
+        return [this.build(story, story.venue!, story.title, story.sourceLocale, inputs, transaction)];
       }),
     );
   }
@@ -119,7 +114,7 @@ export class SourceUnitsService {
   async sourceAt(revision: FrozenSource, transaction?: Transaction): Promise<StorySource> {
     const [story] = await this.storiesWithVenues([revision.storyId], transaction);
     if (!story) throw new NotFoundException('There is no such story.');
-    const venue = story.exhibit?.gallery?.venue ?? (await this.venues.findOne({ order: [['id', 'ASC']], transaction }));
+    const venue = story.venue!;
     const { sourceLocale, title } = revision.snapshot.story;
     const inputs = revision.snapshot.panels.map((panel): PanelInput => ({
       panelId: panel.id, position: panel.position, version: 0, doc: panel.docs[sourceLocale] ?? null, memoKey: `revision:${revision.id}:${panel.id}`,
@@ -130,12 +125,12 @@ export class SourceUnitsService {
   private storiesWithVenues(storyIds: readonly number[], transaction?: Transaction): Promise<Story[]> {
     return this.stories.findAll({
       where: { id: [...storyIds] },
-      include: [{ model: Exhibit, include: [{ model: Gallery, include: [Venue] }] }],
+      include: [Venue],
       transaction,
     });
   }
 
-  private async build(story: Story, venue: Venue | null, title: string, sourceLocale: string, panels: PanelInput[], transaction?: Transaction): Promise<StorySource> {
+  private async build(story: Story, venue: Venue, title: string, sourceLocale: string, panels: PanelInput[], transaction?: Transaction): Promise<StorySource> {
     const panelSources = await Promise.all(
       panels.map(async (panel, index) => {
         const panelNumber = index + 1;
@@ -149,7 +144,7 @@ export class SourceUnitsService {
     return {
       story,
       venue,
-      targetLocales: (venue?.targetLocales ?? []).filter((locale) => locale !== sourceLocale),
+      targetLocales: venue.targetLocales.filter((locale) => locale !== sourceLocale),
       title: titleUnit!,
       panels: panelSources,
       altTexts: await this.altTextSources(panelSources, sourceLocale, transaction),

@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
 import { RefreshToken } from '../auth/models/refresh-token.model.js';
 import { MailModule } from '../mail/mail.module.js';
+import { VenueMembership } from './models/venue-membership.model.js';
 import { Invitation } from './models/invitation.model.js';
 import { User } from './models/user.model.js';
 import { InvitationsService } from './invitations.service.js';
@@ -10,7 +11,7 @@ import { UsersController } from './users.controller.js';
 import { UsersService } from './users.service.js';
 
 @Module({
-  imports: [SequelizeModule.forFeature([User, Invitation, RefreshToken]), MailModule],
+  imports: [SequelizeModule.forFeature([User, VenueMembership, Invitation, RefreshToken]), MailModule],
   controllers: [UsersController],
   providers: [UsersService, InvitationsService, PasswordHasher],
   exports: [UsersService, InvitationsService, PasswordHasher],

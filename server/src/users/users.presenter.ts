@@ -9,6 +9,7 @@ export function toUserView(user: User): UserView {
     name: user.name,
     roles: user.roles,
     locales: user.locales,
+    memberships: (user.memberships ?? []).map(({ venueId, roles, locales }) => ({ venueId, roles, locales })),
     uiLanguage: user.uiLanguage,
     active: user.active,
     createdAt: user.createdAt.toISOString(),

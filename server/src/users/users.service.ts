@@ -10,6 +10,7 @@ import { pageWindow, toPage } from '../common/page.js';
 import type { ListUsersQuery } from './dto/list-users.query.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
 import { User } from './models/user.model.js';
+import { VenueMembership } from './models/venue-membership.model.js';
 import { toUserView } from './users.presenter.js';
 
 export interface NewAccount {
@@ -35,11 +36,11 @@ export class UsersService {
   ) {}
 
   findActive(id: number): Promise<User | null> {
-    return this.users.findOne({ where: { id, active: true } });
+    return this.users.findOne({ where: { id, active: true }, include: [VenueMembership] });
   }
 
   findByEmail(email: string, transaction?: Transaction): Promise<User | null> {
-    return this.users.findOne({ where: { email: email.trim().toLowerCase() }, transaction });
+    return this.users.findOne({ where: { email: email.trim().toLowerCase() }, include: [VenueMembership], transaction });
   }
 
   count(): Promise<number> {
@@ -69,7 +70,7 @@ export class UsersService {
     const descending = query.sort.startsWith('-');
     const key = descending ? query.sort.slice(1) : query.sort;
     const order: Order = [[key, descending ? 'DESC' : 'ASC'], ['id', 'ASC']];
-    const { rows, count } = await this.users.findAndCountAll({ where: { [Op.and]: conditions }, order, ...pageWindow(query) });
+    const { rows, count } = await this.users.findAndCountAll({ where: { [Op.and]: conditions }, include: [VenueMembership], distinct: true, order, ...pageWindow(query) });
     return toPage(rows.map(toUserView), count, query);
   }
 
@@ -79,7 +80,7 @@ export class UsersService {
       throw new ConflictException('You cannot remove your own admin access; ask another admin.');
     }
     return this.sequelize.transaction(async (transaction) => {
-      const user = await this.users.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+      const user = await this.users.findByPk(id, { include: [VenueMembership], transaction, lock: transaction.LOCK.UPDATE });
       if (!user) throw new NotFoundException('There is no such person.');
       const record = (action: Parameters<AuditService['record']>[0]['action'], detail: Record<string, unknown>) =>
         this.audit.record({ actorId: actor.id, action, targetType: 'user', targetId: user.id, detail, clientAddress }, transaction);

@@ -18,6 +18,7 @@ import * as livingStory from './0650-living-story.js';
 import * as demoKiosk from './0660-demo-kiosk.js';
 import * as backgroundJobs from './0730-background-jobs.js';
 import * as queuedRenditions from './0731-queued-renditions.js';
+import * as venueBoundaries from './0800-venue-boundaries.js';
 import * as venueTimeZones from './0810-venue-time-zones.js';
 
 interface MigrationModule {
@@ -46,6 +47,7 @@ const modules: [string, MigrationModule][] = [
   ['0660-demo-kiosk', demoKiosk],
   ['0730-background-jobs', backgroundJobs],
   ['0731-queued-renditions', queuedRenditions],
+  ['0800-venue-boundaries', venueBoundaries],
   ['0810-venue-time-zones', venueTimeZones],
 ];
 

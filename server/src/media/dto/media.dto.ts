@@ -5,13 +5,21 @@ import { MEDIA_MISSING_FILTERS, type MediaLicence, type MediaMissingFilter } fro
 import { OptionalDateOnlyField } from '../../common/date-only.js';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
-import { Omittable, QueryInt } from '../../common/validation.js';
+import { Omittable, QueryInt, QueryRowId } from '../../common/validation.js';
 import { canonicalLocale } from '../../common/locale-tag.js';
 
 export const MEDIA_SORT_KEYS = ['createdAt', 'filename', 'bytes', 'licenceExpiresOn'] as const;
 // The SPDX list as a JSON array, kept current by its package rather than by us.
 const SPDX_IDS = new Set<string>(createRequire(import.meta.url)('spdx-license-ids') as string[]);
 const MAX_ALT_LENGTH = 1000;
+
+/** The form fields beside an upload's files. */
+export class UploadMediaDto {
+  @ApiPropertyOptional({ description: 'The venue the images belong to; needed when the uploader keeps images at several venues' })
+  @IsOptional()
+  @QueryRowId()
+  venueId?: number;
+}
 
 export class ListMediaQuery extends PageQuery {
   @SearchField()

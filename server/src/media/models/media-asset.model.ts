@@ -1,15 +1,21 @@
-import { Column, DataType, HasMany, Model, Table } from 'sequelize-typescript';
+import { Column, DataType, ForeignKey, HasMany, Model, Table } from 'sequelize-typescript';
 import { RENDITION_STATES, type RenditionState } from '@mantlepiece/shared';
+import { Venue } from '../../venues/models/venue.model.js';
 import { MediaAltText } from './media-alt-text.model.js';
 import { MediaRendition } from './media-rendition.model.js';
 
 export const LICENCE_KINDS = ['spdx', 'all-rights-reserved'] as const;
 export type LicenceKind = (typeof LICENCE_KINDS)[number];
 
-/** An uploaded image, stored once per content (sha256), with its rights and alt text. */
+/** An uploaded image of one venue, once per content (sha256) there, with its rights and alt text. */
 @Table({ tableName: 'media_assets' })
 export class MediaAsset extends Model {
-  @Column({ type: DataType.CHAR(64), allowNull: false, unique: true })
+  @ForeignKey(() => Venue)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  venueId: number;
+
+  /** Unique per venue; two venues' assets of the same bytes share one stored file. */
+  @Column({ type: DataType.CHAR(64), allowNull: false })
   sha256: string;
 
   @Column({ type: DataType.STRING(255), allowNull: false })

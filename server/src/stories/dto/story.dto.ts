@@ -19,7 +19,8 @@ const TitleField = () =>
     MaxLength(200),
   );
 
-export class CreateStoryDto {
+/** What a story's details are; where it belongs is set when it is made. */
+class StoryDetailsDto {
   @TitleField()
   title: string;
 
@@ -39,7 +40,15 @@ export class CreateStoryDto {
   sourceLocale?: string;
 }
 
-export class UpdateStoryDto extends PatchType(CreateStoryDto) {}
+export class CreateStoryDto extends StoryDetailsDto {
+  @ApiPropertyOptional({ description: "The venue the story belongs to: the exhibit's when it names one; needed when the author writes at several venues" })
+  @IsOptional()
+  @IsRowId()
+  venueId?: number;
+}
+
+/** A story stays at its venue; its exhibit may change to another of the same venue. */
+export class UpdateStoryDto extends PatchType(StoryDetailsDto) {}
 
 export class ListStoriesQuery extends PageQuery {
   @SearchField()

@@ -2,6 +2,7 @@ import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize
 import { AUDIENCES, STORY_STATES, type Audience, type StoryState } from '@mantlepiece/shared';
 import { Exhibit } from '../../exhibits/models/exhibit.model.js';
 import { User } from '../../users/models/user.model.js';
+import { Venue } from '../../venues/models/venue.model.js';
 
 @Table({ tableName: 'stories' })
 export class Story extends Model {
@@ -17,6 +18,14 @@ export class Story extends Model {
 
   @Column({ type: DataType.ENUM(...STORY_STATES), allowNull: false, defaultValue: 'draft' })
   state: StoryState;
+
+  /** The venue the story belongs to: its exhibit's, when it has one. */
+  @ForeignKey(() => Venue)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
+  venueId: number;
+
+  @BelongsTo(() => Venue)
+  venue?: Venue;
 
   @ForeignKey(() => Exhibit)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })

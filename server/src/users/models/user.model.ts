@@ -1,6 +1,7 @@
-import { Column, DataType, Model, Table } from 'sequelize-typescript';
+import { Column, DataType, HasMany, Model, Table } from 'sequelize-typescript';
 import type { Role } from '@mantlepiece/shared';
 import { jsonColumn } from '../../database/json-column.js';
+import { VenueMembership } from './venue-membership.model.js';
 
 @Table({ tableName: 'users' })
 export class User extends Model {
@@ -13,11 +14,17 @@ export class User extends Model {
   @Column({ type: DataType.STRING(255), allowNull: false })
   passwordHash: string;
 
+  /** Roles held at every venue: the organisation admin's, and those of anyone the admin did not narrow to venues. */
   @Column(jsonColumn('roles'))
   roles: Role[];
 
+  /** Locales a translator translates into at every venue. */
   @Column(jsonColumn('locales'))
   locales: string[];
+
+  /** Roles and locales held at one venue each; read with the person on every request. */
+  @HasMany(() => VenueMembership)
+  memberships?: VenueMembership[];
 
   @Column({ type: DataType.STRING(12), allowNull: false, defaultValue: 'en' })
   uiLanguage: string;
