@@ -1,6 +1,6 @@
 import i18next from 'i18next';
 import { initReactI18next } from 'react-i18next';
-import { UI_LANGUAGE_CODES, type Translated, type UiLanguage } from '@mantlepiece/shared/kiosk';
+import { matchUiLanguage, UI_LANGUAGE_CODES, type Translated, type UiLanguage } from '@mantlepiece/shared/kiosk';
 import { ar } from './locales/ar';
 import { en, type KioskMessages } from './locales/en';
 import { es } from './locales/es';
@@ -23,11 +23,9 @@ declare module 'i18next' {
   }
 }
 
-/** The venue's languages the kiosk can speak, in the venue's order; English when none match. */
+/** The venue's languages the kiosk can speak (each by RFC 4647 lookup, fr-CA → fr), in the venue's order; English when none match. */
 export function kioskLanguages(venueLocales: readonly string[]): KioskLanguage[] {
-  const matches = venueLocales
-    .map((tag) => tag.toLowerCase().split('-')[0])
-    .filter((code): code is KioskLanguage => KIOSK_LANGUAGES.includes(code as KioskLanguage));
+  const matches = venueLocales.flatMap((tag) => matchUiLanguage([tag]) ?? []);
   return matches.length ? [...new Set(matches)] : ['en'];
 }
 

@@ -40,7 +40,7 @@ export function StoryScreen({ t, release, story, settings, reducedMotion, panelI
   const { manifest } = release;
   const panels = useMemo(() => panelsInOrder(story), [story]);
   const panel = panels[Math.min(panelIndex, panels.length - 1)];
-  const shown = panel ? panelDoc(panel, settings.locale, manifest) : null;
+  const shown = panel ? panelDoc(story, panel, settings.locale, manifest) : null;
   const dir = directionOf(settings.locale);
   const { stage, size } = useStageSize();
   const layout: PanelLayout = size.height > size.width ? 'portrait' : 'landscape';

@@ -1,21 +1,23 @@
 import type { PanelDocJSON, ReleaseManifest, ReleasePanel, ReleaseStory } from '@mantlepiece/shared/kiosk';
 import type { ResolveMedia } from '@mantlepiece/shared/kiosk';
-import { mediaIdsIn } from '@mantlepiece/shared/kiosk';
+import { lookupLanguage, lookupText, mediaIdsIn } from '@mantlepiece/shared/kiosk';
 import type { PlayableRelease } from '../sync/playable-release';
 
-/** A panel's document in the visitor's language, or in the source language when it has none. */
-export function panelDoc(panel: ReleasePanel, locale: string, manifest: ReleaseManifest): { doc: PanelDocJSON; locale: string } | null {
-  const own = panel.docs[locale];
-  if (own) return { doc: own, locale };
-  const source = panel.docs[manifest.venue.sourceLocale];
-  return source ? { doc: source, locale: manifest.venue.sourceLocale } : null;
+/**
+ * The languages a story's text is looked for in, best first: the visitor's, the venue's, then the
+ * story's own (which may be en-GB in an en venue). RFC 4647 lookup truncates each in turn.
+ */
+const wantedFor = (locale: string, story: ReleaseStory, manifest: ReleaseManifest) => [locale, manifest.venue.sourceLocale, story.sourceLocale];
+
+/** A panel's document in the visitor's language by lookup, or in the story's language when it has none. */
+export function panelDoc(story: ReleaseStory, panel: ReleasePanel, locale: string, manifest: ReleaseManifest): { doc: PanelDocJSON; locale: string } | null {
+  const found = lookupLanguage(wantedFor(locale, story, manifest), Object.keys(panel.docs));
+  return found === undefined ? null : { doc: panel.docs[found]!, locale: found };
 }
 
 export function storyTitle(story: ReleaseStory, locale: string, manifest: ReleaseManifest): { text: string; locale: string } {
-  const own = story.title[locale];
-  if (own) return { text: own, locale };
-  const sourceLocale = manifest.venue.sourceLocale;
-  return { text: story.title[sourceLocale] ?? Object.values(story.title)[0] ?? '', locale: sourceLocale };
+  const found = lookupText(story.title, wantedFor(locale, story, manifest));
+  return found ? { text: found.text, locale: found.tag } : { text: Object.values(story.title)[0] ?? '', locale: manifest.venue.sourceLocale };
 }
 
 export const panelsInOrder = (story: ReleaseStory): ReleasePanel[] => [...story.panels].sort((a, b) => a.position - b.position);
@@ -23,8 +25,8 @@ export const panelsInOrder = (story: ReleaseStory): ReleasePanel[] => [...story.
 /** The first image a story shows, for its highlight on the attract loop and its card in the menu. */
 export function storyImage(story: ReleaseStory, manifest: ReleaseManifest): string | undefined {
   for (const panel of panelsInOrder(story)) {
-    const doc = panel.docs[manifest.venue.sourceLocale];
-    const [first] = doc ? mediaIdsIn(doc) : [];
+    const shown = panelDoc(story, panel, manifest.venue.sourceLocale, manifest);
+    const [first] = shown ? mediaIdsIn(shown.doc) : [];
     if (first) return first;
   }
   return undefined;
@@ -37,6 +39,6 @@ export function mediaResolver(release: PlayableRelease, locale: string): Resolve
     const media = byId.get(mediaId);
     const src = release.imageUrls.get(mediaId);
     if (!media || !src) return null;
-    return { src, alt: media.alt[locale] ?? media.alt[release.manifest.venue.sourceLocale] ?? '', credit: media.credit ?? undefined };
+    return { src, alt: lookupText(media.alt, [locale, release.manifest.venue.sourceLocale])?.text ?? '', credit: media.credit ?? undefined };
   };
 }

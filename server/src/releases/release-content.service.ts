@@ -1,7 +1,7 @@
 import { Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, type Transaction } from 'sequelize';
-import { preflightBlockers, type ApiErrorBody, type ReleaseMedia, type ReleaseStory as ManifestStory } from '@mantlepiece/shared';
+import { lookupText, preflightBlockers, type ApiErrorBody, type ReleaseMedia, type ReleaseStory as ManifestStory } from '@mantlepiece/shared';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { MediaAsset } from '../media/models/media-asset.model.js';
@@ -142,6 +142,7 @@ export class ReleaseContentService {
       stories.push({
         id: snapshot.story.id,
         revisionId: revision.id,
+        sourceLocale: snapshot.story.sourceLocale,
         title: { ...targets.titles, [snapshot.story.sourceLocale]: snapshot.story.title },
         audience: snapshot.story.audience,
         panels: snapshot.panels.map((panel) => ({
@@ -154,11 +155,15 @@ export class ReleaseContentService {
     return stories;
   }
 
-  /** The images the stories show, with alt text in the venue's locales, credit and renditions to copy. */
+  /**
+   * The images the stories show, with credit, renditions to copy and alt text for each language a
+   * kiosk may show them in (the venue's and the stories' own), each chosen by RFC 4647 lookup, so
+   * a venue's en-GB takes the image's en alt text.
+   */
   async manifestMedia(venue: Venue, chosen: ChosenRevision[]): Promise<{ media: ReleaseMedia[]; renditions: RenditionSource[] }> {
     const ids = mediaIdsOf(chosen);
     const assets = await this.media.findAll({ where: { id: { [Op.in]: ids.length ? ids : [0] } }, include: [MediaRendition, MediaAltText], order: [['id', 'ASC']] });
-    const locales = new Set(localesOf(venue));
+    const locales = [...new Set([...localesOf(venue), ...chosen.map((c) => c.revision.snapshot.story.sourceLocale)])];
     const missing = ids.filter((id) => !assets.some((asset) => asset.id === id));
     if (missing.length) throw new NotFoundException(`Media ${missing.join(', ')} shown by these stories is no longer in the library.`);
     const renditions: RenditionSource[] = [];
@@ -167,13 +172,22 @@ export class ReleaseContentService {
       renditions.push(...sorted.map((r) => ({ sha256: r.sha256, storeKey: r.storeKey, bytes: r.bytes })));
       return {
         mediaId: String(asset.id),
-        alt: Object.fromEntries((asset.altTexts ?? []).filter((alt) => locales.has(alt.locale)).map((alt) => [alt.locale, alt.text])),
+        alt: altTextsFor(asset.altTexts ?? [], locales),
         credit: asset.credit,
         renditions: sorted.map((r) => ({ width: r.width, sha256: r.sha256 })),
       };
     });
     return { media, renditions };
   }
+}
+
+/** Per language asked for, the alt text lookup finds for it; a language none fits is left out. */
+function altTextsFor(altTexts: readonly MediaAltText[], locales: readonly string[]): Record<string, string> {
+  const byTag = Object.fromEntries(altTexts.map((alt) => [alt.locale, alt.text]));
+  return Object.fromEntries(locales.flatMap((locale) => {
+    const found = lookupText(byTag, [locale]);
+    return found ? [[locale, found.text]] : [];
+  }));
 }
 
 /** The library images the chosen revisions show. */

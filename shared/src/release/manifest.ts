@@ -34,6 +34,11 @@ const releasePanelSchema = z.object({
 const releaseStorySchema = z.object({
   id: z.number().int(),
   revisionId: z.number().int(),
+  /**
+   * The language the story is written in, which may differ from the venue's (en-GB in an en
+   * venue): what a kiosk shows when lookup finds none of the visitor's. Older releases lack it.
+   */
+  sourceLocale: z.string().optional(),
   title: localeText,
   audience: z.enum(['family', 'school', 'adult']),
   panels: z.array(releasePanelSchema),
