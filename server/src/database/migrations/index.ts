@@ -20,6 +20,7 @@ import * as backgroundJobs from './0730-background-jobs.js';
 import * as queuedRenditions from './0731-queued-renditions.js';
 import * as venueBoundaries from './0800-venue-boundaries.js';
 import * as venueTimeZones from './0810-venue-time-zones.js';
+import * as canonicalLanguageTags from './0820-canonical-language-tags.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -49,6 +50,7 @@ const modules: [string, MigrationModule][] = [
   ['0731-queued-renditions', queuedRenditions],
   ['0800-venue-boundaries', venueBoundaries],
   ['0810-venue-time-zones', venueTimeZones],
+  ['0820-canonical-language-tags', canonicalLanguageTags],
 ];
 
 export const migrations = modules.map(([name, m]) => ({
