@@ -4,9 +4,9 @@ import { api, apiFile } from './client';
 
 export interface InsightsFilter {
   galleryId: number;
-  /** YYYY-MM-DD, both ends included. */
-  from: string;
-  to: string;
+  /** YYYY-MM-DD, days of the gallery's venue, both ends included; the server picks the last 30 of the venue's days when left out. */
+  from?: string;
+  to?: string;
 }
 
 export function useInsights(filter: InsightsFilter | null) {

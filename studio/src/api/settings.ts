@@ -15,7 +15,7 @@ export interface SettingsListParams {
 }
 
 /** What a settings form sends: the view without what the server assigns. */
-export type VenueFields = Pick<VenueView, 'name' | 'slug' | 'sourceLocale' | 'targetLocales'>;
+export type VenueFields = Pick<VenueView, 'name' | 'slug' | 'sourceLocale' | 'targetLocales' | 'timeZone'>;
 export type GalleryFields = Omit<GalleryView, 'id'>;
 export type StationFields = Omit<StationView, 'id' | 'can'>;
 export type ExhibitFields = Omit<ExhibitView, 'id'>;

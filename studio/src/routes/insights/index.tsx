@@ -24,13 +24,17 @@ export function InsightsPage() {
   const styles = useStyles();
   const [search, setSearch] = useSearchParams();
   const galleries = useGalleries(GALLERY_CHOICES);
-  const filter = readInsightsFilter(search, new Date(), galleries.data?.items[0]?.id);
+  const filter = readInsightsFilter(search, galleries.data?.items[0]?.id);
   const insights = useInsights(filter);
+  // The days on show: those chosen, else those the server counted (the venue's last 30).
+  const shown = filter && insights.data?.galleryId === filter.galleryId
+    ? { ...filter, from: filter.from ?? insights.data.from, to: filter.to ?? insights.data.to }
+    : null;
   const download = useDownloadInsightsCsv();
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
 
-  const downloadButton = filter ? (
-    <Button icon={<ArrowDownloadRegular />} disabled={download.isPending} onClick={() => download.mutate(filter, { onSuccess: (blob) => saveFile(blob, insightsFileName(filter)) })}>
+  const downloadButton = shown ? (
+    <Button icon={<ArrowDownloadRegular />} disabled={download.isPending} onClick={() => download.mutate(shown, { onSuccess: (blob) => saveFile(blob, insightsFileName(shown)) })}>
       {download.isPending ? t('insights.downloading') : t('insights.download')}
     </Button>
   ) : null;
@@ -54,11 +58,11 @@ export function InsightsPage() {
             {galleries.data?.items.map((gallery) => <option key={gallery.id} value={String(gallery.id)}>{gallery.name}</option>)}
           </Select>
         </Field>
-        <Field label={t('insights.from')}>
-          <Input type="date" value={filter.from} max={filter.to} onChange={(_event, data) => change({ from: data.value || undefined })} />
+        <Field label={t('insights.from')} hint={insights.data ? t('insights.daysIn', { timeZone: insights.data.timeZone }) : undefined}>
+          <Input type="date" value={shown?.from ?? ''} max={shown?.to} onChange={(_event, data) => change({ from: data.value || undefined })} />
         </Field>
         <Field label={t('insights.to')}>
-          <Input type="date" value={filter.to} min={filter.from} onChange={(_event, data) => change({ to: data.value || undefined })} />
+          <Input type="date" value={shown?.to ?? ''} min={shown?.from} onChange={(_event, data) => change({ to: data.value || undefined })} />
         </Field>
       </div>
       {insights.isPending ? (

@@ -6,6 +6,7 @@ import { useGalleries, useSaveSetting, useVenues, type SettingsCollection, type 
 import { FormDialog } from '../../components/FormDialog';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError, serverFieldMessage } from '../../components/forms/describe-error';
+import { TimeZonePicker } from '../../components/forms/TimeZonePicker';
 import { hasProblems } from '../../components/forms/validation';
 import { SETTINGS_FORMS, type SettingsInput, type SettingsValues } from './settings-forms';
 
@@ -48,6 +49,8 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
           </Select>
         );
       }
+      case 'timeZone':
+        return <TimeZonePicker value={value} onChange={(zone) => set(input.name, zone)} />;
       case 'orientation':
         return (
           <Select value={value} onChange={(_event, data) => set(input.name, data.value)}>

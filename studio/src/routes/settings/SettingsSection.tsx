@@ -71,6 +71,7 @@ export function SettingsSection({ collection }: { collection: SettingsCollection
         { key: 'slug', cell: (venue: VenueView) => venue.slug },
         { key: 'sourceLocale', cell: (venue: VenueView) => languageName(venue.sourceLocale) },
         { key: 'targetLocales', cell: (venue: VenueView) => venue.targetLocales.map(languageName).join(', ') || '—' },
+        { key: 'timeZone', cell: (venue: VenueView) => venue.timeZone },
       ],
       galleries: [
         { key: 'name', sortable: true, cell: (gallery: GalleryView) => gallery.name },

@@ -1,4 +1,4 @@
-import { ORIENTATIONS, type ExhibitView, type GalleryView, type Orientation, type StationView, type VenueView } from '@mantlepiece/shared';
+import { canonicalTimeZone, ORIENTATIONS, type ExhibitView, type GalleryView, type Orientation, type StationView, type VenueView } from '@mantlepiece/shared';
 import type { TFunction } from 'i18next';
 import type { SettingsCollection, SettingsFields, SettingsView } from '../../api/settings';
 import { parseLocales, requiredProblem } from '../../components/forms/validation';
@@ -6,10 +6,10 @@ import { parseLocales, requiredProblem } from '../../components/forms/validation
 /** One input of a settings dialog. Every value is edited as text and converted when sent. */
 export interface SettingsInput {
   name: string;
-  kind: 'text' | 'number' | 'date' | 'orientation' | 'venue' | 'gallery';
+  kind: 'text' | 'number' | 'date' | 'orientation' | 'venue' | 'gallery' | 'timeZone';
   required?: boolean;
   /** Hint key under settings.hints. */
-  hint?: 'slug' | 'sourceLocale' | 'targetLocales' | 'mounting' | 'screen';
+  hint?: 'slug' | 'sourceLocale' | 'targetLocales' | 'mounting' | 'screen' | 'timeZone';
   unit?: string;
 }
 
@@ -31,9 +31,13 @@ const venueForm: SettingsForm<'venues'> = {
     { name: 'slug', kind: 'text', required: true, hint: 'slug' },
     { name: 'sourceLocale', kind: 'text', required: true, hint: 'sourceLocale' },
     { name: 'targetLocales', kind: 'text', hint: 'targetLocales' },
+    { name: 'timeZone', kind: 'timeZone', required: true, hint: 'timeZone' },
   ],
-  empty: { name: '', slug: '', sourceLocale: 'en', targetLocales: '' },
-  valuesOf: (venue: VenueView) => ({ name: venue.name, slug: venue.slug, sourceLocale: venue.sourceLocale, targetLocales: venue.targetLocales.join(', ') }),
+  // A new venue is most likely where the person setting it up is.
+  empty: { name: '', slug: '', sourceLocale: 'en', targetLocales: '', timeZone: new Intl.DateTimeFormat().resolvedOptions().timeZone },
+  valuesOf: (venue: VenueView) => ({
+    name: venue.name, slug: venue.slug, sourceLocale: venue.sourceLocale, targetLocales: venue.targetLocales.join(', '), timeZone: venue.timeZone,
+  }),
   problems: (t, values) => {
     const source = parseLocales(values.sourceLocale ?? '');
     const targets = parseLocales(values.targetLocales ?? '');
@@ -44,6 +48,7 @@ const venueForm: SettingsForm<'venues'> = {
       targetLocales: targets.invalid
         ? t('validation.localeInvalid', { tag: targets.invalid })
         : targets.locales.includes(source.locales[0] ?? '') ? t('settings.problems.targetIsSource') : undefined,
+      timeZone: canonicalTimeZone(values.timeZone ?? '') ? undefined : t('settings.problems.timeZone'),
     };
   },
   toFields: (values) => ({
@@ -51,6 +56,7 @@ const venueForm: SettingsForm<'venues'> = {
     slug: values.slug!.trim(),
     sourceLocale: parseLocales(values.sourceLocale!).locales[0]!,
     targetLocales: parseLocales(values.targetLocales ?? '').locales,
+    timeZone: canonicalTimeZone(values.timeZone!)!,
   }),
 };
 

@@ -302,6 +302,8 @@ export const authoringAr: Translated<typeof authoringEn> = {
     loadError: 'تعذّر تحميل هذه القائمة.',
     conflict: 'يوجد بالفعل شيء بهذا الاسم أو المفتاح.',
     mountingNote: 'يتبع ارتفاع تركيب الكشك ومدى الوصول والتغذية الكهربائية قوانين البناء وإمكانية الوصول المحلية. يسجّل Mantlepiece الارتفاع ولا يقرّره.',
+    timeZonePlaceholder: 'ابحث بالمدينة أو المنطقة أو فرق التوقيت',
+    timeZoneNoMatch: 'لا توجد منطقة زمنية تطابق «{{query}}».',
     orientations: { landscape: 'أفقي', portrait: 'عمودي' },
     venues: { title: 'المراكز', intro: 'لكل مركز لغة مصدر واللغات التي تُترجم إليها قصصه.', create: 'إضافة مركز', edit: 'تعديل المركز', empty: 'لا توجد مراكز بعد.', inUse: 'لا تزال في هذا المركز قاعات؛ احذفها أو انقلها أولًا.' },
     galleries: { title: 'القاعات', create: 'إضافة قاعة', edit: 'تعديل القاعة', empty: 'لا توجد قاعات هنا بعد.', inUse: 'لا تزال في هذه القاعة محطات أو معارض؛ احذفها أو انقلها أولًا.' },
@@ -310,11 +312,13 @@ export const authoringAr: Translated<typeof authoringEn> = {
     columns: {
       name: 'الاسم', slug: 'المفتاح', sourceLocale: 'لغة المصدر', targetLocales: 'مترجم إلى', venueId: 'المركز', galleryId: 'القاعة',
       screen: 'الشاشة', orientation: 'الاتجاه', mountingHeightMm: 'ارتفاع التركيب', plannedStart: 'البداية المخططة', plannedEnd: 'النهاية المخططة', actions: 'إجراءات',
+      timeZone: 'المنطقة الزمنية',
     },
     fields: {
       name: 'الاسم', slug: 'المفتاح', sourceLocale: 'لغة المصدر', targetLocales: 'مترجم إلى', venueId: 'المركز', galleryId: 'القاعة',
       screenWidthPx: 'عرض الشاشة', screenHeightPx: 'ارتفاع الشاشة', orientation: 'الاتجاه', mountingHeightMm: 'ارتفاع التركيب (حتى منتصف الشاشة)',
       plannedStart: 'البداية المخططة', plannedEnd: 'النهاية المخططة',
+      timeZone: 'المنطقة الزمنية',
     },
     hints: {
       slug: 'حروف لاتينية صغيرة وأرقام وشرطات؛ يُستخدم في العناوين وملفات الإصدار.',
@@ -322,12 +326,14 @@ export const authoringAr: Translated<typeof authoringEn> = {
       targetLocales: 'وسوم BCP 47 مفصولة بفواصل، مثل fr, es-MX.',
       mounting: 'يتبع قوانين البناء وإمكانية الوصول المحلية.',
       screen: 'بالبكسل، كما يُبلغ الكشك عن شاشته.',
+      timeZone: 'ساعة المركز نفسه: تتبعها أيام الإحصاءات وانتهاء التراخيص و«اليوم» في الفحص المسبق والتواريخ في البريد والملفات المصدَّرة.',
     },
     problems: {
       positiveInteger: 'أدخل عددًا صحيحًا أكبر من 0.',
       slug: 'استخدم حروفًا لاتينية صغيرة وأرقامًا وشرطات مفردة، مثل basalt-point.',
       targetIsSource: 'لا يمكن أن تكون لغة المصدر ترجمةً أيضًا.',
       endBeforeStart: 'النهاية قبل البداية.',
+      timeZone: 'اختر منطقة زمنية من القائمة، مثل Asia/Amman.',
     },
   },
 };

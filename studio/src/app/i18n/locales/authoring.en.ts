@@ -276,6 +276,8 @@ export const authoringEn = {
     loadError: 'This list could not be loaded.',
     conflict: 'Something with this name or key already exists.',
     mountingNote: 'Mounting height, reach ranges and power for a kiosk follow local building and accessibility codes. Mantlepiece records the height; it does not decide it.',
+    timeZonePlaceholder: 'Search by city, region or offset',
+    timeZoneNoMatch: 'No time zone matches “{{query}}”.',
     orientations: { landscape: 'Landscape', portrait: 'Portrait' },
     venues: { title: 'Venues', intro: 'Each venue has a source language and the languages its stories are translated into.', create: 'Add venue', edit: 'Edit venue', empty: 'No venues yet.', inUse: 'This venue still has galleries; delete or move them first.' },
     galleries: { title: 'Galleries', create: 'Add gallery', edit: 'Edit gallery', empty: 'No galleries here yet.', inUse: 'This gallery still has stations or exhibits; delete or move them first.' },
@@ -284,11 +286,13 @@ export const authoringEn = {
     columns: {
       name: 'Name', slug: 'Key', sourceLocale: 'Source language', targetLocales: 'Translated into', venueId: 'Venue', galleryId: 'Gallery',
       screen: 'Screen', orientation: 'Orientation', mountingHeightMm: 'Mounting height', plannedStart: 'Planned start', plannedEnd: 'Planned end', actions: 'Actions',
+      timeZone: 'Time zone',
     },
     fields: {
       name: 'Name', slug: 'Key', sourceLocale: 'Source language', targetLocales: 'Translated into', venueId: 'Venue', galleryId: 'Gallery',
       screenWidthPx: 'Screen width', screenHeightPx: 'Screen height', orientation: 'Orientation', mountingHeightMm: 'Mounting height (to the screen’s centre)',
       plannedStart: 'Planned start', plannedEnd: 'Planned end',
+      timeZone: 'Time zone',
     },
     hints: {
       slug: 'Lower-case letters, digits and hyphens; used in addresses and release files.',
@@ -296,12 +300,14 @@ export const authoringEn = {
       targetLocales: 'BCP 47 tags separated by commas, for example fr, es-MX.',
       mounting: 'Follows local building and accessibility codes.',
       screen: 'In pixels, as the kiosk reports its screen.',
+      timeZone: 'The venue’s own clock: Insights days, licence expiry, preflight’s “today” and the dates in mail and exports follow it.',
     },
     problems: {
       positiveInteger: 'Enter a whole number above 0.',
       slug: 'Use lower-case letters, digits and single hyphens, for example basalt-point.',
       targetIsSource: 'The source language cannot also be a translation.',
       endBeforeStart: 'The end is before the start.',
+      timeZone: 'Choose a time zone from the list, for example Europe/London.',
     },
   },
 };

@@ -279,6 +279,8 @@ export const authoringEs: Translated<typeof authoringEn> = {
     loadError: 'No se pudo cargar esta lista.',
     conflict: 'Ya existe algo con este nombre o esta clave.',
     mountingNote: 'La altura de montaje, los alcances y la alimentación de un quiosco siguen las normas locales de edificación y accesibilidad. Mantlepiece registra la altura; no la decide.',
+    timeZonePlaceholder: 'Buscar por ciudad, región o desfase',
+    timeZoneNoMatch: 'Ninguna zona horaria coincide con «{{query}}».',
     orientations: { landscape: 'Horizontal', portrait: 'Vertical' },
     venues: { title: 'Centros', intro: 'Cada centro tiene un idioma de origen y los idiomas a los que se traducen sus historias.', create: 'Añadir centro', edit: 'Editar centro', empty: 'Aún no hay centros.', inUse: 'Este centro todavía tiene salas; elimínelas o muévalas antes.' },
     galleries: { title: 'Salas', create: 'Añadir sala', edit: 'Editar sala', empty: 'Aún no hay salas aquí.', inUse: 'Esta sala todavía tiene puestos o exposiciones; elimínelos o muévalos antes.' },
@@ -287,11 +289,13 @@ export const authoringEs: Translated<typeof authoringEn> = {
     columns: {
       name: 'Nombre', slug: 'Clave', sourceLocale: 'Idioma de origen', targetLocales: 'Traducido a', venueId: 'Centro', galleryId: 'Sala',
       screen: 'Pantalla', orientation: 'Orientación', mountingHeightMm: 'Altura de montaje', plannedStart: 'Inicio previsto', plannedEnd: 'Fin previsto', actions: 'Acciones',
+      timeZone: 'Zona horaria',
     },
     fields: {
       name: 'Nombre', slug: 'Clave', sourceLocale: 'Idioma de origen', targetLocales: 'Traducido a', venueId: 'Centro', galleryId: 'Sala',
       screenWidthPx: 'Ancho de pantalla', screenHeightPx: 'Alto de pantalla', orientation: 'Orientación', mountingHeightMm: 'Altura de montaje (hasta el centro de la pantalla)',
       plannedStart: 'Inicio previsto', plannedEnd: 'Fin previsto',
+      timeZone: 'Zona horaria',
     },
     hints: {
       slug: 'Minúsculas, cifras y guiones; se usa en direcciones y archivos de publicación.',
@@ -299,12 +303,14 @@ export const authoringEs: Translated<typeof authoringEn> = {
       targetLocales: 'Etiquetas BCP 47 separadas por comas, por ejemplo fr, es-MX.',
       mounting: 'Sigue las normas locales de edificación y accesibilidad.',
       screen: 'En píxeles, tal como el quiosco informa de su pantalla.',
+      timeZone: 'El reloj propio del centro: los días de las estadísticas, la caducidad de las licencias, el «hoy» de la revisión previa y las fechas del correo y de las exportaciones lo siguen.',
     },
     problems: {
       positiveInteger: 'Introduzca un número entero mayor que 0.',
       slug: 'Use minúsculas, cifras y guiones sencillos, por ejemplo basalt-point.',
       targetIsSource: 'El idioma de origen no puede ser también una traducción.',
       endBeforeStart: 'El fin es anterior al inicio.',
+      timeZone: 'Elija una zona horaria de la lista, por ejemplo Europe/Madrid.',
     },
   },
 };

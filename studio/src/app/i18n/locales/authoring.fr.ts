@@ -278,6 +278,8 @@ export const authoringFr: typeof authoringEn = {
     loadError: 'Cette liste n’a pas pu être chargée.',
     conflict: 'Un élément porte déjà ce nom ou cette clé.',
     mountingNote: 'La hauteur de pose, les zones d’atteinte et l’alimentation d’une borne relèvent des codes locaux de construction et d’accessibilité. Mantlepiece enregistre la hauteur ; il ne la décide pas.',
+    timeZonePlaceholder: 'Rechercher par ville, région ou décalage',
+    timeZoneNoMatch: 'Aucun fuseau horaire ne correspond à « {{query}} ».',
     orientations: { landscape: 'Paysage', portrait: 'Portrait' },
     venues: { title: 'Lieux', intro: 'Chaque lieu a une langue source et les langues dans lesquelles ses récits sont traduits.', create: 'Ajouter un lieu', edit: 'Modifier le lieu', empty: 'Aucun lieu pour l’instant.', inUse: 'Ce lieu a encore des galeries ; supprimez-les ou déplacez-les d’abord.' },
     galleries: { title: 'Galeries', create: 'Ajouter une galerie', edit: 'Modifier la galerie', empty: 'Aucune galerie ici pour l’instant.', inUse: 'Cette galerie a encore des postes ou des expositions ; supprimez-les ou déplacez-les d’abord.' },
@@ -286,11 +288,13 @@ export const authoringFr: typeof authoringEn = {
     columns: {
       name: 'Nom', slug: 'Clé', sourceLocale: 'Langue source', targetLocales: 'Traduit en', venueId: 'Lieu', galleryId: 'Galerie',
       screen: 'Écran', orientation: 'Orientation', mountingHeightMm: 'Hauteur de pose', plannedStart: 'Début prévu', plannedEnd: 'Fin prévue', actions: 'Actions',
+      timeZone: 'Fuseau horaire',
     },
     fields: {
       name: 'Nom', slug: 'Clé', sourceLocale: 'Langue source', targetLocales: 'Traduit en', venueId: 'Lieu', galleryId: 'Galerie',
       screenWidthPx: 'Largeur d’écran', screenHeightPx: 'Hauteur d’écran', orientation: 'Orientation', mountingHeightMm: 'Hauteur de pose (au centre de l’écran)',
       plannedStart: 'Début prévu', plannedEnd: 'Fin prévue',
+      timeZone: 'Fuseau horaire',
     },
     hints: {
       slug: 'Lettres minuscules, chiffres et tirets ; sert dans les adresses et les fichiers de publication.',
@@ -298,12 +302,14 @@ export const authoringFr: typeof authoringEn = {
       targetLocales: 'Étiquettes BCP 47 séparées par des virgules, par exemple en, es-MX.',
       mounting: 'Relève des codes locaux de construction et d’accessibilité.',
       screen: 'En pixels, tel que la borne signale son écran.',
+      timeZone: 'L’horloge du lieu : les jours des statistiques, l’expiration des licences, le « aujourd’hui » du contrôle préalable et les dates des e-mails et des exports la suivent.',
     },
     problems: {
       positiveInteger: 'Saisissez un nombre entier supérieur à 0.',
       slug: 'Utilisez des minuscules, des chiffres et des tirets simples, par exemple basalt-point.',
       targetIsSource: 'La langue source ne peut pas être aussi une traduction.',
       endBeforeStart: 'La fin précède le début.',
+      timeZone: 'Choisissez un fuseau horaire dans la liste, par exemple Europe/Paris.',
     },
   },
 };

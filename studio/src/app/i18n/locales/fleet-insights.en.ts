@@ -63,7 +63,8 @@ export const fleetInsightsEn = {
   },
   insights: {
     title: 'Insights',
-    intro: 'What visitors use at the kiosks of one gallery: counted from anonymous events, with no visitor or device named. Days are UTC.',
+    intro: 'What visitors use at the kiosks of one gallery: counted from anonymous events, with no visitor or device named. Days are the venue’s, on its own clock.',
+    daysIn: 'Days in {{timeZone}}',
     gallery: 'Gallery',
     from: 'From',
     to: 'To',

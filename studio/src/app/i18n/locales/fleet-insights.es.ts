@@ -66,7 +66,8 @@ export const fleetInsightsEs: Translated<typeof fleetInsightsEn> = {
   },
   insights: {
     title: 'Estadísticas',
-    intro: 'Lo que usan los visitantes en los quioscos de una sala: contado a partir de eventos anónimos, sin nombrar a ningún visitante ni dispositivo. Los días son UTC.',
+    intro: 'Lo que usan los visitantes en los quioscos de una sala: contado a partir de eventos anónimos, sin nombrar a ningún visitante ni dispositivo. Los días son los del centro, en su propia hora.',
+    daysIn: 'Días en {{timeZone}}',
     gallery: 'Sala',
     from: 'Desde',
     to: 'Hasta',

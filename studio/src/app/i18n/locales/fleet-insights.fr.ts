@@ -65,7 +65,8 @@ export const fleetInsightsFr: typeof fleetInsightsEn = {
   },
   insights: {
     title: 'Statistiques',
-    intro: 'Ce que les visiteurs utilisent sur les bornes d’une galerie : compté à partir d’événements anonymes, sans nommer ni visiteur ni appareil. Les jours sont en UTC.',
+    intro: 'Ce que les visiteurs utilisent sur les bornes d’une galerie : compté à partir d’événements anonymes, sans nommer ni visiteur ni appareil. Les jours sont ceux du lieu, à son heure.',
+    daysIn: 'Jours selon le fuseau {{timeZone}}',
     gallery: 'Galerie',
     from: 'Du',
     to: 'Au',
