@@ -1,7 +1,7 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
-import { mediaIdsIn, segmentAltText, segmentPanel, segmentStoryTitle, type PanelDocJSON, type RevisionSnapshot, type TranslationUnit } from '@mantlepiece/shared';
+import { lookupText, mediaIdsIn, segmentAltText, segmentPanel, segmentStoryTitle, type PanelDocJSON, type RevisionSnapshot, type TranslationUnit } from '@mantlepiece/shared';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { PanelDocument } from '../panels/models/panel-document.model.js';
 import { Panel } from '../panels/models/panel.model.js';
@@ -151,18 +151,21 @@ export class SourceUnitsService {
     };
   }
 
-  /** One unit per image the story shows that has alt text in the source locale, in order of first use. */
+  /**
+   * One unit per image the story shows that has alt text in the source locale, found by RFC 4647
+   * lookup (an en-GB story's source is the image's en alt text), in order of first use.
+   */
   private async altTextSources(panels: PanelSource[], sourceLocale: string, transaction?: Transaction): Promise<AltTextSource[]> {
     const firstPanel = new Map<number, number>();
     for (const panel of panels) {
       for (const mediaId of mediaIdsIn(panel.doc).map(Number)) if (!firstPanel.has(mediaId)) firstPanel.set(mediaId, panel.panelNumber);
     }
     if (firstPanel.size === 0) return [];
-    const texts = await this.altTexts.findAll({ where: { mediaAssetId: [...firstPanel.keys()], locale: sourceLocale }, transaction });
-    const textOf = new Map(texts.map((alt) => [alt.mediaAssetId, alt.text]));
+    const texts = await this.altTexts.findAll({ where: { mediaAssetId: [...firstPanel.keys()] }, transaction });
     const sources: AltTextSource[] = [];
     for (const [mediaId, panelNumber] of firstPanel) {
-      const text = textOf.get(mediaId);
+      const byTag = Object.fromEntries(texts.filter((alt) => alt.mediaAssetId === mediaId).map((alt) => [alt.locale, alt.text]));
+      const text = lookupText(byTag, [sourceLocale])?.text;
       if (!text) continue;
       const [unit] = await this.remember(`alt:${mediaId}:${sourceLocale}:${panelNumber}:${text}`, async () => [
         await segmentAltText(String(mediaId), text, { sourceLocale, panelNumber }),

@@ -5,6 +5,7 @@ import {
 } from '@mantlepiece/shared';
 import { PageQuery } from '../../common/page.js';
 import { IsIntBetween, IsRowId, NestedObjects, Omittable, QueryRowId, UNSIGNED_BIGINT_MAX, UNSIGNED_INT_MAX } from '../../common/validation.js';
+import { LocaleTagField } from '../../common/locale-tag.js';
 
 /** A UTC instant as a kiosk writes it (toISOString), from the year 2000 on: inside what DATETIME holds. */
 const UTC_INSTANT_FROM_2000 = /^[2-9]\d{3}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z$/;
@@ -89,8 +90,7 @@ export class KioskEventDto {
 
   @ApiPropertyOptional()
   @Omittable()
-  @Matches(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{2,8})*$/, { message: 'A BCP 47 language tag.' })
-  @MaxLength(35)
+  @LocaleTagField()
   locale?: string;
 
   @ApiPropertyOptional()

@@ -1,5 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength, registerDecorator, ValidateIf } from 'class-validator';
+import { Transform } from 'class-transformer';
 import { createRequire } from 'node:module';
 import { MEDIA_MISSING_FILTERS, type MediaLicence, type MediaMissingFilter } from '@mantlepiece/shared';
 import { OptionalDateOnlyField } from '../../common/date-only.js';
@@ -58,12 +59,22 @@ export function licenceProblem(value: unknown): string | null {
 
 export function altTextsProblem(value: unknown): string | null {
   if (typeof value !== 'object' || value === null || Array.isArray(value)) return 'Alt text is an object of texts by locale, such as {"en": "…"}.';
+  const seen = new Map<string, string>();
   for (const [locale, text] of Object.entries(value)) {
-    if (canonicalLocale(locale) !== locale) return `"${locale}" is not a BCP 47 language tag in canonical form, such as en or pt-BR.`;
+    const canonical = canonicalLocale(locale);
+    if (canonical === null) return `"${locale}" is not a BCP 47 language tag, such as en or pt-BR.`;
+    if (seen.has(canonical)) return `"${seen.get(canonical)}" and "${locale}" are the same language (${canonical}); give its alt text once.`;
+    seen.set(canonical, locale);
     if (typeof text !== 'string' || text.length > MAX_ALT_LENGTH) return `The ${locale} alt text must be text of at most ${MAX_ALT_LENGTH} characters.`;
   }
   return null;
 }
+
+/** Alt texts keyed by canonical tags (pt-br → pt-BR), as they are stored; anything else is left for the check to refuse. */
+const canonicalAltKeys = (value: unknown): unknown =>
+  typeof value === 'object' && value !== null && !Array.isArray(value) && altTextsProblem(value) === null
+    ? Object.fromEntries(Object.entries(value).map(([locale, text]) => [canonicalLocale(locale)!, text]))
+    : value;
 
 const ValidWith = (problem: (value: unknown) => string | null) => (target: object, propertyName: string | symbol) =>
   registerDecorator({
@@ -90,6 +101,7 @@ export class UpdateMediaDto {
 
   @ApiPropertyOptional({ example: { en: 'A pan of soup with arrows rising in the middle' }, description: 'Per locale; an empty text removes that locale' })
   @Omittable()
+  @Transform(({ value }) => canonicalAltKeys(value))
   @ValidWith(altTextsProblem)
   alt?: Record<string, string>;
 }
