@@ -3,13 +3,12 @@ import { InjectModel } from '@nestjs/sequelize';
 import { Op, type FindOptions, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
-  buildRevisionSnapshot, diffRevisions, runPreflight,
+  buildRevisionSnapshot, dayIn, diffRevisions, runPreflight,
   type ComparisonBasis, type PreflightEntry, type PreflightMedia, type RevisionComparison, type RevisionSnapshot, type RevisionState, type RevisionSummary, type RevisionView,
 } from '@mantlepiece/shared';
 import type { Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { CommentsService } from '../comments/comments.service.js';
-import { dateOnlyOf } from '../common/date-only.js';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { MediaAsset } from '../media/models/media-asset.model.js';
@@ -66,7 +65,7 @@ export class RevisionsService {
     });
   }
 
-  /** The shared checks, given the assets' rights and alt texts, the exhibit's planned end and today's date. */
+  /** The shared checks, given the assets' rights and alt texts, the exhibit's planned end and today's date at the story's venue. */
   async preflightOf(snapshot: RevisionSnapshot, story: Story, transaction: Transaction): Promise<PreflightEntry[]> {
     const ids = snapshot.mediaIds.filter((id) => MEDIA_ID.test(id)).map(Number);
     const assets = await this.media.findAll({ where: { id: ids }, include: [MediaAltText], transaction });
@@ -79,7 +78,9 @@ export class RevisionsService {
       alt: Object.fromEntries((asset.altTexts ?? []).map((alt) => [alt.locale, alt.text])),
     }));
     const exhibit = story.exhibitId ? await this.exhibits.findByPk(story.exhibitId, { transaction }) : null;
-    return runPreflight({ snapshot, media, exhibitPlannedEnd: exhibit?.plannedEnd ?? null, today: dateOnlyOf(this.clock.now()) });
+    // A licence runs to the end of its expiry day on the venue's clock, so "today" is the venue's date.
+    const today = dayIn(this.clock.now(), (await this.venueOf(story, transaction)).timeZone);
+    return runPreflight({ snapshot, media, exhibitPlannedEnd: exhibit?.plannedEnd ?? null, today });
   }
 
   /**
