@@ -134,3 +134,38 @@ export const ROLE_MATRIX: Record<string, Access> = {
  * mounts an ALL not-found handler on that excluded path).
  */
 export const PUBLIC_PATH_PREFIXES = ['/api/docs', '/media/'];
+
+/** The objects a route's path can name, each belonging to one venue. */
+export type VenueObject =
+  | 'venue' | 'gallery' | 'station' | 'exhibit' | 'story' | 'panel' | 'media' | 'revision' | 'comment' | 'release' | 'kiosk' | 'person';
+
+/**
+ * How a route meets venues, for a person who belongs to one venue only:
+ * - 'any venue': about no venue's things (signing in, one's own profile and notifications, widget
+ *   rules, the kiosk routes, whose device token names its gallery);
+ * - 'own venues': a list, or something new, of the caller's venues only;
+ * - 'organisation': the organisation admin's alone; a venue admin is refused (403);
+ * - a venue object: the path names one, and another venue's answers exactly as a missing one does.
+ */
+export type VenueReach = 'any venue' | 'own venues' | 'organisation' | VenueObject;
+
+const OBJECT_COLLECTIONS: Record<string, VenueObject> = {
+  venues: 'venue', galleries: 'gallery', stations: 'station', exhibits: 'exhibit', stories: 'story', panels: 'panel',
+  media: 'media', revisions: 'revision', comments: 'comment', releases: 'release', kiosks: 'kiosk', users: 'person',
+};
+
+/** Routes for the organisation admin alone: venues are made and removed above any one venue, and dev mail holds every venue's. */
+const ORGANISATION_ROUTES = ['POST /api/venues', 'DELETE /api/venues/:id', 'GET /api/dev/mail', 'GET /api/dev/mail/:id'];
+
+/** Routes about no venue's things although they need a role. */
+const ANY_VENUE_ROUTES = ['GET /api/widgets', 'POST /api/widgets/validate'];
+
+/** How `route` meets venues: read from its path (`/api/<collection>/:id…` names that collection's object). */
+export function venueReach(route: string): VenueReach {
+  const access = ROLE_MATRIX[route];
+  if (access === undefined) throw new Error(`${route} is not in the role matrix`);
+  if (ORGANISATION_ROUTES.includes(route)) return 'organisation';
+  if (typeof access === 'string' || ANY_VENUE_ROUTES.includes(route)) return 'any venue';
+  const [, , collection, parameter] = route.split(' ')[1]!.split('/');
+  return parameter?.startsWith(':') && collection! in OBJECT_COLLECTIONS ? OBJECT_COLLECTIONS[collection!]! : 'own venues';
+}

@@ -1,5 +1,5 @@
 import { ROLES } from '@mantlepiece/shared';
-import { ROLE_MATRIX, type Access } from '../../server/test/role-matrix.js';
+import { ROLE_MATRIX, venueReach, type Access, type VenueReach } from '../../server/test/role-matrix.js';
 
 const MARK = { start: '<!-- role-matrix:start -->', end: '<!-- role-matrix:end -->' };
 
@@ -11,14 +11,22 @@ function cell(access: Access, column: 'nobody' | (typeof ROLES)[number]): string
   return access.includes(column) ? '✓' : '403';
 }
 
+/** What a member of one venue meets at another venue's end of the route. */
+function otherVenueCell(reach: VenueReach): string {
+  if (reach === 'any venue') return '—';
+  if (reach === 'own venues') return 'own rows';
+  if (reach === 'organisation') return 'org admin only';
+  return `404 (${reach})`;
+}
+
 /** The role matrix as the markdown table DEVELOPERS.md shows (kiosk routes take a device token). */
 export function roleMatrixTable(): string {
   const columns = ['nobody', ...ROLES] as const;
   const rows = Object.entries(ROLE_MATRIX).map(([route, access]) => {
     const name = access === 'kiosk' ? `\`${route}\` (device token)` : `\`${route}\``;
-    return `| ${name} | ${columns.map((column) => cell(access, column)).join(' | ')} |`;
+    return `| ${name} | ${columns.map((column) => cell(access, column)).join(' | ')} | ${otherVenueCell(venueReach(route))} |`;
   });
-  return [`| route | ${columns.join(' | ')} |`, `| --- | ${columns.map(() => '---').join(' | ')} |`, ...rows].join('\n');
+  return [`| route | ${columns.join(' | ')} | another venue |`, `| --- | ${columns.map(() => '---').join(' | ')} | --- |`, ...rows].join('\n');
 }
 
 /** The table between the markers in a document, or null when the markers are missing. */

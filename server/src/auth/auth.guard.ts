@@ -4,7 +4,7 @@ import { AuthGuard as PassportAuthGuard } from '@nestjs/passport';
 import type { Role } from '@mantlepiece/shared';
 import { isDeviceToken } from '../kiosks/device-token.js';
 import type { User } from '../users/models/user.model.js';
-import { IS_PUBLIC, REQUIRED_ROLES } from './auth.decorators.js';
+import { FOR_ORGANISATION, IS_PUBLIC, REQUIRED_ROLES } from './auth.decorators.js';
 import type { AuthenticatedRequest } from './authenticated-request.js';
 import { holdsAny, rolesAnywhere } from './policy.js';
 
@@ -38,6 +38,9 @@ export class AuthGuard extends PassportAuthGuard('bearer') {
     const required = this.reflector.getAllAndOverride<Role[] | undefined>(REQUIRED_ROLES, targets);
     if (required?.length && !holdsAny({ roles: rolesAnywhere(request.user) }, required)) {
       throw new ForbiddenException('Your role does not allow this.');
+    }
+    if (this.reflector.getAllAndOverride<boolean>(FOR_ORGANISATION, targets) && !holdsAny(request.user, required ?? [])) {
+      throw new ForbiddenException('Only the organisation’s admin may do this; your role holds at your venues only.');
     }
     return true;
   }

@@ -1,12 +1,13 @@
 import { Controller, Get, Param, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Roles } from '../auth/auth.decorators.js';
+import { ForOrganisation, Roles } from '../auth/auth.decorators.js';
 import { PageQuery } from '../common/page.js';
 import { DevMailService } from './dev-mail.service.js';
 
 @ApiTags('dev')
 @ApiBearerAuth()
 @Roles('admin')
+@ForOrganisation()
 @Controller('dev/mail')
 export class DevMailController {
   constructor(private readonly devMail: DevMailService) {}
