@@ -50,6 +50,7 @@ export const ar: WidgetStrings = {
   seaFloorDepth: {
     title: 'عمق قاع البحر',
     instructions: 'اسحب على طول قاع البحر، أو استخدم الأزرار أو مفاتيح الأسهم، لتختار عمره.',
+    instructionsTouch: 'اسحب بإصبعك على طول قاع البحر، أو المس الأزرار، لتختار عمره.',
     ageLabel: 'عمر قاع البحر',
     older: 'أقدم',
     younger: 'أحدث',

@@ -50,6 +50,7 @@ export const en: WidgetStrings = {
   seaFloorDepth: {
     title: 'Sea-floor depth',
     instructions: 'Drag along the sea floor, or use the buttons or arrow keys, to choose how old it is.',
+    instructionsTouch: 'Drag along the sea floor with your finger, or tap the buttons, to choose how old it is.',
     ageLabel: 'Age of the sea floor',
     older: 'Older',
     younger: 'Younger',

@@ -50,6 +50,7 @@ export const es: WidgetStrings = {
   seaFloorDepth: {
     title: 'Profundidad del fondo marino',
     instructions: 'Arrastra a lo largo del fondo marino, o usa los botones o las flechas, para elegir su edad.',
+    instructionsTouch: 'Desliza el dedo a lo largo del fondo marino, o toca los botones, para elegir su edad.',
     ageLabel: 'Edad del fondo marino',
     older: 'Más antiguo',
     younger: 'Más joven',

@@ -50,6 +50,7 @@ export const fr: WidgetStrings = {
   seaFloorDepth: {
     title: 'Profondeur du fond marin',
     instructions: 'Faites glisser le long du fond marin, ou utilisez les boutons ou les flèches, pour choisir son âge.',
+    instructionsTouch: 'Faites glisser votre doigt le long du fond marin, ou touchez les boutons, pour choisir son âge.',
     ageLabel: 'Âge du fond marin',
     older: 'Plus vieux',
     younger: 'Plus jeune',

@@ -50,6 +50,8 @@ export interface WidgetStrings {
   seaFloorDepth: {
     title: string;
     instructions: string;
+    /** The same for a touchscreen, where there are no arrow keys. */
+    instructionsTouch: string;
     ageLabel: string;
     older: string;
     younger: string;

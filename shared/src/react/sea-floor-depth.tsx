@@ -17,7 +17,7 @@ import { drawingSliderHandlers } from './drawing-slider.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { stepWithin, ValueStepper } from './value-stepper.js';
 import { visuallyHidden } from './visually-hidden.js';
-import { widgetButtonStyle, widgetControlRowStyle } from './widget-controls.js';
+import { widgetButtonStyle, widgetControlRowStyle, type WidgetInput } from './widget-controls.js';
 
 export interface SeaFloorDepthProps {
   params: SeaFloorDepthParams;
@@ -27,6 +27,8 @@ export interface SeaFloorDepthProps {
   showCaution?: boolean;
   /** Largest drawn width in CSS px; the drawing scales down to fit. */
   maxWidth?: number;
+  /** How the visitor moves it, for the instructions: a finger on a kiosk. */
+  input?: WidgetInput;
 }
 
 const VIEW = { width: 480, height: 330 };
@@ -74,7 +76,7 @@ function profiles(params: SeaFloorDepthParams) {
  * cooled lithosphere underneath, and the floor's heat flow at the age the visitor picks by dragging
  * along the floor, with the buttons or with the arrow keys.
  */
-export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = false, maxWidth = 560 }: SeaFloorDepthProps) {
+export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = false, maxWidth = 560, input = 'desk' }: SeaFloorDepthProps) {
   const strings = widgetStrings(locale).seaFloorDepth;
   const [shown, setShown] = useState(params);
   useEffect(() => setShown(params), [params]);
@@ -173,7 +175,7 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
           </button>
         ))}
       </div>
-      <figcaption style={{ fontSize: '0.9em' }}>{strings.instructions}</figcaption>
+      <figcaption style={{ fontSize: '0.9em' }}>{input === 'touch' ? strings.instructionsTouch : strings.instructions}</figcaption>
       <p id={descriptionId} style={visuallyHidden}>
         {seaFloorDepth.describe(shown, locale)}
       </p>

@@ -68,7 +68,7 @@ export function WidgetDrawing({ widgetType, params, locale, reducedMotion, editi
         <ConvectionCell params={params as ConvectionCellParams} locale={locale} reducedMotion={reducedMotion} showCaution={editing} width={maxWidth} onReport={onReport} />
       );
     case 'sea-floor-depth':
-      return <SeaFloorDepth params={params as SeaFloorDepthParams} locale={locale} showCaution={editing} maxWidth={maxWidth} onParamsChange={(next) => onParamsChange({ ...next })} />;
+      return <SeaFloorDepth params={params as SeaFloorDepthParams} locale={locale} showCaution={editing} maxWidth={maxWidth} input={input} onParamsChange={(next) => onParamsChange({ ...next })} />;
     case 'plate-forces':
       return <PlateForces params={params as PlateForcesParams} locale={locale} showCaution={editing} maxWidth={maxWidth} onParamsChange={(next) => onParamsChange({ ...next })} />;
   }
