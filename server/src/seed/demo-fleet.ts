@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { KIOSK_SWITCHES, type KioskEventType, type KioskSwitch, type RevisionSnapshot } from '@mantlepiece/shared';
+import { addDays, dayIn, dayStartIn, KIOSK_SWITCHES, type KioskEventType, type KioskSwitch, type RevisionSnapshot } from '@mantlepiece/shared';
 import { NOBODY } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { KioskEvent } from '../kiosks/models/kiosk-event.model.js';
@@ -12,9 +12,11 @@ import { Revision } from '../revisions/models/revision.model.js';
 import { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
+import { Venue } from '../venues/models/venue.model.js';
 import { DEMO_GALLERY, DEMO_KIOSK_STATION } from './demo-scenario.js';
 
 const MINUTE_MS = 60_000;
+const HOUR_MS = 3_600_000;
 const DAY_MS = 86_400_000;
 /** Thirty days of visits, so Insights' default range is full on a first start. */
 const DAYS = 30;
@@ -76,7 +78,7 @@ export class DemoFleet {
   ) {}
 
   async seed(technicianEmail: string): Promise<void> {
-    const gallery = await this.galleries.findOne({ where: { name: DEMO_GALLERY.name } });
+    const gallery = await this.galleries.findOne({ where: { name: DEMO_GALLERY.name }, include: [Venue] });
     const technician = await this.users.findOne({ where: { email: technicianEmail } });
     if (!gallery || !technician) throw new Error('the demo gallery and technician must exist before the demo fleet');
     const releaseId = await this.publishFirstRelease(gallery.id, technician);
@@ -92,7 +94,7 @@ export class DemoFleet {
     });
     await this.heartbeats.bulkCreate(this.heartbeatHistory(kiosk.id, releaseId, now));
     const stories = await this.releasedStories(releaseId);
-    const rows = this.visits(random, kiosk.id, gallery.id, stories, now);
+    const rows = this.visits(random, kiosk.id, gallery.id, stories, now, gallery.venue!.timeZone);
     // In slices, so no single INSERT grows past the server's packet limit.
     for (let start = 0; start < rows.length; start += 2000) await this.events.bulkCreate(rows.slice(start, start + 2000));
   }
@@ -151,12 +153,13 @@ export class DemoFleet {
   }
 
   /**
-   * Invented visits in opening hours (10:00 to 17:00 UTC), busier at weekends: a language chosen
-   * now and then, a story opened, some of its panels read, its widgets tried. Nothing after now.
+   * Invented visits in opening hours (10:00 to 17:00 on the venue's clock; an hour off on the two
+   * days a year its clocks change), busier at weekends: a language chosen now and then, a story
+   * opened, some of its panels read, its widgets tried. Nothing after now.
    */
-  private visits(random: () => number, kioskId: number, galleryId: number, stories: ReleasedStory[], now: Date): EventRow[] {
+  private visits(random: () => number, kioskId: number, galleryId: number, stories: ReleasedStory[], now: Date, timeZone: string): EventRow[] {
     const rows: EventRow[] = [];
-    const today = Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate());
+    const today = dayIn(now, timeZone);
     const add = (type: KioskEventType, at: number, fields: Partial<EventRow> = {}) => {
       if (at >= now.getTime()) return;
       rows.push({
@@ -165,11 +168,12 @@ export class DemoFleet {
       });
     };
     for (let day = DAYS - 1; day >= 0; day -= 1) {
-      const dayStart = today - day * DAY_MS;
-      const weekday = new Date(dayStart).getUTCDay();
+      const date = addDays(today, -day);
+      const dayStart = dayStartIn(date, timeZone).getTime();
+      const weekday = new Date(`${date}T00:00:00Z`).getUTCDay();
       const visitors = (weekday === 0 || weekday === 6 ? 45 : 25) + Math.floor(random() * 15);
       for (let visitor = 0; visitor < visitors; visitor += 1) {
-        let at = dayStart + 10 * 3_600_000 + Math.floor(random() * 7 * 3_600_000);
+        let at = dayStart + 10 * HOUR_MS + Math.floor(random() * 7 * HOUR_MS);
         if (random() < 0.3) add('language_chosen', (at += 4000), { locale: random() < 0.6 ? 'fr' : 'es' });
         if (random() < 0.08) add('switch_used', (at += 3000), { switch: pick<KioskSwitch>(random, KIOSK_SWITCHES) });
         // The first story in the menu is opened most, as the first card on a screen is.

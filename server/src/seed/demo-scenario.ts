@@ -6,6 +6,8 @@ export const DEMO_VENUE = {
   slug: 'basalt-point',
   sourceLocale: 'en',
   targetLocales: ['fr', 'es'],
+  /** An Atlantic-coast clock with daylight saving, far enough from UTC that its days visibly differ. */
+  timeZone: 'America/Halifax',
 };
 
 export const DEMO_GALLERY = { name: 'Moving Plates Hall' };
