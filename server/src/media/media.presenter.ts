@@ -13,8 +13,8 @@ export function licenceOf(asset: MediaAsset): MediaLicence | null {
   return null;
 }
 
-/** `asset` with its renditions and alt texts loaded; usage comes from panel_media_usages. */
-export const toMediaView = (asset: MediaAsset, usedIn: MediaUsageView[], person: Person): MediaView => ({
+/** `asset` with its renditions and alt texts loaded; usage comes from panel_media_usages, `altLocales` from its venue and stories. */
+export const toMediaView = (asset: MediaAsset, usedIn: MediaUsageView[], altLocales: string[], person: Person): MediaView => ({
   id: asset.id,
   sha256: asset.sha256,
   filename: asset.originalFilename,
@@ -31,6 +31,7 @@ export const toMediaView = (asset: MediaAsset, usedIn: MediaUsageView[], person:
   licence: licenceOf(asset),
   licenceExpiresOn: asset.licenceExpiresOn ?? null,
   alt: Object.fromEntries((asset.altTexts ?? []).map((alt) => [alt.locale, alt.text])),
+  altLocales,
   createdAt: asset.createdAt.toISOString(),
   usedIn,
   can: mediaCan(person, { usedIn }),

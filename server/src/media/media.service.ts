@@ -2,7 +2,7 @@ import { ConflictException, Inject, Injectable, NotFoundException } from '@nestj
 import { InjectModel } from '@nestjs/sequelize';
 import { ForeignKeyConstraintError, Op, UniqueConstraintError, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import type { MediaPage, MediaUsageView, MediaView } from '@mantlepiece/shared';
+import { canonicalLanguageTags, type MediaPage, type MediaUsageView, type MediaView } from '@mantlepiece/shared';
 import type { Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { dateOnlyOf } from '../common/date-only.js';
@@ -276,17 +276,23 @@ export class MediaService {
     if (ids.length === 0) return [];
     const assets = await this.assets.findAll({ where: { id: ids }, include: [MediaRendition, MediaAltText] });
     const usage = await this.usageOf(ids);
+    const venues = await this.venues.findAll({ where: { id: [...new Set(assets.map((asset) => asset.venueId))] }, attributes: ['id', 'sourceLocale', 'targetLocales'] });
     const byId = new Map(assets.map((asset) => [asset.id, asset]));
     return ids
       .map((id) => byId.get(id))
       .filter((asset): asset is MediaAsset => asset !== undefined)
-      .map((asset) => toMediaView(asset, usage.filter((use) => use.mediaAssetId === asset.id).map(({ mediaAssetId: _, ...use }) => use), person));
+      .map((asset) => {
+        const uses = usage.filter((use) => use.mediaAssetId === asset.id);
+        const venue = venues.find((each) => each.id === asset.venueId);
+        const altLocales = canonicalLanguageTags([venue?.sourceLocale, ...(venue?.targetLocales ?? []), ...uses.map((use) => use.sourceLocale)]);
+        return toMediaView(asset, uses.map(({ mediaAssetId: _, sourceLocale: __, ...use }) => use), altLocales, person);
+      });
   }
 
-  private async usageOf(ids: number[], transaction?: Transaction): Promise<(MediaUsageView & { mediaAssetId: number })[]> {
+  private async usageOf(ids: number[], transaction?: Transaction): Promise<(MediaUsageView & { mediaAssetId: number; sourceLocale: string })[]> {
     const rows = await this.usages.findAll({
       where: { mediaAssetId: ids },
-      include: [{ model: Panel, attributes: ['id', 'storyId', 'position'], include: [{ model: Story, attributes: ['id', 'title'] }] }],
+      include: [{ model: Panel, attributes: ['id', 'storyId', 'position'], include: [{ model: Story, attributes: ['id', 'title', 'sourceLocale'] }] }],
       transaction,
     });
     rows.sort((a, b) => a.panel!.story!.title.localeCompare(b.panel!.story!.title) || a.panel!.position - b.panel!.position);
@@ -294,7 +300,9 @@ export class MediaService {
     const storyIds = [...new Set(rows.map((row) => row.panel!.storyId))];
     const panels = storyIds.length ? await this.panels.findAll({ where: { storyId: storyIds }, attributes: ['id', 'storyId', 'position'], order: [['position', 'ASC']], transaction }) : [];
     const panelNumber = (panel: Panel) => panels.filter((other) => other.storyId === panel.storyId).findIndex((other) => other.id === panel.id) + 1;
-    return rows.map((row) => ({ mediaAssetId: row.mediaAssetId, storyId: row.panel!.storyId, storyTitle: row.panel!.story!.title, panelId: row.panelId, panelNumber: panelNumber(row.panel!) }));
+    return rows.map((row) => ({
+      mediaAssetId: row.mediaAssetId, storyId: row.panel!.storyId, storyTitle: row.panel!.story!.title, sourceLocale: row.panel!.story!.sourceLocale, panelId: row.panelId, panelNumber: panelNumber(row.panel!),
+    }));
   }
 }
 

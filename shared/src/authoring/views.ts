@@ -103,6 +103,12 @@ export interface MediaView {
   licenceExpiresOn: string | null;
   /** Alt text per BCP 47 locale. */
   alt: Record<string, string>;
+  /**
+   * The languages the image needs alt text in, canonical: its venue's source and target languages
+   * and those of the stories that show it. Alt text in one serves others by RFC 4647 lookup
+   * (en serves en-GB), which `lookupText` tells.
+   */
+  altLocales: string[];
   createdAt: string;
   usedIn: MediaUsageView[];
   can: MediaCan;

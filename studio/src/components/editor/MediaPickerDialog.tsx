@@ -2,7 +2,7 @@ import { useState } from 'react';
 import {
   Button, Dialog, DialogActions, DialogBody, DialogContent, DialogSurface, DialogTitle, Field, makeStyles, mergeClasses, SearchBox, shorthands, Spinner, Text, Textarea, tokens,
 } from '@fluentui/react-components';
-import type { MediaView } from '@mantlepiece/shared';
+import { lookupText, type MediaView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useMediaList, useUpdateMedia } from '../../api/media';
 import { FormAlert } from '../forms/FormAlert';
@@ -41,14 +41,16 @@ export function MediaPickerDialog({ locale, onPick, onClose }: { locale: string;
   const [alt, setAlt] = useState('');
   const update = useUpdateMedia(chosen?.id ?? 0);
 
+  // An en-GB story is served by the image's en alt text (RFC 4647 lookup); a change is written in the story's own language.
+  const altFor = (asset: MediaView) => lookupText(asset.alt, [locale])?.text ?? '';
   const choose = (asset: MediaView) => {
     setChosen(asset);
-    setAlt(asset.alt[locale] ?? '');
+    setAlt(altFor(asset));
     update.reset();
   };
   const insert = () => {
     if (!chosen) return;
-    if (alt.trim() === (chosen.alt[locale] ?? '')) {
+    if (alt.trim() === altFor(chosen).trim()) {
       onPick(chosen);
       return;
     }
@@ -92,7 +94,7 @@ export function MediaPickerDialog({ locale, onPick, onClose }: { locale: string;
               <div className={styles.detail}>
                 {chosen ? (
                   <>
-                    <MediaThumb asset={chosen} alt={chosen.alt[locale] ?? ''} />
+                    <MediaThumb asset={chosen} alt={altFor(chosen)} />
                     <Text weight="semibold">{chosen.filename}</Text>
                     <Text size={200} className={styles.muted}>
                       {t('picker.size', { width: chosen.width, height: chosen.height })}

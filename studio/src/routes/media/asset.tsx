@@ -2,15 +2,16 @@ import { useState, type FormEvent } from 'react';
 import {
   Button, Combobox, Field, Input, makeStyles, Option, Radio, RadioGroup, Spinner, Text, Textarea, tokens,
 } from '@fluentui/react-components';
-import type { MediaView } from '@mantlepiece/shared';
+import { lookupText, type MediaView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
 import { useDeleteMedia, useMediaAsset, useUpdateMedia } from '../../api/media';
-import { useVenues } from '../../api/settings';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
+import { LanguagePicker } from '../../components/forms/LanguagePicker';
+import { useLanguageName } from '../../components/translation/language-name';
 import { describeError, serverFieldMessage } from '../../components/forms/describe-error';
 import { hasProblems } from '../../components/forms/validation';
 import { useDateFormat } from '../../components/formatting';
@@ -34,13 +35,8 @@ const useStyles = makeStyles({
   usage: { margin: 0, paddingLeft: tokens.spacingHorizontalL, display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXS },
 });
 
-/** The locales alt text is written in: every venue's source and target languages, and any already written. */
-function useAltLocales(asset: MediaView): string[] {
-  const venues = useVenues({ page: 1, pageSize: 100 });
-  const fromVenues = venues.data?.items.flatMap((venue) => [venue.sourceLocale, ...venue.targetLocales]) ?? [];
-  const locales = [...new Set([...fromVenues, ...Object.keys(asset.alt)])];
-  return locales.length > 0 ? locales : ['en'];
-}
+/** The languages alt text is edited in: those the image needs (the server says which), those already written, and any added here. */
+const altLocalesOf = (asset: MediaView, added: readonly string[]): string[] => [...new Set([...asset.altLocales, ...Object.keys(asset.alt), ...added])];
 
 export function MediaAssetPage() {
   const { t } = useTranslation();
@@ -72,7 +68,12 @@ function AssetDetails({ asset }: { asset: MediaView }) {
   const [saved, setSaved] = useState(false);
   // Typing opens the licence suggestions, as a search box does; Fluent's combobox opens only on click or arrow keys.
   const [suggesting, setSuggesting] = useState(false);
-  const locales = useAltLocales(asset);
+  const [addedLocales, setAddedLocales] = useState<string[]>([]);
+  const locales = altLocalesOf(asset, addedLocales);
+  const languageName = useLanguageName();
+  const languageLabel = (locale: string) => `${languageName(locale)} (${locale})`;
+  /** The written alt text lookup would use for an empty field (en for en-GB), said beside it. */
+  const servedBy = (locale: string) => (values.alt[locale]?.trim() ? undefined : lookupText(values.alt, [locale])?.tag);
   const largest = [...asset.renditions].sort((a, b) => b.width - a.width)[0];
   const set = (changes: Partial<AssetValues>) => {
     setSaved(false);
@@ -107,7 +108,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
             src={largest?.url ?? asset.placeholder}
             srcSet={asset.renditions.map((rendition) => `${rendition.url} ${rendition.width}w`).join(', ') || undefined}
             sizes="(max-width: 1100px) 100vw, 60vw"
-            alt={values.alt[locales[0] ?? 'en'] ?? ''}
+            alt={lookupText(values.alt, [i18n.resolvedLanguage, ...locales])?.text ?? ''}
             style={{ backgroundImage: `url("${asset.placeholder}")` }}
           />
           <Text size={200} className={styles.muted}>
@@ -138,11 +139,24 @@ function AssetDetails({ asset }: { asset: MediaView }) {
           <fieldset className={styles.fieldset}>
             <legend className={styles.legend}>{t('asset.altTitle')}</legend>
             <Text size={200} className={styles.muted}>{t('asset.altHint')}</Text>
-            {locales.map((locale) => (
-              <Field key={locale} label={t('asset.altIn', { locale })} validationMessage={locale === locales[0] ? message('alt') : undefined}>
-                <Textarea value={values.alt[locale] ?? ''} readOnly={!writer} resize="vertical" rows={4} onChange={(_event, data) => set({ alt: { ...values.alt, [locale]: data.value } })} />
+            {locales.map((locale) => {
+              const served = servedBy(locale);
+              return (
+                <Field
+                  key={locale}
+                  label={t('asset.altIn', { locale: languageLabel(locale) })}
+                  hint={served ? t('asset.altServedBy', { language: languageLabel(served) }) : undefined}
+                  validationMessage={locale === locales[0] ? message('alt') : undefined}
+                >
+                  <Textarea lang={locale} value={values.alt[locale] ?? ''} readOnly={!writer} resize="vertical" rows={4} onChange={(_event, data) => set({ alt: { ...values.alt, [locale]: data.value } })} />
+                </Field>
+              );
+            })}
+            {writer ? (
+              <Field label={t('asset.altAdd')}>
+                <LanguagePicker value="" offered={locales} onChange={(locale) => setAddedLocales((current) => [...current, locale])} />
               </Field>
-            ))}
+            ) : null}
           </fieldset>
           <fieldset className={styles.fieldset}>
             <legend className={styles.legend}>{t('asset.rights')}</legend>

@@ -7,7 +7,8 @@ import { FormDialog } from '../../components/FormDialog';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError, serverFieldMessage } from '../../components/forms/describe-error';
 import { TimeZonePicker } from '../../components/forms/TimeZonePicker';
-import { hasProblems } from '../../components/forms/validation';
+import { LanguagePicker } from '../../components/forms/LanguagePicker';
+import { hasProblems, parseLocales } from '../../components/forms/validation';
 import { SETTINGS_FORMS, type SettingsInput, type SettingsValues } from './settings-forms';
 
 const useStyles = makeStyles({
@@ -35,6 +36,7 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
   const message = (name: string) => problems[name] ?? serverFieldMessage(save.error, name);
   const unplaced = save.error && !form.inputs.some((input) => serverFieldMessage(save.error, input.name)) ? describeError(t, save.error, { 409: t('settings.conflict') }) : null;
   const set = (name: string, value: string) => setValues((current) => ({ ...current, [name]: value }));
+  const languagesInUse = venues.data?.items.flatMap((venue) => [venue.sourceLocale, ...venue.targetLocales]);
 
   const control = (input: SettingsInput) => {
     const value = values[input.name] ?? '';
@@ -51,6 +53,10 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
       }
       case 'timeZone':
         return <TimeZonePicker value={value} onChange={(zone) => set(input.name, zone)} />;
+      case 'language':
+        return <LanguagePicker value={value} offered={languagesInUse} onChange={(tag) => set(input.name, tag)} />;
+      case 'languages':
+        return <LanguagePicker multiple value={parseLocales(value).locales} offered={languagesInUse} onChange={(tags) => set(input.name, tags.join(', '))} />;
       case 'orientation':
         return (
           <Select value={value} onChange={(_event, data) => set(input.name, data.value)}>

@@ -6,7 +6,7 @@ import { parseLocales, requiredProblem } from '../../components/forms/validation
 /** One input of a settings dialog. Every value is edited as text and converted when sent. */
 export interface SettingsInput {
   name: string;
-  kind: 'text' | 'number' | 'date' | 'orientation' | 'venue' | 'gallery' | 'timeZone';
+  kind: 'text' | 'number' | 'date' | 'orientation' | 'venue' | 'gallery' | 'timeZone' | 'language' | 'languages';
   required?: boolean;
   /** Hint key under settings.hints. */
   hint?: 'slug' | 'sourceLocale' | 'targetLocales' | 'mounting' | 'screen' | 'timeZone';
@@ -29,8 +29,8 @@ const venueForm: SettingsForm<'venues'> = {
   inputs: [
     { name: 'name', kind: 'text', required: true },
     { name: 'slug', kind: 'text', required: true, hint: 'slug' },
-    { name: 'sourceLocale', kind: 'text', required: true, hint: 'sourceLocale' },
-    { name: 'targetLocales', kind: 'text', hint: 'targetLocales' },
+    { name: 'sourceLocale', kind: 'language', required: true, hint: 'sourceLocale' },
+    { name: 'targetLocales', kind: 'languages', hint: 'targetLocales' },
     { name: 'timeZone', kind: 'timeZone', required: true, hint: 'timeZone' },
   ],
   // A new venue is most likely where the person setting it up is.

@@ -1,7 +1,8 @@
 import { Field, Input, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { AUDIENCES, type Audience } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { useExhibits } from '../../api/settings';
+import { useExhibits, useVenues } from '../../api/settings';
+import { LanguagePicker } from '../../components/forms/LanguagePicker';
 import type { StoryField, StoryValues } from './story-fields';
 
 const useStyles = makeStyles({
@@ -24,6 +25,8 @@ export function StoryFieldsForm({ values, onChange, messages, layout = 'stack', 
   const { t } = useTranslation();
   const styles = useStyles();
   const exhibits = useExhibitChoices();
+  const venues = useVenues({ page: 1, pageSize: 100, sort: 'name' });
+  const venueLanguages = venues.data?.items.flatMap((venue) => [venue.sourceLocale, ...venue.targetLocales]);
   const fields = (
     <>
       <Field label={t('storyForm.title')} required validationMessage={messages.title}>
@@ -41,7 +44,7 @@ export function StoryFieldsForm({ values, onChange, messages, layout = 'stack', 
         </Select>
       </Field>
       <Field label={t('storyForm.sourceLocale')} hint={t('storyForm.sourceLocaleHint')} validationMessage={messages.sourceLocale}>
-        <Input name="sourceLocale" value={values.sourceLocale} onChange={(_event, data) => onChange({ ...values, sourceLocale: data.value })} onBlur={onBlur} />
+        <LanguagePicker value={values.sourceLocale} offered={venueLanguages} onChange={(sourceLocale) => onChange({ ...values, sourceLocale })} />
       </Field>
     </>
   );
