@@ -22,8 +22,9 @@ import { ReleasesWorker } from '../src/releases/releases.worker.js';
 import { capturedMailTo, discardUnsentMail, mailDir } from './mail-helpers.js';
 import { prepareRenditions } from './media-fixtures.js';
 import { approvedGallery } from './release-fixtures.js';
-import { member } from './review-fixtures.js';
+import { reviewVenue } from './review-fixtures.js';
 import { createPerson, createTestApp, TestClock, uniqueEmail, type TestApp } from './test-app.js';
+import { memberAt } from './venue-fixtures.js';
 
 // Two instances of the app on one database, as behind a load balancer; one clock, so a test can let a claim run out.
 const clock = new TestClock();
@@ -115,9 +116,9 @@ describe('background jobs on two instances', () => {
   }, 60_000);
 
   it('makes each uploaded image\'s renditions once when both instances work the queue at once', async () => {
-    const curator = await member(one, ['curator']);
+    const curator = await memberAt(one, (await reviewVenue(one, 'queued-renditions')).venue.id, ['curator']);
     const ids: number[] = [];
-    for (let i = 0; i < 4; i += 1) ids.push((await request(one.http).post('/api/media').set(curator.auth).attach('file', await newPicture(), `queued-${i}.png`).expect(201)).body[0].id);
+    for (let i = 0; i < 4; i += 1) ids.push((await request(one.http).post('/api/media').set(curator.headers).attach('file', await newPicture(), `queued-${i}.png`).expect(201)).body[0].id);
     const assets = one.app.get<typeof MediaAsset>(getModelToken(MediaAsset));
     const claimed: number[] = [];
     // Images other suites left pending are worked off too, so the rounds go on until this test's are done.
@@ -125,12 +126,12 @@ describe('background jobs on two instances', () => {
       claimed.push(...(await inParallel((t) => t.app.get(RenditionsWorker).makePending(), 2)).flat());
     }
     expect(claimed.filter((id) => ids.includes(id)).sort((a, b) => a - b)).toEqual(ids);
-    for (const id of ids) expect((await request(two.http).get(`/api/media/${id}`).set(curator.auth)).body.renditionStatus).toEqual({ state: 'ready', progress: 1, failure: null });
+    for (const id of ids) expect((await request(two.http).get(`/api/media/${id}`).set(curator.headers)).body.renditionStatus).toEqual({ state: 'ready', progress: 1, failure: null });
   }, 120_000);
 
   it('takes over an image whose instance died while making its renditions, once the claim has run out', async () => {
-    const curator = await member(one, ['curator']);
-    const { id } = (await request(one.http).post('/api/media').set(curator.auth).attach('file', await newPicture(), 'orphaned.png').expect(201)).body[0];
+    const curator = await memberAt(one, (await reviewVenue(one, 'orphaned-renditions')).venue.id, ['curator']);
+    const { id } = (await request(one.http).post('/api/media').set(curator.headers).attach('file', await newPicture(), 'orphaned.png').expect(201)).body[0];
     const assets = one.app.get<typeof MediaAsset>(getModelToken(MediaAsset));
     await one.app.get(JobClaims).queue(MediaAsset, RENDITION_CLAIM_MS).claim({ id }, { order: [['id', 'ASC']], limit: 1 });
     expect(await assets.findByPk(id)).toMatchObject({ renditionState: 'pending', claimedBy: one.app.get(JobOwner).id });

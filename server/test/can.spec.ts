@@ -102,7 +102,7 @@ describe('a story’s can', () => {
     for (const role of ROLES) {
       const { can } = await get('/api/stories?pageSize=1', people[role]);
       expect({ role, can }).toEqual({ role, can: { create: matrixAllows('POST /api/stories', role) } });
-      const created = await request(t.http).post('/api/stories').set(people[role]).send({ title: `Made by ${role}` });
+      const created = await request(t.http).post('/api/stories').set(people[role]).send({ title: `Made by ${role}`, venueId: g.venue.id });
       await expectOutcome('stories', 'create', role, can.create, created);
     }
   });

@@ -64,7 +64,7 @@ describe('live phrases as translation units', () => {
 
 describe('preflight of live phrases', () => {
   const draftPreflight = async (doc: PanelDocJSON): Promise<PreflightEntry[]> => {
-    const story = (await request(t.http).post('/api/stories').set(world.curator).send({ title: `Phrases preflight ${Date.now().toString(36)}` }).expect(201)).body;
+    const story = (await request(t.http).post('/api/stories').set(world.curator).send({ title: `Phrases preflight ${Date.now().toString(36)}`, venueId: world.venue.id }).expect(201)).body;
     await request(t.http).post(`/api/stories/${story.id}/panels`).set(world.curator).send({ doc }).expect(201);
     return (await request(t.http).get(`/api/stories/${story.id}/preflight`).set(world.curator).expect(200)).body;
   };
@@ -87,7 +87,7 @@ describe('preflight of live phrases', () => {
   });
 
   it('refuses a panel whose live phrase has no wordings with 422, naming where it is', async () => {
-    const story = (await request(t.http).post('/api/stories').set(world.curator).send({ title: `Phrases refused ${Date.now().toString(36)}` }).expect(201)).body;
+    const story = (await request(t.http).post('/api/stories').set(world.curator).send({ title: `Phrases refused ${Date.now().toString(36)}`, venueId: world.venue.id }).expect(201)).body;
     const res = await request(t.http).post(`/api/stories/${story.id}/panels`).set(world.curator).send({ doc: phraseDoc({}) });
     expect(res.status).toBe(422);
     // The path leads to the phrase: the second inline node of the first paragraph.

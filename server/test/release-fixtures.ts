@@ -15,7 +15,7 @@ export async function approvedGallery(t: TestApp, label: string, { fallbackToSou
   const curator = await member(t, ['curator']);
   const educator = await member(t, ['educator']);
   const technician = await member(t, ['technician']);
-  const imageId = await libraryImage(t, curator.auth, {
+  const imageId = await libraryImage(t, curator.auth, venue.id, {
     credit: 'Drawing: Tomás Reyes', licence: { kind: 'spdx', id: 'CC-BY-4.0' }, licenceExpiresOn: '2030-12-31',
     alt: { en: 'Two plates meeting at a trench', fr: 'Deux plaques qui se rencontrent à une fosse' },
   });

@@ -71,11 +71,11 @@ export async function submit(t: TestApp, curator: Headers, storyId: number) {
 export const verdict = (t: TestApp, educator: Headers, revisionId: number, body: { verdict: string; note?: string }) =>
   request(t.http).post(`/api/revisions/${revisionId}/reviews`).set(educator).send(body);
 
-/** An image in the library, its renditions made, with the rights and alt text given. */
-export async function libraryImage(t: TestApp, curator: Headers, details: Record<string, unknown>): Promise<number> {
+/** An image in the venue's library, its renditions made, with the rights and alt text given. */
+export async function libraryImage(t: TestApp, curator: Headers, venueId: number, details: Record<string, unknown>): Promise<number> {
   const colour = { r: Math.floor(Math.random() * 256), g: Math.floor(Math.random() * 256), b: Math.floor(Math.random() * 256) };
   const png = await sharp({ create: { width: 64, height: 48, channels: 3, background: colour } }).png().toBuffer();
-  const uploaded = expectStatus(await request(t.http).post('/api/media').set(curator).attach('file', png, 'plate-map.png'), 201, 'upload');
+  const uploaded = expectStatus(await request(t.http).post('/api/media').set(curator).field('venueId', String(venueId)).attach('file', png, 'plate-map.png'), 201, 'upload');
   const id = uploaded.body[0].id as number;
   if ((await prepareRenditions(t, id)) !== 'ready') throw new Error(`renditions of image ${id} were not made`);
   expectStatus(await request(t.http).patch(`/api/media/${id}`).set(curator).send(details), 200, 'media details');

@@ -41,7 +41,7 @@ export async function translationWorld(t: TestApp, label: string) {
   // A colour no other suite uses, so the upload is a new asset rather than a shared one.
   const background = { r: Math.floor(Math.random() * 256), g: Math.floor(Math.random() * 256), b: Math.floor(Math.random() * 256) };
   const png = await sharp({ create: { width: 64, height: 48, channels: 3, background } }).png().toBuffer();
-  const [image] = (await request(t.http).post('/api/media').set(curator).attach('file', png, 'ridge.png').expect(201)).body;
+  const [image] = (await request(t.http).post('/api/media').set(curator).field('venueId', String(venue.id)).attach('file', png, 'ridge.png').expect(201)).body;
   await prepareRenditions(t, image.id);
   await request(t.http).patch(`/api/media/${image.id}`).set(curator).send({ alt: { en: 'Dark basalt on a ridge.' } }).expect(200);
 

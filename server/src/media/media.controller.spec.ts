@@ -8,7 +8,7 @@ import sharp, { type Sharp } from 'sharp';
 import request from 'supertest';
 import { getModelToken } from '@nestjs/sequelize';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { signedInAs } from '../../test/authoring-fixtures.js';
+import { galleryWithExhibit, signedInAs } from '../../test/authoring-fixtures.js';
 import { prepareRenditions } from '../../test/media-fixtures.js';
 import { createTestApp, type TestApp } from '../../test/test-app.js';
 import { MediaService } from './media.service.js';
@@ -20,10 +20,12 @@ const mediaDir = fs.mkdtempSync(path.join(os.tmpdir(), 'mantlepiece-media-'));
 
 let t: TestApp;
 let curator: Record<string, string>;
+let venueId: number;
 
 beforeAll(async () => {
   t = await createTestApp({ env: { MEDIA_DIR: mediaDir, MEDIA_MAX_BYTES: String(MAX_BYTES), MEDIA_MAX_PIXELS: String(MAX_PIXELS) } });
   curator = await signedInAs(t, 'curator');
+  venueId = (await galleryWithExhibit(t, await signedInAs(t, 'admin'), 'media')).venue.id;
 });
 afterAll(async () => {
   await t.close();
@@ -35,7 +37,7 @@ const picture = (width: number, height: number) =>
   sharp({ create: { width, height, channels: 3, background: { r: Math.floor(Math.random() * 256), g: Math.floor(Math.random() * 256), b: Math.floor(Math.random() * 256) } } });
 
 const upload = (...files: [Buffer, string][]) => {
-  const req = request(t.http).post('/api/media').set(curator);
+  const req = request(t.http).post('/api/media').set(curator).field('venueId', String(venueId));
   for (const [data, name] of files) req.attach('file', data, name);
   return req;
 };
@@ -362,7 +364,7 @@ describe('details, lists and delete', () => {
 
   it('refuses to delete an image a panel shows, saying where, and deletes it once the panel no longer does', async () => {
     const asset = await prepared((await upload([await picture(80, 80).png().toBuffer(), 'used.png'])).body[0]);
-    const story = (await request(t.http).post('/api/stories').set(curator).send({ title: 'Uses an image' })).body;
+    const story = (await request(t.http).post('/api/stories').set(curator).send({ title: 'Uses an image', venueId })).body;
     const panel = (await request(t.http).post(`/api/stories/${story.id}/panels`).set(curator).send({ doc: { type: 'doc', content: [{ type: 'panelImage', attrs: { mediaId: String(asset.id) } }] } })).body;
     expect((await request(t.http).get(`/api/media/${asset.id}`).set(curator)).body.usedIn).toEqual([{ storyId: story.id, storyTitle: 'Uses an image', panelId: panel.id, panelNumber: 1 }]);
 

@@ -93,7 +93,7 @@ describe('GET /api/me/work', () => {
   it('gives an admin pending invitations and licences that end within 60 days', async () => {
     const email = uniqueEmail('my-work-invitee');
     expect((await request(t.http).post('/api/users/invitations').set(admin).send({ email, name: 'Aiyana Redcloud', roles: ['translator'], locales: ['es'] })).status).toBe(201);
-    const mediaId = await libraryImage(t, curator.auth, { credit: 'Map: Basalt Point', licence: { kind: 'spdx', id: 'CC-BY-4.0' }, licenceExpiresOn: '1999-12-31' });
+    const mediaId = await libraryImage(t, curator.auth, venue.id, { credit: 'Map: Basalt Point', licence: { kind: 'spdx', id: 'CC-BY-4.0' }, licenceExpiresOn: '1999-12-31' });
     const { admin: work, technician: none } = await workOf(admin);
     expect(none).toBeUndefined();
     expect(work!.invitations.items[0]).toMatchObject({ email, name: 'Aiyana Redcloud', roles: ['translator'], link: '/people' });

@@ -1,19 +1,21 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { examplePanelDoc } from '@mantlepiece/shared';
-import { paragraphDoc, signedInAs } from '../../test/authoring-fixtures.js';
+import { galleryWithExhibit, paragraphDoc, signedInAs } from '../../test/authoring-fixtures.js';
 import { createTestApp, type TestApp } from '../../test/test-app.js';
 
 let t: TestApp;
 let curator: Record<string, string>;
+let venueId: number;
 
 beforeAll(async () => {
   t = await createTestApp();
   curator = await signedInAs(t, 'curator');
+  venueId = (await galleryWithExhibit(t, await signedInAs(t, 'admin'), 'panels')).venue.id;
 });
 afterAll(() => t.close());
 
-const newStory = async () => (await request(t.http).post('/api/stories').set(curator).send({ title: 'Panels suite' })).body as { id: number };
+const newStory = async () => (await request(t.http).post('/api/stories').set(curator).send({ title: 'Panels suite', venueId })).body as { id: number };
 const addPanel = async (storyId: number, body: Record<string, unknown> = {}) => {
   const res = await request(t.http).post(`/api/stories/${storyId}/panels`).set(curator).send(body);
   if (res.status !== 201) throw new Error(`expected 201, got ${res.status} ${JSON.stringify(res.body)}`);

@@ -181,7 +181,7 @@ describe('a build that fails', () => {
   });
 
   async function approvedStoryWithNewImage(g: Awaited<ReturnType<typeof approvedGallery>>): Promise<string[]> {
-    const imageId = await libraryImage(t, g.curator.auth, { credit: 'Drawing: Noor Haddad', licence: { kind: 'spdx', id: 'CC0-1.0' }, alt: { en: 'A ridge', fr: 'Une dorsale' } });
+    const imageId = await libraryImage(t, g.curator.auth, g.venue.id, { credit: 'Drawing: Noor Haddad', licence: { kind: 'spdx', id: 'CC0-1.0' }, alt: { en: 'A ridge', fr: 'Une dorsale' } });
     const story = await storyWithPanels(t, g.curator.auth, g.exhibit.id, [imageDoc(imageId)]);
     await approve(t, g.curator.auth, g.educator.auth, story.storyId);
     const rows = await t.app.get<typeof MediaRendition>(getModelToken(MediaRendition)).findAll({ where: { mediaAssetId: imageId } });

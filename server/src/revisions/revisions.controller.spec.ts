@@ -12,11 +12,12 @@ import { Revision } from './models/revision.model.js';
 let t: TestApp;
 let curator: Headers;
 let educator: Headers;
+let venueId: number;
 let exhibitId: number;
 
 beforeAll(async () => {
   t = await createReviewApp();
-  exhibitId = (await reviewVenue(t, 'revisions')).exhibit.id;
+  ({ venue: { id: venueId }, exhibit: { id: exhibitId } } = await reviewVenue(t, 'revisions'));
   curator = (await member(t, ['curator'], { name: 'Ayesha Karim' })).auth;
   educator = (await member(t, ['educator'])).auth;
 });
@@ -122,19 +123,19 @@ describe('preflight blockers stop a submission (422 listing them) and show on th
   const rights = { credit: 'Map: Basalt Point', licence: { kind: 'spdx', id: 'CC-BY-4.0' }, licenceExpiresOn: '2030-12-31', alt: { en: 'A map of plate boundaries.' } };
 
   it('an image without alt text in the source locale', async () => {
-    const mediaId = await libraryImage(t, curator, { ...rights, alt: { fr: 'Une carte.' } });
+    const mediaId = await libraryImage(t, curator, venueId, { ...rights, alt: { fr: 'Une carte.' } });
     const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId, [imageDoc(mediaId)]);
     await expectBlocked(storyId, 'image-alt-text', panelIds[0]!, /no alt text in English/);
   });
 
   it('an image without a credit line', async () => {
-    const mediaId = await libraryImage(t, curator, { ...rights, credit: null });
+    const mediaId = await libraryImage(t, curator, venueId, { ...rights, credit: null });
     const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId, [imageDoc(mediaId)]);
     await expectBlocked(storyId, 'image-credit', panelIds[0]!, /no credit line/);
   });
 
   it('a licence that has expired', async () => {
-    const mediaId = await libraryImage(t, curator, { ...rights, licenceExpiresOn: '2020-06-30' });
+    const mediaId = await libraryImage(t, curator, venueId, { ...rights, licenceExpiresOn: '2020-06-30' });
     const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId, [imageDoc(mediaId)]);
     await expectBlocked(storyId, 'image-licence-expiry', panelIds[0]!, /ran out on 2020-06-30/);
   });
@@ -142,7 +143,7 @@ describe('preflight blockers stop a submission (422 listing them) and show on th
   it('a licence that ends before the exhibit’s planned end', async () => {
     // The suite's exhibit ends on 2027-12-31; the licence is in force today but not that long.
     const expires = new Date(t.clock.now().getTime() + 86_400_000).toISOString().slice(0, 10);
-    const mediaId = await libraryImage(t, curator, { ...rights, licenceExpiresOn: expires });
+    const mediaId = await libraryImage(t, curator, venueId, { ...rights, licenceExpiresOn: expires });
     const { storyId, panelIds } = await storyWithPanels(t, curator, exhibitId, [imageDoc(mediaId)]);
     await expectBlocked(storyId, 'image-licence-expiry', panelIds[0]!, /before the exhibit's planned end on 2027-12-31/);
   });

@@ -7,6 +7,7 @@ import { Story } from './models/story.model.js';
 
 let t: TestApp;
 let curator: Record<string, string>;
+let venueId: number;
 let exhibitId: number;
 let otherExhibitId: number;
 
@@ -14,7 +15,9 @@ beforeAll(async () => {
   t = await createTestApp();
   curator = await signedInAs(t, 'curator');
   const admin = await signedInAs(t, 'admin');
-  exhibitId = (await galleryWithExhibit(t, admin, 'stories')).exhibit.id;
+  const place = await galleryWithExhibit(t, admin, 'stories');
+  venueId = place.venue.id;
+  exhibitId = place.exhibit.id;
   otherExhibitId = (await galleryWithExhibit(t, admin, 'stories-other')).exhibit.id;
 });
 afterAll(() => t.close());
@@ -38,7 +41,7 @@ describe('POST /api/stories', () => {
     const bad = await request(t.http).post('/api/stories').set(curator).send({ title: 'x', sourceLocale: 'english please' });
     expect(bad.status).toBe(400);
     expect(bad.body.errors).toEqual([{ path: ['sourceLocale'], message: expect.stringMatching(/BCP 47/) }]);
-    expect((await createStory({ title: 'Canonical', sourceLocale: 'pt-br' })).sourceLocale).toBe('pt-BR');
+    expect((await createStory({ title: 'Canonical', sourceLocale: 'pt-br', venueId })).sourceLocale).toBe('pt-BR');
   });
 
   it('refuses a translator with 403', async () => {
@@ -92,17 +95,17 @@ describe('GET /api/stories', () => {
 
 describe('PATCH and DELETE /api/stories/:id', () => {
   it('changes the title and audience', async () => {
-    const story = await createStory({ title: 'Before' });
+    const story = await createStory({ title: 'Before', venueId });
     const res = await request(t.http).patch(`/api/stories/${story.id}`).set(curator).send({ title: 'After', audience: 'adult' });
     expect(res.body).toMatchObject({ id: story.id, title: 'After', audience: 'adult' });
   });
 
   it('deletes a story that was never released, and refuses with 409 once a release carried it', async () => {
-    const draft = await createStory({ title: 'Short-lived' });
+    const draft = await createStory({ title: 'Short-lived', venueId });
     expect((await request(t.http).delete(`/api/stories/${draft.id}`).set(curator)).status).toBe(204);
     expect((await request(t.http).get(`/api/stories/${draft.id}`).set(curator)).status).toBe(404);
 
-    const released = await createStory({ title: 'On the gallery floor' });
+    const released = await createStory({ title: 'On the gallery floor', venueId });
     await t.app.get<typeof Story>(getModelToken(Story)).update({ releasedAt: new Date() }, { where: { id: released.id } });
     const res = await request(t.http).delete(`/api/stories/${released.id}`).set(curator);
     expect(res.status).toBe(409);

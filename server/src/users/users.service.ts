@@ -47,6 +47,27 @@ export class UsersService {
     return this.users.count();
   }
 
+  /**
+   * The active people holding `role` at one venue: by a role held at every venue or by their
+   * membership there. Whoever the server tells about a venue's work (educators of a submission,
+   * translators of a digest, technicians of a silent kiosk) is found here.
+   */
+  holdingAt(venueId: number, role: Role, transaction?: Transaction): Promise<User[]> {
+    const roleJson = this.sequelize.escape(JSON.stringify(role));
+    const memberThere = Sequelize.literal(
+      `(SELECT user_id FROM venue_memberships WHERE venue_id = ${Number(venueId)} AND JSON_CONTAINS(roles, ${roleJson}))`,
+    );
+    return this.users.findAll({
+      where: {
+        active: true,
+        [Op.or]: [Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('User.roles'), JSON.stringify(role)), 1), { id: { [Op.in]: memberThere } }],
+      },
+      include: [VenueMembership],
+      order: [['id', 'ASC']],
+      transaction,
+    });
+  }
+
   /** Creates an account; refuses an address that already has one. */
   async createAccount(account: NewAccount, transaction?: Transaction): Promise<User> {
     if (await this.findByEmail(account.email, transaction)) {
