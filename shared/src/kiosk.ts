@@ -22,6 +22,7 @@ export type {
   EventsBody, EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, KioskManifestResponse, KioskSwitch, PairCompleteWaiting, PairStartResponse,
 } from './release/kiosk-api.js';
 export { PanelView } from './react/panel/PanelView.js';
+export { MoreBelowCue, useMoreBelow, type MoreBelowLook } from './react/more-below.js';
 export { PanelFrame } from './react/panel/PanelFrame.js';
 export type { ResolveMedia } from './react/panel/panel-media.js';
 export { useReducedMotion } from './react/use-reduced-motion.js';

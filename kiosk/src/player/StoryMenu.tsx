@@ -1,13 +1,18 @@
-import type { CSSProperties } from 'react';
+import { useRef, type CSSProperties } from 'react';
 import type { TFunction } from 'i18next';
-import { directionOf } from '@mantlepiece/shared/kiosk';
+import { directionOf, MoreBelowCue, useMoreBelow, type MoreBelowLook } from '@mantlepiece/shared/kiosk';
 import type { PlayableRelease } from '../sync/playable-release';
 import { menuGrid } from './menu-grid';
 import { storyImage, storyTitle } from './release-content';
 
+/** The cue that more cards wait below (many stories, or Larger text), in the menu's padding and colours. */
+const MENU_MORE_BELOW: MoreBelowLook = { padBlock: '2rem', padInline: '3rem', fade: 'var(--deep)', surface: 'var(--deep-2)', text: 'var(--sand)', border: 'var(--magma)' };
+
 /** Every story of the release as a large card, titled in the visitor's language, the cards sharing out the whole screen. */
 export function StoryMenu({ t, release, locale, onOpen }: { t: TFunction; release: PlayableRelease; locale: string; onOpen: (storyId: number) => void }) {
   const { manifest } = release;
+  const scroller = useRef<HTMLElement>(null);
+  const moreBelow = useMoreBelow(scroller, manifest);
   const count = manifest.stories.length;
   const landscape = menuGrid(count, 'landscape');
   const portrait = menuGrid(count, 'portrait');
@@ -19,7 +24,7 @@ export function StoryMenu({ t, release, locale, onOpen }: { t: TFunction; releas
     '--menu-rows-portrait': portrait.rows,
   } as CSSProperties;
   return (
-    <main className="menu">
+    <main className="menu" ref={scroller}>
       <h1>{t('menu.title')}</h1>
       <ul className="story-cards" style={grid}>
         {manifest.stories.map((story) => {
@@ -37,6 +42,7 @@ export function StoryMenu({ t, release, locale, onOpen }: { t: TFunction; releas
           );
         })}
       </ul>
+      {moreBelow ? <MoreBelowCue look={MENU_MORE_BELOW} /> : null}
     </main>
   );
 }

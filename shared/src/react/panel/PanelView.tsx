@@ -1,4 +1,4 @@
-import { useCallback, useLayoutEffect, useMemo, useRef, useState, type RefObject } from 'react';
+import { useCallback, useMemo, useRef, useState } from 'react';
 import { readPanelWidgets } from '../../panel/live-value/live-value-reading.js';
 import { PANEL_IMAGE_NODE, WIDGET_NODE, type PanelDocJSON, type PanelNodeJSON } from '../../panel/panel-json.js';
 import { directionOf, PANEL_LAYOUTS, type PanelLayout, type TextDirection } from '../../panel/panel-presentation.js';
@@ -7,6 +7,7 @@ import type { SimulationReport } from '../../widgets/index.js';
 import { renderPanelNode, type PanelRenderContext } from './panel-nodes.js';
 import type { ResolveMedia } from './panel-media.js';
 import type { WidgetInput } from '../widget-controls.js';
+import { MoreBelowCue, useMoreBelow, type MoreBelowLook } from '../more-below.js';
 import { landscapeColumnStyle, panelRootStyle, WIDGET_MAX_WIDTH } from './panel-theme.js';
 
 export interface PanelViewProps {
@@ -54,44 +55,15 @@ function outputDigitsIn(doc: PanelDocJSON): ReadonlyMap<string, Readonly<Record<
   return byWidget;
 }
 
-/**
- * Whether a scrolling panel has more below what shows: watched on scroll and whenever the panel or
- * anything in it changes size (a picture arriving, a widget growing, larger text).
- */
-function useMoreBelow(scroller: RefObject<HTMLElement | null>, doc: PanelDocJSON): boolean {
-  const [more, setMore] = useState(false);
-  useLayoutEffect(() => {
-    const element = scroller.current;
-    if (!element) return undefined;
-    const check = () => setMore(element.scrollHeight - element.scrollTop - element.clientHeight > 2);
-    check();
-    element.addEventListener('scroll', check, { passive: true });
-    const observer = typeof ResizeObserver === 'undefined' ? null : new ResizeObserver(check);
-    observer?.observe(element);
-    for (const child of element.children) observer?.observe(child);
-    return () => {
-      element.removeEventListener('scroll', check);
-      observer?.disconnect();
-    };
-  }, [scroller, doc]);
-  return more;
-}
-
-/**
- * The cue that a panel goes on below the screen's edge: the words fade out and a down arrow sits at
- * the foot, until the visitor has scrolled to the end. Drawn only, as the scrolling itself is what a
- * screen reader follows.
- */
-function MoreBelowCue() {
-  return (
-    <div className="mp-more-below" aria-hidden="true" style={{ position: 'sticky', bottom: 'calc(-1 * var(--mp-panel-pad-block))', height: 0, pointerEvents: 'none' }}>
-      <div style={{ position: 'absolute', insetInline: 'calc(-1 * var(--mp-panel-pad-inline))', bottom: 0, height: '5em', background: 'linear-gradient(to bottom, transparent, var(--mp-surface) 75%)' }} />
-      <svg viewBox="0 0 24 24" style={{ position: 'absolute', left: '50%', bottom: '0.4em', width: '2.6em', height: '2.6em', marginLeft: '-1.3em', borderRadius: '50%', background: 'var(--mp-control-surface)', color: 'var(--mp-control-text)', border: '3px solid var(--mp-control-border)' }}>
-        <path d="M6 9 L12 15 L18 9" fill="none" stroke="currentColor" strokeWidth={2.5} strokeLinecap="round" strokeLinejoin="round" />
-      </svg>
-    </div>
-  );
-}
+/** The cue at a long panel's foot, in the panel's own padding and colours. */
+const PANEL_MORE_BELOW: MoreBelowLook = {
+  padBlock: 'var(--mp-panel-pad-block)',
+  padInline: 'var(--mp-panel-pad-inline)',
+  fade: 'var(--mp-surface)',
+  surface: 'var(--mp-control-surface)',
+  text: 'var(--mp-control-text)',
+  border: 'var(--mp-control-border)',
+};
 
 /**
  * A panel as a gallery screen draws it: the Tiptap JSON walked into React elements, with no editor
@@ -143,7 +115,7 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
       style={panelRootStyle(layout, width, height, largeText, highContrast)}
     >
       {layout === 'landscape' ? <LandscapeColumns doc={doc} context={context} /> : renderPanelNode(doc, context, 0)}
-      {moreBelow ? <MoreBelowCue /> : null}
+      {moreBelow ? <MoreBelowCue look={PANEL_MORE_BELOW} /> : null}
     </article>
   );
 }
