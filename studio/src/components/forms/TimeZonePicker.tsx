@@ -38,8 +38,10 @@ export function TimeZonePicker({ value, onChange, disabled }: { value: string; o
       }}
       // Typing opens the list, as a search box does; Fluent's combobox opens only on click or arrow keys.
       onChange={(event) => { setQuery(event.target.value); setOpen(true); }}
+      // Fluent also reports a cleared selection here while the person types; only a chosen zone ends the search.
       onOptionSelect={(_event, data) => {
-        if (data.optionValue && data.optionValue !== NO_MATCH) onChange(data.optionValue);
+        if (!data.optionValue || data.optionValue === NO_MATCH) return;
+        onChange(data.optionValue);
         setQuery(null);
       }}
     >
