@@ -35,6 +35,8 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'GET /api/users': ADMIN,
   'POST /api/users/invitations': ADMIN,
   'PATCH /api/users/:id': ADMIN,
+  'PUT /api/users/:id/memberships/:venueId': ADMIN,
+  'DELETE /api/users/:id/memberships/:venueId': ADMIN,
   'GET /api/audit': ADMIN,
   'GET /api/dev/mail': ADMIN,
   'GET /api/dev/mail/:id': ADMIN,

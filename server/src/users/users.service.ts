@@ -1,16 +1,18 @@
-import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { Page, Role, UserView } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
 import { RefreshToken } from '../auth/models/refresh-token.model.js';
+import type { Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import type { ListUsersQuery } from './dto/list-users.query.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
 import { User } from './models/user.model.js';
 import { VenueMembership } from './models/venue-membership.model.js';
+import { holdsWhole, peopleScope, reaches } from './people-scope.js';
 import { toUserView } from './users.presenter.js';
 
 export interface NewAccount {
@@ -76,15 +78,28 @@ export class UsersService {
     return this.users.create({ ...account, email: account.email.toLowerCase(), active: true }, { transaction });
   }
 
-  /** The People table: filtered, sorted and paged by the database. */
-  async list(query: ListUsersQuery): Promise<Page<UserView>> {
+  /**
+   * The People table: filtered, sorted and paged by the database. A venue admin sees the members
+   * of their venues, and of each only the memberships at their venues.
+   */
+  async list(admin: Member, query: ListUsersQuery): Promise<Page<UserView>> {
+    const scope = peopleScope(admin);
+    const venueIds = scope.every ? null : scope.venueIds;
+    // The venues whose people the reader asks for and may see.
+    const wanted = query.venueId ? [query.venueId].filter((id) => !venueIds || venueIds.includes(id)) : venueIds;
     const conditions: WhereOptions<User>[] = [];
+    if (venueIds) conditions.push({ id: { [Op.in]: this.membersOf(wanted) } });
+    else if (wanted) {
+      const everywhere = Sequelize.where(Sequelize.fn('JSON_LENGTH', Sequelize.col('User.roles')), { [Op.gt]: 0 });
+      conditions.push({ [Op.or]: [everywhere, { id: { [Op.in]: this.membersOf(wanted) } }] });
+    }
     if (query.q) {
       const pattern = likePattern(query.q.trim());
       conditions.push({ [Op.or]: [{ name: { [Op.like]: pattern } }, { email: { [Op.like]: pattern } }] });
     }
     if (query.role) {
-      conditions.push(Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('roles'), JSON.stringify(query.role)), 1));
+      // The role held at every venue, or by a membership the reader asks for and may see.
+      conditions.push({ [Op.or]: [this.holdsEverywhere(query.role), { id: { [Op.in]: this.membersOf(wanted, query.role) } }] });
     }
     if (query.active) conditions.push({ active: query.active === 'true' });
 
@@ -92,27 +107,52 @@ export class UsersService {
     const key = descending ? query.sort.slice(1) : query.sort;
     const order: Order = [[key, descending ? 'DESC' : 'ASC'], ['id', 'ASC']];
     const { rows, count } = await this.users.findAndCountAll({ where: { [Op.and]: conditions }, include: [VenueMembership], distinct: true, order, ...pageWindow(query) });
-    return toPage(rows.map(toUserView), count, query);
+    return toPage(rows.map((user) => toUserView(user, scope)), count, query);
   }
 
-  /** An admin changes a person's name, roles, locales or whether the account is active. */
-  async updateUser(actor: User, id: number, changes: UpdateUserDto, clientAddress: string): Promise<UserView> {
-    if (actor.id === id && (changes.active === false || (changes.roles && !changes.roles.includes('admin')))) {
+  /** A subquery of the ids of people with a membership at one of `venueIds` (any venue when null), holding `role` there if named. */
+  private membersOf(venueIds: readonly number[] | null, role?: Role) {
+    const atVenues = venueIds ? `venue_id IN (${venueIds.length ? venueIds.map(Number).join(', ') : 'NULL'})` : 'TRUE';
+    const holding = role ? `JSON_CONTAINS(roles, ${this.sequelize.escape(JSON.stringify(role))})` : 'TRUE';
+    return Sequelize.literal(`(SELECT user_id FROM venue_memberships WHERE ${atVenues} AND ${holding})`);
+  }
+
+  private holdsEverywhere(role: Role) {
+    return Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('User.roles'), JSON.stringify(role)), 1);
+  }
+
+  /**
+   * An admin changes a person's name, roles, locales or whether the account is active. Roles and
+   * locales held at every venue are the organisation admin's to change; a venue admin changes the
+   * name or deactivates only someone who works at their venues alone.
+   */
+  async updateUser(admin: Member, id: number, changes: UpdateUserDto, clientAddress: string): Promise<UserView> {
+    if (admin.id === id && (changes.active === false || (changes.roles && admin.roles.includes('admin') && !changes.roles.includes('admin')))) {
       throw new ConflictException('You cannot remove your own admin access; ask another admin.');
     }
+    const scope = peopleScope(admin);
     return this.sequelize.transaction(async (transaction) => {
       const user = await this.users.findByPk(id, { include: [VenueMembership], transaction, lock: transaction.LOCK.UPDATE });
-      if (!user) throw new NotFoundException('There is no such person.');
-      const record = (action: Parameters<AuditService['record']>[0]['action'], detail: Record<string, unknown>) =>
-        this.audit.record({ actorId: actor.id, action, targetType: 'user', targetId: user.id, detail, clientAddress }, transaction);
-
-      if (changes.roles && !sameSet(changes.roles, user.roles)) {
-        await record('user.roles-changed', { from: user.roles, to: changes.roles });
-        user.roles = changes.roles;
+      if (!user || !reaches(scope, user)) throw new NotFoundException('There is no such person.');
+      const rolesChange = changes.roles && !sameSet(changes.roles, user.roles) ? changes.roles : undefined;
+      const localesChange = changes.locales && !sameSet(changes.locales, user.locales) ? changes.locales : undefined;
+      if (!scope.every && (rolesChange || localesChange)) {
+        throw new ForbiddenException('Only an organisation admin changes roles and locales held at every venue; change the membership at your venue instead.');
       }
-      if (changes.locales && !sameSet(changes.locales, user.locales)) {
-        await record('user.locales-changed', { from: user.locales, to: changes.locales });
-        user.locales = changes.locales;
+      const accountChange = (changes.name !== undefined && changes.name !== user.name) || (changes.active !== undefined && changes.active !== user.active);
+      if (accountChange && !holdsWhole(scope, user)) {
+        throw new ForbiddenException('This person also works at other venues; ask an organisation admin.');
+      }
+      const record = (action: Parameters<AuditService['record']>[0]['action'], detail: Record<string, unknown>) =>
+        this.audit.record({ actorId: admin.id, action, targetType: 'user', targetId: user.id, detail, clientAddress }, transaction);
+
+      if (rolesChange) {
+        await record('user.roles-changed', { from: user.roles, to: rolesChange });
+        user.roles = rolesChange;
+      }
+      if (localesChange) {
+        await record('user.locales-changed', { from: user.locales, to: localesChange });
+        user.locales = localesChange;
       }
       // A deactivated account fails the guard and refresh at once; its sessions end too, so activating it again does not revive them.
       if (changes.active !== undefined && changes.active !== user.active) {
@@ -124,7 +164,7 @@ export class UsersService {
       }
       if (changes.name !== undefined) user.name = changes.name;
       await user.save({ transaction });
-      return toUserView(user);
+      return toUserView(user, scope);
     });
   }
 

@@ -1,6 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import type { Role } from '@mantlepiece/shared';
-import { Omittable } from '../../common/validation.js';
+import { IsOptional } from 'class-validator';
+import { IsRowId, Omittable } from '../../common/validation.js';
 import { EmailField, LocalesField, PersonNameField, RolesField, UiLanguageField } from './user-fields.js';
 
 export class InviteUserDto {
@@ -9,6 +10,12 @@ export class InviteUserDto {
 
   @PersonNameField()
   name: string;
+
+  /** The venue the invited person will work at; left out or null, only an organisation admin may invite, and the roles hold at every venue. */
+  @ApiPropertyOptional({ nullable: true, description: 'The venue whose roles the invitation grants; null for roles at every venue' })
+  @IsOptional()
+  @IsRowId()
+  venueId?: number | null;
 
   @RolesField()
   roles: Role[];

@@ -2,6 +2,7 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
 import { ROLES, type Role } from '@mantlepiece/shared';
 import { PageQuery } from '../../common/page.js';
+import { QueryRowId } from '../../common/validation.js';
 
 export const USER_SORT_KEYS = ['name', 'email', 'createdAt', 'lastSignInAt'] as const;
 export const USER_SORTS = USER_SORT_KEYS.flatMap((key) => [key, `-${key}`]);
@@ -17,6 +18,11 @@ export class ListUsersQuery extends PageQuery {
   @IsOptional()
   @IsIn(ROLES)
   role?: Role;
+
+  @ApiPropertyOptional({ description: 'Only people who hold roles at this venue (by a membership there or at every venue)' })
+  @IsOptional()
+  @QueryRowId()
+  venueId?: number;
 
   @ApiPropertyOptional({ enum: ['true', 'false'] })
   @IsOptional()

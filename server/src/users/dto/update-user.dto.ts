@@ -9,10 +9,12 @@ export class UpdateUserDto {
   @PersonNameField()
   name?: string;
 
+  /** Roles held at every venue; none leaves the person with their venue memberships only. Only the organisation admin changes them. */
   @Omittable()
-  @RolesField()
+  @RolesField({ allowNone: true })
   roles?: Role[];
 
+  /** Locales held at every venue; only the organisation admin changes them. */
   @Omittable()
   @LocalesField()
   locales?: string[];

@@ -24,11 +24,12 @@ export const PersonNameField = () =>
     MaxLength(120),
   );
 
-export const RolesField = () =>
+/** `allowNone`: the roles a person holds at every venue, which may be none when their venues grant them. */
+export const RolesField = ({ allowNone = false } = {}) =>
   applyDecorators(
     ApiProperty({ enum: ROLES, isArray: true }),
     IsArray(),
-    ArrayMinSize(1, { message: 'Choose at least one role.' }),
+    ArrayMinSize(allowNone ? 0 : 1, { message: 'Choose at least one role.' }),
     ArrayUnique(),
     IsIn(ROLES, { each: true, message: `Each role must be one of ${ROLES.join(', ')}.` }),
   );

@@ -1,6 +1,7 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import type { Role } from '@mantlepiece/shared';
 import { jsonColumn } from '../../database/json-column.js';
+import { Venue } from '../../venues/models/venue.model.js';
 import { User } from './user.model.js';
 
 /** An admin's invitation; only the hash of its link token is kept. */
@@ -12,6 +13,12 @@ export class Invitation extends Model {
   @Column({ type: DataType.STRING(120), allowNull: false })
   name: string;
 
+  /** The venue whose membership the invitation grants; null grants the roles at every venue. */
+  @ForeignKey(() => Venue)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  venueId: number | null;
+
+  /** Roles at the invitation's venue, or at every venue when it names none. */
   @Column(jsonColumn('roles'))
   roles: Role[];
 
