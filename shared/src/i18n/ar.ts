@@ -47,6 +47,13 @@ export const ar: WidgetStrings = {
     overlays: { streamlines: 'خطوط الانسياب', particles: 'جسيمات منجرفة', arrows: 'أسهم التدفق', none: 'بلا طبقة إضافية' },
     ramps: { magma: 'الصهارة', seafloor: 'قاع البحر', greys: 'درجات الرمادي' },
   },
+  modelCard: {
+    open: 'كيف نعرف ذلك؟',
+    equations: 'المعادلات',
+    assumptions: 'ما يفترضه',
+    range: 'أين يصحّ',
+    sources: 'مصادره',
+  },
   seaFloorDepth: {
     title: 'عمق قاع البحر',
     instructions: 'اسحب على طول قاع البحر، أو استخدم الأزرار أو مفاتيح الأسهم، لتختار عمره.',

@@ -47,6 +47,13 @@ export const en: WidgetStrings = {
     overlays: { streamlines: 'Streamlines', particles: 'Drifting particles', arrows: 'Flow arrows', none: 'No overlay' },
     ramps: { magma: 'Magma', seafloor: 'Sea floor', greys: 'Greys' },
   },
+  modelCard: {
+    open: 'How do we know?',
+    equations: 'The equations',
+    assumptions: 'What it assumes',
+    range: 'Where it holds',
+    sources: 'Where it comes from',
+  },
   seaFloorDepth: {
     title: 'Sea-floor depth',
     instructions: 'Drag along the sea floor, or use the buttons or arrow keys, to choose how old it is.',

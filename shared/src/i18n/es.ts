@@ -47,6 +47,13 @@ export const es: WidgetStrings = {
     overlays: { streamlines: 'Líneas de corriente', particles: 'Partículas a la deriva', arrows: 'Flechas de flujo', none: 'Sin superposición' },
     ramps: { magma: 'Magma', seafloor: 'Fondo marino', greys: 'Grises' },
   },
+  modelCard: {
+    open: '¿Cómo lo sabemos?',
+    equations: 'Las ecuaciones',
+    assumptions: 'Qué supone',
+    range: 'Dónde es válido',
+    sources: 'De dónde viene',
+  },
   seaFloorDepth: {
     title: 'Profundidad del fondo marino',
     instructions: 'Arrastra a lo largo del fondo marino, o usa los botones o las flechas, para elegir su edad.',

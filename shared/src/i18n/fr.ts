@@ -47,6 +47,13 @@ export const fr: WidgetStrings = {
     overlays: { streamlines: 'Lignes de courant', particles: 'Particules à la dérive', arrows: 'Flèches d’écoulement', none: 'Aucune surcouche' },
     ramps: { magma: 'Magma', seafloor: 'Fond marin', greys: 'Gris' },
   },
+  modelCard: {
+    open: 'Comment le sait-on ?',
+    equations: 'Les équations',
+    assumptions: 'Ce qu’il suppose',
+    range: 'Où il s’applique',
+    sources: 'D’où il vient',
+  },
   seaFloorDepth: {
     title: 'Profondeur du fond marin',
     instructions: 'Faites glisser le long du fond marin, ou utilisez les boutons ou les flèches, pour choisir son âge.',

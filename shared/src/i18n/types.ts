@@ -47,6 +47,14 @@ export interface WidgetStrings {
     overlays: { streamlines: string; particles: string; arrows: string; none: string };
     ramps: { magma: string; seafloor: string; greys: string };
   };
+  /** A widget's model card as visitors open it on the kiosk. */
+  modelCard: {
+    open: string;
+    equations: string;
+    assumptions: string;
+    range: string;
+    sources: string;
+  };
   seaFloorDepth: {
     title: string;
     instructions: string;

@@ -29,7 +29,7 @@ export const examplePanelDoc = (): PanelDocJSON => ({
     },
     {
       type: 'widget',
-      attrs: { widgetType: 'slope-force', widgetId: 'ridge-slope', params: { massKg: 10, angleDeg: 30, staticFriction: 0.85, kineticFriction: 0.6 } },
+      attrs: { widgetType: 'slope-force', widgetId: 'ridge-slope', params: { massKg: 10, angleDeg: 30, staticFriction: 0.85, kineticFriction: 0.6 }, visitorModelCard: false },
     },
     { type: 'heading', attrs: { level: 3 }, content: [{ type: 'text', text: 'Try it' }] },
     {

@@ -7,6 +7,8 @@ export interface PanelWidgetRef {
   widgetType: string;
   widgetId: string;
   params: Record<string, unknown>;
+  /** Whether visitors may open its model card ("How do we know?"). */
+  visitorModelCard: boolean;
 }
 
 export interface PanelLiveValueRef {
@@ -24,7 +26,7 @@ export function widgetsIn(doc: unknown): PanelWidgetRef[] {
   visitPanelNodes(doc, (node, path) => {
     if (node.type !== WIDGET_NODE) return;
     const attrs = node.attrs ?? {};
-    widgets.push({ path, widgetType: text(attrs.widgetType), widgetId: text(attrs.widgetId), params: isPlainObject(attrs.params) ? attrs.params : {} });
+    widgets.push({ path, widgetType: text(attrs.widgetType), widgetId: text(attrs.widgetId), params: isPlainObject(attrs.params) ? attrs.params : {}, visitorModelCard: attrs.visitorModelCard === true });
   });
   return widgets;
 }

@@ -41,7 +41,7 @@ describe('document queries', () => {
   it('list widgets, live values and media with their paths', () => {
     const doc = examplePanelDoc();
     expect(widgetsIn(doc)).toEqual([
-      { path: ['content', 2], widgetType: 'slope-force', widgetId: 'ridge-slope', params: { massKg: 10, angleDeg: 30, staticFriction: 0.85, kineticFriction: 0.6 } },
+      { path: ['content', 2], widgetType: 'slope-force', widgetId: 'ridge-slope', params: { massKg: 10, angleDeg: 30, staticFriction: 0.85, kineticFriction: 0.6 }, visitorModelCard: false },
     ]);
     expect(liveValuesIn(doc)).toEqual([{ path: ['content', 1, 'content', 5], widgetId: 'ridge-slope', output: 'criticalAngleDeg', format: { digits: 2, unit: '°' } }]);
     expect(mediaIdsIn(doc)).toEqual(['ridge-photo']);

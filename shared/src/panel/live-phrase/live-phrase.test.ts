@@ -14,7 +14,7 @@ const phrase = (attrs: Record<string, unknown> = {}): PanelNodeJSON => ({ type: 
 // μs = 0.6 gives a critical angle of arctan 0.6 ≈ 30.96° (inclined plane with Coulomb friction, as in the brief).
 const slope = (angleDeg: number): PanelNodeJSON => ({
   type: 'widget',
-  attrs: { widgetType: 'slope-force', widgetId: 'ridge-slope', params: { massKg: 10, angleDeg, staticFriction: 0.6, kineticFriction: 0.5 } },
+  attrs: { widgetType: 'slope-force', widgetId: 'ridge-slope', params: { massKg: 10, angleDeg, staticFriction: 0.6, kineticFriction: 0.5 }, visitorModelCard: false },
 });
 const panel = (angleDeg: number, ...inline: PanelNodeJSON[]): PanelDocJSON => ({
   type: 'doc',

@@ -31,7 +31,7 @@ describe('live values', () => {
   });
 
   it('follow what a running simulation reports, and show a dash until it has', () => {
-    const widgets = [{ widgetId: 'overturn', widgetType: 'convection-cell', params: { ...convectionCell.defaults }, path: [] }];
+    const widgets = [{ widgetId: 'overturn', widgetType: 'convection-cell', params: { ...convectionCell.defaults }, path: [], visitorModelCard: false }];
     const before = readLiveValue({ widgetId: 'overturn', output: 'nusselt' }, readPanelWidgets(widgets));
     expect(before).toEqual({ ok: false, reason: 'not-reported' });
     expect(liveValueText(before, DEFAULT_LIVE_VALUE_FORMAT, 'en')).toBe('—');

@@ -1,4 +1,4 @@
-import { mergeAttributes, Node } from '@tiptap/core';
+import { mergeAttributes, Node, type CommandProps } from '@tiptap/core';
 import { jsonFromHTML, panelIdAttribute } from '../node-attributes.js';
 import { isPlainObject, WIDGET_NODE } from '../panel-json.js';
 import { uniqueWidgetIds } from './unique-widget-ids.js';
@@ -22,6 +22,8 @@ declare module '@tiptap/core' {
       insertWidget: (options: InsertWidgetOptions) => ReturnType;
       /** Replaces the params of the widget with this id (the side form's save). */
       setWidgetParams: (widgetId: string, params: Record<string, unknown>) => ReturnType;
+      /** Whether visitors may open the widget's model card ("How do we know?") on the kiosk. */
+      setWidgetModelCard: (widgetId: string, shown: boolean) => ReturnType;
     };
   }
 }
@@ -37,6 +39,21 @@ function assertParams(value: unknown): void {
 }
 
 const paramsFromHTML = (element: HTMLElement) => jsonFromHTML(element, 'data-params', isPlainObject);
+
+/** A command setting one attribute of the widget with this id; false when there is none. */
+const setWidgetAttribute =
+  (nodeName: string, widgetId: string, attribute: string, value: unknown) =>
+  ({ tr, state, dispatch }: CommandProps) => {
+    let found: number | null = null;
+    state.doc.descendants((node, pos) => {
+      if (found !== null) return false;
+      if (node.type.name === nodeName && node.attrs.widgetId === widgetId) found = pos;
+      return node.type.name !== nodeName;
+    });
+    if (found === null) return false;
+    if (dispatch) tr.setNodeAttribute(found, attribute, value);
+    return true;
+  };
 
 /**
  * An interactive simulation as one block. Its params are checked against the widget registry by
@@ -69,6 +86,12 @@ export const Widget = Node.create<WidgetOptions>({
         parseHTML: paramsFromHTML,
         renderHTML: (attributes: Record<string, unknown>) => ({ 'data-params': JSON.stringify(attributes.params) }),
       },
+      visitorModelCard: {
+        default: false,
+        validate: 'boolean',
+        parseHTML: (element: HTMLElement) => element.hasAttribute('data-visitor-model-card'),
+        renderHTML: (attributes: Record<string, unknown>) => (attributes.visitorModelCard ? { 'data-visitor-model-card': '' } : {}),
+      },
     };
   },
 
@@ -91,19 +114,8 @@ export const Widget = Node.create<WidgetOptions>({
         ({ widgetType, params, widgetId }) =>
         ({ commands }) =>
           commands.insertContent({ type: this.name, attrs: { widgetType, params, widgetId: widgetId ?? newWidgetId() } }),
-      setWidgetParams:
-        (widgetId, params) =>
-        ({ tr, state, dispatch }) => {
-          let found: number | null = null;
-          state.doc.descendants((node, pos) => {
-            if (found !== null) return false;
-            if (node.type.name === this.name && node.attrs.widgetId === widgetId) found = pos;
-            return node.type.name !== this.name;
-          });
-          if (found === null) return false;
-          if (dispatch) tr.setNodeAttribute(found, 'params', params);
-          return true;
-        },
+      setWidgetParams: (widgetId, params) => setWidgetAttribute(this.name, widgetId, 'params', params),
+      setWidgetModelCard: (widgetId, shown) => setWidgetAttribute(this.name, widgetId, 'visitorModelCard', shown),
     };
   },
 

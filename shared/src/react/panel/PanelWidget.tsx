@@ -14,6 +14,7 @@ import { PlateForces } from '../plate-forces.js';
 import { SeaFloorDepth } from '../sea-floor-depth.js';
 import { SlopeForceBox } from '../slope-force-box.js';
 import type { WidgetInput } from '../widget-controls.js';
+import { VisitorModelCard } from '../visitor-model-card.js';
 
 export interface PanelWidgetProps {
   widgetType: string;
@@ -32,12 +33,14 @@ export interface PanelWidgetProps {
   input?: WidgetInput;
   /** Digits of the live values of its outputs on the same panel, by output name. */
   outputDigits?: Readonly<Record<string, number>>;
+  /** The curator lets visitors open the model card ("How do we know?") under the widget. */
+  visitorModelCard?: boolean;
 }
 
 const blockStyle: CSSProperties = { margin: '0.75em 0' };
 const problemStyle: CSSProperties = { ...blockStyle, padding: '1em', border: '2px dashed currentColor' };
 
-export interface WidgetDrawingProps extends Omit<PanelWidgetProps, 'widgetType' | 'params' | 'reducedMotion' | 'highContrast'> {
+export interface WidgetDrawingProps extends Omit<PanelWidgetProps, 'widgetType' | 'params' | 'reducedMotion' | 'highContrast' | 'visitorModelCard'> {
   widgetType: WidgetType;
   params: unknown;
   /** The kiosk's reduced-motion toggle; without it the system setting counts. */
@@ -95,6 +98,7 @@ export function PanelWidget(props: PanelWidgetProps) {
   return (
     <div style={blockStyle} className="mp-widget" data-widget-type={widgetType}>
       <WidgetDrawing {...props} widgetType={widgetType} params={checked.params} />
+      {props.visitorModelCard ? <VisitorModelCard widgetType={widgetType} locale={props.locale} /> : null}
     </div>
   );
 }

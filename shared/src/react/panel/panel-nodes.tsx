@@ -131,6 +131,7 @@ export function renderPanelNode(node: PanelNodeJSON, context: PanelRenderContext
           maxWidth={context.widgetMaxWidth}
           input={context.widgetInput}
           outputDigits={context.outputDigits.get(widgetId)}
+          visitorModelCard={attrs.visitorModelCard === true}
           onParamsChange={(params) => context.onWidgetParamsChange(widgetId, params)}
           onReport={(report) => context.onWidgetReport(widgetId, report)}
         />

@@ -1,4 +1,4 @@
-import { Accordion, AccordionHeader, AccordionItem, AccordionPanel, makeStyles, MessageBar, MessageBarBody, Text, tokens } from '@fluentui/react-components';
+import { Accordion, AccordionHeader, AccordionItem, AccordionPanel, Field, makeStyles, MessageBar, MessageBarBody, Switch, Text, tokens } from '@fluentui/react-components';
 import type { Editor } from '@tiptap/react';
 import { isWidgetType, widgetModule, type PanelWidgetRef } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
@@ -32,6 +32,13 @@ export function WidgetSettings({ editor, widget }: { editor: Editor; widget: Pan
         <MessageBar key={warning.code} intent="warning" layout="multiline"><MessageBarBody>{warning.message}</MessageBarBody></MessageBar>
       ))}
       {checked.ok ? <Text size={200}>{module.describe(checked.params, i18n.resolvedLanguage ?? 'en')}</Text> : null}
+      <Field hint={t('editor.widget.visitorModelCardHint')}>
+        <Switch
+          label={t('editor.widget.visitorModelCard')}
+          checked={widget.visitorModelCard}
+          onChange={(_event, data) => editor.commands.setWidgetModelCard(widget.widgetId, data.checked)}
+        />
+      </Field>
       <Accordion collapsible>
         <AccordionItem value="model">
           <AccordionHeader as="h3">{t('modelCard.title')}</AccordionHeader>

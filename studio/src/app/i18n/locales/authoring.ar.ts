@@ -169,6 +169,8 @@ export const authoringAr: Translated<typeof authoringEn> = {
       optional: 'اختياري',
       useGroup: 'تحديد هذه',
       startingValue: 'القيمة الابتدائية: {{source}}',
+      visitorModelCard: 'يمكن للزوار فتح «كيف نعرف ذلك؟» تحت الأداة',
+      visitorModelCardHint: 'يعرض لهم بطاقة النموذج هذه بلغتهم: ما هو النموذج، وما يفترضه، ومن أين يأتي.',
     },
     preview: {
       title: 'معاينة',

@@ -158,6 +158,8 @@ export const authoringEn = {
       optional: 'optional',
       useGroup: 'Set these',
       startingValue: 'Starting value: {{source}}',
+      visitorModelCard: 'Visitors can open “How do we know?” under the widget',
+      visitorModelCardHint: 'Shows them this model card in their language: what the model is, what it assumes and where it comes from.',
     },
     preview: {
       title: 'Preview',

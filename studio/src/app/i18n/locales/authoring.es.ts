@@ -161,6 +161,8 @@ export const authoringEs: Translated<typeof authoringEn> = {
       optional: 'opcional',
       useGroup: 'Definir estos',
       startingValue: 'Valor inicial: {{source}}',
+      visitorModelCard: 'Los visitantes pueden abrir «¿Cómo lo sabemos?» bajo el widget',
+      visitorModelCardHint: 'Les muestra esta ficha del modelo en su idioma: qué es el modelo, qué supone y de dónde viene.',
     },
     preview: {
       title: 'Vista previa',

@@ -160,6 +160,8 @@ export const authoringFr: typeof authoringEn = {
       optional: 'facultatif',
       useGroup: 'Définir ces valeurs',
       startingValue: 'Valeur de départ : {{source}}',
+      visitorModelCard: 'Les visiteurs peuvent ouvrir « Comment le sait-on ? » sous le widget',
+      visitorModelCardHint: 'Leur montre cette fiche du modèle dans leur langue : ce qu’est le modèle, ce qu’il suppose et d’où il vient.',
     },
     preview: {
       title: 'Aperçu',
