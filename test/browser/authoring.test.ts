@@ -47,6 +47,8 @@ describe('a curator writes a panel', () => {
     storyUrl = page.url();
     await page.getByRole('button', { name: 'Add the first panel' }).click();
     await editorText().waitFor();
+    // An empty panel says what goes in it (a drawn hint, never part of the document).
+    await eventually(() => page.locator('.ProseMirror .is-editor-empty').getAttribute('data-placeholder')).toMatch(/^Write this panel here/);
   });
 
   it('types text, and the word count follows', async () => {

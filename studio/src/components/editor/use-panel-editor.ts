@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { Placeholder } from '@tiptap/extensions';
 import { useEditor } from '@tiptap/react';
 import type { PanelDocJSON } from '@mantlepiece/shared';
 import { panelEditorExtensions, type ResolveMedia } from '@mantlepiece/shared/react';
@@ -8,7 +9,7 @@ import { CommentHighlights } from './comment-highlights';
 /**
  * The Tiptap editor of one panel: the shared extension list (the server checks documents against
  * the same one) with the shared React node views, so widgets and live values draw as on the kiosk,
- * plus the studio's marks over words that review comments are about.
+ * plus the studio's marks over words that review comments are about and a hint in an empty panel.
  */
 export function usePanelEditor({ initialDoc, locale, resolveMedia, onChange }: {
   initialDoc: PanelDocJSON;
@@ -18,7 +19,12 @@ export function usePanelEditor({ initialDoc, locale, resolveMedia, onChange }: {
 }) {
   const { t } = useTranslation();
   const missingMediaLabel = t('editor.missingImage');
-  const extensions = useMemo(() => [...panelEditorExtensions({ locale, resolveMedia, missingMediaLabel }), CommentHighlights], [locale, resolveMedia, missingMediaLabel]);
+  const emptyPanel = t('editor.emptyPanel');
+  const extensions = useMemo(
+    // The placeholder is the studio's alone: it is drawn by CSS, never stored in the document.
+    () => [...panelEditorExtensions({ locale, resolveMedia, missingMediaLabel }), CommentHighlights, Placeholder.configure({ placeholder: emptyPanel })],
+    [locale, resolveMedia, missingMediaLabel, emptyPanel],
+  );
   return useEditor(
     {
       extensions,

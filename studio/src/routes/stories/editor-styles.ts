@@ -12,6 +12,10 @@ export const useEditorStyles = makeStyles({
       lineHeight: tokens.lineHeightBase400,
     },
     '& .ProseMirror:focus-visible': { boxShadow: `inset 0 0 0 2px ${tokens.colorStrokeFocus2}` },
+    // Only a panel with nothing in it shows the hint, not every empty paragraph.
+    '& .ProseMirror .is-editor-empty:first-child::before': {
+      content: 'attr(data-placeholder)', float: 'inline-start', height: 0, pointerEvents: 'none', color: tokens.colorNeutralForeground3,
+    },
     '& .ProseMirror h2': { fontSize: tokens.fontSizeBase600, margin: `${tokens.spacingVerticalM} 0 ${tokens.spacingVerticalS}`, color: tokens.colorBrandForeground2 },
     '& .ProseMirror h3': { fontSize: tokens.fontSizeBase500, margin: `${tokens.spacingVerticalM} 0 ${tokens.spacingVerticalXS}`, color: tokens.colorBrandForeground2 },
     '& .ProseMirror p': { margin: `0 0 ${tokens.spacingVerticalS}` },

@@ -74,6 +74,7 @@ export const authoringAr: Translated<typeof authoringEn> = {
   },
   editor: {
     area: 'نص اللوحة',
+    emptyPanel: 'اكتب هذه اللوحة هنا: عنوان، وبضع جمل قصيرة، ثم أداة أو صورة من شريط الأدوات.',
     toolbar: 'تنسيق اللوحة',
     side: 'إعدادات الأداة والمعاينة',
     bold: 'عريض',

@@ -67,6 +67,7 @@ export const authoringEn = {
   },
   editor: {
     area: 'Panel text',
+    emptyPanel: 'Write this panel here: a heading, a few short sentences, then a widget or an image from the toolbar.',
     toolbar: 'Panel formatting',
     side: 'Widget settings and preview',
     bold: 'Bold',

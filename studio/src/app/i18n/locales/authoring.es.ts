@@ -70,6 +70,7 @@ export const authoringEs: Translated<typeof authoringEn> = {
   },
   editor: {
     area: 'Texto del panel',
+    emptyPanel: 'Escriba aquí este panel: un título, unas frases cortas y luego un widget o una imagen desde la barra de herramientas.',
     toolbar: 'Formato del panel',
     side: 'Ajustes del widget y vista previa',
     bold: 'Negrita',

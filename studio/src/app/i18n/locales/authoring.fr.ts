@@ -69,6 +69,7 @@ export const authoringFr: typeof authoringEn = {
   },
   editor: {
     area: 'Texte du panneau',
+    emptyPanel: 'Écrivez ce panneau ici : un titre, quelques phrases courtes, puis un widget ou une image depuis la barre d’outils.',
     toolbar: 'Mise en forme du panneau',
     side: 'Réglages du widget et aperçu',
     bold: 'Gras',
