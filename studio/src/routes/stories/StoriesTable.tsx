@@ -36,6 +36,7 @@ export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryVi
           <TableHeaderCell {...sortableColumn(sort, 'state', onSort)}>{t('stories.columns.state')}</TableHeaderCell>
           <TableHeaderCell className={styles.panelsColumn}>{t('stories.columns.panels')}</TableHeaderCell>
           <TableHeaderCell className={styles.updatedColumn} {...sortableColumn(sort, 'updatedAt', onSort)}>{t('stories.columns.updated')}</TableHeaderCell>
+          <TableHeaderCell className={styles.updatedColumn} {...sortableColumn(sort, 'createdAt', onSort)}>{t('stories.columns.started')}</TableHeaderCell>
         </TableRow>
       </TableHeader>
       <TableBody>
@@ -53,9 +54,10 @@ export function StoriesTable({ stories, sort, onSort, busy }: { stories: StoryVi
             <TableCell>{languageName(story.sourceLocale)}</TableCell>
             <TableCell><StoryStateBadge state={story.state} approvedRevision={story.approvedRevision} /></TableCell>
             <TableCell className={styles.number}>{story.panelCount}</TableCell>
+            <TableCell><span className={styles.date}>{formatDate(story.updatedAt)}</span></TableCell>
             <TableCell>
-              <span className={styles.date}>{formatDate(story.updatedAt)}</span>
-              {story.createdBy ? <span className={styles.muted}>{t('story.createdBy', { name: story.createdBy.name })}</span> : null}
+              <span className={styles.date}>{formatDate(story.createdAt)}</span>
+              {story.createdBy ? <span className={styles.muted}>{story.createdBy.name}</span> : null}
             </TableCell>
           </TableRow>
         ))}

@@ -20,7 +20,7 @@ export const authoringAr: Translated<typeof authoringEn> = {
     anyState: 'أي حالة',
     anyExhibit: 'أي معرض',
     anyAudience: 'أي جمهور',
-    columns: { title: 'العنوان', exhibit: 'المعرض', audience: 'الجمهور', locale: 'اللغة', state: 'الحالة', panels: 'اللوحات', updated: 'آخر تغيير' },
+    columns: { title: 'العنوان', exhibit: 'المعرض', audience: 'الجمهور', locale: 'اللغة', state: 'الحالة', panels: 'اللوحات', updated: 'آخر تغيير', started: 'البداية' },
     noExhibit: 'بلا معرض',
     emptyTitle: 'لا توجد قصص بعد',
     emptyBody: 'القصة بضع لوحات من نص قصير وصور ومحاكاة. ابدأ قصة واكتب لوحتها الأولى.',

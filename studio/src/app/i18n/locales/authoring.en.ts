@@ -17,7 +17,7 @@ export const authoringEn = {
     anyState: 'Any state',
     anyExhibit: 'Any exhibit',
     anyAudience: 'Any audience',
-    columns: { title: 'Title', exhibit: 'Exhibit', audience: 'Audience', locale: 'Language', state: 'State', panels: 'Panels', updated: 'Last changed' },
+    columns: { title: 'Title', exhibit: 'Exhibit', audience: 'Audience', locale: 'Language', state: 'State', panels: 'Panels', updated: 'Last changed', started: 'Started' },
     noExhibit: 'No exhibit',
     emptyTitle: 'No stories yet',
     emptyBody: 'A story is a few panels of short text, images and simulations. Start one and write its first panel.',

@@ -20,7 +20,7 @@ export const authoringEs: Translated<typeof authoringEn> = {
     anyState: 'Cualquier estado',
     anyExhibit: 'Cualquier exposición',
     anyAudience: 'Cualquier público',
-    columns: { title: 'Título', exhibit: 'Exposición', audience: 'Público', locale: 'Idioma', state: 'Estado', panels: 'Paneles', updated: 'Último cambio' },
+    columns: { title: 'Título', exhibit: 'Exposición', audience: 'Público', locale: 'Idioma', state: 'Estado', panels: 'Paneles', updated: 'Último cambio', started: 'Iniciada' },
     noExhibit: 'Sin exposición',
     emptyTitle: 'Todavía no hay historias',
     emptyBody: 'Una historia son unos pocos paneles de texto breve, imágenes y simulaciones. Empiece una y escriba su primer panel.',

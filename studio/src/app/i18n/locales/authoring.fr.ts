@@ -19,7 +19,7 @@ export const authoringFr: typeof authoringEn = {
     anyState: 'Tous les états',
     anyExhibit: 'Toutes les expositions',
     anyAudience: 'Tous les publics',
-    columns: { title: 'Titre', exhibit: 'Exposition', audience: 'Public', locale: 'Langue', state: 'État', panels: 'Panneaux', updated: 'Dernière modification' },
+    columns: { title: 'Titre', exhibit: 'Exposition', audience: 'Public', locale: 'Langue', state: 'État', panels: 'Panneaux', updated: 'Dernière modification', started: 'Commencé' },
     noExhibit: 'Aucune exposition',
     emptyTitle: 'Aucun récit pour l’instant',
     emptyBody: 'Un récit, ce sont quelques panneaux de texte court, d’images et de simulations. Commencez-en un et écrivez son premier panneau.',
