@@ -16,8 +16,8 @@ describe('the seeded demo scenario on the running server', () => {
     expect(user).toMatchObject({ email: account.email, name: account.name, roles: account.roles, locales: account.locales });
   });
 
-  it('shows the demo venue to an unpaired kiosk', async () => {
-    const res = await fetch(`${server}/api/kiosk/venue`);
+  it('shows the demo venue to an unpaired kiosk opened at its install URL', async () => {
+    const res = await fetch(`${server}/api/kiosk/venue?slug=${DEMO_VENUE.slug}`);
     expect(await res.json()).toEqual({ name: DEMO_VENUE.name, locales: ['en', 'fr', 'es'] });
   });
 });

@@ -84,6 +84,24 @@ describe('kiosk app', () => {
     expect(server.requestsTo('/api/kiosk/heartbeat')[0]!.body).toMatchObject({ appVersion: '0.1.0', lastError: null });
   });
 
+  it('shows the venue its install URL names while unpaired, and its own venue once paired', async () => {
+    server = new FakeKioskServer();
+    store = await testStore();
+    server.venues = { bySlug: { 'basalt-point': { name: 'Basalt Point Earth Science Centre', locales: ['en', 'fr'] } }, paired: { name: 'Obsidian Bay Geology Hall', locales: ['es', 'en'] } };
+    server.pairing.start.push({ pairingCode: 'V3NU3A', pollToken: 'poll-v', expiresAt: new Date(Date.now() + 600_000).toISOString() });
+    server.pairing.completes.push({ status: 200, body: credential });
+    render(<KioskApp api={new KioskApi(server.fetch)} store={store} config={{ ...config, venueSlug: 'basalt-point' }} appVersion="0.1.0" />);
+    await vi.waitFor(() => screen.getByText('Basalt Point Earth Science Centre'));
+    expect(server.requestsTo('/api/kiosk/venue')[0]!.search).toBe('?slug=basalt-point');
+
+    // Paired to a station of another venue, with nothing published yet: the waiting screen speaks that venue's languages.
+    await act(() => vi.advanceTimersByTimeAsync(2_000));
+    await vi.waitFor(() => expect(server.requestsTo('/api/kiosk/venue')).toHaveLength(2));
+    const asked = server.requestsTo('/api/kiosk/venue')[1]!;
+    expect({ search: asked.search, token: asked.headers.get('Authorization') }).toEqual({ search: '', token: `Bearer ${credential.deviceToken}` });
+    await vi.waitFor(() => expect(screen.getByRole('heading', { level: 1 }).textContent).toBe('Las historias están en camino'));
+  });
+
   it('once revoked, lets the visitor finish, forgets its pairing and releases, and shows that it was unpaired with a new code, also after a restart', async () => {
     await pairedKioskWithRelease();
     await store.db.put('outbox', { id: 'e-1', at: new Date().toISOString(), type: 'story_opened', storyId: 1, locale: 'en' } as never);

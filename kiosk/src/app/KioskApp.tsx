@@ -57,17 +57,21 @@ export function KioskApp({ api, store, config, appVersion }: KioskAppProps) {
 
   useEffect(() => {
     const controller = new AbortController();
+    // Unknown (several venues, none named) or unreachable: the neutral screens stay.
+    const showVenue = (answer: Promise<KioskVenue | null>) => answer.then((found) => found && setVenue(found), () => undefined);
     const boot = async () => {
       let paired = await store.credential();
       if (!paired) {
         const unpairedAt = await store.meta('unpairedAt');
         setPhase({ kind: 'pairing', status: null, unpairedAt });
-        api.venue().then(setVenue, () => undefined);
+        showVenue(api.venue(config.venueSlug));
         paired = await pairKiosk(api, store, (status) => setPhase({ kind: 'pairing', status, unpairedAt }), controller.signal);
       }
       credential.current = paired;
       api.useDeviceToken(paired.deviceToken);
       api.whenUnpaired(() => setRevoked(true));
+      // Paired, the kiosk belongs to its station's venue, whatever the install URL named.
+      showVenue(api.venue());
       const release = await bootRelease(store, paired.publicKey);
       if (controller.signal.aborted) return release?.dispose();
       playing.current = release;

@@ -1,4 +1,7 @@
-/** Timings a venue may tune per screen, from the launch URL (`/kiosk/?idle=120&warning=30`, seconds). */
+/**
+ * What a venue sets per screen in the launch URL: timings in seconds (`/kiosk/?idle=120&warning=30`)
+ * and the venue an unpaired screen shows (`?venue=<slug>`, the install URL a technician opens).
+ */
 export interface KioskConfig {
   /** Quiet time before the "Still there?" warning. */
   idleMs: number;
@@ -9,6 +12,8 @@ export interface KioskConfig {
   manifestPollMs: number;
   heartbeatMs: number;
   eventUploadMs: number;
+  /** The venue's key; a paired kiosk shows its own venue whatever this says. */
+  venueSlug: string | null;
 }
 
 export const DEFAULT_CONFIG: KioskConfig = {
@@ -18,12 +23,13 @@ export const DEFAULT_CONFIG: KioskConfig = {
   manifestPollMs: 60_000,
   heartbeatMs: 30_000,
   eventUploadMs: 60_000,
+  venueSlug: null,
 };
 
 /** WCAG 2.2 success criterion 2.2.1 lets a warning stand in for a longer limit if it gives at least 20 s. */
 export const MIN_WARNING_MS = 20_000;
 
-const PARAMS: Record<string, keyof KioskConfig> = {
+const PARAMS: Record<string, Exclude<keyof KioskConfig, 'venueSlug'>> = {
   idle: 'idleMs',
   warning: 'warningMs',
   attract: 'attractMs',
@@ -33,8 +39,8 @@ const PARAMS: Record<string, keyof KioskConfig> = {
 };
 
 export function readKioskConfig(search: string): KioskConfig {
-  const config = { ...DEFAULT_CONFIG };
   const query = new URLSearchParams(search);
+  const config = { ...DEFAULT_CONFIG, venueSlug: query.get('venue') || null };
   for (const [param, key] of Object.entries(PARAMS)) {
     const seconds = Number(query.get(param));
     if (query.has(param) && Number.isFinite(seconds) && seconds > 0) config[key] = seconds * 1000;

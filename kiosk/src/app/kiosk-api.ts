@@ -2,7 +2,7 @@ import type {
   EventsBody, EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, KioskManifestResponse, PairCompleteWaiting, PairStartResponse,
 } from '@mantlepiece/shared/kiosk';
 
-/** The public view of the default venue, for the attract loop before the kiosk is paired. */
+/** The public view of a venue: its name and languages, for the screens a kiosk shows before it plays. */
 export interface KioskVenue {
   name: string;
   locales: string[];
@@ -64,8 +64,16 @@ export class KioskApi {
     return { status: response.status, body: (await response.json()) as T };
   }
 
-  async venue(): Promise<KioskVenue> {
-    return (await this.json<KioskVenue>('/api/kiosk/venue')).body;
+  /**
+   * The venue to show: a paired kiosk's own; unpaired, the one `slug` names, else the only venue
+   * there is. Null when the server names none (several venues, none named).
+   */
+  async venue(slug: string | null = null): Promise<KioskVenue | null> {
+    const path = `/api/kiosk/venue${slug ? `?slug=${encodeURIComponent(slug)}` : ''}`;
+    const response = await this.send(path, { headers: { Accept: 'application/json' } });
+    if (response.status === 204) return null;
+    if (response.status !== 200) throw new KioskApiError(response.status, `GET ${path} answered ${response.status}.`);
+    return (await response.json()) as KioskVenue;
   }
 
   async startPairing(): Promise<PairStartResponse> {

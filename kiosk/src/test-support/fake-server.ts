@@ -1,10 +1,11 @@
 import type { PairStartResponse } from '@mantlepiece/shared/kiosk';
-import type { Fetch } from '../app/kiosk-api';
+import type { Fetch, KioskVenue } from '../app/kiosk-api';
 import type { FixtureRelease } from './release-fixture';
 
 export interface RecordedRequest {
   method: string;
   path: string;
+  search: string;
   headers: Headers;
   body: unknown;
 }
@@ -23,6 +24,8 @@ export class FakeKioskServer {
   /** A technician revoked the kiosk: every device-token route answers 401, as the server's guard does. */
   revoked = false;
   pairing: { start: PairStartResponse[]; completes: Array<{ status: number; body?: unknown }> } = { start: [], completes: [] };
+  /** `GET /api/kiosk/venue`: the venue a paired kiosk (its token sent) is answered, and those named by slug; none answers 204. */
+  venues: { paired?: KioskVenue; bySlug: Record<string, KioskVenue> } = { bySlug: {} };
   readonly requests: RecordedRequest[] = [];
 
   readonly fetch: Fetch = async (input, init) => {
@@ -30,12 +33,12 @@ export class FakeKioskServer {
     const method = init?.method ?? 'GET';
     const headers = new Headers(init?.headers);
     const body = typeof init?.body === 'string' ? JSON.parse(init.body) : undefined;
-    this.requests.push({ method, path: url.pathname, headers, body });
+    this.requests.push({ method, path: url.pathname, search: url.search, headers, body });
     if (!this.reachable) throw new TypeError('Failed to fetch');
-    return this.answer(method, url.pathname, headers);
+    return this.answer(method, url.pathname, headers, url.searchParams);
   };
 
-  private answer(method: string, path: string, headers: Headers): Response {
+  private answer(method: string, path: string, headers: Headers, query: URLSearchParams): Response {
     const json = (status: number, value?: unknown, extra: HeadersInit = {}) =>
       new Response(value === undefined ? null : JSON.stringify(value), { status, headers: { 'Content-Type': 'application/json', ...extra } });
     if (method === 'POST' && path === '/api/kiosk/pair/start') return json(201, this.pairing.start.shift());
@@ -44,6 +47,10 @@ export class FakeKioskServer {
       return json(next.status, next.body);
     }
     if (this.revoked && !path.startsWith('/api/kiosk/pair/')) return json(401, { statusCode: 401, message: 'Pair this kiosk to continue.' });
+    if (method === 'GET' && path === '/api/kiosk/venue') {
+      const venue = headers.has('Authorization') ? this.venues.paired : this.venues.bySlug[query.get('slug') ?? ''];
+      return venue ? json(200, venue) : new Response(null, { status: 204 });
+    }
     if (method === 'GET' && path === '/api/kiosk/manifest') {
       if (!this.live) return new Response(null, { status: 204 });
       const { etag } = this.live;

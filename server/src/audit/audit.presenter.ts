@@ -8,11 +8,12 @@ export function toAuditEventView(event: AuditEvent): AuditEventView {
     actor: event.actor ? { id: event.actor.id, name: event.actor.name } : null,
     action: event.action,
     target: event.targetType ? { type: event.targetType, id: event.targetId ?? '' } : null,
+    venueId: event.venueId,
     details: event.detail,
   };
 }
 
-const CSV_COLUMNS = ['id', 'at', 'actor_id', 'actor_name', 'action', 'target_type', 'target_id', 'details'] as const;
+const CSV_COLUMNS = ['id', 'at', 'actor_id', 'actor_name', 'action', 'target_type', 'target_id', 'venue_id', 'details'] as const;
 
 /**
  * A spreadsheet would run a cell that starts like a formula, so such text gets a leading
@@ -26,7 +27,7 @@ const field = (value: string | number | null) => `"${defused(value === null ? ''
 export function toAuditCsv(events: readonly AuditEventView[]): string {
   const records = events.map((event) => [
     event.id, event.at, event.actor?.id ?? null, event.actor?.name ?? null, event.action,
-    event.target?.type ?? null, event.target?.id ?? null, event.details ? JSON.stringify(event.details) : null,
+    event.target?.type ?? null, event.target?.id ?? null, event.venueId, event.details ? JSON.stringify(event.details) : null,
   ]);
   return [CSV_COLUMNS, ...records].map((record) => record.map(field).join(',')).join('\r\n') + '\r\n';
 }

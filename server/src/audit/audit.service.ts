@@ -1,7 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, type FindOptions, type Transaction, type WhereOptions } from 'sequelize';
-import type { AuditEventView, Page } from '@mantlepiece/shared';
+import type { AuditEventView, Page, Role } from '@mantlepiece/shared';
+import { scopeWhere, venueScope, type Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { isDateOnly } from '../common/date-only.js';
 import { pageWindow, toPage } from '../common/page.js';
@@ -9,6 +10,9 @@ import { User } from '../users/models/user.model.js';
 import { AuditEvent } from './models/audit-event.model.js';
 import type { ListAuditEventsQuery } from './dto/list-audit-events.query.js';
 import { toAuditCsv, toAuditEventView } from './audit.presenter.js';
+
+/** Who reads the audit trail: the admins, each of the venues where they are one. */
+export const AUDIT_READERS: readonly Role[] = ['admin'];
 
 /** Names of the things we record. */
 export type AuditAction =
@@ -40,6 +44,8 @@ export interface AuditEntry {
   action: AuditAction;
   targetType?: string;
   targetId?: string | number;
+  /** The venue of what the event is about; left out for an organisation-wide event. */
+  venueId?: number;
   detail?: Record<string, unknown>;
   clientAddress?: string;
 }
@@ -59,6 +65,7 @@ export class AuditService {
         action: entry.action,
         targetType: entry.targetType ?? null,
         targetId: entry.targetId === undefined ? null : String(entry.targetId),
+        venueId: entry.venueId ?? null,
         detail: entry.detail ?? null,
         clientAddress: entry.clientAddress ?? null,
         createdAt: this.clock.now(),
@@ -67,14 +74,14 @@ export class AuditService {
     );
   }
 
-  async list(query: ListAuditEventsQuery): Promise<Page<AuditEventView>> {
-    const { rows, count } = await this.events.findAndCountAll({ ...filtered(query), ...pageWindow(query) });
+  async list(query: ListAuditEventsQuery, member: Member): Promise<Page<AuditEventView>> {
+    const { rows, count } = await this.events.findAndCountAll({ ...filtered(query, member), ...pageWindow(query) });
     return toPage(rows.map(toAuditEventView), count, query);
   }
 
   /** Every event the filter matches, oldest first as a trail is read, up to CSV_MAX_ROWS. */
-  async exportCsv(query: ListAuditEventsQuery): Promise<string> {
-    const rows = await this.events.findAll({ ...filtered(query), order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: CSV_MAX_ROWS });
+  async exportCsv(query: ListAuditEventsQuery, member: Member): Promise<string> {
+    const rows = await this.events.findAll({ ...filtered(query, member), order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: CSV_MAX_ROWS });
     return toAuditCsv(rows.map(toAuditEventView));
   }
 }
@@ -87,8 +94,13 @@ const DAY_MS = 86_400_000;
 /** `to` as a date covers that whole day (UTC); as a moment it is the moment itself. */
 const endOf = (to: string) => (isDateOnly(to) ? new Date(new Date(`${to}T00:00:00Z`).getTime() + DAY_MS) : new Date(new Date(to).getTime() + 1));
 
-function filtered(query: ListAuditEventsQuery): FindOptions<AuditEvent> {
-  const conditions: WhereOptions<AuditEvent>[] = [];
+/**
+ * The organisation's admin reads the whole trail; a venue's admin reads the events of their venues
+ * only, never organisation-wide ones (sign-ins, accounts), which name no venue.
+ */
+function filtered(query: ListAuditEventsQuery, member: Member): FindOptions<AuditEvent> {
+  const conditions: WhereOptions<AuditEvent>[] = [scopeWhere(venueScope(member, AUDIT_READERS))];
+  if (query.venueId) conditions.push({ venueId: query.venueId });
   if (query.action) conditions.push({ action: query.action });
   if (query.actorId) conditions.push({ actorId: query.actorId });
   if (query.from) conditions.push({ createdAt: { [Op.gte]: new Date(query.from) } });

@@ -37,7 +37,7 @@ export class ExhibitsController {
 
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  delete(@Param('id', ParseIntPipe) id: number) {
-    return this.exhibits.delete(id);
+  delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.exhibits.delete(id, person);
   }
 }

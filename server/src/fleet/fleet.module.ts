@@ -5,7 +5,7 @@ import { KioskHeartbeat } from '../kiosks/models/kiosk-heartbeat.model.js';
 import { Kiosk } from '../kiosks/models/kiosk.model.js';
 import { MailModule } from '../mail/mail.module.js';
 import { Release } from '../releases/models/release.model.js';
-import { User } from '../users/models/user.model.js';
+import { UsersModule } from '../users/users.module.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { FleetStatesModule } from './fleet-states.module.js';
@@ -15,7 +15,7 @@ import { SilentKioskWatcher } from './silent-kiosk.watcher.js';
 
 /** Watching the kiosks: a kiosk's page with its history, and mail when one goes silent or comes back. */
 @Module({
-  imports: [SequelizeModule.forFeature([Kiosk, KioskHeartbeat, Release, User, Station, Gallery]), KiosksModule, FleetStatesModule, MailModule],
+  imports: [SequelizeModule.forFeature([Kiosk, KioskHeartbeat, Release, Station, Gallery]), KiosksModule, FleetStatesModule, MailModule, UsersModule],
   controllers: [FleetController],
   providers: [FleetService, SilentKioskWatcher],
 })

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { FleetKioskDetail } from '@mantlepiece/shared';
-import type { Person } from '../auth/policy.js';
+import type { Member } from '../auth/policy.js';
 import { pageWindow, toPage, type PageQuery } from '../common/page.js';
 import { KiosksService } from '../kiosks/kiosks.service.js';
 import { KioskHeartbeat } from '../kiosks/models/kiosk-heartbeat.model.js';
@@ -19,8 +19,8 @@ export class FleetService {
   ) {}
 
   /** One kiosk as the Fleet page shows it, with a page of its heartbeats, newest first. */
-  async kiosk(id: number, query: PageQuery, person: Person): Promise<FleetKioskDetail> {
-    const view = this.states.present(await this.kiosks.get(id, person));
+  async kiosk(id: number, query: PageQuery, member: Member): Promise<FleetKioskDetail> {
+    const view = this.states.present(await this.kiosks.get(id, member));
     const { rows, count } = await this.heartbeats.findAndCountAll({ where: { kioskId: id }, order: [['id', 'DESC']], ...pageWindow(query) });
     const releaseIds = [...new Set(rows.flatMap((row) => (row.releaseId === null ? [] : [row.releaseId])))];
     const releases = releaseIds.length ? await this.releases.findAll({ where: { id: releaseIds }, attributes: ['id', 'number'] }) : [];

@@ -7,6 +7,7 @@ import { galleryWithExhibit } from '../../test/authoring-fixtures.js';
 import { pairedKiosk } from '../../test/release-fixtures.js';
 import { member } from '../../test/review-fixtures.js';
 import { createTestApp, type TestApp } from '../../test/test-app.js';
+import { memberAt } from '../../test/venue-fixtures.js';
 import { Kiosk } from '../kiosks/models/kiosk.model.js';
 import { MailOutboxWorker } from '../mail/mail-outbox.worker.js';
 import { SilentKioskWatcher } from './silent-kiosk.watcher.js';
@@ -22,7 +23,7 @@ afterAll(async () => {
 const admin = await member(t, ['admin']);
 const technician = await member(t, ['technician'], { name: 'Tomás Reyes' });
 const frenchTechnician = await member(t, ['technician'], { name: 'Élise Marchand', uiLanguage: 'fr' });
-const { gallery } = await galleryWithExhibit(t, admin.auth, 'watch');
+const { venue, gallery } = await galleryWithExhibit(t, admin.auth, 'watch');
 const watcher = t.app.get(SilentKioskWatcher);
 
 /** Runs the outbox as its timer would, until nothing is due. */
@@ -101,5 +102,23 @@ describe('silent-kiosk watcher', () => {
     await deliverAll();
     expect(await mailAbout(technician.person.email, playing.station.name)).toEqual([]);
     expect((await mailAbout(technician.person.email, unplugged.station.name)).map((m) => m.subject)).toEqual([`Kiosk silent: ${unplugged.station.name}, ${gallery.name}`]);
+  }, 90_000);
+
+  it('mails the technicians of the kiosk’s venue, not those of another venue', async () => {
+    mailDir();
+    // Signed in afresh: the clock has moved on past the suite's first sign-ins.
+    const keeper = await member(t, ['admin']);
+    const orgTechnician = await member(t, ['technician']);
+    const here = await memberAt(t, venue.id, ['technician']);
+    const elsewhere = await memberAt(t, (await galleryWithExhibit(t, keeper.auth, 'watch-elsewhere')).venue.id, ['technician']);
+    const { station, credential } = await pairedKiosk(t, keeper.auth, orgTechnician.auth, gallery.id);
+    await setAsideKiosksBut([credential.kioskId]);
+    t.clock.advance(300_000);
+    expect((await watcher.check()).silent).toEqual([credential.kioskId]);
+    await deliverAll();
+    const silent = `Kiosk silent: ${station.name}, ${gallery.name}`;
+    expect((await mailAbout(here.user.email, station.name)).map((m) => m.subject)).toEqual([silent]);
+    expect((await mailAbout(orgTechnician.person.email, station.name)).map((m) => m.subject)).toEqual([silent]);
+    expect(await mailAbout(elsewhere.user.email, station.name)).toEqual([]);
   }, 90_000);
 });

@@ -1,6 +1,6 @@
 import { Injectable, type OnModuleInit } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { Op, type Transaction } from 'sequelize';
+import { Op } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
@@ -8,7 +8,7 @@ import { BackgroundJobs } from '../jobs/background-jobs.service.js';
 import { Kiosk } from '../kiosks/models/kiosk.model.js';
 import type { MailContent } from '../mail/mail-templates.js';
 import { MailService } from '../mail/mail.service.js';
-import { User } from '../users/models/user.model.js';
+import { UsersService } from '../users/users.service.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
@@ -23,14 +23,12 @@ export interface WatchReport {
   back: number[];
 }
 
-const isTechnician = Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('roles'), JSON.stringify('technician')), 1);
-
 /**
- * Tells technicians when a kiosk has been silent past the offline threshold, and again when it
- * reports back. The alert is claimed on the kiosk row with a conditional update before the mail
- * is queued in the same transaction, so each goes out once however often (and on however many
- * server instances) the check runs. The timer's checks run as a singleton background job: one
- * instance at a time judges, under the `fleet-watch` lease.
+ * Tells the technicians of a kiosk's venue when it has been silent past the offline threshold, and
+ * again when it reports back. The alert is claimed on the kiosk row with a conditional update
+ * before the mail is queued in the same transaction, so each goes out once however often (and on
+ * however many server instances) the check runs. The timer's checks run as a singleton background
+ * job: one instance at a time judges, under the `fleet-watch` lease.
  */
 @Injectable()
 export class SilentKioskWatcher implements OnModuleInit {
@@ -43,7 +41,7 @@ export class SilentKioskWatcher implements OnModuleInit {
 
   constructor(
     @InjectModel(Kiosk) private readonly kiosks: typeof Kiosk,
-    @InjectModel(User) private readonly users: typeof User,
+    private readonly users: UsersService,
     private readonly mail: MailService,
     private readonly states: KioskStates,
     private readonly clock: Clock,
@@ -115,15 +113,11 @@ export class SilentKioskWatcher implements OnModuleInit {
       const [moved] = await this.kiosks.update(next, { where: { id: kiosk.id, ...expected }, transaction });
       if (moved !== 1) return false;
       const link = this.mail.studioLink(`/fleet/${kiosk.id}`);
-      for (const technician of await this.technicians(transaction)) {
+      for (const technician of await this.users.holdingAt(kiosk.station.gallery.venueId, 'technician', transaction)) {
         await this.mail.enqueue(technician.email, technician.uiLanguage, content(technician.name, link), transaction);
       }
       return true;
     });
-  }
-
-  private technicians(transaction: Transaction): Promise<User[]> {
-    return this.users.findAll({ where: { [Op.and]: [{ active: true }, isTechnician] }, order: [['id', 'ASC']], transaction });
   }
 }
 

@@ -1,10 +1,11 @@
 import { Controller, Get, Query, Req, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
-import { Roles } from '../auth/auth.decorators.js';
+import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
 import { InsightsQuery } from './dto/insights.query.js';
 import { toInsightsCsv } from './insights.presenter.js';
-import { InsightsService } from './insights.service.js';
+import { INSIGHTS_READERS, InsightsService } from './insights.service.js';
 
 @ApiTags('insights')
 @ApiBearerAuth()
@@ -14,10 +15,10 @@ export class InsightsController {
 
   /** The figures as JSON, or with `Accept: text/csv` the same figures as a file. */
   @Get()
-  @Roles('curator', 'educator', 'technician', 'admin')
+  @Roles(...INSIGHTS_READERS)
   @ApiProduces('application/json', 'text/csv')
-  async figures(@Query() query: InsightsQuery, @Req() request: Request, @Res({ passthrough: true }) response: Response) {
-    const view = await this.insights.figures(query);
+  async figures(@Query() query: InsightsQuery, @CurrentUser() person: User, @Req() request: Request, @Res({ passthrough: true }) response: Response) {
+    const view = await this.insights.figures(query, person);
     if (request.accepts(['application/json', 'text/csv']) !== 'text/csv') return view;
     response.attachment(`insights-gallery-${view.galleryId}-${view.from}_to_${view.to}.csv`).type('text/csv; charset=utf-8');
     return toInsightsCsv(view);

@@ -1,16 +1,21 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
   addDays, dayEndIn, dayIn, dayStartIn, dwellByPanel, widgetUse,
-  type DwellSample, type InsightsView, type KioskEventType, type KioskSwitch, type WidgetParamCount,
+  type DwellSample, type InsightsView, type KioskEventType, type KioskSwitch, type Role, type WidgetParamCount,
 } from '@mantlepiece/shared';
+import type { Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { invalidField } from '../common/validation.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { refuseUnlessSeen } from '../venues/venue-access.js';
 import type { InsightsQuery } from './dto/insights.query.js';
+
+/** Who reads what visitors did. */
+export const INSIGHTS_READERS: readonly Role[] = ['curator', 'educator', 'technician', 'admin'];
 
 /** The range shown when none is asked for: the last 30 days, today included. */
 const DEFAULT_DAYS = 30;
@@ -32,11 +37,12 @@ export class InsightsService {
     private readonly sequelize: Sequelize,
   ) {}
 
-  async figures(query: InsightsQuery): Promise<InsightsView> {
-    const gallery = await this.galleries.findByPk(query.galleryId, { attributes: ['id'], include: [{ model: Venue, attributes: ['timeZone'] }] });
-    if (!gallery) throw new NotFoundException('There is no such gallery.');
+  /** Another venue's gallery answers as one that does not exist. */
+  async figures(query: InsightsQuery, member: Member): Promise<InsightsView> {
+    const gallery = await this.galleries.findByPk(query.galleryId, { attributes: ['id', 'venueId'], include: [{ model: Venue, attributes: ['timeZone'] }] });
+    refuseUnlessSeen(member, gallery?.venueId, 'There is no such gallery.', INSIGHTS_READERS);
     // Days are the venue's: a visit at 23:30 local time counts on that local day, and a day across a clock change has its 23 or 25 hours.
-    const { timeZone } = gallery.venue!;
+    const { timeZone } = gallery!.venue!;
     const range = this.rangeOf(query, timeZone);
     const scope = { galleryId: query.galleryId, start: dayStartIn(range.from, timeZone), end: dayEndIn(range.to, timeZone) };
     const events = (type: KioskEventType, columns: string, extra = '', tail = '') =>

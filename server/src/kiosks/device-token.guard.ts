@@ -70,5 +70,16 @@ export class DeviceTokenGuard implements CanActivate {
 /** A route for paired kiosks only: the staff guard steps aside and the device-token guard decides. */
 export const KioskRoute = () => applyDecorators(Public(), UseGuards(DeviceTokenGuard));
 
-/** The kiosk of a kiosk route. */
+/** A kiosk calling without a device token is let through unpaired; one sending a token must be paired with it. */
+@Injectable()
+export class OptionalDeviceTokenGuard extends DeviceTokenGuard {
+  override async canActivate(context: ExecutionContext): Promise<boolean> {
+    return bearerOf(context.switchToHttp().getRequest<Request>().headers.authorization) === null || super.canActivate(context);
+  }
+}
+
+/** A public route that answers a paired kiosk (its device token sent) for itself. */
+export const PairedOrUnpairedKioskRoute = () => applyDecorators(Public(), UseGuards(OptionalDeviceTokenGuard));
+
+/** The kiosk of a kiosk route; undefined on a route that also takes unpaired kiosks, for one of those. */
 export const CurrentKiosk = createParamDecorator((_data: unknown, ctx: ExecutionContext) => ctx.switchToHttp().getRequest<KioskRequest>().kiosk);

@@ -1,9 +1,11 @@
-import { Body, Controller, Get, Headers, HttpCode, HttpStatus, Ip, NotFoundException, Param, Post, Req, Res } from '@nestjs/common';
+import { Body, Controller, Get, Headers, HttpCode, HttpStatus, Ip, NotFoundException, Param, Post, Query, Req, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../auth/auth.decorators.js';
 import { IMMUTABLE, sendStoredObject } from '../media/stored-file-response.js';
-import { CurrentKiosk, KioskRoute, type PairedKiosk } from './device-token.guard.js';
+import { KioskVenueQuery } from '../venues/dto/venue.dto.js';
+import { VenuesService } from '../venues/venues.service.js';
+import { CurrentKiosk, KioskRoute, PairedOrUnpairedKioskRoute, type PairedKiosk } from './device-token.guard.js';
 import { HeartbeatDto, KioskEventsDto } from './dto/kiosk-report.dto.js';
 import { KioskReleasesService } from './kiosk-releases.service.js';
 import { CompletePairingDto } from './dto/pairing.dto.js';
@@ -20,7 +22,21 @@ export class KioskController {
     private readonly pairing: PairingService,
     private readonly kiosks: KiosksService,
     private readonly releases: KioskReleasesService,
+    private readonly venues: VenuesService,
   ) {}
+
+  /**
+   * A venue's name and languages are no secret. A paired kiosk is answered its own venue; an
+   * unpaired one the venue its install URL names, else the only venue there is, and 204 when there
+   * are several and none is named: the kiosk then shows its neutral pairing screen.
+   */
+  @PairedOrUnpairedKioskRoute()
+  @Get('venue')
+  async venue(@CurrentKiosk() kiosk: PairedKiosk | undefined, @Query() query: KioskVenueQuery, @Res() res: Response): Promise<void> {
+    const venue = kiosk ? await this.venues.forPairedKiosk(kiosk.station.galleryId) : await this.venues.forUnpairedKiosk(query.slug);
+    if (venue) res.json(venue);
+    else res.status(HttpStatus.NO_CONTENT).end();
+  }
 
   @Public()
   @Post('pair/start')

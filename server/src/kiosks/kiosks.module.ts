@@ -9,7 +9,8 @@ import { RateLimitsModule } from '../rate-limits/rate-limits.module.js';
 import { ReleasesModule } from '../releases/releases.module.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
-import { DeviceTokenGuard } from './device-token.guard.js';
+import { VenuesModule } from '../venues/venues.module.js';
+import { DeviceTokenGuard, OptionalDeviceTokenGuard } from './device-token.guard.js';
 import { KioskController } from './kiosk.controller.js';
 import { KioskReleasesService } from './kiosk-releases.service.js';
 import { KiosksController } from './kiosks.controller.js';
@@ -24,10 +25,10 @@ import { PairingService } from './pairing.service.js';
 @Module({
   imports: [
     SequelizeModule.forFeature([Kiosk, PairingRequest, KioskHeartbeat, KioskEvent, Station, Gallery, Release, ReleaseFile, ReleaseStory, ReleasePanel]),
-    ReleasesModule, FleetStatesModule, RateLimitsModule,
+    ReleasesModule, FleetStatesModule, RateLimitsModule, VenuesModule,
   ],
   controllers: [KioskController, KiosksController],
-  providers: [PairingService, PairingAttemptsService, KiosksService, KioskReleasesService, DeviceTokenGuard],
+  providers: [PairingService, PairingAttemptsService, KiosksService, KioskReleasesService, DeviceTokenGuard, OptionalDeviceTokenGuard],
   exports: [KiosksService],
 })
 export class KiosksModule {}

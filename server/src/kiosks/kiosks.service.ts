@@ -1,26 +1,28 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { QueryTypes } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { EventsResponse, KioskView, Page } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
-import type { Person } from '../auth/policy.js';
+import { personAt, scopeWhere, venueScope, type Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { unknownReference } from '../common/validation.js';
 import { ReleasePanel } from '../releases/models/release-panel.model.js';
 import { ReleaseStory } from '../releases/models/release-story.model.js';
 import { Release } from '../releases/models/release.model.js';
-import type { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
+import { refuseUnlessSeen } from '../venues/venue-access.js';
 import type { HeartbeatDto, KioskEventDto, KioskEventsDto, ListKiosksQuery } from './dto/kiosk-report.dto.js';
 import type { PairedKiosk } from './device-token.guard.js';
-import { refuseIfRevoked } from './kiosk-policy.js';
+import { FLEET_KEEPERS, refuseIfRevoked } from './kiosk-policy.js';
 import { servableReleasesOf } from './kiosk-releases.service.js';
 import { toKioskView } from './kiosks.presenter.js';
 import { KioskHeartbeat } from './models/kiosk-heartbeat.model.js';
 import { Kiosk } from './models/kiosk.model.js';
+
+type PlacedKiosk = Kiosk & { station: Station & { gallery: Gallery } };
 
 const EVENT_COLUMNS = ['id', 'kiosk_id', 'gallery_id', 'type', 'at', 'story_id', 'panel_id', 'widget_type', 'param', 'locale', 'dwell_ms', 'switch', 'received_at'];
 
@@ -94,37 +96,50 @@ export class KiosksService {
       && (event.panelId === undefined || (event.storyId === undefined ? panelsAnyStory.has(event.panelId) : knownPanels.has(`${event.storyId}:${event.panelId}`))));
   }
 
-  /** The fleet: every kiosk with its station, gallery, last heartbeat and the releases it plays and should play. */
-  async list(query: ListKiosksQuery, person: Person): Promise<Page<KioskView>> {
+  /**
+   * The fleet: every kiosk of the venues where the member looks after the fleet, with its station,
+   * gallery, last heartbeat and the releases it plays and should play.
+   */
+  async list(query: ListKiosksQuery, member: Member): Promise<Page<KioskView>> {
+    const galleries = { [Op.and]: [scopeWhere(venueScope(member, FLEET_KEEPERS)), ...(query.venueId ? [{ venueId: query.venueId }] : [])] };
     const { rows, count } = await this.kiosks.findAndCountAll({
-      include: [{ model: Station, required: true, where: query.galleryId ? { galleryId: query.galleryId } : {}, include: [Gallery] }],
+      include: [{
+        model: Station, required: true, where: query.galleryId ? { galleryId: query.galleryId } : {},
+        include: [{ model: Gallery, required: true, where: galleries }],
+      }],
       // By gallery, so the Fleet page can head each gallery's rows; revoked kiosks last within it.
       order: [['station', 'gallery', 'name', 'ASC'], ['station', 'galleryId', 'ASC'], ['revokedAt', 'ASC'], ['station', 'name', 'ASC'], ['id', 'ASC']],
       ...pageWindow(query),
     });
-    return toPage(await this.views(rows as (Kiosk & { station: Station & { gallery: Gallery } })[], person), count, query);
+    return toPage(await this.views(rows as PlacedKiosk[], member), count, query);
   }
 
   /** Ends the kiosk's access at once: the guard reads the kiosk on every request. */
-  async revoke(id: number, technician: User): Promise<KioskView> {
+  async revoke(id: number, technician: Member): Promise<KioskView> {
+    const venueId = (await this.find(id, technician)).station.gallery.venueId;
     await this.sequelize.transaction(async (transaction) => {
       const kiosk = await this.kiosks.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
       if (!kiosk) throw new NotFoundException('There is no such kiosk.');
       refuseIfRevoked(kiosk);
       await kiosk.update({ revokedAt: this.clock.now(), deviceTokenHash: null }, { transaction });
-      await this.audit.record({ actorId: technician.id, action: 'kiosk.revoked', targetType: 'kiosk', targetId: kiosk.id, detail: { stationId: kiosk.stationId } }, transaction);
+      await this.audit.record({ actorId: technician.id, action: 'kiosk.revoked', targetType: 'kiosk', targetId: kiosk.id, venueId, detail: { stationId: kiosk.stationId } }, transaction);
     });
     return this.get(id, technician);
   }
 
-  async get(id: number, person: Person): Promise<KioskView> {
-    const kiosk = await this.kiosks.findByPk(id, { include: [{ model: Station, include: [Gallery] }] });
-    if (!kiosk) throw new NotFoundException('There is no such kiosk.');
-    const [view] = await this.views([kiosk as Kiosk & { station: Station & { gallery: Gallery } }], person);
+  async get(id: number, member: Member): Promise<KioskView> {
+    const [view] = await this.views([await this.find(id, member)], member);
     return view!;
   }
 
-  private async views(kiosks: (Kiosk & { station: Station & { gallery: Gallery } })[], person: Person): Promise<KioskView[]> {
+  /** The kiosk with its station and gallery, if it is at a venue where the member looks after the fleet. */
+  private async find(id: number, member: Member): Promise<PlacedKiosk> {
+    const kiosk = (await this.kiosks.findByPk(id, { include: [{ model: Station, include: [Gallery] }] })) as PlacedKiosk | null;
+    refuseUnlessSeen(member, kiosk?.station.gallery.venueId, 'There is no such kiosk.', FLEET_KEEPERS);
+    return kiosk!;
+  }
+
+  private async views(kiosks: PlacedKiosk[], member: Member): Promise<KioskView[]> {
     const playing = kiosks.flatMap((k) => (k.lastReleaseId === null ? [] : [k.lastReleaseId]));
     const galleryIds = [...new Set(kiosks.map((k) => k.station.galleryId))];
     const [played, live] = await Promise.all([
@@ -133,6 +148,6 @@ export class KiosksService {
     ]);
     const byId = new Map(played.map((r) => [r.id, r]));
     const liveByGallery = new Map(live.map((r) => [r.galleryId, r]));
-    return kiosks.map((kiosk) => toKioskView(kiosk, byId, liveByGallery, person));
+    return kiosks.map((kiosk) => toKioskView(kiosk, byId, liveByGallery, personAt(member, kiosk.station.gallery.venueId)));
   }
 }

@@ -5,13 +5,15 @@ import { Op } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { normalisePairingCode, PAIRING_ALPHABET, PAIRING_CODE_LENGTH, type KioskCredential, type PairCompleteWaiting, type PairStartResponse } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
+import type { Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { hashToken, newToken } from '../common/tokens.js';
 import { VenueSigningKeysService } from '../releases/venue-signing-keys.service.js';
-import type { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
+import { refuseUnlessHoldingAt, refuseUnlessSeen } from '../venues/venue-access.js';
 import { newDeviceToken } from './device-token.js';
+import { FLEET_KEEPERS } from './kiosk-policy.js';
 import { Kiosk } from './models/kiosk.model.js';
 import { PairingRequest } from './models/pairing-request.model.js';
 import { PairingAttemptsService } from './pairing-attempts.service.js';
@@ -72,9 +74,11 @@ export class PairingService {
    * Binds the kiosk showing the code to the station. A kiosk paired to the station before is
    * unpaired: a station is one screen. Each check is taken from the limits first; a right one is given back.
    */
-  async pairStation(stationId: number, typedCode: string, technician: User, clientAddress: string): Promise<{ kioskId: number }> {
-    const station = await this.stations.findByPk(stationId);
-    if (!station) throw new NotFoundException('There is no such station.');
+  async pairStation(stationId: number, typedCode: string, technician: Member, clientAddress: string): Promise<{ kioskId: number }> {
+    const station = await this.stations.findByPk(stationId, { include: [{ model: Gallery, attributes: ['id', 'venueId'] }] });
+    refuseUnlessSeen(technician, station?.gallery?.venueId, 'There is no such station.');
+    const venueId = station!.gallery!.venueId;
+    refuseUnlessHoldingAt(technician, venueId, FLEET_KEEPERS, 'Your role at this venue does not allow pairing its kiosks.');
     const check = await this.attempts.takeCheck(stationId, clientAddress);
     const kioskId = await this.sequelize.transaction(async (transaction) => {
       const now = this.clock.now();
@@ -89,8 +93,8 @@ export class PairingService {
       const kiosk = await this.kiosks.create({ stationId, pairedAt: now, pairedById: technician.id }, { transaction });
       await request.update({ kioskId: kiosk.id }, { transaction });
       await this.audit.record({
-        actorId: technician.id, action: 'kiosk.paired', targetType: 'kiosk', targetId: kiosk.id,
-        detail: { stationId, galleryId: station.galleryId, replacedKioskIds: replaced.map((k) => k.id) }, clientAddress,
+        actorId: technician.id, action: 'kiosk.paired', targetType: 'kiosk', targetId: kiosk.id, venueId,
+        detail: { stationId, galleryId: station!.galleryId, replacedKioskIds: replaced.map((k) => k.id) }, clientAddress,
       }, transaction);
       return kiosk.id;
     });

@@ -4,7 +4,7 @@ import type { Transaction } from 'sequelize';
 import { PUBLICATION_FORMAT, serializePublication } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
-import type { User } from '../users/models/user.model.js';
+import type { Person } from '../auth/policy.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Publication, type PublicationKind } from './models/publication.model.js';
 import { Release } from './models/release.model.js';
@@ -51,7 +51,7 @@ export class PublicationsService {
    * the gallery's row locked, so two publishes (on any server instance) cannot take one sequence;
    * the latest is read with a lock as well, and the unique key is the last guard.
    */
-  async record(release: Release, kind: PublicationKind, user: User, now: Date, transaction: Transaction): Promise<Publication> {
+  async record(release: Release, kind: PublicationKind, user: Person, now: Date, transaction: Transaction): Promise<Publication> {
     const last = await this.publications.findOne({ where: { galleryId: release.galleryId }, order: [['sequence', 'DESC']], attributes: ['sequence'], transaction, lock: transaction.LOCK.UPDATE });
     return this.publications.create(
       { galleryId: release.galleryId, sequence: (last?.sequence ?? 0) + 1, releaseId: release.id, kind, publishedAt: now, publishedById: user.id },

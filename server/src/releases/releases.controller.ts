@@ -4,6 +4,7 @@ import { ROLES } from '@mantlepiece/shared';
 import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
+import { refuseUnlessSeen } from '../venues/venue-access.js';
 import { CompareReleasesQuery, ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
 import { ReleasesService } from './releases.service.js';
 import { PUBLISHERS } from './release-policy.js';
@@ -34,21 +35,21 @@ export class ReleasesController {
 
   @Roles(...ROLES)
   @Get('releases/compare')
-  compare(@Query() { a, b }: CompareReleasesQuery) {
-    return this.releases.compare(a, b);
+  compare(@Query() { a, b }: CompareReleasesQuery, @CurrentUser() person: User) {
+    return this.releases.compare(a, b, person);
   }
 
   @ApiCan('release')
   @Roles(...ROLES)
   @Get('releases/:id')
   get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
-    return this.releases.get(id, person);
+    return this.releases.read(id, person);
   }
 
   @Roles(...ROLES)
   @Get('releases/:id/manifest')
-  manifest(@Param('id', ParseIntPipe) id: number) {
-    return this.releases.signedManifest(id);
+  manifest(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.releases.signedManifest(id, person);
   }
 
   @ApiCan('release')
@@ -62,7 +63,8 @@ export class ReleasesController {
   /** What a kiosk checks release signatures with, for staff to compare with the one a kiosk holds. */
   @Roles(...ROLES)
   @Get('venues/:id/signing-key')
-  async signingKey(@Param('id', ParseIntPipe) venueId: number) {
+  async signingKey(@Param('id', ParseIntPipe) venueId: number, @CurrentUser() person: User) {
+    refuseUnlessSeen(person, venueId, 'There is no such venue.');
     return { venueId, algorithm: 'Ed25519', publicKey: await this.keys.publicKeyOf(venueId) };
   }
 }

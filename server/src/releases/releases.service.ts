@@ -4,23 +4,25 @@ import { Op, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { ManifestResponse, ReleaseComparison, ReleasePage, ReleaseStoryView, ReleaseView } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
-import type { Person } from '../auth/policy.js';
+import { personAt, type Member, type Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { Revision } from '../revisions/models/revision.model.js';
 import { Story } from '../stories/models/story.model.js';
-import type { User } from '../users/models/user.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
+import { refuseUnlessHoldingAt, refuseUnlessSeen } from '../venues/venue-access.js';
 import type { ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
 import { ReleasePanel } from './models/release-panel.model.js';
 import { ReleaseStory } from './models/release-story.model.js';
 import { Release } from './models/release.model.js';
 import { releaseRefusal, ReleaseContentService } from './release-content.service.js';
-import { isPublishable, releasesCan } from './release-policy.js';
+import { isPublishable, PUBLISHERS, releasesCan } from './release-policy.js';
 import { PublicationsService } from './publications.service.js';
 import { toReleaseView } from './releases.presenter.js';
 import { ReleasesWorker } from './releases.worker.js';
+
+const PUBLISHING_REFUSED = 'Your role at this venue does not allow building or publishing its releases.';
 
 @Injectable()
 export class ReleasesService {
@@ -44,13 +46,15 @@ export class ReleasesService {
    * comes at once, the build runs in the worker. The revisions are fixed here, so the release is
    * exactly what was checked.
    */
-  async requestRelease(galleryId: number, dto: RequestReleaseDto, user: User): Promise<{ id: number; state: 'building' }> {
+  async requestRelease(galleryId: number, dto: RequestReleaseDto, user: Member): Promise<{ id: number; state: 'building' }> {
     const release = await this.sequelize.transaction(async (transaction) => {
       // Locking the gallery numbers its releases one after another.
       const gallery = await this.galleries.findByPk(galleryId, { include: [Venue], transaction, lock: transaction.LOCK.UPDATE });
-      if (!gallery?.venue) throw new NotFoundException('There is no such gallery.');
+      refuseUnlessSeen(user, gallery?.venue?.id, 'There is no such gallery.');
+      const venue = gallery!.venue!;
+      refuseUnlessHoldingAt(user, venue.id, PUBLISHERS, PUBLISHING_REFUSED);
       const chosen = await this.content.chooseRevisions(galleryId, dto.revisionIds, transaction);
-      const problems = await this.content.problemsOf(gallery.venue, chosen, transaction);
+      const problems = await this.content.problemsOf(venue, chosen, transaction);
       if (problems.length) throw releaseRefusal('This release cannot be built yet.', problems);
 
       const last = (await this.releases.max<number, Release>('number', { where: { galleryId }, transaction })) ?? 0;
@@ -67,7 +71,7 @@ export class ReleasesService {
         { transaction },
       );
       await this.audit.record({
-        actorId: user.id, action: 'release.requested', targetType: 'release', targetId: created.id,
+        actorId: user.id, action: 'release.requested', targetType: 'release', targetId: created.id, venueId: venue.id,
         detail: { galleryId, number: created.number, revisionIds: chosen.map((c) => c.revision.id) },
       }, transaction);
       return created;
@@ -76,14 +80,24 @@ export class ReleasesService {
     return { id: release.id, state: 'building' };
   }
 
+  /** The release as a member sees it, at one of their venues. */
+  async read(id: number, member: Member): Promise<ReleaseView> {
+    const release = await this.find(id, member);
+    return toReleaseView(release, await this.storiesOf(release.id), personAt(member, release.gallery!.venueId));
+  }
+
+  /** The release as the server reads it for itself (the demo seed), `person` being whose `can` it carries. */
   async get(id: number, person: Person): Promise<ReleaseView> {
-    const release = await this.find(id);
+    const release = await this.releases.findByPk(id);
+    if (!release) throw new NotFoundException('There is no such release.');
     return toReleaseView(release, await this.storiesOf(release.id), person);
   }
 
   /** Newest first. */
-  async listForGallery(galleryId: number, query: ListReleasesQuery, person: Person): Promise<ReleasePage> {
-    if (!(await this.galleries.findByPk(galleryId, { attributes: ['id'] }))) throw new NotFoundException('There is no such gallery.');
+  async listForGallery(galleryId: number, query: ListReleasesQuery, member: Member): Promise<ReleasePage> {
+    const gallery = await this.galleries.findByPk(galleryId, { attributes: ['id', 'venueId'] });
+    refuseUnlessSeen(member, gallery?.venueId, 'There is no such gallery.');
+    const person = personAt(member, gallery.venueId);
     const { rows, count } = await this.releases.findAndCountAll({
       where: { galleryId },
       attributes: { exclude: ['manifest'] },
@@ -95,8 +109,8 @@ export class ReleasesService {
   }
 
   /** The signed manifest as a kiosk receives it, for staff to read. */
-  async signedManifest(id: number): Promise<ManifestResponse> {
-    const release = await this.find(id);
+  async signedManifest(id: number, member: Member): Promise<ManifestResponse> {
+    const release = await this.find(id, member);
     if (!release.manifest || !release.signature) throw new ConflictException('This release has no signed manifest: it is still building, or it failed.');
     return { manifest: release.manifest, signature: release.signature };
   }
@@ -106,11 +120,12 @@ export class ReleasesService {
    * transaction, as the gallery's next publication. Publishing a Superseded release is the
    * rollback: a new, higher publication pointing at older content, so kiosks follow it.
    */
-  async publish(id: number, user: User): Promise<ReleaseView> {
+  async publish(id: number, user: Member): Promise<ReleaseView> {
     // A release never changes gallery, so its gallery is read before the transaction: the gallery's
     // row must be the transaction's first read, a locking one (see below).
-    const galleryId = (await this.releases.findByPk(id, { attributes: ['galleryId'] }))?.galleryId;
-    if (galleryId === undefined) throw new NotFoundException('There is no such release.');
+    const { galleryId, gallery } = await this.find(id, user);
+    const venueId = gallery!.venueId;
+    refuseUnlessHoldingAt(user, venueId, PUBLISHERS, PUBLISHING_REFUSED);
     const publication = await this.sequelize.transaction(async (transaction) => {
       // Every publish of a gallery, on any server instance, queues on the gallery's row, so one
       // release is Live and one next sequence is taken at a time; taken before any plain read, so
@@ -129,18 +144,18 @@ export class ReleasesService {
       await this.markStoriesReleased(release.id, now, transaction);
       const published = await this.publications.record(release, rollback ? 'rollback' : 'publish', user, now, transaction);
       await this.audit.record({
-        actorId: user.id, action: rollback ? 'release.rolled-back' : 'release.published', targetType: 'release', targetId: release.id,
+        actorId: user.id, action: rollback ? 'release.rolled-back' : 'release.published', targetType: 'release', targetId: release.id, venueId,
         detail: { galleryId: release.galleryId, number: release.number, previousReleaseId: previous?.id ?? null, sequence: published.sequence },
       }, transaction);
       return published;
     });
     await this.publications.sign(publication);
-    return this.get(id, user);
+    return this.read(id, user);
   }
 
   /** What changed from release `a` to release `b`, story by story. */
-  async compare(aId: number, bId: number): Promise<ReleaseComparison> {
-    const [a, b] = await Promise.all([this.find(aId), this.find(bId)]);
+  async compare(aId: number, bId: number, member: Member): Promise<ReleaseComparison> {
+    const [a, b] = await Promise.all([this.find(aId, member), this.find(bId, member)]);
     const [before, after] = await Promise.all([this.storiesOf(a.id), this.storiesOf(b.id)]);
     const beforeById = new Map(before.map((s) => [s.storyId, s]));
     const afterIds = new Set(after.map((s) => s.storyId));
@@ -177,9 +192,10 @@ export class ReleasesService {
     });
   }
 
-  private async find(id: number): Promise<Release> {
-    const release = await this.releases.findByPk(id);
-    if (!release) throw new NotFoundException('There is no such release.');
-    return release;
+  /** The release with its gallery, if the member holds a role at its venue. */
+  private async find(id: number, member: Member): Promise<Release> {
+    const release = await this.releases.findByPk(id, { include: [{ model: Gallery, attributes: ['id', 'venueId'] }] });
+    refuseUnlessSeen(member, release?.gallery?.venueId, 'There is no such release.');
+    return release!;
   }
 }

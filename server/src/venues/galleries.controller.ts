@@ -37,7 +37,7 @@ export class GalleriesController {
 
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  delete(@Param('id', ParseIntPipe) id: number) {
-    return this.galleries.delete(id);
+  delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.galleries.delete(id, person);
   }
 }

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { GalleryView } from '@mantlepiece/shared';
 import { Gallery } from './models/gallery.model.js';
+import { SETTINGS_KEEPERS } from './station-policy.js';
 import { SettingsService } from './settings.service.js';
 import { toGalleryView } from './venues.presenter.js';
 
@@ -13,6 +14,8 @@ export class GalleriesService extends SettingsService<Gallery, GalleryView> {
       toView: toGalleryView,
       inUse: 'This gallery still has stations or exhibits; delete or move them first.',
       parentKey: 'venueId',
+      venue: { column: 'venueId', of: (gallery) => gallery.venueId, ofParent: async (venueId) => venueId },
+      keepers: SETTINGS_KEEPERS,
     });
   }
 }

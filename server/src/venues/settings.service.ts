@@ -1,10 +1,13 @@
-import { ConflictException, NotFoundException } from '@nestjs/common';
-import { ForeignKeyConstraintError, Op, UniqueConstraintError } from 'sequelize';
+import { ConflictException } from '@nestjs/common';
+import { ForeignKeyConstraintError, Op, UniqueConstraintError, type Includeable } from 'sequelize';
 import type { Model, ModelCtor } from 'sequelize-typescript';
-import type { Page } from '@mantlepiece/shared';
-import type { Person } from '../auth/policy.js';
+import type { Page, Role } from '@mantlepiece/shared';
+import { inScope, personAt, scopeWhere, venueScope, type Member, type Person } from '../auth/policy.js';
 import { likePattern, orderOf, SearchField, SortField } from '../common/list-query.js';
 import { PageQuery, pageWindow, toPage } from '../common/page.js';
+import { unknownReference } from '../common/validation.js';
+import type { Gallery } from './models/gallery.model.js';
+import { refuseUnlessHoldingAt, refuseUnlessSeen } from './venue-access.js';
 
 export const SETTINGS_SORT_KEYS = ['name', 'createdAt'] as const;
 
@@ -17,22 +20,39 @@ export class ListSettingsQuery extends PageQuery {
   sort: string = 'name';
 }
 
+/** Where a kind of record has its venue. */
+export interface VenuePlace<M> {
+  /** The attribute a `where` names the venue by: `id` of a venue, `venueId`, or `$gallery.venue_id$` through `include`. */
+  column: string;
+  include?: Includeable[];
+  of: (record: M) => number;
+  /** The venue of the parent a new record names by `parentKey`; null when there is no such parent. */
+  ofParent?: (parentId: number) => Promise<number | null>;
+}
+
 export interface SettingsKind<M, V> {
   /** For messages: "There is no such gallery." */
   label: string;
-  /** The record as the API shows it to `person`. */
+  /** The record as the API shows it to `person` (who they are at the record's venue). */
   toView: (record: M, person: Person) => V;
   /** Why a delete is refused while other records point at this one. */
   inUse: string;
-  /** The column a list query may narrow to one parent by (`?venueId=`). */
+  /** The column a list query may narrow to one parent by (`?galleryId=`), and that a new record names its parent by. */
   parentKey?: string;
+  venue: VenuePlace<M>;
+  /** Who changes the records of a venue, holding the role there. */
+  keepers: readonly Role[];
 }
+
+/** The answer for a parent the caller cannot see: the same as the error filter's for one that does not exist. */
+const NO_SUCH_PARENT = 'There is no such record.';
 
 /**
  * What venues, galleries, stations and exhibits share: paged lists searched by the database,
  * reads, writes whose duplicates become 409 answers (a parent that does not exist is the API
  * filter's 422, naming the field), and deletes that the schema's RESTRICT keys refuse while
- * anything points at the record.
+ * anything points at the record. Each is scoped to the caller's venues: another venue's record
+ * answers as one that does not exist, and only its keepers at the record's venue change it.
  */
 export abstract class SettingsService<M extends Model & { id: number }, V> {
   protected constructor(
@@ -40,39 +60,48 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
     private readonly kind: SettingsKind<M, V>,
   ) {}
 
-  async list(query: ListSettingsQuery, person: Person): Promise<Page<V>> {
-    const parent = this.kind.parentKey ? (query as unknown as Record<string, unknown>)[this.kind.parentKey] : undefined;
+  /** `?venueId=` narrows any Settings list to one venue; without it the list holds all of the caller's. */
+  async list(query: ListSettingsQuery & { venueId?: number }, member: Member): Promise<Page<V>> {
+    const { parentKey, venue } = this.kind;
+    const parent = parentKey ? (query as unknown as Record<string, unknown>)[parentKey] : undefined;
     const where = {
       [Op.and]: [
-        ...(parent !== undefined ? [{ [this.kind.parentKey!]: parent }] : []),
+        scopeWhere(venueScope(member), venue.column),
+        ...(query.venueId !== undefined ? [{ [venue.column]: query.venueId }] : []),
+        ...(parent !== undefined ? [{ [parentKey!]: parent }] : []),
         ...(query.q ? [{ name: { [Op.like]: likePattern(query.q) } }] : []),
       ],
     };
-    const { rows, count } = await this.model.findAndCountAll({ where, order: orderOf(query.sort), ...pageWindow(query) });
-    return toPage(rows.map((record) => this.kind.toView(record, person)), count, query);
+    const { rows, count } = await this.model.findAndCountAll({ where, include: venue.include, order: orderOf(query.sort), ...pageWindow(query) });
+    return toPage(rows.map((record) => this.view(record, member)), count, query);
   }
 
-  async find(id: number): Promise<M> {
-    const record = await this.model.findByPk(id);
-    if (!record) throw new NotFoundException(`There is no such ${this.kind.label}.`);
-    return record;
+  /** The record, if the member holds any role at its venue. */
+  async find(id: number, member: Member): Promise<M> {
+    const record = await this.model.findByPk(id, { include: this.kind.venue.include });
+    refuseUnlessSeen(member, record ? this.kind.venue.of(record) : undefined, `There is no such ${this.kind.label}.`);
+    return record!;
   }
 
-  async get(id: number, person: Person): Promise<V> {
-    return this.kind.toView(await this.find(id), person);
+  async get(id: number, member: Member): Promise<V> {
+    return this.view(await this.find(id, member), member);
   }
 
-  create(values: object, person: Person): Promise<V> {
-    return this.write(() => this.model.create({ ...values } as never), person);
+  async create(values: object, member: Member): Promise<V> {
+    await this.refuseUnlessKeeperOfParent(values, member);
+    return this.write(async () => {
+      const { id } = await this.model.create({ ...values } as never);
+      return (await this.model.findByPk(id, { include: this.kind.venue.include }))!;
+    }, member);
   }
 
-  async update(id: number, changes: object, person: Person): Promise<V> {
-    const record = await this.find(id);
-    return this.write(() => record.update(changes as never), person);
+  async update(id: number, changes: object, member: Member): Promise<V> {
+    const record = await this.kept(id, member);
+    return this.write(() => record.update(changes as never), member);
   }
 
-  async delete(id: number): Promise<void> {
-    const record = await this.find(id);
+  async delete(id: number, member: Member): Promise<void> {
+    const record = await this.kept(id, member);
     try {
       await record.destroy();
     } catch (error) {
@@ -81,9 +110,34 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
     }
   }
 
-  private async write(work: () => Promise<M>, person: Person): Promise<V> {
+  /** The record, for a change its venue's keepers make. */
+  protected async kept(id: number, member: Member): Promise<M> {
+    const record = await this.find(id, member);
+    this.refuseUnlessKeeperAt(this.kind.venue.of(record), member);
+    return record;
+  }
+
+  protected refuseUnlessKeeperAt(venueId: number, member: Member): void {
+    refuseUnlessHoldingAt(member, venueId, this.kind.keepers, `Your role at this venue does not allow changing its ${this.kind.label}s.`);
+  }
+
+  /** A new record's parent must be one the member sees (else 422, as for one that does not exist) and keeps. */
+  private async refuseUnlessKeeperOfParent(values: object, member: Member): Promise<void> {
+    const { parentKey, venue } = this.kind;
+    if (!parentKey || !venue.ofParent) return;
+    const parentId = (values as Record<string, unknown>)[parentKey] as number;
+    const venueId = await venue.ofParent(parentId);
+    if (venueId === null || !inScope(venueScope(member), venueId)) throw unknownReference([parentKey], NO_SUCH_PARENT);
+    this.refuseUnlessKeeperAt(venueId, member);
+  }
+
+  private view(record: M, member: Member): V {
+    return this.kind.toView(record, personAt(member, this.kind.venue.of(record)));
+  }
+
+  private async write(work: () => Promise<M>, member: Member): Promise<V> {
     try {
-      return this.kind.toView(await work(), person);
+      return this.view(await work(), member);
     } catch (error) {
       if (error instanceof UniqueConstraintError) {
         throw new ConflictException(`Another ${this.kind.label} already uses this ${Object.keys(error.fields).join(', ') || 'value'}.`);
@@ -91,4 +145,14 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
       throw error;
     }
   }
+}
+
+/** The place of a record that belongs to a gallery: its gallery's venue, read through a join. */
+export function galleryVenue<M extends Model & { gallery?: Gallery }>(galleries: typeof Gallery): VenuePlace<M> {
+  return {
+    column: '$gallery.venue_id$',
+    include: [{ model: galleries, attributes: ['id', 'venueId'], required: true }],
+    of: (record) => record.gallery!.venueId,
+    ofParent: async (galleryId) => (await galleries.findByPk(galleryId, { attributes: ['venueId'] }))?.venueId ?? null,
+  };
 }

@@ -1,7 +1,7 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
-import { CurrentUser, Public, Roles } from '../auth/auth.decorators.js';
+import { CurrentUser, ForOrganisation, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { CreateVenueDto, UpdateVenueDto } from './dto/venue.dto.js';
 import { ListSettingsQuery } from './settings.service.js';
@@ -11,13 +11,6 @@ import { VenuesService } from './venues.service.js';
 @Controller()
 export class VenuesController {
   constructor(private readonly venues: VenuesService) {}
-
-  /** Public: an unpaired kiosk has no account, and a venue's name and languages are no secret. */
-  @Public()
-  @Get('kiosk/venue')
-  kioskVenue() {
-    return this.venues.kioskVenue();
-  }
 
   @ApiBearerAuth()
   @Roles(...ROLES)
@@ -35,6 +28,7 @@ export class VenuesController {
 
   @ApiBearerAuth()
   @Roles('admin')
+  @ForOrganisation()
   @Post('venues')
   create(@Body() dto: CreateVenueDto, @CurrentUser() person: User) {
     return this.venues.create(dto, person);
@@ -49,9 +43,10 @@ export class VenuesController {
 
   @ApiBearerAuth()
   @Roles('admin')
+  @ForOrganisation()
   @Delete('venues/:id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  delete(@Param('id', ParseIntPipe) id: number) {
-    return this.venues.delete(id);
+  delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.venues.delete(id, person);
   }
 }

@@ -180,5 +180,7 @@ export interface AuditEventView {
   actor: PersonRef | null;
   action: string;
   target: { type: string; id: string } | null;
+  /** The venue the event is about; null for an organisation-wide one (a sign-in, an account). */
+  venueId: number | null;
   details: Record<string, unknown> | null;
 }

@@ -18,6 +18,11 @@ export class ListAuditEventsQuery extends PageQuery {
   @QueryRowId()
   actorId?: number;
 
+  @ApiPropertyOptional({ description: 'Only events about this venue' })
+  @IsOptional()
+  @QueryRowId()
+  venueId?: number;
+
   @ApiPropertyOptional({ description: `${WHEN}: events from then on` })
   @IsOptional()
   @IsISO8601({ strict: true }, WHEN_MESSAGE)

@@ -1,5 +1,6 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import { User } from '../../users/models/user.model.js';
+import { Venue } from '../../venues/models/venue.model.js';
 import { BeforeAnyChange } from '../../database/append-only.js';
 import { jsonColumn } from '../../database/json-column.js';
 
@@ -21,6 +22,11 @@ export class AuditEvent extends Model {
 
   @Column({ type: DataType.STRING(64), allowNull: true })
   targetId: string | null;
+
+  /** The venue the event is about; null for an organisation-wide one. */
+  @ForeignKey(() => Venue)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
+  venueId: number | null;
 
   @Column(jsonColumn('detail', true))
   detail: Record<string, unknown> | null;

@@ -23,4 +23,7 @@ export class UpdateExhibitDto extends PatchType(OmitType(CreateExhibitDto, ['gal
 export class ListExhibitsQuery extends ListSettingsQuery {
   @ParentFilterField()
   galleryId?: number;
+
+  @ParentFilterField()
+  venueId?: number;
 }

@@ -116,4 +116,9 @@ export class ListKiosksQuery extends PageQuery {
   @IsOptional()
   @QueryRowId()
   galleryId?: number;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @QueryRowId()
+  venueId?: number;
 }

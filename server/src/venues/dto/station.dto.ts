@@ -35,4 +35,7 @@ export class UpdateStationDto extends PatchType(OmitType(CreateStationDto, ['gal
 export class ListStationsQuery extends ListSettingsQuery {
   @ParentFilterField()
   galleryId?: number;
+
+  @ParentFilterField()
+  venueId?: number;
 }

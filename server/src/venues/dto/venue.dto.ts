@@ -1,17 +1,20 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, Matches, MaxLength } from 'class-validator';
+import { applyDecorators } from '@nestjs/common';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, IsOptional, Matches, MaxLength } from 'class-validator';
 import { Omittable, PatchType } from '../../common/validation.js';
 import { LocaleTagField, LocaleTagsField } from '../../common/locale-tag.js';
 import { SettingsNameField } from './settings-fields.js';
 import { TimeZoneField } from './time-zone-field.js';
+
+const SlugField = () =>
+  applyDecorators(Matches(/^[a-z0-9]+(-[a-z0-9]+)*$/, { message: 'The key is lower-case letters and digits, words joined by "-".' }), MaxLength(80));
 
 export class CreateVenueDto {
   @SettingsNameField()
   name: string;
 
   @ApiProperty({ example: 'basalt-point', description: "The venue's key in URLs and release bundles" })
-  @Matches(/^[a-z0-9]+(-[a-z0-9]+)*$/, { message: 'The key is lower-case letters and digits, words joined by "-".' })
-  @MaxLength(80)
+  @SlugField()
   slug: string;
 
   @ApiProperty({ example: 'en', description: 'BCP 47 tag stories are written in' })
@@ -41,3 +44,11 @@ export class CreateVenueDto {
 }
 
 export class UpdateVenueDto extends PatchType(CreateVenueDto) {}
+
+/** `GET /api/kiosk/venue?slug=`: the venue a kiosk's install URL (`/kiosk/?venue=<slug>`) names. */
+export class KioskVenueQuery {
+  @ApiPropertyOptional({ example: 'basalt-point', description: "An unpaired kiosk's venue, by its key; a paired kiosk is answered its own" })
+  @IsOptional()
+  @SlugField()
+  slug?: string;
+}
