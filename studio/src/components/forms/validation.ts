@@ -1,5 +1,5 @@
 import type { TFunction } from 'i18next';
-import { MIN_PASSWORD_LENGTH, passwordProblem } from '@mantlepiece/shared';
+import { canonicalLanguageTag, MIN_PASSWORD_LENGTH, passwordProblem } from '@mantlepiece/shared';
 
 /** The server's own length rule; it also refuses common passwords, and its message shows at the field. */
 export { MIN_PASSWORD_LENGTH };
@@ -25,17 +25,14 @@ export function newPasswordProblems(t: TFunction, password: string, confirm: str
   return problems;
 }
 
-/** Splits "fr, es-MX" into canonical BCP 47 tags; the first tag that is not one is reported. */
+/** Splits "fr, es-MX" into canonical BCP 47 tags (the shared canonicalLanguageTag); the first tag that is not one is reported. */
 export function parseLocales(input: string): { locales: string[]; invalid?: string } {
   const tags = input.split(/[\s,;]+/).filter(Boolean);
   const locales: string[] = [];
   for (const tag of tags) {
-    try {
-      const [canonical] = Intl.getCanonicalLocales(tag);
-      if (!locales.includes(canonical)) locales.push(canonical);
-    } catch {
-      return { locales, invalid: tag };
-    }
+    const canonical = canonicalLanguageTag(tag);
+    if (canonical === null) return { locales, invalid: tag };
+    if (!locales.includes(canonical)) locales.push(canonical);
   }
   return { locales };
 }
