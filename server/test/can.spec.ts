@@ -136,7 +136,9 @@ describe('a revision’s and a comment’s can', () => {
       const { comments } = await get(`/api/revisions/${next}`, people[role]);
       const shown = comments.find((c: { id: number }) => c.id === thread.id);
       expectCanKeys('comment', shown.can);
-      expect({ role, can: shown.can }).toEqual({ role, can: { reply: matrixAllows('POST /api/revisions/:id/comments', role), resolve: matrixAllows('PATCH /api/comments/:id', role) } });
+      // An educator's comment is resolved by its author or a reviewer of the revision, not by any commenter (issue 13).
+      const reviewer = matrixAllows('POST /api/revisions/:id/reviews', role);
+      expect({ role, can: shown.can }).toEqual({ role, can: { reply: matrixAllows('POST /api/revisions/:id/comments', role), resolve: matrixAllows('PATCH /api/comments/:id', role) && reviewer } });
       await expectOutcome('comment', 'reply', role, shown.can.reply, await request(t.http).post(`/api/revisions/${next}/comments`).set(people[role]).send({ body: 'These two.', parentId: thread.id }));
       await expectOutcome('comment', 'resolve', role, shown.can.resolve, await request(t.http).patch(`/api/comments/${thread.id}`).set(people[role]).send({ resolved: true }));
     }

@@ -35,8 +35,10 @@ describe('comments on a revision', () => {
     const reply = await comment(curator, revisionId, { parentId: root.body.id, body: 'About 1300 °C at the base.' });
     expect(reply.body).toMatchObject({ parentId: root.body.id, panelId: panelIds[0], range: null });
 
-    const resolved = await request(t.http).patch(`/api/comments/${root.body.id}`).set(curator.auth).send({ resolved: true });
-    expect(resolved.body).toMatchObject({ resolvedAt: expect.any(String), resolvedBy: { id: curator.person.id, name: 'Felix Braun' } });
+    // Resolved by its author or a reviewer of the revision (issue 13): the curator who answered it is neither.
+    expect((await request(t.http).patch(`/api/comments/${root.body.id}`).set(curator.auth).send({ resolved: true })).status).toBe(403);
+    const resolved = await request(t.http).patch(`/api/comments/${root.body.id}`).set(educator.auth).send({ resolved: true });
+    expect(resolved.body).toMatchObject({ resolvedAt: expect.any(String), resolvedBy: { id: educator.person.id, name: 'Grace Mensah' } });
     const reopened = await request(t.http).patch(`/api/comments/${root.body.id}`).set(educator.auth).send({ resolved: false });
     expect(reopened.body).toMatchObject({ resolvedAt: null, resolvedBy: null });
 
@@ -79,7 +81,7 @@ describe('comments on a revision', () => {
     const open = await comment(educator, first.revisionId, { panelId: kept, range: { from: 0, to: 5, quote: 'First' }, body: 'Open question.' });
     const reply = await comment(curator, first.revisionId, { parentId: open.body.id, body: 'Working on it.' });
     const done = await comment(educator, first.revisionId, { panelId: kept, body: 'Settled.' });
-    await request(t.http).patch(`/api/comments/${done.body.id}`).set(curator.auth).send({ resolved: true });
+    await request(t.http).patch(`/api/comments/${done.body.id}`).set(educator.auth).send({ resolved: true });
     await comment(educator, first.revisionId, { panelId: dropped, body: 'On a panel about to go.' });
     const storyWide = await comment(educator, first.revisionId, { body: 'The story as a whole.' });
     // In review the panels are closed; withdrawn, the story is a draft again and the panel can go.

@@ -18,5 +18,5 @@ export const toCommentView = (comment: Comment, person: Person): CommentView => 
   createdAt: comment.createdAt.toISOString(),
   carriedFromRevisionId: comment.carriedFromRevisionId,
   anchorChanged: comment.anchorChanged ?? null,
-  can: commentCan(person),
+  can: commentCan(person, comment),
 });

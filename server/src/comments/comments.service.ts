@@ -1,14 +1,17 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { carryAnchor, panelText, type CommentView } from '@mantlepiece/shared';
-import type { Person } from '../auth/policy.js';
+import { personAt, type Member, type Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { invalidField } from '../common/validation.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
 import { NotificationsService } from '../notifications/notifications.service.js';
 import { Revision } from '../revisions/models/revision.model.js';
+import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
+import { commentCan, COMMENTERS } from './comment-policy.js';
 import { toCommentView } from './comments.presenter.js';
 import type { CreateCommentDto } from './dto/comment.dto.js';
 import { Comment } from './models/comment.model.js';
@@ -32,7 +35,7 @@ export class CommentsService {
     private readonly sequelize: Sequelize,
   ) {}
 
-  /** Oldest first, so threads read in order. */
+  /** Oldest first, so threads read in order; `person` is the reader at the story's venue. */
   async listForRevision(revisionId: number, person: Person, transaction?: Transaction): Promise<CommentView[]> {
     const rows = await this.comments.findAll({ where: { revisionId }, include: people, order: [['createdAt', 'ASC'], ['id', 'ASC']], transaction });
     return rows.map((comment) => toCommentView(comment, person));
@@ -41,8 +44,9 @@ export class CommentsService {
   /** A reply sits on its parent's panel; its parent's author is told. */
   async addComment(revisionId: number, author: User, dto: CreateCommentDto): Promise<CommentView> {
     return this.sequelize.transaction(async (transaction) => {
-      const revision = await this.revisions.findByPk(revisionId, { transaction });
-      if (!revision) throw new NotFoundException('There is no such revision.');
+      const found = await this.revisions.findByPk(revisionId, { include: [{ model: Story, attributes: ['id', 'venueId'] }], transaction });
+      const person = actingAt(author, withinReach(author, found?.story, 'There is no such revision.').venueId, COMMENTERS);
+      const revision = found!;
       const parent = dto.parentId ? await this.comments.findOne({ where: { id: dto.parentId, revisionId }, transaction }) : null;
       if (dto.parentId && !parent) throw invalidField(['parentId'], 'There is no such comment on this revision to reply to.');
       const panelId = parent ? parent.panelId : (dto.panelId ?? null);
@@ -67,15 +71,18 @@ export class CommentsService {
         anchorChanged: null,
       }, { transaction });
       await this.notifyParentAuthor(parent, author, revision, dto.body, transaction);
-      return this.view(comment.id, author, transaction);
+      return this.view(comment.id, person, transaction);
     });
   }
 
-  async setResolved(id: number, person: User, resolved: boolean): Promise<CommentView> {
+  /** Resolves or reopens a comment: its author's, or a reviewer's of the revision, to do. */
+  async setResolved(id: number, member: Member, resolved: boolean): Promise<CommentView> {
     return this.sequelize.transaction(async (transaction) => {
       const comment = await this.comments.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
-      if (!comment) throw new NotFoundException('There is no such comment.');
-      await comment.update(resolved ? { resolvedAt: this.clock.now(), resolvedById: person.id } : { resolvedAt: null, resolvedById: null }, { transaction });
+      const revision = comment && (await this.revisions.findByPk(comment.revisionId, { attributes: ['id'], include: [{ model: Story, attributes: ['id', 'venueId'] }], transaction }));
+      const person = personAt(member, withinReach(member, revision?.story, 'There is no such comment.').venueId);
+      if (!commentCan(person, comment!).resolve) throw new ForbiddenException("Only the comment's author or a reviewer of this revision can resolve or reopen it.");
+      await comment!.update(resolved ? { resolvedAt: this.clock.now(), resolvedById: person.id } : { resolvedAt: null, resolvedById: null }, { transaction });
       return this.view(id, person, transaction);
     });
   }

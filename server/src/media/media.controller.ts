@@ -49,7 +49,7 @@ export class MediaController {
 
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  delete(@Param('id', ParseIntPipe) id: number) {
-    return this.media.deleteAsset(id);
+  delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.media.deleteAsset(id, person);
   }
 }

@@ -3,12 +3,13 @@ import { InjectModel } from '@nestjs/sequelize';
 import { ForeignKeyConstraintError, Op, UniqueConstraintError, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { canonicalLanguageTags, type MediaPage, type MediaUsageView, type MediaView } from '@mantlepiece/shared';
-import type { Person } from '../auth/policy.js';
+import { personAt, rolesAnywhere, scopeWhere, venueScope, type Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { dateOnlyOf } from '../common/date-only.js';
 import { likePattern, orderOf } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { invalidField } from '../common/validation.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
 import { PanelMediaUsage } from '../panels/models/panel-media-usage.model.js';
 import { Panel } from '../panels/models/panel.model.js';
 import { Story } from '../stories/models/story.model.js';
@@ -26,6 +27,9 @@ import { MediaRendition } from './models/media-rendition.model.js';
 import { RenditionsWorker } from './renditions.worker.js';
 
 const DAY_MS = 86_400_000;
+
+/** What an image id of no reachable image answers, one missing or of another venue alike. */
+export const NO_SUCH_IMAGE = 'There is no such image.';
 
 export interface UploadedFile {
   originalname: string;
@@ -121,9 +125,10 @@ export class MediaService {
     }
   }
 
-  /** The Media library: searched, filtered, sorted and paged by the database. */
-  async list(query: ListMediaQuery, person: Person): Promise<MediaPage> {
-    const conditions: WhereOptions<MediaAsset>[] = [];
+  /** The Media library of the member's venues (or the one asked for): searched, filtered, sorted and paged by the database. */
+  async list(query: ListMediaQuery, member: Member): Promise<MediaPage> {
+    const conditions: WhereOptions<MediaAsset>[] = [scopeWhere(venueScope(member))];
+    if (query.venueId) conditions.push({ venueId: query.venueId });
     if (query.q) {
       const pattern = likePattern(query.q);
       conditions.push({ [Op.or]: [{ originalFilename: { [Op.like]: pattern } }, { credit: { [Op.like]: pattern } }] });
@@ -141,19 +146,21 @@ export class MediaService {
       order: orderOf(query.sort, { filename: 'originalFilename' }),
       ...pageWindow(query),
     });
-    return { ...toPage(await this.viewsOf(rows.map((row) => row.id), person), count, query), can: mediaLibraryCan(person) };
+    const uploader = query.venueId ? personAt(member, query.venueId) : { id: member.id, roles: rolesAnywhere(member) };
+    return { ...toPage(await this.viewsOf(rows.map((row) => row.id), member), count, query), can: mediaLibraryCan(uploader) };
   }
 
-  async get(id: number, person: Person): Promise<MediaView> {
-    const [view] = await this.viewsOf([id], person);
-    if (!view) throw new NotFoundException('There is no such image.');
+  async get(id: number, member: Member): Promise<MediaView> {
+    withinReach(member, await this.assets.findByPk(id, { attributes: ['id', 'venueId'] }), NO_SUCH_IMAGE);
+    const [view] = await this.viewsOf([id], member);
+    if (!view) throw new NotFoundException(NO_SUCH_IMAGE);
     return view;
   }
 
   /** Credit, licence, expiry and alt text; an alt text set to "" removes that locale's. */
-  async updateDetails(id: number, dto: UpdateMediaDto, person: Person): Promise<MediaView> {
+  async updateDetails(id: number, dto: UpdateMediaDto, member: Member): Promise<MediaView> {
     await this.sequelize.transaction(async (transaction) => {
-      const asset = await this.lockAsset(id, transaction);
+      const asset = await this.lockAsset(id, member, transaction);
       if (dto.credit !== undefined) asset.credit = dto.credit?.trim() || null;
       if (dto.licence !== undefined) {
         asset.licenceKind = dto.licence?.kind ?? null;
@@ -164,13 +171,13 @@ export class MediaService {
       await asset.save({ transaction });
       if (dto.alt) await this.setAltTexts(id, dto.alt, transaction);
     });
-    return this.get(id, person);
+    return this.get(id, member);
   }
 
   /** Refused while any panel shows the image; the answer says where. */
-  async deleteAsset(id: number): Promise<void> {
+  async deleteAsset(id: number, member: Member): Promise<void> {
     const asset = await this.sequelize.transaction(async (transaction) => {
-      const found = await this.lockAsset(id, transaction);
+      const found = await this.lockAsset(id, member, transaction);
       const usedIn = await this.usageOf([id], transaction);
       if (usedIn.length > 0) throw inUse(usedIn);
       const keys = (await this.renditions.findAll({ where: { mediaAssetId: id }, transaction })).map((rendition) => rendition.storeKey);
@@ -265,14 +272,15 @@ export class MediaService {
     if (kept.length > 0) await this.altTexts.bulkCreate(kept, { updateOnDuplicate: ['text', 'updatedAt'], transaction });
   }
 
-  private async lockAsset(id: number, transaction: Transaction): Promise<MediaAsset> {
-    const asset = await this.assets.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!asset) throw new NotFoundException('There is no such image.');
+  /** The image locked for a keeper of its venue's library. */
+  private async lockAsset(id: number, member: Member, transaction: Transaction): Promise<MediaAsset> {
+    const asset = withinReach(member, await this.assets.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE }), NO_SUCH_IMAGE);
+    actingAt(member, asset.venueId, MEDIA_KEEPERS);
     return asset;
   }
 
-  /** Views of these assets in this order, each with renditions, alt texts and where it is used. */
-  private async viewsOf(ids: number[], person: Person): Promise<MediaView[]> {
+  /** Views of these assets in this order, each with renditions, alt texts and where it is used, and what the member may do at its venue. */
+  private async viewsOf(ids: number[], member: Member): Promise<MediaView[]> {
     if (ids.length === 0) return [];
     const assets = await this.assets.findAll({ where: { id: ids }, include: [MediaRendition, MediaAltText] });
     const usage = await this.usageOf(ids);
@@ -285,7 +293,7 @@ export class MediaService {
         const uses = usage.filter((use) => use.mediaAssetId === asset.id);
         const venue = venues.find((each) => each.id === asset.venueId);
         const altLocales = canonicalLanguageTags([venue?.sourceLocale, ...(venue?.targetLocales ?? []), ...uses.map((use) => use.sourceLocale)]);
-        return toMediaView(asset, uses.map(({ mediaAssetId: _, sourceLocale: __, ...use }) => use), altLocales, person);
+        return toMediaView(asset, uses.map(({ mediaAssetId: _, sourceLocale: __, ...use }) => use), altLocales, personAt(member, asset.venueId));
       });
   }
 

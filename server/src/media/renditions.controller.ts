@@ -1,6 +1,7 @@
 import { Controller, HttpCode, HttpStatus, Param, ParseIntPipe, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Roles } from '../auth/auth.decorators.js';
+import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
 import { MEDIA_KEEPERS } from './media-policy.js';
 import { RenditionsService } from './renditions.service.js';
 
@@ -14,7 +15,7 @@ export class RenditionsController {
   /** Makes a failed image's renditions again; the answer is its rendition status, now pending. */
   @Post('retry')
   @HttpCode(HttpStatus.ACCEPTED)
-  retry(@Param('id', ParseIntPipe) id: number) {
-    return this.renditions.retry(id);
+  retry(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.renditions.retry(id, person);
   }
 }

@@ -2,7 +2,8 @@ import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import { MY_WORK_LIST_LENGTH, type MyWorkView, type StoryState, type WorkList } from '@mantlepiece/shared';
+import { MY_WORK_LIST_LENGTH, type MyWorkView, type Role, type StoryState, type WorkList } from '@mantlepiece/shared';
+import { rolesAnywhere, scopeWhere, venueScope } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { MAX_PAGE_SIZE } from '../common/page.js';
 import { KioskStates } from '../fleet/kiosk-states.service.js';
@@ -29,7 +30,7 @@ const FIRST_PAGE = { page: 1, pageSize: MY_WORK_LIST_LENGTH };
 const WIDE_PAGE = { page: 1, pageSize: MAX_PAGE_SIZE };
 
 /**
- * What is waiting for one person, per role they hold. Each list comes from the query its own area
+ * What is waiting for one person, per role they hold at any venue, from the venues where they hold it. Each list comes from the query its own area
  * already runs (the stories table, the review queue, the translator's worklist, the fleet, the
  * media library), so the home page never disagrees with the page its link opens.
  */
@@ -49,10 +50,11 @@ export class MyWorkService {
   ) {}
 
   async workOf(user: User): Promise<MyWorkView> {
-    const has = (role: string) => user.roles.includes(role as never);
+    const held = rolesAnywhere(user);
+    const has = (role: Role) => held.includes(role);
     const [curator, educator, translator, technician, admin] = await Promise.all([
       has('curator') ? this.curatorWork(user) : undefined,
-      has('educator') ? this.educatorWork() : undefined,
+      has('educator') ? this.educatorWork(user) : undefined,
       has('translator') ? this.translatorWork(user) : undefined,
       has('technician') ? this.technicianWork(user) : undefined,
       has('admin') ? this.adminWork(user) : undefined,
@@ -75,23 +77,25 @@ export class MyWorkService {
    * a newer revision, so older revisions' copies would count twice.
    */
   private async openComments(user: User): Promise<WorkList<ReturnType<typeof toCommentWork>>> {
+    const scope = venueScope(user);
+    if (!scope.every && scope.venueIds.length === 0) return workList([]);
     const rows = await this.sequelize.query<OpenCommentsRow>(
       `SELECT s.id AS storyId, s.title, r.id AS revisionId, COUNT(*) AS openComments, MAX(c.created_at) AS latestAt
        FROM comments c
        JOIN revisions r ON r.id = c.revision_id
        JOIN stories s ON s.id = r.story_id
-       WHERE s.created_by_id = :userId AND c.parent_id IS NULL AND c.resolved_at IS NULL
+       WHERE s.created_by_id = :userId AND c.parent_id IS NULL AND c.resolved_at IS NULL${scope.every ? '' : ' AND s.venue_id IN (:venueIds)'}
          AND r.id = (SELECT MAX(newest.id) FROM revisions newest WHERE newest.story_id = s.id)
        GROUP BY s.id, s.title, r.id
        ORDER BY latestAt DESC, s.id`,
-      { replacements: { userId: user.id }, type: QueryTypes.SELECT },
+      { replacements: { userId: user.id, venueIds: scope.every ? [] : scope.venueIds }, type: QueryTypes.SELECT },
     );
     return workList(rows.map(toCommentWork));
   }
 
-  /** The review queue, longest waiting first. */
-  private async educatorWork(): Promise<NonNullable<MyWorkView['educator']>> {
-    const queue = await this.reviews.queue({ ...FIRST_PAGE, sort: 'submittedAt' });
+  /** The review queue of the venues where they review, longest waiting first. */
+  private async educatorWork(user: User): Promise<NonNullable<MyWorkView['educator']>> {
+    const queue = await this.reviews.queue({ ...FIRST_PAGE, sort: 'submittedAt' }, user);
     const now = this.clock.now();
     return { reviewQueue: { items: queue.items.map((item) => toReviewWork(item, now)), total: queue.total } };
   }
@@ -111,7 +115,7 @@ export class MyWorkService {
           [Op.or]: [{ state: 'ready' }, { state: 'failed', createdAt: { [Op.gte]: this.clock.fromNow(-FAILED_RELEASE_DAYS * DAY_MS) } }],
         },
         attributes: { exclude: ['manifest'] },
-        include: [{ model: Gallery, attributes: ['id', 'name'] }],
+        include: [{ model: Gallery, attributes: ['id', 'name'], where: scopeWhere(venueScope(user, ['technician'])) }],
         order: [['createdAt', 'DESC'], ['id', 'DESC']],
       }),
     ]);

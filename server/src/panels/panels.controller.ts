@@ -1,6 +1,7 @@
 import { Body, Controller, Delete, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Put, UseFilters } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Roles } from '../auth/auth.decorators.js';
+import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import type { User } from '../users/models/user.model.js';
 import { VersionConflictFilter } from '../common/version-conflict.js';
 import { STORY_WRITERS } from '../stories/story-policy.js';
 import { CreatePanelDto, ReorderPanelsDto, SavePanelDocumentDto, UpdatePanelDto } from './dto/panel.dto.js';
@@ -16,29 +17,29 @@ export class PanelsController {
   constructor(private readonly panels: PanelsService) {}
 
   @Post('stories/:storyId/panels')
-  add(@Param('storyId', ParseIntPipe) storyId: number, @Body() dto: CreatePanelDto) {
-    return this.panels.addPanel(storyId, dto);
+  add(@Param('storyId', ParseIntPipe) storyId: number, @Body() dto: CreatePanelDto, @CurrentUser() person: User) {
+    return this.panels.addPanel(storyId, dto, person);
   }
 
   @Post('stories/:storyId/panels/reorder')
   @HttpCode(HttpStatus.OK)
-  reorder(@Param('storyId', ParseIntPipe) storyId: number, @Body() dto: ReorderPanelsDto) {
-    return this.panels.reorder(storyId, dto.panelIds);
+  reorder(@Param('storyId', ParseIntPipe) storyId: number, @Body() dto: ReorderPanelsDto, @CurrentUser() person: User) {
+    return this.panels.reorder(storyId, dto.panelIds, person);
   }
 
   @Put('panels/:id')
-  save(@Param('id', ParseIntPipe) id: number, @Body() dto: SavePanelDocumentDto) {
-    return this.panels.saveDocument(id, dto);
+  save(@Param('id', ParseIntPipe) id: number, @Body() dto: SavePanelDocumentDto, @CurrentUser() person: User) {
+    return this.panels.saveDocument(id, dto, person);
   }
 
   @Patch('panels/:id')
-  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdatePanelDto) {
-    return this.panels.updatePanel(id, dto);
+  update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdatePanelDto, @CurrentUser() person: User) {
+    return this.panels.updatePanel(id, dto, person);
   }
 
   @Delete('panels/:id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  delete(@Param('id', ParseIntPipe) id: number) {
-    return this.panels.deletePanel(id);
+  delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.panels.deletePanel(id, person);
   }
 }

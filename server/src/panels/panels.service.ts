@@ -7,9 +7,11 @@ import {
   type PanelConflictBody, type PanelDocJSON, type PanelIssue, type PanelView,
 } from '@mantlepiece/shared';
 import { VersionConflictException } from '../common/version-conflict.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
+import type { Member } from '../auth/policy.js';
 import { MediaAsset } from '../media/models/media-asset.model.js';
 import { Story } from '../stories/models/story.model.js';
-import { refuseUnlessEditable } from '../stories/story-policy.js';
+import { NO_SUCH_STORY, refuseUnlessEditable, STORY_WRITERS } from '../stories/story-policy.js';
 import type { CreatePanelDto, SavePanelDocumentDto, UpdatePanelDto } from './dto/panel.dto.js';
 import { PanelDocument } from './models/panel-document.model.js';
 import { PanelMediaUsage } from './models/panel-media-usage.model.js';
@@ -20,6 +22,7 @@ import { toPanelView } from './panels.presenter.js';
 export const DEFAULT_WORD_BUDGET = 60;
 
 const MEDIA_ID = /^[1-9]\d{0,9}$/;
+const NO_SUCH_PANEL = 'There is no such panel.';
 
 function unprocessable(message: string, errors: PanelIssue[]): UnprocessableEntityException {
   return new UnprocessableEntityException({ statusCode: HttpStatus.UNPROCESSABLE_ENTITY, message, errors });
@@ -47,10 +50,10 @@ export class PanelsService {
     return panels.map((panel) => toPanelView(panel, panel.documents![0]!));
   }
 
-  async addPanel(storyId: number, dto: CreatePanelDto): Promise<PanelView> {
-    const doc = await this.checkDocument(dto.doc ?? emptyPanelDoc());
+  async addPanel(storyId: number, dto: CreatePanelDto, member: Member): Promise<PanelView> {
     return this.sequelize.transaction(async (transaction) => {
-      const story = await this.lockStory(storyId, transaction);
+      const story = await this.lockStory(storyId, member, NO_SUCH_STORY, transaction);
+      const doc = await this.checkDocument(dto.doc ?? emptyPanelDoc(), story, transaction);
       const count = await this.panels.count({ where: { storyId }, transaction });
       const position = Math.min(dto.position ?? count, count);
       await this.panels.increment('position', { by: 1, where: { storyId, position: { [Op.gte]: position } }, transaction });
@@ -66,10 +69,10 @@ export class PanelsService {
    * Saves the source document by compare-and-set on its version: of two editors who started from
    * the same version, the second gets a 409 with what the first saved, never a silent overwrite.
    */
-  async saveDocument(panelId: number, { doc: json, version }: SavePanelDocumentDto): Promise<{ version: number }> {
-    const doc = await this.checkDocument(json);
+  async saveDocument(panelId: number, { doc: json, version }: SavePanelDocumentDto, member: Member): Promise<{ version: number }> {
     return this.sequelize.transaction(async (transaction) => {
-      const { panel, story } = await this.findPanel(panelId, transaction);
+      const { panel, story } = await this.findPanel(panelId, member, transaction);
+      const doc = await this.checkDocument(json, story, transaction);
       const where = { panelId, locale: story.sourceLocale };
       const [saved] = await this.documents.update({ doc, version: version + 1 }, { where: { ...where, version }, transaction });
       if (saved === 0) {
@@ -86,9 +89,9 @@ export class PanelsService {
     });
   }
 
-  async updatePanel(panelId: number, dto: UpdatePanelDto): Promise<PanelView> {
+  async updatePanel(panelId: number, dto: UpdatePanelDto, member: Member): Promise<PanelView> {
     return this.sequelize.transaction(async (transaction) => {
-      const { panel, story } = await this.findPanel(panelId, transaction);
+      const { panel, story } = await this.findPanel(panelId, member, transaction);
       await panel.update({ wordBudget: dto.wordBudget }, { transaction });
       const source = await this.documents.findOne({ where: { panelId, locale: story.sourceLocale }, transaction });
       return toPanelView(panel, source!);
@@ -96,9 +99,9 @@ export class PanelsService {
   }
 
   /** Puts every panel of the story in the order given, all in one transaction. */
-  async reorder(storyId: number, panelIds: number[]): Promise<PanelView[]> {
+  async reorder(storyId: number, panelIds: number[], member: Member): Promise<PanelView[]> {
     return this.sequelize.transaction(async (transaction) => {
-      const story = await this.lockStory(storyId, transaction);
+      const story = await this.lockStory(storyId, member, NO_SUCH_STORY, transaction);
       const current = new Set((await this.panels.findAll({ where: { storyId }, attributes: ['id'], transaction })).map((panel) => panel.id));
       if (panelIds.length !== current.size || !panelIds.every((id) => current.has(id))) {
         throw new ConflictException("The list does not match this story's panels; someone may have added or deleted one. Reload and try again.");
@@ -109,17 +112,20 @@ export class PanelsService {
     });
   }
 
-  async deletePanel(panelId: number): Promise<void> {
+  async deletePanel(panelId: number, member: Member): Promise<void> {
     await this.sequelize.transaction(async (transaction) => {
-      const { panel, story } = await this.findPanel(panelId, transaction);
+      const { panel, story } = await this.findPanel(panelId, member, transaction);
       await panel.destroy({ transaction });
       await this.panels.decrement('position', { by: 1, where: { storyId: story.id, position: { [Op.gt]: panel.position } }, transaction });
       await this.touchStory(story.id, transaction);
     });
   }
 
-  /** The shared check (schema from panelExtensions, links, widget params), then: every image is in the library. */
-  private async checkDocument(json: unknown): Promise<PanelDocJSON> {
+  /**
+   * The shared check (schema from panelExtensions, links, widget params), then: every image is in
+   * the library of the story's venue; another venue's image answers as an unknown one.
+   */
+  private async checkDocument(json: unknown, story: Story, transaction: Transaction): Promise<PanelDocJSON> {
     const check = checkPanelDocument(json);
     if (!check.ok) throw unprocessable('This panel cannot be saved as it is.', check.errors);
     const images: { path: PanelIssue['path']; mediaId: string }[] = [];
@@ -127,7 +133,7 @@ export class PanelsService {
       if (node.type === PANEL_IMAGE_NODE) images.push({ path: [...path, 'attrs', 'mediaId'], mediaId: String(node.attrs?.mediaId) });
     });
     const wanted = [...new Set(images.map((image) => image.mediaId).filter((id) => MEDIA_ID.test(id)))].map(Number);
-    const known = new Set((await this.media.findAll({ where: { id: wanted }, attributes: ['id'] })).map((asset) => String(asset.id)));
+    const known = new Set((await this.media.findAll({ where: { id: wanted, venueId: story.venueId }, attributes: ['id'], transaction })).map((asset) => String(asset.id)));
     const missing = images.filter((image) => !known.has(image.mediaId));
     if (missing.length > 0) {
       throw unprocessable('This panel cannot be saved as it is.', missing.map(({ path, mediaId }) => ({ path, message: `There is no image ${mediaId} in the media library.` })));
@@ -146,21 +152,22 @@ export class PanelsService {
 
   /**
    * Every change to a story's panels goes through its row lock, so positions never interleave and
-   * no change slips in after a submission; only a story the curator may write in is changed.
+   * no change slips in after a submission; only a story the member writes at its venue, in a state
+   * the curator may write in, is changed. `missing` is what an unreachable one answers.
    */
-  private async lockStory(storyId: number, transaction: Transaction): Promise<Story> {
-    const story = await this.stories.findByPk(storyId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!story) throw new NotFoundException('There is no such story.');
+  private async lockStory(storyId: number, member: Member, missing: string, transaction: Transaction): Promise<Story> {
+    const story = withinReach(member, await this.stories.findByPk(storyId, { transaction, lock: transaction.LOCK.UPDATE }), missing);
+    actingAt(member, story.venueId, STORY_WRITERS);
     refuseUnlessEditable(story);
     return story;
   }
 
-  private async findPanel(panelId: number, transaction: Transaction): Promise<{ panel: Panel; story: Story }> {
+  private async findPanel(panelId: number, member: Member, transaction: Transaction): Promise<{ panel: Panel; story: Story }> {
     const found = await this.panels.findByPk(panelId, { attributes: ['storyId'], transaction });
-    if (!found) throw new NotFoundException('There is no such panel.');
-    const story = await this.lockStory(found.storyId, transaction);
+    if (!found) throw new NotFoundException(NO_SUCH_PANEL);
+    const story = await this.lockStory(found.storyId, member, NO_SUCH_PANEL, transaction);
     const panel = await this.panels.findByPk(panelId, { transaction });
-    if (!panel) throw new NotFoundException('There is no such panel.');
+    if (!panel) throw new NotFoundException(NO_SUCH_PANEL);
     return { panel, story };
   }
 

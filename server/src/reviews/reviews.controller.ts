@@ -15,8 +15,8 @@ export class ReviewsController {
   constructor(private readonly reviews: ReviewsService) {}
 
   @Get('reviews/queue')
-  queue(@Query() query: ReviewQueueQuery) {
-    return this.reviews.queue(query);
+  queue(@Query() query: ReviewQueueQuery, @CurrentUser() educator: User) {
+    return this.reviews.queue(query, educator);
   }
 
   @Post('revisions/:id/reviews')

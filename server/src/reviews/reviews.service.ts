@@ -3,32 +3,34 @@ import { InjectModel } from '@nestjs/sequelize';
 import { Op, type Order, type OrderItem, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
-  decide, preflightBlockers, revisionHash, STORY_STATE_LABELS,
+  decide, preflightBlockers, revisionHash, STORY_STATE_LABELS, STORY_WORKFLOW,
   type Page, type ReviewQueueItem, type RevisionState, type StoryState, type StoryView, type SubmitRequest, type SubmitResult, type VerdictResult, type WorkflowRequest,
 } from '@mantlepiece/shared';
 import { AuditService } from '../audit/audit.service.js';
+import { personAt, scopeWhere, venueScope, type Member, type Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { CommentsService, reviewPagePath } from '../comments/comments.service.js';
 import { likePattern } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
+import { withinReach } from '../common/venue-boundary.js';
 import { NotificationsService } from '../notifications/notifications.service.js';
 import { Revision } from '../revisions/models/revision.model.js';
 import { personRef } from '../revisions/revisions.presenter.js';
 import { APPROVALS_COLUMN, RevisionsService } from '../revisions/revisions.service.js';
 import { Story } from '../stories/models/story.model.js';
 import { StoriesService } from '../stories/stories.service.js';
+import { NO_SUCH_STORY } from '../stories/story-policy.js';
 import { User } from '../users/models/user.model.js';
+import { UsersService } from '../users/users.service.js';
 import type { RecordVerdictDto, ReviewQueueQuery } from './dto/review.dto.js';
 import { Review } from './models/review.model.js';
 import { toReviewView } from './reviews.presenter.js';
 import { blockedByPreflight, workflowRefusal } from './workflow-refusal.js';
 
-/** The approvals a row's revision needs: its story's venue's setting, else the first venue's, else one. */
-const REQUIRED_APPROVALS_COLUMN = Sequelize.literal(
-  'COALESCE((SELECT `v`.`required_approvals` FROM `exhibits` AS `e` JOIN `galleries` AS `g` ON `g`.`id` = `e`.`gallery_id` ' +
-    'JOIN `venues` AS `v` ON `v`.`id` = `g`.`venue_id` WHERE `e`.`id` = `story`.`exhibit_id`), ' +
-    '(SELECT `required_approvals` FROM `venues` ORDER BY `id` LIMIT 1), 1)',
-);
+/** The approvals a row's revision needs: its story's venue's setting. */
+const REQUIRED_APPROVALS_COLUMN = Sequelize.literal('(SELECT `v`.`required_approvals` FROM `venues` AS `v` WHERE `v`.`id` = `story`.`venue_id`)');
+
+const NO_SUCH_REVISION = 'There is no such revision.';
 
 const REVISION_STATE_WORDS: Readonly<Record<RevisionState, string>> = {
   open: 'open', approved: 'approved', changes_requested: 'closed with changes requested', superseded: 'superseded by a newer submission', withdrawn: 'withdrawn by its curator',
@@ -43,6 +45,7 @@ export class ReviewsService {
     @InjectModel(User) private readonly users: typeof User,
     private readonly revisions: RevisionsService,
     private readonly storyViews: StoriesService,
+    private readonly people: UsersService,
     private readonly comments: CommentsService,
     private readonly notifications: NotificationsService,
     private readonly audit: AuditService,
@@ -58,8 +61,8 @@ export class ReviewsService {
    */
   async submitForReview(storyId: number, curator: User, request: SubmitRequest = {}): Promise<SubmitResult> {
     return this.sequelize.transaction(async (transaction) => {
-      const story = await this.lockStory(storyId, transaction);
-      const state = this.allow({ state: story.state, action: 'submit', actor: curator, revision: null });
+      const story = await this.lockStory(storyId, curator, NO_SUCH_STORY, transaction);
+      const state = this.allow({ state: story.state, action: 'submit', actor: personAt(curator, story.venueId), revision: null });
       const snapshot = await this.revisions.snapshotOf(story, transaction);
       if (snapshot.panels.length === 0) throw new ConflictException('This story has no panels yet; add one before submitting it for review.');
       const preflight = await this.revisions.preflightOf(snapshot, story, transaction);
@@ -89,7 +92,7 @@ export class ReviewsService {
         detail: { storyId, number: revision.number, hash: revision.hash, blockers: revision.blockerCount, supersededRevisionId: previous?.state === 'superseded' ? previous.id : null },
       }, transaction);
       await this.notifications.notify(
-        await this.educatorsOtherThan(curator, transaction),
+        await this.educatorsOtherThan(curator, story.venueId, transaction),
         { kind: 'revision_submitted', storyTitle: story.title, number: revision.number, submitterName: curator.name },
         reviewPagePath(revision.id),
         transaction,
@@ -102,8 +105,8 @@ export class ReviewsService {
   async recordVerdict(revisionId: number, educator: User, dto: RecordVerdictDto): Promise<VerdictResult> {
     return this.sequelize.transaction(async (transaction) => {
       const found = await this.revisionRows.findByPk(revisionId, { attributes: ['storyId'], transaction });
-      if (!found) throw new NotFoundException('There is no such revision.');
-      const story = await this.lockStory(found.storyId, transaction);
+      if (!found) throw new NotFoundException(NO_SUCH_REVISION);
+      const story = await this.lockStory(found.storyId, educator, NO_SUCH_REVISION, transaction);
       const revision = (await this.revisionRows.findByPk(revisionId, { transaction }))!;
       if (revision.state !== 'open') {
         throw new ConflictException(`Revision ${revision.number} is ${REVISION_STATE_WORDS[revision.state]}; only a story's open revision takes verdicts. This story is ${STORY_STATE_LABELS[story.state]}.`);
@@ -114,7 +117,7 @@ export class ReviewsService {
       const state = this.allow({
         state: story.state,
         action: dto.verdict,
-        actor: educator,
+        actor: personAt(educator, story.venueId),
         // A deleted account is nobody: 0 matches no person's id.
         revision: { authorId: revision.submittedById ?? 0, approvals: approvals.map((approval) => ({ educatorId: approval.reviewerId ?? 0 })) },
         requiredApprovals: venue.requiredApprovals,
@@ -146,13 +149,13 @@ export class ReviewsService {
    */
   async withdrawSubmission(storyId: number, curator: User): Promise<StoryView> {
     await this.sequelize.transaction(async (transaction) => {
-      const story = await this.lockStory(storyId, transaction);
+      const story = await this.lockStory(storyId, curator, NO_SUCH_STORY, transaction);
       const open = await this.revisionRows.findOne({ where: { storyId, state: 'open' }, transaction });
       const approvals = open ? await this.reviews.findAll({ where: { revisionId: open.id, verdict: 'approve' }, attributes: ['reviewerId'], transaction }) : [];
       const state = this.allow({
         state: story.state,
         action: 'withdraw',
-        actor: curator,
+        actor: personAt(curator, story.venueId),
         revision: open && { authorId: open.submittedById ?? 0, approvals: approvals.map((approval) => ({ educatorId: approval.reviewerId ?? 0 })) },
       });
       await open!.update({ state: 'withdrawn' }, { transaction });
@@ -168,8 +171,8 @@ export class ReviewsService {
    */
   async reviseStory(storyId: number, curator: User): Promise<StoryView> {
     await this.sequelize.transaction(async (transaction) => {
-      const story = await this.lockStory(storyId, transaction);
-      const state = this.allow({ state: story.state, action: 'revise', actor: curator, revision: null });
+      const story = await this.lockStory(storyId, curator, NO_SUCH_STORY, transaction);
+      const state = this.allow({ state: story.state, action: 'revise', actor: personAt(curator, story.venueId), revision: null });
       const approved = await this.revisionRows.findOne({ where: { storyId, state: 'approved' }, order: [['number', 'DESC']], attributes: ['id', 'number'], transaction });
       await story.update({ state }, { transaction });
       await this.audit.record({
@@ -183,20 +186,25 @@ export class ReviewsService {
   /** Takes an approved story out of future releases; bringing it back means a new review. */
   async retireStory(storyId: number, actor: User): Promise<StoryView> {
     await this.sequelize.transaction(async (transaction) => {
-      const story = await this.lockStory(storyId, transaction);
-      const state = this.allow({ state: story.state, action: 'retire', actor, revision: null });
+      const story = await this.lockStory(storyId, actor, NO_SUCH_STORY, transaction);
+      const state = this.allow({ state: story.state, action: 'retire', actor: personAt(actor, story.venueId), revision: null });
       await story.update({ state }, { transaction });
       await this.audit.record({ actorId: actor.id, action: 'story.retired', targetType: 'story', targetId: storyId }, transaction);
     });
     return this.storyViews.view(storyId, actor);
   }
 
-  /** Open revisions waiting for verdicts, searched by story title, paged by the database. */
-  async queue(query: ReviewQueueQuery): Promise<Page<ReviewQueueItem>> {
+  /** Open revisions waiting for verdicts at the venues where the educator reviews, searched by story title, paged by the database. */
+  async queue(query: ReviewQueueQuery, educator: Member): Promise<Page<ReviewQueueItem>> {
     const { rows, count } = await this.revisionRows.findAndCountAll({
       attributes: { exclude: ['snapshot', 'preflight'], include: [[APPROVALS_COLUMN, 'approvals'], [REQUIRED_APPROVALS_COLUMN, 'requiredApprovals']] },
       include: [{ model: Story, attributes: ['id', 'title', 'exhibitId'] }, { model: User, attributes: ['id', 'name'] }],
-      where: { state: 'open', ...(query.q ? { '$story.title$': { [Op.like]: likePattern(query.q) } } : {}) },
+      where: {
+        state: 'open',
+        ...scopeWhere(venueScope(educator, STORY_WORKFLOW.approve.roles), '$story.venue_id$'),
+        ...(query.venueId ? { '$story.venue_id$': query.venueId } : {}),
+        ...(query.q ? { '$story.title$': { [Op.like]: likePattern(query.q) } } : {}),
+      },
       order: queueOrder(query.sort),
       ...pageWindow(query),
     });
@@ -210,22 +218,15 @@ export class ReviewsService {
     return decision.next;
   }
 
-  private async lockStory(id: number, transaction: Transaction): Promise<Story> {
-    const story = await this.stories.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!story) throw new NotFoundException('There is no such story.');
-    return story;
+  /** The story, locked, if the member may reach its venue; `missing` is what an unreachable one answers. */
+  private async lockStory(id: number, member: Member, missing: string, transaction: Transaction): Promise<Story> {
+    return withinReach(member, await this.stories.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE }), missing);
   }
 
-  /** Mantlepiece runs one venue per install, so the venue's educators are every active educator. */
-  private educatorsOtherThan(person: User, transaction: Transaction): Promise<User[]> {
-    return this.users.findAll({
-      where: {
-        active: true,
-        id: { [Op.ne]: person.id },
-        [Op.and]: [Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('roles'), JSON.stringify('educator')), 1)],
-      },
-      transaction,
-    });
+  /** The educators of the story's venue, who review its submissions. */
+  private async educatorsOtherThan(person: Person, venueId: number, transaction: Transaction): Promise<User[]> {
+    const educators = await this.people.holdingAt(venueId, 'educator', transaction);
+    return educators.filter((educator) => educator.id !== person.id);
   }
 
   private async notifyAuthor(

@@ -1,6 +1,6 @@
 import { decide, type RevisionCan, type RevisionState, type StoryState, type Verdict } from '@mantlepiece/shared';
 import type { Person } from '../auth/policy.js';
-import { commentCan } from '../comments/comment-policy.js';
+import { talksAbout } from '../comments/comment-policy.js';
 
 /** What a revision's `can` depends on besides the person. */
 export interface RevisionFacts {
@@ -34,5 +34,5 @@ export function revisionCan(person: Person, revision: RevisionFacts): RevisionCa
     });
     return decision.ok || decision.reason === 'note_required';
   };
-  return { approve: verdict('approve') && revision.blockers === 0, requestChanges: verdict('request_changes'), comment: commentCan(person).reply };
+  return { approve: verdict('approve') && revision.blockers === 0, requestChanges: verdict('request_changes'), comment: talksAbout(person) };
 }

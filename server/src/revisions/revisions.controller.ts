@@ -15,14 +15,14 @@ export class RevisionsController {
   constructor(private readonly revisions: RevisionsService) {}
 
   @Get('stories/:id/revisions')
-  listForStory(@Param('id', ParseIntPipe) storyId: number) {
-    return this.revisions.listForStory(storyId);
+  listForStory(@Param('id', ParseIntPipe) storyId: number, @CurrentUser() person: User) {
+    return this.revisions.listForStory(storyId, person);
   }
 
   /** The shared preflight on the story's draft as it stands; a revision keeps its own from submission. */
   @Get('stories/:id/preflight')
-  draftPreflight(@Param('id', ParseIntPipe) storyId: number) {
-    return this.revisions.draftPreflight(storyId);
+  draftPreflight(@Param('id', ParseIntPipe) storyId: number, @CurrentUser() person: User) {
+    return this.revisions.draftPreflight(storyId, person);
   }
 
   @ApiCan('revision')

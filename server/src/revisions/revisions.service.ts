@@ -1,4 +1,4 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, type FindOptions, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
@@ -6,9 +6,10 @@ import {
   buildRevisionSnapshot, dayIn, diffRevisions, runPreflight,
   type ComparisonBasis, type PreflightEntry, type PreflightMedia, type RevisionComparison, type RevisionSnapshot, type RevisionState, type RevisionSummary, type RevisionView,
 } from '@mantlepiece/shared';
-import type { Person } from '../auth/policy.js';
+import { personAt, type Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { CommentsService } from '../comments/comments.service.js';
+import { withinReach } from '../common/venue-boundary.js';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { MediaAsset } from '../media/models/media-asset.model.js';
@@ -18,6 +19,7 @@ import { Panel } from '../panels/models/panel.model.js';
 import { Review } from '../reviews/models/review.model.js';
 import { toReviewView } from '../reviews/reviews.presenter.js';
 import { Story } from '../stories/models/story.model.js';
+import { NO_SUCH_STORY } from '../stories/story-policy.js';
 import { User } from '../users/models/user.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { Revision } from './models/revision.model.js';
@@ -30,6 +32,7 @@ export const APPROVALS_COLUMN = Sequelize.literal(
 );
 
 const MEDIA_ID = /^[1-9]\d{0,9}$/;
+const NO_SUCH_REVISION = 'There is no such revision.';
 
 const withSubmitter: FindOptions<Revision> = { include: [{ model: User, attributes: ['id', 'name'] }] };
 
@@ -87,10 +90,9 @@ export class RevisionsService {
    * Preflight of the draft as it stands, so the curator sees blockers while writing rather than
    * after submitting. Read in one transaction so panels and media are seen at one moment.
    */
-  async draftPreflight(storyId: number): Promise<PreflightEntry[]> {
+  async draftPreflight(storyId: number, member: Member): Promise<PreflightEntry[]> {
     return this.sequelize.transaction(async (transaction) => {
-      const story = await this.stories.findByPk(storyId, { transaction });
-      if (!story) throw new NotFoundException('There is no such story.');
+      const story = withinReach(member, await this.stories.findByPk(storyId, { transaction }), NO_SUCH_STORY);
       return this.preflightOf(await this.snapshotOf(story, transaction), story, transaction);
     });
   }
@@ -101,7 +103,8 @@ export class RevisionsService {
   }
 
   /** Newest first. */
-  async listForStory(storyId: number): Promise<RevisionSummary[]> {
+  async listForStory(storyId: number, member: Member): Promise<RevisionSummary[]> {
+    withinReach(member, await this.stories.findByPk(storyId, { attributes: ['id', 'venueId'] }), NO_SUCH_STORY);
     const rows = await this.revisions.findAll({
       ...withSubmitter,
       attributes: { exclude: ['snapshot', 'preflight'], include: [[APPROVALS_COLUMN, 'approvals']] },
@@ -111,8 +114,8 @@ export class RevisionsService {
     return rows.map(toRevisionSummary);
   }
 
-  async get(id: number, person: Person): Promise<RevisionView> {
-    return this.view(await this.find(id), person);
+  async get(id: number, member: Member): Promise<RevisionView> {
+    return this.view(await this.find(id, member), member);
   }
 
   /**
@@ -120,27 +123,29 @@ export class RevisionsService {
    * the last one sent back with changes requested: the educator who asked sees what changed in
    * answer, rather than every panel marked new. Every panel is new only on a first review.
    */
-  async compare(id: number, person: Person): Promise<RevisionComparison> {
-    const revision = await this.find(id);
+  async compare(id: number, member: Member): Promise<RevisionComparison> {
+    const revision = await this.find(id, member);
     const approved = await this.lastApprovedBefore(revision);
     const base = approved ?? (await this.lastBefore(revision, 'changes_requested'));
     const basis: ComparisonBasis = approved ? 'approved' : base ? 'changes_requested' : 'first_review';
-    return { basis, base: base && (await this.view(base, person)), diff: diffRevisions(base?.snapshot ?? null, revision.snapshot) };
+    return { basis, base: base && (await this.view(base, member)), diff: diffRevisions(base?.snapshot ?? null, revision.snapshot) };
   }
 
-  private async view(revision: Revision, person: Person): Promise<RevisionView> {
-    const [reviews, comments, previous, story] = await Promise.all([
+  /** The revision as `member` sees it, deciding at its story's venue. */
+  private async view(revision: Revision, member: Member): Promise<RevisionView> {
+    const story = (await this.stories.findByPk(revision.storyId))!;
+    const person = personAt(member, story.venueId);
+    const [reviews, comments, previous] = await Promise.all([
       this.reviews.findAll({ where: { revisionId: revision.id }, include: [{ model: User, attributes: ['id', 'name'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
       this.comments.listForRevision(revision.id, person),
       this.lastApprovedBefore(revision, ['id']),
-      this.stories.findByPk(revision.storyId),
     ]);
     const can = revisionCan(person, {
       state: revision.state,
-      storyState: story!.state,
+      storyState: story.state,
       authorId: revision.submittedById,
       approverIds: reviews.filter((review) => review.verdict === 'approve').map((review) => review.reviewerId),
-      requiredApprovals: (await this.venueOf(story!)).requiredApprovals,
+      requiredApprovals: (await this.venueOf(story)).requiredApprovals,
       blockers: revision.blockerCount,
     });
     return toRevisionView(revision, { reviews: reviews.map(toReviewView), comments, previousApprovedRevisionId: previous?.id ?? null, can });
@@ -159,9 +164,10 @@ export class RevisionsService {
     });
   }
 
-  private async find(id: number): Promise<Revision> {
-    const revision = await this.revisions.findByPk(id, withSubmitter);
-    if (!revision) throw new NotFoundException('There is no such revision.');
-    return revision;
+  /** A revision of a story the member may reach; another venue's answers as a missing one. */
+  private async find(id: number, member: Member): Promise<Revision> {
+    const revision = await this.revisions.findByPk(id, { include: [{ model: User, attributes: ['id', 'name'] }, { model: Story, attributes: ['id', 'venueId'] }] });
+    withinReach(member, revision?.story, NO_SUCH_REVISION);
+    return revision!;
   }
 }

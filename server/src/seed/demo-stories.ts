@@ -6,6 +6,7 @@ import { MediaService } from '../media/media.service.js';
 import { PanelsService } from '../panels/panels.service.js';
 import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
+import { VenueMembership } from '../users/models/venue-membership.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { DEMO_GALLERY } from './demo-scenario.js';
 import { renderDemoImage, type DemoImageName } from './demo-images.js';
@@ -160,7 +161,8 @@ export class DemoStories {
 
   async seed(curatorEmail: string): Promise<void> {
     const gallery = await this.galleries.findOne({ where: { name: DEMO_GALLERY.name } });
-    const curator = await this.users.findOne({ where: { email: curatorEmail } });
+    // With their venues, as the guard reads a person: the panels and images go where they write.
+    const curator = await this.users.findOne({ where: { email: curatorEmail }, include: [VenueMembership] });
     if (!gallery || !curator) throw new Error('the demo gallery and curator must exist before the demo stories');
     const exhibit = await this.exhibits.create({ ...DEMO_EXHIBIT, galleryId: gallery.id });
 
@@ -173,7 +175,7 @@ export class DemoStories {
 
     for (const { title, panels } of STORIES) {
       const story = await this.stories.create({ title, audience: 'family', sourceLocale: 'en', state: 'draft', venueId: gallery.venueId, exhibitId: exhibit.id, createdById: curator.id });
-      for (const panel of panels) await this.panels.addPanel(story.id, { doc: withImageIds(panel, ids) });
+      for (const panel of panels) await this.panels.addPanel(story.id, { doc: withImageIds(panel, ids) }, curator);
     }
   }
 }

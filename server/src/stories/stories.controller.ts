@@ -43,7 +43,7 @@ export class StoriesController {
 
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  delete(@Param('id', ParseIntPipe) id: number) {
-    return this.stories.deleteStory(id);
+  delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.stories.deleteStory(id, person);
   }
 }

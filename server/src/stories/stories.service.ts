@@ -1,12 +1,13 @@
-import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, UniqueConstraintError, type FindOptions, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { StoryDetailView, StoryPage, StoryView } from '@mantlepiece/shared';
-import { inScope, venueScope, type Member, type Person } from '../auth/policy.js';
+import { inScope, personAt, rolesAnywhere, scopeWhere, venueScope, type Member } from '../auth/policy.js';
 import { likePattern, orderOf } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { invalidField, unknownReference } from '../common/validation.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { PanelDocument } from '../panels/models/panel-document.model.js';
 import { Panel } from '../panels/models/panel.model.js';
@@ -17,7 +18,7 @@ import { Venue } from '../venues/models/venue.model.js';
 import type { CreateStoryDto, ListStoriesQuery, UpdateStoryDto } from './dto/story.dto.js';
 import { Story } from './models/story.model.js';
 import { toStoryView } from './stories.presenter.js';
-import { refuseUnlessEditable, storiesCan, STORY_WRITERS } from './story-policy.js';
+import { NO_SUCH_STORY, refuseUnlessEditable, storiesCan, STORY_WRITERS } from './story-policy.js';
 import { venueForNewWork } from '../venues/venue-for-new-work.js';
 
 /** The story's latest approved revision, as `id:number`, so the list reads it without a query per row. */
@@ -58,9 +59,10 @@ export class StoriesService {
     private readonly sequelize: Sequelize,
   ) {}
 
-  /** The Stories table: filtered, sorted and paged by the database. */
-  async list(query: ListStoriesQuery, person: Person): Promise<StoryPage> {
-    const conditions: WhereOptions<Story>[] = [];
+  /** The Stories table of the member's venues (or the one asked for): filtered, sorted and paged by the database. */
+  async list(query: ListStoriesQuery, member: Member): Promise<StoryPage> {
+    const conditions: WhereOptions<Story>[] = [scopeWhere(venueScope(member))];
+    if (query.venueId) conditions.push({ venueId: query.venueId });
     if (query.q) conditions.push({ title: { [Op.like]: likePattern(query.q) } });
     if (query.state) conditions.push({ state: query.state });
     if (query.exhibitId) conditions.push({ exhibitId: query.exhibitId });
@@ -72,17 +74,19 @@ export class StoriesService {
       distinct: true,
       ...pageWindow(query),
     });
-    return { ...toPage(rows.map((story) => toStoryView(story, person)), count, query), can: storiesCan(person) };
+    const creator = query.venueId ? personAt(member, query.venueId) : { id: member.id, roles: rolesAnywhere(member) };
+    return { ...toPage(rows.map((story) => toStoryView(story, personAt(member, story.venueId))), count, query), can: storiesCan(creator) };
   }
 
   /** One row of the Stories table, as review moves answer with it. */
-  async view(id: number, person: Person): Promise<StoryView> {
-    return toStoryView(await this.find(id), person);
+  async view(id: number, member: Member): Promise<StoryView> {
+    const story = await this.find(id, member);
+    return toStoryView(story, personAt(member, story.venueId));
   }
 
-  async get(id: number, person: Person): Promise<StoryDetailView> {
-    const story = await this.find(id);
-    return { ...toStoryView(story, person), panels: await this.panels.listForStory(story) };
+  async get(id: number, member: Member): Promise<StoryDetailView> {
+    const story = await this.find(id, member);
+    return { ...toStoryView(story, personAt(member, story.venueId)), panels: await this.panels.listForStory(story) };
   }
 
   /** A story belongs to its exhibit's venue, or to the venue named, and is written in its language unless told otherwise. */
@@ -99,7 +103,7 @@ export class StoriesService {
       createdById: author.id,
       state: 'draft',
     });
-    return toStoryView(await this.find(story.id), author);
+    return this.view(story.id, author);
   }
 
   /**
@@ -108,7 +112,7 @@ export class StoriesService {
    */
   async updateStory(id: number, dto: UpdateStoryDto, person: Member): Promise<StoryView> {
     await this.sequelize.transaction(async (transaction) => {
-      const story = await this.lock(id, transaction);
+      const story = await this.lock(id, person, transaction);
       refuseUnlessEditable(story);
       if (dto.exhibitId && (await this.findExhibit(dto.exhibitId, person, transaction)).gallery!.venueId !== story.venueId) {
         throw invalidField(['exhibitId'], 'The exhibit is at another venue; a story stays at its venue.');
@@ -118,27 +122,26 @@ export class StoriesService {
       }
       await story.update(dto, { transaction });
     });
-    return toStoryView(await this.find(id), person);
+    return this.view(id, person);
   }
 
   /** Once a release has carried the story, kiosks may be playing it: it can be retired, not deleted. */
-  async deleteStory(id: number): Promise<void> {
+  async deleteStory(id: number, member: Member): Promise<void> {
     await this.sequelize.transaction(async (transaction) => {
-      const story = await this.lock(id, transaction);
+      const story = await this.lock(id, member, transaction);
       if (story.releasedAt) throw new ConflictException('This story has been released, so it cannot be deleted; retire it instead.');
       await story.destroy({ transaction });
     });
   }
 
-  private async find(id: number): Promise<Story> {
-    const story = await this.stories.findByPk(id, storyColumns);
-    if (!story) throw new NotFoundException('There is no such story.');
-    return story;
+  private async find(id: number, member: Member): Promise<Story> {
+    return withinReach(member, await this.stories.findByPk(id, storyColumns), NO_SUCH_STORY);
   }
 
-  private async lock(id: number, transaction: Transaction): Promise<Story> {
-    const story = await this.stories.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!story) throw new NotFoundException('There is no such story.');
+  /** The story locked for a writer: one the member writes at its venue. */
+  private async lock(id: number, member: Member, transaction: Transaction): Promise<Story> {
+    const story = withinReach(member, await this.stories.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE }), NO_SUCH_STORY);
+    actingAt(member, story.venueId, STORY_WRITERS);
     return story;
   }
 

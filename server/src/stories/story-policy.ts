@@ -5,6 +5,9 @@ import {
 } from '@mantlepiece/shared';
 import { holdsAny, type Person } from '../auth/policy.js';
 
+/** What a story id of no reachable story answers, one missing or of another venue alike. */
+export const NO_SUCH_STORY = 'There is no such story.';
+
 /** Who writes stories: starts them, changes their details and panels, deletes one never released. */
 export const STORY_WRITERS: readonly Role[] = ['curator'];
 

@@ -1,33 +1,57 @@
 import { ForbiddenException, NotFoundException } from '@nestjs/common';
-import type { User } from '../users/models/user.model.js';
+import type { Role } from '@mantlepiece/shared';
+import { holdsAny, localesAt, rolesAt, venueScope, type Member, type VenueScope } from '../auth/policy.js';
 import { canonicalLocale } from '../common/locale-tag.js';
 
-/** Admins and curators read every locale; they look after the stories the translations belong to. */
-const readsEveryLocale = (user: User) => user.roles.includes('admin') || user.roles.includes('curator');
+/** Admins and curators read every locale at their venues; they look after the stories the translations belong to. */
+const READS_EVERY_LOCALE: readonly Role[] = ['admin', 'curator'];
 
-const translatorLocales = (user: User) =>
-  user.roles.includes('translator') ? user.locales.map((locale) => canonicalLocale(locale) ?? locale) : [];
+const canonical = (locales: readonly string[]) => [...new Set(locales.map((locale) => canonicalLocale(locale) ?? locale))];
 
-/** The locales a person may read, or null for all of them. */
-export function readableLocales(user: User): string[] | null {
-  return readsEveryLocale(user) ? null : translatorLocales(user);
+/** The locales the member translates into at one venue: those held everywhere and those of their membership there. */
+const translatorLocalesAt = (member: Member, venueId: number) => (rolesAt(member, venueId).includes('translator') ? canonical(localesAt(member, venueId)) : []);
+
+/** The locales a person may read at one venue, or null for all of them. */
+export function readableLocales(member: Member, venueId: number): string[] | null {
+  return holdsAny({ roles: rolesAt(member, venueId) }, READS_EVERY_LOCALE) ? null : translatorLocalesAt(member, venueId);
 }
 
-const outsideLocales = (user: User, locale: string) =>
-  new ForbiddenException(
-    translatorLocales(user).length > 0
-      ? `You translate into ${translatorLocales(user).join(', ')}, not ${locale}.`
-      : 'You have no translator locales; an admin gives them in People.',
-  );
+const outsideLocales = (own: readonly string[], locale: string) =>
+  new ForbiddenException(own.length > 0 ? `You translate into ${own.join(', ')}, not ${locale}.` : 'You have no translator locales; an admin gives them in People.');
 
-export function assertMayRead(user: User, locale: string): void {
-  const readable = readableLocales(user);
-  if (readable !== null && !readable.includes(locale)) throw outsideLocales(user, locale);
+export function assertMayRead(member: Member, venueId: number, locale: string): void {
+  const readable = readableLocales(member, venueId);
+  if (readable !== null && !readable.includes(locale)) throw outsideLocales(readable, locale);
 }
 
-/** Only translators write translations, and only into their own locales. */
-export function assertMayWrite(user: User, locale: string): void {
-  if (!translatorLocales(user).includes(locale)) throw outsideLocales(user, locale);
+/** Only translators write translations, and only into their own locales at the story's venue. */
+export function assertMayWrite(member: Member, venueId: number, locale: string): void {
+  const own = translatorLocalesAt(member, venueId);
+  if (!own.includes(locale)) throw outsideLocales(own, locale);
+}
+
+/**
+ * Where a member reads translations, for lists across venues: every locale at the venues of
+ * `everyLocale`, and the locales of each grant (`venueId` null: at every venue).
+ */
+export interface TranslationReach {
+  everyLocale: VenueScope;
+  translates: { venueId: number | null; locales: string[] }[];
+}
+
+export function translationReach(member: Member): TranslationReach {
+  const translates = [
+    ...(member.roles.includes('translator') ? [{ venueId: null, locales: canonical(member.locales) }] : []),
+    ...(member.memberships ?? []).filter((grant) => grant.roles.includes('translator')).map((grant) => ({ venueId: grant.venueId, locales: canonical(grant.locales) })),
+  ].filter((grant) => grant.locales.length > 0);
+  return { everyLocale: venueScope(member, READS_EVERY_LOCALE), translates };
+}
+
+/** Refuses a locale the member reads at no venue, as a story's routes do. */
+export function assertReadsSomewhere(reach: TranslationReach, locale: string): void {
+  if (reach.everyLocale.every || reach.everyLocale.venueIds.length > 0) return;
+  const own = canonical(reach.translates.flatMap((grant) => grant.locales));
+  if (!own.includes(locale)) throw outsideLocales(own, locale);
 }
 
 export function assertTargetLocale(targetLocales: readonly string[], locale: string): void {

@@ -2,11 +2,14 @@ import { Injectable, type OnModuleInit } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
+import { localesAt } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { ConfigService } from '../config/config.service.js';
 import { BackgroundJobs } from '../jobs/background-jobs.service.js';
 import { MailService } from '../mail/mail.service.js';
-import { User } from '../users/models/user.model.js';
+import type { User } from '../users/models/user.model.js';
+import { UsersService } from '../users/users.service.js';
+import { Venue } from '../venues/models/venue.model.js';
 import { canonicalLocale } from '../common/locale-tag.js';
 import { Translation } from './models/translation.model.js';
 import { TranslatorAssignment } from './models/translator-assignment.model.js';
@@ -43,6 +46,8 @@ const STORIES_WITH_MOVED_SOURCE = `
   JOIN panels p ON p.id = u.panel_id
   WHERE t.text <> '' AND a.updated_at >= t.updated_at AND a.updated_at <= :cutoff`;
 
+const canonicalLocales = (locales: readonly string[]) => [...new Set(locales.map((locale) => canonicalLocale(locale) ?? locale))];
+
 interface DigestLine {
   title: string;
   locale: string;
@@ -60,7 +65,8 @@ interface DigestLine {
 @Injectable()
 export class TranslationNoticesJob implements OnModuleInit {
   constructor(
-    @InjectModel(User) private readonly users: typeof User,
+    @InjectModel(Venue) private readonly venues: typeof Venue,
+    private readonly people: UsersService,
     @InjectModel(Translation) private readonly translations: typeof Translation,
     @InjectModel(TranslatorAssignment) private readonly assignments: typeof TranslatorAssignment,
     private readonly sources: SourceUnitsService,
@@ -88,14 +94,14 @@ export class TranslationNoticesJob implements OnModuleInit {
     return { assignments: await this.announceAssignments(), digests: await this.sendStaleDigests() };
   }
 
-  /** Mails each translator the locales they hold and have not been told about; returns the messages queued. */
+  /** Mails each translator the locales they hold (at any venue) and have not been told about; returns the messages queued. */
   async announceAssignments(): Promise<number> {
-    const translators = await this.activeTranslators();
-    await this.assignments.destroy({ where: { userId: { [Op.notIn]: [0, ...translators.map((user) => user.id)] } } });
+    const translators = await this.translatorsWithLocales();
+    await this.assignments.destroy({ where: { userId: { [Op.notIn]: [0, ...translators.keys()] } } });
     let queued = 0;
-    for (const translator of translators) {
+    for (const { translator, locales } of translators.values()) {
       try {
-        if (await this.announceTo(translator)) queued += 1;
+        if (await this.announceTo(translator, locales)) queued += 1;
       } catch (error) {
         // Another server instance announced the same locale first.
         if (!(error instanceof UniqueConstraintError)) throw error;
@@ -104,16 +110,20 @@ export class TranslationNoticesJob implements OnModuleInit {
     return queued;
   }
 
-  /** One digest per translator of the units that went stale in their locales since the last one; returns the messages queued. */
+  /**
+   * One digest per translator of the units that went stale since the last one, in the locales they
+   * translate into at each story's venue; returns the messages queued.
+   */
   async sendStaleDigests(): Promise<number> {
     const cutoff = new Date(this.clock.now().getTime() - STALE_DIGEST_QUIET_MS);
     const candidates = await this.sequelize.query<{ storyId: number }>(STORIES_WITH_MOVED_SOURCE, { replacements: { cutoff }, type: QueryTypes.SELECT });
     if (candidates.length === 0) return 0;
     const sources = await this.sources.sourcesOf(candidates.map((candidate) => candidate.storyId));
-    const translators = await this.activeTranslators();
     return this.sequelize.transaction(async (transaction) => {
-      const linesByLocale = new Map<string, DigestLine[]>();
+      const linesByVenue = new Map<number, Map<string, DigestLine[]>>();
       for (const source of sources) {
+        const linesByLocale = linesByVenue.get(source.story.venueId) ?? new Map<string, DigestLine[]>();
+        linesByVenue.set(source.story.venueId, linesByLocale);
         for (const locale of source.targetLocales) {
           const states = await this.translationsService.statesOf(source, locale, transaction);
           let units = 0;
@@ -124,26 +134,35 @@ export class TranslationNoticesJob implements OnModuleInit {
           if (units > 0) linesByLocale.set(locale, [...(linesByLocale.get(locale) ?? []), { title: source.story.title, locale, units }]);
         }
       }
-      let queued = 0;
-      for (const translator of translators) {
-        const stories = translator.locales.flatMap((locale) => linesByLocale.get(canonicalLocale(locale) ?? locale) ?? []);
-        if (stories.length === 0) continue;
-        await this.mail.enqueue(translator.email, translator.uiLanguage, { kind: 'stale-digest', name: translator.name, stories, link: this.mail.studioLink(WORKLIST_PATH) }, transaction);
-        queued += 1;
+      const digests = new Map<number, { translator: User; stories: DigestLine[] }>();
+      for (const [venueId, linesByLocale] of linesByVenue) {
+        for (const translator of await this.people.holdingAt(venueId, 'translator', transaction)) {
+          const stories = canonicalLocales(localesAt(translator, venueId)).flatMap((locale) => linesByLocale.get(locale) ?? []);
+          if (stories.length === 0) continue;
+          const digest = digests.get(translator.id) ?? { translator, stories: [] };
+          digests.set(translator.id, { translator, stories: [...digest.stories, ...stories] });
+        }
       }
-      return queued;
+      for (const { translator, stories } of digests.values()) {
+        await this.mail.enqueue(translator.email, translator.uiLanguage, { kind: 'stale-digest', name: translator.name, stories, link: this.mail.studioLink(WORKLIST_PATH) }, transaction);
+      }
+      return digests.size;
     });
   }
 
-  private activeTranslators(): Promise<User[]> {
-    return this.users.findAll({
-      where: { [Op.and]: [{ active: true }, Sequelize.where(Sequelize.fn('JSON_CONTAINS', Sequelize.col('roles'), JSON.stringify('translator')), 1)] },
-      order: [['id', 'ASC']],
-    });
+  /** Every active translator, by id, with the locales they translate into at any venue. */
+  private async translatorsWithLocales(): Promise<Map<number, { translator: User; locales: string[] }>> {
+    const translators = new Map<number, { translator: User; locales: string[] }>();
+    for (const venue of await this.venues.findAll({ attributes: ['id'], order: [['id', 'ASC']] })) {
+      for (const translator of await this.people.holdingAt(venue.id, 'translator')) {
+        const held = translators.get(translator.id)?.locales ?? [];
+        translators.set(translator.id, { translator, locales: canonicalLocales([...held, ...localesAt(translator, venue.id)]) });
+      }
+    }
+    return translators;
   }
 
-  private async announceTo(translator: User): Promise<boolean> {
-    const held = [...new Set(translator.locales.map((locale) => canonicalLocale(locale) ?? locale))];
+  private async announceTo(translator: User, held: readonly string[]): Promise<boolean> {
     return this.sequelize.transaction(async (transaction) => {
       const told = await this.assignments.findAll({ where: { userId: translator.id }, transaction, lock: transaction.LOCK.UPDATE });
       const withdrawn = told.filter((assignment) => !held.includes(assignment.locale)).map((assignment) => assignment.id);

@@ -8,6 +8,7 @@ import { PanelDocument } from '../panels/models/panel-document.model.js';
 import { Panel } from '../panels/models/panel.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
+import { UsersModule } from '../users/users.module.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { Translation } from './models/translation.model.js';
@@ -25,7 +26,7 @@ export const TRANSLATION_MODELS = [Translation, TranslatorAssignment, Story, Exh
 export const TRANSLATION_SERVICES = [SourceUnitsService, TranslationsService];
 
 @Module({
-  imports: [SequelizeModule.forFeature(TRANSLATION_MODELS), MailModule],
+  imports: [SequelizeModule.forFeature(TRANSLATION_MODELS), MailModule, UsersModule],
   controllers: [TranslationsController],
   providers: [...TRANSLATION_SERVICES, XliffExchangeService, TranslationNoticesJob],
   exports: [TranslationsService, TranslationNoticesJob],

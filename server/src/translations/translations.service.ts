@@ -7,15 +7,18 @@ import {
   type LocaleCompleteness, type Page, type PanelDocJSON, type SavedTranslationUnit, type TranslationConflictBody, type TranslationPreviewView,
   type TranslationUnitView, type TranslationWorklistItem, type UnitStatus,
 } from '@mantlepiece/shared';
+import type { Member } from '../auth/policy.js';
 import { likePattern } from '../common/list-query.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { VersionConflictException } from '../common/version-conflict.js';
+import { withinReach } from '../common/venue-boundary.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
+import { NO_SUCH_STORY } from '../stories/story-policy.js';
 import { User } from '../users/models/user.model.js';
 import type { ListUnitsQuery, ListWorklistQuery, SaveTranslationUnitDto } from './dto/translation.dto.js';
 import { Translation } from './models/translation.model.js';
 import { SourceUnitsService, type FrozenSource, type StorySource } from './source-units.service.js';
-import { assertMayRead, assertMayWrite, assertTargetLocale, readableLocales } from './translation-access.js';
+import { assertMayRead, assertMayWrite, assertReadsSomewhere, assertTargetLocale, readableLocales, translationReach, type TranslationReach } from './translation-access.js';
 import { completenessOf, currentTranslationsOf, unitStates, type UnitState } from './translation-state.js';
 import { toTranslationUnitView } from './translations.presenter.js';
 
@@ -39,17 +42,34 @@ export interface TargetDocuments {
 
 /**
  * (story, target locale) pairs in SQL, so the worklist is filtered, counted and paged by the
- * database: a story takes its exhibit's venue, or the first venue when it is in no exhibit, and
- * one row per target locale of that venue other than the story's own language. Retired stories
- * are off the worklist.
+ * database: one row per target locale of the story's venue other than the story's own language.
+ * Retired stories are off the worklist.
  */
 const WORKLIST_FROM = `
   FROM stories s
-  LEFT JOIN exhibits e ON e.id = s.exhibit_id
-  LEFT JOIN galleries g ON g.id = e.gallery_id
-  JOIN venues v ON v.id = COALESCE(g.venue_id, (SELECT MIN(id) FROM venues))
+  JOIN venues v ON v.id = s.venue_id
   JOIN JSON_TABLE(v.target_locales, '$[*]' COLUMNS (locale VARCHAR(35) PATH '$')) AS jt
   WHERE s.state <> 'retired' AND jt.locale <> s.source_locale`;
+
+/** The pairs a member may read, as one SQL condition and its replacements; null when there are none. */
+function reachCondition({ everyLocale, translates }: TranslationReach): { sql: string; replacements: Record<string, unknown> } | null {
+  if (everyLocale.every) return { sql: 'TRUE', replacements: {} };
+  const clauses: string[] = [];
+  const replacements: Record<string, unknown> = {};
+  if (everyLocale.venueIds.length > 0) {
+    clauses.push('s.venue_id IN (:readVenues)');
+    replacements.readVenues = everyLocale.venueIds;
+  }
+  translates.forEach(({ venueId, locales }, index) => {
+    replacements[`locales${index}`] = locales;
+    if (venueId === null) clauses.push(`jt.locale IN (:locales${index})`);
+    else {
+      clauses.push(`(s.venue_id = :venue${index} AND jt.locale IN (:locales${index}))`);
+      replacements[`venue${index}`] = venueId;
+    }
+  });
+  return clauses.length === 0 ? null : { sql: `(${clauses.join(' OR ')})`, replacements };
+}
 
 @Injectable()
 export class TranslationsService {
@@ -60,17 +80,19 @@ export class TranslationsService {
     private readonly sequelize: Sequelize,
   ) {}
 
-  /** The translator's worklist: every story in each locale they translate into, with its progress. */
-  async worklist(user: User, query: ListWorklistQuery): Promise<Page<TranslationWorklistItem>> {
-    if (query.locale) assertMayRead(user, query.locale);
-    const readable = readableLocales(user);
-    const locales = query.locale ? [query.locale] : readable;
-    if (locales?.length === 0) return toPage([], 0, query);
+  /** The translator's worklist: every story in each locale they translate into at its venue, with its progress. */
+  async worklist(member: Member, query: ListWorklistQuery): Promise<Page<TranslationWorklistItem>> {
+    const reach = translationReach(member);
+    if (query.locale) assertReadsSomewhere(reach, query.locale);
+    const readable = reachCondition(reach);
+    if (!readable) return toPage([], 0, query);
     const conditions = [
-      ...(locales ? ['jt.locale IN (:locales)'] : []),
+      readable.sql,
+      ...(query.locale ? ['jt.locale = :locale'] : []),
+      ...(query.venueId ? ['s.venue_id = :venueId'] : []),
       ...(query.q ? ['s.title LIKE :q'] : []),
     ].map((condition) => ` AND ${condition}`).join('');
-    const replacements = { locales, q: query.q ? likePattern(query.q) : undefined, ...pageWindow(query) };
+    const replacements = { ...readable.replacements, locale: query.locale, venueId: query.venueId, q: query.q ? likePattern(query.q) : undefined, ...pageWindow(query) };
     const [{ total }] = await this.sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total ${WORKLIST_FROM}${conditions}`, { replacements, type: QueryTypes.SELECT }) as [{ total: number }];
     const pairs = await this.sequelize.query<{ storyId: number; storyTitle: string; locale: string }>(
       `SELECT s.id AS storyId, s.title AS storyTitle, jt.locale AS locale ${WORKLIST_FROM}${conditions} ORDER BY s.title, s.id, jt.locale LIMIT :limit OFFSET :offset`,
@@ -86,16 +108,16 @@ export class TranslationsService {
   }
 
   /** Progress per target locale of the story's venue; a translator sees their own locales. */
-  async storyTranslations(user: User, storyId: number): Promise<LocaleCompleteness[]> {
-    const source = await this.sources.sourceOf(storyId);
-    const readable = readableLocales(user);
+  async storyTranslations(member: Member, storyId: number): Promise<LocaleCompleteness[]> {
+    const source = await this.reachableSource(member, storyId);
+    const readable = readableLocales(member, source.story.venueId);
     const locales = source.targetLocales.filter((locale) => readable === null || readable.includes(locale));
     return Promise.all(locales.map(async (locale) => completenessOf(locale, await this.statesOf(source, locale))));
   }
 
-  async listUnits(user: User, storyId: number, locale: string, query: ListUnitsQuery): Promise<Page<TranslationUnitView>> {
-    assertMayRead(user, locale);
-    const source = await this.sources.sourceOf(storyId);
+  async listUnits(member: Member, storyId: number, locale: string, query: ListUnitsQuery): Promise<Page<TranslationUnitView>> {
+    const source = await this.reachableSource(member, storyId);
+    assertMayRead(member, source.story.venueId, locale);
     assertTargetLocale(source.targetLocales, locale);
     const states = (await this.statesOf(source, locale)).filter((state) => !query.status || state.status === query.status);
     // Units are cut from the documents, not stored, so the page is cut from the story's list here.
@@ -109,10 +131,10 @@ export class TranslationsService {
    * placeholder is refused with each problem named; one over its length budget is saved with a
    * warning, as in an XLIFF import.
    */
-  async saveUnit(translator: User, storyId: number, locale: string, unitId: string, dto: SaveTranslationUnitDto): Promise<SavedTranslationUnit> {
-    assertMayWrite(translator, locale);
+  async saveUnit(translator: Member, storyId: number, locale: string, unitId: string, dto: SaveTranslationUnitDto): Promise<SavedTranslationUnit> {
     return this.sequelize.transaction(async (transaction) => {
-      const source = await this.sources.sourceOf(storyId, transaction);
+      const source = await this.reachableSource(translator, storyId, transaction);
+      assertMayWrite(translator, source.story.venueId, locale);
       assertTargetLocale(source.targetLocales, locale);
       const state = (await this.statesOf(source, locale, transaction)).find((each) => each.unit.id === unitId);
       if (!state) throw new NotFoundException(`Unit ${unitId} is not in this story; the source may have changed. Reload the units.`);
@@ -135,11 +157,18 @@ export class TranslationsService {
     });
   }
 
-  async preview(user: User, storyId: number, locale: string): Promise<TranslationPreviewView> {
-    assertMayRead(user, locale);
-    const source = await this.sources.sourceOf(storyId);
+  async preview(member: Member, storyId: number, locale: string): Promise<TranslationPreviewView> {
+    const source = await this.reachableSource(member, storyId);
+    assertMayRead(member, source.story.venueId, locale);
     assertTargetLocale(source.targetLocales, locale);
     return { storyId, locale, ...(await this.draw(source, locale)) };
+  }
+
+  /** The story's current source, if the member may reach its venue; another venue's answers as a missing story. */
+  async reachableSource(member: Member, storyId: number, transaction?: Transaction): Promise<StorySource> {
+    const source = await this.sources.sourceOf(storyId, transaction);
+    withinReach(member, source.story, NO_SUCH_STORY);
+    return source;
   }
 
   /**

@@ -1,8 +1,7 @@
 import { BadRequestException, HttpStatus, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import { Sequelize } from 'sequelize-typescript';
 import { exportXliff, parseXliff, planXliffImport, type XliffImportResult, type XliffProblem } from '@mantlepiece/shared';
-import type { User } from '../users/models/user.model.js';
-import { SourceUnitsService } from './source-units.service.js';
+import type { Member } from '../auth/policy.js';
 import { assertMayRead, assertMayWrite, assertTargetLocale } from './translation-access.js';
 import { TranslationsService } from './translations.service.js';
 
@@ -18,14 +17,13 @@ const problemPath = (problem: XliffProblem) => (problem.unitId === undefined ? [
 @Injectable()
 export class XliffExchangeService {
   constructor(
-    private readonly sources: SourceUnitsService,
     private readonly translations: TranslationsService,
     private readonly sequelize: Sequelize,
   ) {}
 
-  async exportStory(user: User, storyId: number, locale: string): Promise<{ filename: string; xml: string }> {
-    assertMayRead(user, locale);
-    const source = await this.sources.sourceOf(storyId);
+  async exportStory(member: Member, storyId: number, locale: string): Promise<{ filename: string; xml: string }> {
+    const source = await this.translations.reachableSource(member, storyId);
+    assertMayRead(member, source.story.venueId, locale);
     assertTargetLocale(source.targetLocales, locale);
     const states = await this.translations.statesOf(source, locale);
     const xml = exportXliff({
@@ -45,11 +43,11 @@ export class XliffExchangeService {
    * another story is refused with 422 naming it. A target over its length budget is taken, with a
    * warning for that unit in the answer, as a save in the workspace is.
    */
-  async importStory(translator: User, storyId: number, locale: string, xml: string): Promise<XliffImportResult> {
-    assertMayWrite(translator, locale);
+  async importStory(translator: Member, storyId: number, locale: string, xml: string): Promise<XliffImportResult> {
     const parsed = parseXliff(xml);
     return this.sequelize.transaction(async (transaction) => {
-      const source = await this.sources.sourceOf(storyId, transaction);
+      const source = await this.translations.reachableSource(translator, storyId, transaction);
+      assertMayWrite(translator, source.story.venueId, locale);
       assertTargetLocale(source.targetLocales, locale);
       const states = await this.translations.statesOf(source, locale, transaction);
       const plan = planXliffImport({

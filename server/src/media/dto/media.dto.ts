@@ -36,6 +36,11 @@ export class ListMediaQuery extends PageQuery {
   @QueryInt(0, 3650)
   expiringWithinDays?: number;
 
+  @ApiPropertyOptional({ description: "Only this venue's images (the studio's current venue); by default every venue of the caller's" })
+  @IsOptional()
+  @QueryRowId()
+  venueId?: number;
+
   @SortField(MEDIA_SORT_KEYS, '-createdAt')
   sort: string = '-createdAt';
 }

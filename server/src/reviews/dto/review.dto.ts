@@ -3,6 +3,7 @@ import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
 import { VERDICTS, type Verdict } from '@mantlepiece/shared';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
+import { QueryRowId } from '../../common/validation.js';
 
 export const QUEUE_SORT_KEYS = ['submittedAt', 'storyTitle', 'blockers'] as const;
 
@@ -22,6 +23,11 @@ export class RecordVerdictDto {
 export class ReviewQueueQuery extends PageQuery {
   @SearchField()
   q?: string;
+
+  @ApiPropertyOptional({ description: "Only this venue's submissions (the studio's current venue); by default every venue where the caller reviews" })
+  @IsOptional()
+  @QueryRowId()
+  venueId?: number;
 
   @SortField(QUEUE_SORT_KEYS, 'submittedAt')
   sort: string = 'submittedAt';

@@ -69,6 +69,11 @@ export class ListStoriesQuery extends PageQuery {
   @IsIn(AUDIENCES)
   audience?: Audience;
 
+  @ApiPropertyOptional({ description: "Only this venue's stories (the studio's current venue); by default every venue of the caller's" })
+  @IsOptional()
+  @QueryRowId()
+  venueId?: number;
+
   @SortField(STORY_SORT_KEYS, '-updatedAt')
   sort: string = '-updatedAt';
 }

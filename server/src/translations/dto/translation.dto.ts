@@ -3,7 +3,7 @@ import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
 import { UNIT_STATUSES, type UnitStatus } from '@mantlepiece/shared';
 import { SearchField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
-import { IsIntBetween, UNSIGNED_INT_MAX } from '../../common/validation.js';
+import { IsIntBetween, QueryRowId, UNSIGNED_INT_MAX } from '../../common/validation.js';
 import { LocaleTagField } from '../../common/locale-tag.js';
 
 export class ListWorklistQuery extends PageQuery {
@@ -14,6 +14,11 @@ export class ListWorklistQuery extends PageQuery {
   @IsOptional()
   @LocaleTagField()
   locale?: string;
+
+  @ApiPropertyOptional({ description: "Only this venue's stories (the studio's current venue); by default every venue of the caller's" })
+  @IsOptional()
+  @QueryRowId()
+  venueId?: number;
 }
 
 export class ListUnitsQuery extends PageQuery {
