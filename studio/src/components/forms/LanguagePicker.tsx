@@ -52,7 +52,7 @@ export function LanguagePicker(props: LanguagePickerProps) {
   const optionOf = (tag: string): LanguageOption => options.find((option) => option.tag === tag) ?? languageOption(tag, uiLanguage) ?? { tag, name: tag, endonym: tag };
   const labelOf = (option: LanguageOption) => (option.name === option.tag ? option.tag : `${option.name} (${option.tag})`);
   return props.multiple
-    ? <MultipleLanguagePicker {...props} options={options} optionOf={optionOf} labelOf={labelOf} uiLanguage={uiLanguage} noMatch={(query) => t('languagePicker.noMatch', { query })} removeLabel={(language) => t('languagePicker.remove', { language })} placeholder={props.placeholder ?? t('languagePicker.placeholder')} />
+    ? <MultipleLanguagePicker {...props} options={options} optionOf={optionOf} labelOf={labelOf} uiLanguage={uiLanguage} noMatch={(query) => t('languagePicker.noMatch', { query })} removeLabel={(language) => t('languagePicker.remove', { language })} chosenLabel={t('languagePicker.chosen')} placeholder={props.placeholder ?? t('languagePicker.placeholder')} />
     : <SingleLanguagePicker {...props} options={options} optionOf={optionOf} labelOf={labelOf} uiLanguage={uiLanguage} noMatch={(query) => t('languagePicker.noMatch', { query })} placeholder={props.placeholder ?? t('languagePicker.placeholder')} />;
 }
 
@@ -70,7 +70,7 @@ function OptionContent({ option }: { option: LanguageOption }): ReactNode {
   return (
     <>
       {option.name}
-      {option.name === option.tag ? null : <span className={styles.tag}>{option.tag}</span>}
+      {option.name === option.tag ? null : <>{' '}<span className={styles.tag}>{option.tag}</span></>}
     </>
   );
 }
@@ -95,8 +95,10 @@ function SingleLanguagePicker({ value, onChange, disabled, options, optionOf, la
       }}
       // Typing opens the list, as a search box does; Fluent's combobox opens only on click or arrow keys.
       onChange={(event) => { setQuery(event.target.value); setOpen(true); }}
+      // Fluent also reports a cleared selection here while the person types; only a chosen language ends the search.
       onOptionSelect={(_event, data) => {
-        if (data.optionValue && data.optionValue !== NO_MATCH) onChange(data.optionValue);
+        if (!data.optionValue || data.optionValue === NO_MATCH) return;
+        onChange(data.optionValue);
         setQuery(null);
       }}
     >
@@ -107,7 +109,7 @@ function SingleLanguagePicker({ value, onChange, disabled, options, optionOf, la
   );
 }
 
-function MultipleLanguagePicker({ value, onChange, disabled, options, optionOf, labelOf, uiLanguage, noMatch, placeholder, removeLabel, ...aria }: MultiplePickerProps & Internals & { removeLabel: (language: string) => string }) {
+function MultipleLanguagePicker({ value, onChange, disabled, options, optionOf, labelOf, uiLanguage, noMatch, placeholder, removeLabel, chosenLabel, ...aria }: MultiplePickerProps & Internals & { removeLabel: (language: string) => string; chosenLabel: string }) {
   const [query, setQuery] = useState('');
   const found = searchLanguages(options, query, uiLanguage).filter((option) => !value.includes(option.tag));
   return (
@@ -121,7 +123,7 @@ function MultipleLanguagePicker({ value, onChange, disabled, options, optionOf, 
       }}
     >
       <TagPickerControl>
-        <TagPickerGroup aria-label={aria['aria-label']}>
+        <TagPickerGroup aria-label={chosenLabel}>
           {value.map((tag) => {
             const option = optionOf(tag);
             return (
