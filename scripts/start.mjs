@@ -37,8 +37,11 @@ try {
 `);
   if (nodeEnv !== 'production') {
     console.log(`  Demo accounts (password: ${demoPassword}):
-    admin@demo.test  curator@demo.test  educator@demo.test
-    translator@demo.test (fr, es)  technician@demo.test
+    admin@demo.test        organisation admin, every venue
+    Basalt Point Earth Science Centre:
+      curator@demo.test  educator@demo.test  translator@demo.test (fr, es)  technician@demo.test
+    Cinder Hollow Volcano House:
+      curator2@demo.test  educator@demo.test (a member of both venues)
 
   Press Ctrl-C to stop.`);
   }

@@ -1,8 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { DEMO_ACCOUNTS, DEMO_VENUE } from '../src/seed/demo-scenario.js';
+import type { Page, UserView, VenueView } from '@mantlepiece/shared';
+import { DEMO_ACCOUNTS, DEMO_VENUE, DEMO_VENUES } from '../src/seed/demo-scenario.js';
 import { demoPassword, runningServerUrl } from './running-server.js';
 
 const server = runningServerUrl();
+
+async function signIn(email: string): Promise<{ user: UserView; accessToken: string }> {
+  const res = await fetch(`${server}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: demoPassword }) });
+  return (await res.json()) as { user: UserView; accessToken: string };
+}
 
 describe('the seeded demo scenario on the running server', () => {
   it.each(DEMO_ACCOUNTS)('signs in $email with DEMO_PASSWORD as $roles', async (account) => {
@@ -14,6 +20,14 @@ describe('the seeded demo scenario on the running server', () => {
     expect(res.status).toBe(200);
     const { user } = (await res.json()) as { user: unknown };
     expect(user).toMatchObject({ email: account.email, name: account.name, roles: account.roles, locales: account.locales });
+  });
+
+  it.each(DEMO_ACCOUNTS)('makes $email a member of its venues only, with its roles and locales there', async (account) => {
+    const admin = await signIn('admin@demo.test');
+    const venues = (await (await fetch(`${server}/api/venues?pageSize=100`, { headers: { Authorization: `Bearer ${admin.accessToken}` } })).json()) as Page<VenueView>;
+    const idOf = (key: keyof typeof DEMO_VENUES) => venues.items.find((venue) => venue.slug === DEMO_VENUES[key].slug)!.id;
+    const { user } = await signIn(account.email);
+    expect(user.memberships).toEqual(account.memberships.map(({ venue, ...grant }) => ({ venueId: idOf(venue), ...grant })).sort((a, b) => a.venueId - b.venueId));
   });
 
   it('shows the demo venue to an unpaired kiosk opened at its install URL', async () => {

@@ -10,6 +10,7 @@ import { ReleasesService } from '../releases/releases.service.js';
 import { ReleasesWorker } from '../releases/releases.worker.js';
 import { Revision } from '../revisions/models/revision.model.js';
 import { User } from '../users/models/user.model.js';
+import { VenueMembership } from '../users/models/venue-membership.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
@@ -79,7 +80,7 @@ export class DemoFleet {
 
   async seed(technicianEmail: string): Promise<void> {
     const gallery = await this.galleries.findOne({ where: { name: DEMO_GALLERY.name }, include: [Venue] });
-    const technician = await this.users.findOne({ where: { email: technicianEmail } });
+    const technician = await this.users.findOne({ where: { email: technicianEmail }, include: [VenueMembership] });
     if (!gallery || !technician) throw new Error('the demo gallery and technician must exist before the demo fleet');
     const releaseId = await this.publishFirstRelease(gallery.id, technician);
     const station = await this.stations.create({ ...DEMO_KIOSK_STATION, galleryId: gallery.id });

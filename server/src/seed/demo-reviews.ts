@@ -4,10 +4,10 @@ import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
 import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
-import { DEMO_EXHIBIT } from './demo-stories.js';
+import { VenueMembership } from '../users/models/venue-membership.model.js';
 
 /**
- * The demo exhibit's approval trail, made through the review service as the demo curator and
+ * A demo exhibit's approval trail, made through the review service as its venue's demo curator and
  * educator would make it in the studio, so the demo gallery has approved revisions to release.
  */
 @Injectable()
@@ -19,10 +19,10 @@ export class DemoReviews {
     private readonly reviews: ReviewsService,
   ) {}
 
-  async seed(curatorEmail: string, educatorEmail: string): Promise<void> {
-    const exhibit = await this.exhibits.findOne({ where: { name: DEMO_EXHIBIT.name } });
-    const curator = await this.users.findOne({ where: { email: curatorEmail } });
-    const educator = await this.users.findOne({ where: { email: educatorEmail } });
+  async seed(exhibitName: string, curatorEmail: string, educatorEmail: string): Promise<void> {
+    const exhibit = await this.exhibits.findOne({ where: { name: exhibitName } });
+    const curator = await this.users.findOne({ where: { email: curatorEmail }, include: [VenueMembership] });
+    const educator = await this.users.findOne({ where: { email: educatorEmail }, include: [VenueMembership] });
     if (!exhibit || !curator || !educator) throw new Error('the demo exhibit, curator and educator must exist before the demo reviews');
     const stories = await this.stories.findAll({ where: { exhibitId: exhibit.id }, order: [['id', 'ASC']] });
     for (const story of stories) {

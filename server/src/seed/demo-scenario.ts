@@ -29,10 +29,40 @@ export const DEMO_KIOSK_STATION = {
   mountingHeightMm: 1100,
 };
 
-export const DEMO_ACCOUNTS: { email: string; name: string; roles: Role[]; locales: string[] }[] = [
-  { email: 'admin@demo.test', name: 'Noor Haddad', roles: ['admin'], locales: [] },
-  { email: 'curator@demo.test', name: 'Tomás Reyes', roles: ['curator'], locales: [] },
-  { email: 'educator@demo.test', name: 'Ingrid Solberg', roles: ['educator'], locales: [] },
-  { email: 'translator@demo.test', name: 'Camille Mercier', roles: ['translator'], locales: ['fr', 'es'] },
-  { email: 'technician@demo.test', name: 'Kwame Asante', roles: ['technician'], locales: [] },
+/** Our second invented venue, a small volcano museum: its own staff, gallery, exhibit and story, so the boundary between venues shows. */
+export const DEMO_SECOND_VENUE = {
+  name: 'Cinder Hollow Volcano House',
+  slug: 'cinder-hollow',
+  sourceLocale: 'en',
+  targetLocales: ['fr'],
+  /** A clock on the other side of the world from the first venue's, with daylight saving of the southern summer. */
+  timeZone: 'Pacific/Auckland',
+};
+
+export const DEMO_SECOND_GALLERY = { name: 'Magma Rooms' };
+
+/** The demo venue an account works at: the first (Basalt Point) or the second (Cinder Hollow). */
+export type DemoVenueKey = 'first' | 'second';
+export const DEMO_VENUES: Record<DemoVenueKey, typeof DEMO_VENUE> = { first: DEMO_VENUE, second: DEMO_SECOND_VENUE };
+
+export interface DemoAccount {
+  email: string;
+  name: string;
+  /** Held at every venue: only the organisation admin's. */
+  roles: Role[];
+  locales: string[];
+  memberships: { venue: DemoVenueKey; roles: Role[]; locales: string[] }[];
+}
+
+/** The organisation admin reaches every venue; everyone else is a member of the venues they work at. */
+export const DEMO_ACCOUNTS: DemoAccount[] = [
+  { email: 'admin@demo.test', name: 'Noor Haddad', roles: ['admin'], locales: [], memberships: [] },
+  { email: 'curator@demo.test', name: 'Tomás Reyes', roles: [], locales: [], memberships: [{ venue: 'first', roles: ['curator'], locales: [] }] },
+  {
+    email: 'educator@demo.test', name: 'Ingrid Solberg', roles: [], locales: [],
+    memberships: [{ venue: 'first', roles: ['educator'], locales: [] }, { venue: 'second', roles: ['educator'], locales: [] }],
+  },
+  { email: 'translator@demo.test', name: 'Camille Mercier', roles: [], locales: [], memberships: [{ venue: 'first', roles: ['translator'], locales: ['fr', 'es'] }] },
+  { email: 'technician@demo.test', name: 'Kwame Asante', roles: [], locales: [], memberships: [{ venue: 'first', roles: ['technician'], locales: [] }] },
+  { email: 'curator2@demo.test', name: 'Aiko Tanabe', roles: [], locales: [], memberships: [{ venue: 'second', roles: ['curator'], locales: [] }] },
 ];

@@ -16,9 +16,9 @@ export const DEMO_EXHIBIT = { name: 'What Moves the Plates?', plannedStart: '202
 const CREDIT = 'Illustration: Basalt Point Earth Science Centre';
 const LICENCE_EXPIRES_ON = '2029-12-31';
 
-const text = (value: string): PanelNodeJSON => ({ type: 'text', text: value });
-const heading = (value: string): PanelNodeJSON => ({ type: 'heading', attrs: { level: 2 }, content: [text(value)] });
-const paragraph = (...content: (string | PanelNodeJSON)[]): PanelNodeJSON => ({
+export const text = (value: string): PanelNodeJSON => ({ type: 'text', text: value });
+export const heading = (value: string): PanelNodeJSON => ({ type: 'heading', attrs: { level: 2 }, content: [text(value)] });
+export const paragraph = (...content: (string | PanelNodeJSON)[]): PanelNodeJSON => ({
   type: 'paragraph',
   content: content.map((part) => (typeof part === 'string' ? text(part) : part)),
 });
@@ -32,7 +32,7 @@ const widget = (widgetType: string, widgetId: string, params: Record<string, unk
 });
 /** Stands for the image until the seed knows its library id. */
 const IMAGE = (name: DemoImageName): PanelNodeJSON => ({ type: 'panelImage', attrs: { mediaId: `demo-${name}` } });
-const doc = (...content: PanelNodeJSON[]): PanelDocJSON => ({ type: 'doc', content });
+export const doc = (...content: PanelNodeJSON[]): PanelDocJSON => ({ type: 'doc', content });
 
 interface DemoImage {
   name: DemoImageName;

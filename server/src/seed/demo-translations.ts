@@ -4,6 +4,7 @@ import { SourceUnitsService } from '../translations/source-units.service.js';
 import { TranslationsService } from '../translations/translations.service.js';
 import { Story } from '../stories/models/story.model.js';
 import { User } from '../users/models/user.model.js';
+import { VenueMembership } from '../users/models/venue-membership.model.js';
 
 /**
  * Our own French and Spanish for the demo stories: per story, per panel, each text unit in the
@@ -79,7 +80,7 @@ export class DemoTranslations {
   ) {}
 
   async seed(translatorEmail: string): Promise<void> {
-    const translator = await this.users.findOne({ where: { email: translatorEmail } });
+    const translator = await this.users.findOne({ where: { email: translatorEmail }, include: [VenueMembership] });
     if (!translator) throw new Error('the demo translator must exist before the demo translations');
     for (const [title, byLocale] of Object.entries(DEMO_TRANSLATIONS)) {
       const story = await this.stories.findOne({ where: { title } });

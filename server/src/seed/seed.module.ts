@@ -17,12 +17,14 @@ import { Revision } from '../revisions/models/revision.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { TRANSLATION_MODELS, TRANSLATION_SERVICES } from '../translations/translations.module.js';
 import { User } from '../users/models/user.model.js';
+import { VenueMembership } from '../users/models/venue-membership.model.js';
 import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { DemoFleet } from './demo-fleet.js';
 import { DemoReviews } from './demo-reviews.js';
+import { DemoSecondVenue } from './demo-second-venue.js';
 import { DemoStories } from './demo-stories.js';
 import { DemoTranslations } from './demo-translations.js';
 import { SeedService } from './seed.service.js';
@@ -31,9 +33,9 @@ import { SeedService } from './seed.service.js';
 @Module({
   imports: [
     ConfigModule, ClockModule, DatabaseModule, JobsModule, AuditModule,
-    SequelizeModule.forFeature([User, Venue, Gallery, Station, Exhibit, Story, Revision, Kiosk, KioskHeartbeat, KioskEvent, ...TRANSLATION_MODELS]),
+    SequelizeModule.forFeature([User, VenueMembership, Venue, Gallery, Station, Exhibit, Story, Revision, Kiosk, KioskHeartbeat, KioskEvent, ...TRANSLATION_MODELS]),
     MediaModule, PanelsModule, ReviewsModule, ReleasesModule,
   ],
-  providers: [SeedService, PasswordHasher, DemoStories, DemoReviews, DemoTranslations, DemoFleet, ...TRANSLATION_SERVICES],
+  providers: [SeedService, PasswordHasher, DemoStories, DemoSecondVenue, DemoReviews, DemoTranslations, DemoFleet, ...TRANSLATION_SERVICES],
 })
 export class SeedModule {}

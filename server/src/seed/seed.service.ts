@@ -4,20 +4,23 @@ import { Sequelize } from 'sequelize-typescript';
 import { AuditService } from '../audit/audit.service.js';
 import { RenditionsWorker } from '../media/renditions.worker.js';
 import { User } from '../users/models/user.model.js';
+import { VenueMembership } from '../users/models/venue-membership.model.js';
 import { PasswordHasher } from '../users/password-hasher.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
 import { Venue } from '../venues/models/venue.model.js';
 import { DemoFleet } from './demo-fleet.js';
 import { DemoReviews } from './demo-reviews.js';
-import { DemoStories } from './demo-stories.js';
+import { DEMO_SECOND_EXHIBIT, DemoSecondVenue } from './demo-second-venue.js';
+import { DEMO_EXHIBIT, DemoStories } from './demo-stories.js';
 import { DemoTranslations } from './demo-translations.js';
-import { DEMO_ACCOUNTS, DEMO_GALLERY, DEMO_STATION, DEMO_VENUE } from './demo-scenario.js';
+import { DEMO_ACCOUNTS, DEMO_GALLERY, DEMO_SECOND_GALLERY, DEMO_SECOND_VENUE, DEMO_STATION, DEMO_VENUE } from './demo-scenario.js';
 
 @Injectable()
 export class SeedService {
   constructor(
     @InjectModel(User) private readonly users: typeof User,
+    @InjectModel(VenueMembership) private readonly memberships: typeof VenueMembership,
     @InjectModel(Venue) private readonly venues: typeof Venue,
     @InjectModel(Gallery) private readonly galleries: typeof Gallery,
     @InjectModel(Station) private readonly stations: typeof Station,
@@ -25,6 +28,7 @@ export class SeedService {
     private readonly hasher: PasswordHasher,
     private readonly audit: AuditService,
     private readonly demoStories: DemoStories,
+    private readonly demoSecondVenue: DemoSecondVenue,
     private readonly demoTranslations: DemoTranslations,
     private readonly demoReviews: DemoReviews,
     private readonly demoFleet: DemoFleet,
@@ -39,16 +43,24 @@ export class SeedService {
       const venue = await this.venues.create(DEMO_VENUE, { transaction });
       const gallery = await this.galleries.create({ ...DEMO_GALLERY, venueId: venue.id }, { transaction });
       await this.stations.create({ ...DEMO_STATION, galleryId: gallery.id }, { transaction });
-      await this.users.bulkCreate(
-        DEMO_ACCOUNTS.map((account, i) => ({ ...account, passwordHash: hashes[i], uiLanguage: 'en', active: true })),
-        { transaction },
-      );
+      const second = await this.venues.create(DEMO_SECOND_VENUE, { transaction });
+      await this.galleries.create({ ...DEMO_SECOND_GALLERY, venueId: second.id }, { transaction });
+      const venueIds = { first: venue.id, second: second.id };
+      for (const [i, { memberships, ...account }] of DEMO_ACCOUNTS.entries()) {
+        const user = await this.users.create({ ...account, passwordHash: hashes[i], uiLanguage: 'en', active: true }, { transaction });
+        await this.memberships.bulkCreate(
+          memberships.map(({ venue: key, ...grant }) => ({ ...grant, userId: user.id, venueId: venueIds[key] })),
+          { transaction },
+        );
+      }
     });
     await this.demoStories.seed('curator@demo.test');
+    await this.demoSecondVenue.seed('curator2@demo.test');
     // The demo release is asked for below: its images' renditions must be made first.
     await this.renditions.makeAllPending();
     await this.demoTranslations.seed('translator@demo.test');
-    await this.demoReviews.seed('curator@demo.test', 'educator@demo.test');
+    await this.demoReviews.seed(DEMO_EXHIBIT.name, 'curator@demo.test', 'educator@demo.test');
+    await this.demoReviews.seed(DEMO_SECOND_EXHIBIT.name, 'curator2@demo.test', 'educator@demo.test');
     await this.demoFleet.seed('technician@demo.test');
     return true;
   }
