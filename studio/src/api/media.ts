@@ -1,5 +1,6 @@
 import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { MediaLicence, MediaMissingFilter, MediaPage, MediaView, Page, RenditionStatus } from '@mantlepiece/shared';
+import { useVenueFilter } from '../app/current-venue';
 import { api, ApiError, authorizationHeader, NETWORK_FAILURE, refreshSession } from './client';
 
 export const MEDIA_SORTS = ['-createdAt', 'createdAt', 'filename', '-filename'] as const;
@@ -23,10 +24,11 @@ const preparing = (asset: MediaView | undefined) => asset?.renditionStatus.state
 
 export function useMediaList(params: MediaListParams, enabled = true) {
   const queryClient = useQueryClient();
+  const venue = useVenueFilter();
   return useQuery({
-    queryKey: [...mediaListKey, params],
+    queryKey: [...mediaListKey, params, venue],
     queryFn: async () => {
-      const page = await api<MediaPage>('/media', { query: { ...params } });
+      const page = await api<MediaPage>('/media', { query: { ...params, ...venue } });
       // Each asset is also cached on its own, so the editor can draw a picked image at once.
       for (const asset of page.items) queryClient.setQueryData(mediaKey(asset.id), asset);
       return page;
@@ -98,7 +100,7 @@ function parseBody(text: string): unknown {
 }
 
 /** One multipart POST through XMLHttpRequest, the one browser API that reports upload progress. */
-function postFile(file: File, onProgress: (fraction: number) => void): Promise<{ status: number; body: unknown }> {
+function postFile(file: File, onProgress: (fraction: number) => void, venueId?: number): Promise<{ status: number; body: unknown }> {
   return new Promise((resolve, reject) => {
     const request = new XMLHttpRequest();
     request.open('POST', '/api/media');
@@ -109,15 +111,16 @@ function postFile(file: File, onProgress: (fraction: number) => void): Promise<{
     request.onload = () => resolve({ status: request.status, body: parseBody(request.responseText) });
     request.onerror = () => reject(new ApiError(NETWORK_FAILURE, { message: 'network' }));
     const form = new FormData();
+    if (venueId !== undefined) form.append('venueId', String(venueId));
     form.append('file', file, file.name);
     request.send(form);
   });
 }
 
-/** Uploads one file; a 401 gets one retry after a refresh, as every other API call does. */
-export async function uploadMediaFile(file: File, onProgress: (fraction: number) => void): Promise<MediaView> {
-  let answer = await postFile(file, onProgress);
-  if (answer.status === 401 && (await refreshSession())) answer = await postFile(file, onProgress);
+/** Uploads one file to a venue (the uploader's only one when not named); a 401 gets one retry after a refresh, as every other API call does. */
+export async function uploadMediaFile(file: File, onProgress: (fraction: number) => void, venueId?: number): Promise<MediaView> {
+  let answer = await postFile(file, onProgress, venueId);
+  if (answer.status === 401 && (await refreshSession())) answer = await postFile(file, onProgress, venueId);
   const { status, body } = answer;
   if (status >= 200 && status < 300) {
     const created = Array.isArray(body) ? (body as MediaView[]) : [body as MediaView];
@@ -127,10 +130,12 @@ export async function uploadMediaFile(file: File, onProgress: (fraction: number)
   throw new ApiError(status, error);
 }
 
+/** Uploads to the studio's current venue. */
 export function useUploadMedia() {
   const queryClient = useQueryClient();
+  const { venueId } = useVenueFilter();
   return useMutation({
-    mutationFn: ({ file, onProgress }: { file: File; onProgress: (fraction: number) => void }) => uploadMediaFile(file, onProgress),
+    mutationFn: ({ file, onProgress }: { file: File; onProgress: (fraction: number) => void }) => uploadMediaFile(file, onProgress, venueId),
     onSuccess: (asset) => {
       queryClient.setQueryData(mediaKey(asset.id), asset);
       void queryClient.invalidateQueries({ queryKey: mediaListKey });

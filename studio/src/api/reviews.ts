@@ -1,5 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Page, ReviewQueueItem, StoryDetailView, Verdict, VerdictResult } from '@mantlepiece/shared';
+import { useVenueFilter } from '../app/current-venue';
 import { api } from './client';
 import { revisionKey } from './revisions';
 import { storyKey } from './stories';
@@ -17,9 +18,10 @@ export interface QueueParams {
 const reviewsKey = ['reviews'] as const;
 
 export function useReviewQueue(params: QueueParams) {
+  const venue = useVenueFilter();
   return useQuery({
-    queryKey: [...reviewsKey, 'queue', params],
-    queryFn: () => api<Page<ReviewQueueItem>>('/reviews/queue', { query: { ...params } }),
+    queryKey: [...reviewsKey, 'queue', params, venue],
+    queryFn: () => api<Page<ReviewQueueItem>>('/reviews/queue', { query: { ...params, ...venue } }),
     placeholderData: keepPreviousData,
   });
 }

@@ -1,5 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Audience, Page, PanelDocJSON, PanelView, PreflightEntry, StoryDetailView, StoryPage, StoryState, StoryView } from '@mantlepiece/shared';
+import { useVenueFilter } from '../app/current-venue';
 import { api } from './client';
 
 export const STORY_SORTS = ['title', '-title', 'updatedAt', '-updatedAt', 'createdAt', '-createdAt', 'state', '-state'] as const;
@@ -20,9 +21,10 @@ export const storyKey = (id: number) => ['story', id] as const;
 const draftPreflightKey = (id: number) => ['story', id, 'preflight'] as const;
 
 export function useStories(params: StoryListParams) {
+  const venue = useVenueFilter();
   return useQuery({
-    queryKey: [...storiesKey, params],
-    queryFn: () => api<StoryPage>('/stories', { query: { ...params } }),
+    queryKey: [...storiesKey, params, venue],
+    queryFn: () => api<StoryPage>('/stories', { query: { ...params, ...venue } }),
     placeholderData: keepPreviousData,
   });
 }
@@ -52,10 +54,12 @@ export interface StoryFields {
   sourceLocale?: string;
 }
 
+/** A new story belongs to the studio's current venue. */
 export function useCreateStory() {
   const queryClient = useQueryClient();
+  const venue = useVenueFilter();
   return useMutation({
-    mutationFn: (story: StoryFields) => api<StoryView>('/stories', { method: 'POST', body: story }),
+    mutationFn: (story: StoryFields) => api<StoryView>('/stories', { method: 'POST', body: { ...story, ...venue } }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: storiesKey }),
   });
 }

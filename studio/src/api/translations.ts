@@ -10,6 +10,7 @@ import type {
   UnitStatus,
   XliffImportResult,
 } from '@mantlepiece/shared';
+import { useVenueFilter } from '../app/current-venue';
 import { api, apiFile } from './client';
 
 export interface WorklistParams {
@@ -42,9 +43,10 @@ const storyProgressKey = (storyId: number) => [...translationsKey, storyId, 'pro
 const targetPath = ({ storyId, locale }: TranslationTarget) => `/stories/${storyId}/translations/${encodeURIComponent(locale)}`;
 
 export function useTranslationWorklist(params: WorklistParams) {
+  const venue = useVenueFilter();
   return useQuery({
-    queryKey: [...translationsKey, 'worklist', params],
-    queryFn: () => api<Page<TranslationWorklistItem>>('/translations/stories', { query: { ...params } }),
+    queryKey: [...translationsKey, 'worklist', params, venue],
+    queryFn: () => api<Page<TranslationWorklistItem>>('/translations/stories', { query: { ...params, ...venue } }),
     placeholderData: keepPreviousData,
   });
 }

@@ -28,6 +28,8 @@ export function useUsers(params: UserListParams) {
 export interface InvitationRequest {
   email: string;
   name: string;
+  /** The venue whose roles the invitation grants; null for roles at every venue (the organisation admin's choice). */
+  venueId: number | null;
   roles: Role[];
   locales: string[];
 }
@@ -56,6 +58,33 @@ export function useUpdateUser() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, changes }: { id: number; changes: UserChanges }) => api<UserView>(`/users/${id}`, { method: 'PATCH', body: changes }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: usersKey }),
+  });
+}
+
+export interface GrantChange {
+  person: UserView;
+  name: string;
+  /** null: the roles held at every venue; otherwise the membership at that venue. */
+  venueId: number | null;
+  roles: Role[];
+  locales: string[];
+}
+
+/**
+ * Saves an edited person: the name, and the roles and locales of one grant. A venue's membership
+ * is set, or ended when it is left with no roles; roles at every venue go on the account.
+ */
+export function useSaveGrant() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ person, name, venueId, roles, locales }: GrantChange) => {
+      if (venueId === null) return api<UserView>(`/users/${person.id}`, { method: 'PATCH', body: { name, roles, locales } });
+      if (name !== person.name) await api<UserView>(`/users/${person.id}`, { method: 'PATCH', body: { name } });
+      const path = `/users/${person.id}/memberships/${venueId}`;
+      if (roles.length) return api<UserView>(path, { method: 'PUT', body: { roles, locales } });
+      return person.memberships.some((grant) => grant.venueId === venueId) ? api<UserView>(path, { method: 'DELETE' }) : person;
+    },
     onSuccess: () => queryClient.invalidateQueries({ queryKey: usersKey }),
   });
 }

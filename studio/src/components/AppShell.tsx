@@ -2,11 +2,13 @@ import { Suspense, useEffect, useRef } from 'react';
 import { makeStyles, Spinner, tokens } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
 import { Link, Outlet, useLocation } from 'react-router-dom';
+import { CurrentVenueProvider } from '../app/current-venue';
 import { header, sediment } from '../app/theme';
 import { AccountMenu } from './AccountMenu';
 import { AreaNav } from './AreaNav';
 import { LanguageMenu } from './LanguageMenu';
 import { NotificationBell } from './review/NotificationBell';
+import { VenueSwitcher } from './VenueSwitcher';
 import { Wordmark } from './Wordmark';
 
 const useStyles = makeStyles({
@@ -82,25 +84,28 @@ export function AppShell() {
   }, [pathname]);
 
   return (
-    <div className={styles.root}>
-      <a href="#main" className={styles.skip}>{t('common.skipToContent')}</a>
-      <header className={styles.header}>
-        <Link to="/" className={styles.home}>
-          <Wordmark product="Studio" />
-        </Link>
-        <span className={styles.spacer} />
-        <NotificationBell className={styles.headerButton} />
-        <LanguageMenu className={styles.headerButton} />
-        <AccountMenu className={styles.headerButton} />
-      </header>
-      <div className={styles.nav}>
-        <AreaNav />
+    <CurrentVenueProvider>
+      <div className={styles.root}>
+        <a href="#main" className={styles.skip}>{t('common.skipToContent')}</a>
+        <header className={styles.header}>
+          <Link to="/" className={styles.home}>
+            <Wordmark product="Studio" />
+          </Link>
+          <span className={styles.spacer} />
+          <VenueSwitcher className={styles.headerButton} />
+          <NotificationBell className={styles.headerButton} />
+          <LanguageMenu className={styles.headerButton} />
+          <AccountMenu className={styles.headerButton} />
+        </header>
+        <div className={styles.nav}>
+          <AreaNav />
+        </div>
+        <main id="main" ref={main} tabIndex={-1} className={styles.main}>
+          <Suspense fallback={<Spinner label={t('common.loading')} />}>
+            <Outlet />
+          </Suspense>
+        </main>
       </div>
-      <main id="main" ref={main} tabIndex={-1} className={styles.main}>
-        <Suspense fallback={<Spinner label={t('common.loading')} />}>
-          <Outlet />
-        </Suspense>
-      </main>
-    </div>
+    </CurrentVenueProvider>
   );
 }

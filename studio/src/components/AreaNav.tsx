@@ -4,7 +4,7 @@ import type { FluentIcon } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { NavLink } from 'react-router-dom';
 import { useCapturedMail } from '../api/dev-mail';
-import { useCurrentUser } from '../api/session';
+import { usePersonHere } from '../app/current-venue';
 import { areasFor, canOpen } from '../app/areas';
 import { workbenchStrings } from '../routes/widgets/workbench-strings';
 import { magma } from '../app/theme';
@@ -70,7 +70,7 @@ function NavItem({ to, icon: Icon, label, end }: { to: string; icon: FluentIcon;
 export function AreaNav() {
   const { t, i18n } = useTranslation();
   const styles = useStyles();
-  const user = useCurrentUser();
+  const user = usePersonHere();
   const isAdmin = user.roles.includes('admin');
   const capturedMail = useCapturedMail(1, isAdmin);
 

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useCurrentUser } from '../../api/session';
+import { usePersonHere } from '../../app/current-venue';
 import { canOpen, type Area } from '../../app/areas';
 import { AREA_ICONS } from '../../components/area-icons';
 import { EmptyState } from '../../components/EmptyState';
@@ -37,6 +37,6 @@ export function NotForRolePage({ area }: { area: Area }) {
 
 /** Lets a page through only for roles whose areas include it. */
 export function RequireArea({ area, children }: { area: Area; children: React.ReactNode }) {
-  const user = useCurrentUser();
+  const user = usePersonHere();
   return canOpen(user.roles, area) ? children : <NotForRolePage area={area} />;
 }

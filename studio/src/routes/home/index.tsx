@@ -3,7 +3,7 @@ import { Badge, makeStyles, Spinner, Text, tokens } from '@fluentui/react-compon
 import { ROLES, type Role, type UserView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useUsers } from '../../api/users';
-import { useCurrentUser } from '../../api/session';
+import { usePersonHere } from '../../app/current-venue';
 import { AREAS_BY_ROLE, BUILT_AREAS, type Area } from '../../app/areas';
 import { magma } from '../../app/theme';
 import { AREA_ICONS } from '../../components/area-icons';
@@ -125,7 +125,7 @@ function RoleCards({ user }: { user: UserView }) {
 export function HomePage() {
   const { t } = useTranslation();
   const styles = useStyles();
-  const user = useCurrentUser();
+  const user = usePersonHere();
   const roleList = useRoleList();
   return (
     <>

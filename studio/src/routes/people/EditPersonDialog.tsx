@@ -1,25 +1,33 @@
 import type { UserView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { useUpdateUser } from '../../api/users';
+import { useSaveGrant } from '../../api/users';
+import { grantOf, useManagedVenues } from './managed-venues';
 import { localesToSend } from './PersonFields';
 import { PersonDialog } from './PersonDialog';
 
 export function EditPersonDialog({ person, onClose }: { person: UserView; onClose: () => void }) {
   const { t } = useTranslation();
-  const update = useUpdateUser();
+  const update = useSaveGrant();
+  const managed = useManagedVenues();
+  // Starts at the account's own roles when it has some and the reader may change them, else at a venue of the reader's where the person works.
+  const firstShared = person.memberships.find((grant) => managed.venues.some((venue) => venue.id === grant.venueId))?.venueId;
+  const venueId = managed.everyVenue && (person.roles.length > 0 || firstShared === undefined) ? null : (firstShared ?? managed.initialVenueId);
+  const grant = grantOf(person, venueId);
   return (
     <PersonDialog
       title={t('editPerson.title', { name: person.name })}
       submitLabel={t('editPerson.submit')}
       pendingLabel={t('common.saving')}
-      initial={{ email: person.email, name: person.name, roles: person.roles, locales: person.locales.join(', ') }}
+      initial={{ email: person.email, name: person.name, venueId, roles: grant.roles, locales: grant.locales.join(', ') }}
       emailEditable={false}
+      choices={{ ...managed, grantAt: (chosen) => grantOf(person, chosen) }}
+      roleRequired={false}
       pending={update.isPending}
       error={update.error}
       onClose={onClose}
       onSubmit={(values) =>
         update.mutate(
-          { id: person.id, changes: { name: values.name.trim(), roles: values.roles, locales: localesToSend(values) } },
+          { person, name: values.name.trim(), venueId: values.venueId, roles: values.roles, locales: localesToSend(values) },
           { onSuccess: onClose },
         )
       }

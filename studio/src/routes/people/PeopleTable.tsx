@@ -9,11 +9,16 @@ import { useLanguageName } from '../../components/translation/language-name';
 
 type SortColumn = 'name' | 'email' | 'lastSignInAt';
 
+/** Every locale the person translates into, at any venue shown. */
+const localesOf = (person: UserView) => [...new Set([...person.locales, ...person.memberships.flatMap((grant) => grant.locales)])];
+
 const useStyles = makeStyles({
   table: { backgroundColor: tokens.colorNeutralBackground1, border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusLarge },
   name: { fontWeight: tokens.fontWeightSemibold },
   muted: { color: tokens.colorNeutralForeground3 },
-  badges: { display: 'flex', gap: tokens.spacingHorizontalXS, flexWrap: 'wrap' },
+  badges: { display: 'flex', gap: tokens.spacingHorizontalXS, flexWrap: 'wrap', alignItems: 'center' },
+  grants: { display: 'grid', gap: tokens.spacingVerticalXS },
+  venue: { color: tokens.colorNeutralForeground2, fontSize: tokens.fontSizeBase200 },
   actions: { display: 'flex', gap: tokens.spacingHorizontalXS },
   inactiveRow: { color: tokens.colorNeutralForeground3 },
   // Room for a whole address and for both action buttons; the status badge needs little.
@@ -22,8 +27,10 @@ const useStyles = makeStyles({
   actionsColumn: { width: '11rem' },
 });
 
-export function PeopleTable({ people, sort, onSort, currentUserId, onEdit, onToggleActive, busy }: {
+export function PeopleTable({ people, sort, onSort, currentUserId, onEdit, onToggleActive, busy, venueName }: {
   people: UserView[];
+  /** Names the venue of each membership shown. */
+  venueName: (venueId: number) => string;
   sort: UserSort;
   onSort: (sort: UserSort) => void;
   currentUserId: number;
@@ -67,11 +74,22 @@ export function PeopleTable({ people, sort, onSort, currentUserId, onEdit, onTog
             </TableCell>
             <TableCell>{person.email}</TableCell>
             <TableCell>
-              <span className={styles.badges}>
-                {person.roles.map((role) => <Badge key={role} appearance="tint" color="brand">{t(`roles.${role}`)}</Badge>)}
+              <span className={styles.grants}>
+                {person.roles.length ? (
+                  <span className={styles.badges}>
+                    {person.memberships.length ? <span className={styles.venue}>{t('memberships.everyVenue')}</span> : null}
+                    {person.roles.map((role) => <Badge key={role} appearance="tint" color="brand">{t(`roles.${role}`)}</Badge>)}
+                  </span>
+                ) : null}
+                {person.memberships.map((grant) => (
+                  <span key={grant.venueId} className={styles.badges} data-membership={grant.venueId}>
+                    <span className={styles.venue}>{venueName(grant.venueId)}</span>
+                    {grant.roles.map((role) => <Badge key={role} appearance="tint" color="brand">{t(`roles.${role}`)}</Badge>)}
+                  </span>
+                ))}
               </span>
             </TableCell>
-            <TableCell>{person.locales.length ? person.locales.map(languageName).join(', ') : <span className={styles.muted}>—</span>}</TableCell>
+            <TableCell>{localesOf(person).length ? localesOf(person).map(languageName).join(', ') : <span className={styles.muted}>—</span>}</TableCell>
             <TableCell>
               <Badge appearance={person.active ? 'tint' : 'outline'} color={person.active ? 'success' : 'subtle'}>
                 {person.active ? t('people.active') : t('people.inactive')}

@@ -4,7 +4,7 @@ import { ApiError } from '../../api/client';
 import { renderInStudio } from '../../test-utils';
 import { PersonDialog, type PersonDialogProps } from './PersonDialog';
 
-const translator = { email: 'lena.fischer@basalt-point.example', name: 'Lena Fischer', roles: ['translator' as const], locales: 'fr' };
+const translator = { email: 'lena.fischer@basalt-point.example', name: 'Lena Fischer', venueId: null, roles: ['translator' as const], locales: 'fr' };
 
 function dialog(overrides: Partial<PersonDialogProps>) {
   const props: PersonDialogProps = {

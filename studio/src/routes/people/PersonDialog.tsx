@@ -4,7 +4,7 @@ import { FormDialog } from '../../components/FormDialog';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError, shownAtField } from '../../components/forms/describe-error';
 import { hasProblems } from '../../components/forms/validation';
-import { PERSON_FIELDS, PersonFields, personFieldMessage, personProblems, type PersonField, type PersonValues } from './PersonFields';
+import { PERSON_FIELDS, PersonFields, personFieldMessage, personProblems, type PersonField, type PersonValues, type VenueChoices } from './PersonFields';
 
 export interface PersonDialogProps {
   title: string;
@@ -13,6 +13,10 @@ export interface PersonDialogProps {
   pendingLabel: string;
   initial: PersonValues;
   emailEditable: boolean;
+  /** Where the roles may hold; without it the form has no venue field. */
+  choices?: VenueChoices;
+  /** Editing may leave a venue with no roles (ending the membership); an invitation needs one. */
+  roleRequired?: boolean;
   pending: boolean;
   error: unknown;
   onSubmit: (values: PersonValues) => void;
@@ -25,7 +29,7 @@ export function PersonDialog(props: PersonDialogProps) {
   const [values, setValues] = useState(props.initial);
   const [problems, setProblems] = useState<Partial<Record<PersonField, string>>>({});
 
-  const check = (next: PersonValues) => personProblems(t, next, { withEmail: props.emailEditable });
+  const check = (next: PersonValues) => personProblems(t, next, { withEmail: props.emailEditable, roleRequired: props.roleRequired });
   const submit = () => {
     const found = check(values);
     setProblems(found);
@@ -50,7 +54,7 @@ export function PersonDialog(props: PersonDialogProps) {
       onClose={props.onClose}
     >
       {alert ? <FormAlert intent="error">{alert}</FormAlert> : null}
-      <PersonFields values={values} onChange={change} messages={messages} emailEditable={props.emailEditable} />
+      <PersonFields values={values} onChange={change} messages={messages} emailEditable={props.emailEditable} choices={props.choices} />
     </FormDialog>
   );
 }

@@ -16,6 +16,7 @@ import { ActivationDialog } from './ActivationDialog';
 import { EditPersonDialog } from './EditPersonDialog';
 import { InviteDialog } from './InviteDialog';
 import { readListParams } from './list-params';
+import { useManagedVenues } from './managed-venues';
 import { PeopleTable } from './PeopleTable';
 
 const useStyles = makeStyles({
@@ -31,6 +32,7 @@ export function PeoplePage() {
   const styles = useStyles();
   const formatDate = useDateFormat();
   const me = useCurrentUser();
+  const { venueName } = useManagedVenues();
   const { search, query, setQuery, change, clear } = useListSearch();
   const params = readListParams(search);
   const users = useUsers(params);
@@ -96,6 +98,7 @@ export function PeoplePage() {
               sort={params.sort ?? 'name'}
               onSort={(sort) => change({ sort })}
               currentUserId={me.id}
+              venueName={venueName}
               busy={users.isFetching}
               onEdit={(person) => setDialog({ kind: 'edit', person })}
               onToggleActive={(person) => setDialog({ kind: 'activation', person })}

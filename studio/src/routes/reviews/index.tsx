@@ -2,7 +2,7 @@ import { Button, Field, makeStyles, SearchBox, tokens } from '@fluentui/react-co
 import { ClipboardTaskListLtrRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { useReviewQueue } from '../../api/reviews';
-import { useCurrentUser } from '../../api/session';
+import { usePersonHere } from '../../app/current-venue';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
 import { Pager } from '../../components/lists/Pager';
@@ -20,7 +20,7 @@ const useStyles = makeStyles({
 /** Educators get the queue of revisions waiting for a verdict; curators follow their stories through review. */
 export function ReviewsPage() {
   const { t } = useTranslation();
-  const me = useCurrentUser();
+  const me = usePersonHere();
   if (me.roles.includes('educator')) return <ReviewQueue />;
   return (
     <>

@@ -1,7 +1,7 @@
 import { Button, Dropdown, Field, makeStyles, Option, SearchBox, tokens } from '@fluentui/react-components';
 import { TranslateRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
-import { useCurrentUser } from '../../api/session';
+import { usePersonHere } from '../../app/current-venue';
 import { useVenues } from '../../api/settings';
 import { useTranslationWorklist } from '../../api/translations';
 import { EmptyState } from '../../components/EmptyState';
@@ -21,7 +21,7 @@ const useStyles = makeStyles({
 
 /** Every venue's target locales, for the filter; a translator's own locales narrow it. */
 function useLocaleChoices(): string[] {
-  const me = useCurrentUser();
+  const me = usePersonHere();
   const venues = useVenues({ page: 1, pageSize: 100 });
   const all = [...new Set((venues.data?.items ?? []).flatMap((venue) => venue.targetLocales))];
   const readsAll = me.roles.includes('admin') || me.roles.includes('curator');
@@ -32,7 +32,7 @@ function useLocaleChoices(): string[] {
 export function TranslationsPage() {
   const { t } = useTranslation();
   const styles = useStyles();
-  const me = useCurrentUser();
+  const me = usePersonHere();
   const languageName = useLanguageName({ standalone: true });
   const { search, query, setQuery, change, clear } = useListSearch();
   const params = readWorklistParams(search);

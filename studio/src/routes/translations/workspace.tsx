@@ -5,7 +5,7 @@ import { UNIT_STATUSES, type TranslationUnitView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
-import { useCurrentUser } from '../../api/session';
+import { usePersonHere } from '../../app/current-venue';
 import { useStory } from '../../api/stories';
 import { useStoryTranslations, useTranslationPreview, useTranslationUnits, type TranslationTarget } from '../../api/translations';
 import { EmptyState } from '../../components/EmptyState';
@@ -49,7 +49,7 @@ export function TranslationWorkspacePage() {
 function Workspace({ target }: { target: TranslationTarget }) {
   const { t } = useTranslation();
   const styles = useStyles();
-  const me = useCurrentUser();
+  const me = usePersonHere();
   const languageName = useLanguageName();
   const languageLabel = useLanguageName({ standalone: true });
   const [search, setSearch] = useSearchParams();

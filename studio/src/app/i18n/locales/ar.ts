@@ -3,6 +3,7 @@ import { authoringAr } from './authoring.ar';
 import { editorReviewAr } from './editor-review.ar';
 import { fleetInsightsAr } from './fleet-insights.ar';
 import { languagesAr } from './languages.ar';
+import { venuesAr } from './venues.ar';
 import { releaseAr } from './release.ar';
 import { reviewAr } from './review.ar';
 import { translationAr } from './translation.ar';
@@ -17,6 +18,7 @@ export const ar: Translated<Messages> = {
   ...releaseAr,
   ...fleetInsightsAr,
   ...languagesAr,
+  ...venuesAr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'جارٍ التحميل…',
@@ -226,7 +228,6 @@ export const ar: Translated<Messages> = {
     name: 'الاسم',
     roles: 'الأدوار',
     locales: 'لغات الترجمة',
-    localesHint: 'وسوم BCP 47 مفصولة بفواصل، مثل fr, es-MX.',
   },
   invite: {
     title: 'ادعُ شخصًا',

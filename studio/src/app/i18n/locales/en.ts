@@ -2,6 +2,7 @@ import { authoringEn } from './authoring.en';
 import { editorReviewEn } from './editor-review.en';
 import { fleetInsightsEn } from './fleet-insights.en';
 import { languagesEn } from './languages.en';
+import { venuesEn } from './venues.en';
 import { releaseEn } from './release.en';
 import { reviewEn } from './review.en';
 import { translationEn } from './translation.en';
@@ -15,6 +16,7 @@ export const en = {
   ...releaseEn,
   ...fleetInsightsEn,
   ...languagesEn,
+  ...venuesEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',
@@ -224,7 +226,6 @@ export const en = {
     name: 'Name',
     roles: 'Roles',
     locales: 'Translator locales',
-    localesHint: 'BCP 47 tags separated by commas, for example fr, es-MX.',
   },
   invite: {
     title: 'Invite someone',

@@ -3,6 +3,7 @@ import { authoringEs } from './authoring.es';
 import { editorReviewEs } from './editor-review.es';
 import { fleetInsightsEs } from './fleet-insights.es';
 import { languagesEs } from './languages.es';
+import { venuesEs } from './venues.es';
 import { releaseEs } from './release.es';
 import { reviewEs } from './review.es';
 import { translationEs } from './translation.es';
@@ -17,6 +18,7 @@ export const es: Translated<Messages> = {
   ...releaseEs,
   ...fleetInsightsEs,
   ...languagesEs,
+  ...venuesEs,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Cargando…',
@@ -226,7 +228,6 @@ export const es: Translated<Messages> = {
     name: 'Nombre',
     roles: 'Roles',
     locales: 'Idiomas de traducción',
-    localesHint: 'Etiquetas BCP 47 separadas por comas, por ejemplo fr, es-MX.',
   },
   invite: {
     title: 'Invitar a alguien',

@@ -2,6 +2,7 @@ import { authoringFr } from './authoring.fr';
 import { editorReviewFr } from './editor-review.fr';
 import { fleetInsightsFr } from './fleet-insights.fr';
 import { languagesFr } from './languages.fr';
+import { venuesFr } from './venues.fr';
 import { releaseFr } from './release.fr';
 import { reviewFr } from './review.fr';
 import { translationFr } from './translation.fr';
@@ -16,6 +17,7 @@ export const fr: Messages = {
   ...releaseFr,
   ...fleetInsightsFr,
   ...languagesFr,
+  ...venuesFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',
@@ -225,7 +227,6 @@ export const fr: Messages = {
     name: 'Nom',
     roles: 'Rôles',
     locales: 'Langues de traduction',
-    localesHint: 'Étiquettes BCP 47 séparées par des virgules, par exemple fr, es-MX.',
   },
   invite: {
     title: 'Inviter une personne',
