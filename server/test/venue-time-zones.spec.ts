@@ -107,6 +107,19 @@ describe('Insights days on the venue clock', () => {
   });
 });
 
+describe('the audit CSV', () => {
+  it("gives an event of a venue its moment on that venue's clock beside the UTC one", async () => {
+    const { venue } = await venueIn('Pacific/Kiritimati', 'audit-clock');
+    const res = await request(t.http).get('/api/audit').query({ venueId: venue.id, action: 'kiosk.paired' }).set('Accept', 'text/csv').set(admin.auth);
+    expect(res.status).toBe(200);
+    const [record, ...more] = parse(res.text, { columns: true }) as Record<string, string>[];
+    expect(more).toEqual([]);
+    // UTC+14 all year (see above): the same instant, fourteen hours on, to the second.
+    const local = `${new Date(Date.parse(record!.at!) + 14 * HOUR_MS).toISOString().slice(0, 19)}+14:00`;
+    expect(record).toMatchObject({ venue_id: String(venue.id), venue_time_zone: 'Pacific/Kiritimati', at_venue_time: local });
+  });
+});
+
 describe('licence expiry on the venue clock', () => {
   it("lets an image's licence run to the end of its expiry day at the venue and blocks it from local midnight", async () => {
     const { venue, exhibit } = await venueIn('Pacific/Kiritimati', 'licence');

@@ -1,12 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { Op, type FindOptions, type Transaction, type WhereOptions } from 'sequelize';
+import { Op, type FindOptions, type Includeable, type Transaction, type WhereOptions } from 'sequelize';
 import type { AuditEventView, Page, Role } from '@mantlepiece/shared';
 import { scopeWhere, venueScope, type Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { isDateOnly } from '../common/date-only.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { User } from '../users/models/user.model.js';
+import { Venue } from '../venues/models/venue.model.js';
 import { AuditEvent } from './models/audit-event.model.js';
 import type { ListAuditEventsQuery } from './dto/list-audit-events.query.js';
 import { toAuditCsv, toAuditEventView } from './audit.presenter.js';
@@ -81,8 +82,10 @@ export class AuditService {
 
   /** Every event the filter matches, oldest first as a trail is read, up to CSV_MAX_ROWS. */
   async exportCsv(query: ListAuditEventsQuery, member: Member): Promise<string> {
-    const rows = await this.events.findAll({ ...filtered(query, member), order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: CSV_MAX_ROWS });
-    return toAuditCsv(rows.map(toAuditEventView));
+    const options = filtered(query, member);
+    const include = [...(options.include as Includeable[]), { model: Venue, attributes: ['id', 'timeZone'] }];
+    const rows = await this.events.findAll({ ...options, include, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: CSV_MAX_ROWS });
+    return toAuditCsv(rows);
   }
 }
 

@@ -28,6 +28,9 @@ export class AuditEvent extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true })
   venueId: number | null;
 
+  @BelongsTo(() => Venue)
+  venue?: Venue | null;
+
   @Column(jsonColumn('detail', true))
   detail: Record<string, unknown> | null;
 
