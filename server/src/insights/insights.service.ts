@@ -9,9 +9,9 @@ import {
 import type { Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { invalidField } from '../common/validation.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
-import { refuseUnlessSeen } from '../venues/venue-access.js';
 import type { InsightsQuery } from './dto/insights.query.js';
 
 /** Who reads what visitors did. */
@@ -40,7 +40,7 @@ export class InsightsService {
   /** Another venue's gallery answers as one that does not exist. */
   async figures(query: InsightsQuery, member: Member): Promise<InsightsView> {
     const gallery = await this.galleries.findByPk(query.galleryId, { attributes: ['id', 'venueId'], include: [{ model: Venue, attributes: ['timeZone'] }] });
-    refuseUnlessSeen(member, gallery?.venueId, 'There is no such gallery.', INSIGHTS_READERS);
+    actingAt(member, withinReach(member, gallery, 'There is no such gallery.').venueId, INSIGHTS_READERS);
     // Days are the venue's: a visit at 23:30 local time counts on that local day, and a day across a clock change has its 23 or 25 hours.
     const { timeZone } = gallery!.venue!;
     const range = this.rangeOf(query, timeZone);

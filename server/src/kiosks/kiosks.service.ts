@@ -8,12 +8,12 @@ import { personAt, scopeWhere, venueScope, type Member } from '../auth/policy.js
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
 import { unknownReference } from '../common/validation.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
 import { ReleasePanel } from '../releases/models/release-panel.model.js';
 import { ReleaseStory } from '../releases/models/release-story.model.js';
 import { Release } from '../releases/models/release.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
-import { refuseUnlessSeen } from '../venues/venue-access.js';
 import type { HeartbeatDto, KioskEventDto, KioskEventsDto, ListKiosksQuery } from './dto/kiosk-report.dto.js';
 import type { PairedKiosk } from './device-token.guard.js';
 import { FLEET_KEEPERS, refuseIfRevoked } from './kiosk-policy.js';
@@ -132,10 +132,10 @@ export class KiosksService {
     return view!;
   }
 
-  /** The kiosk with its station and gallery, if it is at a venue where the member looks after the fleet. */
+  /** The kiosk with its station and gallery, for a member who looks after the fleet at its venue. */
   private async find(id: number, member: Member): Promise<PlacedKiosk> {
     const kiosk = (await this.kiosks.findByPk(id, { include: [{ model: Station, include: [Gallery] }] })) as PlacedKiosk | null;
-    refuseUnlessSeen(member, kiosk?.station.gallery.venueId, 'There is no such kiosk.', FLEET_KEEPERS);
+    actingAt(member, withinReach(member, kiosk?.station.gallery, 'There is no such kiosk.').venueId, FLEET_KEEPERS);
     return kiosk!;
   }
 

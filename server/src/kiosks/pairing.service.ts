@@ -8,10 +8,10 @@ import { AuditService } from '../audit/audit.service.js';
 import type { Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { hashToken, newToken } from '../common/tokens.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
 import { VenueSigningKeysService } from '../releases/venue-signing-keys.service.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Station } from '../venues/models/station.model.js';
-import { refuseUnlessHoldingAt, refuseUnlessSeen } from '../venues/venue-access.js';
 import { newDeviceToken } from './device-token.js';
 import { FLEET_KEEPERS } from './kiosk-policy.js';
 import { Kiosk } from './models/kiosk.model.js';
@@ -76,9 +76,8 @@ export class PairingService {
    */
   async pairStation(stationId: number, typedCode: string, technician: Member, clientAddress: string): Promise<{ kioskId: number }> {
     const station = await this.stations.findByPk(stationId, { include: [{ model: Gallery, attributes: ['id', 'venueId'] }] });
-    refuseUnlessSeen(technician, station?.gallery?.venueId, 'There is no such station.');
-    const venueId = station!.gallery!.venueId;
-    refuseUnlessHoldingAt(technician, venueId, FLEET_KEEPERS, 'Your role at this venue does not allow pairing its kiosks.');
+    const { venueId } = withinReach(technician, station?.gallery, 'There is no such station.');
+    actingAt(technician, venueId, FLEET_KEEPERS);
     const check = await this.attempts.takeCheck(stationId, clientAddress);
     const kioskId = await this.sequelize.transaction(async (transaction) => {
       const now = this.clock.now();

@@ -3,8 +3,8 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
 import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
+import { withinReach } from '../common/venue-boundary.js';
 import type { User } from '../users/models/user.model.js';
-import { refuseUnlessSeen } from '../venues/venue-access.js';
 import { CompareReleasesQuery, ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
 import { ReleasesService } from './releases.service.js';
 import { PUBLISHERS } from './release-policy.js';
@@ -64,7 +64,7 @@ export class ReleasesController {
   @Roles(...ROLES)
   @Get('venues/:id/signing-key')
   async signingKey(@Param('id', ParseIntPipe) venueId: number, @CurrentUser() person: User) {
-    refuseUnlessSeen(person, venueId, 'There is no such venue.');
+    withinReach(person, { venueId }, 'There is no such venue.');
     return { venueId, algorithm: 'Ed25519', publicKey: await this.keys.publicKeyOf(venueId) };
   }
 }

@@ -7,11 +7,11 @@ import { AuditService } from '../audit/audit.service.js';
 import { personAt, type Member, type Person } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { pageWindow, toPage } from '../common/page.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
 import { Revision } from '../revisions/models/revision.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { Gallery } from '../venues/models/gallery.model.js';
 import { Venue } from '../venues/models/venue.model.js';
-import { refuseUnlessHoldingAt, refuseUnlessSeen } from '../venues/venue-access.js';
 import type { ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
 import { ReleasePanel } from './models/release-panel.model.js';
 import { ReleaseStory } from './models/release-story.model.js';
@@ -21,8 +21,6 @@ import { isPublishable, PUBLISHERS, releasesCan } from './release-policy.js';
 import { PublicationsService } from './publications.service.js';
 import { toReleaseView } from './releases.presenter.js';
 import { ReleasesWorker } from './releases.worker.js';
-
-const PUBLISHING_REFUSED = 'Your role at this venue does not allow building or publishing its releases.';
 
 @Injectable()
 export class ReleasesService {
@@ -50,11 +48,10 @@ export class ReleasesService {
     const release = await this.sequelize.transaction(async (transaction) => {
       // Locking the gallery numbers its releases one after another.
       const gallery = await this.galleries.findByPk(galleryId, { include: [Venue], transaction, lock: transaction.LOCK.UPDATE });
-      refuseUnlessSeen(user, gallery?.venue?.id, 'There is no such gallery.');
-      const venue = gallery!.venue!;
-      refuseUnlessHoldingAt(user, venue.id, PUBLISHERS, PUBLISHING_REFUSED);
+      const { venueId, venue } = withinReach(user, gallery, 'There is no such gallery.');
+      actingAt(user, venueId, PUBLISHERS);
       const chosen = await this.content.chooseRevisions(galleryId, dto.revisionIds, transaction);
-      const problems = await this.content.problemsOf(venue, chosen, transaction);
+      const problems = await this.content.problemsOf(venue!, chosen, transaction);
       if (problems.length) throw releaseRefusal('This release cannot be built yet.', problems);
 
       const last = (await this.releases.max<number, Release>('number', { where: { galleryId }, transaction })) ?? 0;
@@ -71,7 +68,7 @@ export class ReleasesService {
         { transaction },
       );
       await this.audit.record({
-        actorId: user.id, action: 'release.requested', targetType: 'release', targetId: created.id, venueId: venue.id,
+        actorId: user.id, action: 'release.requested', targetType: 'release', targetId: created.id, venueId,
         detail: { galleryId, number: created.number, revisionIds: chosen.map((c) => c.revision.id) },
       }, transaction);
       return created;
@@ -95,8 +92,7 @@ export class ReleasesService {
 
   /** Newest first. */
   async listForGallery(galleryId: number, query: ListReleasesQuery, member: Member): Promise<ReleasePage> {
-    const gallery = await this.galleries.findByPk(galleryId, { attributes: ['id', 'venueId'] });
-    refuseUnlessSeen(member, gallery?.venueId, 'There is no such gallery.');
+    const gallery = withinReach(member, await this.galleries.findByPk(galleryId, { attributes: ['id', 'venueId'] }), 'There is no such gallery.');
     const person = personAt(member, gallery.venueId);
     const { rows, count } = await this.releases.findAndCountAll({
       where: { galleryId },
@@ -124,8 +120,8 @@ export class ReleasesService {
     // A release never changes gallery, so its gallery is read before the transaction: the gallery's
     // row must be the transaction's first read, a locking one (see below).
     const { galleryId, gallery } = await this.find(id, user);
-    const venueId = gallery!.venueId;
-    refuseUnlessHoldingAt(user, venueId, PUBLISHERS, PUBLISHING_REFUSED);
+    const { venueId } = gallery!;
+    actingAt(user, venueId, PUBLISHERS);
     const publication = await this.sequelize.transaction(async (transaction) => {
       // Every publish of a gallery, on any server instance, queues on the gallery's row, so one
       // release is Live and one next sequence is taken at a time; taken before any plain read, so
@@ -195,7 +191,7 @@ export class ReleasesService {
   /** The release with its gallery, if the member holds a role at its venue. */
   private async find(id: number, member: Member): Promise<Release> {
     const release = await this.releases.findByPk(id, { include: [{ model: Gallery, attributes: ['id', 'venueId'] }] });
-    refuseUnlessSeen(member, release?.gallery?.venueId, 'There is no such release.');
+    withinReach(member, release?.gallery, 'There is no such release.');
     return release!;
   }
 }

@@ -6,8 +6,8 @@ import { inScope, personAt, scopeWhere, venueScope, type Member, type Person } f
 import { likePattern, orderOf, SearchField, SortField } from '../common/list-query.js';
 import { PageQuery, pageWindow, toPage } from '../common/page.js';
 import { unknownReference } from '../common/validation.js';
+import { actingAt, withinReach } from '../common/venue-boundary.js';
 import type { Gallery } from './models/gallery.model.js';
-import { refuseUnlessHoldingAt, refuseUnlessSeen } from './venue-access.js';
 
 export const SETTINGS_SORT_KEYS = ['name', 'createdAt'] as const;
 
@@ -79,7 +79,7 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
   /** The record, if the member holds any role at its venue. */
   async find(id: number, member: Member): Promise<M> {
     const record = await this.model.findByPk(id, { include: this.kind.venue.include });
-    refuseUnlessSeen(member, record ? this.kind.venue.of(record) : undefined, `There is no such ${this.kind.label}.`);
+    withinReach(member, record && { venueId: this.kind.venue.of(record) }, `There is no such ${this.kind.label}.`);
     return record!;
   }
 
@@ -118,7 +118,7 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
   }
 
   protected refuseUnlessKeeperAt(venueId: number, member: Member): void {
-    refuseUnlessHoldingAt(member, venueId, this.kind.keepers, `Your role at this venue does not allow changing its ${this.kind.label}s.`);
+    actingAt(member, venueId, this.kind.keepers);
   }
 
   /** A new record's parent must be one the member sees (else 422, as for one that does not exist) and keeps. */
