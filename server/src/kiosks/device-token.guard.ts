@@ -70,11 +70,15 @@ export class DeviceTokenGuard implements CanActivate {
 /** A route for paired kiosks only: the staff guard steps aside and the device-token guard decides. */
 export const KioskRoute = () => applyDecorators(Public(), UseGuards(DeviceTokenGuard));
 
-/** A kiosk calling without a device token is let through unpaired; one sending a token must be paired with it. */
+/**
+ * A caller without a device token (an unpaired kiosk, or anyone else on a public route) is let
+ * through as unpaired; a kiosk sending its device token must be paired with it.
+ */
 @Injectable()
 export class OptionalDeviceTokenGuard extends DeviceTokenGuard {
   override async canActivate(context: ExecutionContext): Promise<boolean> {
-    return bearerOf(context.switchToHttp().getRequest<Request>().headers.authorization) === null || super.canActivate(context);
+    const token = bearerOf(context.switchToHttp().getRequest<Request>().headers.authorization);
+    return token === null || !isDeviceToken(token) || super.canActivate(context);
   }
 }
 
