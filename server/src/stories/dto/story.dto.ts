@@ -42,7 +42,7 @@ class StoryDetailsDto {
 
 export class CreateStoryDto extends StoryDetailsDto {
   @ApiPropertyOptional({ description: "The venue the story belongs to: the exhibit's when it names one; needed when the author writes at several venues" })
-  @IsOptional()
+  @Omittable()
   @IsRowId()
   venueId?: number;
 }
