@@ -26,9 +26,10 @@ const liveValue = (widgetId: string, output: string, digits: number, unit: strin
   type: 'liveValue',
   attrs: { widgetId, output, format: { digits, unit } },
 });
-const widget = (widgetType: string, widgetId: string, params: Record<string, unknown>): PanelNodeJSON => ({
+/** A widget block; `visitorModelCard` lets visitors open "How do we know?" under it. */
+const widget = (widgetType: string, widgetId: string, params: Record<string, unknown>, visitorModelCard = false): PanelNodeJSON => ({
   type: 'widget',
-  attrs: { widgetType, widgetId, params },
+  attrs: { widgetType, widgetId, params, visitorModelCard },
 });
 /** Stands for the image until the seed knows its library id. */
 const IMAGE = (name: DemoImageName): PanelNodeJSON => ({ type: 'panelImage', attrs: { mediaId: `demo-${name}` } });
@@ -134,7 +135,7 @@ const STORIES: { title: string; panels: PanelDocJSON[] }[] = [
       ),
       doc(
         heading('The slab pulls its plate'),
-        widget('plate-forces', 'old-slab', OLD_SLAB),
+        widget('plate-forces', 'old-slab', OLD_SLAB, true),
         paragraph('Here the sinking slab pulls about ', liveValue('old-slab', 'slabToRidgeRatio', 2, ''), ' times as hard as the ridge pushes. Make the slab short and see which wins.'),
       ),
     ],
