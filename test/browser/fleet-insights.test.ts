@@ -134,7 +134,9 @@ describe('Fleet and Insights follow a kiosk running in a browser', () => {
     const [download] = await Promise.all([studio.waitForEvent('download'), studio.getByRole('button', { name: 'Download CSV' }).click()]);
     expect(download.suggestedFilename()).toMatch(new RegExp(`^insights-gallery-${gallery.id}-\\d{4}-\\d{2}-\\d{2}_to_\\d{4}-\\d{2}-\\d{2}\\.csv$`));
     const csv = await readFile((await download.path())!, 'utf8');
-    expect(csv.split('\r\n')[0]).toBe('"figure","story_id","story_title","panel_id","panel_position","widget_type","param","locale","switch","count","median_dwell_ms"');
+    expect(csv.split('\r\n')[0]).toBe('"figure","story_id","story_title","panel_id","panel_position","widget_type","param","locale","switch","count","median_dwell_ms","from_day","to_day","time_zone"');
+    // Every row names the days counted and the venue's zone they are days of (the demo venue's).
+    expect(csv.split('\r\n')[1]).toMatch(/,"\d{4}-\d{2}-\d{2}","\d{4}-\d{2}-\d{2}","America\/Halifax"$/);
     expect(csv).toContain(`"story_opens","`);
   });
 
