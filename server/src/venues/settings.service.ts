@@ -113,12 +113,8 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
   /** The record, for a change its venue's keepers make. */
   protected async kept(id: number, member: Member): Promise<M> {
     const record = await this.find(id, member);
-    this.refuseUnlessKeeperAt(this.kind.venue.of(record), member);
+    actingAt(member, this.kind.venue.of(record), this.kind.keepers);
     return record;
-  }
-
-  protected refuseUnlessKeeperAt(venueId: number, member: Member): void {
-    actingAt(member, venueId, this.kind.keepers);
   }
 
   /** A new record's parent must be one the member sees (else 422, as for one that does not exist) and keeps. */
@@ -128,7 +124,7 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
     const parentId = (values as Record<string, unknown>)[parentKey] as number;
     const venueId = await venue.ofParent(parentId);
     if (venueId === null || !inScope(venueScope(member), venueId)) throw unknownReference([parentKey], NO_SUCH_PARENT);
-    this.refuseUnlessKeeperAt(venueId, member);
+    actingAt(member, venueId, this.kind.keepers);
   }
 
   private view(record: M, member: Member): V {
