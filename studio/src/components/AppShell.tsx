@@ -7,6 +7,7 @@ import { header, sediment } from '../app/theme';
 import { AccountMenu } from './AccountMenu';
 import { AreaNav } from './AreaNav';
 import { LanguageMenu } from './LanguageMenu';
+import { KeyboardShortcuts } from './KeyboardShortcuts';
 import { NotificationBell } from './review/NotificationBell';
 import { VenueSwitcher } from './VenueSwitcher';
 import { Wordmark } from './Wordmark';
@@ -93,6 +94,7 @@ export function AppShell() {
           </Link>
           <span className={styles.spacer} />
           <VenueSwitcher className={styles.headerButton} />
+          <KeyboardShortcuts className={styles.headerButton} />
           <NotificationBell className={styles.headerButton} />
           <LanguageMenu className={styles.headerButton} />
           <AccountMenu className={styles.headerButton} />

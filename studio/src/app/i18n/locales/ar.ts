@@ -4,6 +4,7 @@ import { editorReviewAr } from './editor-review.ar';
 import { fleetInsightsAr } from './fleet-insights.ar';
 import { languagesAr } from './languages.ar';
 import { venuesAr } from './venues.ar';
+import { shortcutsAr } from './shortcuts.ar';
 import { releaseAr } from './release.ar';
 import { reviewAr } from './review.ar';
 import { translationAr } from './translation.ar';
@@ -19,6 +20,7 @@ export const ar: Translated<Messages> = {
   ...fleetInsightsAr,
   ...languagesAr,
   ...venuesAr,
+  ...shortcutsAr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'جارٍ التحميل…',

@@ -3,6 +3,7 @@ import { editorReviewEn } from './editor-review.en';
 import { fleetInsightsEn } from './fleet-insights.en';
 import { languagesEn } from './languages.en';
 import { venuesEn } from './venues.en';
+import { shortcutsEn } from './shortcuts.en';
 import { releaseEn } from './release.en';
 import { reviewEn } from './review.en';
 import { translationEn } from './translation.en';
@@ -17,6 +18,7 @@ export const en = {
   ...fleetInsightsEn,
   ...languagesEn,
   ...venuesEn,
+  ...shortcutsEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',

@@ -4,6 +4,7 @@ import { editorReviewEs } from './editor-review.es';
 import { fleetInsightsEs } from './fleet-insights.es';
 import { languagesEs } from './languages.es';
 import { venuesEs } from './venues.es';
+import { shortcutsEs } from './shortcuts.es';
 import { releaseEs } from './release.es';
 import { reviewEs } from './review.es';
 import { translationEs } from './translation.es';
@@ -19,6 +20,7 @@ export const es: Translated<Messages> = {
   ...fleetInsightsEs,
   ...languagesEs,
   ...venuesEs,
+  ...shortcutsEs,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Cargando…',

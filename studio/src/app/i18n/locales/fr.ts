@@ -3,6 +3,7 @@ import { editorReviewFr } from './editor-review.fr';
 import { fleetInsightsFr } from './fleet-insights.fr';
 import { languagesFr } from './languages.fr';
 import { venuesFr } from './venues.fr';
+import { shortcutsFr } from './shortcuts.fr';
 import { releaseFr } from './release.fr';
 import { reviewFr } from './review.fr';
 import { translationFr } from './translation.fr';
@@ -18,6 +19,7 @@ export const fr: Messages = {
   ...fleetInsightsFr,
   ...languagesFr,
   ...venuesFr,
+  ...shortcutsFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',
