@@ -7,7 +7,7 @@ export interface ManagedVenues {
   venues: VenueView[];
   /** Whether they may give roles at every venue: the organisation admin alone. */
   everyVenue: boolean;
-  /** The venue a new grant starts at: the current one when it is theirs. */
+  /** The venue a new grant starts at: the current one when it is theirs (an invitation is usually to one venue). */
   initialVenueId: number | null;
   venueName: (venueId: number) => string;
 }
@@ -20,7 +20,7 @@ export function useManagedVenues(): ManagedVenues {
   const venues = everyVenue ? reachable : reachable.filter((candidate) => user.memberships.some((grant) => grant.venueId === candidate.id && grant.roles.includes('admin')));
   const initialVenueId = venue && venues.some((candidate) => candidate.id === venue.id) ? venue.id : (venues[0]?.id ?? null);
   const venueName = (venueId: number) => reachable.find((candidate) => candidate.id === venueId)?.name ?? `#${venueId}`;
-  return { venues, everyVenue, initialVenueId: everyVenue ? null : initialVenueId, venueName };
+  return { venues, everyVenue, initialVenueId, venueName };
 }
 
 /** The roles and locales a person holds by one grant: at every venue (null) or by their membership at a venue. */

@@ -10,8 +10,5 @@ export const venuesAr: typeof venuesEn = {
     everyVenue: 'كل الأماكن',
     everyVenueHint: 'أدوار في كل الأماكن، ومنها ما يُضاف لاحقًا. لا يمنحها إلا مسؤول المؤسسة.',
     venueHint: 'أدوار في هذا المكان فقط.',
-    none: 'لا أدوار هنا',
-    at: '{{venue}}: {{roles}}',
-    columns: 'الأدوار حسب المكان',
   },
 };

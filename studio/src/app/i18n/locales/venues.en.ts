@@ -9,8 +9,5 @@ export const venuesEn = {
     everyVenue: 'Every venue',
     everyVenueHint: 'Roles at every venue, including venues added later. Only an organisation admin gives them.',
     venueHint: 'Roles at this venue only.',
-    none: 'No roles here',
-    at: '{{venue}}: {{roles}}',
-    columns: 'Roles by venue',
   },
 };

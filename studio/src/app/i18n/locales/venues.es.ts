@@ -10,8 +10,5 @@ export const venuesEs: typeof venuesEn = {
     everyVenue: 'Todas las sedes',
     everyVenueHint: 'Roles en todas las sedes, también en las que se añadan más adelante. Solo un administrador de la organización los asigna.',
     venueHint: 'Roles solo en esta sede.',
-    none: 'Sin roles aquí',
-    at: '{{venue}}: {{roles}}',
-    columns: 'Roles por sede',
   },
 };

@@ -10,8 +10,5 @@ export const venuesFr: typeof venuesEn = {
     everyVenue: 'Tous les lieux',
     everyVenueHint: 'Rôles dans tous les lieux, y compris ceux ajoutés plus tard. Seul un administrateur de l’organisation les attribue.',
     venueHint: 'Rôles dans ce lieu seulement.',
-    none: 'Aucun rôle ici',
-    at: '{{venue}} : {{roles}}',
-    columns: 'Rôles par lieu',
   },
 };
