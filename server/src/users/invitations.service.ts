@@ -62,8 +62,8 @@ export class InvitationsService {
         expiresAt: invitation.expiresAt,
       }, transaction);
       await this.audit.record({
-        actorId: admin.id, action: 'user.invited', targetType: 'invitation', targetId: invitation.id,
-        detail: { email: dto.email, venueId, roles: dto.roles, locales: dto.locales }, clientAddress,
+        actorId: admin.id, action: 'user.invited', targetType: 'invitation', targetId: invitation.id, venueId: venueId ?? undefined,
+        detail: { email: dto.email, roles: dto.roles, locales: dto.locales }, clientAddress,
       }, transaction);
       return toInvitationView(invitation);
     });
@@ -99,7 +99,7 @@ export class InvitationsService {
       invitation.acceptedAt = this.clock.now();
       await invitation.save({ transaction });
       await this.audit.record({
-        actorId: user.id, action: 'user.invitation-accepted', targetType: 'user', targetId: user.id,
+        actorId: user.id, action: 'user.invitation-accepted', targetType: 'user', targetId: user.id, venueId: invitation.venueId ?? undefined,
         detail: { invitationId: invitation.id }, clientAddress,
       }, transaction);
       return user;

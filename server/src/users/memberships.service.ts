@@ -54,7 +54,7 @@ export class MembershipsService {
       const from = { roles: before?.roles ?? [], locales: before?.locales ?? [] };
       const to = { roles: next?.roles ?? [], locales: next?.locales ?? [] };
       const record = (action: 'user.roles-changed' | 'user.locales-changed', detail: Record<string, unknown>) =>
-        this.audit.record({ actorId: admin.id, action, targetType: 'user', targetId: userId, detail: { venueId, ...detail }, clientAddress }, transaction);
+        this.audit.record({ actorId: admin.id, action, targetType: 'user', targetId: userId, venueId, detail, clientAddress }, transaction);
       if (!sameSet(from.roles, to.roles)) await record('user.roles-changed', { from: from.roles, to: to.roles });
       if (!sameSet(from.locales, to.locales)) await record('user.locales-changed', { from: from.locales, to: to.locales });
 

@@ -35,7 +35,7 @@ await memberAt(t, south.id, ['educator'], [], bothEducator.user);
 const memberships = t.app.get<typeof VenueMembership>(getModelToken(VenueMembership));
 const auditOf = async (id: number) =>
   (await t.app.get<typeof AuditEvent>(getModelToken(AuditEvent)).findAll({ where: { targetType: 'user', targetId: String(id) }, order: [['id', 'ASC']] }))
-    .map((e) => ({ action: e.action, actorId: e.actorId, detail: e.detail }));
+    .map((e) => ({ action: e.action, actorId: e.actorId, venueId: e.venueId, detail: e.detail }));
 const put = (headers: Record<string, string>, userId: number, venueId: number, body: object) =>
   request(t.http).put(`/api/users/${userId}/memberships/${venueId}`).set(headers).send(body);
 const names = (res: request.Response) => (res.body.items as UserView[]).map((u) => u.name.replace(`${tag} `, '')).sort();
@@ -55,11 +55,11 @@ describe('PUT and DELETE /api/users/:id/memberships/:venueId by the organisation
     expect(await memberships.count({ where: { userId: person.id } })).toBe(0);
 
     expect(await auditOf(person.id)).toEqual([
-      { action: 'user.roles-changed', actorId: orgAdmin.id, detail: { venueId: south.id, from: [], to: ['translator'] } },
-      { action: 'user.locales-changed', actorId: orgAdmin.id, detail: { venueId: south.id, from: [], to: ['pt-BR'] } },
-      { action: 'user.roles-changed', actorId: orgAdmin.id, detail: { venueId: south.id, from: ['translator'], to: ['translator', 'educator'] } },
-      { action: 'user.roles-changed', actorId: orgAdmin.id, detail: { venueId: south.id, from: ['translator', 'educator'], to: [] } },
-      { action: 'user.locales-changed', actorId: orgAdmin.id, detail: { venueId: south.id, from: ['pt-BR'], to: [] } },
+      { action: 'user.roles-changed', actorId: orgAdmin.id, venueId: south.id, detail: { from: [], to: ['translator'] } },
+      { action: 'user.locales-changed', actorId: orgAdmin.id, venueId: south.id, detail: { from: [], to: ['pt-BR'] } },
+      { action: 'user.roles-changed', actorId: orgAdmin.id, venueId: south.id, detail: { from: ['translator'], to: ['translator', 'educator'] } },
+      { action: 'user.roles-changed', actorId: orgAdmin.id, venueId: south.id, detail: { from: ['translator', 'educator'], to: [] } },
+      { action: 'user.locales-changed', actorId: orgAdmin.id, venueId: south.id, detail: { from: ['pt-BR'], to: [] } },
     ]);
   });
 
