@@ -54,6 +54,10 @@ describe('languages are picked by name', () => {
     await expect.poll(() => source.inputValue()).toBe('British English (en-GB)');
 
     const targets = dialog.getByRole('combobox', { name: 'Translated into' });
+    // A language found by its own name, typed in its own script ("العربية", CLDR's name of Arabic in Arabic).
+    await targets.pressSequentially('عرب');
+    await expect.poll(() => optionTexts(page, targets)).toEqual(expect.arrayContaining(['Arabic ar']));
+    await targets.fill('');
     await targets.pressSequentially('portug');
     await expect.poll(() => optionTexts(page, targets)).toEqual(expect.arrayContaining(['Brazilian Portuguese pt-BR', 'Portuguese pt']));
     await shoot(page, 'language-picker');

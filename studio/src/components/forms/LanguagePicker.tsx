@@ -111,11 +111,14 @@ function SingleLanguagePicker({ value, onChange, disabled, options, optionOf, la
 
 function MultipleLanguagePicker({ value, onChange, disabled, options, optionOf, labelOf, uiLanguage, noMatch, placeholder, removeLabel, chosenLabel, ...aria }: MultiplePickerProps & Internals & { removeLabel: (language: string) => string; chosenLabel: string }) {
   const [query, setQuery] = useState('');
+  const [open, setOpen] = useState(false);
   const found = searchLanguages(options, query, uiLanguage).filter((option) => !value.includes(option.tag));
   return (
     <TagPicker
       selectedOptions={[...value]}
       disabled={disabled}
+      open={open}
+      onOpenChange={(_event, data) => setOpen(data.open)}
       onOptionSelect={(_event, data) => {
         if (data.value === NO_MATCH) return;
         onChange(data.selectedOptions);
@@ -138,7 +141,8 @@ function MultipleLanguagePicker({ value, onChange, disabled, options, optionOf, 
           placeholder={value.length === 0 ? placeholder : undefined}
           aria-label={aria['aria-label']}
           aria-labelledby={aria['aria-labelledby']}
-          onChange={(event) => setQuery(event.target.value)}
+          // Text typed through an input method (Arabic, say) opens the list too, not only key presses.
+          onChange={(event) => { setQuery(event.target.value); setOpen(true); }}
         />
       </TagPickerControl>
       <TagPickerList>
