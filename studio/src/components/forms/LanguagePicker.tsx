@@ -4,6 +4,7 @@ import {
 } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
 import { languageOption, languageOptions, searchLanguages, type LanguageOption } from './language-options';
+import { NO_MATCH, useSearchCombobox } from './search-combobox';
 
 const useStyles = makeStyles({
   tag: { color: tokens.colorNeutralForeground3, marginInlineStart: tokens.spacingHorizontalS, fontFamily: tokens.fontFamilyMonospace, fontSize: tokens.fontSizeBase200 },
@@ -33,9 +34,6 @@ interface MultiplePickerProps extends CommonProps {
 }
 
 export type LanguagePickerProps = SinglePickerProps | MultiplePickerProps;
-
-/** The value an option list answers with while nothing matches; never a tag. */
-const NO_MATCH = '';
 
 /**
  * Every field that takes a language: a search box that finds languages by their name in the
@@ -76,9 +74,8 @@ function OptionContent({ option }: { option: LanguageOption }): ReactNode {
 }
 
 function SingleLanguagePicker({ value, onChange, disabled, options, optionOf, labelOf, uiLanguage, noMatch, placeholder, ...aria }: SinglePickerProps & Internals) {
-  // null while the person is not searching, so the box shows the chosen language's name.
-  const [query, setQuery] = useState<string | null>(null);
-  const [open, setOpen] = useState(false);
+  // query is null while the person is not searching, so the box shows the chosen language's name.
+  const { query, props: searching } = useSearchCombobox(onChange);
   const found = query === null ? options : searchLanguages(options, query, uiLanguage);
   return (
     <Combobox
@@ -88,19 +85,7 @@ function SingleLanguagePicker({ value, onChange, disabled, options, optionOf, la
       placeholder={placeholder}
       aria-label={aria['aria-label']}
       aria-labelledby={aria['aria-labelledby']}
-      open={open}
-      onOpenChange={(_event, data) => {
-        setOpen(data.open);
-        if (!data.open) setQuery(null);
-      }}
-      // Typing opens the list, as a search box does; Fluent's combobox opens only on click or arrow keys.
-      onChange={(event) => { setQuery(event.target.value); setOpen(true); }}
-      // Fluent also reports a cleared selection here while the person types; only a chosen language ends the search.
-      onOptionSelect={(_event, data) => {
-        if (!data.optionValue || data.optionValue === NO_MATCH) return;
-        onChange(data.optionValue);
-        setQuery(null);
-      }}
+      {...searching}
     >
       {found.length === 0
         ? <Option key="no-match" value={NO_MATCH} text="" disabled>{noMatch(query ?? '')}</Option>

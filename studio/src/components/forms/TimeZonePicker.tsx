@@ -1,14 +1,12 @@
-import { useMemo, useState } from 'react';
+import { useMemo } from 'react';
 import { Combobox, makeStyles, Option, tokens } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
+import { NO_MATCH, useSearchCombobox } from './search-combobox';
 import { searchTimeZones, timeZoneOptions, type TimeZoneOption } from './time-zone-options';
 
 const useStyles = makeStyles({
   offset: { color: tokens.colorNeutralForeground3, marginInlineStart: tokens.spacingHorizontalS, fontFamily: tokens.fontFamilyMonospace, fontSize: tokens.fontSizeBase200 },
 });
-
-/** The value the option list answers with while nothing matches; never a zone. */
-const NO_MATCH = '';
 
 const labelOf = (option: TimeZoneOption) => `${option.zone} (${option.offset})`;
 
@@ -20,9 +18,8 @@ export function TimeZonePicker({ value, onChange, disabled }: { value: string; o
   const { t } = useTranslation();
   const styles = useStyles();
   const options = useMemo(() => timeZoneOptions(new Date(), value), [value]);
-  // null while the person is not searching, so the box shows the chosen zone.
-  const [query, setQuery] = useState<string | null>(null);
-  const [open, setOpen] = useState(false);
+  // query is null while the person is not searching, so the box shows the chosen zone.
+  const { query, props: searching } = useSearchCombobox(onChange);
   const found = query === null ? options : searchTimeZones(options, query);
   const chosen = options.find((option) => option.zone === value);
   return (
@@ -31,19 +28,7 @@ export function TimeZonePicker({ value, onChange, disabled }: { value: string; o
       selectedOptions={value ? [value] : []}
       disabled={disabled}
       placeholder={t('settings.timeZonePlaceholder')}
-      open={open}
-      onOpenChange={(_event, data) => {
-        setOpen(data.open);
-        if (!data.open) setQuery(null);
-      }}
-      // Typing opens the list, as a search box does; Fluent's combobox opens only on click or arrow keys.
-      onChange={(event) => { setQuery(event.target.value); setOpen(true); }}
-      // Fluent also reports a cleared selection here while the person types; only a chosen zone ends the search.
-      onOptionSelect={(_event, data) => {
-        if (!data.optionValue || data.optionValue === NO_MATCH) return;
-        onChange(data.optionValue);
-        setQuery(null);
-      }}
+      {...searching}
     >
       {found.length === 0
         ? <Option key="no-match" value={NO_MATCH} text="" disabled>{t('settings.timeZoneNoMatch', { query: query ?? '' })}</Option>
