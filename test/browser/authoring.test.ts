@@ -222,19 +222,3 @@ describe('the panel strip', () => {
     expect(await cards().first().textContent()).toContain(typed);
   });
 });
-
-describe('keyboard shortcuts', () => {
-  it('lists them on a sheet opened by ? outside text, and ? typed in the panel text stays text', async () => {
-    await editorText().click();
-    await page.keyboard.type('?');
-    await eventually(() => editorText().textContent()).toContain('?');
-    expect(await page.getByRole('dialog', { name: 'Keyboard shortcuts' }).count()).toBe(0);
-    await page.getByRole('heading', { level: 1 }).click();
-    await page.keyboard.press('?');
-    const sheet = page.getByRole('dialog', { name: 'Keyboard shortcuts' });
-    await sheet.getByRole('heading', { name: 'Panel list' }).waitFor();
-    expect(await sheet.getByText('Move the chosen panel earlier or later').count()).toBe(1);
-    await page.keyboard.press('Escape');
-    await eventually(() => sheet.count()).toBe(0);
-  });
-});
