@@ -86,7 +86,7 @@ describe('revisionHash', () => {
     const base = story();
     const reordered = { ...base, panels: [{ docs: { fr: imageDoc('32'), en: imageDoc('31') }, wordBudget: 60, position: 2, id: 12 }, base.panels[1]!] };
     const widget = reordered.panels[1].docs.en!.content![2]!;
-    widget.attrs = { params: { kineticFriction: 0.6, staticFriction: 0.85, angleDeg: 30, massKg: 10 }, widgetId: 'ridge-slope', widgetType: 'slope-force' };
+    widget.attrs = { params: { kineticFriction: 0.6, staticFriction: 0.85, angleDeg: 30, massKg: 10 }, visitorModelCard: false, widgetId: 'ridge-slope', widgetType: 'slope-force' };
     expect(await revisionHash(buildRevisionSnapshot(reordered))).toBe(await revisionHash(buildRevisionSnapshot(story())));
   });
 
