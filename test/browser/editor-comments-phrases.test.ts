@@ -35,14 +35,17 @@ const settled = { timeout: 10_000 };
 let browser: Browser;
 let curator: Page;
 let storyId: number;
+let commentId: number;
+let asEducator: Awaited<ReturnType<typeof apiAs>>;
 
 beforeAll(async () => {
-  const [asCurator, asEducator] = await Promise.all([apiAs('curator@demo.test'), apiAs('educator@demo.test')]);
+  const asCurator = await apiAs('curator@demo.test');
+  asEducator = await apiAs('educator@demo.test');
   storyId = (await asCurator<{ id: number }>('POST', '/stories', { title, audience: 'family' })).id;
   const panel = await asCurator<{ id: number }>('POST', `/stories/${storyId}/panels`, { doc: panelDoc, position: 0, wordBudget: 60 });
   const submitted = await asCurator<{ revisionId: number }>('POST', `/stories/${storyId}/submit`, { note: 'Please check the friction panel.' });
   const from = firstLine.indexOf('grips');
-  await asEducator('POST', `/revisions/${submitted.revisionId}/comments`, { panelId: panel.id, range: { from, to: from + 'grips'.length, quote: 'grips' }, body: commentBody });
+  commentId = (await asEducator<{ id: number }>('POST', `/revisions/${submitted.revisionId}/comments`, { panelId: panel.id, range: { from, to: from + 'grips'.length, quote: 'grips' }, body: commentBody })).id;
   await asEducator('POST', `/revisions/${submitted.revisionId}/reviews`, { verdict: 'request_changes', note: 'See my comment on the first panel.' });
 
   browser = await launchBrowser();
@@ -65,14 +68,17 @@ describe('review comments in the story editor', () => {
     if (shots) await curator.screenshot({ path: `${shots}/editor-comments.png`, fullPage: true });
   });
 
-  it('lets the curator reply and resolve there, after which the words are no longer marked', async () => {
+  it('lets the curator reply there; once the educator who wrote it resolves it, the words are no longer marked', async () => {
     const comments = curator.getByTestId('draft-comments');
     await comments.getByRole('button', { name: 'Reply' }).click();
     await comments.getByRole('textbox').fill(reply);
     await comments.getByRole('button', { name: 'Send reply' }).click();
     await comments.getByText(reply).waitFor();
-    await comments.getByRole('button', { name: 'Resolve' }).click();
-    await curator.getByRole('tab', { name: 'Comments (0)' }).waitFor();
+    // A comment is resolved by its author or a reviewer of the revision, so the curator is not offered it.
+    expect(await comments.getByRole('button', { name: 'Resolve' }).count()).toBe(0);
+    await asEducator('PATCH', `/comments/${commentId}`, { resolved: true });
+    await curator.reload();
+    await curator.getByRole('tab', { name: 'Comments (0)' }).click();
     await expect.poll(() => curator.locator('.ProseMirror .mp-comment-anchor').count(), settled).toBe(0);
     await comments.getByText('No open comments on this panel.').waitFor();
   });

@@ -41,7 +41,7 @@ function CommentBody({ comment }: { comment: CommentView }) {
   );
 }
 
-function Thread({ comment, replies, revisionId, canComment }: { comment: CommentView; replies: CommentView[]; revisionId: number; canComment: boolean }) {
+function Thread({ comment, replies, revisionId }: { comment: CommentView; replies: CommentView[]; revisionId: number }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const shared = useReviewStyles();
@@ -59,12 +59,15 @@ function Thread({ comment, replies, revisionId, canComment }: { comment: Comment
       {resolved ? <Text className={shared.muted}>{t('comments.resolvedBy', { name: comment.resolvedBy?.name ?? '' })}</Text> : null}
       {replying ? (
         <CommentComposer revisionId={revisionId} anchor={{ parentId: comment.id }} label={t('comments.reply')} submitLabel={t('comments.sendReply')} onDone={() => setReplying(false)} />
-      ) : canComment ? (
+      ) : comment.can.reply || comment.can.resolve ? (
+        // The comment's own `can`: its author or a reviewer of the revision resolves it.
         <div className={styles.actions}>
-          {resolved ? null : <Button size="small" onClick={() => setReplying(true)}>{t('comments.reply')}</Button>}
-          <Button size="small" disabled={resolve.isPending} onClick={() => resolve.mutate({ id: comment.id, resolved: !resolved })}>
-            {resolved ? t('comments.reopen') : t('comments.resolve')}
-          </Button>
+          {resolved || !comment.can.reply ? null : <Button size="small" onClick={() => setReplying(true)}>{t('comments.reply')}</Button>}
+          {comment.can.resolve ? (
+            <Button size="small" disabled={resolve.isPending} onClick={() => resolve.mutate({ id: comment.id, resolved: !resolved })}>
+              {resolved ? t('comments.reopen') : t('comments.resolve')}
+            </Button>
+          ) : null}
         </div>
       ) : null}
       {resolve.isError ? <FormAlert intent="error">{describeError(t, resolve.error)}</FormAlert> : null}
@@ -96,7 +99,7 @@ export function CommentThreads({ revisionId, comments, panelId, canComment, rang
       {threads.length > 0 ? (
         <ul className={styles.threads}>
           {threads.map((comment) => (
-            <Thread key={comment.id} comment={comment} replies={byTime.filter((reply) => reply.parentId === comment.id)} revisionId={revisionId} canComment={canComment} />
+            <Thread key={comment.id} comment={comment} replies={byTime.filter((reply) => reply.parentId === comment.id)} revisionId={revisionId} />
           ))}
         </ul>
       ) : (
