@@ -9,6 +9,9 @@ let admin: Awaited<ReturnType<typeof apiAs>>;
 let venue: VenueView;
 let translator: UserView;
 
+/** The demo translator's languages at the demo venue, as the seed gives them. */
+const demoLocales = () => translator.memberships.find((membership) => membership.venueId === venue.id)?.locales ?? [];
+
 /** Waits for a state the page reaches by itself, without a fixed sleep. */
 const eventually = <T>(read: () => Promise<T> | T) => expect.poll(read, { timeout: 15_000, interval: 100 });
 
@@ -18,7 +21,8 @@ beforeAll(async () => {
   venue = (await admin<ListPage<VenueView>>('GET', '/venues?pageSize=100')).items.find((candidate) => candidate.slug === 'basalt-point')!;
   translator = (await admin<ListPage<UserView>>('GET', '/users?q=translator@demo.test')).items[0]!;
   await admin('PATCH', `/venues/${venue.id}`, { targetLocales: [...venue.targetLocales, 'ar'] });
-  await admin('PATCH', `/users/${translator.id}`, { locales: [...translator.locales, 'ar'] });
+  // The demo translator translates at the demo venue through a membership there: Arabic joins its languages.
+  await admin('PUT', `/users/${translator.id}/memberships/${venue.id}`, { roles: ['translator'], locales: [...demoLocales(), 'ar'] });
   browser = await launchBrowser();
   page = await (await newContext(browser)).newPage();
   await signIn(page, 'translator@demo.test');
@@ -29,7 +33,7 @@ afterAll(async () => {
   // Choosing a language in the menu saves it to the account: the demo translator reads English again.
   const asTranslator = await apiAs('translator@demo.test');
   await asTranslator('PATCH', '/auth/me', { uiLanguage: 'en' });
-  await admin('PATCH', `/users/${translator.id}`, { locales: translator.locales });
+  await admin('PUT', `/users/${translator.id}/memberships/${venue.id}`, { roles: ['translator'], locales: demoLocales() });
   await admin('PATCH', `/venues/${venue.id}`, { targetLocales: venue.targetLocales });
 });
 

@@ -1,0 +1,14 @@
+import type { Role } from '@mantlepiece/shared';
+import type { apiAs } from './browser';
+
+type Api = Awaited<ReturnType<typeof apiAs>>;
+
+/**
+ * Makes a demo person a member of a venue a test set up, holding these roles (and translator
+ * locales) there, as an admin does on the People page: demo staff belong to the demo venue only.
+ */
+export async function joinVenue(asAdmin: Api, email: string, venueId: number, roles: Role[], locales: string[] = []): Promise<void> {
+  const [person] = (await asAdmin<{ items: { id: number; email: string }[] }>('GET', `/users?q=${encodeURIComponent(email)}`)).items.filter((user) => user.email === email);
+  if (!person) throw new Error(`no account ${email}`);
+  await asAdmin('PUT', `/users/${person.id}/memberships/${venueId}`, { roles, locales });
+}
