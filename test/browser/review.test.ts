@@ -5,6 +5,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { baseUrl, demoPassword, launchBrowser, newContext, signIn } from '../support/browser.js';
 import { publishedRelease } from '../support/releases.js';
+import { joinVenue } from '../support/venues.js';
 
 // A fresh title per run, so the test never meets a story an earlier run left behind.
 const title = `How fast plates move ${Date.now().toString(36)}`;
@@ -183,6 +184,7 @@ describe('an approved, translated, released story is fixed in the browser', () =
   const badge = (page: Page) => page.locator('header [data-story-state]').first().textContent();
 
   let galleryId: number;
+  let demoVenueId: number;
   type Unit = { unitId: string; source: string; status: string; version: number };
 
   /** The translator puts every French unit that is not translated from its current source into French. */
@@ -211,6 +213,11 @@ describe('an approved, translated, released story is fixed in the browser', () =
     const venue = await asAdmin<{ id: number }>('POST', '/venues', { name: `Typo venue ${suffix}`, slug: `typo-${suffix}`, sourceLocale: 'en', targetLocales: ['fr'], fallbackToSource: false });
     galleryId = (await asAdmin<{ id: number }>('POST', '/galleries', { venueId: venue.id, name: 'Ocean hall' })).id;
     const exhibit = await asAdmin<{ id: number }>('POST', '/exhibits', { galleryId, name: 'The moving sea floor' });
+    // The demo staff act here through memberships of this venue too, so stories they start below name their venue.
+    demoVenueId = (await asAdmin<{ items: { id: number; slug: string }[] }>('GET', '/venues?pageSize=100')).items.find((candidate) => candidate.slug === 'basalt-point')!.id;
+    for (const [email, roles, locales] of [
+      ['curator@demo.test', ['curator'], []], ['educator@demo.test', ['educator'], []], ['translator@demo.test', ['translator'], ['fr']], ['technician@demo.test', ['technician'], []],
+    ] as const) await joinVenue(asAdmin, email, venue.id, [...roles], [...locales]);
     const asCurator = await apiAs('curator@demo.test');
     const asEducator = await apiAs('educator@demo.test');
     typoStoryId = (await asCurator<{ id: number }>('POST', '/stories', { title: typoTitle, audience: 'family', exhibitId: exhibit.id })).id;
@@ -239,8 +246,9 @@ describe('an approved, translated, released story is fixed in the browser', () =
     await curator.getByText('Revision 2 is submitted', { exact: false }).waitFor();
     await expect.poll(() => badge(curator), settled).toBe('Approved · new revision in review');
 
-    await educator.goto('/reviews');
-    await educator.getByRole('link', { name: typoTitle }).click();
+    // The typo venue is not the educator's first, so the queue (of the studio's current venue) does not list it: open the revision itself.
+    const [submitted] = await (await apiAs('educator@demo.test'))<{ id: number }[]>('GET', `/stories/${typoStoryId}/revisions`);
+    await educator.goto(`/reviews/${submitted!.id}`);
     await educator.getByRole('heading', { level: 1, name: `${typoTitle} · revision 2` }).waitFor();
     await educator.locator('[data-comparison-basis="approved"]').getByRole('link', { name: 'Revision 1' }).waitFor();
     const marked = async (tag: 'ins' | 'del') => (await educator.locator(`[data-text-diff] ${tag}`).allTextContents()).join(' ');
@@ -267,7 +275,7 @@ describe('an approved, translated, released story is fixed in the browser', () =
 
   it('the curator withdraws a submission no educator has decided on, and can write again', async () => {
     const asCurator = await apiAs('curator@demo.test');
-    const story = await asCurator<{ id: number }>('POST', '/stories', { title: `Withdrawn ${Date.now().toString(36)}`, audience: 'family' });
+    const story = await asCurator<{ id: number }>('POST', '/stories', { title: `Withdrawn ${Date.now().toString(36)}`, audience: 'family', venueId: demoVenueId });
     await asCurator('POST', `/stories/${story.id}/panels`, { doc: panelDoc(fixed), position: 0, wordBudget: 60 });
     await asCurator('POST', `/stories/${story.id}/submit`, {});
     await curator.goto(`/stories/${story.id}`);
@@ -284,7 +292,7 @@ describe('an approved, translated, released story is fixed in the browser', () =
 
   it('does not offer Submit on a draft whose preflight has a blocker, and says which panel to fix', async () => {
     const asCurator = await apiAs('curator@demo.test');
-    const blocked = await asCurator<{ id: number }>('POST', '/stories', { title: `Empty panel ${Date.now().toString(36)}`, audience: 'family' });
+    const blocked = await asCurator<{ id: number }>('POST', '/stories', { title: `Empty panel ${Date.now().toString(36)}`, audience: 'family', venueId: demoVenueId });
     await asCurator('POST', `/stories/${blocked.id}/panels`, { doc: panelDoc(fixed), position: 0, wordBudget: 60 });
     await asCurator('POST', `/stories/${blocked.id}/panels`, { doc: { type: 'doc', content: [{ type: 'paragraph' }] }, position: 1, wordBudget: 60 });
     await curator.goto(`/stories/${blocked.id}`);
