@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, onTestFinished } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { apiAs, baseUrl, launchBrowser, newContext, signIn } from '../support/browser';
-import { joinVenue } from '../support/venues';
+import { joinVenue, leaveVenue } from '../support/venues';
 
 // Expected states (nobody signed in yet, a page left while its requests run, a kiosk whose gallery
 // has nothing published) are answered as states, so the browser's console stays free of errors and
@@ -62,6 +62,7 @@ describe('the browser console has no errors', () => {
     const gallery = await asAdmin<{ id: number }>('POST', '/galleries', { venueId: venue.id, name: 'Empty hall' });
     const station = await asAdmin<{ id: number }>('POST', '/stations', { galleryId: gallery.id, name: `Empty bench ${suffix}`, screenWidthPx: 1920, screenHeightPx: 1080, orientation: 'landscape', mountingHeightMm: 1100 });
     await joinVenue(asAdmin, 'technician@demo.test', venue.id, ['technician']);
+    onTestFinished(() => leaveVenue(asAdmin, 'technician@demo.test', venue.id));
     const context = await browser.newContext({ baseURL: baseUrl, locale: 'en-GB', viewport: { width: 1920, height: 1080 }, hasTouch: true });
     const screen = await context.newPage();
     const errors = consoleErrors(screen);

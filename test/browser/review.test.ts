@@ -5,7 +5,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { baseUrl, demoPassword, launchBrowser, newContext, signIn } from '../support/browser.js';
 import { publishedRelease } from '../support/releases.js';
-import { joinVenue } from '../support/venues.js';
+import { joinVenue, leaveVenue } from '../support/venues.js';
 
 // A fresh title per run, so the test never meets a story an earlier run left behind.
 const title = `How fast plates move ${Date.now().toString(36)}`;
@@ -185,6 +185,11 @@ describe('an approved, translated, released story is fixed in the browser', () =
 
   let galleryId: number;
   let demoVenueId: number;
+  let typoVenueId: number;
+  afterAll(async () => {
+    const asAdmin = await apiAs('admin@demo.test');
+    if (typoVenueId) for (const email of ['curator@demo.test', 'educator@demo.test', 'translator@demo.test', 'technician@demo.test']) await leaveVenue(asAdmin, email, typoVenueId);
+  });
   type Unit = { unitId: string; source: string; status: string; version: number };
 
   /** The translator puts every French unit that is not translated from its current source into French. */
@@ -218,6 +223,7 @@ describe('an approved, translated, released story is fixed in the browser', () =
     for (const [email, roles, locales] of [
       ['curator@demo.test', ['curator'], []], ['educator@demo.test', ['educator'], []], ['translator@demo.test', ['translator'], ['fr']], ['technician@demo.test', ['technician'], []],
     ] as const) await joinVenue(asAdmin, email, venue.id, [...roles], [...locales]);
+    typoVenueId = venue.id;
     const asCurator = await apiAs('curator@demo.test');
     const asEducator = await apiAs('educator@demo.test');
     typoStoryId = (await asCurator<{ id: number }>('POST', '/stories', { title: typoTitle, audience: 'family', exhibitId: exhibit.id })).id;

@@ -12,3 +12,9 @@ export async function joinVenue(asAdmin: Api, email: string, venueId: number, ro
   if (!person) throw new Error(`no account ${email}`);
   await asAdmin('PUT', `/users/${person.id}/memberships/${venueId}`, { roles, locales });
 }
+
+/** Ends that membership again, so the demo person belongs to the demo venue only for the suites after. */
+export async function leaveVenue(asAdmin: Api, email: string, venueId: number): Promise<void> {
+  const [person] = (await asAdmin<{ items: { id: number; email: string }[] }>('GET', `/users?q=${encodeURIComponent(email)}`)).items.filter((user) => user.email === email);
+  if (person) await asAdmin('DELETE', `/users/${person.id}/memberships/${venueId}`);
+}
