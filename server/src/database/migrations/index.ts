@@ -21,6 +21,7 @@ import * as queuedRenditions from './0731-queued-renditions.js';
 import * as venueBoundaries from './0800-venue-boundaries.js';
 import * as venueTimeZones from './0810-venue-time-zones.js';
 import * as canonicalLanguageTags from './0820-canonical-language-tags.js';
+import * as restorableDeletions from './0830-restorable-deletions.js';
 
 interface MigrationModule {
   up(qi: QueryInterface): Promise<void>;
@@ -51,6 +52,7 @@ const modules: [string, MigrationModule][] = [
   ['0800-venue-boundaries', venueBoundaries],
   ['0810-venue-time-zones', venueTimeZones],
   ['0820-canonical-language-tags', canonicalLanguageTags],
+  ['0830-restorable-deletions', restorableDeletions],
 ];
 
 export const migrations = modules.map(([name, m]) => ({
