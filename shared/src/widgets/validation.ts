@@ -66,5 +66,24 @@ export function validateWith<P>(schema: z.ZodType<P>, input: unknown, widgetName
   }
 }
 
-/** Cross-field rules run only once every field is valid on its own, so each problem is reported once. */
-export const whenFieldsValid = { when: (payload: { issues: unknown[] }) => payload.issues.length === 0 };
+const OTHER_RULES_ISSUES = new Set(['unrecognized_keys', 'custom']);
+
+interface RulePayload {
+  value: unknown;
+  issues: readonly { code?: string; path?: readonly PropertyKey[] }[];
+}
+
+/**
+ * A cross-field rule runs once the settings it reads are each valid on their own, so each problem
+ * is reported once, while a wrong setting elsewhere does not hide it: the form shows every problem
+ * at its field in one go. An unknown extra setting or another cross-field rule's finding never stops a rule.
+ */
+export function whenFieldsValid(...fields: string[]) {
+  const reads = new Set(fields);
+  return {
+    when: ({ value, issues }: RulePayload) =>
+      typeof value === 'object' &&
+      value !== null &&
+      !issues.some((issue) => !OTHER_RULES_ISSUES.has(issue.code ?? '') && (!issue.path?.length || reads.has(String(issue.path[0])))),
+  };
+}

@@ -145,6 +145,11 @@ describe('convection cell: validation', () => {
     expect(errors[0]?.message).toContain('Pick a playback speed of at most 2, or a coarser grid.');
   });
 
+  it('reports a rule over the settings it reads even while an unrelated setting is wrong (an unknown ramp does not hide the frame budget)', () => {
+    const errors = errorsOf(withParams({ colourRamp: 'rainbow' as never, nx: 128, nz: 128, playbackSpeed: 4 }));
+    expect(errors.map((error) => error.path)).toEqual([['colourRamp'], ['playbackSpeed']]);
+  });
+
   it('refuses a grid too fine even at the slowest speed, pointing at the grid', () => {
     const errors = errorsOf(withParams({ nx: 512, nz: 512, aspectRatio: 1, playbackSpeed: 0.25 }));
     expect(errors.map((error) => error.path)).toEqual([['nx']]);

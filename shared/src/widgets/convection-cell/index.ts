@@ -5,7 +5,7 @@ import { formatLimit, validateWith, whenFieldsValid } from '../validation.js';
 import { deriveConvectionCell, type ConvectionCellDerived } from './derived.js';
 import { convectionCellDefaults, convectionCellFields, type ConvectionCellParams } from './params.js';
 import { convectionCellOutputs } from './outputs.js';
-import { checkConvectionCell } from './rules.js';
+import { checkFrameBudget, checkResolution, checkSource } from './rules.js';
 import { physicalGroup } from './upper-mantle.js';
 
 export * from './colour-ramps.js';
@@ -16,7 +16,12 @@ export * from './params.js';
 export * from './solver.js';
 export * from './upper-mantle.js';
 
-export const convectionCellSchema = convectionCellFields.superRefine(checkConvectionCell, whenFieldsValid).meta({ title: 'Convection cell' });
+/** The rules no single field can check, each run once the settings it reads are valid on their own. */
+export const convectionCellSchema = convectionCellFields
+  .superRefine(checkSource, whenFieldsValid('rayleigh', 'physical', 'units'))
+  .superRefine(checkResolution, whenFieldsValid('rayleigh', 'physical', 'aspectRatio', 'nx', 'nz'))
+  .superRefine(checkFrameBudget, whenFieldsValid('nx', 'nz', 'playbackSpeed'))
+  .meta({ title: 'Convection cell' });
 
 export function formatMillionYears(myr: number, locale: string): string {
   return interpolate(widgetStrings(locale).convectionCell.millionYears, { value: formatQuantity(myr, '', locale) });

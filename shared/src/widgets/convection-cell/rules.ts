@@ -19,36 +19,46 @@ type Context = z.core.$RefinementCtx<ConvectionCellParams>;
 const largestGrid = GRID_SIZES[GRID_SIZES.length - 1]!;
 const percent = (fraction: number) => `${(fraction * 100).toPrecision(2)} %`;
 
-function checkSource(params: ConvectionCellParams, ctx: Context): number | undefined {
+type Problem = { path: string[]; message: string };
+
+/** Ra as the settings give it, or why they give none: the number itself or the physical properties, never both or neither. */
+function sourceOf(params: ConvectionCellParams): { rayleigh?: number; problems: Problem[] } {
   if (params.rayleigh !== undefined && params.physical) {
-    ctx.addIssue({ code: 'custom', path: ['physical'], message: 'Set either the Rayleigh number Ra or the physical properties it is computed from, not both.' });
-    return undefined;
+    return { problems: [{ path: ['physical'], message: 'Set either the Rayleigh number Ra or the physical properties it is computed from, not both.' }] };
   }
   if (params.rayleigh === undefined && !params.physical) {
-    ctx.addIssue({ code: 'custom', path: ['rayleigh'], message: 'Set the Rayleigh number Ra, or the physical properties it is computed from.' });
-    return undefined;
+    return { problems: [{ path: ['rayleigh'], message: 'Set the Rayleigh number Ra, or the physical properties it is computed from.' }] };
   }
+  const problems: Problem[] = [];
   if (params.units === 'physical' && !params.physical) {
-    ctx.addIssue({
-      code: 'custom',
+    problems.push({
       path: ['units'],
       message: 'Physical units need the physical properties (the depth and diffusivity set the time and speed scales). Set them, or choose non-dimensional units.',
     });
   }
   const rayleigh = rayleighOf(params);
   if (params.physical && !(rayleigh >= RAYLEIGH_RANGE.min && rayleigh <= RAYLEIGH_RANGE.max)) {
-    ctx.addIssue({
-      code: 'custom',
+    problems.push({
       path: ['physical'],
       message: `These properties give Ra = ${formatLimit(rayleigh)}; the convection cell handles Ra from ${formatLimit(RAYLEIGH_RANGE.min)} to ${formatLimit(RAYLEIGH_RANGE.max)}. Ra grows with the depth cubed, so a shallower box or a stiffer (more viscous) rock lowers it.`,
     });
-    return undefined;
+    return { problems };
   }
-  return rayleigh;
+  return { rayleigh, problems };
 }
 
-/** The thermal boundary layer thins as Ra^(-1/3); a grid that cannot resolve it gives wrong heat flow and speeds. */
-function checkResolution(params: ConvectionCellParams, rayleigh: number, ctx: Context) {
+/** Where Ra comes from (it reads rayleigh, physical and units). */
+export function checkSource(params: ConvectionCellParams, ctx: Context) {
+  for (const problem of sourceOf(params).problems) ctx.addIssue({ code: 'custom', ...problem });
+}
+
+/**
+ * The thermal boundary layer thins as Ra^(-1/3); a grid that cannot resolve it gives wrong heat flow
+ * and speeds (it reads the source of Ra, aspectRatio, nx and nz; a wrong source is checkSource's to report).
+ */
+export function checkResolution(params: ConvectionCellParams, ctx: Context) {
+  const { rayleigh } = sourceOf(params);
+  if (rayleigh === undefined) return;
   if (rayleigh <= onsetRayleigh(params.aspectRatio)) return;
   const thickness = boundaryLayerThickness(estimatedNusselt(rayleigh, params.aspectRatio));
   const layer = `At Ra = ${formatLimit(rayleigh)} the thermal boundary layers are about ${percent(thickness)} of the depth thick`;
@@ -76,7 +86,8 @@ function gridAdvice(axis: 'nx' | 'nz', need: number): string {
   return `Even ${axis} = ${largestGrid} is too coarse: lower Ra${axis === 'nx' ? ' or make the box narrower' : ''}.`;
 }
 
-function checkFrameBudget(params: ConvectionCellParams, ctx: Context) {
+/** What one frame asks of the kiosk (it reads nx, nz and playbackSpeed). */
+export function checkFrameBudget(params: ConvectionCellParams, ctx: Context) {
   const points = params.nx * params.nz;
   const load = points * params.playbackSpeed;
   if (load <= FRAME_BUDGET_POINT_STEPS) return;
@@ -91,11 +102,4 @@ function checkFrameBudget(params: ConvectionCellParams, ctx: Context) {
       message: `${why}. Pick a grid of at most ${formatLimit(FRAME_BUDGET_POINT_STEPS * 4)} points in all (nx × nz) at the slowest playback speed, 0.25, or fewer at faster speeds.`,
     });
   }
-}
-
-/** The rules no single field can check: where Ra comes from, the grid against the boundary layer, and the frame budget. */
-export function checkConvectionCell(params: ConvectionCellParams, ctx: Context) {
-  const rayleigh = checkSource(params, ctx);
-  if (rayleigh !== undefined) checkResolution(params, rayleigh, ctx);
-  checkFrameBudget(params, ctx);
 }

@@ -45,7 +45,7 @@ export const slopeForceSchema = z
         message: `Kinetic friction μk (${params.kineticFriction}) cannot be more than static friction μs (${params.staticFriction}): a block that slides never grips harder than one at rest. Lower μk or raise μs.`,
       });
     }
-  }, whenFieldsValid)
+  }, whenFieldsValid('staticFriction', 'kineticFriction'))
   .meta({ title: 'Slope force box' });
 
 export type SlopeForceParams = z.infer<typeof slopeForceSchema>;

@@ -126,6 +126,12 @@ describe('slope force box: validation', () => {
     }
   });
 
+  it('reports every wrong setting at once: a wrong mass does not hide kinetic friction above static', () => {
+    const result = slopeForce.validate({ ...valid, massKg: 0, staticFriction: 0.4, kineticFriction: 0.5, colour: 'red' });
+    expect(result.ok).toBe(false);
+    if (!result.ok) expect(result.errors.map((error) => error.path)).toEqual([['massKg'], ['colour'], ['kineticFriction']]);
+  });
+
   it('refuses text where a number belongs, unknown settings, and a missing field, each by path', () => {
     const result = slopeForce.validate({ massKg: '10', angleDeg: 30, staticFriction: 0.85, colour: 'red' });
     expect(result.ok).toBe(false);
