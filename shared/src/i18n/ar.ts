@@ -92,5 +92,12 @@ export const ar: WidgetStrings = {
     describe:
       'صفيحة عمرها {{age}} تغوص عند خندق، وطول لوحها الغائص {{length}} بميل {{dip}}. دفع الحيد عليها نحو {{ridgePush}} لكل متر من حافة الصفيحة؛ ويشدّها اللوح بنحو {{slabPull}}، أي {{ratio}} مرة أكثر. كلاهما تقدير تقريبي، والوشاح يقاوم كثيرًا من الشدّ.',
   },
-  states: { holds: 'ثابت', slides: 'ينزلق' },
+  states: {
+    holds: 'ثابت',
+    slides: 'ينزلق',
+    'slab-pull-dominates': 'شدّ اللوح أكبر',
+    'ridge-push-dominates': 'دفع الحيد أكبر',
+    'still-sinking': 'لا يزال يهبط',
+    'levelling-off': 'يستقر',
+  },
 };

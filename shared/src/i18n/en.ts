@@ -92,5 +92,12 @@ export const en: WidgetStrings = {
     describe:
       'A plate {{age}} old sinks at a trench, its slab {{length}} long and dipping at {{dip}}. Ridge push on it is about {{ridgePush}} per metre of plate edge; the slab pulls with about {{slabPull}}, {{ratio}} times as much. Both are rough estimates, and the mantle resists much of the pull.',
   },
-  states: { holds: 'holds', slides: 'slides' },
+  states: {
+    holds: 'holds',
+    slides: 'slides',
+    'slab-pull-dominates': 'slab pull is bigger',
+    'ridge-push-dominates': 'ridge push is bigger',
+    'still-sinking': 'still sinking',
+    'levelling-off': 'levelling off',
+  },
 };

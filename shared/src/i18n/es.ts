@@ -92,5 +92,12 @@ export const es: WidgetStrings = {
     describe:
       'Una placa de {{age}} se hunde en una fosa; la parte que se hunde mide {{length}} y se inclina {{dip}}. El empuje de la dorsal es de unos {{ridgePush}} por metro de borde de placa; la placa tira con unos {{slabPull}}, {{ratio}} veces más. Son estimaciones aproximadas, y el manto frena gran parte del tirón.',
   },
-  states: { holds: 'se sostiene', slides: 'se desliza' },
+  states: {
+    holds: 'se sostiene',
+    slides: 'se desliza',
+    'slab-pull-dominates': 'el tirón es mayor',
+    'ridge-push-dominates': 'el empuje es mayor',
+    'still-sinking': 'aún se hunde',
+    'levelling-off': 'se estabiliza',
+  },
 };

@@ -92,5 +92,12 @@ export const fr: WidgetStrings = {
     describe:
       'Une plaque de {{age}} plonge à une fosse ; sa partie plongeante mesure {{length}} et s’incline de {{dip}}. La poussée à la dorsale vaut environ {{ridgePush}} par mètre de bord de plaque ; la plaque plongeante tire avec environ {{slabPull}}, soit {{ratio}} fois plus. Ce sont des estimations grossières, et le manteau freine une grande partie de la traction.',
   },
-  states: { holds: 'tient', slides: 'glisse' },
+  states: {
+    holds: 'tient',
+    slides: 'glisse',
+    'slab-pull-dominates': 'la traction est plus forte',
+    'ridge-push-dominates': 'la poussée est plus forte',
+    'still-sinking': 's’enfonce encore',
+    'levelling-off': 'se stabilise',
+  },
 };

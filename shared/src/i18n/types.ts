@@ -1,3 +1,5 @@
+import type { WidgetState } from '../widgets/types.js';
+
 /**
  * Every piece of widget text a visitor or a curator reads. Each locale file is typed by this, so a
  * new language (es, ar, …) cannot leave a string out. Templates use i18next's {{name}} placeholders,
@@ -93,7 +95,7 @@ export interface WidgetStrings {
     describe: string;
   };
   /** A widget's state as a live value shows it inside a sentence ("the block {{state}}"), so in lower case. */
-  states: { holds: string; slides: string };
+  states: Readonly<Record<WidgetState, string>>;
 }
 
 export interface WidgetResource {

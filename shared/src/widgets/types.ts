@@ -40,8 +40,12 @@ export type WidgetOutput<P, R> = OutputBase<P> &
     | { kind: 'state'; states: readonly WidgetState[]; source: 'settings'; read: (result: R, params: P) => WidgetState }
   );
 
-/** States a widget can be in, each worded in every visitor language (widgetStrings(locale).states). */
-export const WIDGET_STATES = ['holds', 'slides'] as const;
+/**
+ * States a widget can be in, each worded in every visitor language (widgetStrings(locale).states):
+ * the slope's block holds or slides; of the plate forces, slab pull or ridge push is the bigger;
+ * sea floor still sinks as √age or levels off.
+ */
+export const WIDGET_STATES = ['holds', 'slides', 'slab-pull-dominates', 'ridge-push-dominates', 'still-sinking', 'levelling-off'] as const;
 export type WidgetState = (typeof WIDGET_STATES)[number];
 
 /**

@@ -1,6 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { widgetOutputChoices } from '../../panel/live-value/live-value-reading.js';
+import { WIDGET_LOCALES, widgetStrings } from '../../i18n/index.js';
+import { phraseStatesOf } from '../../panel/live-phrase/live-phrase-reading.js';
+import { liveValueText, widgetOutputChoices } from '../../panel/live-value/live-value-reading.js';
+import type { WidgetState } from '../types.js';
 import { computePlateForces, formatForcePerMetre, plateForces, plateForcesDefaults } from './index.js';
 
 // Plate driving forces (Turcotte and Schubert, Geodynamics, chapter on plate driving forces):
@@ -127,7 +130,20 @@ describe('plate forces: model limits, description and outputs', () => {
       ['ridgePushNPerM', 'N/m'],
       ['slabPullNPerM', 'N/m'],
       ['slabToRidgeRatio', ''],
+      ['dominantForce', ''],
       ['slabTipDepthKm', 'km'],
     ]);
+  });
+
+  it('says which force is bigger, as a live value and for a live phrase, in every visitor language', () => {
+    // Defaults: 100 Myr, 700 km of slab, pull 13.58 times the push (above); without a slab only the push is left.
+    const dominant = (slabLengthKm: number) => widgetOutputChoices('plate-forces', { ...plateForcesDefaults, slabLengthKm })?.find((choice) => choice.name === 'dominantForce');
+    expect(dominant(700)).toMatchObject({ kind: 'state', value: 'slab-pull-dominates' });
+    expect(dominant(0)).toMatchObject({ kind: 'state', value: 'ridge-push-dominates' });
+    expect(phraseStatesOf({ widgetType: 'plate-forces' })).toEqual(['slab-pull-dominates', 'ridge-push-dominates']);
+    expect(liveValueText({ ok: true, state: 'slab-pull-dominates' }, { digits: 3, unit: '' }, 'en')).toBe('slab pull is bigger');
+    for (const locale of WIDGET_LOCALES) {
+      for (const state of plateForces.states!.values) expect(widgetStrings(locale).states[state as WidgetState], `${state} in ${locale}`).toMatch(/\p{L}/u);
+    }
   });
 });

@@ -6,16 +6,16 @@ import { computeSeaFloorDepth, gdh1DepthM, type SeaFloorDepthResult } from './co
 import { seaFloorDepthModel } from './model-card.js';
 import { seaFloorDepthOutputs } from './outputs.js';
 import { seaFloorDepthDefaults, seaFloorDepthSchema, type SeaFloorDepthParams } from './params.js';
+import { HALF_SPACE_HOLDS_UP_TO_MYR, seaFloorDepthStates } from './states.js';
 import { formatDepthKm, formatHeatFlow, formatThicknessKm } from './units.js';
 
 export * from './compute.js';
 export * from './model-card.js';
 export * from './outputs.js';
 export * from './params.js';
+export * from './states.js';
 export * from './units.js';
 
-/** Parsons and Sclater (1977) found depth growing as √age only up to about 70 Myr. */
-const HALF_SPACE_HOLDS_UP_TO_MYR = 70;
 /** Hardly any sea floor is older (common practice, no source). */
 const OLDEST_SEA_FLOOR_MYR = 180;
 
@@ -65,4 +65,5 @@ export const seaFloorDepth: WidgetModule<SeaFloorDepthParams, SeaFloorDepthResul
   modelLimits: seaFloorDepthLimits,
   outputs: seaFloorDepthOutputs,
   model: seaFloorDepthModel,
+  states: seaFloorDepthStates,
 };

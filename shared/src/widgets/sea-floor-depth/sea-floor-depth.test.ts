@@ -1,6 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { widgetOutputChoices } from '../../panel/live-value/live-value-reading.js';
+import { WIDGET_LOCALES, widgetStrings } from '../../i18n/index.js';
+import { phraseStatesOf } from '../../panel/live-phrase/live-phrase-reading.js';
+import { stateWordsInPlainText } from '../../panel/live-phrase/state-words.js';
+import { liveValueText, widgetOutputChoices } from '../../panel/live-value/live-value-reading.js';
+import type { WidgetState } from '../types.js';
 import { computeSeaFloorDepth, GDH1, gdh1DepthM, gdh1HeatFlowMWm2, seaFloorDepth, seaFloorDepthDefaults } from './index.js';
 
 // Half-space cooling (Turcotte and Schubert, Geodynamics, ch. 4): depth below the ridge
@@ -161,6 +165,28 @@ describe('sea-floor depth: model limits, description and outputs', () => {
       ['halfSpaceDepthM', 'm'],
       ['plateDepthM', 'm'],
       ['ageMyr', 'Myr'],
+      ['depthTrend', ''],
     ]);
+  });
+
+  it('says whether the floor still sinks or levels off past 70 Myr (Parsons and Sclater 1977), as a live value and for a live phrase', () => {
+    const trend = (ageMyr: number, model: 'half-space' | 'plate') => widgetOutputChoices('sea-floor-depth', params(ageMyr, model))?.find((choice) => choice.name === 'depthTrend')?.value;
+    expect(trend(50, 'plate')).toBe('still-sinking');
+    expect(trend(100, 'plate')).toBe('levelling-off');
+    // The half-space floor sinks as √age at any age, so its curve never levels off.
+    expect(trend(150, 'half-space')).toBe('still-sinking');
+    expect(phraseStatesOf({ widgetType: 'sea-floor-depth' })).toEqual(['still-sinking', 'levelling-off']);
+    expect(liveValueText({ ok: true, state: 'levelling-off' }, { digits: 3, unit: '' }, 'fr')).toBe('se stabilise');
+    for (const locale of WIDGET_LOCALES) {
+      for (const state of seaFloorDepth.states!.values) expect(widgetStrings(locale).states[state as WidgetState], `${state} in ${locale}`).toMatch(/\p{L}/u);
+    }
+  });
+
+  it('flags a caption that says the floor levels off on a panel where the visitor drags its age', () => {
+    const panel = { type: 'doc', content: [
+      { type: 'widget', attrs: { widgetType: 'sea-floor-depth', widgetId: 'floor', params: params(100, 'plate') } },
+      { type: 'paragraph', content: [{ type: 'text', text: 'Old sea floor levels off.' }] },
+    ] };
+    expect(stateWordsInPlainText(panel, 'en')).toEqual([{ word: 'levels', widgetId: 'floor', widgetType: 'sea-floor-depth' }]);
   });
 });

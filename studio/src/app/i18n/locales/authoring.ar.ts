@@ -128,6 +128,8 @@ export const authoringAr: Translated<typeof authoringEn> = {
       slabPullNPerM: 'شدّ اللوح لكل متر',
       slabToRidgeRatio: 'شدّ اللوح ÷ دفع الحيد',
       slabTipDepthKm: 'عمق طرف اللوح',
+      dominantForce: 'أي القوتين أكبر',
+      depthTrend: 'لا يزال يهبط أم يستقر',
     },
     save: {
       saved: 'حُفظت كل التغييرات',

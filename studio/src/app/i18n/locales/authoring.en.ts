@@ -121,6 +121,8 @@ export const authoringEn = {
       slabPullNPerM: 'Slab pull per metre',
       slabToRidgeRatio: 'Slab pull ÷ ridge push',
       slabTipDepthKm: 'Depth of the slab’s tip',
+      dominantForce: 'Which force is bigger',
+      depthTrend: 'Still sinking or levelling off',
     },
     save: {
       saved: 'All changes saved',

@@ -124,6 +124,8 @@ export const authoringEs: Translated<typeof authoringEn> = {
       slabPullNPerM: 'Tirón de la placa por metro',
       slabToRidgeRatio: 'Tirón ÷ empuje',
       slabTipDepthKm: 'Profundidad de la punta de la placa hundida',
+      dominantForce: 'Qué fuerza es mayor',
+      depthTrend: 'Aún se hunde o se estabiliza',
     },
     save: {
       saved: 'Todos los cambios guardados',

@@ -123,6 +123,8 @@ export const authoringFr: typeof authoringEn = {
       slabPullNPerM: 'Traction de la plaque plongeante par mètre',
       slabToRidgeRatio: 'Traction ÷ poussée',
       slabTipDepthKm: 'Profondeur du bout de la plaque plongeante',
+      dominantForce: 'La force la plus grande',
+      depthTrend: 'S’enfonce encore ou se stabilise',
     },
     save: {
       saved: 'Toutes les modifications sont enregistrées',
