@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { Page, UserView, VenueView } from '@mantlepiece/shared';
-import { DEMO_ACCOUNTS, DEMO_VENUE, DEMO_VENUES } from '../src/seed/demo-scenario.js';
+import type { GalleryView, InsightsView, Page, UserView, VenueView } from '@mantlepiece/shared';
+import { DEMO_ACCOUNTS, DEMO_GALLERY, DEMO_VENUE, DEMO_VENUES } from '../src/seed/demo-scenario.js';
 import { demoPassword, runningServerUrl } from './running-server.js';
 
 const server = runningServerUrl();
@@ -33,5 +33,19 @@ describe('the seeded demo scenario on the running server', () => {
   it('shows the demo venue to an unpaired kiosk opened at its install URL', async () => {
     const res = await fetch(`${server}/api/kiosk/venue?slug=${DEMO_VENUE.slug}`);
     expect(await res.json()).toEqual({ name: DEMO_VENUE.name, locales: ['en', 'fr', 'es'] });
+  });
+
+  it("invents visitors' touches of every setting a visitor moves, on the slab story's sea floor and plate forces too", async () => {
+    const technician = await signIn('technician@demo.test');
+    const get = async <T>(path: string) => (await (await fetch(`${server}/api${path}`, { headers: { Authorization: `Bearer ${technician.accessToken}` } })).json()) as T;
+    const gallery = (await get<Page<GalleryView>>('/galleries?pageSize=100')).items.find((candidate) => candidate.name === DEMO_GALLERY.name)!;
+    const insights = await get<InsightsView>(`/insights?galleryId=${gallery.id}`);
+    const touched = Object.fromEntries(insights.widgets.map((use) => [use.widgetType, use.params.filter((p) => p.touches > 0).map((p) => p.param).sort()]));
+    // Other suites' kiosks may add touches of their own to the gallery, so each list need only hold these.
+    expect(touched).toMatchObject({
+      'slope-force': expect.arrayContaining(['angleDeg']),
+      'sea-floor-depth': expect.arrayContaining(['ageMyr', 'model']),
+      'plate-forces': expect.arrayContaining(['ageMyr', 'slabLengthKm']),
+    });
   });
 });

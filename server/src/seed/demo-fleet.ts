@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { addDays, dayIn, dayStartIn, KIOSK_SWITCHES, type KioskEventType, type KioskSwitch, type RevisionSnapshot } from '@mantlepiece/shared';
+import { addDays, dayIn, dayStartIn, KIOSK_SWITCHES, visitorSettingsOf, type KioskEventType, type KioskSwitch, type RevisionSnapshot } from '@mantlepiece/shared';
 import { NOBODY } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { KioskEvent } from '../kiosks/models/kiosk-event.model.js';
@@ -25,8 +25,6 @@ const DAYS = 30;
 const HEARTBEAT_EVERY_MS = 5 * MINUTE_MS;
 const HEARTBEATS = 72;
 const APP_VERSION = '0.1.0';
-/** What a visitor can move on a kiosk: the slope's tilt; the convection cell only plays, pauses and steps. */
-const VISITOR_PARAMS: Record<string, string[]> = { 'slope-force': ['angleDeg'] };
 
 /** A small seeded generator (mulberry32), so every first start invents the same gallery. */
 function seededRandom(seed: number): () => number {
@@ -148,7 +146,7 @@ export class DemoFleet {
       storyId,
       panels: (revisions.get(revisionId)?.panels ?? []).map((panel) => ({
         id: panel.id,
-        widgets: panel.widgets.map((widget) => ({ widgetType: widget.widgetType, params: VISITOR_PARAMS[widget.widgetType] ?? [] })),
+        widgets: panel.widgets.map((widget) => ({ widgetType: widget.widgetType, params: visitorSettingsOf(widget.widgetType) })),
       })),
     }));
   }

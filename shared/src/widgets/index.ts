@@ -10,3 +10,4 @@ export * from './model-card.js';
 export * from './sources.js';
 export * from './cooling-lithosphere/half-space.js';
 export * from './cooling-lithosphere/properties.js';
+export * from './visitor-settings.js';

@@ -1,16 +1,23 @@
-import { isWidgetType } from '@mantlepiece/shared';
+import { isWidgetType, visitorSettingName } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useWidgetTypes } from '../../api/widgets';
 import { widgetFormGroups } from './widget-form';
 
-/** "Slope angle θ (°)" for a param path, read from the widget's published JSON Schema; the path itself otherwise. */
+/**
+ * "Slope angle (°)" for a param path: a setting visitors move is named as the kiosk names it, in
+ * the studio's language; any other by the widget's published JSON Schema; the path itself otherwise.
+ * The unit comes from the schema.
+ */
 export function useParamLabels(): (widgetType: string, path: string[]) => string {
   const types = useWidgetTypes();
+  const { i18n } = useTranslation();
+  const language = i18n.resolvedLanguage ?? 'en';
   return (widgetType, path) => {
     const descriptor = types.data?.items.find((item) => item.type === widgetType);
     const field = descriptor ? widgetFormGroups(descriptor.jsonSchema).flatMap((group) => group.fields).find((f) => f.path.join('.') === path.join('.')) : undefined;
-    if (!field) return path.join(' › ');
-    return field.unit ? `${field.label} (${field.unit})` : field.label;
+    const name = (path.length === 1 ? visitorSettingName(widgetType, path[0]!, language) : undefined) ?? field?.label;
+    if (!name) return path.join(' › ');
+    return field?.unit ? `${name} (${field.unit})` : name;
   };
 }
 
