@@ -46,6 +46,7 @@ try {
     dbPort: await freePort(),
     smtpPort: await freePort(),
     s3Port: await freePort(),
+    replicationPorts: { primaryPort: await freePort(), replicaPort: await freePort() },
     port: await freePort(),
     demoPassword: 'mantlepiece-demo',
     nodeEnv: 'test',

@@ -8,7 +8,7 @@ import { fileURLToPath } from 'node:url';
 import { phase, PhaseError } from './phase.mjs';
 import { run, startOwned, waitFor } from './processes.mjs';
 import { assertPortFree } from './ports.mjs';
-import { startPrivateMariaDb, provisionDatabase } from './mariadb.mjs';
+import { followPrimary, startPrivateMariaDb, provisionDatabase } from './mariadb.mjs';
 
 export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
@@ -101,8 +101,28 @@ async function startS3StandIn({ dataDir, port, env }) {
   return { process: s3, env: standIn };
 }
 
+/**
+ * A primary with a binary log and a read-only replica following it (MariaDB's built-in replication),
+ * apart from the app's own database, for the suites that check reads from replicas. Named to those
+ * suites under REPLICATION_STAND_IN_*; the server itself keeps one database.
+ */
+async function startReplicatedPair({ dataDir, primaryPort, replicaPort, owned }) {
+  phase('database', `primary ${primaryPort} and replica ${replicaPort} for the replica suites`);
+  const primary = await startPrivateMariaDb({ dataDir, port: primaryPort, name: 'mariadb-primary', serverId: 1 });
+  owned.push(primary.server);
+  const replica = await startPrivateMariaDb({ dataDir, port: replicaPort, name: 'mariadb-replica', serverId: 2, replica: true });
+  owned.push(replica.server);
+  await followPrimary({ dataDir, primary, replica });
+  const url = provisionDatabase({ dataDir, socket: primary.socket, port: primaryPort, databases: ['mantlepiece_replicated'] }).mantlepiece_replicated;
+  return {
+    REPLICATION_STAND_IN_PRIMARY_URL: url,
+    REPLICATION_STAND_IN_REPLICA_URL: url.replace(`:${primaryPort}/`, `:${replicaPort}/`),
+    REPLICATION_STAND_IN_REPLICA_SOCKET: replica.socket,
+  };
+}
+
 export async function startStack(options) {
-  const { dataDir, dbPort, smtpPort, s3Port, port, demoPassword, nodeEnv = 'development', extraDatabases = [] } = options;
+  const { dataDir, dbPort, smtpPort, s3Port, replicationPorts, port, demoPassword, nodeEnv = 'development', extraDatabases = [] } = options;
   const owned = [];
   const stop = async () => {
     for (const proc of owned.reverse()) await proc.stop();
@@ -167,6 +187,8 @@ export async function startStack(options) {
       what: 'SMTP stand-in', timeoutMs: 15000,
       failIf: () => (smtp.child.exitCode !== null ? `SMTP stand-in exited: ${smtp.recentOutput().trim()}` : null),
     }).catch((error) => { throw new PhaseError('mail', error.message); });
+
+    if (replicationPorts) Object.assign(env, await startReplicatedPair({ dataDir, ...replicationPorts, owned }));
 
     if (s3Port) {
       const s3 = await startS3StandIn({ dataDir, port: s3Port, env });

@@ -7,6 +7,7 @@ import { ApiExceptionFilter } from './common/api-exception.filter.js';
 import { jsonBodyOptions } from './common/json-body.js';
 import { createValidationPipe } from './common/validation.js';
 import { ConfigService } from './config/config.service.js';
+import { routeReads } from './database/replica-reads.js';
 import { MEDIA_FILES_PATH } from './media/media-files.controller.js';
 import { MEDIA_STORE, type MediaStore } from './media/media-store.js';
 import { releaseFileKey } from './releases/release-file-store.js';
@@ -36,6 +37,7 @@ function configureApp(app: NestExpressApplication, fileOrigin: string | null): v
   app.use(securityHeaders({ https: config.overHttps, fileOrigin }));
   app.setGlobalPrefix('api', { exclude: [{ path: MEDIA_FILES_PATH, method: RequestMethod.GET }] });
   app.use(cookieParser());
+  if (config.databaseReplicaUrls.length > 0) app.use(routeReads({ lagAllowanceSeconds: config.replicaLagAllowanceSeconds, secure: config.secureCookies }));
   // Express names this parser jsonParser, so Nest sees one applied and adds none of its own.
   app.use(json(jsonBodyOptions));
   app.useGlobalPipes(createValidationPipe());

@@ -94,10 +94,20 @@ export class ConfigService {
   readonly kioskOfflineAfterS = intFromEnv('KIOSK_OFFLINE_AFTER_S', 300);
   /** How often the silent-kiosk watcher looks; 0 turns its timer off (tests call it by hand). */
   readonly fleetWatchIntervalMs = intFromEnv('FLEET_WATCH_INTERVAL_MS', 15_000);
+  /** How often deleted panels and images past their grace are purged; 0 turns its timer off (tests purge by hand). */
+  readonly deletedItemsIntervalMs = intFromEnv('DELETED_ITEMS_INTERVAL_MS', 60_000);
 
   get isProduction(): boolean {
     return this.nodeEnv === 'production';
   }
+
+  /**
+   * MariaDB replicas (comma-separated URLs, same user and database as DATABASE_URL): reads that may
+   * lag a little go to them. Unset: every query goes to DATABASE_URL.
+   */
+  readonly databaseReplicaUrls = (process.env.DATABASE_REPLICA_URLS ?? '').split(',').map((url) => url.trim()).filter(Boolean);
+  /** How far a replica may trail the primary: for this long after a client writes, its reads stay on the primary. */
+  readonly replicaLagAllowanceSeconds = intFromEnv('REPLICA_LAG_ALLOWANCE_SECONDS', 10);
 
   get databaseUrl(): string {
     return required('DATABASE_URL');
