@@ -84,6 +84,8 @@ export class RenditionsWorker implements OnModuleInit {
         if (!(await this.queue.settle(asset.id, { renditionState: 'ready', renditionProgress: 1, renditionFailure: null }, transaction))) throw new ClaimLost();
         await this.renditions.bulkCreate(made, { updateOnDuplicate: ['height', 'sha256', 'storeKey', 'bytes', 'updatedAt'], transaction });
       });
+      // One line per image made, by the instance that made it: with several instances, the logs show none was made twice.
+      this.logger.log(`image ${asset.id}: ${made.length} renditions made`);
     } catch (error) {
       if (error instanceof ClaimLost) return this.forgetIfDeleted(asset, made);
       const reason = `The WebP renditions could not be made: ${error instanceof Error ? error.message : String(error)}`;

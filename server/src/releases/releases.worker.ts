@@ -74,6 +74,8 @@ export class ReleasesWorker implements OnModuleInit, OnApplicationBootstrap {
       if (!release) return report;
       try {
         await this.builder.build(release, this.queue);
+        // One line per build, by the instance that ran it: with several instances, the logs show none was built twice.
+        this.logger.log(`release ${release.id} built`);
         report.ready.push(release.id);
       } catch (error) {
         if (error instanceof BuildLeaseLost) continue;
