@@ -11,3 +11,4 @@ export { LiveValueNodeView } from './LiveValueNodeView.js';
 export { LivePhraseNodeView } from './LivePhraseNodeView.js';
 export { PanelImageNodeView } from './PanelImageNodeView.js';
 export { SimulationReports } from './simulation-reports.js';
+export { panelEdgeSelection, PanelDocumentEdges } from './document-edges.js';

@@ -2,6 +2,7 @@ import type { AnyExtension, Extensions } from '@tiptap/core';
 import { ReactNodeViewRenderer, type ReactNodeViewProps } from '@tiptap/react';
 import type { ComponentType } from 'react';
 import { panelExtensions } from '../../panel/panel-extensions.js';
+import { PanelDocumentEdges } from './document-edges.js';
 import { LIVE_PHRASE_NODE, LIVE_VALUE_NODE, PANEL_IMAGE_NODE, WIDGET_NODE } from '../../panel/panel-json.js';
 import { LivePhraseNodeView } from './LivePhraseNodeView.js';
 import { LiveValueNodeView } from './LiveValueNodeView.js';
@@ -34,10 +35,10 @@ function withNodeView(extension: AnyExtension, options: PanelEditorOptions): Any
 }
 
 /**
- * `panelExtensions` with React node views for the studio editor. Only views are added, so the
- * editor's schema is the server's schema.
+ * `panelExtensions` with React node views for the studio editor, and the keys that reach the
+ * panel's edges. Only views and keys are added, so the editor's schema is the server's schema.
  */
 export function panelEditorExtensions(options: PanelEditorOptions): Extensions {
   const shared = { ...options, simulationReports: options.simulationReports ?? new SimulationReports() };
-  return panelExtensions.map((extension) => withNodeView(extension, shared));
+  return [...panelExtensions.map((extension) => withNodeView(extension, shared)), PanelDocumentEdges];
 }
