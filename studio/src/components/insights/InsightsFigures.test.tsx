@@ -21,8 +21,8 @@ const INSIGHTS: InsightsView = {
   stories: [],
   panels: [],
   widgets: [
-    { widgetType: 'sea-floor-depth', params: [{ param: 'ageMyr', touches: 12 }, { param: 'model', touches: 5 }] },
-    { widgetType: 'plate-forces', params: [{ param: 'slabLengthKm', touches: 15 }, { param: 'ageMyr', touches: 8 }] },
+    { widgetType: 'sea-floor-depth', touches: 17, params: [{ param: 'ageMyr', touches: 12 }, { param: 'model', touches: 5 }] },
+    { widgetType: 'plate-forces', touches: 23, params: [{ param: 'slabLengthKm', touches: 15 }, { param: 'ageMyr', touches: 8 }] },
   ],
   languages: [],
   switches: [],
