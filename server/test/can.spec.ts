@@ -5,7 +5,7 @@ import { paragraphDoc } from './authoring-fixtures.js';
 import { approve, approvedGallery, buildRelease, pairedKiosk } from './release-fixtures.js';
 import { createReviewApp, member, storyWithPanels, submit, type Headers } from './review-fixtures.js';
 import { ROLE_MATRIX } from './role-matrix.js';
-import type { TestApp } from './test-app.js';
+import { bearer, createPerson, signIn, type TestApp } from './test-app.js';
 
 /**
  * `can` against the declared role matrix (server/test/role-matrix.ts, written by hand from the
@@ -101,7 +101,7 @@ describe('a story’s can', () => {
     expect(renamed.status).toBe(409);
     for (const role of ROLES) {
       const { can } = await get('/api/stories?pageSize=1', people[role]);
-      expect({ role, can }).toEqual({ role, can: { create: matrixAllows('POST /api/stories', role) } });
+      expect({ role, can }).toEqual({ role, can: { create: matrixAllows('POST /api/stories', role), review: matrixAllows('GET /api/reviews/queue', role) } });
       const created = await request(t.http).post('/api/stories').set(people[role]).send({ title: `Made by ${role}`, venueId: g.venue.id });
       await expectOutcome('stories', 'create', role, can.create, created);
     }
@@ -209,6 +209,62 @@ describe('media, release, station and kiosk can', () => {
   }, 240_000);
 });
 
+describe('a translation target’s can', () => {
+  /** The route each translation action calls, and how; `xliff` is a file of the story in French to import. */
+  const TRANSLATION_ACTIONS: Record<string, { route: string; act: (storyId: number, who: Headers, xliff: string) => Promise<request.Response> }> = {
+    translate: {
+      route: 'PUT /api/stories/:id/translations/:locale/units/:unitId',
+      act: async (storyId, who) => {
+        const [unit] = (await get(`/api/stories/${storyId}/translations/fr/units?pageSize=1`, g.curator.auth)).items;
+        return request(t.http).put(`/api/stories/${storyId}/translations/fr/units/${unit.unitId}`).set(who).send({ text: 'La roche chaude monte.', version: unit.version });
+      },
+    },
+    export: { route: 'GET /api/stories/:id/translations/:locale/xliff', act: (storyId, who) => request(t.http).get(`/api/stories/${storyId}/translations/fr/xliff`).set(who) },
+    import: {
+      route: 'PUT /api/stories/:id/translations/:locale/xliff',
+      act: (storyId, who, xliff) => request(t.http).put(`/api/stories/${storyId}/translations/fr/xliff`).set(who).set('Content-Type', 'application/xliff+xml').send(xliff),
+    },
+  };
+
+  it('offers translating and importing into French to a translator of French only, and the download to every reader of French', async () => {
+    // The venue's target locale is French; a translator works only in locales they were given.
+    const translator = await createPerson(t, { roles: ['translator'], locales: ['fr'] });
+    const readers: Record<Role, Headers> = { ...people, translator: bearer((await signIn(t, translator.email)).accessToken) };
+    for (const role of ROLES) {
+      const storyId = await storyIn('draft');
+      const xliff = (await request(t.http).get(`/api/stories/${storyId}/translations/fr/xliff`).set(g.curator.auth)).text;
+      const reads = matrixAllows('GET /api/stories/:id/translations', role);
+      const expected = Object.fromEntries(Object.entries(TRANSLATION_ACTIONS).map(([action, { route }]) => [action, matrixAllows(route, role)]));
+      let can = { translate: false, import: false, export: false } as Record<string, boolean>;
+      if (reads) {
+        const [target] = await get(`/api/stories/${storyId}/translations`, readers[role]);
+        expectCanKeys('translation', target.can);
+        can = target.can;
+        expect({ role, locale: target.locale, can }).toEqual({ role, locale: 'fr', can: expected });
+        expect((await get(`/api/stories/${storyId}/translations/fr/units?pageSize=1`, readers[role])).can).toEqual(can);
+        const title = (await get(`/api/stories/${storyId}`, g.curator.auth)).title;
+        const worklist = await get(`/api/translations/stories?q=${encodeURIComponent(title)}`, readers[role]);
+        expect({ role, list: worklist.can, item: worklist.items[0]?.can, offersFrench: worklist.locales.includes('fr') }).toEqual({ role, list: { translate: role === 'translator' }, item: can, offersFrench: true });
+      } else {
+        expect((await request(t.http).get(`/api/stories/${storyId}/translations`).set(readers[role])).status).toBe(403);
+      }
+      for (const [action, { act }] of Object.entries(TRANSLATION_ACTIONS)) {
+        await expectOutcome('translation', action, role, can[action]!, await act(storyId, readers[role], xliff));
+      }
+    }
+  }, 240_000);
+
+  it('offers nothing in French to a translator of Spanish only, and the server refuses them', async () => {
+    const spanish = await createPerson(t, { roles: ['translator'], locales: ['es'] });
+    const auth = bearer((await signIn(t, spanish.email)).accessToken);
+    const storyId = await storyIn('draft');
+    expect(await get(`/api/stories/${storyId}/translations`, auth)).toEqual([]);
+    const worklist = await get('/api/translations/stories', auth);
+    expect({ can: worklist.can, offersFrench: worklist.locales.includes('fr') }).toEqual({ can: { translate: true }, offersFrench: false });
+    await expectOutcome('translation', 'translate', 'translator', false, await TRANSLATION_ACTIONS.translate!.act(storyId, auth, ''));
+  });
+});
+
 describe('the OpenAPI document', () => {
   it('describes the `can` each route answers with, action by action, as the answers carry it', async () => {
     const docs = (await request(t.http).get('/api/docs-json')).body;
@@ -224,7 +280,11 @@ describe('the OpenAPI document', () => {
     const shown = await get(`/api/revisions/${g.revisionId}`, people.curator);
     expect(revision.properties.can.required.sort()).toEqual(Object.keys(shown.can).sort());
     expect(revision.properties.comments.items.properties.can.required.sort()).toEqual([...CAN_ACTIONS.comment].sort());
-    for (const [path, method] of [['/api/media/{id}', 'get'], ['/api/releases/{id}', 'get'], ['/api/stations/{id}', 'get'], ['/api/kiosks/{id}', 'get'], ['/api/comments/{id}', 'patch']]) {
+    const worklist = described('/api/translations/stories', 'get');
+    expect({ list: worklist.properties.can.required, item: worklist.properties.items.items.properties.can.required.sort() })
+      .toEqual({ list: [...CAN_ACTIONS.translations], item: [...CAN_ACTIONS.translation].sort() });
+    expect(described('/api/stories/{id}/translations', 'get').items.properties.can.required.sort()).toEqual([...CAN_ACTIONS.translation].sort());
+    for (const [path, method] of [['/api/stories/{id}/translations/{locale}/units', 'get'], ['/api/media/{id}', 'get'], ['/api/releases/{id}', 'get'], ['/api/stations/{id}', 'get'], ['/api/kiosks/{id}', 'get'], ['/api/comments/{id}', 'patch']]) {
       expect({ path, can: described(path!, method!)?.properties?.can?.type }).toEqual({ path, can: 'object' });
     }
   });

@@ -29,11 +29,14 @@ export type CanShape =
   | { array: true; created?: boolean }
   /** A page of objects, with the list's own `can` when it has one. */
   | { page: true; listCan?: CanKind }
+  /** A page whose items carry none: the page's own `can` is of the kind. */
+  | { pageOnly: true }
   /** A revision comparison: its base revision, if any. */
   | { comparison: true };
 
 function schemaOf(kind: CanKind, shape: CanShape): Schema {
   if ('array' in shape) return { type: 'array', items: viewSchema(kind) };
+  if ('pageOnly' in shape) return { type: 'object', required: ['items', 'can'], properties: { items: { type: 'array' }, total: { type: 'integer' }, page: { type: 'integer' }, pageSize: { type: 'integer' }, can: canSchema(kind) } };
   if ('comparison' in shape) return { type: 'object', properties: { base: { ...viewSchema(kind), nullable: true } } };
   if ('page' in shape) {
     const required = ['items', ...(shape.listCan ? ['can'] : [])];

@@ -1,6 +1,6 @@
 import { ConflictException, HttpStatus } from '@nestjs/common';
 import {
-  decide, EDITABLE_STORY_STATES, STORY_STATE_LABELS,
+  decide, EDITABLE_STORY_STATES, STORY_STATE_LABELS, STORY_WORKFLOW,
   type Can, type OpenRevision, type Role, type StoryAction, type StoryCan, type StoryState,
 } from '@mantlepiece/shared';
 import { holdsAny, type Person } from '../auth/policy.js';
@@ -38,7 +38,8 @@ export function storyCan(person: Person, story: StoryFacts): StoryCan {
   };
 }
 
-export const storiesCan = (person: Person): Can<'stories'> => ({ create: holdsAny(person, STORY_WRITERS) });
+/** `review`: the approvers of the workflow, whom the review queue's guard lets in. */
+export const storiesCan = (person: Person): Can<'stories'> => ({ create: holdsAny(person, STORY_WRITERS), review: holdsAny(person, STORY_WORKFLOW.approve.roles) });
 
 const isEditable = (state: StoryState) => EDITABLE_STORY_STATES.includes(state);
 

@@ -19,15 +19,21 @@ export function readableLocales(member: Member, venueId: number): string[] | nul
 const outsideLocales = (own: readonly string[], locale: string) =>
   new ForbiddenException(own.length > 0 ? `You translate into ${own.join(', ')}, not ${locale}.` : 'You have no translator locales; an admin gives them in People.');
 
-export function assertMayRead(member: Member, venueId: number, locale: string): void {
+/** Whether the member reads a story's translations into `locale` at its venue. */
+export function mayRead(member: Member, venueId: number, locale: string): boolean {
   const readable = readableLocales(member, venueId);
-  if (readable !== null && !readable.includes(locale)) throw outsideLocales(readable, locale);
+  return readable === null || readable.includes(locale);
+}
+
+export function assertMayRead(member: Member, venueId: number, locale: string): void {
+  if (!mayRead(member, venueId, locale)) throw outsideLocales(readableLocales(member, venueId) ?? [], locale);
 }
 
 /** Only translators write translations, and only into their own locales at the story's venue. */
+export const mayWrite = (member: Member, venueId: number, locale: string): boolean => translatorLocalesAt(member, venueId).includes(locale);
+
 export function assertMayWrite(member: Member, venueId: number, locale: string): void {
-  const own = translatorLocalesAt(member, venueId);
-  if (!own.includes(locale)) throw outsideLocales(own, locale);
+  if (!mayWrite(member, venueId, locale)) throw outsideLocales(translatorLocalesAt(member, venueId), locale);
 }
 
 /**

@@ -1,6 +1,7 @@
 import { Body, Controller, Get, Param, ParseIntPipe, Put, Query, Res, UnsupportedMediaTypeException, UseFilters } from '@nestjs/common';
 import { ApiBearerAuth, ApiBody, ApiConsumes, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
+import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import { VersionConflictFilter } from '../common/version-conflict.js';
 import type { User } from '../users/models/user.model.js';
@@ -24,16 +25,19 @@ export class TranslationsController {
     private readonly xliff: XliffExchangeService,
   ) {}
 
+  @ApiCan('translation', { page: true, listCan: 'translations' })
   @Get('translations/stories')
   worklist(@CurrentUser() user: User, @Query() query: ListWorklistQuery) {
     return this.translations.worklist(user, query);
   }
 
+  @ApiCan('translation', { array: true })
   @Get('stories/:id/translations')
   storyTranslations(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number) {
     return this.translations.storyTranslations(user, id);
   }
 
+  @ApiCan('translation', { pageOnly: true })
   @Get('stories/:id/translations/:locale/units')
   units(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number, @Param('locale') locale: string, @Query() query: ListUnitsQuery) {
     return this.translations.listUnits(user, id, localeParam(locale), query);

@@ -4,8 +4,8 @@ import { QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
   applyTranslations, checkPlaceholders, directionOf, lengthBudgetWarning, runsFromText, unitStatus,
-  type LocaleCompleteness, type Page, type PanelDocJSON, type SavedTranslationUnit, type TranslationConflictBody, type TranslationPreviewView,
-  type TranslationUnitView, type TranslationWorklistItem, type UnitStatus,
+  type LocaleCompleteness, type PanelDocJSON, type SavedTranslationUnit, type StoryTranslationsView, type TranslationConflictBody, type TranslationPreviewView,
+  type TranslationUnitPage, type TranslationWorklistPage, type UnitStatus,
 } from '@mantlepiece/shared';
 import type { Member } from '../auth/policy.js';
 import { likePattern } from '../common/list-query.js';
@@ -19,6 +19,7 @@ import type { ListUnitsQuery, ListWorklistQuery, SaveTranslationUnitDto } from '
 import { Translation } from './models/translation.model.js';
 import { SourceUnitsService, type FrozenSource, type StorySource } from './source-units.service.js';
 import { assertMayRead, assertMayWrite, assertReadsSomewhere, assertTargetLocale, readableLocales, translationReach, type TranslationReach } from './translation-access.js';
+import { translationCan, translationsCan } from './translation-policy.js';
 import { completenessOf, currentTranslationsOf, unitStates, type UnitState } from './translation-state.js';
 import { toTranslationUnitView } from './translations.presenter.js';
 
@@ -81,48 +82,54 @@ export class TranslationsService {
   ) {}
 
   /** The translator's worklist: every story in each locale they translate into at its venue, with its progress. */
-  async worklist(member: Member, query: ListWorklistQuery): Promise<Page<TranslationWorklistItem>> {
+  async worklist(member: Member, query: ListWorklistQuery): Promise<TranslationWorklistPage> {
     const reach = translationReach(member);
     if (query.locale) assertReadsSomewhere(reach, query.locale);
+    const can = translationsCan(reach, query.venueId);
     const readable = reachCondition(reach);
-    if (!readable) return toPage([], 0, query);
+    if (!readable) return { ...toPage([], 0, query), can, locales: [] };
+    const venue = query.venueId ? ' AND s.venue_id = :venueId' : '';
     const conditions = [
-      readable.sql,
       ...(query.locale ? ['jt.locale = :locale'] : []),
-      ...(query.venueId ? ['s.venue_id = :venueId'] : []),
       ...(query.q ? ['s.title LIKE :q'] : []),
     ].map((condition) => ` AND ${condition}`).join('');
+    const within = `${WORKLIST_FROM} AND ${readable.sql}${venue}`;
     const replacements = { ...readable.replacements, locale: query.locale, venueId: query.venueId, q: query.q ? likePattern(query.q) : undefined, ...pageWindow(query) };
-    const [{ total }] = await this.sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total ${WORKLIST_FROM}${conditions}`, { replacements, type: QueryTypes.SELECT }) as [{ total: number }];
-    const pairs = await this.sequelize.query<{ storyId: number; storyTitle: string; locale: string }>(
-      `SELECT s.id AS storyId, s.title AS storyTitle, jt.locale AS locale ${WORKLIST_FROM}${conditions} ORDER BY s.title, s.id, jt.locale LIMIT :limit OFFSET :offset`,
-      { replacements, type: QueryTypes.SELECT },
-    );
+    const [[{ total }], locales, pairs] = await Promise.all([
+      this.sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total ${within}${conditions}`, { replacements, type: QueryTypes.SELECT }) as Promise<[{ total: number }]>,
+      this.sequelize.query<{ locale: string }>(`SELECT DISTINCT jt.locale AS locale ${within} ORDER BY jt.locale`, { replacements, type: QueryTypes.SELECT }),
+      this.sequelize.query<{ storyId: number; storyTitle: string; venueId: number; locale: string }>(
+        `SELECT s.id AS storyId, s.title AS storyTitle, s.venue_id AS venueId, jt.locale AS locale ${within}${conditions} ORDER BY s.title, s.id, jt.locale LIMIT :limit OFFSET :offset`,
+        { replacements, type: QueryTypes.SELECT },
+      ),
+    ]);
     const sources = new Map((await this.sources.sourcesOf([...new Set(pairs.map((pair) => pair.storyId))])).map((source) => [source.story.id, source]));
     const items = await Promise.all(
-      pairs.map(async ({ storyId, storyTitle, locale }) => ({
-        storyId, storyTitle, ...completenessOf(locale, await this.statesOf(sources.get(storyId)!, locale)),
+      pairs.map(async ({ storyId, storyTitle, venueId, locale }) => ({
+        storyId, storyTitle, ...completenessOf(locale, await this.statesOf(sources.get(storyId)!, locale)), can: translationCan(member, { venueId, locale }),
       })),
     );
-    return toPage(items, Number(total), query);
+    return { ...toPage(items, Number(total), query), can, locales: locales.map((row) => row.locale) };
   }
 
   /** Progress per target locale of the story's venue; a translator sees their own locales. */
-  async storyTranslations(member: Member, storyId: number): Promise<LocaleCompleteness[]> {
+  async storyTranslations(member: Member, storyId: number): Promise<StoryTranslationsView> {
     const source = await this.reachableSource(member, storyId);
-    const readable = readableLocales(member, source.story.venueId);
+    const venueId = source.story.venueId;
+    const readable = readableLocales(member, venueId);
     const locales = source.targetLocales.filter((locale) => readable === null || readable.includes(locale));
-    return Promise.all(locales.map(async (locale) => completenessOf(locale, await this.statesOf(source, locale))));
+    return Promise.all(locales.map(async (locale) => ({ ...completenessOf(locale, await this.statesOf(source, locale)), can: translationCan(member, { venueId, locale }) })));
   }
 
-  async listUnits(member: Member, storyId: number, locale: string, query: ListUnitsQuery): Promise<Page<TranslationUnitView>> {
+  async listUnits(member: Member, storyId: number, locale: string, query: ListUnitsQuery): Promise<TranslationUnitPage> {
     const source = await this.reachableSource(member, storyId);
     assertMayRead(member, source.story.venueId, locale);
     assertTargetLocale(source.targetLocales, locale);
     const states = (await this.statesOf(source, locale)).filter((state) => !query.status || state.status === query.status);
     // Units are cut from the documents, not stored, so the page is cut from the story's list here.
     const { limit, offset } = pageWindow(query);
-    return toPage(states.slice(offset, offset + limit).map((state) => toTranslationUnitView(state, locale)), states.length, query);
+    const can = translationCan(member, { venueId: source.story.venueId, locale });
+    return { ...toPage(states.slice(offset, offset + limit).map((state) => toTranslationUnitView(state, locale)), states.length, query), can };
   }
 
   /**

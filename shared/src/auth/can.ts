@@ -7,8 +7,8 @@
 export const CAN_ACTIONS = {
   /** A story: its panels and details, and its moves through review. */
   story: ['edit', 'delete', 'submit', 'withdraw', 'revise', 'retire'],
-  /** The Stories list as a whole. */
-  stories: ['create'],
+  /** The Stories list as a whole; `review` says the caller reviews submissions (the review queue is theirs). */
+  stories: ['create', 'review'],
   revision: ['approve', 'requestChanges', 'comment'],
   comment: ['reply', 'resolve'],
   media: ['edit', 'delete'],
@@ -19,6 +19,10 @@ export const CAN_ACTIONS = {
   releases: ['build'],
   station: ['pair', 'edit'],
   kiosk: ['revoke'],
+  /** One story in one target locale: translating its units, by hand or by an XLIFF file, and downloading that file. */
+  translation: ['translate', 'import', 'export'],
+  /** The translation worklist as a whole: whether the caller translates into any of its locales. */
+  translations: ['translate'],
 } as const;
 
 export type CanKind = keyof typeof CAN_ACTIONS;
@@ -31,3 +35,4 @@ export type MediaCan = Can<'media'>;
 export type ReleaseCan = Can<'release'>;
 export type StationCan = Can<'station'>;
 export type KioskCan = Can<'kiosk'>;
+export type TranslationCan = Can<'translation'>;

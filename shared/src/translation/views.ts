@@ -1,3 +1,5 @@
+import type { Can, TranslationCan } from '../auth/can.js';
+import type { Page } from '../auth/views.js';
 import type { PanelDocJSON } from '../panel/panel-json.js';
 import type { LengthBudgetWarning } from './length-budget.js';
 import type { Placeholder, UnitKind } from './translation-unit.js';
@@ -9,10 +11,26 @@ import type { LocaleCompleteness, UnitStatus } from './unit-status.js';
 export interface TranslationWorklistItem extends LocaleCompleteness {
   storyId: number;
   storyTitle: string;
+  can: TranslationCan;
 }
 
-/** GET /api/stories/:id/translations: one entry per target locale of the story's venue. */
-export type StoryTranslationsView = LocaleCompleteness[];
+/** GET /api/translations/stories: the worklist, with the locales it can be narrowed to. */
+export type TranslationWorklistPage = Page<TranslationWorklistItem> & {
+  can: Can<'translations'>;
+  /** The locales of the caller's worklist (before a locale or search filter), for the locale filter. */
+  locales: string[];
+};
+
+/** One target locale of a story: its progress and what the caller may do in it. */
+export interface TranslationTargetView extends LocaleCompleteness {
+  can: TranslationCan;
+}
+
+/** GET /api/stories/:id/translations: one entry per target locale of the story's venue the caller reads. */
+export type StoryTranslationsView = TranslationTargetView[];
+
+/** GET …/units: a page of one target's units, with what the caller may do in that target. */
+export type TranslationUnitPage = Page<TranslationUnitView> & { can: TranslationCan };
 
 export const UNIT_STATUSES = ['untranslated', 'translated', 'stale'] as const satisfies readonly UnitStatus[];
 

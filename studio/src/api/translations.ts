@@ -5,8 +5,9 @@ import type {
   SaveTranslationUnitBody,
   StoryTranslationsView,
   TranslationPreviewView,
+  TranslationUnitPage,
   TranslationUnitView,
-  TranslationWorklistItem,
+  TranslationWorklistPage,
   UnitStatus,
   XliffImportResult,
 } from '@mantlepiece/shared';
@@ -46,7 +47,7 @@ export function useTranslationWorklist(params: WorklistParams) {
   const venue = useVenueFilter();
   return useQuery({
     queryKey: [...translationsKey, 'worklist', params, venue],
-    queryFn: () => api<Page<TranslationWorklistItem>>('/translations/stories', { query: { ...params, ...venue } }),
+    queryFn: () => api<TranslationWorklistPage>('/translations/stories', { query: { ...params, ...venue } }),
     placeholderData: keepPreviousData,
   });
 }
@@ -61,7 +62,7 @@ export function useStoryTranslations(storyId: number) {
 export function useTranslationUnits(target: TranslationTarget, params: UnitListParams) {
   return useQuery({
     queryKey: [...unitsKey(target), params],
-    queryFn: () => api<Page<TranslationUnitView>>(`${targetPath(target)}/units`, { query: { ...params } }),
+    queryFn: () => api<TranslationUnitPage>(`${targetPath(target)}/units`, { query: { ...params } }),
     placeholderData: keepPreviousData,
   });
 }

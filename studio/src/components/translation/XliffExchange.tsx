@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button, makeStyles, mergeClasses, shorthands, Text, tokens } from '@fluentui/react-components';
 import { ArrowDownloadRegular, DocumentArrowUpRegular } from '@fluentui/react-icons';
-import type { LengthBudgetWarning, XliffImportResult } from '@mantlepiece/shared';
+import type { LengthBudgetWarning, TranslationCan, XliffImportResult } from '@mantlepiece/shared';
 import { useDropzone, type FileRejection } from 'react-dropzone';
 import { useTranslation } from 'react-i18next';
 import { ApiError } from '../../api/client';
@@ -29,8 +29,8 @@ const useStyles = makeStyles({
 
 type Outcome = { kind: 'imported'; result: XliffImportResult } | { kind: 'refused'; message: string; problems: string[] } | { kind: 'wrongType' };
 
-/** Download of the story's XLIFF through the API client (with the token) and upload by chooser or drop. */
-export function XliffExchange({ target, canUpload }: { target: TranslationTarget; canUpload: boolean }) {
+/** Download of the story's XLIFF through the API client (with the token) and upload by chooser or drop, each as the target's `can` allows. */
+export function XliffExchange({ target, can }: { target: TranslationTarget; can: Pick<TranslationCan, 'import' | 'export'> }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const download = useDownloadXliff(target);
@@ -55,7 +55,7 @@ export function XliffExchange({ target, canUpload }: { target: TranslationTarget
         }),
     });
   };
-  const { getRootProps, getInputProps, isDragActive, open } = useDropzone({ onDrop: take, accept: ACCEPT, multiple: false, noClick: true, noKeyboard: true, preventDropOnDocument: true, disabled: !canUpload });
+  const { getRootProps, getInputProps, isDragActive, open } = useDropzone({ onDrop: take, accept: ACCEPT, multiple: false, noClick: true, noKeyboard: true, preventDropOnDocument: true, disabled: !can.import });
 
   const save = () =>
     download.mutate(undefined, { onSuccess: (blob) => saveFile(blob, `story-${target.storyId}.${target.locale}.xlf`) });
@@ -67,10 +67,12 @@ export function XliffExchange({ target, canUpload }: { target: TranslationTarget
         <Text size={200} className={styles.hint}>{t('xliff.hint')}</Text>
       </div>
       <div className={styles.row}>
-        <Button icon={<ArrowDownloadRegular />} onClick={save} disabled={download.isPending}>
-          {download.isPending ? t('xliff.downloading') : t('xliff.download')}
-        </Button>
-        {canUpload ? (
+        {can.export ? (
+          <Button icon={<ArrowDownloadRegular />} onClick={save} disabled={download.isPending}>
+            {download.isPending ? t('xliff.downloading') : t('xliff.download')}
+          </Button>
+        ) : null}
+        {can.import ? (
           <div {...getRootProps()} className={mergeClasses(styles.zone, isDragActive && styles.active)} data-xliff-dropzone>
             <input {...getInputProps()} aria-label={t('xliff.choose')} data-testid="xliff-file-input" />
             <DocumentArrowUpRegular aria-hidden="true" />

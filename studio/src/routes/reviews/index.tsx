@@ -2,7 +2,7 @@ import { Button, Field, makeStyles, SearchBox, tokens } from '@fluentui/react-co
 import { ClipboardTaskListLtrRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { useReviewQueue } from '../../api/reviews';
-import { usePersonHere } from '../../app/current-venue';
+import { useStories } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
 import { Pager } from '../../components/lists/Pager';
@@ -17,11 +17,18 @@ const useStyles = makeStyles({
   search: { maxWidth: '24rem' },
 });
 
-/** Educators get the queue of revisions waiting for a verdict; curators follow their stories through review. */
+/** The smallest page of the story list, read for its `can` only. */
+const LIST_CAN_ONLY = { page: 1, pageSize: 1 } as const;
+
+/**
+ * Reviewers get the queue of revisions waiting for a verdict; everyone else follows their stories
+ * through review. Who reviews at the current venue is the server's answer (the story list's `can.review`).
+ */
 export function ReviewsPage() {
   const { t } = useTranslation();
-  const me = usePersonHere();
-  if (me.roles.includes('educator')) return <ReviewQueue />;
+  const stories = useStories(LIST_CAN_ONLY);
+  if (stories.data?.can.review) return <ReviewQueue />;
+  if (stories.isPending) return <PageHeader title={t('reviews.title')} />;
   return (
     <>
       <PageHeader title={t('reviews.title')} intro={t('reviews.introCurator')} />

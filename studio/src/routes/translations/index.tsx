@@ -1,8 +1,6 @@
 import { Button, Dropdown, Field, makeStyles, Option, SearchBox, tokens } from '@fluentui/react-components';
 import { TranslateRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
-import { usePersonHere } from '../../app/current-venue';
-import { useVenues } from '../../api/settings';
 import { useTranslationWorklist } from '../../api/translations';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
@@ -19,32 +17,22 @@ const useStyles = makeStyles({
   locale: { minWidth: '12rem' },
 });
 
-/** Every venue's target locales, for the filter; a translator's own locales narrow it. */
-function useLocaleChoices(): string[] {
-  const me = usePersonHere();
-  const venues = useVenues({ page: 1, pageSize: 100 });
-  const all = [...new Set((venues.data?.items ?? []).flatMap((venue) => venue.targetLocales))];
-  const readsAll = me.roles.includes('admin') || me.roles.includes('curator');
-  return readsAll ? all : me.locales;
-}
-
 /** The translator's worklist: each story in each of their locales, with its progress. */
 export function TranslationsPage() {
   const { t } = useTranslation();
   const styles = useStyles();
-  const me = usePersonHere();
   const languageName = useLanguageName({ standalone: true });
   const { search, query, setQuery, change, clear } = useListSearch();
   const params = readWorklistParams(search);
   const worklist = useTranslationWorklist(params);
-  const locales = useLocaleChoices();
+  // The locales of the person's own worklist, as the server reads it; kept while a new page loads.
+  const locales = worklist.data?.locales ?? (params.locale ? [params.locale] : []);
   const filtered = Boolean(params.q || params.locale);
-
 
   const anyLocale = t('translations.anyLocale');
   return (
     <>
-      <PageHeader title={t('translations.title')} intro={me.roles.includes('translator') ? t('translations.intro') : t('translations.introAll')} />
+      <PageHeader title={t('translations.title')} intro={worklist.data ? t(worklist.data.can.translate ? 'translations.intro' : 'translations.introAll') : undefined} />
       <div className={styles.toolbar} role="search">
         <Field label={t('translations.search')} className={styles.search}>
           <SearchBox value={query} onChange={(_event, data) => setQuery(data.value)} />

@@ -34,9 +34,6 @@ const useStyles = makeStyles({
   muted: { color: tokens.colorNeutralForeground3 },
 });
 
-/** Which locales a person may open: a translator only theirs (the server answers 403 for the rest). */
-const readsEveryLocale = (roles: readonly string[]) => roles.includes('admin') || roles.includes('curator');
-
 /** The translator's workspace for one story in one locale: unit table, editor, preview and XLIFF exchange. */
 export function TranslationWorkspacePage() {
   const params = useParams();
@@ -94,8 +91,8 @@ function Workspace({ target }: { target: TranslationTarget }) {
   const sourceLocale = story.data?.sourceLocale ?? 'en';
   const language = languageName(target.locale);
   const title = t('workspace.title', { story: story.data?.title ?? '…', language: languageLabel(target.locale) });
-  const myLocales = readsEveryLocale(me.roles) ? null : me.locales;
-  const canWrite = me.roles.includes('translator') && me.locales.includes(target.locale);
+  // What the person may do here is the server's answer for this target; nothing is offered until it has come.
+  const can = units.data?.can ?? { translate: false, import: false, export: false };
   const page = units.data;
 
   if (units.error instanceof ApiError && units.error.status === 403) {
@@ -121,16 +118,14 @@ function Workspace({ target }: { target: TranslationTarget }) {
       />
       <div className={styles.top}>
         <ul className={styles.locales} aria-label={t('workspace.otherLocales')}>
-          {(progress.data ?? [])
-            .filter((entry) => !myLocales || myLocales.includes(entry.locale))
-            .map((entry) => (
-              <li key={entry.locale} className={entry.locale === target.locale ? styles.current : undefined} data-locale-progress={entry.locale}>
-                <LinkButton to={`/translations/${target.storyId}/${encodeURIComponent(entry.locale)}`} appearance="transparent" size="small" aria-current={entry.locale === target.locale ? 'page' : undefined}>
-                  {languageLabel(entry.locale)}
-                </LinkButton>
-                <ProgressMeter progress={entry} />
-              </li>
-            ))}
+          {(progress.data ?? []).map((entry) => (
+            <li key={entry.locale} className={entry.locale === target.locale ? styles.current : undefined} data-locale-progress={entry.locale}>
+              <LinkButton to={`/translations/${target.storyId}/${encodeURIComponent(entry.locale)}`} appearance="transparent" size="small" aria-current={entry.locale === target.locale ? 'page' : undefined}>
+                {languageLabel(entry.locale)}
+              </LinkButton>
+              <ProgressMeter progress={entry} />
+            </li>
+          ))}
         </ul>
         <Field label={t('workspace.status')} className={styles.status}>
           <Dropdown
@@ -142,7 +137,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
             {UNIT_STATUSES.map((status) => <Option key={status} value={status}>{t(`workspace.statuses.${status}`)}</Option>)}
           </Dropdown>
         </Field>
-        <XliffExchange target={target} canUpload={canWrite} />
+        <XliffExchange target={target} can={can} />
       </div>
       <div className={styles.grid}>
         <div className={styles.column}>
@@ -173,7 +168,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
               })}
               draft={drafts[selected.unitId]}
               onDraft={(text) => setDrafts(({ [selected.unitId]: _old, ...rest }) => (text === undefined ? rest : { ...rest, [selected.unitId]: text }))}
-              canWrite={canWrite}
+              canWrite={can.translate}
               autoFocus={focusEditor}
               onMove={move}
               canMove={{ previous: items.indexOf(selected) > 0 || page.page > 1, next: items.indexOf(selected) < items.length - 1 || page.page * page.pageSize < page.total }}
