@@ -42,7 +42,7 @@ export function ReleasesPage() {
       <PageHeader
         title={t('releases.title')}
         intro={t('releases.intro')}
-        actions={galleryId ? <Button appearance="primary" icon={<AddRegular />} onClick={() => setBuilding(true)}>{t('releases.build.open')}</Button> : null}
+        actions={galleryId && releases.data?.can.build ? <Button appearance="primary" icon={<AddRegular />} onClick={() => setBuilding(true)}>{t('releases.build.open')}</Button> : null}
       />
       <div className={styles.toolbar}>
         <div className={styles.picker}>
