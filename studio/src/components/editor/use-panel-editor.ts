@@ -20,10 +20,17 @@ export function usePanelEditor({ initialDoc, locale, resolveMedia, onChange }: {
   const { t } = useTranslation();
   const missingMediaLabel = t('editor.missingImage');
   const emptyPanel = t('editor.emptyPanel');
+  const trying = t('widgetTrial.trying');
+  const keep = t('widgetTrial.keep');
+  const reset = t('widgetTrial.reset');
   const extensions = useMemo(
     // The placeholder is the studio's alone: it is drawn by CSS, never stored in the document.
-    () => [...panelEditorExtensions({ locale, resolveMedia, missingMediaLabel }), CommentHighlights, Placeholder.configure({ placeholder: emptyPanel })],
-    [locale, resolveMedia, missingMediaLabel, emptyPanel],
+    () => [
+      ...panelEditorExtensions({ locale, resolveMedia, missingMediaLabel, widgetTrialLabels: { trying, keep, reset } }),
+      CommentHighlights,
+      Placeholder.configure({ placeholder: emptyPanel }),
+    ],
+    [locale, resolveMedia, missingMediaLabel, emptyPanel, trying, keep, reset],
   );
   return useEditor(
     {

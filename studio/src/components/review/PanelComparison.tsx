@@ -1,8 +1,10 @@
 import { useRef, useState } from 'react';
-import { Badge, type BadgeProps, makeStyles, Text, tokens } from '@fluentui/react-components';
+import { Badge, type BadgeProps, Button, makeStyles, Text, tokens } from '@fluentui/react-components';
+import { FullScreenMaximizeRegular } from '@fluentui/react-icons';
 import { panelText, type CommentRange, type CommentView, type ComparisonBasis, type PanelDiff, type PanelDocJSON, type RevisionPanelView } from '@mantlepiece/shared';
 import { PanelFrame, PanelView, type ResolveMedia } from '@mantlepiece/shared/react';
 import { useTranslation } from 'react-i18next';
+import { StationPreviewDialog } from '../preview/StationPreviewDialog';
 import { CommentThreads } from './CommentThreads';
 import { useReviewStyles } from './review-styles';
 import { anchorInPanelText, selectionRangeIn } from './text-selection';
@@ -16,6 +18,8 @@ const useStyles = makeStyles({
   top: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalM, flexWrap: 'wrap' },
   sides: { display: 'grid', gridTemplateColumns: `repeat(auto-fit, minmax(${DRAWING_WIDTH / 2}px, ${DRAWING_WIDTH}px))`, gap: tokens.spacingHorizontalL },
   side: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXS, minWidth: 0 },
+  sideTop: { display: 'flex', alignItems: 'center', justifyContent: 'space-between', gap: tokens.spacingHorizontalS },
+  selection: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalM },
   stage: { padding: tokens.spacingHorizontalXS, backgroundColor: '#23282d', borderRadius: tokens.borderRadiusMedium, width: 'fit-content', maxWidth: '100%' },
   selectable: { cursor: 'text' },
   absent: {
@@ -73,6 +77,7 @@ export function PanelComparison({ diff, panel, basePanel, basis, locale, resolve
   const shared = useReviewStyles();
   const drawing = useRef<HTMLDivElement>(null);
   const [range, setRange] = useState<CommentRange | null>(null);
+  const [fullSize, setFullSize] = useState(false);
   const number = diff.numberAfter ?? diff.numberBefore ?? 0;
   const title = t('story.panelNumber', { number });
   const headingId = `panel-${diff.panelId}-heading`;
@@ -80,9 +85,9 @@ export function PanelComparison({ diff, panel, basePanel, basis, locale, resolve
   const firstReview = basis === 'first_review';
   const baseDoc = basePanel?.docs[locale];
   const doc = panel?.docs[locale];
-  const captureSelection = () => {
-    if (!drawing.current || !doc) return;
-    const selected = selectionRangeIn(drawing.current, window.getSelection());
+  const captureSelection = (within: HTMLElement | null) => {
+    if (!within || !doc) return;
+    const selected = selectionRangeIn(within, window.getSelection());
     const anchored = selected && anchorInPanelText(panelText(doc, { locale }), selected);
     if (anchored) setRange(anchored);
   };
@@ -105,16 +110,41 @@ export function PanelComparison({ diff, panel, basePanel, basis, locale, resolve
           </div>
         )}
         <div className={styles.side}>
-          <Text weight="semibold">{t('diff.thisRevision')}</Text>
+          <div className={styles.sideTop}>
+            <Text weight="semibold">{t('diff.thisRevision')}</Text>
+            {doc ? (
+              <Button size="small" icon={<FullScreenMaximizeRegular />} onClick={() => setFullSize(true)} aria-describedby={headingId}>
+                {t('stationPreview.open')}
+              </Button>
+            ) : null}
+          </div>
           {doc ? (
             // The drawing stays a drawing for everyone; selecting its words is a shortcut that the comment box repeats in words.
-            <div ref={drawing} className={styles.selectable} onMouseUp={captureSelection} onKeyUp={captureSelection} data-selectable-panel>
+            <div ref={drawing} className={styles.selectable} onMouseUp={() => captureSelection(drawing.current)} onKeyUp={() => captureSelection(drawing.current)} data-selectable-panel>
               <Drawing doc={doc} locale={locale} resolveMedia={resolveMedia} />
             </div>
           ) : (
             <div className={styles.absent}>{t('diff.removedHere')}</div>
           )}
           {doc && canComment ? <Text size={200} className={shared.muted}>{t('comments.selectHint')}</Text> : null}
+          {doc && fullSize ? (
+            <StationPreviewDialog
+              title={t('stationPreview.title', { number })}
+              doc={doc}
+              locale={locale}
+              resolveMedia={resolveMedia}
+              onClose={() => setFullSize(false)}
+              onSelectionEnd={canComment ? captureSelection : undefined}
+              footer={
+                canComment ? (
+                  <div className={styles.selection}>
+                    <Text className={shared.muted}>{range ? t('stationPreview.selected', { quote: range.quote }) : t('comments.selectHint')}</Text>
+                    {range ? <Button onClick={() => setFullSize(false)}>{t('stationPreview.commentOnSelection')}</Button> : null}
+                  </div>
+                ) : null
+              }
+            />
+          ) : null}
         </div>
       </div>
 

@@ -180,7 +180,7 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
         </TabList>
         <div className={styles.sideBody}>
           {sideTab === 'preview' ? (
-            <PanelPreview doc={shownDoc} locale={locale} resolveMedia={resolveMedia} width={SIDE_WIDTH - 34} />
+            <PanelPreview doc={shownDoc} locale={locale} resolveMedia={resolveMedia} width={SIDE_WIDTH - 34} number={story.panels.findIndex((candidate) => candidate.id === panel.id) + 1} />
           ) : sideTab === 'comments' ? (
             shownRevision ? (
               <DraftComments revision={shownRevision} panelId={panel.id} doc={shownDoc} locale={locale} />

@@ -23,6 +23,21 @@ export const useEditorStyles = makeStyles({
     '& .ProseMirror a': { color: tokens.colorBrandForegroundLink },
     '& .mp-widget-node, & .mp-panel-image-node': { margin: `${tokens.spacingVerticalM} 0`, padding: tokens.spacingHorizontalS, borderRadius: tokens.borderRadiusMedium, border: `1px solid ${tokens.colorNeutralStroke2}`, cursor: 'pointer' },
     '& .mp-widget-node[data-selected], & .mp-panel-image-node[data-selected]': { outline: `3px solid ${tokens.colorBrandStroke1}`, outlineOffset: '2px' },
+    // A widget being tried shows a setting that is not saved: its frame says so as well as the bar under it.
+    '& .mp-widget-node[data-trying]': { border: `1px dashed ${magma.foreground}` },
+    '& .mp-widget-trial': { backgroundColor: magma.tint, color: magma.foreground, borderRadius: tokens.borderRadiusMedium, marginTop: tokens.spacingVerticalXS },
+    '& .mp-widget-trial button': {
+      font: 'inherit',
+      minHeight: '32px',
+      padding: `0 ${tokens.spacingHorizontalM}`,
+      borderRadius: tokens.borderRadiusMedium,
+      border: `1px solid ${tokens.colorNeutralStroke1}`,
+      backgroundColor: tokens.colorNeutralBackground1,
+      color: tokens.colorNeutralForeground1,
+      cursor: 'pointer',
+    },
+    '& .mp-widget-trial button:first-of-type': { backgroundColor: tokens.colorBrandBackground, color: tokens.colorNeutralForegroundOnBrand, border: 'none' },
+    '& .mp-widget-trial button:focus-visible': { outline: `2px solid ${tokens.colorStrokeFocus2}`, outlineOffset: '2px' },
     // The figure's own inline size suits a wall screen; in the editor an image only needs to be recognised.
     '& .mp-panel-image-node img': { maxHeight: '16rem !important', maxWidth: '100%', width: 'auto !important', height: 'auto !important' },
     '& .mp-live-value-node, & .mp-live-phrase-node': {

@@ -16,4 +16,23 @@ export const editorReviewAr: typeof editorReviewEn = {
     wordingFor: 'الصياغة عندما يكون {{state}}',
     noWidget: 'لم تعد أداتها في هذه اللوحة، أو ليست لها حالات تتبعها. احذف العبارة أو أعد الأداة.',
   },
+  widgetTrial: {
+    trying: 'تجربة: الإعداد المحفوظ لم يتغيّر.',
+    keep: 'اعتمد هذا إعدادًا أوّليًا',
+    reset: 'عد إلى الإعداد المحفوظ',
+  },
+  stationPreview: {
+    open: 'الحجم الكامل',
+    title: 'اللوحة {{number}} بالحجم الكامل',
+    screen: 'شاشة المحطة',
+    screenSize: '{{width}} × {{height}} {{orientation}}',
+    screenStations: '{{width}} × {{height}} {{orientation}} · {{stations}}',
+    landscape: 'أفقية',
+    portrait: 'عمودية',
+    fit: 'ملاءمة النافذة',
+    actual: 'الحجم الفعلي',
+    zoom: 'معروضة بنسبة {{percent}} ٪ من حجم المحطة',
+    selected: 'محدّد للتعليق: «{{quote}}»',
+    commentOnSelection: 'اكتب التعليق',
+  },
 };

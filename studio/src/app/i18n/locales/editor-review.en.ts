@@ -15,4 +15,23 @@ export const editorReviewEn = {
     wordingFor: 'Wording while it {{state}}',
     noWidget: 'Its widget is no longer on this panel, or has no states to follow. Remove the phrase, or add the widget back.',
   },
+  widgetTrial: {
+    trying: 'Trying it out: the saved setting is unchanged.',
+    keep: 'Use this as the starting setting',
+    reset: 'Back to the saved setting',
+  },
+  stationPreview: {
+    open: 'Full size',
+    title: 'Panel {{number}} at full size',
+    screen: 'Station screen',
+    screenSize: '{{width}} × {{height}} {{orientation}}',
+    screenStations: '{{width}} × {{height}} {{orientation}} · {{stations}}',
+    landscape: 'landscape',
+    portrait: 'portrait',
+    fit: 'Zoom to fit',
+    actual: 'Actual size',
+    zoom: 'Shown at {{percent}} % of the station’s size',
+    selected: 'Selected for a comment: “{{quote}}”',
+    commentOnSelection: 'Write the comment',
+  },
 };

@@ -16,4 +16,23 @@ export const editorReviewEs: typeof editorReviewEn = {
     wordingFor: 'Texto mientras {{state}}',
     noWidget: 'Su widget ya no está en este panel o no tiene estados que seguir. Quite la frase o vuelva a añadir el widget.',
   },
+  widgetTrial: {
+    trying: 'De prueba: el ajuste guardado no cambia.',
+    keep: 'Usar esto como ajuste inicial',
+    reset: 'Volver al ajuste guardado',
+  },
+  stationPreview: {
+    open: 'Tamaño real',
+    title: 'Panel {{number}} a tamaño real',
+    screen: 'Pantalla del puesto',
+    screenSize: '{{width}} × {{height}} {{orientation}}',
+    screenStations: '{{width}} × {{height}} {{orientation}} · {{stations}}',
+    landscape: 'horizontal',
+    portrait: 'vertical',
+    fit: 'Ajustar a la ventana',
+    actual: 'Tamaño real',
+    zoom: 'Mostrado al {{percent}} % del tamaño del puesto',
+    selected: 'Seleccionado para un comentario: «{{quote}}»',
+    commentOnSelection: 'Escribir el comentario',
+  },
 };

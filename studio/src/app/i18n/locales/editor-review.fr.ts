@@ -16,4 +16,23 @@ export const editorReviewFr: typeof editorReviewEn = {
     wordingFor: 'Formulation quand il {{state}}',
     noWidget: 'Son widget n’est plus sur ce panneau, ou n’a pas d’états à suivre. Supprimez la phrase ou remettez le widget.',
   },
+  widgetTrial: {
+    trying: 'Essai : le réglage enregistré ne change pas.',
+    keep: 'En faire le réglage de départ',
+    reset: 'Revenir au réglage enregistré',
+  },
+  stationPreview: {
+    open: 'Taille réelle',
+    title: 'Panneau {{number}} en taille réelle',
+    screen: 'Écran de la borne',
+    screenSize: '{{width}} × {{height}} {{orientation}}',
+    screenStations: '{{width}} × {{height}} {{orientation}} · {{stations}}',
+    landscape: 'paysage',
+    portrait: 'portrait',
+    fit: 'Ajuster à la fenêtre',
+    actual: 'Taille réelle',
+    zoom: 'Affiché à {{percent}} % de la taille de la borne',
+    selected: 'Sélection pour un commentaire : « {{quote}} »',
+    commentOnSelection: 'Écrire le commentaire',
+  },
 };
