@@ -37,6 +37,10 @@ let arabicQuantities = 0;
 let scrollingChecked = false;
 /** Whether axe-core looked at a widget panel in this orientation. */
 let axeChecked = false;
+/** Heights of the words drawn in each panel's widgets at the standard text size, by orientation, language, story and panel. */
+const drawnLabelHeights = new Map<string, number[]>();
+/** How many drawn labels were compared between the two text sizes, so a walk that found none cannot pass unnoticed. */
+let labelsCompared = 0;
 
 const eventually = <T>(read: () => Promise<T> | T, timeout = 15_000) => expect.poll(read, { timeout, interval: 100 });
 
@@ -171,6 +175,9 @@ function hiddenContent(page: Page): Promise<string[]> {
   });
 }
 
+/** The height on screen of every word drawn in the panel's widget drawings, in document order. */
+const labelHeights = (page: Page) => page.locator('article.mp-panel .mp-widget svg[role] text').evaluateAll((texts) => texts.map((text) => text.getBoundingClientRect().height));
+
 /** How much of the menu the story cards take, across and down, as fractions of the space under its heading. */
 function menuCoverage(page: Page): Promise<{ across: number; down: number; cards: number; offScreen: number }> {
   return page.evaluate(() => {
@@ -295,6 +302,18 @@ async function walkPanels(label: string): Promise<string[]> {
       const where = `${label}, story ${storyIndex + 1} panel ${panel}`;
       if (shots) await screen.screenshot({ path: join(shots, `${where.replace(/[^\w]+/g, '-')}.png`) });
       problems.push(...(await hiddenContent(screen)).map((problem) => `${where}: ${problem}`));
+      // Words drawn in a widget follow Larger text as the panel's words do (drawn 1.35 times as large, panel-theme's LARGE_TEXT_SCALE).
+      const heights = await labelHeights(screen);
+      const sameScreen = `${label.replace(/, (larger|standard) text$/, '')}, story ${storyIndex + 1} panel ${panel}`;
+      if (label.endsWith('standard text')) drawnLabelHeights.set(sameScreen, heights);
+      else {
+        const standard = drawnLabelHeights.get(sameScreen) ?? [];
+        if (standard.length !== heights.length) problems.push(`${where}: ${heights.length} drawn labels, ${standard.length} at the standard size`);
+        heights.forEach((height, index) => {
+          labelsCompared += 1;
+          if (height < standard[index]! * 1.2) problems.push(`${where}: drawn label ${index + 1} is ${height.toFixed(1)} px high, ${standard[index]!.toFixed(1)} px at the standard size`);
+        });
+      }
       // axe-core on a widget panel in Arabic with larger text, once per orientation; the kiosk's zoom lock is its one allowed finding.
       if (!axeChecked && label.endsWith(', ar, larger text') && (await screen.locator('.mp-widget').count())) {
         axeChecked = true;
@@ -343,6 +362,7 @@ describe('every demo panel on the kiosk, in every orientation, language and text
     expect(problems).toEqual([]);
     expect(scrollingChecked, 'no panel was long enough to try scrolling').toBe(true);
     expect(axeChecked, 'axe-core saw no widget panel').toBe(true);
+    expect(labelsCompared, 'no drawn label was compared between the text sizes').toBeGreaterThan(0);
   }, 600_000);
 
   it('read numbers with their units in order in Arabic, on the drawings and in the text', () => {

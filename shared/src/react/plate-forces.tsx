@@ -3,6 +3,7 @@ import { formatQuantity, interpolate, widgetStrings } from '../i18n/index.js';
 import { formatMillionYears } from '../widgets/convection-cell/index.js';
 import { computePlateForces, formatForcePerMetre, plateForces, SLAB_LENGTH_MAX_KM, UPPER_MANTLE_BASE_KM, type PlateForcesParams } from '../widgets/plate-forces/index.js';
 import { drawingSliderHandlers } from './drawing-slider.js';
+import { DISCONTINUITY_Y, layoutPlateLabels, PLATE, PLATE_VIEW, RIDGE_PUSH_ARROW, RIDGE_X, SEA_LEVEL, TRENCH, UNITS_PER_KM, type PlateLabel } from './plate-forces-layout.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { stepWithin, ValueStepper } from './value-stepper.js';
 import { visuallyHidden } from './visually-hidden.js';
@@ -15,43 +16,39 @@ export interface PlateForcesProps {
   showCaution?: boolean;
   /** Largest drawn width in CSS px; the drawing scales down to fit. */
   maxWidth?: number;
+  /** The words drawn on the plate against their standard size: the visitor's Larger text on a kiosk. */
+  textScale?: number;
 }
 
-const VIEW = { width: 480, height: 330 };
-const SEA_LEVEL = 40;
-const PLATE = { top: 62, thickness: 18 };
-const RIDGE_X = 30;
-const TRENCH = { x: 250, y: PLATE.top };
-/** Drawing units per km of slab, so the longest slab at the gentlest dip still fits to the right of the trench. */
-const UNITS_PER_KM = 0.078;
+const VIEW = PLATE_VIEW;
 const COLOURS = { sea: '#cfe3ee', plate: '#6b5a45', mantle: '#f0d9b5', push: '#0b3f5c', pull: '#8a3412', text: '#24282c' };
-interface ArrowLabel { x: number; y: number; anchor: 'start' | 'middle' | 'end' }
-
-/**
- * Slab pull is named under the plate, ending just before the trench: a name centred on its arrow
- * ran into ridge push's in longer languages (French), wherever the slab's dip put it.
- */
-const SLAB_PULL_LABEL: ArrowLabel = { x: TRENCH.x - 12, y: PLATE.top + PLATE.thickness + 42, anchor: 'end' };
 const AGE_STEP_MYR = 10;
 const LENGTH_STEP_KM = 100;
 const DEG = Math.PI / 180;
 
 const roundLength = (km: number) => Math.round(Math.min(SLAB_LENGTH_MAX_KM, Math.max(0, km)) / 10) * 10;
 
-function Arrow({ from, to, colour, label, labelAt }: { from: { x: number; y: number }; to: { x: number; y: number }; colour: string; label: string; labelAt?: ArrowLabel }) {
+function Arrow({ from, to, colour, label }: { from: { x: number; y: number }; to: { x: number; y: number }; colour: string; label: PlateLabel }) {
   const length = Math.hypot(to.x - from.x, to.y - from.y);
   const unit = { x: (to.x - from.x) / length, y: (to.y - from.y) / length };
   const back = { x: to.x - unit.x * 12, y: to.y - unit.y * 12 };
   const head = [to, { x: back.x - unit.y * 7, y: back.y + unit.x * 7 }, { x: back.x + unit.y * 7, y: back.y - unit.x * 7 }].map((p) => `${p.x},${p.y}`).join(' ');
-  const at = labelAt ?? { x: (from.x + to.x) / 2, y: (from.y + to.y) / 2 - 10, anchor: 'middle' };
   return (
     <g>
       <line x1={from.x} y1={from.y} x2={back.x} y2={back.y} stroke={colour} strokeWidth={6} strokeLinecap="round" />
       <polygon points={head} fill={colour} />
-      <text x={at.x} y={at.y} fontSize={13} fontWeight={700} textAnchor={at.anchor} fill={colour} paintOrder="stroke" stroke="#fffdf7" strokeWidth={4}>
-        {label}
+      <text x={label.x} y={label.y} fontSize={label.fontSize} fontWeight={700} textAnchor={label.anchor} dominantBaseline="middle" fill={colour} paintOrder="stroke" stroke="#fffdf7" strokeWidth={4}>
+        {label.text}
       </text>
     </g>
+  );
+}
+
+function PlaceLabel({ label }: { label: PlateLabel }) {
+  return (
+    <text x={label.x} y={label.y} fontSize={label.fontSize} textAnchor={label.anchor} dominantBaseline="middle" fill={COLOURS.text}>
+      {label.text}
+    </text>
   );
 }
 
@@ -75,7 +72,7 @@ function ForceBar({ label, value, fraction, colour, name }: { label: string; val
  * edge, side by side to scale, with what resists them named and the caution that both are rough
  * estimates. The visitor drags the slab's tip (or uses the buttons or arrow keys) to lengthen it.
  */
-export function PlateForces({ params, locale, onParamsChange, showCaution = false, maxWidth = 560 }: PlateForcesProps) {
+export function PlateForces({ params, locale, onParamsChange, showCaution = false, maxWidth = 560, textScale = 1 }: PlateForcesProps) {
   const strings = widgetStrings(locale).plateForces;
   const [shown, setShown] = useState(params);
   useEffect(() => setShown(params), [params]);
@@ -118,7 +115,10 @@ export function PlateForces({ params, locale, onParamsChange, showCaution = fals
   const longer = stepWithin(shown.slabLengthKm, LENGTH_STEP_KM, 0, SLAB_LENGTH_MAX_KM);
   const younger = stepWithin(shown.ageMyr, -AGE_STEP_MYR, AGE_STEP_MYR, 200);
   const older = stepWithin(shown.ageMyr, AGE_STEP_MYR, AGE_STEP_MYR, 200);
-  const discontinuityY = PLATE.top + UPPER_MANTLE_BASE_KM * UNITS_PER_KM;
+  const labels = layoutPlateLabels(
+    { ridge: strings.ridge, trench: strings.trench, discontinuity: formatQuantity(UPPER_MANTLE_BASE_KM, 'km', locale), ridgePush: strings.ridgePush, slabPull: strings.slabPull },
+    textScale,
+  );
   const slabNormal = { x: -dip.y * PLATE.thickness, y: dip.x * PLATE.thickness };
 
   return (
@@ -139,23 +139,22 @@ export function PlateForces({ params, locale, onParamsChange, showCaution = fals
         <title>{strings.title}</title>
         <rect x={0} y={0} width={VIEW.width} height={SEA_LEVEL} fill="#f6efe2" />
         <path d={`M 0 ${SEA_LEVEL} L ${VIEW.width} ${SEA_LEVEL} L ${VIEW.width} ${PLATE.top} L ${TRENCH.x + 14} ${PLATE.top + 8} L ${RIDGE_X + 30} ${PLATE.top} Q ${RIDGE_X} ${SEA_LEVEL + 6} 0 ${PLATE.top} Z`} fill={COLOURS.sea} />
-        <line x1={0} y1={discontinuityY} x2={VIEW.width} y2={discontinuityY} stroke={COLOURS.text} strokeDasharray="4 5" />
-        <text x={VIEW.width - 6} y={discontinuityY - 5} fontSize={13} textAnchor="end" fill={COLOURS.text}>{formatQuantity(UPPER_MANTLE_BASE_KM, 'km', locale)}</text>
+        <line x1={0} y1={DISCONTINUITY_Y} x2={VIEW.width} y2={DISCONTINUITY_Y} stroke={COLOURS.text} strokeDasharray="4 5" />
+        <PlaceLabel label={labels.discontinuity} />
         <path d={`M ${RIDGE_X} ${PLATE.top - 12} Q ${RIDGE_X + 40} ${PLATE.top} ${TRENCH.x} ${PLATE.top} L ${TRENCH.x} ${PLATE.top + PLATE.thickness} L ${RIDGE_X + 30} ${PLATE.top + PLATE.thickness * 0.4} Z`} fill={COLOURS.plate} />
         {drawnLength > 0 ? (
           <polygon points={[slabTop, tip, { x: tip.x + slabNormal.x, y: tip.y + slabNormal.y }, { x: slabTop.x + slabNormal.x, y: slabTop.y + slabNormal.y }].map((p) => `${p.x},${p.y}`).join(' ')} fill={COLOURS.plate} data-slab="" />
         ) : null}
         <circle cx={tip.x + slabNormal.x / 2} cy={tip.y + slabNormal.y / 2} r={16} fill="#fffdf7" stroke={COLOURS.plate} strokeWidth={3} />
-        <text x={RIDGE_X} y={SEA_LEVEL - 8} fontSize={14} fill={COLOURS.text}>{strings.ridge}</text>
-        <text x={TRENCH.x} y={SEA_LEVEL - 8} fontSize={14} textAnchor="middle" fill={COLOURS.text}>{strings.trench}</text>
-        <Arrow from={{ x: RIDGE_X + 40, y: PLATE.top + 34 }} to={{ x: RIDGE_X + 130, y: PLATE.top + 34 }} colour={COLOURS.push} label={strings.ridgePush} />
+        <PlaceLabel label={labels.ridge} />
+        <PlaceLabel label={labels.trench} />
+        <Arrow from={RIDGE_PUSH_ARROW.from} to={RIDGE_PUSH_ARROW.to} colour={COLOURS.push} label={labels.ridgePush} />
         {drawnLength > 30 ? (
           <Arrow
             from={{ x: slabTop.x + dip.x * drawnLength * 0.3 - 26 * dip.y, y: slabTop.y + dip.y * drawnLength * 0.3 + 26 * dip.x }}
             to={{ x: slabTop.x + dip.x * drawnLength * 0.8 - 26 * dip.y, y: slabTop.y + dip.y * drawnLength * 0.8 + 26 * dip.x }}
             colour={COLOURS.pull}
-            label={strings.slabPull}
-            labelAt={SLAB_PULL_LABEL}
+            label={labels.slabPull}
           />
         ) : null}
       </svg>

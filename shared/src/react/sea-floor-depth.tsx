@@ -14,6 +14,7 @@ import {
   type SeaFloorModel,
 } from '../widgets/sea-floor-depth/index.js';
 import { drawingSliderHandlers } from './drawing-slider.js';
+import { DEPTH_TICKS_M, layoutSeaFloor, LITHOSPHERE, SEA, SEA_FLOOR_VIEW, seaFloorLabels, seaY, lithosphereY, THICKNESS_TICKS_KM } from './sea-floor-layout.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { stepWithin, ValueStepper } from './value-stepper.js';
 import { visuallyHidden } from './visually-hidden.js';
@@ -27,41 +28,38 @@ export interface SeaFloorDepthProps {
   showCaution?: boolean;
   /** Largest drawn width in CSS px; the drawing scales down to fit. */
   maxWidth?: number;
+  /** The words drawn on the profile against their standard size: the visitor's Larger text on a kiosk. */
+  textScale?: number;
   /** How the visitor moves it, for the instructions: a finger on a kiosk. */
   input?: WidgetInput;
 }
 
-const VIEW = { width: 480, height: 330 };
-/** Age runs left to right, from the ridge crest to the oldest floor the widget takes. */
-const AGE_AXIS = { left: 56, right: 464 };
-/** Upper band: the sea, from sea level down to 8 km (the half-space floor reaches 7.5 km at 200 Myr). */
-const SEA = { top: 34, bottom: 180, deepestM: 8000 };
-/** Lower band: the cooled lithosphere under the floor, down to 150 km (a different scale, said on the drawing). */
-const LITHOSPHERE = { top: 206, bottom: 316, deepestKm: 150 };
+const VIEW = SEA_FLOOR_VIEW;
 const COLOURS = { water: '#cfe3ee', floor: '#0b3f5c', halfSpace: '#0b3f5c', plate: '#8a3412', lithosphere: '#b9a68a', text: '#24282c', marker: '#24282c' };
 /** Smallest age a finger or key can pick: the models need some cooling to speak of. */
 const MIN_AGE_MYR = 0.5;
 const AGE_STEP_MYR = 5;
-/** Half the width of the longest age label ("200 million years" and its translations), so it stays inside the drawing. */
-const AGE_LABEL_INSET = 80;
 const SAMPLES = 120;
 /** The model not chosen: outlined in the panel's text colour, so it keeps its contrast in either theme. */
 const unchosenButtonStyle = { ...widgetButtonStyle, background: 'transparent', color: 'inherit' };
 
-const xOf = (ageMyr: number) => AGE_AXIS.left + (ageMyr / SEA_FLOOR_AGE_MAX_MYR) * (AGE_AXIS.right - AGE_AXIS.left);
-const ageAt = (x: number) => ((x - AGE_AXIS.left) / (AGE_AXIS.right - AGE_AXIS.left)) * SEA_FLOOR_AGE_MAX_MYR;
-const seaY = (depthM: number) => SEA.top + (depthM / SEA.deepestM) * (SEA.bottom - SEA.top);
-const lithosphereY = (km: number) => LITHOSPHERE.top + (Math.min(km, LITHOSPHERE.deepestKm) / LITHOSPHERE.deepestKm) * (LITHOSPHERE.bottom - LITHOSPHERE.top);
+/** Age runs left to right along the axis, from the ridge crest to the oldest floor the widget takes. */
+interface AgeAxis {
+  left: number;
+  right: number;
+}
+const xOf = (axis: AgeAxis, ageMyr: number) => axis.left + (ageMyr / SEA_FLOOR_AGE_MAX_MYR) * (axis.right - axis.left);
+const ageAt = (axis: AgeAxis, x: number) => ((x - axis.left) / (axis.right - axis.left)) * SEA_FLOOR_AGE_MAX_MYR;
 const clampAge = (ageMyr: number) => Math.round(Math.min(SEA_FLOOR_AGE_MAX_MYR, Math.max(MIN_AGE_MYR, ageMyr)) * 2) / 2;
 
 /**
  * The curves of both models, sampled from the ridge outwards (the first sample just off the crest):
  * one computation per age gives both models' depths and the chosen model's thickness.
  */
-function profiles(params: SeaFloorDepthParams) {
+function profiles(params: SeaFloorDepthParams, axis: AgeAxis) {
   const samples = Array.from({ length: SAMPLES + 1 }, (_, index) => {
     const age = Math.max(0.2, (index / SAMPLES) * SEA_FLOOR_AGE_MAX_MYR);
-    return { x: xOf(age), result: computeSeaFloorDepth({ ...params, ageMyr: age }) };
+    return { x: xOf(axis, age), result: computeSeaFloorDepth({ ...params, ageMyr: age }) };
   });
   const path = (y: (result: SeaFloorDepthResult) => number) => samples.map(({ x, result }, index) => `${index === 0 ? 'M' : 'L'} ${x} ${y(result)}`).join(' ');
   return {
@@ -76,7 +74,7 @@ function profiles(params: SeaFloorDepthParams) {
  * cooled lithosphere underneath, and the floor's heat flow at the age the visitor picks by dragging
  * along the floor, with the buttons or with the arrow keys.
  */
-export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = false, maxWidth = 560, input = 'desk' }: SeaFloorDepthProps) {
+export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = false, maxWidth = 560, textScale = 1, input = 'desk' }: SeaFloorDepthProps) {
   const strings = widgetStrings(locale).seaFloorDepth;
   const [shown, setShown] = useState(params);
   useEffect(() => setShown(params), [params]);
@@ -93,9 +91,24 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
     if (next !== shown.ageMyr) change({ ageMyr: next });
   };
 
+  const age = formatMillionYears(shown.ageMyr, locale);
+  const layout = layoutSeaFloor({
+    texts: {
+      ridge: strings.ridge,
+      seaLevel: strings.seaLevel,
+      thickness: strings.thickness,
+      depthTicks: DEPTH_TICKS_M.map((depthM) => formatQuantity(depthM / 1000, 'km', locale)),
+      thicknessTicks: THICKNESS_TICKS_KM.map((km) => formatQuantity(km, 'km', locale)),
+      age,
+    },
+    ageMyr: shown.ageMyr,
+    maxAgeMyr: SEA_FLOOR_AGE_MAX_MYR,
+    textScale,
+  });
+  const { axis } = layout;
   const slider = drawingSliderHandlers({
     view: VIEW,
-    valueAt: ({ x }) => ageAt(x),
+    valueAt: ({ x }) => ageAt(axis, x),
     value: shown.ageMyr,
     step: 1,
     fineStep: 0.5,
@@ -106,9 +119,8 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
   });
 
   const result = computeSeaFloorDepth(shown);
-  const curves = profiles(shown);
-  const markerX = xOf(shown.ageMyr);
-  const age = formatMillionYears(shown.ageMyr, locale);
+  const curves = profiles(shown, axis);
+  const markerX = xOf(axis, shown.ageMyr);
   const chosen = (model: SeaFloorModel) => shown.model === model;
   const younger = stepWithin(shown.ageMyr, -AGE_STEP_MYR, 1, SEA_FLOOR_AGE_MAX_MYR);
   const older = stepWithin(shown.ageMyr, AGE_STEP_MYR, 1, SEA_FLOOR_AGE_MAX_MYR);
@@ -129,28 +141,23 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
         style={{ direction: 'ltr', width: '100%', aspectRatio: `${VIEW.width} / ${VIEW.height}`, touchAction: 'none', cursor: 'ew-resize', display: 'block', background: '#f6efe2', borderRadius: 8 }}
       >
         <title>{strings.title}</title>
-        <path d={`${curves[shown.model === 'plate' ? 'plate' : 'halfSpace']} L ${AGE_AXIS.right} ${SEA.top} L ${AGE_AXIS.left} ${SEA.top} Z`} fill={COLOURS.water} />
-        <line x1={AGE_AXIS.left} y1={SEA.top} x2={AGE_AXIS.right} y2={SEA.top} stroke={COLOURS.floor} strokeWidth={2} />
-        <text x={AGE_AXIS.right} y={SEA.top - 8} fontSize={14} textAnchor="end" fill={COLOURS.text}>{strings.seaLevel}</text>
-        <text x={AGE_AXIS.left} y={SEA.top - 8} fontSize={14} fill={COLOURS.text}>{strings.ridge}</text>
-        {[2000, 4000, 6000].map((depthM) => (
-          <g key={depthM}>
-            <line x1={AGE_AXIS.left - 4} y1={seaY(depthM)} x2={AGE_AXIS.left} y2={seaY(depthM)} stroke={COLOURS.text} />
-            <text x={AGE_AXIS.left - 6} y={seaY(depthM)} fontSize={13} textAnchor="end" dominantBaseline="middle" fill={COLOURS.text}>{formatQuantity(depthM / 1000, 'km', locale)}</text>
-          </g>
+        <path d={`${curves[shown.model === 'plate' ? 'plate' : 'halfSpace']} L ${axis.right} ${SEA.top} L ${axis.left} ${SEA.top} Z`} fill={COLOURS.water} />
+        <line x1={axis.left} y1={SEA.top} x2={axis.right} y2={SEA.top} stroke={COLOURS.floor} strokeWidth={2} />
+        {DEPTH_TICKS_M.map((depthM) => (
+          <line key={depthM} x1={axis.left - 4} y1={seaY(depthM)} x2={axis.left} y2={seaY(depthM)} stroke={COLOURS.text} />
         ))}
         <path d={curves.halfSpace} fill="none" stroke={COLOURS.halfSpace} strokeWidth={chosen('half-space') ? 4 : 2} strokeDasharray="8 5" data-curve="half-space" />
         <path d={curves.plate} fill="none" stroke={COLOURS.plate} strokeWidth={chosen('plate') ? 4 : 2} data-curve="plate" />
-        <path d={`${curves.lithosphere} L ${AGE_AXIS.right} ${LITHOSPHERE.top} L ${AGE_AXIS.left} ${LITHOSPHERE.top} Z`} fill={COLOURS.lithosphere} />
-        <line x1={AGE_AXIS.left} y1={lithosphereY(GDH1.plateThicknessKm)} x2={AGE_AXIS.right} y2={lithosphereY(GDH1.plateThicknessKm)} stroke={COLOURS.plate} strokeDasharray="3 4" />
-        <text x={AGE_AXIS.left + 4} y={LITHOSPHERE.top + 14} fontSize={14} fill={COLOURS.text}>{strings.thickness}</text>
-        {[50, 100, 150].map((km) => (
-          <text key={km} x={AGE_AXIS.left - 6} y={lithosphereY(km)} fontSize={13} textAnchor="end" dominantBaseline="middle" fill={COLOURS.text}>{formatQuantity(km, 'km', locale)}</text>
-        ))}
+        <path d={`${curves.lithosphere} L ${axis.right} ${LITHOSPHERE.top} L ${axis.left} ${LITHOSPHERE.top} Z`} fill={COLOURS.lithosphere} />
+        <line x1={axis.left} y1={lithosphereY(GDH1.plateThicknessKm)} x2={axis.right} y2={lithosphereY(GDH1.plateThicknessKm)} stroke={COLOURS.plate} strokeDasharray="3 4" />
         <line x1={markerX} y1={SEA.top} x2={markerX} y2={LITHOSPHERE.bottom} stroke={COLOURS.marker} strokeWidth={2} />
         <circle cx={markerX} cy={seaY(result.depthM)} r={9} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={3} />
         <circle cx={markerX} cy={lithosphereY(result.lithosphereThicknessKm)} r={6} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={2} />
-        <text x={Math.min(Math.max(markerX, AGE_LABEL_INSET), VIEW.width - AGE_LABEL_INSET)} y={VIEW.height - 6} fontSize={13} fontWeight={700} textAnchor="middle" fill={COLOURS.text}>{age}</text>
+        {seaFloorLabels(layout).map((item, index) => (
+          <text key={index} x={item.x} y={item.y} fontSize={item.fontSize} fontWeight={item === layout.age ? 700 : undefined} textAnchor={item.anchor} dominantBaseline="middle" fill={COLOURS.text}>
+            {item.text}
+          </text>
+        ))}
       </svg>
       <p id={statusId} role="status" data-model={shown.model} style={{ margin: '0.5em 0', display: 'grid', gridTemplateColumns: 'auto 1fr', gap: '0 0.75em' }}>
         <span>{strings.depth}</span>

@@ -5,7 +5,7 @@ import { directionOf } from '../panel/panel-presentation.js';
 import { computeSlopeForce, formatAngle, formatForce, slopeForce, slopeForceOutputs, type SlopeForceParams, type SlopeForceResult } from '../widgets/slope-force/index.js';
 import { drawingSliderHandlers } from './drawing-slider.js';
 import { SimulationCaution } from './simulation-caution.js';
-import { BOARD, FOOT, LABEL_FONT, layoutSlope, PIVOT, SLOPE_PALETTE, SLOPE_VIEW, START, type ForceName, type LabelLayout, type Point } from './slope-force-layout.js';
+import { BOARD, FOOT, layoutSlope, PIVOT, SLOPE_PALETTE, SLOPE_VIEW, START, type ForceName, type LabelLayout, type Point } from './slope-force-layout.js';
 import { useReducedMotion } from './use-reduced-motion.js';
 import { visuallyHidden } from './visually-hidden.js';
 import { widgetButtonStyle, widgetControlRowStyle, type WidgetInput } from './widget-controls.js';
@@ -21,6 +21,8 @@ export interface SlopeForceBoxProps {
   reducedMotion?: boolean;
   /** Largest drawn width in CSS px; the drawing scales down to fit. */
   maxWidth?: number;
+  /** The words drawn on the slope against their standard size: the visitor's Larger text on a kiosk. */
+  textScale?: number;
   /** How the visitor moves it, for the instructions: a finger on a kiosk. */
   input?: WidgetInput;
   /** Significant digits of the live values on the same panel, by output name, so drawing and caption round alike. */
@@ -67,7 +69,7 @@ function ArrowShape({ from, to, colour, dash, width = 4 }: { from: Point; to: Po
  * The forces are named, with their values, in a key below the drawing, where the words can wrap
  * and grow with the panel's text; the drawing keeps only the angle and the critical angle.
  */
-export function SlopeForceBox({ params, locale, onParamsChange, showCaution = false, reducedMotion, maxWidth = 560, input = 'desk', outputDigits = {} }: SlopeForceBoxProps) {
+export function SlopeForceBox({ params, locale, onParamsChange, showCaution = false, reducedMotion, maxWidth = 560, textScale = 1, input = 'desk', outputDigits = {} }: SlopeForceBoxProps) {
   const strings = widgetStrings(locale).slopeForce;
   const reduce = useReducedMotion(reducedMotion);
   const [angle, setAngle] = useState(params.angleDeg);
@@ -151,7 +153,7 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
   };
   const angleText = formatAngle(angle, locale);
   const criticalText = interpolate(strings.criticalAngle, { angle: isolated(shown('criticalAngleDeg', result.criticalAngleDeg, formatAngle)) });
-  const layout = layoutSlope({ angleDeg: angle, position, result, angleText, criticalText });
+  const layout = layoutSlope({ angleDeg: angle, position, result, angleText, criticalText, textScale });
   const dir = directionOf(locale);
   const anchor = (label: LabelLayout) => ({
     x: label.edge === 'left' ? label.box.x : label.box.x + label.box.width,
@@ -188,12 +190,12 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
         <path d={`M ${pivot.x + arc.radius} ${pivot.y} A ${arc.radius} ${arc.radius} 0 0 0 ${pivot.x + arc.radius * cos} ${pivot.y - arc.radius * sin}`} fill="none" stroke={SLOPE_PALETTE.ink} strokeWidth={2} />
         <polygon points={points(layout.block)} fill={SLOPE_PALETTE.block} stroke={SLOPE_PALETTE.ink} strokeWidth={2} strokeLinejoin="round" />
         {layout.arrows.map((arrow) => <ArrowShape key={arrow.force} from={arrow.from} to={arrow.to} colour={SLOPE_PALETTE.arrows[arrow.force]} dash={FORCE_DASH[arrow.force]} />)}
-        <text {...anchor(layout.angleLabel)} fontSize={LABEL_FONT.angle} fontWeight={700} fill={SLOPE_PALETTE.ink} dominantBaseline="middle">
+        <text {...anchor(layout.angleLabel)} fontSize={layout.angleLabel.fontSize} fontWeight={700} fill={SLOPE_PALETTE.ink} dominantBaseline="middle">
           {isolated(angleText)}
         </text>
         <g>
           <line x1={layout.criticalKey.from.x} y1={layout.criticalKey.from.y} x2={layout.criticalKey.to.x} y2={layout.criticalKey.to.y} stroke={SLOPE_PALETTE.ink} strokeWidth={1.5} strokeDasharray="6 5" />
-          <text {...anchor(layout.criticalLabel)} direction={dir} fontSize={LABEL_FONT.critical} fill={SLOPE_PALETTE.ink} dominantBaseline="middle">
+          <text {...anchor(layout.criticalLabel)} direction={dir} fontSize={layout.criticalLabel.fontSize} fill={SLOPE_PALETTE.ink} dominantBaseline="middle">
             {criticalText}
           </text>
         </g>

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { contrastRatio } from '../colour/colour.js';
 import { interpolate, WIDGET_LOCALES, widgetStrings } from '../i18n/index.js';
 import { computeSlopeForce, formatAngle, MAX_FRICTION, MAX_MASS_KG, GRAVITY_RANGE } from '../widgets/slope-force/index.js';
+import { LARGE_TEXT_SCALE } from './panel/panel-theme.js';
 import { ARROW_SURFACES, BLOCK, BOARD, FOOT, layoutSlope, SLOPE_PALETTE, SLOPE_VIEW, START, type Box, type Point, type SlopeLayout } from './slope-force-layout.js';
 
 // Every half degree, and the first and last tenth; masses and gravity change the numbers only, so a coarser sweep serves them.
@@ -11,6 +12,8 @@ const MASSES = [1e-3, 0.5, 10, 57.3, 100, 999, 1e3, 12_345, 999_999, MAX_MASS_KG
 const FRICTION = [[0, 0], [0.3, 0.2], [0.6, 0.6], [0.85, 0.6], [1, 0.2], [MAX_FRICTION, 1.5]] as const;
 const GRAVITIES = [GRAVITY_RANGE.min, undefined, GRAVITY_RANGE.max];
 const POSITIONS = [FOOT, (FOOT + START) / 2, START];
+/** The kiosk's standard text and its Larger text (panel-theme's LARGE_TEXT_SCALE). */
+const TEXT_SCALES = [1, LARGE_TEXT_SCALE];
 
 interface Case {
   angleDeg: number;
@@ -20,17 +23,20 @@ interface Case {
   gravity?: number;
   position: number;
   locale: string;
+  textScale: number;
 }
 
 function* cases(): Generator<Case> {
-  for (const position of POSITIONS) {
-    for (const angleDeg of ANGLES) {
-      for (const [staticFriction, kineticFriction] of FRICTION) {
-        for (const locale of WIDGET_LOCALES) yield { angleDeg, massKg: 10, staticFriction, kineticFriction, position, locale };
+  for (const textScale of TEXT_SCALES) {
+    for (const position of POSITIONS) {
+      for (const angleDeg of ANGLES) {
+        for (const [staticFriction, kineticFriction] of FRICTION) {
+          for (const locale of WIDGET_LOCALES) yield { angleDeg, massKg: 10, staticFriction, kineticFriction, position, locale, textScale };
+        }
       }
-    }
-    for (const angleDeg of COARSE_ANGLES) {
-      for (const massKg of MASSES) for (const gravity of GRAVITIES) yield { angleDeg, massKg, staticFriction: 0.85, kineticFriction: 0.6, gravity, position, locale: 'en' };
+      for (const angleDeg of COARSE_ANGLES) {
+        for (const massKg of MASSES) for (const gravity of GRAVITIES) yield { angleDeg, massKg, staticFriction: 0.85, kineticFriction: 0.6, gravity, position, locale: 'en', textScale };
+      }
     }
   }
 }
@@ -47,6 +53,7 @@ function layoutOf(item: Case): SlopeLayout {
     result,
     angleText: formatAngle(item.angleDeg, item.locale),
     criticalText: interpolate(strings.criticalAngle, { angle: formatAngle(result.criticalAngleDeg, item.locale) }),
+    textScale: item.textScale,
   });
 }
 
@@ -93,7 +100,8 @@ function distanceBoxToSegment(box: Box, from: Point, to: Point): number {
 
 const describeCase = (item: Case) => JSON.stringify(item);
 
-describe('slope force drawing layout', () => {
+// Each check walks some twenty thousand layouts: a busy machine needs more than the default five seconds.
+describe('slope force drawing layout', { timeout: 30_000 }, () => {
   it('keeps every arrow, the block, the handle and both labels inside the frame at every angle, mass, friction and language', () => {
     const problems: string[] = [];
     for (const { item, layout } of laidOut) {
@@ -126,6 +134,20 @@ describe('slope force drawing layout', () => {
         for (const arrow of layout.arrows) if (distanceBoxToSegment(box, arrow.from, arrow.to) < 5) problems.push(`${name} label on the ${arrow.force} arrow: ${describeCase(item)}`);
       }
       if (problems.length > 10) break;
+    }
+    expect(problems).toEqual([]);
+  });
+
+  it('draws both labels larger with Larger text, the angle always by the full scale', () => {
+    // The cases come once per text size, in the same order: the second half is the first at Larger text.
+    const half = laidOut.length / 2;
+    const problems: string[] = [];
+    for (let index = 0; index < half && problems.length <= 10; index++) {
+      const standard = laidOut[index]!;
+      const larger = laidOut[index + half]!;
+      expect({ ...larger.item, textScale: 1 }).toEqual(standard.item);
+      if (Math.abs(larger.layout.angleLabel.fontSize - standard.layout.angleLabel.fontSize * LARGE_TEXT_SCALE) > 1e-9) problems.push(`angle label not scaled: ${describeCase(larger.item)}`);
+      if (larger.layout.criticalLabel.fontSize <= standard.layout.criticalLabel.fontSize) problems.push(`critical-angle label not larger: ${describeCase(larger.item)}`);
     }
     expect(problems).toEqual([]);
   });

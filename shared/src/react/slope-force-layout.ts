@@ -1,4 +1,7 @@
 import type { SlopeForceResult } from '../widgets/slope-force/index.js';
+import { fittedFontSize, textWidth, type Box } from './drawing-text.js';
+
+export type { Box } from './drawing-text.js';
 
 /**
  * Where everything of the slope force drawing goes, for one angle and one place of the block on
@@ -23,6 +26,9 @@ const COMPONENT_OFFSET = 12;
 const ARC_RADIUS = 48;
 /** The critical-angle label's band along the top: no board, handle or arrow reaches it at any angle (the sweep test checks). */
 const TOP_BAND_Y = 20;
+/** The dashed key before the critical-angle label, with the frame's margin before it. */
+const CRITICAL_KEY_ROOM = 32;
+/** Label sizes at the kiosk's standard text size; Larger text scales them (layoutSlope's textScale). */
 export const LABEL_FONT = { angle: 15, critical: 13 } as const;
 
 const DEG = Math.PI / 180;
@@ -50,13 +56,6 @@ export interface Point {
   y: number;
 }
 
-export interface Box {
-  x: number;
-  y: number;
-  width: number;
-  height: number;
-}
-
 export type ForceName = 'weight' | 'normal' | 'shear' | 'friction';
 
 export interface ArrowLayout {
@@ -70,6 +69,7 @@ export interface LabelLayout {
   box: Box;
   /** The side of the box the text is pinned to, so a longer translation grows away from what it must not cover. */
   edge: 'left' | 'right';
+  fontSize: number;
 }
 
 export interface SlopeLayout {
@@ -87,12 +87,6 @@ export interface SlopeLayout {
   /** A short dashed stroke before the critical-angle label, matching the dashed line it names. */
   criticalKey: { from: Point; to: Point };
 }
-
-/**
- * A generous estimate of a label's width: Lexend's widest common glyphs run about 0.62 em, digits
- * and Arabic letters less. Generous, so a label that fits here fits on screen.
- */
-const textWidth = (text: string, fontSize: number): number => [...text].length * fontSize * 0.62;
 
 interface Segment {
   from: Point;
@@ -119,7 +113,7 @@ const along = (from: Point, direction: Point, length: number): Point => ({ x: fr
 /** A label pinned by one side at x, centred on y. */
 function label(edge: LabelLayout['edge'], x: number, y: number, text: string, fontSize: number): LabelLayout {
   const width = textWidth(text, fontSize);
-  return { edge, box: { x: edge === 'left' ? x : x - width, y: y - fontSize * 0.7, width, height: fontSize * 1.4 } };
+  return { edge, fontSize, box: { x: edge === 'left' ? x : x - width, y: y - fontSize * 0.7, width, height: fontSize * 1.4 } };
 }
 
 /** cos and sin exact at 0° and 90°, as the model computes them. */
@@ -136,9 +130,11 @@ export interface SlopeLayoutInput {
   result: Pick<SlopeForceResult, 'weightN' | 'normalN' | 'shearN' | 'frictionN' | 'criticalAngleDeg'>;
   angleText: string;
   criticalText: string;
+  /** The visitor's text size against the standard one (Larger text on a kiosk); 1 when left out. */
+  textScale?: number;
 }
 
-export function layoutSlope({ angleDeg, position, result, angleText, criticalText }: SlopeLayoutInput): SlopeLayout {
+export function layoutSlope({ angleDeg, position, result, angleText, criticalText, textScale = 1 }: SlopeLayoutInput): SlopeLayout {
   const [cos, sin] = cosSin(angleDeg);
   const uphill = { x: cos, y: -sin };
   const downhill = { x: -cos, y: sin };
@@ -166,13 +162,14 @@ export function layoutSlope({ angleDeg, position, result, angleText, criticalTex
   const [criticalCos, criticalSin] = cosSin(result.criticalAngleDeg);
   const criticalLine = { from: pivot, to: along(pivot, { x: criticalCos, y: -criticalSin }, BOARD * 0.8) };
 
+  const angleFont = LABEL_FONT.angle * textScale;
   // The angle goes beside its arc where there is room, else under the ground line by the hinge, else at the far end of the ground.
   const half = (angleDeg / 2) * DEG;
   const candidates = [
-    ...(angleDeg >= 20 ? [label('left', pivot.x + (ARC_RADIUS + 8) * Math.cos(half), pivot.y - (ARC_RADIUS + 4) * Math.sin(half), angleText, LABEL_FONT.angle)] : []),
-    label('right', pivot.x - 6, pivot.y + 22, angleText, LABEL_FONT.angle),
-    label('left', pivot.x + ARC_RADIUS + 4, pivot.y + 22, angleText, LABEL_FONT.angle),
-    label('right', SLOPE_VIEW.width - 12, pivot.y + 22, angleText, LABEL_FONT.angle),
+    ...(angleDeg >= 20 ? [label('left', pivot.x + (ARC_RADIUS + 8) * Math.cos(half), pivot.y - (ARC_RADIUS + 4) * Math.sin(half), angleText, angleFont)] : []),
+    label('right', pivot.x - 6, pivot.y + 22, angleText, angleFont),
+    label('left', pivot.x + ARC_RADIUS + 4, pivot.y + 22, angleText, angleFont),
+    label('right', SLOPE_VIEW.width - 12, pivot.y + 22, angleText, angleFont),
   ];
   const obstacles: Segment[] = [
     ...arrows.map((item) => ({ from: item.from, to: item.to, halfWidth: 7 })),
@@ -183,7 +180,8 @@ export function layoutSlope({ angleDeg, position, result, angleText, criticalTex
   const angleLabel = candidates.find(clear) ?? candidates[candidates.length - 1]!;
 
   // The critical angle is named along the top, away from the handle and the arrows, its text starting just after its dashed key.
-  const criticalLabel = label('left', SLOPE_VIEW.width - 12 - textWidth(criticalText, LABEL_FONT.critical), TOP_BAND_Y, criticalText, LABEL_FONT.critical);
+  const criticalFont = fittedFontSize(criticalText, LABEL_FONT.critical, textScale, SLOPE_VIEW.width - 12 - CRITICAL_KEY_ROOM);
+  const criticalLabel = label('left', SLOPE_VIEW.width - 12 - textWidth(criticalText, criticalFont), TOP_BAND_Y, criticalText, criticalFont);
   const criticalKey = { from: { x: criticalLabel.box.x - 30, y: TOP_BAND_Y }, to: { x: criticalLabel.box.x - 8, y: TOP_BAND_Y } };
 
   return {

@@ -8,7 +8,7 @@ import { renderPanelNode, type PanelRenderContext } from './panel-nodes.js';
 import type { ResolveMedia } from './panel-media.js';
 import type { WidgetInput } from '../widget-controls.js';
 import { MoreBelowCue, useMoreBelow, type MoreBelowLook } from '../more-below.js';
-import { landscapeColumnStyle, panelRootStyle, WIDGET_MAX_WIDTH } from './panel-theme.js';
+import { LARGE_TEXT_SCALE, landscapeColumnStyle, panelRootStyle, WIDGET_MAX_WIDTH } from './panel-theme.js';
 
 export interface PanelViewProps {
   doc: PanelDocJSON;
@@ -96,6 +96,7 @@ export function PanelView({ doc, locale, dir, layout = 'landscape', largeText = 
     reducedMotion,
     highContrast,
     widgetMaxWidth: WIDGET_MAX_WIDTH[layout],
+    drawingTextScale: largeText ? LARGE_TEXT_SCALE : 1,
     widgetInput,
     outputDigits,
     onWidgetParamsChange,

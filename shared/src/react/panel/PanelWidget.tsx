@@ -26,6 +26,8 @@ export interface PanelWidgetProps {
   editing?: boolean;
   /** Widest the drawing may be, in CSS px at the station's full size. */
   maxWidth?: number;
+  /** How much larger than standard the words drawn in the widget are: the visitor's Larger text on a kiosk. */
+  textScale?: number;
   onParamsChange: (params: Record<string, unknown>) => void;
   /** Told what a running simulation reports, for the live values that show its outputs. */
   onReport?: (report: SimulationReport) => void;
@@ -51,7 +53,7 @@ export interface WidgetDrawingProps extends Omit<PanelWidgetProps, 'widgetType' 
  * The shared component of each widget type, given params the registry has already accepted: a
  * panel's widget block, and the studio's widget workbench.
  */
-export function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, onParamsChange, onReport, input, outputDigits }: WidgetDrawingProps) {
+export function WidgetDrawing({ widgetType, params, locale, reducedMotion, editing = false, maxWidth, textScale = 1, onParamsChange, onReport, input, outputDigits }: WidgetDrawingProps) {
   switch (widgetType) {
     case 'slope-force':
       return (
@@ -61,6 +63,7 @@ export function WidgetDrawing({ widgetType, params, locale, reducedMotion, editi
           reducedMotion={reducedMotion}
           showCaution={editing}
           maxWidth={maxWidth}
+          textScale={textScale}
           input={input}
           outputDigits={outputDigits}
           onParamsChange={(next) => onParamsChange({ ...next })}
@@ -71,9 +74,11 @@ export function WidgetDrawing({ widgetType, params, locale, reducedMotion, editi
         <ConvectionCell params={params as ConvectionCellParams} locale={locale} reducedMotion={reducedMotion} showCaution={editing} width={maxWidth} onReport={onReport} />
       );
     case 'sea-floor-depth':
-      return <SeaFloorDepth params={params as SeaFloorDepthParams} locale={locale} showCaution={editing} maxWidth={maxWidth} input={input} onParamsChange={(next) => onParamsChange({ ...next })} />;
+      return (
+        <SeaFloorDepth params={params as SeaFloorDepthParams} locale={locale} showCaution={editing} maxWidth={maxWidth} textScale={textScale} input={input} onParamsChange={(next) => onParamsChange({ ...next })} />
+      );
     case 'plate-forces':
-      return <PlateForces params={params as PlateForcesParams} locale={locale} showCaution={editing} maxWidth={maxWidth} onParamsChange={(next) => onParamsChange({ ...next })} />;
+      return <PlateForces params={params as PlateForcesParams} locale={locale} showCaution={editing} maxWidth={maxWidth} textScale={textScale} onParamsChange={(next) => onParamsChange({ ...next })} />;
   }
 }
 

@@ -21,6 +21,8 @@ export interface PanelRenderContext {
   reducedMotion: boolean;
   highContrast: boolean;
   widgetMaxWidth: number;
+  /** How much larger than their standard size the words drawn in a widget are (the visitor's Larger text). */
+  drawingTextScale: number;
   /** How visitors move widgets here: a finger on a kiosk. */
   widgetInput: WidgetInput;
   /** Digits of the panel's live values, by widget and output, so a drawing rounds a value as its caption does. */
@@ -129,6 +131,7 @@ export function renderPanelNode(node: PanelNodeJSON, context: PanelRenderContext
           reducedMotion={context.reducedMotion}
           highContrast={context.highContrast}
           maxWidth={context.widgetMaxWidth}
+          textScale={context.drawingTextScale}
           input={context.widgetInput}
           outputDigits={context.outputDigits.get(widgetId)}
           visitorModelCard={attrs.visitorModelCard === true}

@@ -11,7 +11,8 @@ export const PANEL_COLOURS = {
 
 /** Body text size in CSS px at the station's full size; large text is the visitor's switch. */
 const BODY_SIZE = { landscape: 34, portrait: 38 } as const;
-const LARGE_TEXT_SCALE = 1.35;
+/** How much the visitor's Larger text switch enlarges the panel's words, and the words drawn in its widgets. */
+export const LARGE_TEXT_SCALE = 1.35;
 /** Space between the screen's edge and the words, in CSS px at full size. */
 const PANEL_PADDING = { landscape: { block: 72, inline: 96 }, portrait: { block: 96, inline: 72 } } as const;
 
