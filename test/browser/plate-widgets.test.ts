@@ -69,6 +69,11 @@ describe('the sea-floor depth and plate-forces widgets in the studio', () => {
     // GDH1 at 150 Myr: 5651 − 2473·e^(−4.17) = 5612.8 m (Stein and Stein 1992).
     await expect.poll(() => page.locator('[data-readout="depth"]').textContent()).toBe('5.61\u00a0km');
     expect(await page.getByTestId('widget-description').textContent()).toContain('Sea floor 150 million years old');
+    // Taps on the steppers move the age 5 Myr at a time; each tap is waited for before the next.
+    await page.getByRole('button', { name: 'Age of the sea floor: Younger' }).tap();
+    await expect.poll(() => valueOf(slider)).toBe(145);
+    await page.getByRole('button', { name: 'Age of the sea floor: Older' }).tap();
+    await expect.poll(() => valueOf(slider)).toBe(150);
     await picture(page, 'studio-sea-floor-depth');
   });
 
@@ -78,8 +83,14 @@ describe('the sea-floor depth and plate-forces widgets in the studio', () => {
     await expect.poll(() => status.getAttribute('data-state')).toBe('slab-pull-dominates');
     await page.locator('[data-model-card-of="plate-forces"]').getByText(/Forsyth, D\. and Uyeda, S\. \(1975\)/).waitFor();
     // At 100 Myr ridge push beats the pull of a slab shorter than about 52 km: seven taps take 700 km to 0.
+    const slider = page.getByRole('slider', { name: 'Plate forces: Length of the sinking slab' });
+    await expect.poll(() => valueOf(slider)).toBe(700);
     const shorter = page.getByRole('button', { name: 'Length of the sinking slab: Less' });
-    for (let tap = 0; tap < 7; tap++) await shorter.tap();
+    // Each tap is waited for before the next, so none lands while the last one still renders.
+    for (let km = 600; km >= 0; km -= 100) {
+      await shorter.tap();
+      await expect.poll(() => valueOf(slider)).toBe(km);
+    }
     await expect.poll(() => status.getAttribute('data-state')).toBe('ridge-push-dominates');
     expect(await shorter.isDisabled()).toBe(true);
     await picture(page, 'studio-plate-forces');
@@ -120,10 +131,15 @@ describe('the sea-floor depth and plate-forces widgets on a kiosk', () => {
     const older = screen.getByRole('button', { name: 'Age of the sea floor: Older' });
     const before = (await older.boundingBox())!;
     expect(Math.min(before.width, before.height)).toBeGreaterThanOrEqual(SMALLEST_TARGET_PX);
+    const slider = screen.getByRole('slider', { name: 'Sea-floor depth: Age of the sea floor' });
+    const age = await valueOf(slider);
+    await older.tap();
+    await expect.poll(() => valueOf(slider)).toBe(age + 5);
     await screen.getByRole('switch', { name: 'Larger text' }).tap();
     await expect.poll(async () => (await older.boundingBox())!.width).toBeGreaterThan(before.width);
     await picture(screen, 'kiosk-sea-floor-depth-larger-text');
     await screen.getByRole('switch', { name: 'Larger text' }).tap();
+    await expect.poll(() => screen.locator('.player').getAttribute('data-large-text')).toBeNull();
   });
 
   it('lets a finger drag the slab short until ridge push wins, and a tap lengthen it again', async () => {
@@ -138,7 +154,9 @@ describe('the sea-floor depth and plate-forces widgets on a kiosk', () => {
     const longer = screen.getByRole('button', { name: 'Length of the sinking slab: More' });
     const target = (await longer.boundingBox())!;
     expect(Math.min(target.width, target.height)).toBeGreaterThanOrEqual(SMALLEST_TARGET_PX);
+    const length = await valueOf(slider);
     await longer.tap();
+    await expect.poll(() => valueOf(slider)).toBe(Math.round((length + 100) / 10) * 10);
     await expect.poll(() => status.getAttribute('data-state')).toBe('slab-pull-dominates');
     await picture(screen, 'kiosk-plate-forces');
   });
