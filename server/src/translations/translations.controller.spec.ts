@@ -167,17 +167,21 @@ describe('units', () => {
 describe('completeness and preview', () => {
   it('counts total, translated and stale units per locale, the same in the worklist', async () => {
     const res = await request(t.http).get(`/api/stories/${world.story.id}/translations`).set(world.admin).expect(200);
+    // An admin or curator reads every locale and translates none (can.spec.ts covers `can` role by role).
+    const reads = { translate: false, import: false, export: true };
     expect(res.body).toEqual([
-      { locale: 'fr', total: 10, translated: 3, stale: 0 },
-      { locale: 'es', total: 10, translated: 0, stale: 0 },
+      { locale: 'fr', total: 10, translated: 3, stale: 0, can: reads },
+      { locale: 'es', total: 10, translated: 0, stale: 0, can: reads },
     ]);
     const worklist = await request(t.http).get(`/api/translations/stories?q=${encodeURIComponent(world.story.title)}`).set(world.curator).expect(200);
     expect(worklist.body).toEqual({
       items: [
-        { storyId: world.story.id, storyTitle: world.story.title, locale: 'es', total: 10, translated: 0, stale: 0 },
-        { storyId: world.story.id, storyTitle: world.story.title, locale: 'fr', total: 10, translated: 3, stale: 0 },
+        { storyId: world.story.id, storyTitle: world.story.title, locale: 'es', total: 10, translated: 0, stale: 0, can: reads },
+        { storyId: world.story.id, storyTitle: world.story.title, locale: 'fr', total: 10, translated: 3, stale: 0, can: reads },
       ],
       total: 2, page: 1, pageSize: 25,
+      can: { translate: false },
+      locales: expect.arrayContaining(['es', 'fr']),
     });
   });
 

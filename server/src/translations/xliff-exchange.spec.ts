@@ -76,7 +76,7 @@ describe('the XLIFF round trip through the API, with targets filled by the xliff
     expect(res.body).toEqual({ updated: 10, unchanged: 0, stale: 0, warnings: [] });
 
     const figures = await request(t.http).get(`/api/stories/${world.story.id}/translations`).set(world.translator).expect(200);
-    expect(figures.body).toEqual([{ locale: 'fr', total: 10, translated: 10, stale: 0 }]);
+    expect(figures.body).toEqual([{ locale: 'fr', total: 10, translated: 10, stale: 0, can: { translate: true, import: true, export: true } }]);
 
     const preview = await request(t.http).get(`/api/stories/${world.story.id}/translations/fr/preview`).set(world.translator).expect(200);
     const [first] = preview.body.panels;
