@@ -21,7 +21,7 @@ const useStyles = makeStyles({
 /** Each shortcut the studio has, by where it works: the keys (joined by +, alternatives by /) and the key of what it does. */
 const SHORTCUTS = {
   anywhere: [[['?'], 'sheet']],
-  text: [[['Ctrl', 'B'], 'bold'], [['Ctrl', 'I'], 'italic'], [['Ctrl', 'Z'], 'undo'], [['Ctrl', 'Shift', 'Z'], 'redo']],
+  text: [[['Ctrl', 'B'], 'bold'], [['Ctrl', 'I'], 'italic'], [['Ctrl', 'Z'], 'undo'], [['Ctrl', 'Shift', 'Z'], 'redo'], [['Ctrl', 'Home / End'], 'panelEdges']],
   panels: [[['Alt', '← / →'], 'movePanel']],
   drawings: [[['← / →'], 'change'], [['Shift', '← / →'], 'fineChange'], [['Page Up / Page Down'], 'bigChange'], [['Home / End'], 'ends']],
   translation: [[['Ctrl', 'Enter'], 'saveNext'], [['Alt', '↑ / ↓'], 'otherUnit']],

@@ -11,6 +11,7 @@ export const shortcutsAr: typeof shortcutsEn = {
       italic: 'مائل',
       undo: 'تراجع',
       redo: 'إعادة',
+      panelEdges: 'انتقل إلى بداية اللوحة أو نهايتها، قبل أداة تبدأ بها',
       movePanel: 'نقل اللوحة المختارة إلى الأمام أو الخلف',
       change: 'تغيير القيمة التي يضبطها الرسم (الميل، العمر، الطول)',
       fineChange: 'تغييرها بخطوات صغيرة',

@@ -10,6 +10,7 @@ export const shortcutsEn = {
       italic: 'Italic',
       undo: 'Undo',
       redo: 'Redo',
+      panelEdges: 'Go to the panel’s start or end, before a widget that starts it',
       movePanel: 'Move the chosen panel earlier or later',
       change: 'Change the value the drawing sets (tilt, age, length)',
       fineChange: 'Change it in small steps',

@@ -11,6 +11,7 @@ export const shortcutsEs: typeof shortcutsEn = {
       italic: 'Cursiva',
       undo: 'Deshacer',
       redo: 'Rehacer',
+      panelEdges: 'Ir al principio o al final del panel, antes de un widget que lo abre',
       movePanel: 'Mover el panel elegido antes o después',
       change: 'Cambiar el valor que fija el dibujo (inclinación, edad, longitud)',
       fineChange: 'Cambiarlo en pasos pequeños',

@@ -11,6 +11,7 @@ export const shortcutsFr: typeof shortcutsEn = {
       italic: 'Italique',
       undo: 'Annuler',
       redo: 'Rétablir',
+      panelEdges: 'Aller au début ou à la fin du panneau, avant un widget qui l’ouvre',
       movePanel: 'Avancer ou reculer le panneau choisi',
       change: 'Changer la valeur que règle le dessin (pente, âge, longueur)',
       fineChange: 'La changer par petits pas',
