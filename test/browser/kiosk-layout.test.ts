@@ -37,6 +37,8 @@ let arabicQuantities = 0;
 let scrollingChecked = false;
 /** Whether axe-core looked at a widget panel in this orientation. */
 let axeChecked = false;
+/** Whether a widget's "How do we know?" card was opened and checked in this orientation. */
+let modelCardChecked = false;
 /** Heights of the words drawn in each panel's widgets at the standard text size, by orientation, language, story and panel. */
 const drawnLabelHeights = new Map<string, number[]>();
 /** How many drawn labels were compared between the two text sizes, so a walk that found none cannot pass unnoticed. */
@@ -219,6 +221,24 @@ async function scrollingProblems(where: string): Promise<string[]> {
   return problems;
 }
 
+/** The first widget's model card opened by a finger: nothing hidden with it open, axe-core has nothing to say, and it closes again. */
+async function modelCardProblems(where: string): Promise<string[]> {
+  const card = screen.locator('.mp-model-card').first();
+  await card.locator('summary').tap();
+  await eventually(() => card.evaluate((details) => (details as HTMLDetailsElement).open)).toBe(true);
+  await card.locator('[data-model-card="sources"]').scrollIntoViewIfNeeded();
+  await atRest(screen);
+  if (shots) await screen.screenshot({ path: join(shots, `${where.replace(/[^\w]+/g, '-')}-model-card.png`) });
+  const problems = [
+    ...(await hiddenContent(screen)).map((problem) => `${where}, model card open: ${problem}`),
+    ...(await axeFindings(screen, { allowedRules: ['meta-viewport'] })).map((finding) => `${where}, model card open: axe ${finding.rule} on ${finding.nodes.join(', ').slice(0, 200)}`),
+  ];
+  await card.locator('summary').tap();
+  await eventually(() => card.evaluate((details) => (details as HTMLDetailsElement).open)).toBe(false);
+  await screen.locator('article.mp-panel').evaluate((panel) => panel.scrollTo({ top: 0, behavior: 'instant' }));
+  return problems;
+}
+
 /** The visitor's Larger text switch, found by place, as its name changes with the language. */
 /**
  * What reads out of order or overlaps in a right-to-left story: the arrows must point the way it
@@ -320,6 +340,11 @@ async function walkPanels(label: string): Promise<string[]> {
         const findings = await axeFindings(screen, { allowedRules: ['meta-viewport'] });
         problems.push(...findings.map((finding) => `${where}: axe ${finding.rule} on ${finding.nodes.join(', ').slice(0, 200)}`));
       }
+      // A widget's "How do we know?" card, opened as a visitor opens it, in Arabic with larger text.
+      if (!modelCardChecked && label.endsWith(', ar, larger text') && (await screen.locator('.mp-model-card').count())) {
+        modelCardChecked = true;
+        problems.push(...(await modelCardProblems(where)));
+      }
       if (!scrollingChecked && (await screen.locator('.mp-more-below').count())) {
         scrollingChecked = true;
         problems.push(...(await scrollingProblems(where)));
@@ -344,6 +369,7 @@ describe('every demo panel on the kiosk, in every orientation, language and text
     await screen.locator('.story-cards').waitFor();
     scrollingChecked = false;
     axeChecked = false;
+    modelCardChecked = false;
     const problems: string[] = [];
     for (const locale of locales) {
       await screen.locator(`.languages button[lang="${locale}"]`).tap();
@@ -363,6 +389,7 @@ describe('every demo panel on the kiosk, in every orientation, language and text
     expect(scrollingChecked, 'no panel was long enough to try scrolling').toBe(true);
     expect(axeChecked, 'axe-core saw no widget panel').toBe(true);
     expect(labelsCompared, 'no drawn label was compared between the text sizes').toBeGreaterThan(0);
+    expect(modelCardChecked, 'no "How do we know?" card was opened').toBe(true);
   }, 600_000);
 
   it('read numbers with their units in order in Arabic, on the drawings and in the text', () => {
