@@ -41,7 +41,8 @@ export function WidgetNodeView({ node, extension, selected, updateAttributes }: 
       <div className="mp-widget-node-handle" data-drag-handle="" style={handleStyle}>
         {`⠿ ${widgetTitle(widgetType, locale)}`}
       </div>
-      <div className={OWN_EVENTS_CLASS} onDragStart={(event) => event.preventDefault()}>
+      {/* With the block selected, a press inside it would start the browser's own drag of the selection, which takes the pointer from the widget. */}
+      <div className={OWN_EVENTS_CLASS} onMouseDown={(event) => event.preventDefault()} onDragStart={(event) => event.preventDefault()}>
         <PanelWidget
           widgetType={widgetType}
           params={tried ?? saved}
