@@ -117,6 +117,7 @@ async function startReplicatedPair({ dataDir, primaryPort, replicaPort, owned })
   return {
     REPLICATION_STAND_IN_PRIMARY_URL: url,
     REPLICATION_STAND_IN_REPLICA_URL: url.replace(`:${primaryPort}/`, `:${replicaPort}/`),
+    REPLICATION_STAND_IN_PRIMARY_SOCKET: primary.socket,
     REPLICATION_STAND_IN_REPLICA_SOCKET: replica.socket,
   };
 }

@@ -43,13 +43,16 @@ export async function signIn(page: Page, email: string, password = demoPassword)
   await page.getByRole('navigation', { name: 'Studio areas' }).waitFor();
 }
 
-/** Calls the API with a demo account's own access token, as a test's setup and clean-up do; a FormData body goes as multipart. */
-export async function apiAs(email: string, password = demoPassword) {
-  const login = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }) });
+/**
+ * Calls the API with a demo account's own access token, as a test's setup and clean-up do; a FormData
+ * body goes as multipart. `server` is the Mantlepiece to call (the one `npm test` started by default).
+ */
+export async function apiAs(email: string, password = demoPassword, server = baseUrl) {
+  const login = await fetch(`${server}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }) });
   if (!login.ok) throw new Error(`Sign-in of ${email} answered ${login.status}`);
   const { accessToken } = (await login.json()) as { accessToken: string };
   return async <T>(method: string, path: string, body?: unknown): Promise<T> => {
-    const response = await fetch(`${baseUrl}/api${path}`, {
+    const response = await fetch(`${server}/api${path}`, {
       method,
       headers: { Authorization: `Bearer ${accessToken}`, ...(body === undefined || body instanceof FormData ? {} : { 'Content-Type': 'application/json' }) },
       body: body === undefined || body instanceof FormData ? body : JSON.stringify(body),
