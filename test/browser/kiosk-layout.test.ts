@@ -177,8 +177,17 @@ function hiddenContent(page: Page): Promise<string[]> {
   });
 }
 
-/** The height on screen of every word drawn in the panel's widget drawings, in document order. */
-const labelHeights = (page: Page) => page.locator('article.mp-panel .mp-widget svg[role] text').evaluateAll((texts) => texts.map((text) => text.getBoundingClientRect().height));
+/**
+ * The height of every word drawn in the panel's widget drawings, in document order, in the panel's
+ * own CSS px: the stage scales the whole panel to the room the visitor bar leaves, and that bar
+ * takes two rows in some languages with Larger text.
+ */
+const labelHeights = (page: Page) =>
+  page.locator('article.mp-panel .mp-widget svg[role] text').evaluateAll((texts) => {
+    const panel = document.querySelector<HTMLElement>('article.mp-panel')!;
+    const stageScale = panel.getBoundingClientRect().width / panel.offsetWidth;
+    return texts.map((text) => text.getBoundingClientRect().height / stageScale);
+  });
 
 /** How much of the menu the story cards take, across and down, as fractions of the space under its heading. */
 function menuCoverage(page: Page): Promise<{ across: number; down: number; cards: number; offScreen: number }> {

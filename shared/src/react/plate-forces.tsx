@@ -58,7 +58,8 @@ function ForceBar({ label, value, fraction, colour, name }: { label: string; val
     <div style={{ margin: '0.3em 0' }} data-force={name}>
       <div style={{ display: 'flex', justifyContent: 'space-between', gap: '1em' }}>
         <span>{label}</span>
-        <strong style={{ fontVariantNumeric: 'tabular-nums' }}>{value}</strong>
+        {/* A number with its unit reads left to right inside Arabic too. */}
+        <strong style={{ fontVariantNumeric: 'tabular-nums' }}><bdi dir="ltr">{value}</bdi></strong>
       </div>
       <div aria-hidden="true" style={{ height: '0.6em', background: 'rgba(0,0,0,0.08)', borderRadius: 4 }}>
         <div style={{ width: `${Math.max(fraction * 100, 0.5)}%`, height: '100%', background: colour, borderRadius: 4 }} />

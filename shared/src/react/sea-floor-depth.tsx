@@ -154,18 +154,18 @@ export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = fa
         <circle cx={markerX} cy={seaY(result.depthM)} r={9} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={3} />
         <circle cx={markerX} cy={lithosphereY(result.lithosphereThicknessKm)} r={6} fill="#fffdf7" stroke={COLOURS.marker} strokeWidth={2} />
         {seaFloorLabels(layout).map((item, index) => (
-          <text key={index} x={item.x} y={item.y} fontSize={item.fontSize} fontWeight={item === layout.age ? 700 : undefined} textAnchor={item.anchor} dominantBaseline="middle" fill={COLOURS.text}>
+          <text key={index} x={item.x} y={item.y} fontSize={item.fontSize} fontWeight={item === layout.age ? 700 : undefined} textAnchor={item.anchor} dominantBaseline="middle" fill={COLOURS.text} paintOrder="stroke" stroke="#f6efe2" strokeWidth={4}>
             {item.text}
           </text>
         ))}
       </svg>
       <p id={statusId} role="status" data-model={shown.model} style={{ margin: '0.5em 0', display: 'grid', gridTemplateColumns: 'auto 1fr', gap: '0 0.75em' }}>
         <span>{strings.depth}</span>
-        <strong data-readout="depth">{formatDepthKm(result.depthM, locale)}</strong>
+        <strong data-readout="depth"><bdi dir="ltr">{formatDepthKm(result.depthM, locale)}</bdi></strong>
         <span>{strings.heatFlow}</span>
-        <strong data-readout="heat-flow">{formatHeatFlow(result.heatFlowMWm2, locale)}</strong>
+        <strong data-readout="heat-flow"><bdi dir="ltr">{formatHeatFlow(result.heatFlowMWm2, locale)}</bdi></strong>
         <span>{strings.thickness}</span>
-        <strong data-readout="thickness">{formatThicknessKm(result.lithosphereThicknessKm, locale)}</strong>
+        <strong data-readout="thickness"><bdi dir="ltr">{formatThicknessKm(result.lithosphereThicknessKm, locale)}</bdi></strong>
       </p>
       <ValueStepper
         label={strings.ageLabel}
