@@ -78,26 +78,29 @@ const startsWithWidget = (): PanelDocJSON => ({
   ],
 });
 
+// Rendering a widget in jsdom is slow on a busy machine; waits end as soon as the state is there.
+const settled = { timeout: 5_000 };
+
 describe('a widget tried in the editor', () => {
   it('shows the trial in the drawing but keeps the saved setting until the curator keeps the trial', async () => {
     const { container } = render(<PanelEditor />);
-    const slider = await screen.findByRole('slider', { name: 'Slope force box: Slope angle' });
+    const slider = await screen.findByRole('slider', { name: 'Slope force box: Slope angle' }, settled);
     fireEvent.keyDown(slider, { key: 'ArrowUp' });
-    await waitFor(() => expect(slider.getAttribute('aria-valuenow')).toBe('31'));
+    await waitFor(() => expect(slider.getAttribute('aria-valuenow')).toBe('31'), settled);
     expect(widgetsIn(captured!.getJSON())[0]?.params.angleDeg).toBe(30);
     expect(container.querySelector('.mp-widget-node')?.hasAttribute('data-trying')).toBe(true);
     fireEvent.click(screen.getByRole('button', { name: 'Use this as the starting setting' }));
-    await waitFor(() => expect(widgetsIn(captured!.getJSON())[0]?.params.angleDeg).toBe(31));
+    await waitFor(() => expect(widgetsIn(captured!.getJSON())[0]?.params.angleDeg).toBe(31), settled);
     expect(screen.queryByRole('button', { name: 'Use this as the starting setting' })).toBeNull();
   });
 
   it('goes back to the saved setting on request', async () => {
     render(<PanelEditor />);
-    const slider = await screen.findByRole('slider', { name: 'Slope force box: Slope angle' });
+    const slider = await screen.findByRole('slider', { name: 'Slope force box: Slope angle' }, settled);
     fireEvent.keyDown(slider, { key: 'PageUp' });
-    await waitFor(() => expect(slider.getAttribute('aria-valuenow')).toBe('40'));
+    await waitFor(() => expect(slider.getAttribute('aria-valuenow')).toBe('40'), settled);
     fireEvent.click(screen.getByRole('button', { name: 'Back to the saved setting' }));
-    await waitFor(() => expect(slider.getAttribute('aria-valuenow')).toBe('30'));
+    await waitFor(() => expect(slider.getAttribute('aria-valuenow')).toBe('30'), settled);
     expect(widgetsIn(captured!.getJSON())[0]?.params.angleDeg).toBe(30);
   });
 
