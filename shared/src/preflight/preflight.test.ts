@@ -5,7 +5,7 @@ import { panelText } from '../panel/panel-text.js';
 import { readingLevel } from '../panel/reading-level.js';
 import { buildRevisionSnapshot } from '../review/revision-snapshot.js';
 import { convectionCellDefaults } from '../widgets/index.js';
-import { PANEL_COLOURS } from '../react/panel/panel-theme.js';
+import { PANEL_COLOURS } from '../panel/panel-colours.js';
 import { imageAltText } from './image-alt-text.js';
 import { imageCredit } from './image-credit.js';
 import { imageInLibrary } from './image-in-library.js';

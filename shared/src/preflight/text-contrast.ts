@@ -1,4 +1,4 @@
-import { PANEL_COLOURS } from '../react/panel/panel-theme.js';
+import { PANEL_COLOURS } from '../panel/panel-colours.js';
 import { contrastRatio, WCAG_AA_CONTRAST } from '../colour/colour.js';
 import type { PreflightRule } from './types.js';
 
