@@ -5,6 +5,7 @@ import { ClockModule } from './clock/clock.module.js';
 import { CommentsModule } from './comments/comments.module.js';
 import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
+import { DeletionsModule } from './deletions/deletions.module.js';
 import { DevMailModule } from './dev-mail/dev-mail.module.js';
 import { ExhibitsModule } from './exhibits/exhibits.module.js';
 import { FleetModule } from './fleet/fleet.module.js';
@@ -19,6 +20,7 @@ import { NotificationsModule } from './notifications/notifications.module.js';
 import { PanelsModule } from './panels/panels.module.js';
 import { ReleasesModule } from './releases/releases.module.js';
 import { ReviewsModule } from './reviews/reviews.module.js';
+import { SearchModule } from './search/search.module.js';
 import { RevisionsModule } from './revisions/revisions.module.js';
 import { StoriesModule } from './stories/stories.module.js';
 import { TranslationsModule } from './translations/translations.module.js';
@@ -32,7 +34,7 @@ import { WidgetsModule } from './widgets/widgets.module.js';
     DevMailModule, HealthModule, VenuesModule, WidgetsModule,
     ExhibitsModule, StoriesModule, PanelsModule, MediaModule, TranslationsModule,
     NotificationsModule, CommentsModule, RevisionsModule, ReviewsModule,
-    ReleasesModule, KiosksModule, FleetModule, InsightsModule, MyWorkModule,
+    ReleasesModule, KiosksModule, FleetModule, InsightsModule, MyWorkModule, DeletionsModule, SearchModule,
   ],
 })
 export class AppModule {}

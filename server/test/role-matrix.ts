@@ -75,12 +75,15 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'PUT /api/panels/:id': CURATOR,
   'PATCH /api/panels/:id': CURATOR,
   'DELETE /api/panels/:id': CURATOR,
+  'POST /api/panels/:id/restore': CURATOR,
 
   'GET /api/media': STAFF,
+  'GET /api/media/licences': STAFF,
   'GET /api/media/:id': STAFF,
   'POST /api/media': CURATOR,
   'PATCH /api/media/:id': CURATOR,
   'DELETE /api/media/:id': CURATOR,
+  'POST /api/media/:id/restore': CURATOR,
   'POST /api/media/:id/renditions/retry': CURATOR,
 
   'GET /api/translations/stories': TRANSLATION_READERS,
@@ -128,6 +131,7 @@ export const ROLE_MATRIX: Record<string, Access> = {
 
   'GET /api/insights': ['curator', 'educator', 'technician', 'admin'],
   'GET /api/me/work': 'signed-in',
+  'GET /api/search': STAFF,
 };
 
 /**
@@ -160,7 +164,7 @@ const OBJECT_COLLECTIONS: Record<string, VenueObject> = {
 const ORGANISATION_ROUTES = ['POST /api/venues', 'DELETE /api/venues/:id', 'GET /api/dev/mail', 'GET /api/dev/mail/:id'];
 
 /** Routes about no venue's things although they need a role. */
-const ANY_VENUE_ROUTES = ['GET /api/widgets', 'POST /api/widgets/validate'];
+const ANY_VENUE_ROUTES = ['GET /api/widgets', 'POST /api/widgets/validate', 'GET /api/media/licences'];
 
 /** How `route` meets venues: read from its path (`/api/<collection>/:id…` names that collection's object). */
 export function venueReach(route: string): VenueReach {

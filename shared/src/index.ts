@@ -7,6 +7,8 @@ export * from './i18n/index.js';
 export * from './languages/ui-languages.js';
 export * from './languages/language-tags.js';
 export * from './panel/index.js';
+export * from './authoring/deletion.js';
+export * from './search/views.js';
 export * from './authoring/views.js';
 export * from './release/index.js';
 export * from './review/index.js';

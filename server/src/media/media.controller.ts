@@ -1,11 +1,12 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query, UploadedFiles, UseInterceptors } from '@nestjs/common';
 import { FilesInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiConsumes, ApiTags } from '@nestjs/swagger';
-import { ROLES } from '@mantlepiece/shared';
+import { ROLES, type LicenceIdsView } from '@mantlepiece/shared';
 import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { ListMediaQuery, UpdateMediaDto, UploadMediaDto } from './dto/media.dto.js';
+import { LICENCE_IDS_IN_SUGGESTION_ORDER } from './licence-ids.js';
 import { MEDIA_KEEPERS } from './media-policy.js';
 import { MediaService, type UploadedFile } from './media.service.js';
 
@@ -34,6 +35,13 @@ export class MediaController {
     return this.media.list(query, person);
   }
 
+  /** The SPDX identifiers a licence may name, in the order the studio suggests them; the server's check reads the same list. */
+  @Roles(...ROLES)
+  @Get('licences')
+  licences(): LicenceIdsView {
+    return { ids: LICENCE_IDS_IN_SUGGESTION_ORDER };
+  }
+
   @ApiCan('media')
   @Roles(...ROLES)
   @Get(':id')
@@ -51,5 +59,13 @@ export class MediaController {
   @HttpCode(HttpStatus.NO_CONTENT)
   delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
     return this.media.deleteAsset(id, person);
+  }
+
+  /** Undo of a delete, within the deletion grace (DELETION_GRACE_MS). */
+  @ApiCan('media')
+  @Post(':id/restore')
+  @HttpCode(HttpStatus.OK)
+  restore(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.media.restoreAsset(id, person);
   }
 }

@@ -2,7 +2,7 @@ import { ConflictException, Inject, Injectable, NotFoundException } from '@nestj
 import { InjectModel } from '@nestjs/sequelize';
 import { ForeignKeyConstraintError, Op, UniqueConstraintError, type Transaction, type WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import { canonicalLanguageTags, type MediaPage, type MediaUsageView, type MediaView } from '@mantlepiece/shared';
+import { canonicalLanguageTags, DELETION_GRACE_MS, type MediaPage, type MediaUsageView, type MediaView } from '@mantlepiece/shared';
 import { personAt, rolesAnywhere, scopeWhere, venueScope, type Member } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
 import { dateOnlyOf } from '../common/date-only.js';
@@ -30,6 +30,7 @@ const DAY_MS = 86_400_000;
 
 /** What an image id of no reachable image answers, one missing or of another venue alike. */
 export const NO_SUCH_IMAGE = 'There is no such image.';
+const NOT_RESTORABLE = `There is no deleted image to restore: a deleted image can be restored for ${DELETION_GRACE_MS / 60_000} minutes.`;
 
 export interface UploadedFile {
   originalname: string;
@@ -82,6 +83,8 @@ export class MediaService {
     const named = files.map((file) => ({ buffer: file.buffer, filename: filenameOf(file) }));
     const inspected: InspectedImage[] = [];
     for (const file of named) inspected.push(await this.images.inspect(file.buffer, file.filename));
+    // An image deleted and not yet purged keeps its place in the venue's library: uploading it again brings it back.
+    await this.assets.restore({ where: { venueId: venue.id, sha256: inspected.map((image) => image.sha256) } });
     const known = await this.idsOf(venue.id, inspected.map((image) => image.sha256));
     const fresh = new Map<string, NewImage>();
     for (const [index, { kind, sha256 }] of inspected.entries()) {
@@ -174,25 +177,60 @@ export class MediaService {
     return this.get(id, member);
   }
 
-  /** Refused while any panel shows the image; the answer says where. */
+  /**
+   * Refused while any panel shows the image; the answer says where. The image leaves the library
+   * at once but keeps its row and files, so `restoreAsset` can bring it back within the deletion
+   * grace; the deleted-items job purges it after.
+   */
   async deleteAsset(id: number, member: Member): Promise<void> {
-    const asset = await this.sequelize.transaction(async (transaction) => {
+    await this.sequelize.transaction(async (transaction) => {
       const found = await this.lockAsset(id, member, transaction);
       const usedIn = await this.usageOf([id], transaction);
       if (usedIn.length > 0) throw inUse(usedIn);
-      const keys = (await this.renditions.findAll({ where: { mediaAssetId: id }, transaction })).map((rendition) => rendition.storeKey);
-      try {
-        await found.destroy({ transaction });
-      } catch (error) {
-        if (error instanceof ForeignKeyConstraintError) throw inUse(await this.usageOf([id]));
-        throw error;
-      }
-      // Another venue's asset of the same bytes shares these files; they stay while it does.
-      if (await this.assets.count({ where: { sha256: found.sha256 }, transaction }) > 0) return { sha256: found.sha256, keys: [] };
-      return { sha256: found.sha256, keys: [originalKey(found.sha256), ...keys] };
+      await this.assets.update({ deletedAt: this.clock.now() }, { where: { id: found.id }, transaction });
     });
-    // After the commit: a rolled-back delete must not lose files. A licence that ended must stop being served.
-    for (const key of asset.keys) await this.store.remove(key);
+  }
+
+  /** Brings back an image deleted within the grace, as it was; one deleted longer ago answers as missing. */
+  async restoreAsset(id: number, member: Member): Promise<MediaView> {
+    await this.sequelize.transaction(async (transaction) => {
+      const asset = withinReach(member, await this.assets.findByPk(id, { paranoid: false, transaction, lock: transaction.LOCK.UPDATE }), NOT_RESTORABLE);
+      actingAt(member, asset.venueId, MEDIA_KEEPERS);
+      if (asset.deletedAt === null) throw new ConflictException('This image is not deleted.');
+      if (asset.deletedAt.getTime() <= this.clock.now().getTime() - DELETION_GRACE_MS) throw new NotFoundException(NOT_RESTORABLE);
+      await this.assets.update({ deletedAt: null }, { where: { id }, paranoid: false, transaction });
+    });
+    return this.get(id, member);
+  }
+
+  /**
+   * Removes for good the images deleted before `cutoff`, with their files unless another venue's
+   * image of the same bytes shares them; returns how many. One a deleted panel (not yet purged)
+   * still names waits for the next pass.
+   */
+  async purgeDeleted(cutoff: Date): Promise<number> {
+    const expired = await this.assets.findAll({ where: { deletedAt: { [Op.lt]: cutoff } }, attributes: ['id'], paranoid: false, limit: 20 });
+    let purged = 0;
+    for (const { id } of expired) {
+      const removed = await this.sequelize.transaction(async (transaction) => {
+        const asset = await this.assets.findOne({ where: { id, deletedAt: { [Op.lt]: cutoff } }, paranoid: false, transaction, lock: transaction.LOCK.UPDATE });
+        if (!asset) return null;
+        const keys = (await this.renditions.findAll({ where: { mediaAssetId: id }, transaction })).map((rendition) => rendition.storeKey);
+        try {
+          await asset.destroy({ force: true, transaction });
+        } catch (error) {
+          if (error instanceof ForeignKeyConstraintError) return null;
+          throw error;
+        }
+        if (await this.assets.count({ where: { sha256: asset.sha256 }, paranoid: false, transaction }) > 0) return [];
+        return [originalKey(asset.sha256), ...keys];
+      });
+      if (removed === null) continue;
+      purged += 1;
+      // After the commit: a rolled-back purge must not lose files.
+      for (const key of removed) await this.store.remove(key);
+    }
+    return purged;
   }
 
   /** Asset ids by content hash, for the hashes the venue's library has. */
@@ -300,7 +338,7 @@ export class MediaService {
   private async usageOf(ids: number[], transaction?: Transaction): Promise<(MediaUsageView & { mediaAssetId: number; sourceLocale: string })[]> {
     const rows = await this.usages.findAll({
       where: { mediaAssetId: ids },
-      include: [{ model: Panel, attributes: ['id', 'storyId', 'position'], include: [{ model: Story, attributes: ['id', 'title', 'sourceLocale'] }] }],
+      include: [{ model: Panel, required: true, attributes: ['id', 'storyId', 'position'], include: [{ model: Story, attributes: ['id', 'title', 'sourceLocale'] }] }],
       transaction,
     });
     rows.sort((a, b) => a.panel!.story!.title.localeCompare(b.panel!.story!.title) || a.panel!.position - b.panel!.position);

@@ -42,4 +42,11 @@ export class PanelsController {
   delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
     return this.panels.deletePanel(id, person);
   }
+
+  /** Undo of a delete, within the deletion grace (DELETION_GRACE_MS). */
+  @Post('panels/:id/restore')
+  @HttpCode(HttpStatus.OK)
+  restore(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
+    return this.panels.restorePanel(id, person);
+  }
 }

@@ -3,12 +3,13 @@ import { InjectModel } from '@nestjs/sequelize';
 import { Op, type Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
-  checkPanelDocument, emptyPanelDoc, PANEL_IMAGE_NODE, visitPanelNodes,
+  checkPanelDocument, DELETION_GRACE_MS, emptyPanelDoc, PANEL_IMAGE_NODE, visitPanelNodes,
   type PanelConflictBody, type PanelDocJSON, type PanelIssue, type PanelView,
 } from '@mantlepiece/shared';
 import { VersionConflictException } from '../common/version-conflict.js';
 import { actingAt, withinReach } from '../common/venue-boundary.js';
 import type { Member } from '../auth/policy.js';
+import { Clock } from '../clock/clock.service.js';
 import { MediaAsset } from '../media/models/media-asset.model.js';
 import { Story } from '../stories/models/story.model.js';
 import { NO_SUCH_STORY, refuseUnlessEditable, STORY_WRITERS } from '../stories/story-policy.js';
@@ -23,6 +24,7 @@ export const DEFAULT_WORD_BUDGET = 60;
 
 const MEDIA_ID = /^[1-9]\d{0,9}$/;
 const NO_SUCH_PANEL = 'There is no such panel.';
+const NOT_RESTORABLE = `There is no deleted panel to restore: a deleted panel can be restored for ${DELETION_GRACE_MS / 60_000} minutes.`;
 
 function unprocessable(message: string, errors: PanelIssue[]): UnprocessableEntityException {
   return new UnprocessableEntityException({ statusCode: HttpStatus.UNPROCESSABLE_ENTITY, message, errors });
@@ -36,6 +38,7 @@ export class PanelsService {
     @InjectModel(PanelMediaUsage) private readonly usages: typeof PanelMediaUsage,
     @InjectModel(Story) private readonly stories: typeof Story,
     @InjectModel(MediaAsset) private readonly media: typeof MediaAsset,
+    private readonly clock: Clock,
     private readonly sequelize: Sequelize,
   ) {}
 
@@ -112,13 +115,50 @@ export class PanelsService {
     });
   }
 
+  /**
+   * Takes the panel out of the story at once (lists, revisions, releases and translations leave it
+   * out) but keeps its row, position and documents, so `restorePanel` can put it back within the
+   * deletion grace; the deleted-items job purges it after.
+   */
   async deletePanel(panelId: number, member: Member): Promise<void> {
     await this.sequelize.transaction(async (transaction) => {
       const { panel, story } = await this.findPanel(panelId, member, transaction);
-      await panel.destroy({ transaction });
-      await this.panels.decrement('position', { by: 1, where: { storyId: story.id, position: { [Op.gt]: panel.position } }, transaction });
+      await this.panels.update({ deletedAt: this.clock.now() }, { where: { id: panel.id }, transaction });
+      await this.panels.decrement('position', { by: 1, where: { storyId: story.id, deletedAt: null, position: { [Op.gt]: panel.position } }, transaction });
       await this.touchStory(story.id, transaction);
     });
+  }
+
+  /**
+   * Puts a panel deleted within the grace back at the position it had (the panels from there on
+   * move along), with its documents, so deletions undone latest first give the exact order back;
+   * one deleted longer ago answers as missing. Its images must still be in the library, as for any save.
+   */
+  async restorePanel(panelId: number, member: Member): Promise<PanelView> {
+    return this.sequelize.transaction(async (transaction) => {
+      const found = await this.panels.findByPk(panelId, { attributes: ['storyId'], paranoid: false, transaction });
+      if (!found) throw new NotFoundException(NOT_RESTORABLE);
+      const story = await this.lockStory(found.storyId, member, NOT_RESTORABLE, transaction);
+      const panel = await this.panels.findByPk(panelId, { paranoid: false, transaction });
+      if (!panel) throw new NotFoundException(NOT_RESTORABLE);
+      if (panel.deletedAt === null) throw new ConflictException('This panel is not deleted.');
+      if (panel.deletedAt.getTime() <= this.clock.now().getTime() - DELETION_GRACE_MS) throw new NotFoundException(NOT_RESTORABLE);
+      const source = (await this.documents.findOne({ where: { panelId, locale: story.sourceLocale }, transaction }))!;
+      await this.checkDocument(source.doc, story, transaction);
+      const position = Math.min(panel.position, await this.panels.count({ where: { storyId: story.id }, transaction }));
+      await this.panels.increment('position', { by: 1, where: { storyId: story.id, deletedAt: null, position: { [Op.gte]: position } }, transaction });
+      await this.panels.update({ deletedAt: null, position }, { where: { id: panelId }, paranoid: false, transaction });
+      await this.touchStory(story.id, transaction);
+      await panel.reload({ paranoid: false, transaction });
+      return toPanelView(panel, source);
+    });
+  }
+
+  /** Removes for good the panels deleted before `cutoff` (their documents and image uses go with them); returns how many. */
+  async purgeDeleted(cutoff: Date): Promise<number> {
+    const expired = await this.panels.findAll({ where: { deletedAt: { [Op.lt]: cutoff } }, attributes: ['id'], paranoid: false, limit: 100 });
+    if (expired.length === 0) return 0;
+    return this.panels.destroy({ where: { id: expired.map((panel) => panel.id), deletedAt: { [Op.lt]: cutoff } }, force: true });
   }
 
   /**
@@ -133,7 +173,8 @@ export class PanelsService {
       if (node.type === PANEL_IMAGE_NODE) images.push({ path: [...path, 'attrs', 'mediaId'], mediaId: String(node.attrs?.mediaId) });
     });
     const wanted = [...new Set(images.map((image) => image.mediaId).filter((id) => MEDIA_ID.test(id)))].map(Number);
-    const known = new Set((await this.media.findAll({ where: { id: wanted, venueId: story.venueId }, attributes: ['id'], transaction })).map((asset) => String(asset.id)));
+    // A shared lock: an image cannot be deleted between this check and the commit that records its use.
+    const known = new Set((await this.media.findAll({ where: { id: wanted, venueId: story.venueId }, attributes: ['id'], transaction, lock: transaction.LOCK.SHARE })).map((asset) => String(asset.id)));
     const missing = images.filter((image) => !known.has(image.mediaId));
     if (missing.length > 0) {
       throw unprocessable('This panel cannot be saved as it is.', missing.map(({ path, mediaId }) => ({ path, message: `There is no image ${mediaId} in the media library.` })));

@@ -36,7 +36,7 @@ const OPEN_APPROVALS_COLUMN = Sequelize.literal(
 const storyColumns: FindOptions<Story> = {
   attributes: {
     include: [
-      [Sequelize.literal('(SELECT COUNT(*) FROM `panels` WHERE `panels`.`story_id` = `Story`.`id`)'), 'panelCount'],
+      [Sequelize.literal('(SELECT COUNT(*) FROM `panels` WHERE `panels`.`story_id` = `Story`.`id` AND `panels`.`deleted_at` IS NULL)'), 'panelCount'],
       [APPROVED_REVISION_COLUMN, 'approvedRevision'],
       [OPEN_APPROVALS_COLUMN, 'openApprovals'],
     ],

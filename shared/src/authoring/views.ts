@@ -117,6 +117,11 @@ export interface MediaView {
 /** GET /api/media: a page, and whether the signed-in person may upload. */
 export type MediaPage = Page<MediaView> & { can: Can<'mediaLibrary'> };
 
+/** GET /api/media/licences: the SPDX identifiers a licence may name, in the order to suggest them. */
+export interface LicenceIdsView {
+  ids: readonly string[];
+}
+
 export const MEDIA_MISSING_FILTERS = ['alt', 'credit'] as const;
 export type MediaMissingFilter = (typeof MEDIA_MISSING_FILTERS)[number];
 

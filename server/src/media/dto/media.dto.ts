@@ -1,17 +1,15 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength, registerDecorator, ValidateIf } from 'class-validator';
 import { Transform } from 'class-transformer';
-import { createRequire } from 'node:module';
 import { MEDIA_MISSING_FILTERS, type MediaLicence, type MediaMissingFilter } from '@mantlepiece/shared';
 import { OptionalDateOnlyField } from '../../common/date-only.js';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
 import { Omittable, QueryInt, QueryRowId } from '../../common/validation.js';
 import { canonicalLocale } from '../../common/locale-tag.js';
+import { SPDX_IDS } from '../licence-ids.js';
 
 export const MEDIA_SORT_KEYS = ['createdAt', 'filename', 'bytes', 'licenceExpiresOn'] as const;
-// The SPDX list as a JSON array, kept current by its package rather than by us.
-const SPDX_IDS = new Set<string>(createRequire(import.meta.url)('spdx-license-ids') as string[]);
 const MAX_ALT_LENGTH = 1000;
 
 /** The form fields beside an upload's files. */

@@ -7,8 +7,12 @@ import { MediaRendition } from './media-rendition.model.js';
 export const LICENCE_KINDS = ['spdx', 'all-rights-reserved'] as const;
 export type LicenceKind = (typeof LICENCE_KINDS)[number];
 
-/** An uploaded image of one venue, once per content (sha256) there, with its rights and alt text. */
-@Table({ tableName: 'media_assets' })
+/**
+ * An uploaded image of one venue, once per content (sha256) there, with its rights and alt text.
+ * Paranoid: a deleted image keeps its row and files, restorable, until the deleted-items job purges
+ * it; queries leave it out.
+ */
+@Table({ tableName: 'media_assets', paranoid: true })
 export class MediaAsset extends Model {
   @ForeignKey(() => Venue)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
@@ -84,4 +88,5 @@ export class MediaAsset extends Model {
 
   declare id: number;
   declare createdAt: Date;
+  declare deletedAt: Date | null;
 }

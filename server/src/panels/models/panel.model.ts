@@ -2,8 +2,11 @@ import { BelongsTo, Column, DataType, ForeignKey, HasMany, Model, Table } from '
 import { Story } from '../../stories/models/story.model.js';
 import { PanelDocument } from './panel-document.model.js';
 
-/** One screen of a story. Its text lives in PanelDocument, one per locale. */
-@Table({ tableName: 'panels' })
+/**
+ * One screen of a story. Its text lives in PanelDocument, one per locale. Paranoid: a deleted panel
+ * keeps its row and position, restorable, until the deleted-items job purges it; queries leave it out.
+ */
+@Table({ tableName: 'panels', paranoid: true })
 export class Panel extends Model {
   @ForeignKey(() => Story)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
@@ -25,4 +28,5 @@ export class Panel extends Model {
 
   declare id: number;
   declare updatedAt: Date;
+  declare deletedAt: Date | null;
 }
