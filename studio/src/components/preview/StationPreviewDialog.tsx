@@ -65,7 +65,7 @@ function Screen({ screen, zoom, doc, locale, resolveMedia, onSelectionEnd }: { s
     if (drawing.current) onSelectionEnd?.(drawing.current);
   };
   return (
-    <div style={{ width: screen.width * zoom, height: screen.height * zoom }}>
+    <div style={{ width: screen.width * zoom, height: screen.height * zoom, margin: '0 auto' }}>
       <div
         className={styles.screen}
         style={{ width: screen.width, height: screen.height, transform: `scale(${zoom})` }}
