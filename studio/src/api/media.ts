@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { MediaLicence, MediaMissingFilter, MediaPage, MediaView, Page, RenditionStatus } from '@mantlepiece/shared';
+import type { LicenceIdsView, MediaLicence, MediaMissingFilter, MediaPage, MediaView, Page, RenditionStatus } from '@mantlepiece/shared';
 import { useVenueFilter } from '../app/current-venue';
 import { api, ApiError, authorizationHeader, NETWORK_FAILURE, refreshSession } from './client';
 
@@ -74,6 +74,23 @@ export function useDeleteMedia() {
     mutationFn: (id: number) => api<void>(`/media/${id}`, { method: 'DELETE' }),
     onSuccess: (_nothing, id) => {
       queryClient.removeQueries({ queryKey: mediaKey(id) });
+      void queryClient.invalidateQueries({ queryKey: mediaListKey });
+    },
+  });
+}
+
+/** The SPDX identifiers the server accepts as a licence, in the order it suggests them; the list changes only with a server update. */
+export function useLicenceIds() {
+  return useQuery({ queryKey: ['media-licences'], queryFn: () => api<LicenceIdsView>('/media/licences'), staleTime: Infinity });
+}
+
+/** Undo of an image's delete: the server brings it back as it was. */
+export function useRestoreMedia() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api<MediaView>(`/media/${id}/restore`, { method: 'POST' }),
+    onSuccess: (asset) => {
+      queryClient.setQueryData(mediaKey(asset.id), asset);
       void queryClient.invalidateQueries({ queryKey: mediaListKey });
     },
   });

@@ -121,6 +121,15 @@ export function useDeletePanel(storyId: number) {
   });
 }
 
+/** Undo of a panel's delete: the server puts it back in its place, so the story is read again for everyone's positions. */
+export function useRestorePanel(storyId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (panelId: number) => api<PanelView>(`/panels/${panelId}/restore`, { method: 'POST' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: storyKey(storyId) }),
+  });
+}
+
 export function useUpdatePanelBudget(storyId: number) {
   const queryClient = useQueryClient();
   return useMutation({

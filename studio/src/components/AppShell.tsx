@@ -6,9 +6,11 @@ import { CurrentVenueProvider } from '../app/current-venue';
 import { header, sediment } from '../app/theme';
 import { AccountMenu } from './AccountMenu';
 import { AreaNav } from './AreaNav';
+import { GlobalSearch } from './GlobalSearch';
 import { LanguageMenu } from './LanguageMenu';
 import { KeyboardShortcuts } from './KeyboardShortcuts';
 import { NotificationBell } from './review/NotificationBell';
+import { UndoToaster } from './UndoToaster';
 import { VenueSwitcher } from './VenueSwitcher';
 import { Wordmark } from './Wordmark';
 
@@ -93,6 +95,7 @@ export function AppShell() {
             <Wordmark product="Studio" />
           </Link>
           <span className={styles.spacer} />
+          <GlobalSearch />
           <VenueSwitcher className={styles.headerButton} />
           <KeyboardShortcuts className={styles.headerButton} />
           <NotificationBell className={styles.headerButton} />
@@ -108,6 +111,7 @@ export function AppShell() {
           </Suspense>
         </main>
       </div>
+      <UndoToaster />
     </CurrentVenueProvider>
   );
 }

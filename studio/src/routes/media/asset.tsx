@@ -6,8 +6,9 @@ import { lookupText, type MediaView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
-import { useDeleteMedia, useMediaAsset, useUpdateMedia } from '../../api/media';
+import { useDeleteMedia, useLicenceIds, useMediaAsset, useRestoreMedia, useUpdateMedia } from '../../api/media';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
+import { useOfferUndo } from '../../components/UndoToaster';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { LanguagePicker } from '../../components/forms/LanguagePicker';
@@ -18,7 +19,6 @@ import { useDateFormat } from '../../components/formatting';
 import { LinkButton, TextLink } from '../../components/links';
 import { PageHeader } from '../../components/PageHeader';
 import { ASSET_FIELDS, assetChanges, assetProblems, assetValues, type AssetValues } from './asset-form';
-import { COMMON_SPDX_IMAGE_LICENCES } from './licence';
 import { formatBytes } from './media-facts';
 import { MediaBadges } from './MediaBadges';
 import { RenditionPreparation } from './RenditionPreparation';
@@ -54,6 +54,9 @@ export function MediaAssetPage() {
   return <AssetDetails key={asset.data.id} asset={asset.data} />;
 }
 
+/** Enough to choose from at a glance; typing more narrows the list. */
+const MAX_LICENCE_SUGGESTIONS = 12;
+
 function AssetDetails({ asset }: { asset: MediaView }) {
   const { t, i18n } = useTranslation();
   const styles = useStyles();
@@ -62,6 +65,9 @@ function AssetDetails({ asset }: { asset: MediaView }) {
   const writer = asset.can.edit;
   const update = useUpdateMedia(asset.id);
   const remove = useDeleteMedia();
+  const restore = useRestoreMedia();
+  const licenceIds = useLicenceIds();
+  const offerUndo = useOfferUndo();
   const [values, setValues] = useState<AssetValues>(() => assetValues(asset));
   const [problems, setProblems] = useState<ReturnType<typeof assetProblems>>({});
   const [confirming, setConfirming] = useState(false);
@@ -89,7 +95,8 @@ function AssetDetails({ asset }: { asset: MediaView }) {
   const message = (field: (typeof ASSET_FIELDS)[number]) => serverFieldMessage(update.error, field);
   // The server judges the licence as a whole; its message belongs at the box the curator filled in.
   const licenceMessage = message('licence');
-  const spdxSuggestions = COMMON_SPDX_IMAGE_LICENCES.filter((id) => id.toLowerCase().includes(values.spdxId.trim().toLowerCase()));
+  const typed = values.spdxId.trim().toLowerCase();
+  const spdxSuggestions = (licenceIds.data?.ids ?? []).filter((id) => id.toLowerCase().includes(typed)).slice(0, MAX_LICENCE_SUGGESTIONS);
   const unplaced = update.error && !ASSET_FIELDS.some((field) => message(field)) ? describeError(t, update.error) : null;
   const deleteProblem = remove.error instanceof ApiError && remove.error.status === 409 ? t('asset.inUse') : remove.error ? describeError(t, remove.error) : null;
 
@@ -210,7 +217,12 @@ function AssetDetails({ asset }: { asset: MediaView }) {
           confirmLabel={t('asset.deleteConfirm')}
           pending={remove.isPending}
           problem={deleteProblem}
-          onConfirm={() => remove.mutate(asset.id, { onSuccess: () => navigate('/media') })}
+          onConfirm={() => remove.mutate(asset.id, {
+            onSuccess: () => {
+              navigate('/media');
+              offerUndo(t('undo.imageDeleted', { name: asset.filename }), () => restore.mutateAsync(asset.id));
+            },
+          })}
           onCancel={() => setConfirming(false)}
         >
           <Text as="p">{asset.usedIn.length > 0 ? t('asset.deleteUsed', { count: asset.usedIn.length }) : t('asset.deleteBody')}</Text>

@@ -5,8 +5,9 @@ import { emptyPanelDoc, type PanelView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
-import { useCreatePanel, useDeletePanel, useReorderPanels, useStory } from '../../api/stories';
+import { useCreatePanel, useDeletePanel, useReorderPanels, useRestorePanel, useStory } from '../../api/stories';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
+import { useOfferUndo } from '../../components/UndoToaster';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
@@ -33,6 +34,8 @@ export function StoryPage() {
   const createPanel = useCreatePanel(storyId);
   const reorder = useReorderPanels(storyId);
   const deletePanel = useDeletePanel(storyId);
+  const restorePanel = useRestorePanel(storyId);
+  const offerUndo = useOfferUndo();
   const [deleting, setDeleting] = useState<PanelView | null>(null);
 
   if (story.isPending) return <Spinner label={t('common.loading')} />;
@@ -63,10 +66,12 @@ export function StoryPage() {
     if (!deleting) return;
     const index = panels.findIndex((panel) => panel.id === deleting.id);
     const neighbour = panels[index + 1] ?? panels[index - 1];
-    deletePanel.mutate(deleting.id, {
+    const panelId = deleting.id;
+    deletePanel.mutate(panelId, {
       onSuccess: () => {
         setDeleting(null);
         if (neighbour) select(neighbour.id);
+        offerUndo(t('undo.panelDeleted', { number: index + 1 }), () => restorePanel.mutateAsync(panelId));
       },
     });
   };

@@ -5,6 +5,8 @@ import { fleetInsightsAr } from './fleet-insights.ar';
 import { languagesAr } from './languages.ar';
 import { venuesAr } from './venues.ar';
 import { shortcutsAr } from './shortcuts.ar';
+import { undoAr } from './undo.ar';
+import { searchAr } from './search.ar';
 import { releaseAr } from './release.ar';
 import { reviewAr } from './review.ar';
 import { translationAr } from './translation.ar';
@@ -21,6 +23,8 @@ export const ar: Translated<Messages> = {
   ...languagesAr,
   ...venuesAr,
   ...shortcutsAr,
+  ...undoAr,
+  ...searchAr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'جارٍ التحميل…',

@@ -4,6 +4,8 @@ import { fleetInsightsEn } from './fleet-insights.en';
 import { languagesEn } from './languages.en';
 import { venuesEn } from './venues.en';
 import { shortcutsEn } from './shortcuts.en';
+import { undoEn } from './undo.en';
+import { searchEn } from './search.en';
 import { releaseEn } from './release.en';
 import { reviewEn } from './review.en';
 import { translationEn } from './translation.en';
@@ -19,6 +21,8 @@ export const en = {
   ...languagesEn,
   ...venuesEn,
   ...shortcutsEn,
+  ...undoEn,
+  ...searchEn,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Loading…',

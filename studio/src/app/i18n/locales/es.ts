@@ -5,6 +5,8 @@ import { fleetInsightsEs } from './fleet-insights.es';
 import { languagesEs } from './languages.es';
 import { venuesEs } from './venues.es';
 import { shortcutsEs } from './shortcuts.es';
+import { undoEs } from './undo.es';
+import { searchEs } from './search.es';
 import { releaseEs } from './release.es';
 import { reviewEs } from './review.es';
 import { translationEs } from './translation.es';
@@ -21,6 +23,8 @@ export const es: Translated<Messages> = {
   ...languagesEs,
   ...venuesEs,
   ...shortcutsEs,
+  ...undoEs,
+  ...searchEs,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Cargando…',

@@ -4,6 +4,8 @@ import { fleetInsightsFr } from './fleet-insights.fr';
 import { languagesFr } from './languages.fr';
 import { venuesFr } from './venues.fr';
 import { shortcutsFr } from './shortcuts.fr';
+import { undoFr } from './undo.fr';
+import { searchFr } from './search.fr';
 import { releaseFr } from './release.fr';
 import { reviewFr } from './review.fr';
 import { translationFr } from './translation.fr';
@@ -20,6 +22,8 @@ export const fr: Messages = {
   ...languagesFr,
   ...venuesFr,
   ...shortcutsFr,
+  ...undoFr,
+  ...searchFr,
   common: {
     appName: 'Mantlepiece Studio',
     loading: 'Chargement…',
