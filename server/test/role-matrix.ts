@@ -112,6 +112,7 @@ export const ROLE_MATRIX: Record<string, Access> = {
   'PUT /api/notifications/preferences': 'signed-in',
 
   'POST /api/galleries/:id/releases': TECHNICIAN,
+  'GET /api/galleries/:id/releases/preview': TECHNICIAN,
   'GET /api/galleries/:id/releases': STAFF,
   'GET /api/releases/compare': STAFF,
   'GET /api/releases/:id': STAFF,

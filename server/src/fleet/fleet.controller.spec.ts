@@ -96,3 +96,25 @@ describe('revoking a kiosk', () => {
     expect((await fleetRow(credential.kioskId)).revokedAt).toEqual(revoked.body.revokedAt);
   });
 });
+
+describe('the fleet by access', () => {
+  it('lists active and revoked kiosks apart when asked, both when not, and refuses an unknown access with 400', async () => {
+    const station = await pairedKiosk(t, g.admin, g.technician.auth, g.gallery.id);
+    expect((await request(t.http).post(`/api/kiosks/${station.credential.kioskId}/revoke`).set(g.technician.auth)).status).toBe(200);
+    const live = await pairedKiosk(t, g.admin, g.technician.auth, g.gallery.id);
+    const ids = async (access?: string) => {
+      const res = await request(t.http).get('/api/kiosks').query({ galleryId: g.gallery.id, pageSize: 100, ...(access ? { access } : {}) }).set(g.technician.auth);
+      expect(res.status).toBe(200);
+      return (res.body as Page<FleetKioskView>).items.map((kiosk) => kiosk.id);
+    };
+    const [revokedId, activeId] = [station.credential.kioskId, live.credential.kioskId];
+    expect(await ids('active')).toContain(activeId);
+    expect(await ids('active')).not.toContain(revokedId);
+    expect(await ids('revoked')).toContain(revokedId);
+    expect(await ids('revoked')).not.toContain(activeId);
+    expect(await ids()).toEqual(expect.arrayContaining([activeId, revokedId]));
+    const refused = await request(t.http).get('/api/kiosks').query({ access: 'paused' }).set(g.technician.auth);
+    expect(refused.status).toBe(400);
+    expect(refused.body.errors).toEqual([{ path: ['access'], message: 'access is one of active, revoked.' }]);
+  });
+});

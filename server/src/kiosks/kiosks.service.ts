@@ -102,7 +102,9 @@ export class KiosksService {
    */
   async list(query: ListKiosksQuery, member: Member): Promise<Page<KioskView>> {
     const galleries = { [Op.and]: [scopeWhere(venueScope(member, FLEET_KEEPERS)), ...(query.venueId ? [{ venueId: query.venueId }] : [])] };
+    const access = { active: { revokedAt: null }, revoked: { revokedAt: { [Op.ne]: null } } };
     const { rows, count } = await this.kiosks.findAndCountAll({
+      where: query.access ? access[query.access] : {},
       include: [{
         model: Station, required: true, where: query.galleryId ? { galleryId: query.galleryId } : {},
         include: [{ model: Gallery, required: true, where: galleries }],

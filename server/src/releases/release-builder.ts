@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { RELEASE_FORMAT, serializeManifest, type ReleaseFile as ManifestFile, type ReleaseManifest } from '@mantlepiece/shared';
+import { serializeManifest, type ReleaseManifest } from '@mantlepiece/shared';
 import { Clock } from '../clock/clock.service.js';
 import type { ClaimQueue } from '../jobs/claim-queue.js';
 import { Revision } from '../revisions/models/revision.model.js';
@@ -10,7 +10,7 @@ import { Venue } from '../venues/models/venue.model.js';
 import { ReleaseStory } from './models/release-story.model.js';
 import type { Release } from './models/release.model.js';
 import { ReleaseBuildFaults } from './release-build-faults.js';
-import { localesOf, ReleaseContentService, type ChosenRevision } from './release-content.service.js';
+import { ReleaseContentService, type ChosenRevision } from './release-content.service.js';
 import { ReleaseFileStore, sha256Of } from './release-file-store.js';
 import { VenueSigningKeysService } from './venue-signing-keys.service.js';
 
@@ -47,30 +47,21 @@ export class ReleaseBuilder {
     const venue = gallery?.venue;
     if (!venue) throw new Error('The gallery or its venue no longer exists.');
     const chosen = await this.chosenOf(release);
-    const stories = await this.content.manifestStories(venue, chosen);
-    const { media, renditions } = await this.content.manifestMedia(venue, chosen);
+    const { content, renditions } = await this.content.manifestContent(venue, chosen);
 
-    const manifestFiles: ManifestFile[] = [];
     for (const [index, rendition] of renditions.entries()) {
       await step(`Storing files (${index + 1} of ${renditions.length})`, 0.1 + 0.75 * (index / renditions.length));
-      const file: ManifestFile = { sha256: rendition.sha256, size: rendition.bytes, mime: 'image/webp' };
-      await this.files.copy(release.id, file, rendition.storeKey);
-      if (!manifestFiles.some((listed) => listed.sha256 === file.sha256)) manifestFiles.push(file);
+      await this.files.copy(release.id, { sha256: rendition.sha256, size: rendition.bytes, mime: 'image/webp' }, rendition.storeKey);
     }
     await this.faults.reach('files-stored');
 
     await step('Signing the manifest', 0.9);
     const manifest: ReleaseManifest = {
-      format: RELEASE_FORMAT,
+      ...content,
       releaseId: release.id,
       number: release.number,
       galleryId: release.galleryId,
-      venue: { name: venue.name, sourceLocale: venue.sourceLocale, locales: localesOf(venue) },
       createdAt: release.createdAt.toISOString(),
-      fallbackToSource: venue.fallbackToSource,
-      stories,
-      media,
-      files: manifestFiles,
     };
     const text = serializeManifest(manifest);
     const signature = await this.keys.signText(venue.id, text);
@@ -83,7 +74,7 @@ export class ReleaseBuilder {
     const ready = await claim.settle(release.id, {
       state: 'ready', progress: 1, phase: 'Ready to publish', readyAt: this.clock.now(),
       manifest: text, signature, manifestSha256: sha256Of(Buffer.from(text, 'utf8')),
-      fileCount: manifestFiles.length, bytes: manifestFiles.reduce((sum, file) => sum + file.size, 0),
+      fileCount: content.files.length, bytes: content.files.reduce((sum, file) => sum + file.size, 0),
     });
     if (!ready) throw new BuildLeaseLost();
   }

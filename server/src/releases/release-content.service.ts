@@ -1,7 +1,9 @@
 import { Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, type Transaction } from 'sequelize';
-import { lookupText, preflightBlockers, type ApiErrorBody, type ReleaseMedia, type ReleaseStory as ManifestStory } from '@mantlepiece/shared';
+import {
+  lookupText, preflightBlockers, RELEASE_FORMAT, type ApiErrorBody, type ReleaseContent, type ReleaseFile as ManifestFile, type ReleaseMedia, type ReleaseStory as ManifestStory,
+} from '@mantlepiece/shared';
 import { Exhibit } from '../exhibits/models/exhibit.model.js';
 import { MediaAltText } from '../media/models/media-alt-text.model.js';
 import { MediaAsset } from '../media/models/media-asset.model.js';
@@ -97,16 +99,12 @@ export class ReleaseContentService {
     return [...storyById.values()].flatMap((story) => chosen.filter((c) => c.story.id === story.id));
   }
 
-  /** Everything that stops the release, each with a path: translations, then preflight blockers as of today. */
-  async problemsOf(venue: Venue, chosen: ChosenRevision[], transaction: Transaction): Promise<FieldError[]> {
+  /**
+   * Everything else that stops the release, each with a path: images not prepared, then preflight
+   * blockers as of today (missing translations are the release plan's, `ReleaseChoicesService`).
+   */
+  async problemsOf(chosen: ChosenRevision[], transaction: Transaction): Promise<FieldError[]> {
     const problems: FieldError[] = [];
-    if (!venue.fallbackToSource) {
-      for (const gap of await this.translations.gapsFor(chosen.map((c) => c.revision), venue.targetLocales)) {
-        const story = chosen.find((c) => c.revision.id === gap.revisionId)!.story;
-        const parts = [gap.untranslated && `${gap.untranslated} untranslated`, gap.stale && `${gap.stale} stale`].filter(Boolean).join(' and ');
-        problems.push({ path: ['locales', gap.locale, story.id], message: `“${story.title}” in ${gap.locale}: ${parts} of ${gap.total} texts.` });
-      }
-    }
     problems.push(...(await this.unpreparedImages(chosen, transaction)));
     for (const { story, revision } of chosen) {
       const blockers = preflightBlockers(await this.revisionRules.preflightOf(revision.snapshot, story, transaction));
@@ -133,8 +131,27 @@ export class ReleaseContentService {
     }));
   }
 
+  /**
+   * What the release shows, as its manifest carries it, and the renditions to copy into it: the
+   * build signs this, and its preview compares it with the Live release's.
+   */
+  async manifestContent(venue: Venue, chosen: ChosenRevision[]): Promise<{ content: ReleaseContent; renditions: RenditionSource[] }> {
+    const stories = await this.manifestStories(venue, chosen);
+    const { media, renditions } = await this.manifestMedia(venue, chosen);
+    const files = [...new Map(renditions.map((r): ManifestFile => ({ sha256: r.sha256, size: r.bytes, mime: 'image/webp' })).map((file) => [file.sha256, file])).values()];
+    return {
+      content: {
+        format: RELEASE_FORMAT,
+        venue: { name: venue.name, sourceLocale: venue.sourceLocale, locales: localesOf(venue) },
+        fallbackToSource: venue.fallbackToSource,
+        stories, media, files,
+      },
+      renditions,
+    };
+  }
+
   /** The manifest's stories: every panel in every venue locale, target locales with their translations applied. */
-  async manifestStories(venue: Venue, chosen: ChosenRevision[]): Promise<ManifestStory[]> {
+  private async manifestStories(venue: Venue, chosen: ChosenRevision[]): Promise<ManifestStory[]> {
     const stories: ManifestStory[] = [];
     for (const { revision } of chosen) {
       const { snapshot } = revision;
@@ -160,7 +177,7 @@ export class ReleaseContentService {
    * kiosk may show them in (the venue's and the stories' own), each chosen by RFC 4647 lookup, so
    * a venue's en-GB takes the image's en alt text.
    */
-  async manifestMedia(venue: Venue, chosen: ChosenRevision[]): Promise<{ media: ReleaseMedia[]; renditions: RenditionSource[] }> {
+  private async manifestMedia(venue: Venue, chosen: ChosenRevision[]): Promise<{ media: ReleaseMedia[]; renditions: RenditionSource[] }> {
     const ids = mediaIdsOf(chosen);
     const assets = await this.media.findAll({ where: { id: { [Op.in]: ids.length ? ids : [0] } }, include: [MediaRendition, MediaAltText], order: [['id', 'ASC']] });
     const locales = [...new Set([...localesOf(venue), ...chosen.map((c) => c.revision.snapshot.story.sourceLocale)])];

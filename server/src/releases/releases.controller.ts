@@ -5,7 +5,8 @@ import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import { withinReach } from '../common/venue-boundary.js';
 import type { User } from '../users/models/user.model.js';
-import { CompareReleasesQuery, ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js';
+import { CompareReleasesQuery, ListReleasesQuery, ReleasePreviewQuery, RequestReleaseDto } from './dto/release.dto.js';
+import { ReleasePreviewService } from './release-preview.service.js';
 import { ReleasesService } from './releases.service.js';
 import { PUBLISHERS } from './release-policy.js';
 import { VenueSigningKeysService } from './venue-signing-keys.service.js';
@@ -16,6 +17,7 @@ import { VenueSigningKeysService } from './venue-signing-keys.service.js';
 export class ReleasesController {
   constructor(
     private readonly releases: ReleasesService,
+    private readonly previews: ReleasePreviewService,
     private readonly keys: VenueSigningKeysService,
   ) {}
 
@@ -24,6 +26,13 @@ export class ReleasesController {
   @HttpCode(HttpStatus.ACCEPTED)
   request(@Param('id', ParseIntPipe) galleryId: number, @Body() dto: RequestReleaseDto, @CurrentUser() user: User) {
     return this.releases.requestRelease(galleryId, dto, user);
+  }
+
+  /** What a build with these revisions and choices would carry and miss, before asking for it. */
+  @Roles(...PUBLISHERS)
+  @Get('galleries/:id/releases/preview')
+  preview(@Param('id', ParseIntPipe) galleryId: number, @Query() query: ReleasePreviewQuery, @CurrentUser() user: User) {
+    return this.previews.preview(galleryId, query, user);
   }
 
   @ApiCan('release', { page: true, listCan: 'releases' })

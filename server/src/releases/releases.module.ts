@@ -20,8 +20,10 @@ import { ReleaseStory } from './models/release-story.model.js';
 import { Release } from './models/release.model.js';
 import { ReleaseBuildFaults } from './release-build-faults.js';
 import { ReleaseBuilder } from './release-builder.js';
+import { ReleaseChoicesService } from './release-choices.js';
 import { ReleaseContentService } from './release-content.service.js';
 import { ReleaseFileStore } from './release-file-store.js';
+import { ReleasePreviewService } from './release-preview.service.js';
 import { ReleaseTranslations } from './release-translations.js';
 import { PublicationsService } from './publications.service.js';
 import { ReleasesController } from './releases.controller.js';
@@ -37,7 +39,10 @@ import { VenueSigningKeysModule } from './venue-signing-keys.module.js';
     MediaModule, RevisionsModule, TranslationsModule, VenueSigningKeysModule,
   ],
   controllers: [ReleasesController],
-  providers: [ReleasesService, PublicationsService, ReleasesWorker, ReleaseBuilder, ReleaseContentService, ReleaseFileStore, ReleaseTranslations, ReleaseBuildFaults],
+  providers: [
+    ReleasesService, ReleasePreviewService, PublicationsService, ReleasesWorker, ReleaseBuilder, ReleaseContentService, ReleaseChoicesService, ReleaseFileStore,
+    ReleaseTranslations, ReleaseBuildFaults,
+  ],
   exports: [ReleasesService, ReleasesWorker, PublicationsService, ReleaseFileStore, VenueSigningKeysModule],
 })
 export class ReleasesModule {}

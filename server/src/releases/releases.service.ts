@@ -16,6 +16,7 @@ import type { ListReleasesQuery, RequestReleaseDto } from './dto/release.dto.js'
 import { ReleasePanel } from './models/release-panel.model.js';
 import { ReleaseStory } from './models/release-story.model.js';
 import { Release } from './models/release.model.js';
+import { ReleaseChoicesService } from './release-choices.js';
 import { releaseRefusal, ReleaseContentService } from './release-content.service.js';
 import { isPublishable, PUBLISHERS, releasesCan } from './release-policy.js';
 import { PublicationsService } from './publications.service.js';
@@ -32,6 +33,7 @@ export class ReleasesService {
     @InjectModel(Revision) private readonly revisions: typeof Revision,
     @InjectModel(ReleasePanel) private readonly releasePanels: typeof ReleasePanel,
     private readonly content: ReleaseContentService,
+    private readonly choices: ReleaseChoicesService,
     private readonly publications: PublicationsService,
     private readonly worker: ReleasesWorker,
     private readonly audit: AuditService,
@@ -40,7 +42,8 @@ export class ReleasesService {
   ) {}
 
   /**
-   * Checks the rules on the revisions the release will carry, then queues its build: the answer
+   * Checks the rules on the revisions the release will carry, stories left out as asked (see
+   * `ReleaseChoicesService` for missing translations), then queues its build: the answer
    * comes at once, the build runs in the worker. The revisions are fixed here, so the release is
    * exactly what was checked.
    */
@@ -50,8 +53,9 @@ export class ReleasesService {
       const gallery = await this.galleries.findByPk(galleryId, { include: [Venue], transaction, lock: transaction.LOCK.UPDATE });
       const { venueId, venue } = withinReach(user, gallery, 'There is no such gallery.');
       actingAt(user, venueId, PUBLISHERS);
-      const chosen = await this.content.chooseRevisions(galleryId, dto.revisionIds, transaction);
-      const problems = await this.content.problemsOf(venue!, chosen, transaction);
+      const candidates = await this.content.chooseRevisions(galleryId, dto.revisionIds, transaction);
+      const { kept: chosen, unanswered } = await this.choices.plan(venue!, candidates, dto);
+      const problems = [...unanswered, ...(await this.content.problemsOf(chosen, transaction))];
       if (problems.length) throw releaseRefusal('This release cannot be built yet.', problems);
 
       const last = (await this.releases.max<number, Release>('number', { where: { galleryId }, transaction })) ?? 0;
@@ -69,7 +73,7 @@ export class ReleasesService {
       );
       await this.audit.record({
         actorId: user.id, action: 'release.requested', targetType: 'release', targetId: created.id, venueId,
-        detail: { galleryId, number: created.number, revisionIds: chosen.map((c) => c.revision.id) },
+        detail: { galleryId, number: created.number, revisionIds: chosen.map((c) => c.revision.id), leftOut: dto.leaveOut ?? [] },
       }, transaction);
       return created;
     });

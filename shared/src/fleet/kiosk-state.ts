@@ -26,3 +26,7 @@ export function kioskState(lastHeartbeatAt: Date | string | null, now: Date, { s
   if (silentMs >= staleAfterS * 1000) return 'stale';
   return 'online';
 }
+
+/** Whether a kiosk may still call the server, for the Fleet's filter: a revoked kiosk's access has ended for good. */
+export const KIOSK_ACCESS = ['active', 'revoked'] as const;
+export type KioskAccess = (typeof KIOSK_ACCESS)[number];

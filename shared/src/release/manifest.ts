@@ -95,6 +95,20 @@ export function parseManifest(manifestJson: string): ManifestParse {
  */
 export const serializeManifest = (manifest: ReleaseManifest): string => canonicalJson(manifest);
 
+/** What a release shows, without what names one build of it (its id, number, gallery and time). */
+export type ReleaseContent = Omit<ReleaseManifest, 'releaseId' | 'number' | 'galleryId' | 'createdAt'>;
+
+export function releaseContentOf(manifest: ReleaseManifest): ReleaseContent {
+  const { releaseId: _releaseId, number: _number, galleryId: _galleryId, createdAt: _createdAt, ...content } = manifest;
+  return content;
+}
+
+/**
+ * The content as canonical JSON: two builds whose texts are equal carry the same revisions,
+ * documents, alt texts and files (each named by its SHA-256), so their kiosks show the same screens.
+ */
+export const serializeReleaseContent = (content: ReleaseContent): string => canonicalJson(content);
+
 /** Every file the manifest lists that is not in `stored`, each once. */
 export function missingFiles(manifest: ReleaseManifest, stored: ReadonlySet<string>): ReleaseFile[] {
   const seen = new Set<string>();

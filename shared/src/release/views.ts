@@ -37,6 +37,52 @@ export interface ReleaseView {
 /** GET /api/galleries/:id/releases: a page, and whether the signed-in person may build a release. */
 export type ReleasePage = Page<ReleaseView> & { can: Can<'releases'> };
 
+/**
+ * What a technician may do with a story whose translations are missing or out of date: leave it
+ * out of the release, or, where the venue allows it, show its untranslated texts in the source language.
+ */
+export const MISSING_TRANSLATION_CHOICES = ['leave-out', 'show-in-source'] as const;
+export type MissingTranslationChoice = (typeof MISSING_TRANSLATION_CHOICES)[number];
+
+/** A target locale in which a story's texts are not all translated from the revision released. */
+export interface TranslationGapView {
+  locale: string;
+  /** Texts of the story: title, panel texts, alt texts, widget labels. */
+  total: number;
+  untranslated: number;
+  /** Translated from an older source text. */
+  stale: number;
+}
+
+export interface ReleasePreviewStory extends ReleaseStoryView {
+  /** Empty when the story is translated into every target locale. */
+  missing: TranslationGapView[];
+  /** What may be chosen for it; empty when nothing is missing. */
+  choices: MissingTranslationChoice[];
+  /** What a build with these choices does with it; null while a choice is still needed. */
+  choice: MissingTranslationChoice | null;
+}
+
+/**
+ * `GET /api/galleries/:id/releases/preview`: what a build with the given revisions and choices
+ * would carry, what is missing, what stops it, and whether it would equal the Live release.
+ */
+export interface ReleasePreview {
+  galleryId: number;
+  /** The venue's language, in which untranslated texts are shown where the venue allows it. */
+  sourceLocale: string;
+  /** The venue's rule: may a kiosk show a text not yet translated in the source language. */
+  fallbackToSource: boolean;
+  /** Every story the release could carry, in menu order, those left out included. */
+  stories: ReleasePreviewStory[];
+  /** What stops the build apart from missing translations (preflight, images), each with its path. */
+  problems: { path: (string | number)[]; message: string }[];
+  /** The Live release the build would equal, same revisions, translations and files: building it changes nothing on screen. */
+  sameAsLive: { id: number; number: number } | null;
+  /** Whether the server would take a build with these choices. */
+  buildable: boolean;
+}
+
 export interface ReleaseComparison {
   a: { id: number; number: number };
   b: { id: number; number: number };

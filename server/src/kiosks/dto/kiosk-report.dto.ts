@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { ArrayMaxSize, IsBoolean, IsIn, IsISO8601, IsOptional, IsString, IsUUID, Matches, MaxLength, ValidateIf } from 'class-validator';
 import {
-  APP_VERSION_PATTERN, KIOSK_EVENT_TYPES, KIOSK_SWITCHES, REPORT_TEXT_MAX, REPORT_TEXT_PATTERN, type KioskEventType, type KioskSwitch,
+  APP_VERSION_PATTERN, KIOSK_ACCESS, KIOSK_EVENT_TYPES, KIOSK_SWITCHES, REPORT_TEXT_MAX, REPORT_TEXT_PATTERN, type KioskAccess, type KioskEventType, type KioskSwitch,
 } from '@mantlepiece/shared';
 import { PageQuery } from '../../common/page.js';
 import { IsIntBetween, IsRowId, NestedObjects, Omittable, QueryRowId, UNSIGNED_BIGINT_MAX, UNSIGNED_INT_MAX } from '../../common/validation.js';
@@ -116,6 +116,11 @@ export class ListKiosksQuery extends PageQuery {
   @IsOptional()
   @QueryRowId()
   galleryId?: number;
+
+  @ApiPropertyOptional({ enum: KIOSK_ACCESS, description: 'active: kiosks whose access stands; revoked: those whose access ended; left out, both' })
+  @IsOptional()
+  @IsIn(KIOSK_ACCESS, { message: `access is one of ${KIOSK_ACCESS.join(', ')}.` })
+  access?: KioskAccess;
 
   @ApiPropertyOptional()
   @IsOptional()
