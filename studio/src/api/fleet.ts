@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { FleetKioskDetail, FleetKioskView, FleetPage } from '@mantlepiece/shared';
+import type { FleetKioskDetail, FleetKioskView, FleetPage, KioskAccess } from '@mantlepiece/shared';
 import { api } from './client';
 
 /** Kiosks report every 30 s; looking twice as often keeps a state change on screen within a heartbeat. */
@@ -9,6 +9,8 @@ export interface FleetParams {
   page: number;
   pageSize: number;
   galleryId?: number;
+  /** Left out: active and revoked kiosks both. */
+  access?: KioskAccess;
 }
 
 const fleetKey = ['fleet'] as const;

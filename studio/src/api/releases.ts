@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ExhibitView, Page, ReleaseComparison, ReleasePage, ReleaseState, ReleaseView, RevisionSummary, StoryView } from '@mantlepiece/shared';
+import type { ExhibitView, Page, ReleaseComparison, ReleasePage, ReleasePreview, ReleaseState, ReleaseView, RevisionSummary, StoryView } from '@mantlepiece/shared';
 import { api } from './client';
 
 export interface ReleaseListParams {
@@ -52,12 +52,34 @@ export function useReleaseComparison(a: number | undefined, b: number | undefine
   });
 }
 
-/** No revisions named: the server takes the latest approved revision of each story of the gallery. */
+/**
+ * What a build asks for: no revisions named, the server takes the latest approved revision of
+ * each story of the gallery; stories with missing translations left out or shown in the source language.
+ */
+export interface ReleaseRequest {
+  revisionIds?: number[];
+  leaveOut: number[];
+  showInSource: number[];
+}
+
+const listParam = (ids: number[] | undefined) => ids?.join(',');
+
+/** What a build with these choices would carry and miss, and whether it equals the Live release. */
+export function useReleasePreview(galleryId: number, request: ReleaseRequest, enabled: boolean) {
+  const query = { revisionIds: listParam(request.revisionIds), leaveOut: listParam(request.leaveOut), showInSource: listParam(request.showInSource) };
+  return useQuery({
+    queryKey: [...galleryReleasesKey(galleryId), 'preview', query],
+    queryFn: () => api<ReleasePreview>(`/galleries/${galleryId}/releases/preview`, { query }),
+    enabled,
+    placeholderData: keepPreviousData,
+  });
+}
+
 export function useBuildRelease(galleryId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (revisionIds?: number[]) =>
-      api<{ id: number; state: 'building' }>(`/galleries/${galleryId}/releases`, { method: 'POST', body: revisionIds ? { revisionIds } : {} }),
+    mutationFn: (request: ReleaseRequest) =>
+      api<{ id: number; state: 'building' }>(`/galleries/${galleryId}/releases`, { method: 'POST', body: request }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: galleryReleasesKey(galleryId) }),
   });
 }

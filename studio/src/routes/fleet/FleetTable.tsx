@@ -48,6 +48,8 @@ export function FleetTable({ kiosks, now, busy }: { kiosks: FleetKioskView[]; no
                 <TableCell>
                   <span className={styles.station}><TextLink to={`/fleet/${kiosk.id}`}>{kiosk.station.name}</TextLink></span>
                   {kiosk.demo ? <> <DemoBadge /></> : null}
+                  {/* A station keeps its name when its kiosk is replaced: the kiosk's own name tells two rows apart. */}
+                  <Text as="p" size={200} className={styles.muted}>{t('stations.kiosks.name', { id: kiosk.id })}</Text>
                 </TableCell>
                 <TableCell><KioskStateBadge kiosk={kiosk} /></TableCell>
                 <TableCell><ReleasePlaying kiosk={kiosk} /></TableCell>

@@ -10,7 +10,7 @@ import { withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
 import { PageHeader } from '../../components/PageHeader';
 import { FleetTable } from './FleetTable';
-import { readFleetParams } from './list-params';
+import { ACCESS_CHOICES, DEFAULT_ACCESS, readFleetParams } from './list-params';
 
 const useStyles = makeStyles({
   toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
@@ -48,6 +48,11 @@ export function FleetPage() {
             {galleries.data?.items.map((gallery) => <option key={gallery.id} value={String(gallery.id)}>{gallery.name}</option>)}
           </Select>
         </Field>
+        <Field label={t('fleet.access')}>
+          <Select value={params.access ?? 'all'} onChange={(_event, data) => change({ access: data.value === DEFAULT_ACCESS ? undefined : data.value })}>
+            {ACCESS_CHOICES.map((access) => <option key={access} value={access}>{t(`fleet.accessChoices.${access}`)}</option>)}
+          </Select>
+        </Field>
         {fleet.dataUpdatedAt ? (
           <Text className={styles.updated} aria-live="polite">
             {t('fleet.updated', { time: new Intl.DateTimeFormat(i18n.resolvedLanguage, { timeStyle: 'medium' }).format(now) })}
@@ -59,13 +64,15 @@ export function FleetPage() {
         query={fleet}
         loadError={t('fleet.loadError')}
         empty={
-          <EmptyState
-            icon={<DesktopPulseRegular />}
-            title={params.galleryId ? t('fleet.noMatchTitle') : t('fleet.emptyTitle')}
-            actions={params.galleryId ? <Button onClick={() => change({ galleryId: undefined })}>{t('lists.clearFilters')}</Button> : null}
-          >
-            {params.galleryId ? t('fleet.noMatchBody') : t('fleet.emptyBody')}
-          </EmptyState>
+          params.galleryId ? (
+            <EmptyState icon={<DesktopPulseRegular />} title={t('fleet.noMatchTitle')} actions={<Button onClick={() => change({ galleryId: undefined })}>{t('lists.clearFilters')}</Button>}>
+              {t('fleet.noMatchBody')}
+            </EmptyState>
+          ) : params.access === 'revoked' ? (
+            <EmptyState icon={<DesktopPulseRegular />} title={t('fleet.noAccessMatchTitle')} actions={<Button onClick={() => change({ access: 'all' })}>{t('fleet.accessChoices.all')}</Button>}>
+              {t('fleet.noAccessMatchBody')}
+            </EmptyState>
+          ) : <EmptyState icon={<DesktopPulseRegular />} title={t('fleet.emptyTitle')}>{t('fleet.emptyBody')}</EmptyState>
         }
       >
         {(page) => (

@@ -3,8 +3,14 @@ import { byGallery, readFleetParams } from './list-params';
 
 describe('fleet list params', () => {
   it('reads the page and the gallery filter from the URL, ignoring nonsense', () => {
-    expect(readFleetParams(new URLSearchParams('page=3&galleryId=7'))).toEqual({ page: 3, pageSize: 50, galleryId: 7 });
-    expect(readFleetParams(new URLSearchParams('page=-1&galleryId=x'))).toEqual({ page: 1, pageSize: 50, galleryId: undefined });
+    expect(readFleetParams(new URLSearchParams('page=3&galleryId=7'))).toEqual({ page: 3, pageSize: 50, galleryId: 7, access: 'active' });
+    expect(readFleetParams(new URLSearchParams('page=-1&galleryId=x'))).toEqual({ page: 1, pageSize: 50, galleryId: undefined, access: 'active' });
+  });
+
+  it('shows the active kiosks unless asked for the revoked ones or all', () => {
+    expect(readFleetParams(new URLSearchParams('access=revoked')).access).toBe('revoked');
+    expect(readFleetParams(new URLSearchParams('access=all')).access).toBeUndefined();
+    expect(readFleetParams(new URLSearchParams('access=paused')).access).toBe('active');
   });
 });
 

@@ -1,5 +1,11 @@
 import type { FleetParams } from '../../api/fleet';
-import { pageFrom, positiveId } from '../../components/lists/list-search';
+import { KIOSK_ACCESS, type KioskAccess } from '@mantlepiece/shared';
+import { oneOf, pageFrom, positiveId } from '../../components/lists/list-search';
+
+/** What the Fleet shows unless asked otherwise: the kiosks that still play, not those revoked. */
+export const DEFAULT_ACCESS: KioskAccess = 'active';
+const ALL = 'all';
+export const ACCESS_CHOICES = [...KIOSK_ACCESS, ALL] as const;
 
 export const PAGE_SIZE = 50;
 
@@ -7,7 +13,14 @@ export const readFleetParams = (search: URLSearchParams): FleetParams => ({
   page: pageFrom(search),
   pageSize: PAGE_SIZE,
   galleryId: positiveId(search.get('galleryId')),
+  access: accessFrom(search.get('access')),
 });
+
+/** `?access=all` shows both; anything else unknown falls back to the active kiosks. */
+function accessFrom(value: string | null): KioskAccess | undefined {
+  const chosen = oneOf(value, ACCESS_CHOICES) ?? DEFAULT_ACCESS;
+  return chosen === ALL ? undefined : chosen;
+}
 
 /** Rows in the server's order (by gallery), cut wherever the gallery changes, for a heading row per gallery. */
 export function byGallery<K extends { gallery: { id: number; name: string } }>(kiosks: readonly K[]): { gallery: K['gallery']; kiosks: K[] }[] {
