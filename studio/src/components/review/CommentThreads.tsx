@@ -36,7 +36,7 @@ function CommentBody({ comment }: { comment: CommentView }) {
         {comment.anchorChanged === false ? <Badge appearance="tint" color="success">{t('comments.anchorSame')}</Badge> : null}
       </div>
       {comment.range ? <blockquote className={styles.quote}>{comment.range.quote}</blockquote> : null}
-      <p className={styles.body}>{comment.body}</p>
+      <p className={styles.body} dir="auto">{comment.body}</p>
     </>
   );
 }

@@ -41,7 +41,7 @@ function ChangesRequested({ revisionId }: { revisionId: number }) {
     <MessageBar intent="warning" layout="multiline" data-changes-requested>
       <MessageBarBody>
         <MessageBarTitle>{t('verdict.changesBy', { name: request.reviewer?.name ?? t('revision.formerColleague') })}</MessageBarTitle>
-        {request.note}{' '}
+        <bdi>{request.note}</bdi>{' '}
         <TextLink to={`/reviews/${revisionId}`}>{t('storyReview.openRevision', { number: revision.data!.number })}</TextLink>
       </MessageBarBody>
     </MessageBar>

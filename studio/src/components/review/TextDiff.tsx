@@ -1,5 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import type { TextPiece } from '@mantlepiece/shared';
+import { directionOf, type TextPiece } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useReviewStyles } from './review-styles';
 
@@ -16,7 +16,7 @@ export function TextDiff({ pieces, locale }: { pieces: TextPiece[]; locale: stri
   const styles = useStyles();
   const shared = useReviewStyles();
   return (
-    <p className={styles.text} lang={locale} data-text-diff>
+    <p className={styles.text} lang={locale} dir={directionOf(locale)} data-text-diff>
       {pieces.map((piece, index) => {
         if (piece.kind === 'same') return <span key={index}>{piece.text}</span>;
         const Tag = piece.kind === 'added' ? 'ins' : 'del';

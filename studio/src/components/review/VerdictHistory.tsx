@@ -32,7 +32,7 @@ export function VerdictHistory({ reviews }: { reviews: ReviewView[] }) {
             <Text weight="semibold">{t(review.verdict === 'approve' ? 'verdict.approvedBy' : 'verdict.changesBy', { name: review.reviewer?.name ?? t('revision.formerColleague') })}</Text>
             <span className={shared.muted}> · {formatDate(review.createdAt)}</span>
           </Text>
-          {review.note ? <p className={styles.note}>{review.note}</p> : null}
+          {review.note ? <p className={styles.note} dir="auto">{review.note}</p> : null}
         </li>
       ))}
     </ul>

@@ -106,7 +106,7 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
           <Text as="h2" id="note-heading" size={500} weight="semibold" className={shared.heading}>
             {t('revision.noteFrom', { name: revision.submittedBy?.name ?? t('revision.formerColleague') })}
           </Text>
-          <Text as="p" className={styles.noteText}>{revision.note}</Text>
+          <Text as="p" className={styles.noteText} dir="auto">{revision.note}</Text>
         </section>
       ) : null}
 
