@@ -134,7 +134,7 @@ export function BuildReleaseDialog({ galleryId, galleryName, onBuilding, onClose
           <DialogActions>
             <Button appearance="secondary" onClick={onClose}>{t('common.cancel')}</Button>
             <Button appearance="primary" disabled={build.isPending || !ready || !preview.data?.buildable || preview.isFetching} onClick={submit}>
-              {build.isPending ? t('releases.build.starting') : sameAsLive ? t('releases.build.submitAnyway') : t('releases.build.submit')}
+              {build.isPending ? t('releases.build.starting') : t('releases.build.submit')}
             </Button>
           </DialogActions>
         </DialogBody>

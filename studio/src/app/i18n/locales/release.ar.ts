@@ -59,7 +59,6 @@ export const releaseAr: Translated<typeof releaseEn> = {
       blocked: 'لا يمكن بناء هذا الإصدار بعد.',
       sameAsLiveTitle: 'لن يتغير شيء',
       sameAsLive: 'سيحمل هذا الإصدار بالضبط ما يحمله {{name}} المنشور الآن: النسخ والترجمات والملفات نفسها. بناؤه لا يغيّر شيئًا على شاشات القاعة.',
-      submitAnyway: 'البناء مع ذلك',
     },
     missing: {
       title: '{{count}} قصة غير مترجمة بالكامل',

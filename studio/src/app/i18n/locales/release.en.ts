@@ -56,7 +56,6 @@ export const releaseEn = {
       blocked: 'This release cannot be built yet.',
       sameAsLiveTitle: 'Nothing would change',
       sameAsLive: 'This release would carry exactly what {{name}}, Live now, carries: the same revisions, translations and files. Building it changes nothing on the gallery’s screens.',
-      submitAnyway: 'Build anyway',
     },
     missing: {
       title: '{{count}} stories are not fully translated',

@@ -59,7 +59,6 @@ export const releaseEs: Translated<typeof releaseEn> = {
       blocked: 'Esta versión aún no se puede construir.',
       sameAsLiveTitle: 'No cambiaría nada',
       sameAsLive: 'Esta versión contendría exactamente lo que contiene la {{name}}, en servicio: las mismas revisiones, traducciones y archivos. Construirla no cambia nada en las pantallas de la galería.',
-      submitAnyway: 'Construir de todos modos',
     },
     missing: {
       title: '{{count}} historias no están traducidas del todo',

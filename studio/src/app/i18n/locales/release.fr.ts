@@ -58,7 +58,6 @@ export const releaseFr: typeof releaseEn = {
       blocked: 'Cette version ne peut pas encore être construite.',
       sameAsLiveTitle: 'Rien ne changerait',
       sameAsLive: 'Cette version contiendrait exactement ce que contient la {{name}}, en service : les mêmes révisions, traductions et fichiers. La construire ne change rien sur les écrans de la galerie.',
-      submitAnyway: 'Construire quand même',
     },
     missing: {
       title: '{{count}} récits ne sont pas entièrement traduits',
