@@ -79,6 +79,8 @@ describe('POST /api/widgets/validate', () => {
       errors: [
         { path: ['params', 'massKg'], message: 'Mass must be a number more than 0 kg and at most 1,000,000 kg.' },
         { path: ['params', 'colour'], message: '"colour" is not a setting of the slope force box.' },
+        // Every wrong setting at once: the wrong mass does not hide kinetic friction above static.
+        { path: ['params', 'kineticFriction'], message: expect.stringContaining('cannot be more than static friction μs (0.3)') },
       ],
     });
   });
