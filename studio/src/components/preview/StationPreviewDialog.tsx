@@ -96,6 +96,11 @@ export function StationPreviewDialog({ title, doc, locale, resolveMedia, initial
   const { ref: viewport, size } = useBoxSize();
   const screen = screens.find((candidate) => screenKey(candidate) === chosen) ?? screens.find((candidate) => candidate.layout === initialLayout) ?? screens[0]!;
   const zoom = fit ? zoomToFit(screen, size) : 1;
+  const shownKey = screenKey(screen);
+  // Each screen and zoom starts at the panel's top-left corner, whichever way the studio's language runs.
+  useLayoutEffect(() => {
+    viewport.current?.scrollTo({ left: 0, top: 0 });
+  }, [viewport, shownKey, zoom]);
   const describe = (candidate: PreviewScreen) => {
     const values = { width: candidate.width, height: candidate.height, orientation: t(`stationPreview.${candidate.layout}`) };
     return candidate.stations.length > 0 ? t('stationPreview.screenStations', { ...values, stations: candidate.stations.join(', ') }) : t('stationPreview.screenSize', values);
