@@ -120,7 +120,10 @@ describe('a drag inside a widget in the editor', () => {
       await curator.keyboard.press('PageUp');
       await curator.locator('.mp-widget-trial').scrollIntoViewIfNeeded();
     });
-    expect(await savedPanel(storyId)).toEqual(before);
+    // Opening the panel may save the empty paragraph the editor keeps after a last widget, and nothing more.
+    const after = (await savedPanel(storyId)).doc;
+    expect(withoutTrailingParagraph(blockTypes(after))).toEqual(blockTypes(before.doc));
+    expect(savedAngle(after)).toBe(20);
   });
 
   it('saves the text typed afterwards with the block still after the paragraph and the angle as it was', async () => {
