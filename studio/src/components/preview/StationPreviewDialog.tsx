@@ -16,9 +16,9 @@ const useStyles = makeStyles({
   body: { height: '100%', display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS, maxHeight: 'none' },
   content: { flex: 1, minHeight: 0, display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS, overflow: 'hidden' },
   controls: { display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', gap: tokens.spacingHorizontalM },
-  viewport: { flex: 1, minHeight: 0, overflow: 'auto', backgroundColor: tokens.colorNeutralBackground3, borderRadius: tokens.borderRadiusMedium, direction: 'ltr' },
+  viewport: { flex: 1, minHeight: 0, overflow: 'auto', backgroundColor: tokens.colorNeutralBackground3, borderRadius: tokens.borderRadiusMedium },
   // The station's glass: the panel is laid out at 1920 × 1080 (or 1080 × 1920) and scaled into it as the kiosk does.
-  screen: { transformOrigin: 'top left', backgroundColor: STAGE_COLOUR, display: 'flex', alignItems: 'center', justifyContent: 'center', overflow: 'hidden' },
+  screen: { backgroundColor: STAGE_COLOUR, display: 'flex', alignItems: 'center', justifyContent: 'center', overflow: 'hidden' },
   selection: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalM },
 });
 
@@ -68,7 +68,8 @@ function Screen({ screen, zoom, doc, locale, resolveMedia, onSelectionEnd }: { s
     <div style={{ width: screen.width * zoom, height: screen.height * zoom, margin: '0 auto' }}>
       <div
         className={styles.screen}
-        style={{ width: screen.width, height: screen.height, transform: `scale(${zoom})` }}
+        // Inline, so the studio's right-to-left styles do not mirror the corner the screen is scaled from.
+        style={{ width: screen.width, height: screen.height, transform: `scale(${zoom})`, transformOrigin: 'top left' }}
         data-station-screen={screenKey(screen)}
       >
         <div ref={drawing} onMouseUp={selectionEnded} onKeyUp={selectionEnded} data-selectable-panel={onSelectionEnd ? '' : undefined}>
@@ -124,7 +125,8 @@ export function StationPreviewDialog({ title, doc, locale, resolveMedia, initial
               <ToggleButton checked={!fit} onClick={() => setFit(false)}>{t('stationPreview.actual')}</ToggleButton>
               <Text aria-live="polite" data-zoom={zoom}>{t('stationPreview.zoom', { percent: Math.round(zoom * 100) })}</Text>
             </div>
-            <div ref={viewport} className={styles.viewport} data-station-preview="" tabIndex={0} aria-label={describe(screen)} role="region">
+            {/* A station screen has a top-left corner whatever the studio's language: the attribute, unlike a style, is not mirrored in Arabic. */}
+            <div ref={viewport} className={styles.viewport} dir="ltr" data-station-preview="" tabIndex={0} aria-label={describe(screen)} role="region">
               <Screen screen={screen} zoom={zoom} doc={doc} locale={locale} resolveMedia={resolveMedia} onSelectionEnd={onSelectionEnd} />
             </div>
             {footer}
