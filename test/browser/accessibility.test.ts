@@ -156,7 +156,9 @@ describe('every studio screen meets WCAG 2.2 AA as axe-core checks it', () => {
       await expectAccessible(page, `/releases of ${GALLERY}`);
       await page.getByRole('button', { name: 'Build release' }).click();
       const build = page.getByRole('dialog', { name: `Build a release of ${GALLERY}` });
-      await build.waitFor();
+      // Judged once the server's preview has come and Build is offered, and the dialog has stopped fading in.
+      await build.getByRole('button', { name: 'Build', exact: true, disabled: false }).waitFor();
+      await settled(page);
       await expectAccessible(page, '/releases, build dialog open');
       await build.getByRole('button', { name: 'Build', exact: true }).click();
       await closed(page, build);
