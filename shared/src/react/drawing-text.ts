@@ -15,6 +15,16 @@ export interface Box {
  * A generous estimate of a label's width: Lexend's widest common glyphs run about 0.62 em, digits
  * and Arabic letters less. Generous, so a label that fits here fits on screen.
  */
+/** A word drawn in a widget: its text, where it is anchored (SVG text-anchor) with the middle of its line, its size and the box it takes. */
+export interface DrawnLabel {
+  text: string;
+  x: number;
+  y: number;
+  anchor: 'start' | 'middle' | 'end';
+  fontSize: number;
+  box: Box;
+}
+
 export const textWidth = (text: string, fontSize: number): number => [...text].length * fontSize * 0.62;
 
 /** A line of text's box: its width by estimate, its height 1.4 em, centred on `middleY`. */

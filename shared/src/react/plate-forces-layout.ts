@@ -1,5 +1,5 @@
 import { UPPER_MANTLE_BASE_KM } from '../widgets/plate-forces/index.js';
-import { textBox, type Box } from './drawing-text.js';
+import { textBox, type Box, type DrawnLabel } from './drawing-text.js';
 
 /**
  * Where the plate-forces drawing puts its words, for one language and text size: a pure function,
@@ -20,15 +20,7 @@ export const RIDGE_PUSH_ARROW = { from: { x: RIDGE_X + 40, y: PLATE.top + 34 }, 
 /** Sizes at the kiosk's standard text; Larger text scales them all. */
 export const PLATE_FONT = { place: 14, depth: 13, force: 13 } as const;
 
-export interface PlateLabel {
-  text: string;
-  x: number;
-  /** The middle of the line. */
-  y: number;
-  anchor: 'start' | 'middle' | 'end';
-  fontSize: number;
-  box: Box;
-}
+export type PlateLabel = DrawnLabel;
 
 export interface PlateLabelTexts {
   ridge: string;

@@ -1,4 +1,4 @@
-import { textBox, textWidth, type Box } from './drawing-text.js';
+import { textBox, textWidth, type Box, type DrawnLabel } from './drawing-text.js';
 
 /**
  * Where the sea-floor depth drawing puts its axis and its words, for one age, language and text
@@ -24,15 +24,7 @@ const TICK_GAP = 6;
 /** Air between a label and the frame. */
 const MARGIN = 1;
 
-export interface SeaFloorLabel {
-  text: string;
-  /** Where the text is anchored (SVG text-anchor), and the middle of its line. */
-  x: number;
-  y: number;
-  anchor: 'start' | 'middle' | 'end';
-  fontSize: number;
-  box: Box;
-}
+export type SeaFloorLabel = DrawnLabel;
 
 export interface SeaFloorLabelTexts {
   ridge: string;
