@@ -5,7 +5,7 @@ import { randomBytes } from 'node:crypto';
 import mysql from 'mysql2/promise';
 import { ensureDebianPackage } from '../../scripts/lib/debian.mjs';
 import { freePort } from '../../scripts/lib/ports.mjs';
-import { run, startOwned, waitFor } from '../../scripts/lib/processes.mjs';
+import { run, startOwned, waitFor, type OwnedProcess } from '../../scripts/lib/processes.mjs';
 import { root } from '../../scripts/lib/stack.mjs';
 
 /**
@@ -26,12 +26,6 @@ export interface ScaleStack {
   /** Waits until the replica has applied everything the primary has written so far. */
   replicaCaughtUp(): Promise<void>;
   stop(): Promise<void>;
-}
-
-interface OwnedProcess {
-  recentOutput(): string;
-  stop(timeoutMs?: number): Promise<void>;
-  child: { exitCode: number | null };
 }
 
 export interface Instance {

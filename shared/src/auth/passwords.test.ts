@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH, passwordProblem } from './passwords';
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH, passwordProblem } from './passwords.js';
 
 // NIST SP 800-63B 5.1.1.2: a minimum length, every printing character and space allowed, no composition rules, a blocklist.
 describe('passwordProblem', () => {

@@ -1,0 +1,2 @@
+// Types for debian.mjs.
+export function ensureDebianPackage(options: { command: string; pkg: string; phaseName: string }): void;
