@@ -113,6 +113,26 @@ describe('the image page', () => {
       await eventually(() => page.getByRole('option').first().textContent()).toBe('CC-BY-4.0');
     });
   });
+
+  it('keeps and saves a licence chosen beyond the first suggestions, typed or picked', async () => {
+    // MIT and MIT-0 are on the SPDX License List (spdx.org/licenses); neither is among the image licences suggested first.
+    await as('curator@demo.test', async (page) => {
+      await page.goto(`/media/${mediaId}`);
+      await page.getByRole('radio', { name: 'An open licence (SPDX identifier)' }).check();
+      const spdx = page.getByRole('combobox', { name: 'SPDX identifier' });
+      await spdx.fill('');
+      await spdx.pressSequentially('MIT');
+      expect(await spdx.inputValue(), 'what was typed stays in the box').toBe('MIT');
+      await eventually(() => page.getByRole('option').first().textContent()).toBe('MIT');
+      await page.getByRole('option', { name: 'MIT-0', exact: true }).click();
+      expect(await spdx.inputValue()).toBe('MIT-0');
+      await page.getByRole('button', { name: 'Save' }).click();
+      await eventually(() => page.getByText('Saved.').count()).toBe(1);
+      expect((await asCurator<{ licence: unknown }>('GET', `/media/${mediaId}`)).licence).toEqual({ kind: 'spdx', id: 'MIT-0' });
+      await page.reload();
+      await eventually(() => page.getByRole('combobox', { name: 'SPDX identifier' }).inputValue()).toBe('MIT-0');
+    });
+  });
 });
 
 describe('the translator’s workspace', () => {

@@ -20,6 +20,7 @@ import { LinkButton, TextLink } from '../../components/links';
 import { PageHeader } from '../../components/PageHeader';
 import { ASSET_FIELDS, assetChanges, assetProblems, assetValues, type AssetValues } from './asset-form';
 import { formatBytes } from './media-facts';
+import { licenceSuggestions } from './licence';
 import { MediaBadges } from './MediaBadges';
 import { RenditionPreparation } from './RenditionPreparation';
 
@@ -95,8 +96,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
   const message = (field: (typeof ASSET_FIELDS)[number]) => serverFieldMessage(update.error, field);
   // The server judges the licence as a whole; its message belongs at the box the curator filled in.
   const licenceMessage = message('licence');
-  const typed = values.spdxId.trim().toLowerCase();
-  const spdxSuggestions = (licenceIds.data?.ids ?? []).filter((id) => id.toLowerCase().includes(typed)).slice(0, MAX_LICENCE_SUGGESTIONS);
+  const spdxSuggestions = licenceSuggestions(licenceIds.data?.ids ?? [], values.spdxId, MAX_LICENCE_SUGGESTIONS);
   const unplaced = update.error && !ASSET_FIELDS.some((field) => message(field)) ? describeError(t, update.error) : null;
   const deleteProblem = remove.error instanceof ApiError && remove.error.status === 409 ? t('asset.inUse') : remove.error ? describeError(t, remove.error) : null;
 
@@ -183,11 +183,13 @@ function AssetDetails({ asset }: { asset: MediaView }) {
                   freeform
                   disabled={!writer}
                   value={values.spdxId}
-                  selectedOptions={[values.spdxId]}
+                  selectedOptions={spdxSuggestions.includes(values.spdxId) ? [values.spdxId] : []}
                   open={suggesting && spdxSuggestions.length > 0}
                   onOpenChange={(_event, data) => setSuggesting(data.open)}
                   onChange={(event) => { set({ spdxId: event.target.value }); setSuggesting(true); }}
-                  onOptionSelect={(_event, data) => set({ spdxId: data.optionValue ?? '' })}
+                  // Fluent "clears the selection" (no optionValue) when the typed text starts none of the options
+                  // still on screen ("M" while the common image licences show); what was typed stands.
+                  onOptionSelect={(_event, data) => { if (data.optionValue !== undefined) set({ spdxId: data.optionValue }); }}
                 >
                   {spdxSuggestions.map((id) => <Option key={id}>{id}</Option>)}
                 </Combobox>
