@@ -202,6 +202,36 @@ describe('every studio screen meets WCAG 2.2 AA as axe-core checks it', () => {
   }, ROUND);
 });
 
+describe('what the studio shows for a moment meets WCAG 2.2 AA too', () => {
+  it('the Undo toast after deleting a panel, and the search box with hits and with nothing found', async () => {
+    const asCurator = await apiAs('curator@demo.test');
+    const story = (await asCurator<{ id: number }>('POST', '/stories', { title: `Axe undo ${suffix}`, audience: 'family' })).id;
+    for (const text of ['Plates move.', 'Ridges push.']) {
+      await asCurator('POST', `/stories/${story}/panels`, { doc: { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text }] }] }, wordBudget: 60 });
+    }
+    await asRole('curator@demo.test', async (page) => {
+      await visit(page, `/stories/${story}`);
+      await page.getByRole('button', { name: 'Delete panel' }).first().click();
+      await page.getByRole('alertdialog').getByRole('button', { name: 'Delete panel' }).click();
+      const toast = page.locator('[data-undo-toast]');
+      await toast.waitFor();
+      await expectAccessible(page, `/stories/${story}, Undo toast showing`);
+      await toast.getByRole('button', { name: 'Undo' }).click();
+      await page.locator('.fui-Toast').filter({ hasText: 'Restored.' }).waitFor();
+      await expectAccessible(page, `/stories/${story}, Restored toast showing`);
+
+      const search = page.getByRole('searchbox', { name: 'Search stories, media and people' });
+      await search.fill(`axe undo ${suffix}`);
+      await page.locator('[data-search-results] [data-search-kind]').first().waitFor();
+      await expectAccessible(page, 'search results open');
+      await search.fill(`zz${suffix}qq`);
+      await page.locator('[data-search-results]').getByText(`Nothing found for “zz${suffix}qq”.`).waitFor();
+      await expectAccessible(page, 'search saying nothing found');
+      await search.press('Escape');
+    });
+  }, ROUND);
+});
+
 describe('the kiosk meets WCAG 2.2 AA but for its zoom lock', () => {
   it('on its pairing screen, its story menu and a panel', async () => {
     const context = await browser.newContext({ baseURL: baseUrl, locale: 'en-GB', viewport: { width: 1920, height: 1080 }, hasTouch: true });

@@ -55,6 +55,18 @@ describe('the studio’s search box', () => {
     expect(await results().count()).toBe(0);
   });
 
+  it('says nothing was found for a word no story, image or person has', async () => {
+    const nothing = `${word}zzq`;
+    // From a page that takes no focus of its own (the editor the last test opened does).
+    await page.goto('/media');
+    await box().fill(nothing);
+    const said = results().getByRole('status');
+    await eventually(() => said.textContent()).toBe(`Nothing found for “${nothing}”.`);
+    expect(await results().locator('[data-search-kind]').count()).toBe(0);
+    expect(await axeFindings(page), 'axe with “Nothing found” showing').toEqual([]);
+    await box().press('Escape');
+  });
+
   it('asks for two characters before it searches', async () => {
     await box().fill('x');
     await results().getByText('Type 2 characters or more.').waitFor();

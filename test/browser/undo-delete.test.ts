@@ -18,6 +18,13 @@ const eventually = <T>(read: () => Promise<T> | T) => expect.poll(read, { timeou
 const cards = () => page.getByRole('list', { name: 'Panels of this story' }).getByRole('button');
 const toast = (text: string) => page.locator('.fui-Toast').filter({ hasText: text });
 
+/** Switches the studio's language with the header's menu, as a person does (their account keeps it). */
+async function chooseLanguage(name: string): Promise<void> {
+  await page.getByRole('button', { name: /^(Language|Langue|Idioma|اللغة)/ }).click();
+  await page.getByRole('menuitemradio', { name }).click();
+  await eventually(() => page.getByRole('button', { name: /^(Language|Langue|Idioma|اللغة)/ }).textContent()).toBe(name);
+}
+
 beforeAll(async () => {
   asCurator = await apiAs('curator@demo.test');
   storyId = (await asCurator<{ id: number }>('POST', '/stories', { title: `Undo check ${suffix}`, audience: 'family' })).id;
@@ -54,6 +61,24 @@ describe('deleting offers Undo for a while', () => {
     await eventually(() => cards().allTextContents()).toEqual(texts.map((text, index) => `Panel ${index + 1}${text}`));
     await page.reload();
     await eventually(() => cards().allTextContents()).toEqual(texts.map((text, index) => `Panel ${index + 1}${text}`));
+  });
+
+  it('words the Undo toast in the language the studio is switched to while it shows', async () => {
+    await page.goto(`/stories/${storyId}?panel=${panelIds[2]}`);
+    await eventually(() => cards().count()).toBe(3);
+    await page.getByRole('button', { name: 'Delete panel' }).first().click();
+    await page.getByRole('alertdialog', { name: 'Delete panel 3?' }).getByRole('button', { name: 'Delete panel' }).click();
+    await toast('Panel 3 deleted.').waitFor();
+    // The studio's own French and Spanish words (studio/src/app/i18n/locales/undo.*.ts).
+    await chooseLanguage('Français');
+    const offered = toast('Panneau 3 supprimé.');
+    await offered.waitFor();
+    expect(await toast('Panel 3 deleted.').count()).toBe(0);
+    await chooseLanguage('Español');
+    await toast('Panel 3 eliminado.').getByRole('button', { name: 'Deshacer' }).click();
+    await toast('Restaurado.').waitFor();
+    await chooseLanguage('English');
+    await eventually(() => cards().count()).toBe(3);
   });
 
   it('deletes an image from its page, and Undo brings it back to the library', async () => {

@@ -64,13 +64,18 @@ export async function apiAs(email: string, password = demoPassword, server = bas
 
 /**
  * Waits until the page rests: every animation with an end has ended (endless ones, a spinner, have
- * none to wait for) and two frames have been drawn, so state set by a resize observer has rendered.
+ * none to wait for; a timer on an empty box draws nothing) and two frames have been drawn, so state
+ * set by a resize observer has rendered.
  * Colours and boxes are judged on a resting page: a dialog fading in reads as grey on grey.
  */
 export async function atRest(page: Page): Promise<void> {
   await page.evaluate(async () => {
+    // An empty box draws nothing however long it animates: Fluent times a toast by a CSS animation on one.
+    const drawsNothing = (target: Element | null | undefined) =>
+      !!target && target.childElementCount === 0 && target.getBoundingClientRect().width === 0 && target.getBoundingClientRect().height === 0;
     await Promise.all(document.getAnimations()
       .filter((animation) => Number.isFinite(Number(animation.effect?.getComputedTiming().endTime)))
+      .filter((animation) => !drawsNothing((animation.effect as KeyframeEffect | null)?.target))
       .map((animation) => animation.finished.catch(() => undefined)));
     await new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(resolve)));
   });

@@ -222,7 +222,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
           onConfirm={() => remove.mutate(asset.id, {
             onSuccess: () => {
               navigate('/media');
-              offerUndo(t('undo.imageDeleted', { name: asset.filename }), () => restore.mutateAsync(asset.id));
+              offerUndo({ key: 'undo.imageDeleted', values: { name: asset.filename } }, () => restore.mutateAsync(asset.id));
             },
           })}
           onCancel={() => setConfirming(false)}

@@ -71,7 +71,7 @@ export function StoryPage() {
       onSuccess: () => {
         setDeleting(null);
         if (neighbour) select(neighbour.id);
-        offerUndo(t('undo.panelDeleted', { number: index + 1 }), () => restorePanel.mutateAsync(panelId));
+        offerUndo({ key: 'undo.panelDeleted', values: { number: index + 1 } }, () => restorePanel.mutateAsync(panelId));
       },
     });
   };
