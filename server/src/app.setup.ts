@@ -9,6 +9,7 @@ import { createValidationPipe } from './common/validation.js';
 import { ConfigService } from './config/config.service.js';
 import { routeReads } from './database/replica-reads.js';
 import { MEDIA_FILES_PATH } from './media/media-files.controller.js';
+import { answerManifestPollsFirst } from './kiosks/manifest-poll.js';
 import { MEDIA_STORE, type MediaStore } from './media/media-store.js';
 import { releaseFileKey } from './releases/release-file-store.js';
 import { answerUnknownPaths, serveApps } from './static/serve-apps.js';
@@ -16,8 +17,9 @@ import { securityHeaders } from './static/security-headers.js';
 
 /** Configures and initialises the app the same way for the running server and for the tests. */
 export async function initApp(app: NestExpressApplication): Promise<void> {
-  configureApp(app, await presignedFileOrigin(app));
+  const headers = configureApp(app, await presignedFileOrigin(app));
   await app.init();
+  answerManifestPollsFirst(app, headers);
   answerUnknownPaths(app);
 }
 
@@ -28,13 +30,14 @@ async function presignedFileOrigin(app: NestExpressApplication): Promise<string 
   return url ? new URL(url).origin : null;
 }
 
-/** Everything around the modules, before Nest mounts its routes. */
-function configureApp(app: NestExpressApplication, fileOrigin: string | null): void {
+/** Everything around the modules, before Nest mounts its routes; gives back the security headers' middleware. */
+function configureApp(app: NestExpressApplication, fileOrigin: string | null): ReturnType<typeof securityHeaders> {
   const config = app.get(ConfigService);
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
   // First, so that every answer carries them: pages, assets, API responses and errors alike.
-  app.use(securityHeaders({ https: config.overHttps, fileOrigin }));
+  const headers = securityHeaders({ https: config.overHttps, fileOrigin });
+  app.use(headers);
   app.setGlobalPrefix('api', { exclude: [{ path: MEDIA_FILES_PATH, method: RequestMethod.GET }] });
   app.use(cookieParser());
   if (config.databaseReplicaUrls.length > 0) app.use(routeReads({ lagAllowanceSeconds: config.replicaLagAllowanceSeconds, secure: config.secureCookies }));
@@ -54,4 +57,5 @@ function configureApp(app: NestExpressApplication, fileOrigin: string | null): v
     { prefix: '/', dir: config.studioDist },
     { prefix: '/kiosk/', dir: config.kioskDist },
   ]);
+  return headers;
 }

@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { randomBytes } from 'node:crypto';
 import mysql from 'mysql2/promise';
-import { ensureDebianPackage } from '../../scripts/lib/debian.mjs';
+import { startNginx } from '../../scripts/lib/nginx.mjs';
 import { freePort } from '../../scripts/lib/ports.mjs';
 import { run, startOwned, waitFor, type OwnedProcess } from '../../scripts/lib/processes.mjs';
 import { root } from '../../scripts/lib/stack.mjs';
@@ -40,43 +40,7 @@ function standIn(name: string): string {
   return value;
 }
 
-const nginxBinary = () => (fs.existsSync('/usr/sbin/nginx') ? '/usr/sbin/nginx' : 'nginx');
-
-/** Round robin over the instances; a refused connection goes on to the next one, as a load balancer in front of a rolling restart should. */
-function nginxConfig({ dir, port, upstreams }: { dir: string; port: number; upstreams: number[] }): string {
-  return `
-${process.getuid?.() === 0 ? 'user root;' : ''}
-worker_processes 1;
-daemon off;
-pid ${dir}/nginx.pid;
-events { worker_connections 512; }
-http {
-  access_log off;
-  client_body_temp_path ${dir}/body;
-  proxy_temp_path ${dir}/proxy;
-  fastcgi_temp_path ${dir}/fastcgi;
-  uwsgi_temp_path ${dir}/uwsgi;
-  scgi_temp_path ${dir}/scgi;
-  client_max_body_size 30m;
-  upstream mantlepiece {
-${upstreams.map((upstream) => `    server 127.0.0.1:${upstream} max_fails=1 fail_timeout=10s;`).join('\n')}
-  }
-  server {
-    listen 127.0.0.1:${port};
-    location / {
-      proxy_pass http://mantlepiece;
-      proxy_set_header Host $http_host;
-      proxy_set_header X-Forwarded-For $proxy_add_x_forwarded_for;
-      proxy_set_header X-Forwarded-Proto $scheme;
-      proxy_next_upstream error timeout http_502;
-    }
-  }
-}
-`;
-}
-
 export async function startScaleStack(): Promise<ScaleStack> {
-  ensureDebianPackage({ command: 'nginx', pkg: 'nginx', phaseName: 'load balancer' });
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'mantlepiece-scale-'));
   const owned: OwnedProcess[] = [];
   const connections: mysql.Connection[] = [];
@@ -162,13 +126,7 @@ export async function startScaleStack(): Promise<ScaleStack> {
       });
     }
 
-    fs.writeFileSync(path.join(dir, 'nginx.conf'), nginxConfig({ dir, port: nginxPort, upstreams: instances.map((instance) => instance.port) }));
-    const nginx = startOwned('nginx', nginxBinary(), ['-c', path.join(dir, 'nginx.conf'), '-p', dir, '-e', path.join(dir, 'nginx-error.log')]);
-    owned.push(nginx);
-    await waitFor(async () => (await fetch(`${url}/api/health`)).ok, {
-      what: 'nginx', timeoutMs: 15_000,
-      failIf: () => (nginx.child.exitCode !== null ? `nginx exited: ${nginx.recentOutput().trim()}` : null),
-    });
+    owned.push(await startNginx({ dir, port: nginxPort, upstreams: instances.map((instance) => instance.port) }));
     return { url, instances, mailDir, primary, replica, replicaCaughtUp, stop };
   } catch (error) {
     await stop();

@@ -1,12 +1,10 @@
 import { applyDecorators, CanActivate, createParamDecorator, ExecutionContext, ForbiddenException, Injectable, UnauthorizedException, UseGuards } from '@nestjs/common';
-import { InjectModel } from '@nestjs/sequelize';
 import type { Request } from 'express';
-import { QueryTypes } from 'sequelize';
 import { Public } from '../auth/auth.decorators.js';
 import { hashToken } from '../common/tokens.js';
 import type { PublicationVersion } from '../releases/publications.service.js';
 import { bearerOf, isDeviceToken } from './device-token.js';
-import { Kiosk } from './models/kiosk.model.js';
+import { PairedKioskReader } from './paired-kiosk-reader.js';
 
 export const KIOSK_UNPAIRED_MESSAGE = 'Pair this kiosk to continue.';
 
@@ -23,46 +21,24 @@ export interface KioskRequest extends Request {
   kiosk: PairedKiosk;
 }
 
-interface PairedKioskRow {
-  id: number;
-  stationId: number;
-  galleryId: number;
-  publicationId: number | null;
-  publicationExpiresAt: Date | null;
-}
-
 /**
- * The kiosk of a device token, with its gallery and that gallery's latest publication: one read on
- * the unique token-hash key, the station's primary key and the unique (gallery, sequence) key.
- */
-const PAIRED_KIOSK = `SELECT k.id, k.station_id AS stationId, s.gallery_id AS galleryId, p.id AS publicationId, p.expires_at AS publicationExpiresAt
-  FROM kiosks k
-  JOIN stations s ON s.id = k.station_id
-  LEFT JOIN publications p ON p.id = (SELECT latest.id FROM publications latest WHERE latest.gallery_id = s.gallery_id ORDER BY latest.sequence DESC LIMIT 1)
-  WHERE k.device_token_hash = ? AND k.revoked_at IS NULL`;
-
-/**
- * Lets a paired kiosk through with its own device token, read from the database on each request
- * so a revoked kiosk is refused at once. A person's access token is refused here, as a device
+ * Lets a paired kiosk through with its own device token, read from the database for each request
+ * (by a read that began after the request arrived, shared with the polls that came meanwhile) so
+ * a revoked kiosk is refused at once. A person's access token is refused here, as a device
  * token is refused on staff routes. Kiosks poll all day, so this is the poll's only database read
  * while the gallery's manifest is unchanged.
  */
 @Injectable()
 export class DeviceTokenGuard implements CanActivate {
-  constructor(@InjectModel(Kiosk) private readonly kiosks: typeof Kiosk) {}
+  constructor(private readonly pairedKiosks: PairedKioskReader) {}
 
   async canActivate(context: ExecutionContext): Promise<boolean> {
     const request = context.switchToHttp().getRequest<KioskRequest>();
     const token = bearerOf(request.headers.authorization);
     if (token && !isDeviceToken(token)) throw new ForbiddenException('Kiosk routes take a kiosk’s device token, not a person’s sign-in.');
-    const [row] = token ? await this.kiosks.sequelize!.query<PairedKioskRow>(PAIRED_KIOSK, { replacements: [hashToken(token)], type: QueryTypes.SELECT }) : [];
-    if (!row) throw new UnauthorizedException(KIOSK_UNPAIRED_MESSAGE);
-    request.kiosk = {
-      id: row.id,
-      stationId: row.stationId,
-      station: { id: row.stationId, galleryId: row.galleryId },
-      latestPublication: row.publicationId === null ? null : { id: row.publicationId, expiresAt: row.publicationExpiresAt },
-    };
+    const kiosk = token ? await this.pairedKiosks.read(hashToken(token)) : undefined;
+    if (!kiosk) throw new UnauthorizedException(KIOSK_UNPAIRED_MESSAGE);
+    request.kiosk = kiosk;
     return true;
   }
 }

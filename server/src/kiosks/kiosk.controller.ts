@@ -8,6 +8,7 @@ import { VenuesService } from '../venues/venues.service.js';
 import { CurrentKiosk, KioskRoute, PairedOrUnpairedKioskRoute, type PairedKiosk } from './device-token.guard.js';
 import { HeartbeatDto, KioskEventsDto } from './dto/kiosk-report.dto.js';
 import { KioskReleasesService } from './kiosk-releases.service.js';
+import { answerManifestPoll } from './manifest-poll.js';
 import { CompletePairingDto } from './dto/pairing.dto.js';
 import { KiosksService } from './kiosks.service.js';
 import { PairingService } from './pairing.service.js';
@@ -53,25 +54,15 @@ export class KioskController {
   }
 
   /**
-   * Revalidated by ETag: a kiosk polling an unchanged publication gets 304 and no body. A gallery
-   * with nothing published answers 204: an expected state a kiosk polls through, not an error.
+   * The gallery's live signed manifest (answerManifestPoll says how). A paired kiosk's poll is
+   * mostly answered before Nest (answerManifestPollsFirst); this route answers the rest, with the
+   * same guard and answer.
    */
   @ApiBearerAuth()
   @KioskRoute()
   @Get('manifest')
   async manifest(@CurrentKiosk() kiosk: PairedKiosk, @Headers('if-none-match') ifNoneMatch: string | undefined, @Res() res: Response): Promise<void> {
-    const live = await this.releases.liveManifest(kiosk);
-    if (!live) {
-      res.set({ 'Cache-Control': 'no-cache' }).status(HttpStatus.NO_CONTENT).end();
-      return;
-    }
-    const { etag, body } = live;
-    res.set({ ETag: etag, 'Cache-Control': 'no-cache' });
-    if (ifNoneMatch?.split(',').some((tag) => tag.trim() === etag)) {
-      res.status(HttpStatus.NOT_MODIFIED).end();
-      return;
-    }
-    res.set({ 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': String(body.length) }).end(body);
+    answerManifestPoll(res, await this.releases.liveManifest(kiosk), ifNoneMatch);
   }
 
   /**

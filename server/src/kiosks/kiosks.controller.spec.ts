@@ -127,6 +127,22 @@ describe('a device token', () => {
     expect(after.status).toBe(401);
   });
 
+  it('is refused at the next poll once revoked, also among many polls read together, while another kiosk’s polls are answered', async () => {
+    const kept = await pairedKiosk(t, g.admin, g.technician.auth, g.gallery.id);
+    const ended = await pairedKiosk(t, g.admin, g.technician.auth, g.gallery.id);
+    const pollAll = () => Promise.all(Array.from({ length: 12 }, (_, i) => request(t.http).get('/api/kiosk/manifest').set(i % 2 ? ended.device : kept.device)));
+    expect((await pollAll()).map((res) => res.status)).toEqual(Array(12).fill(204));
+    expect((await request(t.http).post(`/api/kiosks/${ended.credential.kioskId}/revoke`).set(g.technician.auth)).status).toBe(200);
+    const after = await pollAll();
+    expect(after.map((res) => res.status)).toEqual(Array.from({ length: 12 }, (_, i) => (i % 2 ? 401 : 204)));
+    expect(after[1]!.body.message).toBe('Pair this kiosk to continue.');
+    // The poll answered before Nest carries the security headers every API answer does (our policy; no outside source).
+    const health = await request(t.http).get('/api/health');
+    const security = (res: request.Response) => Object.keys(res.headers).filter((name) => /^(content-security|permissions|cross-origin|referrer|x-)/.test(name)).sort();
+    expect(security(after[0]!)).toEqual(security(health));
+    expect(security(after[0]!).length).toBeGreaterThan(5);
+  });
+
   it('is refused on kiosk routes when it is a person’s access token instead', async () => {
     const res = await request(t.http).get('/api/kiosk/manifest').set(g.technician.auth);
     expect(res.status).toBe(403);

@@ -21,6 +21,7 @@ import { Kiosk } from './models/kiosk.model.js';
 import { PairingRequest } from './models/pairing-request.model.js';
 import { PairingAttemptsService } from './pairing-attempts.service.js';
 import { PairingService } from './pairing.service.js';
+import { PairedKioskReader } from './paired-kiosk-reader.js';
 
 @Module({
   imports: [
@@ -28,7 +29,7 @@ import { PairingService } from './pairing.service.js';
     ReleasesModule, FleetStatesModule, RateLimitsModule, VenuesModule,
   ],
   controllers: [KioskController, KiosksController],
-  providers: [PairingService, PairingAttemptsService, KiosksService, KioskReleasesService, DeviceTokenGuard, OptionalDeviceTokenGuard],
+  providers: [PairingService, PairingAttemptsService, KiosksService, KioskReleasesService, PairedKioskReader, DeviceTokenGuard, OptionalDeviceTokenGuard],
   exports: [KiosksService],
 })
 export class KiosksModule {}
