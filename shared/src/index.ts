@@ -9,6 +9,7 @@ export * from './languages/language-tags.js';
 export * from './panel/index.js';
 export * from './authoring/deletion.js';
 export * from './search/views.js';
+export * from './lists/list-queries.js';
 export * from './authoring/views.js';
 export * from './release/index.js';
 export * from './review/index.js';

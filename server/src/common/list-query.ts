@@ -2,12 +2,10 @@ import { applyDecorators } from '@nestjs/common';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
 import type { OrderItem } from 'sequelize';
+import type { ListSort } from '@mantlepiece/shared';
 
 /** A LIKE pattern that matches `text` literally anywhere: %, _ and \ typed by a person are not wildcards. */
 export const likePattern = (text: string) => `%${text.trim().replace(/[\\%_]/g, '\\$&')}%`;
-
-/** `name` and `-name` for each key: the whitelist a `?sort=` is checked against. */
-export const sortValues = (keys: readonly string[]) => keys.flatMap((key) => [key, `-${key}`]);
 
 /** `?sort=-updatedAt` as an ORDER BY, with the id as tie-break so pages never overlap. */
 export function orderOf(sort: string, columns: Record<string, string> = {}): OrderItem[] {
@@ -16,8 +14,9 @@ export function orderOf(sort: string, columns: Record<string, string> = {}): Ord
   return [[columns[key] ?? key, descending ? 'DESC' : 'ASC'], ['id', 'ASC']];
 }
 
-export const SortField = (keys: readonly string[], fallback: string) =>
-  applyDecorators(ApiPropertyOptional({ enum: sortValues(keys), default: fallback }), IsOptional(), IsIn(sortValues(keys)));
+/** `?sort=` of a list, checked against the list's values in shared (`STORY_SORT`, …), which the studio offers too. */
+export const SortField = ({ values, fallback }: ListSort<string>) =>
+  applyDecorators(ApiPropertyOptional({ enum: values, default: fallback }), IsOptional(), IsIn(values));
 
 export const SearchField = () =>
   applyDecorators(ApiPropertyOptional({ description: 'Words to look for' }), IsOptional(), IsString(), MaxLength(200));

@@ -1,9 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsOptional } from 'class-validator';
-import type { Page } from '@mantlepiece/shared';
+import { PAGE_SIZE, type Page } from '@mantlepiece/shared';
 import { ID_MAX, QueryInt } from './validation.js';
-
-export const MAX_PAGE_SIZE = 100;
 
 /** `?page=&pageSize=` of every paged list. A page number is bounded like a row id, so its offset stays an exact number. */
 export class PageQuery {
@@ -12,10 +10,10 @@ export class PageQuery {
   @QueryInt(1, ID_MAX)
   page: number = 1;
 
-  @ApiPropertyOptional({ default: 25, minimum: 1, maximum: MAX_PAGE_SIZE })
+  @ApiPropertyOptional({ default: PAGE_SIZE.fallback, minimum: 1, maximum: PAGE_SIZE.max })
   @IsOptional()
-  @QueryInt(1, MAX_PAGE_SIZE)
-  pageSize: number = 25;
+  @QueryInt(1, PAGE_SIZE.max)
+  pageSize: number = PAGE_SIZE.fallback;
 }
 
 export const pageWindow = ({ page, pageSize }: PageQuery) => ({ limit: pageSize, offset: (page - 1) * pageSize });

@@ -3,7 +3,7 @@ import { InjectModel } from '@nestjs/sequelize';
 import { QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import {
-  addDays, dayEndIn, dayIn, dayStartIn, dwellByPanel, widgetUse,
+  addDays, dayEndIn, dayIn, dayStartIn, dwellByPanel, INSIGHTS_DEFAULT_DAYS, widgetUse,
   type DwellSample, type InsightsView, type KioskEventType, type KioskSwitch, type Role, type WidgetParamCount,
 } from '@mantlepiece/shared';
 import type { Member } from '../auth/policy.js';
@@ -16,9 +16,6 @@ import type { InsightsQuery } from './dto/insights.query.js';
 
 /** Who reads what visitors did. */
 export const INSIGHTS_READERS: readonly Role[] = ['curator', 'educator', 'technician', 'admin'];
-
-/** The range shown when none is asked for: the last 30 days, today included. */
-const DEFAULT_DAYS = 30;
 
 interface Range {
   from: string;
@@ -106,7 +103,7 @@ export class InsightsService {
 
   private rangeOf(query: InsightsQuery, timeZone: string): Range {
     const to = query.to ?? dayIn(this.clock.now(), timeZone);
-    const from = query.from ?? addDays(to, -(DEFAULT_DAYS - 1));
+    const from = query.from ?? addDays(to, -(INSIGHTS_DEFAULT_DAYS - 1));
     if (from > to) {
       throw invalidField(['to'], 'The range ends before it starts.');
     }

@@ -2,10 +2,9 @@ import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { Op, QueryTypes } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
-import { MY_WORK_LIST_LENGTH, type MyWorkView, type Role, type StoryState, type WorkList } from '@mantlepiece/shared';
+import { MY_WORK_LIST_LENGTH, PAGE_SIZE, type MyWorkView, type Role, type StoryState, type WorkList } from '@mantlepiece/shared';
 import { rolesAnywhere, scopeWhere, venueScope } from '../auth/policy.js';
 import { Clock } from '../clock/clock.service.js';
-import { MAX_PAGE_SIZE } from '../common/page.js';
 import { KioskStates } from '../fleet/kiosk-states.service.js';
 import { KiosksService } from '../kiosks/kiosks.service.js';
 import { MediaService } from '../media/media.service.js';
@@ -27,7 +26,7 @@ export const LICENCE_WARNING_DAYS = 60;
 const FAILED_RELEASE_DAYS = 14;
 const FIRST_PAGE = { page: 1, pageSize: MY_WORK_LIST_LENGTH };
 /** Lists filtered after reading take the largest page, so the filter rarely has too few to choose from. */
-const WIDE_PAGE = { page: 1, pageSize: MAX_PAGE_SIZE };
+const WIDE_PAGE = { page: 1, pageSize: PAGE_SIZE.max };
 
 /**
  * What is waiting for one person, per role they hold at any venue, from the venues where they hold it. Each list comes from the query its own area

@@ -1,7 +1,7 @@
 import { ConflictException } from '@nestjs/common';
 import { ForeignKeyConstraintError, Op, UniqueConstraintError, type Includeable } from 'sequelize';
 import type { Model, ModelCtor } from 'sequelize-typescript';
-import type { Page, Role } from '@mantlepiece/shared';
+import { SETTINGS_SORT, type Page, type Role, type SettingsSort } from '@mantlepiece/shared';
 import { inScope, personAt, scopeWhere, venueScope, type Member, type Person } from '../auth/policy.js';
 import { likePattern, orderOf, SearchField, SortField } from '../common/list-query.js';
 import { PageQuery, pageWindow, toPage } from '../common/page.js';
@@ -9,15 +9,13 @@ import { unknownReference } from '../common/validation.js';
 import { actingAt, withinReach } from '../common/venue-boundary.js';
 import type { Gallery } from './models/gallery.model.js';
 
-export const SETTINGS_SORT_KEYS = ['name', 'createdAt'] as const;
-
 /** `?page&pageSize&q&sort` of every Settings list; q looks in the name. */
 export class ListSettingsQuery extends PageQuery {
   @SearchField()
   q?: string;
 
-  @SortField(SETTINGS_SORT_KEYS, 'name')
-  sort: string = 'name';
+  @SortField(SETTINGS_SORT)
+  sort: SettingsSort = SETTINGS_SORT.fallback;
 }
 
 /** Where a kind of record has its venue. */

@@ -2,9 +2,7 @@ import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } f
 import type { LicenceIdsView, MediaLicence, MediaMissingFilter, MediaPage, MediaView, Page, RenditionStatus } from '@mantlepiece/shared';
 import { useVenueFilter } from '../app/current-venue';
 import { api, ApiError, authorizationHeader, NETWORK_FAILURE, refreshSession } from './client';
-
-export const MEDIA_SORTS = ['-createdAt', 'createdAt', 'filename', '-filename'] as const;
-export type MediaSort = (typeof MEDIA_SORTS)[number];
+import type { MediaSort } from '@mantlepiece/shared';
 
 export interface MediaListParams {
   page: number;

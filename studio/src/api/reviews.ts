@@ -4,9 +4,7 @@ import { useVenueFilter } from '../app/current-venue';
 import { api } from './client';
 import { revisionKey } from './revisions';
 import { storyKey } from './stories';
-
-export const QUEUE_SORTS = ['submittedAt', '-submittedAt', 'storyTitle', '-storyTitle', 'blockers', '-blockers'] as const;
-export type QueueSort = (typeof QUEUE_SORTS)[number];
+import type { QueueSort } from '@mantlepiece/shared';
 
 export interface QueueParams {
   page: number;

@@ -2,9 +2,7 @@ import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tansta
 import type { Audience, Page, PanelDocJSON, PanelView, PreflightEntry, StoryDetailView, StoryPage, StoryState, StoryView } from '@mantlepiece/shared';
 import { useVenueFilter } from '../app/current-venue';
 import { api } from './client';
-
-export const STORY_SORTS = ['title', '-title', 'updatedAt', '-updatedAt', 'createdAt', '-createdAt', 'state', '-state'] as const;
-export type StorySort = (typeof STORY_SORTS)[number];
+import type { StorySort } from '@mantlepiece/shared';
 
 export interface StoryListParams {
   page: number;

@@ -1,9 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Page, Role, UserView } from '@mantlepiece/shared';
 import { api } from './client';
-
-export const USER_SORTS = ['name', '-name', 'email', '-email', 'createdAt', '-createdAt', 'lastSignInAt', '-lastSignInAt'] as const;
-export type UserSort = (typeof USER_SORTS)[number];
+import type { UserSort } from '@mantlepiece/shared';
 
 export interface UserListParams {
   page: number;

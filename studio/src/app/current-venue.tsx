@@ -2,9 +2,7 @@ import { createContext, useCallback, useContext, useMemo, useState } from 'react
 import type { Role, UserView, VenueView } from '@mantlepiece/shared';
 import { useCurrentUser } from '../api/session';
 import { useVenues } from '../api/settings';
-
-/** Every venue a person may reach, in one page: an organisation has a handful, not hundreds. */
-const ALL_VENUES = { page: 1, pageSize: 100, sort: 'name' } as const;
+import { CHOICES_BY_NAME } from '../components/lists/list-search';
 
 export interface CurrentVenue {
   /** The venues the person works at, by name; the switcher offers them when there are several. */
@@ -45,7 +43,7 @@ function grantsAt(user: UserView, venueId: number | undefined): { roles: Role[];
  */
 export function CurrentVenueProvider({ children }: { children: React.ReactNode }) {
   const user = useCurrentUser();
-  const { data } = useVenues(ALL_VENUES);
+  const { data } = useVenues(CHOICES_BY_NAME);
   const [chosen, setChosen] = useState(() => storedVenue(user.id));
 
   const venues = useMemo(() => {

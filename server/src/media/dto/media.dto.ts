@@ -1,7 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength, registerDecorator, ValidateIf } from 'class-validator';
 import { Transform } from 'class-transformer';
-import { MEDIA_MISSING_FILTERS, type MediaLicence, type MediaMissingFilter } from '@mantlepiece/shared';
+import { MEDIA_MISSING_FILTERS, MEDIA_SORT, type MediaLicence, type MediaMissingFilter, type MediaSort } from '@mantlepiece/shared';
 import { OptionalDateOnlyField } from '../../common/date-only.js';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
@@ -9,7 +9,6 @@ import { Omittable, QueryInt, QueryRowId } from '../../common/validation.js';
 import { canonicalLocale } from '../../common/locale-tag.js';
 import { SPDX_IDS } from '../licence-ids.js';
 
-export const MEDIA_SORT_KEYS = ['createdAt', 'filename', 'bytes', 'licenceExpiresOn'] as const;
 const MAX_ALT_LENGTH = 1000;
 
 /** The form fields beside an upload's files. */
@@ -39,8 +38,8 @@ export class ListMediaQuery extends PageQuery {
   @QueryRowId()
   venueId?: number;
 
-  @SortField(MEDIA_SORT_KEYS, '-createdAt')
-  sort: string = '-createdAt';
+  @SortField(MEDIA_SORT)
+  sort: MediaSort = MEDIA_SORT.fallback;
 }
 
 /** Why a licence value is refused, or null when it is one of the two shapes of MediaLicence. */

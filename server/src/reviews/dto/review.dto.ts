@@ -1,11 +1,9 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
-import { VERDICTS, type Verdict } from '@mantlepiece/shared';
+import { QUEUE_SORT, VERDICTS, type QueueSort, type Verdict } from '@mantlepiece/shared';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
 import { QueryRowId } from '../../common/validation.js';
-
-export const QUEUE_SORT_KEYS = ['submittedAt', 'storyTitle', 'blockers'] as const;
 
 export class RecordVerdictDto {
   @ApiProperty({ enum: VERDICTS })
@@ -29,6 +27,6 @@ export class ReviewQueueQuery extends PageQuery {
   @QueryRowId()
   venueId?: number;
 
-  @SortField(QUEUE_SORT_KEYS, 'submittedAt')
-  sort: string = 'submittedAt';
+  @SortField(QUEUE_SORT)
+  sort: QueueSort = QUEUE_SORT.fallback;
 }

@@ -2,13 +2,11 @@ import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
-import { AUDIENCES, STORY_STATES, type Audience, type StoryState } from '@mantlepiece/shared';
+import { AUDIENCES, STORY_SORT, STORY_STATES, type Audience, type StorySort, type StoryState } from '@mantlepiece/shared';
 import { SearchField, SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
 import { IsRowId, Omittable, PatchType, QueryRowId } from '../../common/validation.js';
 import { LocaleTagField } from '../../common/locale-tag.js';
-
-export const STORY_SORT_KEYS = ['title', 'updatedAt', 'createdAt', 'state'] as const;
 
 const TitleField = () =>
   applyDecorators(
@@ -74,6 +72,6 @@ export class ListStoriesQuery extends PageQuery {
   @QueryRowId()
   venueId?: number;
 
-  @SortField(STORY_SORT_KEYS, '-updatedAt')
-  sort: string = '-updatedAt';
+  @SortField(STORY_SORT)
+  sort: StorySort = STORY_SORT.fallback;
 }

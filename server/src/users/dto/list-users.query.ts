@@ -1,11 +1,9 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
-import { ROLES, type Role } from '@mantlepiece/shared';
+import { ROLES, USER_SORT, type Role, type UserSort } from '@mantlepiece/shared';
+import { SortField } from '../../common/list-query.js';
 import { PageQuery } from '../../common/page.js';
 import { QueryRowId } from '../../common/validation.js';
-
-export const USER_SORT_KEYS = ['name', 'email', 'createdAt', 'lastSignInAt'] as const;
-export const USER_SORTS = USER_SORT_KEYS.flatMap((key) => [key, `-${key}`]);
 
 export class ListUsersQuery extends PageQuery {
   @ApiPropertyOptional({ description: 'Part of a name or an e-mail address' })
@@ -29,8 +27,6 @@ export class ListUsersQuery extends PageQuery {
   @IsIn(['true', 'false'])
   active?: 'true' | 'false';
 
-  @ApiPropertyOptional({ enum: USER_SORTS, default: 'name' })
-  @IsOptional()
-  @IsIn(USER_SORTS)
-  sort: string = 'name';
+  @SortField(USER_SORT)
+  sort: UserSort = USER_SORT.fallback;
 }

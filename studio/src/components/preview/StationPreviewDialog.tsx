@@ -7,6 +7,7 @@ import { PanelFrame, PanelView, type ResolveMedia } from '@mantlepiece/shared/re
 import { useTranslation } from 'react-i18next';
 import { useSettingsList } from '../../api/settings';
 import { useCurrentVenue } from '../../app/current-venue';
+import { CHOICES_BY_NAME } from '../lists/list-search';
 import { previewScreens, screenKey, zoomToFit, type PreviewScreen } from './preview-screens';
 
 const STAGE_COLOUR = '#23282d';
@@ -25,7 +26,7 @@ const useStyles = makeStyles({
 /** The current venue's stations, for their screen sizes (a venue has a handful, well under a page). */
 function useVenueStations() {
   const { venue } = useCurrentVenue();
-  return useSettingsList('stations', { page: 1, pageSize: 100, ...(venue ? { venueId: venue.id } : {}) });
+  return useSettingsList('stations', { ...CHOICES_BY_NAME, ...(venue ? { venueId: venue.id } : {}) });
 }
 
 /** The viewport's inner size, followed as the window is resized. */

@@ -2,12 +2,11 @@ import { Field, Select } from '@fluentui/react-components';
 import type { GalleryView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useGalleries } from '../../api/settings';
-
-const ALL_GALLERIES = { page: 1, pageSize: 100, sort: 'name' };
+import { CHOICES_BY_NAME } from '../lists/list-search';
 
 /** Every gallery; a venue has a handful, so one page holds them all. */
 export function useAllGalleries() {
-  const galleries = useGalleries(ALL_GALLERIES);
+  const galleries = useGalleries(CHOICES_BY_NAME);
   const items: GalleryView[] = galleries.data?.items ?? [];
   return { ...galleries, items, nameOf: (id: number) => items.find((gallery) => gallery.id === id)?.name ?? `#${id}` };
 }

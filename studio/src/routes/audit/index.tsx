@@ -15,6 +15,7 @@ import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
 import { saveFile } from '../../components/save-file';
 import { auditFileName, readAuditFilter, readAuditParams } from './list-params';
+import { CHOICES_BY_NAME } from '../../components/lists/list-search';
 
 const useStyles = makeStyles({
   // Labels line up even though one field carries a hint underneath.
@@ -29,9 +30,6 @@ const useStyles = makeStyles({
   target: { width: '9rem' },
   muted: { color: tokens.colorNeutralForeground3 },
 });
-
-/** People to filter by: the first hundred by name is every account a venue's staff has. */
-const ACTOR_CHOICES = { page: 1, pageSize: 100, sort: 'name' } as const;
 
 /** Past this a value (a content hash, a long note) is cut, whole on hover and in the CSV. */
 const DETAIL_LENGTH = 40;
@@ -101,7 +99,7 @@ export function AuditPage() {
   const { search, query: action, setQuery: setAction, change, clear } = useListSearch('action');
   const filter = readAuditFilter(search);
   const log = useAuditLog(readAuditParams(search));
-  const people = useUsers(ACTOR_CHOICES);
+  const people = useUsers(CHOICES_BY_NAME);
   const download = useDownloadAuditCsv();
   const personName = (id: string) => people.data?.items.find((person) => String(person.id) === id)?.name;
 

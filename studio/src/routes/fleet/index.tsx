@@ -6,7 +6,7 @@ import { useFleet } from '../../api/fleet';
 import { useGalleries } from '../../api/settings';
 import { EmptyState } from '../../components/EmptyState';
 import { ListStates } from '../../components/lists/ListStates';
-import { withSearchChanges } from '../../components/lists/list-search';
+import { CHOICES_BY_NAME, withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
 import { PageHeader } from '../../components/PageHeader';
 import { FleetTable } from './FleetTable';
@@ -16,9 +16,6 @@ const useStyles = makeStyles({
   toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
   updated: { color: tokens.colorNeutralForeground3, marginLeft: 'auto' },
 });
-
-/** Galleries to filter by: a venue network has tens, not hundreds. */
-const GALLERY_CHOICES = { page: 1, pageSize: 100, sort: 'name' } as const;
 
 /** "5 minutes", in the studio language, for the offline threshold. */
 const silenceText = (seconds: number, language: string) =>
@@ -30,7 +27,7 @@ export function FleetPage() {
   const [search, setSearch] = useSearchParams();
   const params = readFleetParams(search);
   const fleet = useFleet(params);
-  const galleries = useGalleries(GALLERY_CHOICES);
+  const galleries = useGalleries(CHOICES_BY_NAME);
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
   // States are the server's; "12 seconds ago" is measured from when the list arrived.
   const now = new Date(fleet.dataUpdatedAt || Date.now());

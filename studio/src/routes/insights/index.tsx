@@ -8,7 +8,7 @@ import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
 import { InsightsFigures } from '../../components/insights/InsightsFigures';
-import { withSearchChanges } from '../../components/lists/list-search';
+import { CHOICES_BY_NAME, withSearchChanges } from '../../components/lists/list-search';
 import { PageHeader } from '../../components/PageHeader';
 import { saveFile } from '../../components/save-file';
 import { insightsFileName, readInsightsFilter } from './range';
@@ -17,16 +17,14 @@ const useStyles = makeStyles({
   toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },
 });
 
-const GALLERY_CHOICES = { page: 1, pageSize: 100, sort: 'name' } as const;
-
 export function InsightsPage() {
   const { t } = useTranslation();
   const styles = useStyles();
   const [search, setSearch] = useSearchParams();
-  const galleries = useGalleries(GALLERY_CHOICES);
+  const galleries = useGalleries(CHOICES_BY_NAME);
   const filter = readInsightsFilter(search, galleries.data?.items[0]?.id);
   const insights = useInsights(filter);
-  // The days on show: those chosen, else those the server counted (the venue's last 30).
+  // The days on show: those chosen, else those the server counted (the venue's last INSIGHTS_DEFAULT_DAYS).
   const shown = filter && insights.data?.galleryId === filter.galleryId
     ? { ...filter, from: filter.from ?? insights.data.from, to: filter.to ?? insights.data.to }
     : null;

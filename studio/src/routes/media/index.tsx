@@ -1,5 +1,6 @@
 import { Button, Field, makeStyles, SearchBox, Select, tokens, ToggleButton } from '@fluentui/react-components';
 import { GridRegular, ImageMultipleRegular, TableRegular } from '@fluentui/react-icons';
+import { MEDIA_SORT } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useMediaList } from '../../api/media';
 import { EmptyState } from '../../components/EmptyState';
@@ -63,7 +64,7 @@ export function MediaPage() {
         {(page) => (
           <>
             {view === 'table' ? (
-              <MediaTable assets={page.items} sort={params.sort ?? '-createdAt'} onSort={(sort) => change({ sort, view: 'table' })} busy={media.isFetching} />
+              <MediaTable assets={page.items} sort={params.sort ?? MEDIA_SORT.fallback} onSort={(sort) => change({ sort, view: 'table' })} busy={media.isFetching} />
             ) : (
               <MediaGrid assets={page.items} />
             )}

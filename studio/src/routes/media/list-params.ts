@@ -1,6 +1,6 @@
-import { MEDIA_MISSING_FILTERS } from '@mantlepiece/shared';
-import { MEDIA_SORTS, type MediaListParams } from '../../api/media';
-import { oneOf, pageFrom } from '../../components/lists/list-search';
+import { MEDIA_MISSING_FILTERS, MEDIA_SORT } from '@mantlepiece/shared';
+import type { MediaListParams } from '../../api/media';
+import { oneOf, pageFrom, sortFrom } from '../../components/lists/list-search';
 
 export const PAGE_SIZE = 24;
 
@@ -18,7 +18,7 @@ export function readMediaListParams(search: URLSearchParams): MediaListParams & 
     q: search.get('q')?.trim() || undefined,
     missing: filter === 'missing-alt' ? MEDIA_MISSING_FILTERS[0] : filter === 'missing-credit' ? MEDIA_MISSING_FILTERS[1] : undefined,
     expiringWithinDays: filter === 'expiring' ? EXPIRING_WITHIN_DAYS : undefined,
-    sort: oneOf(search.get('sort'), MEDIA_SORTS) ?? '-createdAt',
+    sort: sortFrom(search, MEDIA_SORT),
     view: search.get('view') === 'table' ? 'table' : 'grid',
   };
 }

@@ -1,9 +1,8 @@
 import {
   Badge, Button, makeStyles, Table, TableBody, TableCell, TableCellLayout, TableHeader, TableHeaderCell, TableRow, Text, tokens,
 } from '@fluentui/react-components';
-import type { UserView } from '@mantlepiece/shared';
+import type { UserSort, UserView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import type { UserSort } from '../../api/users';
 import { useDateFormat } from '../../components/formatting';
 import { useLanguageName } from '../../components/translation/language-name';
 

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button, Field, makeStyles, SearchBox, Select, tokens } from '@fluentui/react-components';
 import { PersonAddRegular, PeopleSearchRegular } from '@fluentui/react-icons';
-import { ROLES, type UserView } from '@mantlepiece/shared';
+import { ROLES, USER_SORT, type UserView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useCurrentUser } from '../../api/session';
 import { useUsers, type SentInvitation } from '../../api/users';
@@ -95,7 +95,7 @@ export function PeoplePage() {
           <>
             <PeopleTable
               people={page.items}
-              sort={params.sort ?? 'name'}
+              sort={params.sort ?? USER_SORT.fallback}
               onSort={(sort) => change({ sort })}
               currentUserId={me.id}
               venueName={venueName}

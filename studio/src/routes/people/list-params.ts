@@ -1,6 +1,6 @@
-import { isRole } from '@mantlepiece/shared';
-import { USER_SORTS, type UserListParams } from '../../api/users';
-import { oneOf, pageFrom } from '../../components/lists/list-search';
+import { isRole, USER_SORT } from '@mantlepiece/shared';
+import type { UserListParams } from '../../api/users';
+import { pageFrom, sortFrom } from '../../components/lists/list-search';
 
 export const PAGE_SIZE = 25;
 
@@ -14,6 +14,6 @@ export function readListParams(search: URLSearchParams): UserListParams {
     q: search.get('q')?.trim() || undefined,
     role: isRole(role) ? role : undefined,
     active: active === 'true' ? true : active === 'false' ? false : undefined,
-    sort: oneOf(search.get('sort'), USER_SORTS) ?? 'name',
+    sort: sortFrom(search, USER_SORT),
   };
 }

@@ -1,7 +1,6 @@
 import { Badge, makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
 import { useTranslation } from 'react-i18next';
-import type { ReviewQueueItem } from '@mantlepiece/shared';
-import type { QueueSort } from '../../api/reviews';
+import type { QueueSort, ReviewQueueItem } from '@mantlepiece/shared';
 import { useDateFormat } from '../../components/formatting';
 import { TextLink } from '../../components/links';
 import { sortableColumn } from '../../components/lists/list-search';

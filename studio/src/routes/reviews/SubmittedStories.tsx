@@ -1,11 +1,11 @@
 import { Field, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { ClipboardTaskListLtrRegular } from '@fluentui/react-icons';
-import type { StoryState } from '@mantlepiece/shared';
+import { STORY_SORT, type StoryState } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useSearchParams } from 'react-router-dom';
 import { useStories, type StoryListParams } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
-import { oneOf, pageFrom, withSearchChanges } from '../../components/lists/list-search';
+import { oneOf, pageFrom, sortFrom, withSearchChanges } from '../../components/lists/list-search';
 import { StoryList } from '../stories/StoryList';
 import { PAGE_SIZE } from './list-params';
 
@@ -26,7 +26,7 @@ export function SubmittedStories() {
   const styles = useStyles();
   const [search, setSearch] = useSearchParams();
   const state = oneOf(search.get('state'), FOLLOWED_STATES) ?? 'in_review';
-  const params: StoryListParams = { page: pageFrom(search), pageSize: PAGE_SIZE, state, sort: (oneOf(search.get('sort'), ['updatedAt', '-updatedAt', 'title', '-title'] as const) ?? '-updatedAt') };
+  const params: StoryListParams = { page: pageFrom(search), pageSize: PAGE_SIZE, state, sort: sortFrom(search, STORY_SORT) };
   const stories = useStories(params);
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
   return (
@@ -40,7 +40,7 @@ export function SubmittedStories() {
       </div>
       <StoryList
         stories={stories}
-        sort={params.sort ?? '-updatedAt'}
+        sort={params.sort ?? STORY_SORT.fallback}
         onChange={change}
         empty={<EmptyState icon={<ClipboardTaskListLtrRegular />} title={t('reviews.emptyTitleCurator')}>{t('reviews.emptyBodyCurator')}</EmptyState>}
       />

@@ -1,5 +1,6 @@
 import { Button, Field, makeStyles, SearchBox, tokens } from '@fluentui/react-components';
 import { ClipboardTaskListLtrRegular } from '@fluentui/react-icons';
+import { QUEUE_SORT } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useReviewQueue } from '../../api/reviews';
 import { useStories } from '../../api/stories';
@@ -8,7 +9,7 @@ import { ListStates } from '../../components/lists/ListStates';
 import { Pager } from '../../components/lists/Pager';
 import { useListSearch } from '../../components/lists/use-list-search';
 import { PageHeader } from '../../components/PageHeader';
-import { DEFAULT_QUEUE_SORT, readQueueParams } from './list-params';
+import { readQueueParams } from './list-params';
 import { ReviewQueueTable } from './ReviewQueueTable';
 import { SubmittedStories } from './SubmittedStories';
 
@@ -73,7 +74,7 @@ function ReviewQueue() {
       >
         {(page) => (
           <>
-            <ReviewQueueTable items={page.items} sort={params.sort ?? DEFAULT_QUEUE_SORT} onSort={(sort) => change({ sort })} busy={queue.isFetching} />
+            <ReviewQueueTable items={page.items} sort={params.sort ?? QUEUE_SORT.fallback} onSort={(sort) => change({ sort })} busy={queue.isFetching} />
             <Pager page={page} label={t('reviews.pagination')} onPage={(next) => change({ page: String(next) })} />
           </>
         )}

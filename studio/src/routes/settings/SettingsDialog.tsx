@@ -10,12 +10,11 @@ import { TimeZonePicker } from '../../components/forms/TimeZonePicker';
 import { LanguagePicker } from '../../components/forms/LanguagePicker';
 import { hasProblems, parseLocales } from '../../components/forms/validation';
 import { SETTINGS_FORMS, type SettingsInput, type SettingsValues } from './settings-forms';
+import { CHOICES_BY_NAME } from '../../components/lists/list-search';
 
 const useStyles = makeStyles({
   unit: { color: tokens.colorNeutralForeground3 },
 });
-
-const ALL = { page: 1, pageSize: 100, sort: 'name' };
 
 /** Create or change one venue, gallery, station or exhibit; the server's answer lands by its field. */
 export function SettingsDialog<C extends SettingsCollection>({ collection, editing, onClose }: { collection: C; editing: SettingsView<C> | null; onClose: () => void }) {
@@ -23,8 +22,8 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
   const styles = useStyles();
   const form = SETTINGS_FORMS[collection];
   const save = useSaveSetting(collection);
-  const venues = useVenues(ALL);
-  const galleries = useGalleries(ALL);
+  const venues = useVenues(CHOICES_BY_NAME);
+  const galleries = useGalleries(CHOICES_BY_NAME);
   const [values, setValues] = useState<SettingsValues>(() => (editing ? form.valuesOf(editing) : form.empty));
   const [problems, setProblems] = useState<Record<string, string | undefined>>({});
 

@@ -12,7 +12,7 @@ import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
 import { describeError } from '../../components/forms/describe-error';
 import { ListStates } from '../../components/lists/ListStates';
-import { sortableColumn } from '../../components/lists/list-search';
+import { CHOICES_BY_NAME, sortableColumn } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
 import { useLanguageName } from '../../components/translation/language-name';
 import { SettingsDialog } from './SettingsDialog';
@@ -26,7 +26,6 @@ const useStyles = makeStyles({
 });
 
 const PAGE_SIZE = 25;
-const ALL = { page: 1, pageSize: 100, sort: 'name' };
 
 interface Column<V> {
   key: string;
@@ -35,8 +34,8 @@ interface Column<V> {
 }
 
 function useNames(kind: 'venues' | 'galleries') {
-  const venues = useVenues(ALL);
-  const galleries = useGalleries(ALL);
+  const venues = useVenues(CHOICES_BY_NAME);
+  const galleries = useGalleries(CHOICES_BY_NAME);
   const items: { id: number; name: string }[] = (kind === 'venues' ? venues.data?.items : galleries.data?.items) ?? [];
   return { items, name: (id: number) => items.find((item) => item.id === id)?.name ?? `#${id}` };
 }

@@ -1,7 +1,6 @@
 import { Badge, makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
-import type { StoryView } from '@mantlepiece/shared';
+import type { StorySort, StoryView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import type { StorySort } from '../../api/stories';
 import { useDateFormat } from '../../components/formatting';
 import { TextLink } from '../../components/links';
 import { sortableColumn } from '../../components/lists/list-search';

@@ -3,6 +3,7 @@ import { AUDIENCES, type Audience } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useExhibits, useVenues } from '../../api/settings';
 import { LanguagePicker } from '../../components/forms/LanguagePicker';
+import { CHOICES_BY_NAME } from '../../components/lists/list-search';
 import type { StoryField, StoryValues } from './story-fields';
 
 const useStyles = makeStyles({
@@ -11,7 +12,7 @@ const useStyles = makeStyles({
 
 /** Exhibits to choose from; a venue has a handful, so one page of them is all of them. */
 export function useExhibitChoices() {
-  return useExhibits({ page: 1, pageSize: 100, sort: 'name' });
+  return useExhibits(CHOICES_BY_NAME);
 }
 
 /** Title, exhibit, audience and source locale: the create dialog and the story header both use these. */
@@ -25,7 +26,7 @@ export function StoryFieldsForm({ values, onChange, messages, layout = 'stack', 
   const { t } = useTranslation();
   const styles = useStyles();
   const exhibits = useExhibitChoices();
-  const venues = useVenues({ page: 1, pageSize: 100, sort: 'name' });
+  const venues = useVenues(CHOICES_BY_NAME);
   const venueLanguages = venues.data?.items.flatMap((venue) => [venue.sourceLocale, ...venue.targetLocales]);
   const fields = (
     <>

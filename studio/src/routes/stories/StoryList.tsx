@@ -1,8 +1,7 @@
 import type { ReactNode } from 'react';
-import type { Page, StoryView } from '@mantlepiece/shared';
+import type { Page, StorySort, StoryView } from '@mantlepiece/shared';
 import type { UseQueryResult } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
-import type { StorySort } from '../../api/stories';
 import { ListStates } from '../../components/lists/ListStates';
 import { Pager } from '../../components/lists/Pager';
 import { StoriesTable } from './StoriesTable';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button, Field, makeStyles, SearchBox, Select, tokens } from '@fluentui/react-components';
 import { AddRegular, BookOpenRegular } from '@fluentui/react-icons';
-import { AUDIENCES, STORY_STATES } from '@mantlepiece/shared';
+import { AUDIENCES, STORY_SORT, STORY_STATES } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate } from 'react-router-dom';
 import { useStories } from '../../api/stories';
@@ -62,7 +62,7 @@ export function StoriesPage() {
 
       <StoryList
         stories={stories}
-        sort={params.sort ?? '-updatedAt'}
+        sort={params.sort ?? STORY_SORT.fallback}
         onChange={change}
         empty={
           filtered ? (

@@ -1,6 +1,6 @@
-import { AUDIENCES, STORY_STATES } from '@mantlepiece/shared';
-import { STORY_SORTS, type StoryListParams } from '../../api/stories';
-import { oneOf, pageFrom, positiveId } from '../../components/lists/list-search';
+import { AUDIENCES, STORY_SORT, STORY_STATES } from '@mantlepiece/shared';
+import type { StoryListParams } from '../../api/stories';
+import { oneOf, pageFrom, positiveId, sortFrom } from '../../components/lists/list-search';
 
 export const PAGE_SIZE = 25;
 
@@ -12,6 +12,6 @@ export function readStoryListParams(search: URLSearchParams): StoryListParams {
     state: oneOf(search.get('state'), STORY_STATES),
     exhibitId: positiveId(search.get('exhibitId')),
     audience: oneOf(search.get('audience'), AUDIENCES),
-    sort: oneOf(search.get('sort'), STORY_SORTS) ?? '-updatedAt',
+    sort: sortFrom(search, STORY_SORT),
   };
 }

@@ -223,7 +223,7 @@ export const authoringAr: Translated<typeof authoringEn> = {
     view: 'طريقة العرض',
     grid: 'شبكة',
     table: 'جدول',
-    columns: { image: 'الصورة', filename: 'الملف', size: 'الحجم', credit: 'الإسناد', licence: 'الترخيص', status: 'ينقصها', added: 'أُضيفت' },
+    columns: { image: 'الصورة', filename: 'الملف', size: 'الحجم', credit: 'الإسناد', licence: 'الترخيص', licenceEnds: 'ينتهي الترخيص', status: 'ينقصها', added: 'أُضيفت' },
     preparation: {
       preparing: 'جارٍ التحضير…',
       preparingBody: 'يجري إنشاء نسخ الشاشة (اكتمل {{percent}}). ينتظر الإصدار الذي يعرض هذه الصورة حتى تجهز.',

@@ -212,7 +212,7 @@ export const authoringEn = {
     view: 'View',
     grid: 'Grid',
     table: 'Table',
-    columns: { image: 'Image', filename: 'File', size: 'Size', credit: 'Credit', licence: 'Licence', status: 'Needs', added: 'Added' },
+    columns: { image: 'Image', filename: 'File', size: 'Size', credit: 'Credit', licence: 'Licence', licenceEnds: 'Licence ends', status: 'Needs', added: 'Added' },
     preparation: {
       preparing: 'Preparing…',
       preparingBody: 'Making the screen renditions ({{percent}} done). A release that shows this image waits until they are ready.',

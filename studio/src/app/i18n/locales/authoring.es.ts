@@ -215,7 +215,7 @@ export const authoringEs: Translated<typeof authoringEn> = {
     view: 'Vista',
     grid: 'Cuadrícula',
     table: 'Tabla',
-    columns: { image: 'Imagen', filename: 'Archivo', size: 'Tamaño', credit: 'Crédito', licence: 'Licencia', status: 'Le falta', added: 'Añadida' },
+    columns: { image: 'Imagen', filename: 'Archivo', size: 'Tamaño', credit: 'Crédito', licence: 'Licencia', licenceEnds: 'Fin de licencia', status: 'Le falta', added: 'Añadida' },
     preparation: {
       preparing: 'Preparando…',
       preparingBody: 'Creando las versiones para pantalla ({{percent}} hecho). Una publicación que muestre esta imagen espera hasta que estén listas.',

@@ -214,7 +214,7 @@ export const authoringFr: typeof authoringEn = {
     view: 'Vue',
     grid: 'Grille',
     table: 'Tableau',
-    columns: { image: 'Image', filename: 'Fichier', size: 'Taille', credit: 'Crédit', licence: 'Licence', status: 'À compléter', added: 'Ajoutée' },
+    columns: { image: 'Image', filename: 'Fichier', size: 'Taille', credit: 'Crédit', licence: 'Licence', licenceEnds: 'Fin de licence', status: 'À compléter', added: 'Ajoutée' },
     preparation: {
       preparing: 'Préparation…',
       preparingBody: 'Création des déclinaisons pour les écrans ({{percent}} fait). Une version qui montre cette image attend qu’elles soient prêtes.',
