@@ -8,7 +8,7 @@ export { matchUiLanguage, UI_LANGUAGE_CODES, type UiLanguage } from './languages
 export { canonicalLanguageTag, lookupLanguage, lookupText } from './languages/language-tags.js';
 export { translationGaps, type Translated } from './i18n/plural-forms.js';
 export type { PanelDocJSON } from './panel/panel-json.js';
-export { directionOf, type PanelLayout } from './panel/panel-presentation.js';
+export { directionOf, layoutOfScreen, type PanelLayout } from './panel/panel-presentation.js';
 export { mediaIdsIn, widgetsIn } from './panel/panel-queries.js';
 export { sha256Hex } from './review/revision-snapshot.js';
 export { toReportText } from './fleet/report-text.js';

@@ -1,6 +1,6 @@
 import { useEffect, useLayoutEffect, useMemo, useRef, useState, type PointerEvent } from 'react';
 import type { TFunction } from 'i18next';
-import { directionOf, type PanelLayout, type ReleaseStory } from '@mantlepiece/shared/kiosk';
+import { directionOf, layoutOfScreen, type ReleaseStory } from '@mantlepiece/shared/kiosk';
 import { PanelFrame, PanelView } from '@mantlepiece/shared/kiosk';
 import type { VisitorEvent } from '../outbox/event-outbox';
 import type { PlayableRelease } from '../sync/playable-release';
@@ -43,7 +43,7 @@ export function StoryScreen({ t, release, story, settings, reducedMotion, panelI
   const shown = panel ? panelDoc(story, panel, settings.locale, manifest) : null;
   const dir = directionOf(settings.locale);
   const { stage, size } = useStageSize();
-  const layout: PanelLayout = size.height > size.width ? 'portrait' : 'landscape';
+  const layout = layoutOfScreen(size);
   const resolveMedia = useMemo(() => mediaResolver(release, shown?.locale ?? settings.locale), [release, shown?.locale, settings.locale]);
   const touches = useMemo(() => (panel && shown ? new WidgetTouches(shown.doc, { storyId: story.id, panelId: panel.id }, record) : null), [panel, shown?.doc, story.id, record]);
   const swipe = useRef<{ x: number; y: number } | null>(null);

@@ -6,6 +6,9 @@ export const PANEL_LAYOUTS = {
 
 export type PanelLayout = keyof typeof PANEL_LAYOUTS;
 
+/** The layout the kiosk gives a screen of this size: portrait when it is taller than wide, else landscape. */
+export const layoutOfScreen = ({ width, height }: { width: number; height: number }): PanelLayout => (height > width ? 'portrait' : 'landscape');
+
 export type TextDirection = 'ltr' | 'rtl';
 
 /** Languages written right to left (primary subtags, BCP 47) that a venue may plausibly offer. */

@@ -1,4 +1,4 @@
-import { PANEL_LAYOUTS, type PanelLayout, type StationView } from '@mantlepiece/shared';
+import { layoutOfScreen, PANEL_LAYOUTS, type PanelLayout, type StationView } from '@mantlepiece/shared';
 
 /** One screen size a panel can be previewed at, with the venue's stations that have it. */
 export interface PreviewScreen {
@@ -9,9 +9,6 @@ export interface PreviewScreen {
 }
 
 export const screenKey = (screen: Pick<PreviewScreen, 'width' | 'height'>) => `${screen.width}x${screen.height}`;
-
-/** The kiosk lays a panel out for a screen taller than wide as portrait, else landscape. */
-export const layoutOfScreen = ({ width, height }: Pick<PreviewScreen, 'width' | 'height'>): PanelLayout => (height > width ? 'portrait' : 'landscape');
 
 /**
  * The screens a panel can be previewed at: the two a panel is written for (1920 × 1080 and
