@@ -22,7 +22,7 @@ export const DEFAULT_UI_LANGUAGE: UiLanguage = 'en';
 export const matchUiLanguage = (candidates: readonly (string | null | undefined)[]): UiLanguage | undefined =>
   lookupLanguage(candidates, UI_LANGUAGE_CODES) as UiLanguage | undefined;
 
-/** A stored or requested language as one we speak, English when we do not. */
-export const asUiLanguage = (tag: string): UiLanguage => matchUiLanguage([tag]) ?? DEFAULT_UI_LANGUAGE;
+/** A stored or requested language as one we speak, English when we do not (or none is given). */
+export const asUiLanguage = (tag: string | null | undefined): UiLanguage => matchUiLanguage([tag]) ?? DEFAULT_UI_LANGUAGE;
 
 export const languageDirection = (code: string): 'ltr' | 'rtl' => UI_LANGUAGES.find((language) => language.code === code)?.dir ?? 'ltr';

@@ -1,4 +1,4 @@
-import { stateWordsInPlainText } from '../panel/live-phrase/state-words.js';
+import { stateWordsInPlainText } from '../panel/live-phrase/index.js';
 import { isWidgetType, widgetModule } from '../widgets/registry.js';
 import { localesSourceFirst, panelInLocale } from './inline-targets.js';
 import { panelFindings } from './panel-findings.js';

@@ -1,4 +1,4 @@
-import { danglingLivePhrases } from '../panel/live-phrase/live-phrase-reading.js';
+import { danglingLivePhrases } from '../panel/live-phrase/index.js';
 import { livePhrasesIn } from '../panel/panel-queries.js';
 import { inlineTargetFindings } from './inline-targets.js';
 import type { PreflightRule } from './types.js';

@@ -1,4 +1,4 @@
-import { danglingLiveValues } from '../panel/live-value/live-value-reading.js';
+import { danglingLiveValues } from '../panel/live-value/index.js';
 import { liveValuesIn } from '../panel/panel-queries.js';
 import { inlineTargetFindings } from './inline-targets.js';
 import type { PreflightRule } from './types.js';

@@ -1,6 +1,6 @@
-import { isLivePhraseWordings } from '../panel/live-phrase/live-phrase-wordings.js';
+import { isLivePhraseWordings } from '../panel/live-phrase/index.js';
 import { isNodeLike, LIVE_PHRASE_NODE, LIVE_VALUE_NODE, type PanelMarkJSON, type PanelNodeJSON } from '../panel/panel-json.js';
-import { DEFAULT_LIVE_VALUE_FORMAT, isLiveValueFormat } from '../panel/live-value/live-value-format.js';
+import { DEFAULT_LIVE_VALUE_FORMAT, isLiveValueFormat } from '../panel/live-value/index.js';
 import { panelSchema } from '../panel/panel-extensions.js';
 import { canonicalJson } from '../review/revision-snapshot.js';
 import type { Placeholder, UnitRun } from './translation-unit.js';

@@ -1,6 +1,6 @@
 import { Button, Menu, MenuItemRadio, MenuList, MenuPopover, MenuTrigger, type MenuProps } from '@fluentui/react-components';
 import { GlobeRegular } from '@fluentui/react-icons';
-import { UI_LANGUAGES, matchUiLanguage } from '@mantlepiece/shared';
+import { asUiLanguage, UI_LANGUAGES } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useSession, useUpdateMe } from '../api/session';
 
@@ -9,7 +9,7 @@ export function LanguageMenu({ appearance = 'subtle', className }: { appearance?
   const { t, i18n } = useTranslation();
   const { data: session } = useSession();
   const updateMe = useUpdateMe();
-  const current = matchUiLanguage([i18n.resolvedLanguage]) ?? 'en';
+  const current = asUiLanguage(i18n.resolvedLanguage);
   const currentName = UI_LANGUAGES.find((language) => language.code === current)?.name ?? current;
 
   const choose: MenuProps['onCheckedValueChange'] = (_event, { checkedItems }) => {

@@ -1,4 +1,4 @@
-import { matchUiLanguage, type UiLanguage } from '@mantlepiece/shared';
+import { asUiLanguage, type UiLanguage } from '@mantlepiece/shared';
 
 /** The workbench page's own words; the widgets' words come from @mantlepiece/shared's widget resources. */
 const english = {
@@ -72,4 +72,4 @@ const strings = {
   },
 } satisfies Record<UiLanguage, WorkbenchStrings>;
 
-export const workbenchStrings = (language: string | undefined): WorkbenchStrings => strings[matchUiLanguage([language]) ?? 'en'];
+export const workbenchStrings = (language: string | undefined): WorkbenchStrings => strings[asUiLanguage(language)];
