@@ -1,5 +1,6 @@
-// `npm test`: the same stack as `npm start` on a throwaway data folder and free ports, then every
-// workspace's suite against it, then everything stopped. Ends with "N passed, N failed".
+// `npm test`: `npm run lint` (types and ESLint, counted as one check), then the same stack as
+// `npm start` on a throwaway data folder and free ports, every workspace's suite against it, then
+// everything stopped. Ends with "N passed, N failed, N skipped".
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -10,7 +11,8 @@ import { ensureDebianPackage } from './lib/debian.mjs';
 import { ensureDependencies, root, startStack } from './lib/stack.mjs';
 
 const workspaces = ['shared', 'server', 'studio', 'kiosk', 'test'];
-// `node scripts/test.mjs server test -- browser/review` runs those workspaces, passing what follows `--` to vitest as file filters.
+// `node scripts/test.mjs server test -- browser/review` runs those workspaces, passing what follows `--` to vitest as file filters;
+// the lint check runs when no workspace is named, or when `lint` is.
 const separator = process.argv.indexOf('--');
 const only = process.argv.slice(2, separator === -1 ? undefined : separator);
 const filters = separator === -1 ? [] : process.argv.slice(separator + 1);
@@ -40,6 +42,16 @@ process.on('SIGTERM', () => finish(143));
 
 try {
   ensureDependencies();
+  if (!only.length || only.includes('lint')) {
+    phase('lint', 'npm run lint');
+    if (run('node', [path.join(root, 'scripts/lint.mjs')], { cwd: root }).status === 0) {
+      passed += 1;
+    } else {
+      failed += 1;
+      failures.push('lint (npm run lint)');
+    }
+    if (only.length === 1) await finish(failed === 0 ? 0 : 1);
+  }
   ensureDebianPackage({ command: 'chromium', pkg: 'chromium', phaseName: 'browser' });
   stack = await startStack({
     dataDir,
@@ -53,7 +65,7 @@ try {
     extraDatabases: ['mantlepiece_api'],
   });
   const env = { ...stack.env, MANTLEPIECE_URL: stack.url, CHROMIUM_PATH: '/usr/bin/chromium' };
-  for (const workspace of only.length ? only : workspaces) {
+  for (const workspace of only.length ? only.filter((name) => name !== 'lint') : workspaces) {
     phase('tests', workspace);
     const report = path.join(dataDir, `vitest-${workspace}.json`);
     const result = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...(filters.length ? ['--passWithNoTests', ...filters] : [])], {

@@ -6,8 +6,7 @@ export type Area = (typeof AREAS)[number];
 
 /**
  * Which areas each role works in, most used first. This table is the one place the studio's
- * navigation comes from (DEVELOPERS.md shows the same table); the server guards the routes behind
- * each area on its own.
+ * navigation comes from; the server guards the routes behind each area on its own.
  */
 export const AREAS_BY_ROLE: Record<Role, readonly Area[]> = {
   admin: AREAS,
