@@ -132,6 +132,22 @@ describe('building a release while a translation is missing', () => {
     const confirm = page.getByRole('alertdialog');
     await confirm.getByRole('button', { name: /^Publish Release \d+$/ }).click();
     await page.locator(`tr[data-release-id="${releaseId}"][data-state="live"]`).waitFor();
+
+    // Build again with the same choice: the release would carry just what the Live one does, and the dialog says so first.
+    dialog = await openBuildDialog();
+    await dialog.getByRole('checkbox', { name: 'Leave out of this release' }).check();
+    const same = dialog.locator(`[data-same-as-live="${release.number}"]`);
+    await same.waitFor();
+    expect(await same.textContent()).toBe(`Nothing would change`
+      + `This release would carry exactly what Release ${release.number}, Live now, carries: the same revisions, translations and files. Building it changes nothing on the gallery’s screens.`);
+    // The technician still decides: Build stays offered.
+    await expect.poll(() => build.isEnabled()).toBe(true);
+    await expectAccessible('build dialog, the same as the Live release');
+    await screenshots('release-same-as-live', async (language) => {
+      dialog = await openBuildDialog(language);
+      await dialog.getByRole('checkbox').check();
+      await dialog.locator('[data-same-as-live]').waitFor();
+    });
   });
 });
 

@@ -119,7 +119,7 @@ export function BuildReleaseDialog({ galleryId, galleryName, onBuilding, onClose
                 />
                 {preview.data.problems.length ? <ReleaseProblems title={t('releases.build.blocked')} errors={preview.data.problems} /> : null}
                 {sameAsLive ? (
-                  <MessageBar intent="warning" layout="multiline">
+                  <MessageBar intent="warning" layout="multiline" data-same-as-live={sameAsLive.number}>
                     <MessageBarBody>
                       <MessageBarTitle>{t('releases.build.sameAsLiveTitle')}</MessageBarTitle>
                       {t('releases.build.sameAsLive', { name: t('releases.name', { number: sameAsLive.number }) })}
