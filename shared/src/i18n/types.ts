@@ -94,6 +94,36 @@ export interface WidgetStrings {
     ratio: string;
     describe: string;
   };
+  /**
+   * The name of each setting a curator sets in the studio, by widget and param path ("physical.viscosityPas"),
+   * with the symbol the model card uses; units stay out (the form shows the schema's own beside the field).
+   */
+  settings: {
+    'slope-force': Readonly<Record<'massKg' | 'angleDeg' | 'staticFriction' | 'kineticFriction' | 'gravity', string>>;
+    'convection-cell': Readonly<Record<
+      | 'rayleigh' | 'physical' | 'physical.densityKgM3' | 'physical.gravityMs2' | 'physical.expansivityPerK' | 'physical.deltaTK'
+      | 'physical.depthM' | 'physical.diffusivityM2s' | 'physical.viscosityPas' | 'aspectRatio' | 'nx' | 'nz' | 'playbackSpeed'
+      | 'colourRamp' | 'overlay' | 'units',
+      string
+    >>;
+    'sea-floor-depth': Readonly<Record<
+      'ageMyr' | 'model' | 'mantleDensityKgM3' | 'waterDensityKgM3' | 'expansivityPerK' | 'deltaTK' | 'diffusivityM2s' | 'ridgeDepthM' | 'conductivityWmK',
+      string
+    >>;
+    'plate-forces': Readonly<Record<
+      'ageMyr' | 'slabLengthKm' | 'slabDipDeg' | 'mantleDensityKgM3' | 'waterDensityKgM3' | 'expansivityPerK' | 'deltaTK' | 'diffusivityM2s' | 'gravityMs2',
+      string
+    >>;
+  };
+  /** The name of each choice a setting offers, by widget, param and value. */
+  choices: {
+    'convection-cell': {
+      colourRamp: Readonly<Record<'mantle-heat' | 'deep-sea' | 'basalt-greys', string>>;
+      overlay: Readonly<Record<'streamlines' | 'particles' | 'arrows' | 'none', string>>;
+      units: Readonly<Record<'non-dimensional' | 'physical', string>>;
+    };
+    'sea-floor-depth': { model: Readonly<Record<'half-space' | 'plate', string>> };
+  };
   /** A widget's state as a live value shows it inside a sentence ("the block {{state}}"), so in lower case. */
   states: Readonly<Record<WidgetState, string>>;
 }

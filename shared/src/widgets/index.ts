@@ -11,3 +11,4 @@ export * from './sources.js';
 export * from './cooling-lithosphere/half-space.js';
 export * from './cooling-lithosphere/properties.js';
 export * from './visitor-settings.js';
+export * from './setting-names.js';

@@ -44,4 +44,13 @@ describe('the widget params form', () => {
     expect(describedText(viscosity)).toMatch(/common practice, no source/);
     expect(describedText(screen.getByRole('textbox', { name: /^Density/ }))).toMatch(/Turcotte and Schubert, Geodynamics/);
   });
+  it('names each setting and choice in the studio’s language, from the shared widget strings', async () => {
+    await renderInStudio(<Harness widgetType="convection-cell" start={{ ...convectionCell.defaults }} />, { language: 'fr' });
+    // The French words of shared/src/i18n/fr.ts; the schema's English titles must not show.
+    expect(screen.getByRole('textbox', { name: /^Nombre de Rayleigh Ra/ })).toBeTruthy();
+    expect(screen.getByRole('group', { name: /^Propriétés physiques/ })).toBeTruthy();
+    const overlay = screen.getByRole('combobox', { name: /^Surcouche/ });
+    expect([...overlay.querySelectorAll('option')].map((option) => option.textContent)).toEqual(['Lignes de courant', 'Particules à la dérive', 'Flèches d’écoulement', 'Aucune surcouche']);
+    expect(screen.queryByText('Rayleigh number Ra')).toBeNull();
+  });
 });

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Field, Input, makeStyles, MessageBar, MessageBarBody, Select, Switch, tokens } from '@fluentui/react-components';
-import { widgetJsonSchema, widgetModule, type WidgetType } from '@mantlepiece/shared';
+import { settingChoiceName, settingName, widgetJsonSchema, widgetModule, type WidgetType } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { issuesByField, parseFieldText, valueAt, widgetFormGroups, withValueAt, type WidgetFormField } from './widget-form';
 
@@ -21,8 +21,12 @@ const rangeHint = (field: WidgetFormField) =>
  * come from the same `validate` the server runs, each under the field it names.
  */
 export function WidgetParamsForm({ widgetType, params, onChange }: { widgetType: WidgetType; params: Params; onChange: (params: Params) => void }) {
-  const { t } = useTranslation();
+  const { t, i18n } = useTranslation();
+  const language = i18n.resolvedLanguage ?? 'en';
   const styles = useStyles();
+  // Setting names and choices in the studio's language; the schema's English title for anything the widget strings lack.
+  const nameOf = (path: string[], title: string) => settingName(widgetType, path, language) ?? title;
+  const choiceName = (path: string[], choice: string | number) => settingChoiceName(widgetType, path, choice, language) ?? String(choice);
   // What is being typed, kept as text so "0." or "1e" survive until they become numbers.
   const [texts, setTexts] = useState<Record<string, string>>({});
   const module = widgetModule(widgetType);
@@ -57,11 +61,11 @@ export function WidgetParamsForm({ widgetType, params, onChange }: { widgetType:
     const source = sourceOf(field);
     const hint = message ? undefined : [rangeHint(field), source && t('editor.widget.startingValue', { source })].filter(Boolean).join(' · ');
     return (
-      <Field key={key} label={field.label} required={field.required} hint={hint || undefined} validationMessage={message}>
+      <Field key={key} label={nameOf(field.path, field.label)} required={field.required} hint={hint || undefined} validationMessage={message}>
         {field.kind === 'choice' ? (
           <Select value={shownText(field)} onChange={(_event, data) => setField(field, data.value)}>
             {field.required ? null : <option value="">{t('editor.widget.notSet')}</option>}
-            {field.choices?.map((choice) => <option key={String(choice)} value={String(choice)}>{String(choice)}</option>)}
+            {field.choices?.map((choice) => <option key={String(choice)} value={String(choice)}>{choiceName(field.path, choice)}</option>)}
           </Select>
         ) : (
           <Input
@@ -86,7 +90,7 @@ export function WidgetParamsForm({ widgetType, params, onChange }: { widgetType:
           group.fields.map(input)
         ) : (
           <fieldset key={group.path.join('.')} className={styles.group}>
-            <legend className={styles.legend}>{group.label}</legend>
+            <legend className={styles.legend}>{nameOf(group.path, group.label)}</legend>
             {group.optional ? (
               <Switch
                 label={t('editor.widget.useGroup')}

@@ -1,11 +1,12 @@
-import { isWidgetType, visitorSettingName } from '@mantlepiece/shared';
+import { isWidgetType, settingName, visitorSettingName } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useWidgetTypes } from '../../api/widgets';
 import { widgetFormGroups } from './widget-form';
 
 /**
  * "Slope angle (°)" for a param path: a setting visitors move is named as the kiosk names it, in
- * the studio's language; any other by the widget's published JSON Schema; the path itself otherwise.
+ * the studio's language; any other as the studio's widget form names it (shared `settingName`), then
+ * by the widget's published JSON Schema; the path itself otherwise.
  * The unit comes from the schema.
  */
 export function useParamLabels(): (widgetType: string, path: string[]) => string {
@@ -15,7 +16,7 @@ export function useParamLabels(): (widgetType: string, path: string[]) => string
   return (widgetType, path) => {
     const descriptor = types.data?.items.find((item) => item.type === widgetType);
     const field = descriptor ? widgetFormGroups(descriptor.jsonSchema).flatMap((group) => group.fields).find((f) => f.path.join('.') === path.join('.')) : undefined;
-    const name = (path.length === 1 ? visitorSettingName(widgetType, path[0]!, language) : undefined) ?? field?.label;
+    const name = (path.length === 1 ? visitorSettingName(widgetType, path[0]!, language) : undefined) ?? settingName(widgetType, path, language) ?? field?.label;
     if (!name) return path.join(' › ');
     return field?.unit ? `${name} (${field.unit})` : name;
   };
