@@ -1,8 +1,14 @@
 /// <reference lib="dom" />
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
-/** The running Mantlepiece that `npm test` started (or one started by hand with `npm start`). */
-export const baseUrl = (process.env.MANTLEPIECE_URL ?? 'http://127.0.0.1:4310').replace(/\/$/, '');
+/**
+ * The running Mantlepiece that `npm test` started (or one started by hand with `npm start`, named in
+ * MANTLEPIECE_URL). Without it every suite that reads this fails, rather than vanishing or testing
+ * whatever happens to answer on a default port.
+ */
+const runningServer = process.env.MANTLEPIECE_URL;
+if (!runningServer) throw new Error('MANTLEPIECE_URL is not set: run these suites through `node scripts/test.mjs test`, which starts the server they check, or set it to a running one');
+export const baseUrl = runningServer.replace(/\/$/, '');
 export const demoPassword = process.env.DEMO_PASSWORD ?? 'mantlepiece-demo';
 
 /** Debian's chromium, headless, with everything that would reach the internet switched off. */

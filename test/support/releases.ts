@@ -1,22 +1,21 @@
 import type { ReleaseView } from '@mantlepiece/shared';
+import { vi } from 'vitest';
 import type { apiAs } from './browser';
 
 type Api = Awaited<ReturnType<typeof apiAs>>;
 
 /**
  * Builds a release of the gallery as a technician and publishes it once the build job has made it
- * Ready, polling its state as the studio's Releases page does. For set-up, where expect.poll does
- * not belong; answers the release as it was when Ready.
+ * Ready, asking for its state as the studio's Releases page does (vi.waitUntil: set-up, where
+ * expect.poll does not belong). Answers the release as it was when Ready.
  */
 export async function publishedRelease(technician: Api, galleryId: number, timeoutMs = 90_000): Promise<ReleaseView> {
   const requested = await technician<ReleaseView>('POST', `/galleries/${galleryId}/releases`, {});
-  const deadline = Date.now() + timeoutMs;
-  let release = requested;
-  while (release.state !== 'ready') {
-    if (release.state === 'failed' || Date.now() > deadline) throw new Error(`Release ${release.id} of gallery ${galleryId} is ${release.state}, not ready`);
-    await new Promise((resolve) => setTimeout(resolve, 250));
-    release = await technician<ReleaseView>('GET', `/releases/${requested.id}`);
-  }
+  const release = await vi.waitUntil(async () => {
+    const current = await technician<ReleaseView>('GET', `/releases/${requested.id}`);
+    if (current.state === 'failed') throw new Error(`Release ${requested.id} of gallery ${galleryId} failed to build`);
+    return current.state === 'ready' && current;
+  }, { timeout: timeoutMs, interval: 250 });
   await technician('POST', `/releases/${release.id}/publish`);
   return release;
 }
