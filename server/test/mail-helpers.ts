@@ -28,7 +28,10 @@ export function closedPort(): Promise<number> {
 export async function capturedMailTo(recipient: string): Promise<ParsedMail[]> {
   const dir = mailDir();
   const files = fs.readdirSync(dir).filter((name) => name.endsWith('.eml') && !name.startsWith('.'));
-  const parsed = await Promise.all(files.map((name) => mailparser.simpleParser(fs.readFileSync(path.join(dir, name)))));
+  // A whole run leaves thousands of messages: only those whose envelope line names the recipient are parsed.
+  const envelopeLine = `\nx-envelope-to: ${recipient.toLowerCase()}\r\n`;
+  const raws = files.map((name) => fs.readFileSync(path.join(dir, name))).filter((raw) => `\n${raw.toString('latin1').toLowerCase()}`.includes(envelopeLine));
+  const parsed = await Promise.all(raws.map((raw) => mailparser.simpleParser(raw)));
   return parsed.filter((mail) => mail.headers.get('x-envelope-to') === recipient);
 }
 
