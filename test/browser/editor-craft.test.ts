@@ -214,6 +214,39 @@ describe('the full-size preview', () => {
     });
   });
 
+  it('starts an English panel’s words at their left in an Arabic studio, at either orientation', async () => {
+    const storyId = await storyWith('Preview in Arabic', { type: 'doc', content: [paragraph(firstLine), slope('arabic-slope')] });
+    // Where each line of the paragraph starts, against the paragraph's own box: an English line starts at its left edge.
+    const lineStartsLeft = (dialog: Locator) => dialog.locator('[data-station-preview] p', { hasText: firstLine }).first().evaluate((element) => {
+      const range = document.createRange();
+      range.selectNodeContents(element);
+      return Math.abs(range.getClientRects()[0]!.left - element.getBoundingClientRect().left) < 2;
+    });
+    await asCurator('PATCH', '/auth/me', { uiLanguage: 'ar' });
+    try {
+      await curator.reload();
+      await curator.waitForFunction(() => document.documentElement.dir === 'rtl');
+      await curator.goto(`/stories/${storyId}`);
+      await curator.locator('.ProseMirror .mp-widget-node').waitFor();
+      // The side's third tab is the preview, whatever the language.
+      await curator.getByRole('tab').nth(2).click();
+      await curator.locator('[data-preview-layout] ~ button').click();
+      const dialog = curator.getByRole('dialog');
+      await dialog.locator('[data-station-screen="1920x1080"]').waitFor();
+      expect(await dialog.locator('[data-station-preview] .mp-panel').getAttribute('dir')).toBe('ltr');
+      expect(await lineStartsLeft(dialog), 'landscape: the line starts at the paragraph’s left').toBe(true);
+      await dialog.getByRole('combobox').selectOption('1080x1920');
+      await dialog.locator('[data-station-screen="1080x1920"]').waitFor();
+      expect(await lineStartsLeft(dialog), 'portrait: the line starts at the paragraph’s left').toBe(true);
+      await expectAccessible(curator, 'full-size preview in an Arabic studio');
+    } finally {
+      await asCurator('PATCH', '/auth/me', { uiLanguage: 'en' });
+      await curator.evaluate(() => localStorage.setItem('mantlepiece.uiLanguage', 'en'));
+      await curator.reload();
+      await curator.waitForFunction(() => document.documentElement.dir === 'ltr');
+    }
+  });
+
   it('on the review page shows “This revision” at full size, where selecting words anchors a comment to them', async () => {
     const storyId = await storyWith('Review at full size', { type: 'doc', content: [paragraph(firstLine), slope('review-slope')] });
     const { revisionId } = await asCurator<{ revisionId: number }>('POST', `/stories/${storyId}/submit`, { note: 'Please check the wording.' });

@@ -25,6 +25,9 @@ export function panelRootStyle(layout: keyof typeof BODY_SIZE, width: number, he
     fontFamily: 'Lexend, system-ui, sans-serif',
     fontSize: BODY_SIZE[layout] * (largeText ? LARGE_TEXT_SCALE : 1),
     lineHeight: 1.45,
+    // The words start on their own language's side, whatever the page around aligns: a right-to-left
+    // studio hands `text-align: right` down into its dialogs, which pushed an English panel to the right.
+    textAlign: 'start',
     ['--mp-heading' as string]: colours.heading,
     ['--mp-link' as string]: colours.link,
     ['--mp-live-value' as string]: colours.liveValue,
