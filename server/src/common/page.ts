@@ -1,18 +1,22 @@
+import { applyDecorators } from '@nestjs/common';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsOptional } from 'class-validator';
 import { PAGE_SIZE, type Page } from '@mantlepiece/shared';
 import { ID_MAX, QueryInt } from './validation.js';
 
-/** `?page=&pageSize=` of every paged list. A page number is bounded like a row id, so its offset stays an exact number. */
+/** `?page=`, 1 by default. A page number is bounded like a row id, so its offset stays an exact number. */
+export const PageNumberField = () => applyDecorators(ApiPropertyOptional({ default: 1, minimum: 1, maximum: ID_MAX }), IsOptional(), QueryInt(1, ID_MAX));
+
+/** `?pageSize=` within a list's limits in shared (`PAGE_SIZE`, `SEARCH_PAGE_SIZE`). */
+export const PageSizeField = ({ fallback, max }: { fallback: number; max: number }) =>
+  applyDecorators(ApiPropertyOptional({ default: fallback, minimum: 1, maximum: max }), IsOptional(), QueryInt(1, max));
+
+/** `?page=&pageSize=` of every paged list. */
 export class PageQuery {
-  @ApiPropertyOptional({ default: 1, minimum: 1, maximum: ID_MAX })
-  @IsOptional()
-  @QueryInt(1, ID_MAX)
+  @PageNumberField()
   page: number = 1;
 
-  @ApiPropertyOptional({ default: PAGE_SIZE.fallback, minimum: 1, maximum: PAGE_SIZE.max })
-  @IsOptional()
-  @QueryInt(1, PAGE_SIZE.max)
+  @PageSizeField(PAGE_SIZE)
   pageSize: number = PAGE_SIZE.fallback;
 }
 

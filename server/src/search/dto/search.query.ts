@@ -2,7 +2,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { IsIn, IsOptional, IsString, Length } from 'class-validator';
 import { SEARCH_KINDS, SEARCH_PAGE_SIZE, SEARCH_TEXT_LENGTH, type SearchKind } from '@mantlepiece/shared';
-import { ID_MAX, QueryInt } from '../../common/validation.js';
+import { PageNumberField, PageSizeField } from '../../common/page.js';
 
 /** `GET /api/search?q=&kind=&page=&pageSize=`: bounded text, and paging per kind. */
 export class SearchQuery {
@@ -17,13 +17,9 @@ export class SearchQuery {
   @IsIn(SEARCH_KINDS)
   kind?: SearchKind;
 
-  @ApiPropertyOptional({ default: 1, minimum: 1 })
-  @IsOptional()
-  @QueryInt(1, ID_MAX)
+  @PageNumberField()
   page: number = 1;
 
-  @ApiPropertyOptional({ default: SEARCH_PAGE_SIZE.fallback, minimum: 1, maximum: SEARCH_PAGE_SIZE.max })
-  @IsOptional()
-  @QueryInt(1, SEARCH_PAGE_SIZE.max)
+  @PageSizeField(SEARCH_PAGE_SIZE)
   pageSize: number = SEARCH_PAGE_SIZE.fallback;
 }
