@@ -14,7 +14,7 @@ const POLL_MS = 250;
 export async function benchServer() {
   const demoPassword = process.env.DEMO_PASSWORD ?? 'mantlepiece-demo';
   if (process.env.MANTLEPIECE_URL) {
-    return { url: process.env.MANTLEPIECE_URL.replace(/\/$/, ''), demoPassword, started: false, stop: async () => undefined };
+    return { url: process.env.MANTLEPIECE_URL.replace(/\/$/, ''), demoPassword, started: false, env: null, stop: async () => undefined };
   }
   const dataDir = mkdtempSync(join(tmpdir(), 'mantlepiece-kiosk-bench-'));
   const stack = await startStack({ dataDir, dbPort: await freePort(), smtpPort: await freePort(), port: await freePort(), demoPassword });
@@ -22,6 +22,8 @@ export async function benchServer() {
     url: stack.url,
     demoPassword,
     started: true,
+    /** The server's environment, for a second instance on the same database and data folder. */
+    env: stack.env,
     stop: async () => {
       await stack.stop();
       rmSync(dataDir, { recursive: true, force: true });

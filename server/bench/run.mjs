@@ -1,28 +1,72 @@
 // Server benchmark (issue 15), not a timed test: `npm run bench -w server`. Every figure is a ratio
 // against a reference measured in the same run on the same machine: the kiosk manifest poll against
 // a bare node:http server answering the same bytes, the studio's list routes against /api/health.
-// Needs a server: MANTLEPIECE_URL when set, else a private stack on free ports (kiosk/bench/bench-server.mjs).
+// The machine's cores are shared by the load generator, the servers, MariaDB, the reference and
+// whatever else runs, so the figures are measured in rounds: each round measures the reference and
+// every route once, one after the other, and a ratio is the median over rounds of each round's own
+// ratio, so that a busy moment weighs on reference and route alike.
+// Needs a server: MANTLEPIECE_URL when set, else a private stack on free ports (kiosk/bench/bench-server.mjs),
+// which also gets a second instance behind nginx (scripts/lib/nginx.mjs) for the venue-network figures.
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { cpus, tmpdir } from 'node:os';
+import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
 import { benchServer, demoGallery, deviceToken } from '../../kiosk/bench/bench-server.mjs';
+import { startNginx } from '../../scripts/lib/nginx.mjs';
+import { freePort } from '../../scripts/lib/ports.mjs';
+import { startOwned, waitFor } from '../../scripts/lib/processes.mjs';
+import { root } from '../../scripts/lib/stack.mjs';
 
-/** As the issue measured them: 16 connections on loopback; each run after a warm-up of its own. */
+/** As the issue measured them: 16 connections on loopback; each figure after a warm-up of its own. */
 const CONNECTIONS = 16;
-const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
-const WARM_UP_SECONDS = 2;
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 4);
+const WARM_UP_SECONDS = 1;
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 5);
 const GOALS = { manifest: 0.5, notModified: 0.8 };
+const NGINX_KEEPALIVE = 32;
 
-async function load(url, headers = {}, expectStatus = 200) {
-  await autocannon({ url, headers, connections: CONNECTIONS, duration: WARM_UP_SECONDS });
-  const result = await autocannon({ url, headers, connections: CONNECTIONS, duration: SECONDS });
-  const expected = result.statusCodeStats[expectStatus]?.count ?? 0;
+async function measure({ url, headers = {}, status = 200 }) {
+  const request = { url, headers, connections: CONNECTIONS };
+  await autocannon({ ...request, duration: WARM_UP_SECONDS });
+  const result = await autocannon({ ...request, duration: SECONDS });
+  const expected = result.statusCodeStats[status]?.count ?? 0;
   const total = Object.values(result.statusCodeStats).reduce((sum, { count }) => sum + count, 0);
-  if (total === 0 || expected !== total) throw new Error(`${url} answered ${JSON.stringify(result.statusCodeStats)}, not only ${expectStatus}`);
+  if (total === 0 || expected !== total) throw new Error(`${url} answered ${JSON.stringify(result.statusCodeStats)}, not only ${status}`);
   return { perSecond: result.requests.average, p99Ms: result.latency.p99 };
 }
+
+const median = (values) => {
+  const sorted = [...values].sort((a, b) => a - b);
+  const middle = Math.floor(sorted.length / 2);
+  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
+};
+
+/**
+ * Measures every figure once per round, in turn; the first figure is the reference. Each figure
+ * gets its median requests/s and p99 over the rounds, and its ratio to the reference per round.
+ */
+async function inRounds(figures) {
+  const runs = figures.map(() => []);
+  for (let round = 0; round < ROUNDS; round += 1) {
+    for (const [index, figure] of figures.entries()) runs[index].push(await measure(figure));
+  }
+  const reference = runs[0];
+  return figures.map((figure, index) => {
+    const ratios = runs[index].map((run, round) => run.perSecond / reference[round].perSecond);
+    return {
+      ...figure,
+      perSecond: median(runs[index].map((run) => run.perSecond)),
+      p99Ms: median(runs[index].map((run) => run.p99Ms)),
+      ratio: median(ratios),
+      lowest: Math.min(...ratios),
+      highest: Math.max(...ratios),
+    };
+  });
+}
+
+const row = ({ what, perSecond, p99Ms, ratio, lowest, highest, goal }) =>
+  `| ${what} | ${Math.round(perSecond)} | ${p99Ms} | ${ratio.toFixed(2)} | ${lowest.toFixed(2)}–${highest.toFixed(2)} | ${goal === undefined ? '—' : `≥ ${goal} ${ratio >= goal ? 'met' : '**not met**'}`} |`;
 
 async function bareServer(body, etag) {
   const folder = mkdtempSync(join(tmpdir(), 'mantlepiece-server-bench-'));
@@ -47,51 +91,95 @@ async function bareServer(body, etag) {
   };
 }
 
-const row = (what, figure, reference, goal) =>
-  `| ${what} | ${Math.round(figure.perSecond)} | ${figure.p99Ms} | ${Math.round(reference.perSecond)} | ${(figure.perSecond / reference.perSecond).toFixed(2)} | ${goal === undefined ? '—' : `≥ ${goal} ${figure.perSecond / reference.perSecond >= goal ? 'met' : '**not met**'}`} |`;
+/**
+ * A second server instance on the first one's database and data folder, and nginx round robin over
+ * both (keeping idle connections to them open, as README's operations section advises); null
+ * against a server the bench did not start, whose settings it does not know.
+ */
+async function venueNetwork(server) {
+  if (!server.env) return null;
+  const folder = mkdtempSync(join(tmpdir(), 'mantlepiece-bench-network-'));
+  const port = await freePort();
+  const second = startOwned('server-b', process.execPath, ['server/dist/main.js'], { cwd: root, env: { ...server.env, PORT: String(port) } });
+  let nginx;
+  const stop = async () => {
+    await nginx?.stop();
+    await second.stop();
+    rmSync(folder, { recursive: true, force: true });
+  };
+  try {
+    await waitFor(async () => (await fetch(`http://127.0.0.1:${port}/api/health`)).ok, {
+      what: 'second server instance', timeoutMs: 90_000,
+      failIf: () => (second.child.exitCode !== null ? `the second instance exited: ${second.recentOutput().trim().split('\n').slice(-8).join('\n')}` : null),
+    });
+    const nginxPort = await freePort();
+    nginx = await startNginx({ dir: folder, port: nginxPort, upstreams: [Number(new URL(server.url).port), port], keepalive: NGINX_KEEPALIVE });
+    return { url: `http://127.0.0.1:${nginxPort}`, stop };
+  } catch (error) {
+    await stop();
+    throw error;
+  }
+}
 
-async function kioskPath(url, demoPassword) {
+async function kioskPath(url, network, demoPassword) {
   const { token, station } = await demoGallery(url, demoPassword);
   const device = { Authorization: `Bearer ${await deviceToken(url, token, station.id)}` };
-  const manifestUrl = `${url}/api/kiosk/manifest`;
-  const first = await fetch(manifestUrl, { headers: device });
+  const first = await fetch(`${url}/api/kiosk/manifest`, { headers: device });
   const body = Buffer.from(await first.arrayBuffer());
   const etag = first.headers.get('etag');
+  const unchanged = { ...device, 'If-None-Match': etag };
   const bare = await bareServer(body, etag);
   try {
-    const reference = await load(bare.url);
-    const bareNotModified = await load(bare.url, { 'If-None-Match': etag }, 304);
-    const manifest = await load(manifestUrl, device);
-    const notModified = await load(manifestUrl, { ...device, 'If-None-Match': etag }, 304);
-    const rows = [
-      row(`bare node:http, 200 (${body.length} bytes)`, reference, reference),
-      row('bare node:http, 304', bareNotModified, reference),
-      row('GET /api/kiosk/manifest, 200', manifest, reference, GOALS.manifest),
-      row('GET /api/kiosk/manifest, 304 (If-None-Match)', notModified, reference, GOALS.notModified),
-    ];
-    const ok = manifest.perSecond / reference.perSecond >= GOALS.manifest && notModified.perSecond / reference.perSecond >= GOALS.notModified;
-    return { title: 'Kiosk manifest poll against a bare node:http server with the same bytes', rows, ok };
+    const figures = await inRounds([
+      { what: `bare node:http, 200 (${body.length} bytes; the reference)`, url: bare.url },
+      { what: 'bare node:http, 304', url: bare.url, headers: { 'If-None-Match': etag }, status: 304 },
+      { what: 'GET /api/kiosk/manifest, 200', url: `${url}/api/kiosk/manifest`, headers: device, goal: GOALS.manifest },
+      { what: 'GET /api/kiosk/manifest, 304 (If-None-Match)', url: `${url}/api/kiosk/manifest`, headers: unchanged, status: 304, goal: GOALS.notModified },
+      ...(network ? [
+        { what: 'two instances behind nginx: GET /api/kiosk/manifest, 200', url: `${network.url}/api/kiosk/manifest`, headers: device },
+        { what: 'two instances behind nginx: GET /api/kiosk/manifest, 304', url: `${network.url}/api/kiosk/manifest`, headers: unchanged, status: 304 },
+      ] : []),
+    ]);
+    const [, bareNotModified, , notModified] = figures;
+    return {
+      title: 'Kiosk manifest poll against a bare node:http server with the same bytes',
+      figures,
+      notes: [
+        `The 304 poll against the bare server's own 304 (no body, two headers where ours carries the security headers): ${(notModified.perSecond / bareNotModified.perSecond).toFixed(2)} (medians).`,
+        ...(network ? [] : ['No venue-network figures: the bench was pointed at a server it did not start (MANTLEPIECE_URL).']),
+      ],
+      ok: figures.every((figure) => figure.goal === undefined || figure.ratio >= figure.goal),
+    };
   } finally {
     await bare.stop();
   }
 }
 
-async function studioLists(url, demoPassword) {
+async function studioLists(url, network, demoPassword) {
   const login = await fetch(`${url}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: 'admin@demo.test', password: demoPassword }) });
   if (!login.ok) throw new Error(`signing in as the demo admin answered ${login.status}`);
   const auth = { Authorization: `Bearer ${(await login.json()).accessToken}` };
-  const health = await load(`${url}/api/health`);
-  const rows = [row('GET /api/health (reference)', health, health)];
-  for (const route of ['/api/stories?page=1&pageSize=25', '/api/media?page=1&pageSize=25', '/api/galleries?page=1&pageSize=25', '/api/kiosks?page=1&pageSize=25', '/api/audit?page=1&pageSize=25']) {
-    rows.push(row(`GET ${route}`, await load(`${url}${route}`, auth), health));
-  }
-  return { title: 'Studio list routes against /api/health (the demo data, admin)', rows, ok: true };
+  const lists = ['/api/stories', '/api/media', '/api/galleries', '/api/kiosks', '/api/audit'].map((path) => `${path}?page=1&pageSize=25`);
+  const figures = await inRounds([
+    { what: 'GET /api/health (the reference)', url: `${url}/api/health` },
+    ...lists.map((route) => ({ what: `GET ${route}`, url: `${url}${route}`, headers: auth })),
+    ...(network ? [{ what: `two instances behind nginx: GET ${lists[0]}`, url: `${network.url}${lists[0]}`, headers: auth }] : []),
+  ]);
+  return { title: 'Studio list routes against /api/health (the demo data, admin)', figures, notes: [], ok: true };
 }
 
 const server = await benchServer();
 let sections;
+let load;
 try {
-  sections = [await kioskPath(server.url, server.demoPassword), await studioLists(server.url, server.demoPassword)];
+  const network = await venueNetwork(server);
+  try {
+    const before = loadavg()[0];
+    sections = [await kioskPath(server.url, network, server.demoPassword), await studioLists(server.url, network, server.demoPassword)];
+    load = [before, loadavg()[0]];
+  } finally {
+    await network?.stop();
+  }
 } finally {
   await server.stop();
 }
@@ -99,16 +187,21 @@ try {
 const report = [
   '# Server bench',
   '',
-  `${CONNECTIONS} connections on loopback, ${SECONDS} s per figure after ${WARM_UP_SECONDS} s of warm-up, load from autocannon in the bench's own process;`,
-  `${cpus().length} cores shared by the load generator, the server, MariaDB and the reference. Requests per second are autocannon's mean.`,
+  `${CONNECTIONS} connections on loopback, load from autocannon in the bench's own process, ${ROUNDS} rounds: in each round every figure of a table`,
+  `is measured once, in table order, for ${SECONDS} s after ${WARM_UP_SECONDS} s of warm-up. Requests/s and p99 are medians over the rounds (autocannon's`,
+  'mean and p99 of each round); the ratio is the median of the rounds\' own ratios to the reference measured in the same round, and the',
+  'range the lowest and highest of those. The venue-network rows are two server instances behind nginx (Debian\'s package, round robin,',
+  `keep-alive to the instances) on the same MariaDB. ${cpus().length} cores shared by the load generator, the servers, nginx, MariaDB, the reference`,
+  `and whatever else ran: one-minute load average ${load[0].toFixed(1)} at the start, ${load[1].toFixed(1)} at the end.`,
   '',
   ...sections.flatMap((section) => [
     `## ${section.title}`,
     '',
-    '| what | requests/s | p99 ms | reference requests/s | ratio | goal |',
+    '| what | requests/s | p99 ms | ratio | ratio range | goal |',
     '| --- | ---: | ---: | ---: | ---: | --- |',
-    ...section.rows,
+    ...section.figures.map(row),
     '',
+    ...section.notes.flatMap((note) => [note, '']),
   ]),
 ].join('\n');
 writeFileSync(new URL('./REPORT.md', import.meta.url), report);

@@ -8,7 +8,7 @@ import { LivePhraseNodeView } from './LivePhraseNodeView.js';
 import { LiveValueNodeView } from './LiveValueNodeView.js';
 import type { PanelEditorOptions } from './panel-editor-options.js';
 import { PanelImageNodeView } from './PanelImageNodeView.js';
-import { SimulationReports } from './simulation-reports.js';
+import { SimulationReports, WidgetTrials } from './simulation-reports.js';
 import { isWidgetDrawingEvent, WidgetNodeView } from './WidgetNodeView.js';
 
 const nodeViews: Record<string, ComponentType<ReactNodeViewProps>> = {
@@ -39,6 +39,6 @@ function withNodeView(extension: AnyExtension, options: PanelEditorOptions): Any
  * panel's edges. Only views and keys are added, so the editor's schema is the server's schema.
  */
 export function panelEditorExtensions(options: PanelEditorOptions): Extensions {
-  const shared = { ...options, simulationReports: options.simulationReports ?? new SimulationReports() };
+  const shared = { ...options, simulationReports: options.simulationReports ?? new SimulationReports(), widgetTrials: options.widgetTrials ?? new WidgetTrials() };
   return [...panelExtensions.map((extension) => withNodeView(extension, shared)), PanelDocumentEdges];
 }
