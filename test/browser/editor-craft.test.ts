@@ -185,6 +185,64 @@ async function screenFits(dialog: Locator, key: string): Promise<boolean> {
   return screen.width <= viewport.width + 1 && screen.height <= viewport.height + 1 && screen.x >= viewport.x - 1 && screen.y >= viewport.y - 1;
 }
 
+describe('live values while a widget is tried in the editor', () => {
+  it('show what the trial shows, outlined as a trial, and the saved setting again after', async () => {
+    const wordings = { holds: 'holds', slides: 'slides' };
+    const storyId = await storyWith('Trial in the text', {
+      type: 'doc',
+      content: [
+        { type: 'paragraph', content: [
+          { type: 'text', text: 'The slope pulls with ' },
+          { type: 'liveValue', attrs: { widgetId: 'text-slope', output: 'shearN', format: { digits: 3, unit: 'N' } } },
+          { type: 'text', text: ' and the block ' },
+          { type: 'livePhrase', attrs: { phraseId: 'ph-text', widgetId: 'text-slope', wordings } },
+          { type: 'text', text: '.' },
+        ] },
+        slope('text-slope'),
+      ],
+    });
+    await openEditor(storyId);
+    const value = curator.locator('.ProseMirror .mp-live-value-node');
+    const phrase = curator.locator('.ProseMirror .mp-live-phrase-node');
+    const text = async (node: Locator) => ((await node.textContent()) ?? '').replace(/\s+/g, ' ');
+    // Saved: 10 kg at 20°, S = m·g·sin θ = 10 × 9.80665 × sin 20° ≈ 33.5 N, below μs·N, so it holds (inclined plane, the brief's science).
+    await eventually(() => text(value)).toBe('33.5 N');
+    expect(await text(phrase)).toBe('holds');
+    expect(await value.getAttribute('data-trying')).toBeNull();
+
+    const slider = curator.locator('.ProseMirror').getByRole('slider', { name: 'Slope force box: Slope angle' });
+    await slider.focus();
+    await curator.keyboard.press('PageUp');
+    await curator.keyboard.press('PageUp');
+    const tried = Number(await slider.getAttribute('aria-valuenow'));
+    expect(tried, 'tried past arctan 0.6 ≈ 30.96°, where it slides').toBeGreaterThan(30.96);
+    const triedShear = 10 * 9.80665 * Math.sin((tried * Math.PI) / 180);
+    await eventually(() => text(value)).toBe(`${new Intl.NumberFormat('en', { maximumSignificantDigits: 3 }).format(triedShear)} N`);
+    expect(await text(phrase)).toBe('slides');
+    expect(await value.getAttribute('data-trying')).toBe('true');
+    expect(await phrase.getAttribute('data-trying')).toBe('true');
+    expect(await value.getAttribute('title')).toContain('Shows the widget being tried, not its saved setting.');
+    await expectAccessible(curator, 'editor with live values following a trial');
+    await screenshotInBothDirections(curator, 'editor-trial-in-text', async () => {
+      await curator.locator('.ProseMirror [role="slider"]').focus();
+      await curator.keyboard.press('PageUp');
+      await curator.keyboard.press('PageUp');
+      await curator.locator('.ProseMirror .mp-live-value-node[data-trying]').waitFor();
+    });
+
+    await openEditor(storyId);
+    await slider.focus();
+    await curator.keyboard.press('PageUp');
+    await curator.keyboard.press('PageUp');
+    await curator.locator('.mp-widget-trial').waitFor();
+    await curator.getByRole('button', { name: 'Back to the saved setting' }).click();
+    await eventually(() => text(value)).toBe('33.5 N');
+    expect(await text(phrase)).toBe('holds');
+    expect(await value.getAttribute('data-trying')).toBeNull();
+    expect(savedAngle((await savedPanel(storyId)).doc)).toBe(20);
+  });
+});
+
 describe('the full-size preview', () => {
   it('opens in the editor at a station’s full size, and zooms to fit the window at either orientation', async () => {
     const storyId = await storyWith('Full-size preview', { type: 'doc', content: [paragraph(firstLine), slope('full-slope')] });

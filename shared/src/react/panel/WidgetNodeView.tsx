@@ -1,5 +1,5 @@
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
-import { useState, type CSSProperties } from 'react';
+import { useEffect, useState, type CSSProperties } from 'react';
 import { isPlainObject } from '../../panel/panel-json.js';
 import { widgetTitle } from '../../widgets/widget-title.js';
 import { PanelWidget } from './PanelWidget.js';
@@ -29,13 +29,18 @@ const sameParams = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.string
  * the curator says so, or in the side form.
  */
 export function WidgetNodeView({ node, extension, selected, updateAttributes }: ReactNodeViewProps) {
-  const { locale, simulationReports, widgetTrialLabels } = extension.options as PanelEditorOptions;
+  const { locale, simulationReports, widgetTrials, widgetTrialLabels } = extension.options as PanelEditorOptions;
   const widgetType = String(node.attrs.widgetType);
   const widgetId = String(node.attrs.widgetId);
   const saved = isPlainObject(node.attrs.params) ? node.attrs.params : {};
   // A trial belongs to the setting it started from: a change in the side form ends it.
   const [trial, setTrial] = useState<{ from: Record<string, unknown>; params: Record<string, unknown> } | null>(null);
   const tried = trial && trial.from === saved && !sameParams(trial.params, saved) ? trial.params : null;
+  // The panel's live values and phrases follow the trial while it lasts.
+  useEffect(() => {
+    widgetTrials?.set(widgetId, tried);
+  }, [widgetTrials, widgetId, tried]);
+  useEffect(() => () => widgetTrials?.set(widgetId, null), [widgetTrials, widgetId]);
   return (
     <NodeViewWrapper className="mp-widget-node" data-selected={selected || undefined} data-trying={tried ? '' : undefined}>
       <div className="mp-widget-node-handle" data-drag-handle="" style={handleStyle}>

@@ -10,5 +10,5 @@ export { isWidgetDrawingEvent, WidgetNodeView } from './WidgetNodeView.js';
 export { LiveValueNodeView } from './LiveValueNodeView.js';
 export { LivePhraseNodeView } from './LivePhraseNodeView.js';
 export { PanelImageNodeView } from './PanelImageNodeView.js';
-export { SimulationReports } from './simulation-reports.js';
+export { SimulationReports, WidgetTrials } from './simulation-reports.js';
 export { panelEdgeSelection, PanelDocumentEdges } from './document-edges.js';

@@ -1,5 +1,5 @@
 import type { ResolveMedia } from './panel-media.js';
-import type { SimulationReports } from './simulation-reports.js';
+import type { SimulationReports, WidgetTrials } from './simulation-reports.js';
 
 /** The studio's words for a widget being tried in the editor, in the studio's language. */
 export interface WidgetTrialLabels {
@@ -9,6 +9,8 @@ export interface WidgetTrialLabels {
   keep: string;
   /** Drops the trial and shows the saved setting again. */
   reset: string;
+  /** Said of a live value or phrase while its widget is tried: it follows the trial, not the saved setting. */
+  trialValue?: string;
 }
 
 /** What the studio tells the editor's node views; the schema itself never depends on it. */
@@ -21,4 +23,6 @@ export interface PanelEditorOptions {
   widgetTrialLabels?: WidgetTrialLabels;
   /** Shared by the node views of one editor; panelEditorExtensions makes one when none is given. */
   simulationReports?: SimulationReports;
+  /** Shared by the node views of one editor, like simulationReports. */
+  widgetTrials?: WidgetTrials;
 }

@@ -2,7 +2,7 @@ import { useEditorState, type Editor } from '@tiptap/react';
 import { useSyncExternalStore } from 'react';
 import { readWidget, type WidgetReading } from '../../panel/live-value/live-value-reading.js';
 import { WIDGET_NODE } from '../../panel/panel-json.js';
-import type { SimulationReports } from './simulation-reports.js';
+import type { SimulationReports, WidgetTrials } from './simulation-reports.js';
 
 interface FoundWidget {
   widgetType: string;
@@ -14,9 +14,14 @@ const noSubscription = () => () => undefined;
 /**
  * What the widget with this id puts out now, for a live value's or live phrase's node view. It
  * watches the editor's document, so moving a slider in the side form changes the caption at once,
- * and the simulation's reports, so an output of a running drawing follows it.
+ * the simulation's reports, so an output of a running drawing follows it, and the widget's trial,
+ * so the text says what a widget being tried shows (`trying` tells the view to mark it).
  */
-export function useWidgetReadings(editor: Editor, widgetId: string, simulationReports: SimulationReports | undefined): ReadonlyMap<string, WidgetReading> {
+export function useWidgetReadings(
+  editor: Editor,
+  widgetId: string,
+  { simulationReports, widgetTrials }: { simulationReports?: SimulationReports; widgetTrials?: WidgetTrials },
+): { readings: ReadonlyMap<string, WidgetReading>; trying: boolean } {
   const widget = useEditorState({
     editor,
     selector: ({ editor: current }): FoundWidget | null => {
@@ -30,5 +35,7 @@ export function useWidgetReadings(editor: Editor, widgetId: string, simulationRe
     },
   });
   const report = useSyncExternalStore(simulationReports?.subscribe ?? noSubscription, () => simulationReports?.get(widgetId));
-  return new Map(widget ? [[widgetId, readWidget(widget.widgetType, widget.params, report)]] : []);
+  const trial = useSyncExternalStore(widgetTrials?.subscribe ?? noSubscription, () => widgetTrials?.get(widgetId));
+  const trying = Boolean(widget && trial);
+  return { readings: new Map(widget ? [[widgetId, readWidget(widget.widgetType, trial ?? widget.params, report)]] : []), trying };
 }

@@ -23,14 +23,15 @@ export function usePanelEditor({ initialDoc, locale, resolveMedia, onChange }: {
   const trying = t('widgetTrial.trying');
   const keep = t('widgetTrial.keep');
   const reset = t('widgetTrial.reset');
+  const trialValue = t('widgetTrial.trialValue');
   const extensions = useMemo(
     // The placeholder is the studio's alone: it is drawn by CSS, never stored in the document.
     () => [
-      ...panelEditorExtensions({ locale, resolveMedia, missingMediaLabel, widgetTrialLabels: { trying, keep, reset } }),
+      ...panelEditorExtensions({ locale, resolveMedia, missingMediaLabel, widgetTrialLabels: { trying, keep, reset, trialValue } }),
       CommentHighlights,
       Placeholder.configure({ placeholder: emptyPanel }),
     ],
-    [locale, resolveMedia, missingMediaLabel, emptyPanel, trying, keep, reset],
+    [locale, resolveMedia, missingMediaLabel, emptyPanel, trying, keep, reset, trialValue],
   );
   return useEditor(
     {

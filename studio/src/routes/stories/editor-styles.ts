@@ -49,6 +49,8 @@ export const useEditorStyles = makeStyles({
       fontVariantNumeric: 'tabular-nums',
     },
     '& .mp-live-value-node[data-selected], & .mp-live-phrase-node[data-selected]': { outline: `2px solid ${tokens.colorBrandStroke1}` },
+    // Following a widget being tried: outlined in dashes, as the widget is.
+    '& .mp-live-value-node[data-trying], & .mp-live-phrase-node[data-trying]': { outline: `1px dashed ${magma.foreground}`, outlineOffset: '1px' },
     '& .mp-live-value-node[data-dangling], & .mp-live-phrase-node[data-dangling]': { backgroundColor: tokens.colorPaletteRedBackground2, color: tokens.colorPaletteRedForeground1 },
     // A phrase reads as words, not a number: dotted underline rather than tabular figures.
     '& .mp-live-phrase-node': { fontVariantNumeric: 'normal', textDecoration: `underline dotted ${magma.foreground}` },

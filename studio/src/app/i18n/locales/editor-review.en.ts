@@ -16,9 +16,10 @@ export const editorReviewEn = {
     noWidget: 'Its widget is no longer on this panel, or has no states to follow. Remove the phrase, or add the widget back.',
   },
   widgetTrial: {
-    trying: 'Trying it out: the saved setting is unchanged.',
+    trying: 'Trying it out: the saved setting is unchanged. Live values in the text show the trial, outlined in dashes.',
     keep: 'Use this as the starting setting',
     reset: 'Back to the saved setting',
+    trialValue: 'Shows the widget being tried, not its saved setting.',
   },
   stationPreview: {
     open: 'Full size',

@@ -17,9 +17,10 @@ export const editorReviewEs: typeof editorReviewEn = {
     noWidget: 'Su widget ya no está en este panel o no tiene estados que seguir. Quite la frase o vuelva a añadir el widget.',
   },
   widgetTrial: {
-    trying: 'De prueba: el ajuste guardado no cambia.',
+    trying: 'De prueba: el ajuste guardado no cambia. Los valores en vivo del texto muestran la prueba, con borde de guiones.',
     keep: 'Usar esto como ajuste inicial',
     reset: 'Volver al ajuste guardado',
+    trialValue: 'Muestra el widget en prueba, no su ajuste guardado.',
   },
   stationPreview: {
     open: 'Tamaño real',

@@ -17,9 +17,10 @@ export const editorReviewFr: typeof editorReviewEn = {
     noWidget: 'Son widget n’est plus sur ce panneau, ou n’a pas d’états à suivre. Supprimez la phrase ou remettez le widget.',
   },
   widgetTrial: {
-    trying: 'Essai : le réglage enregistré ne change pas.',
+    trying: 'Essai : le réglage enregistré ne change pas. Les valeurs en direct du texte montrent l’essai, encadrées de tirets.',
     keep: 'En faire le réglage de départ',
     reset: 'Revenir au réglage enregistré',
+    trialValue: 'Montre le widget à l’essai, pas son réglage enregistré.',
   },
   stationPreview: {
     open: 'Taille réelle',
