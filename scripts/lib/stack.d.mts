@@ -6,6 +6,8 @@ export const root: string;
 
 export function ensureDependencies(): void;
 
+export function buildShared(phaseName: string, env: NodeJS.ProcessEnv): void;
+
 export function startStack(options: {
   dataDir: string;
   dbPort: number;

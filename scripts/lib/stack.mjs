@@ -84,6 +84,11 @@ function build(workspace, phaseName, output, sources, env) {
   npmRun('build', workspace, phaseName, env);
 }
 
+/** The shared package's dist, which the other workspaces import (and type-check against). */
+export function buildShared(phaseName, env) {
+  build('shared', phaseName, 'shared/dist/index.js', ['shared/src', 'shared/package.json', 'shared/tsconfig.build.json'], env);
+}
+
 /**
  * The S3 stand-in, for the suites that check object storage. The server keeps the disk: its
  * settings name the stand-in under S3_STAND_IN_*, which a suite turns into S3_* for its own app.
@@ -169,7 +174,7 @@ export async function startStack(options) {
     for (const db of extraDatabases) env[`DATABASE_URL_${db.toUpperCase()}`] = databaseUrls[db];
 
     phase('build', 'shared package and server');
-    build('shared', 'build', 'shared/dist/index.js', ['shared/src', 'shared/package.json', 'shared/tsconfig.build.json'], env);
+    buildShared('build', env);
     build('server', 'build', 'server/dist/main.js', ['server/src', 'server/package.json', 'server/tsconfig.build.json', 'shared/src'], env);
 
     phase('migrations');
