@@ -104,11 +104,10 @@ export class TranslationsService {
       ),
     ]);
     const sources = new Map((await this.sources.sourcesOf([...new Set(pairs.map((pair) => pair.storyId))])).map((source) => [source.story.id, source]));
-    const items = await Promise.all(
-      pairs.map(async ({ storyId, storyTitle, venueId, locale }) => ({
-        storyId, storyTitle, ...completenessOf(locale, await this.statesOf(sources.get(storyId)!, locale)), can: translationCan(member, { venueId, locale }),
-      })),
-    );
+    const states = await this.statesOfEach(pairs.map(({ storyId, locale }) => ({ source: sources.get(storyId)!, locale })));
+    const items = pairs.map(({ storyId, storyTitle, venueId, locale }, index) => ({
+      storyId, storyTitle, ...completenessOf(locale, states[index]!), can: translationCan(member, { venueId, locale }),
+    }));
     return { ...toPage(items, Number(total), query), can, locales: locales.map((row) => row.locale) };
   }
 
@@ -206,16 +205,37 @@ export class TranslationsService {
 
   /** Every unit of the story in the locale with the translation it shows. */
   async statesOf(source: StorySource, locale: string, transaction?: Transaction): Promise<UnitState[]> {
-    const panelIds = source.panels.map((panel) => panel.panelId);
-    const mediaIds = source.altTexts.map((alt) => alt.mediaId);
+    return (await this.statesOfEach([{ source, locale }], transaction))[0]!;
+  }
+
+  /**
+   * The unit states of many stories in many locales from four queries in all, not four per story and
+   * locale: a worklist of a hundred rows made four hundred, and the translator's home waited on them.
+   */
+  async statesOfEach(targets: readonly { source: StorySource; locale: string }[], transaction?: Transaction): Promise<UnitState[][]> {
+    if (targets.length === 0) return [];
+    const locale = [...new Set(targets.map((target) => target.locale))];
+    const titleIds = [...new Set(targets.map((target) => target.source.title.id))];
+    const panelIds = [...new Set(targets.flatMap((target) => target.source.panels.map((panel) => panel.panelId)))];
+    const mediaIds = [...new Set(targets.flatMap((target) => target.source.altTexts.map((alt) => alt.mediaId)))];
     const include = [{ model: User, attributes: ['id', 'name'] }];
     const [titleRows, panelRows, altRows, targetAltTexts] = await Promise.all([
-      this.translations.findAll({ where: { unitId: source.title.id, locale }, include, transaction }),
+      this.translations.findAll({ where: { unitId: titleIds, locale }, include, transaction }),
       panelIds.length ? this.translations.findAll({ where: { panelId: panelIds, locale }, include, transaction }) : [],
       mediaIds.length ? this.translations.findAll({ where: { mediaAssetId: mediaIds, locale }, include, transaction }) : [],
       mediaIds.length ? this.altTexts.findAll({ where: { mediaAssetId: mediaIds, locale }, transaction }) : [],
     ]);
-    return unitStates(source, [...titleRows, ...panelRows, ...altRows], targetAltTexts);
+    return targets.map(({ source, locale: wanted }) => {
+      const panels = new Set(source.panels.map((panel) => panel.panelId));
+      const media = new Set(source.altTexts.map((alt) => alt.mediaId));
+      const inMedia = (id: number | null) => id !== null && media.has(id);
+      const rows = [
+        ...titleRows.filter((row) => row.locale === wanted && row.unitId === source.title.id),
+        ...panelRows.filter((row) => row.locale === wanted && row.panelId !== null && panels.has(row.panelId)),
+        ...altRows.filter((row) => row.locale === wanted && inMedia(row.mediaAssetId)),
+      ];
+      return unitStates(source, rows, targetAltTexts.filter((alt) => alt.locale === wanted && inMedia(alt.mediaAssetId)));
+    });
   }
 
   /**
