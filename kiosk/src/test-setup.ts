@@ -6,8 +6,8 @@ afterEach(() => cleanup());
 
 // jsdom has no object URLs; the kiosk makes them only to hand stored image bytes to <img>.
 let objectUrls = 0;
-URL.createObjectURL ??= () => `blob:kiosk.test/${(objectUrls += 1)}`;
-URL.revokeObjectURL ??= () => undefined;
+if (typeof URL.createObjectURL !== 'function') URL.createObjectURL = () => `blob:kiosk.test/${(objectUrls += 1)}`;
+if (typeof URL.revokeObjectURL !== 'function') URL.revokeObjectURL = () => undefined;
 
 // jsdom has no PointerEvent; a MouseEvent carries the coordinates a swipe is measured by.
 if (typeof window.PointerEvent === 'undefined') {

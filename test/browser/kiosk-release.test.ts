@@ -265,12 +265,12 @@ describe('a kiosk revoked in the studio', () => {
     const db = await new Promise<IDBDatabase>((resolve, reject) => {
       const request = indexedDB.open('mantlepiece-kiosk');
       request.onsuccess = () => resolve(request.result);
-      request.onerror = () => reject(request.error);
+      request.onerror = () => reject(request.error ?? new Error('IndexedDB request failed'));
     });
     const count = (name: string) => new Promise<number>((resolve, reject) => {
       const request = db.transaction(name).objectStore(name).count();
       request.onsuccess = () => resolve(request.result);
-      request.onerror = () => reject(request.error);
+      request.onerror = () => reject(request.error ?? new Error('IndexedDB request failed'));
     });
     const counts = { credential: await count('credential'), releases: await count('releases'), files: await count('files'), outbox: await count('outbox') };
     db.close();

@@ -17,7 +17,7 @@ afterAll(async () => {
 const DEMO_VENUE_SLUG = 'basalt-point';
 
 describe('kiosk before pairing', () => {
-  it("shows the name of the venue its install URL names, from the public venue endpoint", async () => {
+  it('shows the name of the venue its install URL names, from the public venue endpoint', async () => {
     const venue = (await (await fetch(`${baseUrl}/api/kiosk/venue?slug=${DEMO_VENUE_SLUG}`)).json()) as { name: string };
     await page.goto(`${baseUrl}/kiosk/?venue=${DEMO_VENUE_SLUG}`);
     await page.getByText(venue.name, { exact: true }).waitFor();

@@ -138,8 +138,8 @@ describe('building a release while a translation is missing', () => {
     await dialog.getByRole('checkbox', { name: 'Leave out of this release' }).check();
     const same = dialog.locator(`[data-same-as-live="${release.number}"]`);
     await same.waitFor();
-    expect(await same.textContent()).toBe(`Nothing would change`
-      + `This release would carry exactly what Release ${release.number}, Live now, carries: the same revisions, translations and files. Building it changes nothing on the gallery’s screens.`);
+    expect(await same.textContent()).toBe(`Nothing would change` +
+      `This release would carry exactly what Release ${release.number}, Live now, carries: the same revisions, translations and files. Building it changes nothing on the gallery’s screens.`);
     // The technician still decides: Build stays offered.
     await expect.poll(() => build.isEnabled()).toBe(true);
     await expectAccessible('build dialog, the same as the Live release');
@@ -167,4 +167,3 @@ describe('the Fleet', () => {
     });
   });
 });
-

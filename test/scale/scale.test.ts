@@ -130,7 +130,7 @@ describe('the main journey through a load balancer, two instances, a replica and
     expect(sent.length, 'the journey sent mail (submitted, approved, translation notices)').toBeGreaterThan(0);
     const delivered = await Promise.all(fs.readdirSync(stack.mailDir).filter((name) => name.endsWith('.eml')).map(async (name) => {
       const mail = await simpleParser(fs.readFileSync(path.join(stack.mailDir, name)));
-      return `${mail.headers.get('x-envelope-to')} · ${mail.subject}`;
+      return `${mail.headers.get('x-envelope-to') as string} · ${mail.subject}`;
     }));
     expect(count(delivered)).toEqual(count(sent.map((row) => `${row.recipient} · ${row.subject}`)));
   });

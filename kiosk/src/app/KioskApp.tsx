@@ -58,7 +58,9 @@ export function KioskApp({ api, store, config, appVersion }: KioskAppProps) {
   useEffect(() => {
     const controller = new AbortController();
     // Unknown (several venues, none named) or unreachable: the neutral screens stay.
-    const showVenue = (answer: Promise<KioskVenue | null>) => answer.then((found) => found && setVenue(found), () => undefined);
+    const showVenue = (answer: Promise<KioskVenue | null>) => {
+      answer.then((found) => found && setVenue(found), () => undefined);
+    };
     const boot = async () => {
       let paired = await store.credential();
       if (!paired) {

@@ -42,7 +42,9 @@ describe('player', () => {
     expect(screen.getByRole('heading', { level: 2 }).textContent).toBe('Why rock slides 1');
     expect(screen.getByRole('img').getAttribute('alt')).toBe('A basalt cliff above the sea');
     expect(screen.getByText('Photo: Tomás Reyes')).toBeTruthy();
-    act(() => vi.advanceTimersByTime(4_000));
+    act(() => {
+      vi.advanceTimersByTime(4_000);
+    });
     fireEvent.click(screen.getByRole('button', { name: 'Next' }));
     expect(screen.getByRole('heading', { level: 2 }).textContent).toBe('Why rock slides 2');
     const stage = document.querySelector('.stage')!;
@@ -73,11 +75,15 @@ describe('player', () => {
   it('warns "Still there?" with a countdown of at least 20 s, and "I’m still here" keeps the visit', () => {
     begin();
     fireEvent.click(languageButton('Français'));
-    act(() => vi.advanceTimersByTime(60_000));
+    act(() => {
+      vi.advanceTimersByTime(60_000);
+    });
     const dialog = screen.getByRole('alertdialog');
     expect(within(dialog).getByRole('heading').textContent).toBe('Vous êtes toujours là ?');
     expect(dialog.textContent).toContain('dans 25 secondes');
-    act(() => vi.advanceTimersByTime(5_000));
+    act(() => {
+      vi.advanceTimersByTime(5_000);
+    });
     expect(dialog.textContent).toContain('dans 20 secondes');
     fireEvent.click(within(dialog).getByRole('button', { name: 'Je suis toujours là' }));
     expect(screen.queryByRole('alertdialog')).toBeNull();
@@ -91,9 +97,13 @@ describe('player', () => {
     fireEvent.click(screen.getByRole('switch', { name: 'Contraste élevé' }));
     fireEvent.click(screen.getByRole('switch', { name: 'Moins de mouvement' }));
     expect(document.querySelector('.player')!.hasAttribute('data-large-text')).toBe(true);
-    act(() => vi.advanceTimersByTime(60_000 + 24_999));
+    act(() => {
+      vi.advanceTimersByTime(60_000 + 24_999);
+    });
     expect(screen.getByRole('alertdialog')).toBeTruthy();
-    act(() => vi.advanceTimersByTime(1));
+    act(() => {
+      vi.advanceTimersByTime(1);
+    });
     expect(screen.queryByRole('alertdialog')).toBeNull();
     expect(screen.getByRole('button', { name: /Touch to begin/ })).toBeTruthy();
 

@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react';
 
 const ACTIVITY = ['pointerdown', 'keydown', 'wheel'] as const;
 
@@ -12,13 +12,18 @@ export function useIdleReset({ enabled, idleMs, warningMs, onReset }: { enabled:
   const timer = useRef<ReturnType<typeof setTimeout>>(undefined);
   const ticker = useRef<ReturnType<typeof setInterval>>(undefined);
   const resetRef = useRef(onReset);
-  resetRef.current = onReset;
+  useLayoutEffect(() => {
+    resetRef.current = onReset;
+  });
 
-  const stop = useCallback(() => {
+  const clearTimers = useCallback(() => {
     clearTimeout(timer.current);
     clearInterval(ticker.current);
-    setSecondsLeft(null);
   }, []);
+  const stop = useCallback(() => {
+    clearTimers();
+    setSecondsLeft(null);
+  }, [clearTimers]);
 
   const restart = useCallback(() => {
     stop();
@@ -35,14 +40,14 @@ export function useIdleReset({ enabled, idleMs, warningMs, onReset }: { enabled:
   }, [idleMs, warningMs, stop]);
 
   useEffect(() => {
-    if (!enabled) return stop();
+    if (!enabled) return clearTimers();
     restart();
     for (const type of ACTIVITY) window.addEventListener(type, restart, { capture: true, passive: true });
     return () => {
       for (const type of ACTIVITY) window.removeEventListener(type, restart, { capture: true });
       stop();
     };
-  }, [enabled, restart, stop]);
+  }, [enabled, restart, stop, clearTimers]);
 
   return { secondsLeft, stillHere: restart };
 }

@@ -28,14 +28,14 @@ export class FakeKioskServer {
   venues: { paired?: KioskVenue; bySlug: Record<string, KioskVenue> } = { bySlug: {} };
   readonly requests: RecordedRequest[] = [];
 
-  readonly fetch: Fetch = async (input, init) => {
-    const url = new URL(String(input), 'http://kiosk.test');
+  readonly fetch: Fetch = (input, init) => {
+    const url = new URL(input instanceof Request ? input.url : input, 'http://kiosk.test');
     const method = init?.method ?? 'GET';
     const headers = new Headers(init?.headers);
-    const body = typeof init?.body === 'string' ? JSON.parse(init.body) : undefined;
+    const body = typeof init?.body === 'string' ? JSON.parse(init.body) as unknown : undefined;
     this.requests.push({ method, path: url.pathname, search: url.search, headers, body });
-    if (!this.reachable) throw new TypeError('Failed to fetch');
-    return this.answer(method, url.pathname, headers, url.searchParams);
+    if (!this.reachable) return Promise.reject(new TypeError('Failed to fetch'));
+    return Promise.resolve(this.answer(method, url.pathname, headers, url.searchParams));
   };
 
   private answer(method: string, path: string, headers: Headers, query: URLSearchParams): Response {

@@ -45,7 +45,7 @@ export class AuthGuard extends PassportAuthGuard('bearer') {
     return true;
   }
 
-  override handleRequest<TUser = User>(error: unknown, user: TUser | false): TUser {
+  override handleRequest<TUser = User>(error: Error | null, user: TUser | false): TUser {
     if (error) throw error;
     if (!user) throw new UnauthorizedException(SIGN_IN_REQUIRED);
     return user;

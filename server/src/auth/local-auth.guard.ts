@@ -14,7 +14,7 @@ export class LocalAuthGuard extends AuthGuard('local') {
 
   override async canActivate(context: ExecutionContext): Promise<boolean> {
     const request = context.switchToHttp().getRequest<Request>();
-    request.body = await this.validation.transform(request.body ?? {}, { type: 'body', metatype: SignInDto });
+    request.body = (await this.validation.transform(request.body ?? {}, { type: 'body', metatype: SignInDto })) as SignInDto;
     return (await super.canActivate(context)) as boolean;
   }
 }

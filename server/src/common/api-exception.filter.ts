@@ -43,7 +43,8 @@ const fieldOf = (column: string) => column.replace(/_([a-z])/g, (_match, letter:
  */
 function constraintErrorBody(exception: unknown): ApiErrorBody | null {
   if (exception instanceof ForeignKeyConstraintError) {
-    if (exception.reltype === 'parent') return { statusCode: HttpStatus.CONFLICT, message: 'Other records still refer to this one.' };
+    // Sequelize types `reltype` as an enum it does not export at run time; its values are these strings.
+    if (String(exception.reltype) === 'parent') return { statusCode: HttpStatus.CONFLICT, message: 'Other records still refer to this one.' };
     // MySQL's dialect lists the columns; the typings (and other dialects) give an object keyed by them.
     const columns: unknown = exception.fields;
     const fields = (Array.isArray(columns) ? columns.map(String) : Object.keys(columns ?? {})).map(fieldOf);

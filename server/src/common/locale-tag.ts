@@ -26,6 +26,6 @@ export const LocaleTagField = () =>
 /** A list of BCP 47 tags, each checked and stored in canonical form. */
 export const LocaleTagsField = () =>
   applyDecorators(
-    Transform(({ value }) => (Array.isArray(value) ? value.map(canonical) : value)),
+    Transform(({ value }: { value: unknown }) => (Array.isArray(value) ? value.map(canonical) : value)),
     IsLocaleTag({ each: true, message: 'Each locale must be a BCP 47 language tag such as fr or pt-BR.' }),
   );

@@ -32,7 +32,7 @@ const DECIMAL_INTEGER = /^-?\d{1,20}$/;
 /** An integer of a query string: converted from its decimal text, then bounded like any other. */
 export const QueryInt = (min: number, max: number, options: ValidationOptions = {}) =>
   applyDecorators(
-    Transform(({ value }) => (typeof value === 'string' && DECIMAL_INTEGER.test(value) ? Number(value) : value)),
+    Transform(({ value }: { value: unknown }) => (typeof value === 'string' && DECIMAL_INTEGER.test(value) ? Number(value) : value)),
     IsIntBetween(min, max, options),
   );
 

@@ -75,6 +75,7 @@ export class ConfigService {
         forcePathStyle: process.env.S3_FORCE_PATH_STYLE === 'true',
       }
     : null;
+
   /** How long a kiosk's redirect to a presigned bucket URL holds; 0 streams kiosk files through the server (a CDN in front). */
   readonly presignedUrlSeconds = intFromEnv('S3_PRESIGNED_URL_SECONDS', 300);
   readonly mediaMaxBytes = intFromEnv('MEDIA_MAX_BYTES', 25 * 1024 * 1024);

@@ -11,7 +11,7 @@ export function jsonColumn(attribute: string, allowNull = false): Partial<ModelA
     allowNull,
     get(this: Model) {
       const raw: unknown = this.getDataValue(attribute as never);
-      return typeof raw === 'string' ? JSON.parse(raw) : raw;
+      return typeof raw === 'string' ? (JSON.parse(raw) as unknown) : raw;
     },
   };
 }

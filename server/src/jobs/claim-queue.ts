@@ -37,7 +37,7 @@ export class ClaimQueue<M extends Model & Claimable> {
       });
       if (rows.length === 0) return [];
       const claim = { claimedBy: this.owner, claimExpiresAt: new Date(now.getTime() + this.leaseMs) };
-      await this.model.update(claim as never, { where: { id: rows.map((row) => row.id) } as WhereOptions, transaction, silent: true });
+      await this.model.update(claim as never, { where: { id: rows.map((row): unknown => row.id) } as WhereOptions, transaction, silent: true });
       for (const row of rows) row.set(claim as never, { raw: true });
       return rows;
     });

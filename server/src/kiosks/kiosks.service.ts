@@ -92,8 +92,8 @@ export class KiosksService {
     const knownPanels = new Set(panels.map((row) => `${row.storyId}:${row.panelId}`));
     const panelsAnyStory = new Set(panels.map((row) => row.panelId));
     return events.filter((event) =>
-      (event.storyId === undefined || knownStories.has(event.storyId))
-      && (event.panelId === undefined || (event.storyId === undefined ? panelsAnyStory.has(event.panelId) : knownPanels.has(`${event.storyId}:${event.panelId}`))));
+      (event.storyId === undefined || knownStories.has(event.storyId)) &&
+      (event.panelId === undefined || (event.storyId === undefined ? panelsAnyStory.has(event.panelId) : knownPanels.has(`${event.storyId}:${event.panelId}`))));
   }
 
   /**

@@ -54,8 +54,8 @@ export class LocalMediaStore implements MediaStore {
   }
 
   /** The disk has no URLs of its own: the server sends the bytes. */
-  async presignedUrl(): Promise<null> {
-    return null;
+  presignedUrl(): Promise<null> {
+    return Promise.resolve(null);
   }
 
   private fileOf(key: string): string {

@@ -49,7 +49,7 @@ interface NewImage {
 function filenameOf(file: UploadedFile): string {
   const decoded = Buffer.from(file.originalname, 'latin1').toString('utf8');
   const name = (decoded.includes('\ufffd') ? file.originalname : decoded).split(/[\\/]/).pop() ?? '';
-  return name.replace(/[\u0000-\u001f\u007f]/g, '').trim().slice(0, 255) || 'image';
+  return name.replace(/\p{Cc}/gu, '').trim().slice(0, 255) || 'image';
 }
 
 @Injectable()

@@ -262,5 +262,4 @@ describe('a build killed half-way', () => {
     expect(after).toMatchObject({ state: 'failed', failure: expect.stringMatching(/stopped before it finished/), files: 0 });
     for (const sha256 of stored) expect(fs.existsSync(storedFile(sha256))).toBe(false);
   });
-
 });

@@ -143,7 +143,7 @@ const STORIES: { title: string; panels: PanelDocJSON[] }[] = [
 ];
 
 const withImageIds = (panel: PanelDocJSON, ids: Map<string, number>): PanelDocJSON =>
-  JSON.parse(JSON.stringify(panel), (key, value) => (key === 'mediaId' && ids.has(value) ? String(ids.get(value)) : value));
+  JSON.parse(JSON.stringify(panel), (key, value: unknown) => (key === 'mediaId' && typeof value === 'string' && ids.has(value) ? String(ids.get(value)) : value)) as PanelDocJSON;
 
 /**
  * The demo exhibit, written for a family audience, built through the same services the studio

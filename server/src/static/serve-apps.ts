@@ -38,7 +38,10 @@ export function serveApps(app: NestExpressApplication, apps: SinglePageApp[]): v
     });
     // The studio sits at /, so without this every API request (a kiosk's poll too) would cost a
     // look in its build folder first.
-    app.use(spa.prefix, (req: Request, res: Response, next: NextFunction) => (isApi(req) ? next() : files(req, res, next)));
+    app.use(spa.prefix, (req: Request, res: Response, next: NextFunction) => {
+      if (isApi(req)) next();
+      else files(req, res, next);
+    });
   }
 
   app.use((req: Request, res: Response, next: NextFunction) => {

@@ -29,7 +29,7 @@ const APPROVED_REVISION_COLUMN = Sequelize.literal(
 /** Approvals on the story's open submission, or -1 when none is open. */
 const OPEN_APPROVALS_COLUMN = Sequelize.literal(
   "COALESCE((SELECT (SELECT COUNT(*) FROM `reviews` AS `v` WHERE `v`.`revision_id` = `r`.`id` AND `v`.`verdict` = 'approve') " +
-    "FROM `revisions` AS `r` WHERE `r`.`story_id` = `Story`.`id` AND `r`.`state` = 'open' ORDER BY `r`.`number` DESC LIMIT 1), -1)",
+  "FROM `revisions` AS `r` WHERE `r`.`story_id` = `Story`.`id` AND `r`.`state` = 'open' ORDER BY `r`.`number` DESC LIMIT 1), -1)",
 );
 
 /** What every StoryView needs: the exhibit's name, the author, the number of panels, the approved and the open revision, in one query. */

@@ -14,7 +14,7 @@ export class GalleriesService extends SettingsService<Gallery, GalleryView> {
       toView: toGalleryView,
       inUse: 'This gallery still has stations or exhibits; delete or move them first.',
       parentKey: 'venueId',
-      venue: { column: 'venueId', of: (gallery) => gallery.venueId, ofParent: async (venueId) => venueId },
+      venue: { column: 'venueId', of: (gallery) => gallery.venueId, ofParent: (venueId) => Promise.resolve(venueId) },
       keepers: SETTINGS_KEEPERS,
     });
   }

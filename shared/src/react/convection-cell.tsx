@@ -1,4 +1,4 @@
-import { useEffect, useId, useMemo, useRef, useState } from 'react';
+import { useEffect, useId, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { formatQuantity, interpolate, widgetStrings } from '../i18n/index.js';
 import {
   convectionCell,
@@ -44,7 +44,6 @@ const SHORTEST_DEMAND_INTERVAL_MS = 1000 / 3;
 /** One press of "step" advances as much as half a second of playback would. */
 const FRAMES_PER_DEMANDED_STEP = 30;
 
-
 /**
  * A box of mantle rock heated from below, overturning: the temperature field in one of our ramps,
  * an overlay of the flow, live Nu and Vrms. The solver runs in a Web Worker.
@@ -81,7 +80,7 @@ export function ConvectionCell({ params, locale, showCaution = false, reducedMot
     const ctx = canvas?.getContext('2d');
     if (!frame || !canvas || !ctx) return;
     // A frame asked for on demand (reduced motion, paused) is drawn as it is; while playing, the guard paces it.
-    const shown = seconds === null ? (guard.shown = Float32Array.from(target.current)) : guard.follow(target.current, seconds);
+    const shown = seconds === null ? guard.jumpTo(target.current) : guard.follow(target.current, seconds);
     const field = (fieldCanvas.current ??= document.createElement('canvas'));
     if (field.width !== frame.nx || field.height !== frame.nz) {
       field.width = frame.nx;
@@ -114,11 +113,13 @@ export function ConvectionCell({ params, locale, showCaution = false, reducedMot
   };
   // The worker's callback and the animation loop outlive a render; they read the current ones through these.
   const drawRef = useRef(draw);
-  drawRef.current = draw;
   const animatingRef = useRef(animating);
-  animatingRef.current = animating;
   const onReportRef = useRef(onReport);
-  onReportRef.current = onReport;
+  useLayoutEffect(() => {
+    drawRef.current = draw;
+    animatingRef.current = animating;
+    onReportRef.current = onReport;
+  });
 
   useEffect(() => {
     const started = startConvectionRunner((message) => {
@@ -142,10 +143,16 @@ export function ConvectionCell({ params, locale, showCaution = false, reducedMot
     runner.current = started;
     return () => started.dispose();
   }, []);
+  // A new run clears the last run's failure (state adjusted while rendering, not in an effect).
+  const run = [rayleigh, params.aspectRatio, params.nx, params.nz, seed].join(' ');
+  const [failureRun, setFailureRun] = useState(run);
+  if (failureRun !== run) {
+    setFailureRun(run);
+    setFailure(null);
+  }
   useEffect(() => {
     generation.current += 1;
     awaiting.current = true;
-    setFailure(null);
     runner.current?.post({ kind: 'start', generation: generation.current, rayleigh, aspectRatio: params.aspectRatio, nx: params.nx, nz: params.nz, ...(seed === undefined ? {} : { seed }) });
   }, [rayleigh, params.aspectRatio, params.nx, params.nz, seed]);
 

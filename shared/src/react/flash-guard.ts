@@ -26,12 +26,15 @@ export class FlashGuard {
     }
   }
 
+  /** Shows `target` as it is, unpaced (a frame asked for on demand). */
+  jumpTo(target: Float32Array): Float32Array {
+    this.shown = Float32Array.from(target);
+    return this.shown;
+  }
+
   /** Moves the drawn field towards `target` by what `seconds` of wall time allow; a new grid size starts from the target. */
   follow(target: Float32Array, seconds: number): Float32Array {
-    if (this.shown.length !== target.length) {
-      this.shown = Float32Array.from(target);
-      return this.shown;
-    }
+    if (this.shown.length !== target.length) return this.jumpTo(target);
     const limit = LUMINANCE_PER_SECOND * Math.max(0, seconds);
     const shown = this.shown;
     for (let k = 0; k < target.length; k += 1) {

@@ -1,5 +1,5 @@
 import { UPPER_MANTLE_BASE_KM } from '../widgets/plate-forces/index.js';
-import { textBox, type Box, type DrawnLabel } from './drawing-text.js';
+import { textBox, type DrawnLabel } from './drawing-text.js';
 
 /**
  * Where the plate-forces drawing puts its words, for one language and text size: a pure function,

@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 import { formatQuantity, interpolate, widgetStrings } from '../i18n/index.js';
 import { formatMillionYears } from '../widgets/convection-cell/index.js';
 import { computePlateForces, formatForcePerMetre, plateForces, SLAB_LENGTH_MAX_KM, UPPER_MANTLE_BASE_KM, type PlateForcesParams } from '../widgets/plate-forces/index.js';
@@ -76,7 +76,12 @@ function ForceBar({ label, value, fraction, colour, name }: { label: string; val
 export function PlateForces({ params, locale, onParamsChange, showCaution = false, maxWidth = 560, textScale = 1 }: PlateForcesProps) {
   const strings = widgetStrings(locale).plateForces;
   const [shown, setShown] = useState(params);
-  useEffect(() => setShown(params), [params]);
+  // New params from outside replace what the visitor moved (state adjusted while rendering, not in an effect).
+  const [shownFor, setShownFor] = useState(params);
+  if (shownFor !== params) {
+    setShownFor(params);
+    setShown(params);
+  }
   const descriptionId = useId();
   const statusId = useId();
 

@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 import { formatQuantity, widgetStrings } from '../i18n/index.js';
 import { formatMillionYears } from '../widgets/convection-cell/index.js';
 import {
@@ -77,7 +77,12 @@ function profiles(params: SeaFloorDepthParams, axis: AgeAxis) {
 export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = false, maxWidth = 560, textScale = 1, input = 'desk' }: SeaFloorDepthProps) {
   const strings = widgetStrings(locale).seaFloorDepth;
   const [shown, setShown] = useState(params);
-  useEffect(() => setShown(params), [params]);
+  // New params from outside replace what the visitor moved (state adjusted while rendering, not in an effect).
+  const [shownFor, setShownFor] = useState(params);
+  if (shownFor !== params) {
+    setShownFor(params);
+    setShown(params);
+  }
   const descriptionId = useId();
   const statusId = useId();
 

@@ -1,4 +1,4 @@
-import { textBox, textWidth, type Box, type DrawnLabel } from './drawing-text.js';
+import { textBox, textWidth, type DrawnLabel } from './drawing-text.js';
 
 /**
  * Where the sea-floor depth drawing puts its axis and its words, for one age, language and text

@@ -84,7 +84,12 @@ export function SlopeForceBox({ params, locale, onParamsChange, showCaution = fa
   const descriptionId = useId();
   const statusId = useId();
 
-  useEffect(() => setAngle(params.angleDeg), [params.angleDeg]);
+  // A new angle from outside replaces the one the visitor moved (state adjusted while rendering, not in an effect).
+  const [angleFor, setAngleFor] = useState(params.angleDeg);
+  if (angleFor !== params.angleDeg) {
+    setAngleFor(params.angleDeg);
+    setAngle(params.angleDeg);
+  }
 
   const current = { ...params, angleDeg: angle };
   const result = computeSlopeForce(current);

@@ -22,6 +22,7 @@ export interface ExportXliffOptions {
 }
 
 // XML 1.0 forbids these code points outright; XLIFF 2 carries them as <cp hex="…"/>.
+// eslint-disable-next-line no-control-regex -- finding these control characters is the point
 const FORBIDDEN_IN_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/gu;
 
 const escapeAttribute = (value: string) =>

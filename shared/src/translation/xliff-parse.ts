@@ -59,6 +59,12 @@ function pushText(runs: UnitRun[], text: string): void {
   else if (text) runs.push({ type: 'text', text });
 }
 
+/** Adds a run, joining text to the text before it. */
+function addRun(runs: UnitRun[], run: UnitRun): void {
+  if (run.type === 'text') pushText(runs, run.text);
+  else runs.push(run);
+}
+
 const attribute = (tag: SaxesTagNS, name: string): string | undefined => {
   const found = (tag.attributes as Record<string, SaxesAttributeNS>)[name];
   return found && found.uri === '' ? found.value : undefined;
@@ -75,13 +81,13 @@ function sourceHashOf(notes: readonly { category: string; text: string }[]): str
 /** A unit's runs across its segments, in order, as the standard reads a unit's content. */
 function joinParts(unit: OpenUnit): { sourceRuns: UnitRun[]; targetRuns?: UnitRun[] } | XliffProblem {
   const sourceRuns: UnitRun[] = [];
-  for (const part of unit.parts) for (const run of part.source) run.type === 'text' ? pushText(sourceRuns, run.text) : sourceRuns.push(run);
+  for (const part of unit.parts) for (const run of part.source) addRun(sourceRuns, run);
   const segments = unit.parts.filter((part) => !part.ignorable);
   const translated = segments.filter((part) => part.target !== undefined).length;
   if (translated === 0) return { sourceRuns };
   if (translated < segments.length) return { unitId: unit.id, message: `Unit ${unit.id} is only partly translated: ${translated} of ${segments.length} segments have a target.` };
   const targetRuns: UnitRun[] = [];
-  for (const part of unit.parts) for (const run of part.target ?? part.source) run.type === 'text' ? pushText(targetRuns, run.text) : targetRuns.push(run);
+  for (const part of unit.parts) for (const run of part.target ?? part.source) addRun(targetRuns, run);
   return { sourceRuns, targetRuns };
 }
 

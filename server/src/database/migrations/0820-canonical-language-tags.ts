@@ -85,7 +85,7 @@ async function canonicaliseUnique(qi: QueryInterface, { table, keys, newest }: (
     const [kept, ...dropped] = group;
     const to = canonical(String(kept!.locale));
     for (const row of dropped) {
-      console.warn(`Migration 0820: ${table} row ${row.id} (${String(row.locale)}) is the same language as row ${kept!.id} (${String(kept!.locale)}) once canonical (${to}); the newer, row ${kept!.id}, is kept.`);
+      console.warn(`Migration 0820: ${table} row ${String(row.id)} (${String(row.locale)}) is the same language as row ${String(kept!.id)} (${String(kept!.locale)}) once canonical (${to}); the newer, row ${String(kept!.id)}, is kept.`);
     }
     if (dropped.length > 0) await qi.sequelize.query(`DELETE FROM \`${table}\` WHERE id IN (:ids)`, { replacements: { ids: dropped.map((row) => row.id) }, transaction });
     if (kept!.locale !== to) await qi.sequelize.query(`UPDATE \`${table}\` SET locale = :to WHERE id = :id`, { replacements: { to, id: kept!.id }, transaction });
@@ -99,7 +99,7 @@ async function canonicaliseLists(qi: QueryInterface, table: string, column: stri
   for (const row of rows) {
     const tags: unknown = typeof row.tags === 'string' ? JSON.parse(row.tags) : row.tags;
     if (!Array.isArray(tags)) continue;
-    const next = [...new Set(tags.map((tag) => (typeof tag === 'string' ? canonical(tag) : tag)))];
+    const next = [...new Set(tags.map((tag: unknown) => (typeof tag === 'string' ? canonical(tag) : tag)))];
     if (JSON.stringify(next) === JSON.stringify(tags)) continue;
     await qi.sequelize.query(`UPDATE \`${table}\` SET \`${column}\` = :tags WHERE id = :id`, { replacements: { tags: JSON.stringify(next), id: row.id }, transaction });
   }

@@ -43,7 +43,7 @@ export class UpdatePanelDto {
 }
 
 export class ReorderPanelsDto {
-  @ApiProperty({ type: [Number], description: "Every panel of the story, in the new order" })
+  @ApiProperty({ type: [Number], description: 'Every panel of the story, in the new order' })
   @IsArray()
   @ArrayMaxSize(500)
   @ArrayUnique({ message: 'Each panel appears once.' })

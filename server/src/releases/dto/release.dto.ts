@@ -7,7 +7,7 @@ import { IsRowId, Omittable, QueryRowId } from '../../common/validation.js';
 
 /** A query string's list of ids, written `?leaveOut=4,9` or `?leaveOut=4&leaveOut=9`; anything else is left for the checks to refuse. */
 const fromQueryList = () =>
-  Transform(({ value }) => (Array.isArray(value) ? value : [value])
+  Transform(({ value }: { value: unknown }) => [value].flat()
     .flatMap((item) => (typeof item === 'string' ? item.split(',') : [item]))
     .map((item) => (typeof item === 'string' && /^\d{1,10}$/.test(item) ? Number(item) : item)));
 

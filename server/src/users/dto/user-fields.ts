@@ -10,7 +10,7 @@ import { IsAcceptablePassword } from '../password-rules.js';
 export const EmailField = () =>
   applyDecorators(
     ApiProperty({ example: 'someone@example.org' }),
-    Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value)),
+    Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim().toLowerCase() : value)),
     IsEmail({}, { message: 'Enter a valid e-mail address.' }),
     MaxLength(254),
   );
@@ -18,7 +18,7 @@ export const EmailField = () =>
 export const PersonNameField = () =>
   applyDecorators(
     ApiProperty({ example: 'Noor Haddad' }),
-    Transform(({ value }) => (typeof value === 'string' ? value.trim() : value)),
+    Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value)),
     IsString(),
     MinLength(1, { message: 'Enter a name.' }),
     MaxLength(120),

@@ -8,7 +8,7 @@ import { IsRowId, QueryRowId } from '../../common/validation.js';
 export const SettingsNameField = () =>
   applyDecorators(
     ApiProperty({ example: 'Moving Plates Hall' }),
-    Transform(({ value }) => (typeof value === 'string' ? value.trim() : value)),
+    Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value)),
     IsString(),
     MinLength(1, { message: 'Enter a name.' }),
     MaxLength(160),

@@ -22,6 +22,6 @@ export const TimeZoneField = () =>
       example: 'Pacific/Auckland', default: DEFAULT_TIME_ZONE, maxLength: 64,
       description: "IANA time zone whose calendar days the venue's dates follow: Insights days, licence expiry, preflight's today, mail and CSV exports",
     }),
-    Transform(({ value }) => (typeof value === 'string' ? (canonicalTimeZone(value.trim()) ?? value) : value)),
+    Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? (canonicalTimeZone(value.trim()) ?? value) : value)),
     IsTimeZone(),
   );

@@ -30,4 +30,5 @@ export class Venue extends Model {
   timeZone: string;
 
   declare id: number;
+  declare createdAt: Date;
 }

@@ -79,20 +79,20 @@ export const LivePhrase = Node.create<LivePhraseOptions>({
     return {
       insertLivePhrase:
         ({ widgetId, wordings }) =>
-        ({ commands }) =>
-          commands.insertContent({ type: this.name, attrs: { phraseId: newPhraseId(), widgetId, wordings } }),
+          ({ commands }) =>
+            commands.insertContent({ type: this.name, attrs: { phraseId: newPhraseId(), widgetId, wordings } }),
       setLivePhraseWordings:
         (phraseId, wordings) =>
-        ({ tr, state, dispatch }) => {
-          let found: number | null = null;
-          state.doc.descendants((node, pos) => {
-            if (found === null && node.type.name === this.name && node.attrs.phraseId === phraseId) found = pos;
-            return found === null;
-          });
-          if (found === null) return false;
-          if (dispatch) tr.setNodeAttribute(found, 'wordings', wordings);
-          return true;
-        },
+          ({ tr, state, dispatch }) => {
+            let found: number | null = null;
+            state.doc.descendants((node, pos) => {
+              if (found === null && node.type.name === this.name && node.attrs.phraseId === phraseId) found = pos;
+              return found === null;
+            });
+            if (found === null) return false;
+            if (dispatch) tr.setNodeAttribute(found, 'wordings', wordings);
+            return true;
+          },
     };
   },
 

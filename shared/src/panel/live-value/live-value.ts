@@ -82,8 +82,8 @@ export const LiveValue = Node.create<LiveValueOptions>({
     return {
       insertLiveValue:
         ({ widgetId, output, format }) =>
-        ({ commands }) =>
-          commands.insertContent({ type: this.name, attrs: { widgetId, output, format: format ?? DEFAULT_LIVE_VALUE_FORMAT } }),
+          ({ commands }) =>
+            commands.insertContent({ type: this.name, attrs: { widgetId, output, format: format ?? DEFAULT_LIVE_VALUE_FORMAT } }),
     };
   },
 });

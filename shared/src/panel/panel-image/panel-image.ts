@@ -58,8 +58,8 @@ export const PanelImage = Node.create<PanelImageOptions>({
     return {
       insertPanelImage:
         ({ mediaId }) =>
-        ({ commands }) =>
-          commands.insertContent({ type: this.name, attrs: { mediaId } }),
+          ({ commands }) =>
+            commands.insertContent({ type: this.name, attrs: { mediaId } }),
     };
   },
 });

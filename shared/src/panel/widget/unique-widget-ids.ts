@@ -41,7 +41,7 @@ export function uniqueWidgetIds(nodeName: string, idAttr = 'widgetId', newId: ()
       const renames: { pos: number }[] = [];
       newState.doc.descendants((node, pos) => {
         if (node.type.name !== nodeName) return true;
-        const id = node.attrs[idAttr];
+        const id: unknown = node.attrs[idAttr];
         const owned = typeof id === 'string' && owners.has(id) ? owners.get(id) === pos : true;
         if (typeof id !== 'string' || seen.has(id) || !owned) renames.push({ pos });
         else seen.add(id);

@@ -43,17 +43,17 @@ const paramsFromHTML = (element: HTMLElement) => jsonFromHTML(element, 'data-par
 /** A command setting one attribute of the widget with this id; false when there is none. */
 const setWidgetAttribute =
   (nodeName: string, widgetId: string, attribute: string, value: unknown) =>
-  ({ tr, state, dispatch }: CommandProps) => {
-    let found: number | null = null;
-    state.doc.descendants((node, pos) => {
-      if (found !== null) return false;
-      if (node.type.name === nodeName && node.attrs.widgetId === widgetId) found = pos;
-      return node.type.name !== nodeName;
-    });
-    if (found === null) return false;
-    if (dispatch) tr.setNodeAttribute(found, attribute, value);
-    return true;
-  };
+    ({ tr, state, dispatch }: CommandProps) => {
+      let found: number | null = null;
+      state.doc.descendants((node, pos) => {
+        if (found !== null) return false;
+        if (node.type.name === nodeName && node.attrs.widgetId === widgetId) found = pos;
+        return node.type.name !== nodeName;
+      });
+      if (found === null) return false;
+      if (dispatch) tr.setNodeAttribute(found, attribute, value);
+      return true;
+    };
 
 /**
  * An interactive simulation as one block. Its params are checked against the widget registry by
@@ -112,8 +112,8 @@ export const Widget = Node.create<WidgetOptions>({
     return {
       insertWidget:
         ({ widgetType, params, widgetId }) =>
-        ({ commands }) =>
-          commands.insertContent({ type: this.name, attrs: { widgetType, params, widgetId: widgetId ?? newWidgetId() } }),
+          ({ commands }) =>
+            commands.insertContent({ type: this.name, attrs: { widgetType, params, widgetId: widgetId ?? newWidgetId() } }),
       setWidgetParams: (widgetId, params) => setWidgetAttribute(this.name, widgetId, 'params', params),
       setWidgetModelCard: (widgetId, shown) => setWidgetAttribute(this.name, widgetId, 'visitorModelCard', shown),
     };

@@ -1,6 +1,7 @@
 // @vitest-environment jsdom
 import { act, cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { EditorContent, useEditor, type Editor } from '@tiptap/react';
+import { useEffect } from 'react';
 import { Editor as CoreEditor, getSchema } from '@tiptap/core';
 import { GapCursor } from '@tiptap/pm/gapcursor';
 import { afterEach, describe, expect, it } from 'vitest';
@@ -24,7 +25,9 @@ let captured: Editor | null = null;
 
 function PanelEditor() {
   const editor = useEditor({ extensions: panelEditorExtensions(options), content: examplePanelDoc(), immediatelyRender: true });
-  captured = editor;
+  useEffect(() => {
+    captured = editor;
+  });
   return <EditorContent editor={editor} />;
 }
 
