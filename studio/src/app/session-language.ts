@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useLayoutEffect, useRef } from 'react';
 import { useSession } from '../api/session';
 import { matchUiLanguage } from '@mantlepiece/shared';
 import { i18next } from './i18n';
@@ -10,7 +10,10 @@ import { i18next } from './i18n';
 export function useSessionLanguage(): void {
   const { data: session } = useSession();
   const saved = useRef<string | undefined>(undefined);
-  saved.current = session?.user.uiLanguage;
+  const uiLanguage = session?.user.uiLanguage;
+  useLayoutEffect(() => {
+    saved.current = uiLanguage;
+  });
   const userId = session?.user.id;
   useEffect(() => {
     const language = matchUiLanguage([saved.current]);

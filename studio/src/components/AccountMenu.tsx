@@ -23,7 +23,7 @@ export function AccountMenu({ className }: { className?: string }) {
           <MenuDivider />
           <MenuItem
             icon={<SignOutRegular />}
-            onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in', { replace: true }) })}
+            onClick={() => signOut.mutate(undefined, { onSettled: () => void navigate('/sign-in', { replace: true }) })}
           >
             {t('account.signOut')}
           </MenuItem>

@@ -110,7 +110,7 @@ export function GlobalSearch() {
         onFocus={() => setOpen(true)}
         onChange={(_event, data) => { setText(data.value); setOpen(true); }}
         onKeyDown={(event) => {
-          if (event.key === 'Enter' && kinds[0]) navigate(KIND_PLACES[kinds[0]].list(text.trim()));
+          if (event.key === 'Enter' && kinds[0]) void navigate(KIND_PLACES[kinds[0]].list(text.trim()));
         }}
       />
       {shown ? (

@@ -24,4 +24,3 @@ export const AREA_ICONS: Record<Area, FluentIcon> = {
   people: PeopleRegular,
   settings: SettingsRegular,
 };
-

@@ -42,10 +42,10 @@ export const CommentHighlights = Extension.create({
     return {
       showComments:
         (comments, panelId, locale) =>
-        ({ tr, dispatch }) => {
-          if (dispatch) tr.setMeta(key, { comments, panelId, locale }).setMeta('addToHistory', false);
-          return true;
-        },
+          ({ tr, dispatch }) => {
+            if (dispatch) tr.setMeta(key, { comments, panelId, locale }).setMeta('addToHistory', false);
+            return true;
+          },
     };
   },
 

@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { checkPanelDocument, type PanelConflictBody, type PanelDocJSON, type PanelIssue, type PanelView } from '@mantlepiece/shared';
 import { ApiError } from '../../api/client';
 import { savePanelDoc } from '../../api/stories';
@@ -51,7 +51,9 @@ export function usePanelAutosave(panel: PanelView, onSaved: (doc: PanelDocJSON, 
   const [state, setState] = useState<SaveState>(draft ? { status: 'pending' } : { status: 'saved' });
   const conflicted = useRef(false);
   const savedCallback = useRef(onSaved);
-  savedCallback.current = onSaved;
+  useLayoutEffect(() => {
+    savedCallback.current = onSaved;
+  });
 
   const save = useCallback(async () => {
     clearTimeout(timer.current);

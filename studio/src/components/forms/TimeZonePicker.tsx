@@ -33,10 +33,10 @@ export function TimeZonePicker({ value, onChange, disabled }: { value: string; o
       {found.length === 0
         ? <Option key="no-match" value={NO_MATCH} text="" disabled>{t('settings.timeZoneNoMatch', { query: query ?? '' })}</Option>
         : found.map((option) => (
-          <Option key={option.zone} value={option.zone} text={labelOf(option)}>
-            {option.zone}<span className={styles.offset}>{option.offset}</span>
-          </Option>
-        ))}
+            <Option key={option.zone} value={option.zone} text={labelOf(option)}>
+              {option.zone}<span className={styles.offset}>{option.offset}</span>
+            </Option>
+          ))}
     </Combobox>
   );
 }

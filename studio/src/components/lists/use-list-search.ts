@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { useDebounced } from '../use-debounced';
 import { withSearchChanges } from './list-search';
@@ -17,7 +17,9 @@ export function useListSearch(textKey = 'q') {
   const [query, setQuery] = useState(inUrl);
   const settledQuery = useDebounced(query.trim(), SEARCH_PAUSE_MS);
   const urlQuery = useRef(inUrl);
-  urlQuery.current = inUrl;
+  useLayoutEffect(() => {
+    urlQuery.current = inUrl;
+  });
 
   useEffect(() => {
     if (settledQuery !== urlQuery.current) setSearch((current) => withSearchChanges(current, { [textKey]: settledQuery }), { replace: true });

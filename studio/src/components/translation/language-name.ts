@@ -11,7 +11,7 @@ export function useLanguageName({ standalone = false }: { standalone?: boolean }
   const language = i18n.resolvedLanguage ?? 'en';
   return useCallback(
     (locale: string) => {
-      let name = locale;
+      let name: string;
       try {
         name = new Intl.DisplayNames([language], { type: 'language' }).of(locale) ?? locale;
       } catch {

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { describe, expect, it } from 'vitest';
 import { fireEvent, screen } from '@testing-library/react';
 import { convectionCell, slopeForce, type WidgetType } from '@mantlepiece/shared';
@@ -9,7 +9,9 @@ let latest: Record<string, unknown> = {};
 
 function Harness({ start, widgetType = 'slope-force' }: { start: Record<string, unknown>; widgetType?: WidgetType }) {
   const [params, setParams] = useState(start);
-  latest = params;
+  useEffect(() => {
+    latest = params;
+  });
   return <WidgetParamsForm widgetType={widgetType} params={params} onChange={setParams} />;
 }
 

@@ -45,7 +45,9 @@ export function WidgetParamsForm({ widgetType, params, onChange }: { widgetType:
     const key = field.path.join('.');
     const stored = valueAt(params, field.path);
     const typed = texts[key];
-    return typed !== undefined && parseFieldText(typed, field) === stored ? typed : stored === undefined ? '' : String(stored);
+    if (typed !== undefined && parseFieldText(typed, field) === stored) return typed;
+    // A field holds a number, a string or a yes/no; nothing else has a text to show.
+    return typeof stored === 'number' || typeof stored === 'string' || typeof stored === 'boolean' ? String(stored) : '';
   };
   const toggleGroup = (path: string[], on: boolean) => {
     const group = module.paramGroups?.[path.join('.')];

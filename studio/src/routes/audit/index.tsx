@@ -139,7 +139,7 @@ export function AuditPage() {
       <ListStates
         query={log}
         loadError={t('audit.loadError')}
-        empty={
+        empty={(
           <EmptyState
             icon={<HistoryRegular />}
             title={filtered ? t('audit.noMatchTitle') : t('audit.emptyTitle')}
@@ -147,7 +147,7 @@ export function AuditPage() {
           >
             {filtered ? t('audit.noMatchBody') : t('audit.emptyBody')}
           </EmptyState>
-        }
+        )}
       >
         {(page) => (
           <>

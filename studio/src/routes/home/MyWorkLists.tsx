@@ -74,32 +74,96 @@ export function MyWorkLists({ role }: { role: Role }) {
         switch (section.kind) {
           case 'drafts':
           case 'changesRequested':
-            return <WorkSection key={section.kind} id={`work-${section.kind}`} title={t(`home.work.${section.kind}`)} list={section.list} more="/stories"
-              toRow={(item) => ({ key: item.storyId, link: item.link, label: item.title, detail: t('home.work.changed', { when: ago(item.updatedAt) }) })} />;
+            return (
+              <WorkSection
+                key={section.kind}
+                id={`work-${section.kind}`}
+                title={t(`home.work.${section.kind}`)}
+                list={section.list}
+                more="/stories"
+                toRow={(item) => ({ key: item.storyId, link: item.link, label: item.title, detail: t('home.work.changed', { when: ago(item.updatedAt) }) })}
+              />
+            );
           case 'openComments':
-            return <WorkSection key={section.kind} id="work-openComments" title={t('home.work.openComments')} list={section.list} more="/stories"
-              toRow={(item) => ({ key: item.storyId, link: item.link, label: item.title, detail: t('home.work.comments', { count: item.openComments, when: ago(item.latestAt) }) })} />;
+            return (
+              <WorkSection
+                key={section.kind}
+                id="work-openComments"
+                title={t('home.work.openComments')}
+                list={section.list}
+                more="/stories"
+                toRow={(item) => ({ key: item.storyId, link: item.link, label: item.title, detail: t('home.work.comments', { count: item.openComments, when: ago(item.latestAt) }) })}
+              />
+            );
           case 'reviewQueue':
-            return <WorkSection key={section.kind} id="work-reviewQueue" title={t('home.work.reviewQueue')} list={section.list} more="/reviews"
-              toRow={(item) => ({ key: item.revisionId, link: item.link, label: item.title, detail: t('home.work.waiting', { number: item.revisionNumber, time: durationText(item.waitingS) }) })} />;
+            return (
+              <WorkSection
+                key={section.kind}
+                id="work-reviewQueue"
+                title={t('home.work.reviewQueue')}
+                list={section.list}
+                more="/reviews"
+                toRow={(item) => ({ key: item.revisionId, link: item.link, label: item.title, detail: t('home.work.waiting', { number: item.revisionNumber, time: durationText(item.waitingS) }) })}
+              />
+            );
           case 'translations':
-            return <WorkSection key={section.kind} id="work-translations" title={t('home.work.translations')} list={section.list} more="/translations"
-              toRow={(item) => ({ key: `${item.storyId}-${item.locale}`, link: item.link, label: `${item.title} · ${item.locale}`, detail: t('home.work.units', { untranslated: item.untranslated, stale: item.stale }) })} />;
+            return (
+              <WorkSection
+                key={section.kind}
+                id="work-translations"
+                title={t('home.work.translations')}
+                list={section.list}
+                more="/translations"
+                toRow={(item) => ({ key: `${item.storyId}-${item.locale}`, link: item.link, label: `${item.title} · ${item.locale}`, detail: t('home.work.units', { untranslated: item.untranslated, stale: item.stale }) })}
+              />
+            );
           case 'kiosks':
-            return <WorkSection key={section.kind} id="work-kiosks" title={t('home.work.kiosks')} list={section.list} more="/fleet"
-              toRow={(item) => ({
-                key: item.kioskId, link: item.link, label: `${item.station} · ${item.gallery}`,
-                detail: <>{t(`kioskStates.${item.state}`)} · {item.lastHeartbeatAt ? t('home.work.lastHeard', { when: ago(item.lastHeartbeatAt) }) : t('home.work.neverHeard')}{item.demo ? <> <DemoBadge /></> : null}</>,
-              })} />;
+            return (
+              <WorkSection
+                key={section.kind}
+                id="work-kiosks"
+                title={t('home.work.kiosks')}
+                list={section.list}
+                more="/fleet"
+                toRow={(item) => ({
+                  key: item.kioskId, link: item.link, label: `${item.station} · ${item.gallery}`,
+                  detail: <>{t(`kioskStates.${item.state}`)} · {item.lastHeartbeatAt ? t('home.work.lastHeard', { when: ago(item.lastHeartbeatAt) }) : t('home.work.neverHeard')}{item.demo ? <> <DemoBadge /></> : null}</>,
+                })}
+              />
+            );
           case 'releases':
-            return <WorkSection key={section.kind} id="work-releases" title={t('home.work.releases')} list={section.list} more="/releases"
-              toRow={(item) => ({ key: item.releaseId, link: item.link, label: t('home.work.release', { number: item.number, gallery: item.gallery }), detail: `${t(`releaseStates.${item.state}`)} · ${ago(item.at)}` })} />;
+            return (
+              <WorkSection
+                key={section.kind}
+                id="work-releases"
+                title={t('home.work.releases')}
+                list={section.list}
+                more="/releases"
+                toRow={(item) => ({ key: item.releaseId, link: item.link, label: t('home.work.release', { number: item.number, gallery: item.gallery }), detail: `${t(`releaseStates.${item.state}`)} · ${ago(item.at)}` })}
+              />
+            );
           case 'invitations':
-            return <WorkSection key={section.kind} id="work-invitations" title={t('home.work.invitations')} list={section.list} more="/people"
-              toRow={(item) => ({ key: item.invitationId, link: item.link, label: `${item.name} (${item.email})`, detail: t('home.work.invitationExpires', { date: formatDate(item.expiresAt) }) })} />;
+            return (
+              <WorkSection
+                key={section.kind}
+                id="work-invitations"
+                title={t('home.work.invitations')}
+                list={section.list}
+                more="/people"
+                toRow={(item) => ({ key: item.invitationId, link: item.link, label: `${item.name} (${item.email})`, detail: t('home.work.invitationExpires', { date: formatDate(item.expiresAt) }) })}
+              />
+            );
           case 'licences':
-            return <WorkSection key={section.kind} id="work-licences" title={t('home.work.licences')} list={section.list} more="/media"
-              toRow={(item) => ({ key: item.mediaId, link: item.link, label: item.filename, detail: t(item.daysLeft < 0 ? 'home.work.licenceEnded' : 'home.work.licenceEnds', { date: item.expiresOn }) })} />;
+            return (
+              <WorkSection
+                key={section.kind}
+                id="work-licences"
+                title={t('home.work.licences')}
+                list={section.list}
+                more="/media"
+                toRow={(item) => ({ key: item.mediaId, link: item.link, label: item.filename, detail: t(item.daysLeft < 0 ? 'home.work.licenceEnded' : 'home.work.licenceEnds', { date: item.expiresOn }) })}
+              />
+            );
         }
       })}
     </div>

@@ -57,7 +57,7 @@ function AcceptInvitationForm({ token, invitation }: { token: string; invitation
     const found = { name: requiredProblem(t, name), ...newPasswordProblems(t, password.password, password.confirm) };
     setProblems(found);
     if (hasProblems(found)) return;
-    accept.mutate({ token, name: name.trim(), password: password.password }, { onSuccess: () => navigate('/', { replace: true }) });
+    accept.mutate({ token, name: name.trim(), password: password.password }, { onSuccess: () => void navigate('/', { replace: true }) });
   };
 
   const error = accept.error;

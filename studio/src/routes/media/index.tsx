@@ -51,7 +51,7 @@ export function MediaPage() {
       <ListStates
         query={media}
         loadError={t('media.loadError')}
-        empty={
+        empty={(
           <EmptyState
             icon={<ImageMultipleRegular />}
             title={filtered ? t('media.noMatchTitle') : t('media.emptyTitle')}
@@ -59,7 +59,7 @@ export function MediaPage() {
           >
             {filtered ? t('media.noMatchBody') : t('media.emptyBody')}
           </EmptyState>
-        }
+        )}
       >
         {(page) => (
           <>

@@ -29,8 +29,7 @@ export function EditPersonDialog({ person, onClose }: { person: UserView; onClos
         update.mutate(
           { person, name: values.name.trim(), venueId: values.venueId, roles: values.roles, locales: localesToSend(values) },
           { onSuccess: onClose },
-        )
-      }
+        )}
     />
   );
 }

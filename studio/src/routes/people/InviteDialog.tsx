@@ -24,8 +24,7 @@ export function InviteDialog({ onClose, onInvited }: { onClose: () => void; onIn
         invite.mutate(
           { email: values.email.trim(), name: values.name.trim(), venueId: values.venueId, roles: values.roles, locales: localesToSend(values) },
           { onSuccess: onInvited },
-        )
-      }
+        )}
     />
   );
 }

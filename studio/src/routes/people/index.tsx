@@ -81,7 +81,7 @@ export function PeoplePage() {
       <ListStates
         query={users}
         loadError={t('people.loadError')}
-        empty={
+        empty={(
           <EmptyState
             icon={<PeopleSearchRegular />}
             title={t('people.noMatchTitle')}
@@ -89,7 +89,7 @@ export function PeoplePage() {
           >
             {t('people.noMatchBody')}
           </EmptyState>
-        }
+        )}
       >
         {(page) => (
           <>

@@ -87,7 +87,7 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
     <>
       <PageHeader
         title={t('revision.title', { story: revision.storyTitle, number: revision.number })}
-        intro={
+        intro={(
           <span className={styles.facts}>
             <RevisionStateBadge state={revision.state} />
             {story.data ? <span>{t('revision.storyIs')} <StoryStateBadge state={story.data.state} approvedRevision={story.data.approvedRevision} /></span> : null}
@@ -97,7 +97,7 @@ function RevisionReview({ revision, comparison }: { revision: RevisionView; comp
             </span>
             <span>{t('revision.submitted', { name: revision.submittedBy?.name ?? t('revision.formerColleague'), date: formatDate(revision.submittedAt) })}</span>
           </span>
-        }
+        )}
         actions={<LinkButton to={`/stories/${revision.storyId}`}>{t('revision.openStory')}</LinkButton>}
       />
 

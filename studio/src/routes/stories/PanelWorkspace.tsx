@@ -1,4 +1,4 @@
-import { useDeferredValue, useEffect, useRef, useState } from 'react';
+import { useDeferredValue, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { Field, makeStyles, Select, SpinButton, Spinner, Tab, TabList, Text, tokens } from '@fluentui/react-components';
 import { EditorContent, useEditorState } from '@tiptap/react';
 import { NodeSelection } from '@tiptap/pm/state';
@@ -72,7 +72,9 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
   const [chosenWidget, setChosenWidget] = useState<string | null>(null);
   const budget = useUpdatePanelBudget(story.id);
   const change = useRef(autosave.change);
-  change.current = autosave.change;
+  useLayoutEffect(() => {
+    change.current = autosave.change;
+  });
 
   const editor = usePanelEditor({
     initialDoc: autosave.initialDoc,
@@ -100,22 +102,24 @@ function PanelEditorArea({ story, panel, autosave, readOnly }: { story: StoryDet
       };
     },
   });
-  useEffect(() => {
-    if (selected.widget) {
-      setChosenWidget(selected.widget);
-      setSideTab('widget');
-    }
-    if (selected.phrase) setSideTab('widget');
-  }, [selected.widget, selected.phrase]);
+  // State adjusted while rendering when the selection changes, not in an effect.
+  const [seenSelection, setSeenSelection] = useState(selected);
+  if (seenSelection.widget !== selected.widget || seenSelection.phrase !== selected.phrase) {
+    setSeenSelection(selected);
+    if (selected.widget) setChosenWidget(selected.widget);
+    if (selected.widget || selected.phrase) setSideTab('widget');
+  }
 
   const shownRevision = draftComments.revision;
   useEffect(() => {
     if (shownRevision) editor.commands.showComments(shownRevision.comments, panel.id, locale);
   }, [editor, shownRevision, panel.id, locale]);
 
-  useEffect(() => {
+  const [seenSaveStatus, setSeenSaveStatus] = useState(autosave.state.status);
+  if (seenSaveStatus !== autosave.state.status) {
+    setSeenSaveStatus(autosave.state.status);
     if (autosave.state.status === 'conflict') setDialog('conflict');
-  }, [autosave.state.status]);
+  }
 
   const widgets = widgetsIn(doc);
   const widget = widgets.find((candidate) => candidate.widgetId === chosenWidget) ?? widgets[0];

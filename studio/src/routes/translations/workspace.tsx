@@ -63,6 +63,7 @@ function Workspace({ target }: { target: TranslationTarget }) {
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
   const items = units.data?.items ?? [];
   const requested = search.get('unit') ?? undefined;
+  // eslint-disable-next-line react-hooks/refs -- read while rendering on purpose; replacing the flag with state changes which unit a re-render selects
   const selected = items.find((unit) => unit.unitId === requested) ?? (landOnLast.current ? items.at(-1) : items[0]);
 
   useEffect(() => {
