@@ -7,7 +7,7 @@ import { PageNumberField, PageSizeField } from '../../common/page.js';
 /** `GET /api/search?q=&kind=&page=&pageSize=`: bounded text, and paging per kind. */
 export class SearchQuery {
   @ApiProperty({ description: 'Words to look for in story titles, image file names and credits, and people’s names and addresses', minLength: SEARCH_TEXT_LENGTH.min, maxLength: SEARCH_TEXT_LENGTH.max })
-  @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
+  @Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value))
   @IsString({ message: 'Type the words to look for.' })
   @Length(SEARCH_TEXT_LENGTH.min, SEARCH_TEXT_LENGTH.max, { message: `Type ${SEARCH_TEXT_LENGTH.min} to ${SEARCH_TEXT_LENGTH.max} characters to search.` })
   q: string;

@@ -23,7 +23,7 @@ function withNodeView(extension: AnyExtension, options: PanelEditorOptions): Any
   if (!view) return extension;
   return extension.extend({
     addOptions() {
-      return { ...this.parent?.(), ...options };
+      return { ...(this.parent?.() as object | undefined), ...options };
     },
     addNodeView() {
       return ReactNodeViewRenderer(view, {
