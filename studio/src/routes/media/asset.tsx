@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import {
   Button, Combobox, Field, Input, makeStyles, Option, Radio, RadioGroup, Spinner, Text, Textarea, tokens,
 } from '@fluentui/react-components';
-import { lookupText, type MediaView } from '@mantlepiece/shared';
+import { directionOf, lookupText, type MediaView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useParams } from 'react-router-dom';
 import { ApiError } from '../../api/client';
@@ -155,7 +155,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
                   hint={served ? t('asset.altServedBy', { language: languageLabel(served) }) : undefined}
                   validationMessage={locale === locales[0] ? message('alt') : undefined}
                 >
-                  <Textarea lang={locale} value={values.alt[locale] ?? ''} readOnly={!writer} resize="vertical" rows={4} onChange={(_event, data) => set({ alt: { ...values.alt, [locale]: data.value } })} />
+                  <Textarea lang={locale} dir={directionOf(locale)} value={values.alt[locale] ?? ''} readOnly={!writer} resize="vertical" rows={4} onChange={(_event, data) => set({ alt: { ...values.alt, [locale]: data.value } })} />
                 </Field>
               );
             })}
