@@ -54,33 +54,29 @@ beforeAll(async () => {
   gallery = (await call<ListPage<GalleryView>>('admin', 'GET', '/galleries?pageSize=100')).items.find((candidate) => candidate.name === GALLERY)!;
   // A station of this suite's own, so pairing here replaces no kiosk another suite set up.
   stationName = `Fleet Watch Bench ${Math.random().toString(36).slice(2, 6)}`;
-  await call('admin', 'POST', '/stations', { galleryId: gallery.id, name: stationName, screenWidthPx: 1920, screenHeightPx: 1080, orientation: 'landscape', mountingHeightMm: 1100 });
+  const station = await call<{ id: number }>('admin', 'POST', '/stations', { galleryId: gallery.id, name: stationName, screenWidthPx: 1920, screenHeightPx: 1080, orientation: 'landscape', mountingHeightMm: 1100 });
 
   browser = await launchBrowser();
   studio = await (await newContext(browser)).newPage();
   await signIn(studio, 'technician@demo.test');
   kioskContext = await browser.newContext({ baseURL: baseUrl, locale: 'en-GB', viewport: { width: 1920, height: 1080 }, hasTouch: true });
   screen = await kioskContext.newPage();
-});
+
+  // Every test below meets a kiosk paired at the suite's station and playing the gallery's Live release.
+  liveRelease = await ensureLiveRelease();
+  await screen.goto(KIOSK_PATH);
+  const shown = screen.locator('[data-pairing-code]');
+  await shown.waitFor();
+  ({ kioskId } = await call<{ kioskId: number }>('technician', 'POST', `/stations/${station.id}/pair`, { pairingCode: await shown.getAttribute('data-pairing-code') }));
+  await screen.getByRole('button', { name: /Touch to begin/ }).waitFor({ timeout: 30_000 });
+}, 120_000);
 
 afterAll(async () => {
   await browser?.close();
 });
 
 describe('Fleet and Insights follow a kiosk running in a browser', () => {
-  it('has a release of the demo gallery Live for the kiosk to play, publishing one when none is', async () => {
-    liveRelease = await ensureLiveRelease();
-    expect(liveRelease.number).toBeGreaterThan(0);
-  });
-
   it('shows a newly paired kiosk online on the Fleet page, playing the live release', async () => {
-    await screen.goto(KIOSK_PATH);
-    const shown = screen.locator('[data-pairing-code]');
-    await shown.waitFor();
-    const station = (await call<ListPage<{ id: number; name: string }>>('admin', 'GET', `/stations?galleryId=${gallery.id}&pageSize=100`)).items.find((s) => s.name === stationName)!;
-    ({ kioskId } = await call<{ kioskId: number }>('technician', 'POST', `/stations/${station.id}/pair`, { pairingCode: await shown.getAttribute('data-pairing-code') }));
-    await screen.getByRole('button', { name: /Touch to begin/ }).waitFor({ timeout: 30_000 });
-
     await studio.getByRole('navigation', { name: 'Studio areas' }).getByRole('link', { name: 'Fleet' }).click();
     await studio.getByRole('heading', { level: 1, name: 'Fleet' }).waitFor();
     await studio.getByLabel('Gallery').selectOption({ label: GALLERY });
