@@ -45,7 +45,8 @@ export function StoryScreen({ t, release, story, settings, reducedMotion, panelI
   const { stage, size } = useStageSize();
   const layout = layoutOfScreen(size);
   const resolveMedia = useMemo(() => mediaResolver(release, shown?.locale ?? settings.locale), [release, shown?.locale, settings.locale]);
-  const touches = useMemo(() => (panel && shown ? new WidgetTouches(shown.doc, { storyId: story.id, panelId: panel.id }, record) : null), [panel, shown?.doc, story.id, record]);
+  const shownDoc = shown?.doc;
+  const touches = useMemo(() => (panel && shownDoc ? new WidgetTouches(shownDoc, { storyId: story.id, panelId: panel.id }, record) : null), [panel, shownDoc, story.id, record]);
   const swipe = useRef<{ x: number; y: number } | null>(null);
 
   // Dwell is measured from when a panel appears until it goes (turned, left, or reset).

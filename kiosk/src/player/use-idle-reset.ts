@@ -25,8 +25,9 @@ export function useIdleReset({ enabled, idleMs, warningMs, onReset }: { enabled:
     setSecondsLeft(null);
   }, [clearTimers]);
 
-  const restart = useCallback(() => {
-    stop();
+  // Starts the idle count from now; the warning, if shown, is the caller's to hide.
+  const arm = useCallback(() => {
+    clearTimers();
     timer.current = setTimeout(() => {
       let left = Math.ceil(warningMs / 1000);
       setSecondsLeft(left);
@@ -37,17 +38,21 @@ export function useIdleReset({ enabled, idleMs, warningMs, onReset }: { enabled:
         resetRef.current();
       }, 1000);
     }, idleMs);
-  }, [idleMs, warningMs, stop]);
+  }, [idleMs, warningMs, clearTimers, stop]);
+  const restart = useCallback(() => {
+    arm();
+    setSecondsLeft(null);
+  }, [arm]);
 
   useEffect(() => {
     if (!enabled) return clearTimers();
-    restart();
+    arm();
     for (const type of ACTIVITY) window.addEventListener(type, restart, { capture: true, passive: true });
     return () => {
       for (const type of ACTIVITY) window.removeEventListener(type, restart, { capture: true });
       stop();
     };
-  }, [enabled, restart, stop, clearTimers]);
+  }, [enabled, arm, restart, stop, clearTimers]);
 
   return { secondsLeft, stillHere: restart };
 }

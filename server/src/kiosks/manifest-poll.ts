@@ -47,7 +47,7 @@ export function answerManifestPollsFirst(app: NestExpressApplication, securityHe
     if (!kiosk) return false;
     const live = await releases.liveManifest(kiosk);
     // Helmet and our policy header use node's own response methods only, none of Express's.
-    await new Promise<void>((resolve, reject) => securityHeaders(req as Request, res as Response, (error?: unknown) => (error ? reject(error instanceof Error ? error : new Error(String(error))) : resolve())));
+    await new Promise<void>((resolve, reject) => securityHeaders(req as Request, res as Response, (error?: unknown) => (error ? reject(error instanceof Error ? error : new Error('Security headers could not be set', { cause: error })) : resolve())));
     answerManifestPoll(res, live, req.headers['if-none-match']);
     return true;
   }

@@ -88,7 +88,7 @@ export abstract class SettingsService<M extends Model & { id: number }, V> {
   async create(values: object, member: Member): Promise<V> {
     await this.refuseUnlessKeeperOfParent(values, member);
     return this.write(async () => {
-      const { id } = await this.model.create({ ...values } as never);
+      const { id } = (await this.model.create({ ...values } as never)) as { id: number };
       return (await this.model.findByPk(id, { include: this.kind.venue.include }))!;
     }, member);
   }

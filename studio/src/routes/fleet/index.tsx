@@ -29,8 +29,8 @@ export function FleetPage() {
   const fleet = useFleet(params);
   const galleries = useGalleries(CHOICES_BY_NAME);
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
-  // States are the server's; "12 seconds ago" is measured from when the list arrived.
-  const now = new Date(fleet.dataUpdatedAt || Date.now());
+  // States are the server's; "12 seconds ago" is measured from when the list arrived (shown only once it has).
+  const now = new Date(fleet.dataUpdatedAt);
 
   return (
     <>

@@ -221,7 +221,7 @@ function AssetDetails({ asset }: { asset: MediaView }) {
           problem={deleteProblem}
           onConfirm={() => remove.mutate(asset.id, {
             onSuccess: () => {
-              navigate('/media');
+              void navigate('/media');
               offerUndo({ key: 'undo.imageDeleted', values: { name: asset.filename } }, () => restore.mutateAsync(asset.id));
             },
           })}

@@ -81,7 +81,7 @@ export function StoriesPage() {
         }
       />
 
-      {creating ? <CreateStoryDialog onClose={() => setCreating(false)} onCreated={(story) => navigate(`/stories/${story.id}`)} /> : null}
+      {creating ? <CreateStoryDialog onClose={() => setCreating(false)} onCreated={(story) => void navigate(`/stories/${story.id}`)} /> : null}
     </>
   );
 }
