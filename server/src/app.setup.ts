@@ -1,6 +1,6 @@
 import { RequestMethod } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
 import { json } from 'express';
 import { ApiExceptionFilter } from './common/api-exception.filter.js';
@@ -8,6 +8,7 @@ import { jsonBodyOptions } from './common/json-body.js';
 import { createValidationPipe } from './common/validation.js';
 import { ConfigService } from './config/config.service.js';
 import { routeReads } from './database/replica-reads.js';
+import { buildApiDocument } from './openapi/api-document.js';
 import { MEDIA_FILES_PATH } from './media/media-files.controller.js';
 import { answerManifestPollsFirst } from './kiosks/manifest-poll.js';
 import { MEDIA_STORE, type MediaStore } from './media/media-store.js';
@@ -46,12 +47,7 @@ function configureApp(app: NestExpressApplication, fileOrigin: string | null): R
   app.useGlobalPipes(createValidationPipe());
   app.useGlobalFilters(new ApiExceptionFilter());
 
-  const document = new DocumentBuilder()
-    .setTitle('Mantlepiece API')
-    .setDescription('Stories for earth-science gallery touchscreens: studio, kiosks and their server.')
-    .addBearerAuth()
-    .build();
-  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, document));
+  SwaggerModule.setup('api/docs', app, () => buildApiDocument(app));
 
   serveApps(app, [
     { prefix: '/', dir: config.studioDist },

@@ -5,6 +5,7 @@ import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { AUDIT_READERS, AuditService } from './audit.service.js';
 import { ListAuditEventsQuery } from './dto/list-audit-events.query.js';
+import { ApiAnswer } from '../openapi/api-answer.decorator.js';
 
 /** Read-only on purpose: the audit trail has no update or delete route. */
 @ApiTags('audit')
@@ -14,6 +15,7 @@ export class AuditController {
   constructor(private readonly audit: AuditService) {}
 
   /** A page of JSON, or with `Accept: text/csv` every matching event as a file. */
+  @ApiAnswer('AuditEventPage', { alsoAs: 'text/csv' })
   @Get()
   @Roles(...AUDIT_READERS)
   @ApiProduces('application/json', 'text/csv')

@@ -16,6 +16,7 @@ import { SignInDto } from './dto/sign-in.dto.js';
 import { UpdateProfileDto } from './dto/update-profile.dto.js';
 import { LocalAuthGuard } from './local-auth.guard.js';
 import { PasswordResetsService } from './password-resets.service.js';
+import { ApiAnswer, ApiAnswerSent, ApiNoBody } from '../openapi/api-answer.decorator.js';
 
 export const REFRESH_COOKIE = 'mp_refresh';
 /** The cookie goes back only to the auth routes, never to the rest of the API. */
@@ -35,6 +36,7 @@ export class AuthController {
   /** The local strategy has checked the credentials (and the limits) by the time this runs. */
   @Public()
   @UseGuards(LocalAuthGuard)
+  @ApiAnswer('SessionView')
   @Post('login')
   @HttpCode(HttpStatus.OK)
   @ApiBody({ type: SignInDto })
@@ -48,6 +50,8 @@ export class AuthController {
    * the server does not accept is still 401.
    */
   @Public()
+  @ApiAnswerSent('SessionView')
+  @ApiNoBody(HttpStatus.NO_CONTENT, 'Nobody is signed in: the request carried no session cookie.')
   @Post('refresh')
   async refresh(@Req() req: Request, @Ip() ip: string, @Res() res: Response): Promise<void> {
     const token: string | undefined = req.cookies?.[REFRESH_COOKIE];
@@ -60,6 +64,7 @@ export class AuthController {
 
   /** Public, so a person whose access token has lapsed can still end the session. */
   @Public()
+  @ApiNoBody()
   @Post('logout')
   @HttpCode(HttpStatus.NO_CONTENT)
   async logout(@Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<void> {
@@ -68,24 +73,28 @@ export class AuthController {
   }
 
   @ApiBearerAuth()
+  @ApiAnswer('UserView')
   @Get('me')
   me(@CurrentUser() user: User) {
     return toUserView(user);
   }
 
   @ApiBearerAuth()
+  @ApiAnswer('UserView')
   @Patch('me')
   updateMe(@CurrentUser() user: User, @Body() dto: UpdateProfileDto) {
     return this.users.updateOwnProfile(user, dto);
   }
 
   @Public()
+  @ApiAnswer('InvitationPreview')
   @Get('invitations/:token')
   invitation(@Param('token') token: string) {
     return this.invitations.describe(token);
   }
 
   @Public()
+  @ApiAnswer('SessionView')
   @Post('invitations/accept')
   @HttpCode(HttpStatus.OK)
   async acceptInvitation(@Body() dto: AcceptInvitationDto, @Ip() ip: string, @Res({ passthrough: true }) res: Response): Promise<SessionView> {
@@ -93,6 +102,7 @@ export class AuthController {
   }
 
   @Public()
+  @ApiNoBody(HttpStatus.ACCEPTED, 'Taken: a mail goes out when the address has an account.')
   @Post('password-reset')
   @HttpCode(HttpStatus.ACCEPTED)
   async requestPasswordReset(@Body() dto: RequestPasswordResetDto, @Ip() ip: string): Promise<void> {
@@ -100,6 +110,7 @@ export class AuthController {
   }
 
   @Public()
+  @ApiNoBody()
   @Post('password-reset/complete')
   @HttpCode(HttpStatus.NO_CONTENT)
   async completePasswordReset(@Body() dto: CompletePasswordResetDto, @Ip() ip: string): Promise<void> {

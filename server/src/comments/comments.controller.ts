@@ -1,11 +1,11 @@
-import { Body, Controller, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Param, ParseIntPipe, Patch, Post, HttpStatus } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { COMMENTERS } from './comment-policy.js';
 import { CommentsService } from './comments.service.js';
 import { CreateCommentDto, UpdateCommentDto } from './dto/comment.dto.js';
+import { ApiAnswer } from '../openapi/api-answer.decorator.js';
 
 /** Curators and educators talk about a revision here. */
 @ApiTags('comments')
@@ -15,13 +15,13 @@ import { CreateCommentDto, UpdateCommentDto } from './dto/comment.dto.js';
 export class CommentsController {
   constructor(private readonly comments: CommentsService) {}
 
-  @ApiCan('comment', { one: true, created: true })
+  @ApiAnswer('CommentView', { status: HttpStatus.CREATED })
   @Post('revisions/:id/comments')
   add(@Param('id', ParseIntPipe) revisionId: number, @CurrentUser() author: User, @Body() dto: CreateCommentDto) {
     return this.comments.addComment(revisionId, author, dto);
   }
 
-  @ApiCan('comment')
+  @ApiAnswer('CommentView')
   @Patch('comments/:id')
   setResolved(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User, @Body() dto: UpdateCommentDto) {
     return this.comments.setResolved(id, person, dto.resolved);

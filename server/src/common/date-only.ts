@@ -22,7 +22,7 @@ function IsDateOnly() {
 
 /** An optional date that may also be cleared with null. */
 export const OptionalDateOnlyField = (description: string) =>
-  applyDecorators(ApiPropertyOptional({ example: '2027-06-30', nullable: true, description }), IsOptional(), IsDateOnly());
+  applyDecorators(ApiPropertyOptional({ example: '2027-06-30', type: 'string', format: 'date', nullable: true, description }), IsOptional(), IsDateOnly());
 
 /** Today's date in UTC, as DATE columns hold it. */
 export const dateOnlyOf = (moment: Date): string => moment.toISOString().slice(0, 10);

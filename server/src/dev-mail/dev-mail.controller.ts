@@ -3,6 +3,7 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ForOrganisation, Roles } from '../auth/auth.decorators.js';
 import { PageQuery } from '../common/page.js';
 import { DevMailService } from './dev-mail.service.js';
+import { ApiAnswer } from '../openapi/api-answer.decorator.js';
 
 @ApiTags('dev')
 @ApiBearerAuth()
@@ -12,11 +13,13 @@ import { DevMailService } from './dev-mail.service.js';
 export class DevMailController {
   constructor(private readonly devMail: DevMailService) {}
 
+  @ApiAnswer('CapturedMailPage')
   @Get()
   list(@Query() query: PageQuery) {
     return this.devMail.list(query);
   }
 
+  @ApiAnswer('CapturedMail')
   @Get(':id')
   get(@Param('id') id: string) {
     return this.devMail.get(id);

@@ -6,6 +6,7 @@ import type { User } from '../users/models/user.model.js';
 import { InsightsQuery } from './dto/insights.query.js';
 import { toInsightsCsv } from './insights.presenter.js';
 import { INSIGHTS_READERS, InsightsService } from './insights.service.js';
+import { ApiAnswer } from '../openapi/api-answer.decorator.js';
 
 @ApiTags('insights')
 @ApiBearerAuth()
@@ -14,6 +15,7 @@ export class InsightsController {
   constructor(private readonly insights: InsightsService) {}
 
   /** The figures as JSON, or with `Accept: text/csv` the same figures as a file. */
+  @ApiAnswer('InsightsView', { alsoAs: 'text/csv' })
   @Get()
   @Roles(...INSIGHTS_READERS)
   @ApiProduces('application/json', 'text/csv')

@@ -12,6 +12,7 @@ import { answerManifestPoll } from './manifest-poll.js';
 import { CompletePairingDto } from './dto/pairing.dto.js';
 import { KiosksService } from './kiosks.service.js';
 import { PairingService } from './pairing.service.js';
+import { ApiAnswer, ApiAnswerSent, ApiFileAnswer, ApiNoBody } from '../openapi/api-answer.decorator.js';
 
 const SHA256 = /^[0-9a-f]{64}$/;
 
@@ -32,6 +33,8 @@ export class KioskController {
    * are several and none is named: the kiosk then shows its neutral pairing screen.
    */
   @PairedOrUnpairedKioskRoute()
+  @ApiAnswerSent('KioskVenueView')
+  @ApiNoBody(HttpStatus.NO_CONTENT, 'Several venues and none named: the kiosk shows its neutral pairing screen.')
   @Get('venue')
   async venue(@CurrentKiosk() kiosk: PairedKiosk | undefined, @Query() query: KioskVenueQuery, @Res() res: Response): Promise<void> {
     const venue = kiosk ? await this.venues.forPairedKiosk(kiosk.station.galleryId) : await this.venues.forUnpairedKiosk(query.slug);
@@ -40,12 +43,15 @@ export class KioskController {
   }
 
   @Public()
+  @ApiAnswer('PairStartResponse', { status: HttpStatus.CREATED })
   @Post('pair/start')
   start(@Ip() ip: string) {
     return this.pairing.start(ip);
   }
 
   @Public()
+  @ApiAnswerSent('KioskCredential')
+  @ApiAnswerSent('PairCompleteWaiting', { status: HttpStatus.ACCEPTED, description: 'Not paired yet: poll again.' })
   @Post('pair/complete')
   async complete(@Body() dto: CompletePairingDto, @Res({ passthrough: true }) res: Response) {
     const answer = await this.pairing.complete(dto.pollToken);
@@ -60,6 +66,9 @@ export class KioskController {
    */
   @ApiBearerAuth()
   @KioskRoute()
+  @ApiAnswerSent('KioskManifestResponse')
+  @ApiNoBody(HttpStatus.NO_CONTENT, 'Nothing is published for the gallery yet.')
+  @ApiNoBody(HttpStatus.NOT_MODIFIED, 'Unchanged since the ETag the kiosk sent.')
   @Get('manifest')
   async manifest(@CurrentKiosk() kiosk: PairedKiosk, @Headers('if-none-match') ifNoneMatch: string | undefined, @Res() res: Response): Promise<void> {
     answerManifestPoll(res, await this.releases.liveManifest(kiosk), ifNoneMatch);
@@ -71,6 +80,9 @@ export class KioskController {
    */
   @ApiBearerAuth()
   @KioskRoute()
+  @ApiFileAnswer('*/*', 'The file, named by its SHA-256.')
+  @ApiFileAnswer('*/*', 'The byte range asked for.', { status: HttpStatus.PARTIAL_CONTENT })
+  @ApiNoBody(HttpStatus.FOUND, 'Sent to a short-lived presigned URL of the object store.')
   @Get('files/:sha256')
   async file(@CurrentKiosk() kiosk: PairedKiosk, @Param('sha256') sha256: string, @Req() req: Request, @Res() res: Response): Promise<void> {
     if (!SHA256.test(sha256)) throw new NotFoundException('This gallery has no such file.');
@@ -86,6 +98,7 @@ export class KioskController {
 
   @ApiBearerAuth()
   @KioskRoute()
+  @ApiNoBody()
   @Post('heartbeat')
   @HttpCode(HttpStatus.NO_CONTENT)
   heartbeat(@CurrentKiosk() kiosk: PairedKiosk, @Body() dto: HeartbeatDto) {
@@ -94,6 +107,7 @@ export class KioskController {
 
   @ApiBearerAuth()
   @KioskRoute()
+  @ApiAnswer('EventsResponse')
   @Post('events')
   @HttpCode(HttpStatus.OK)
   events(@CurrentKiosk() kiosk: PairedKiosk, @Body() dto: KioskEventsDto) {

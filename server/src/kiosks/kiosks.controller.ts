@@ -1,6 +1,5 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Ip, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { KioskStates } from '../fleet/kiosk-states.service.js';
@@ -9,6 +8,7 @@ import { PairStationDto } from './dto/pairing.dto.js';
 import { FLEET_KEEPERS } from './kiosk-policy.js';
 import { KiosksService } from './kiosks.service.js';
 import { PairingService } from './pairing.service.js';
+import { ApiAnswer } from '../openapi/api-answer.decorator.js';
 
 /** The fleet as technicians handle it: pairing at a station, the kiosk list, revoking. */
 @ApiTags('kiosks')
@@ -22,19 +22,20 @@ export class KiosksController {
     private readonly states: KioskStates,
   ) {}
 
+  @ApiAnswer('PairedStationView', { status: HttpStatus.CREATED })
   @Post('stations/:id/pair')
   pair(@Param('id', ParseIntPipe) stationId: number, @Body() dto: PairStationDto, @CurrentUser() user: User, @Ip() address: string) {
     return this.pairing.pairStation(stationId, dto.pairingCode, user, address);
   }
 
-  @ApiCan('kiosk', { page: true })
+  @ApiAnswer('KioskPage')
   @Get('kiosks')
   async list(@Query() query: ListKiosksQuery, @CurrentUser() person: User) {
     const page = await this.kiosks.list(query, person);
     return { ...page, items: page.items.map((kiosk) => this.states.present(kiosk)), thresholds: this.states.thresholds };
   }
 
-  @ApiCan('kiosk')
+  @ApiAnswer('KioskView')
   @Post('kiosks/:id/revoke')
   @HttpCode(HttpStatus.OK)
   revoke(@Param('id', ParseIntPipe) id: number, @CurrentUser() user: User) {

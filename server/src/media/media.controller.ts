@@ -2,13 +2,13 @@ import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPip
 import { FilesInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiConsumes, ApiTags } from '@nestjs/swagger';
 import { ROLES, type LicenceIdsView } from '@mantlepiece/shared';
-import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { ListMediaQuery, UpdateMediaDto, UploadMediaDto } from './dto/media.dto.js';
 import { LICENCE_IDS_IN_SUGGESTION_ORDER } from './licence-ids.js';
 import { MEDIA_KEEPERS } from './media-policy.js';
 import { MediaService, type UploadedFile } from './media.service.js';
+import { ApiAnswer, ApiNoBody } from '../openapi/api-answer.decorator.js';
 
 /** How many images one upload may carry; the size limit per file comes from MEDIA_MAX_BYTES. */
 export const MAX_FILES_PER_UPLOAD = 20;
@@ -20,7 +20,7 @@ export const MAX_FILES_PER_UPLOAD = 20;
 export class MediaController {
   constructor(private readonly media: MediaService) {}
 
-  @ApiCan('media', { array: true, created: true })
+  @ApiAnswer('MediaList', { status: HttpStatus.CREATED })
   @Post()
   @ApiConsumes('multipart/form-data')
   @UseInterceptors(FilesInterceptor('file', MAX_FILES_PER_UPLOAD))
@@ -28,8 +28,8 @@ export class MediaController {
     return this.media.upload(uploader, files, fields.venueId);
   }
 
-  @ApiCan('media', { page: true, listCan: 'mediaLibrary' })
   @Roles(...ROLES)
+  @ApiAnswer('MediaPage')
   @Get()
   list(@Query() query: ListMediaQuery, @CurrentUser() person: User) {
     return this.media.list(query, person);
@@ -37,24 +37,26 @@ export class MediaController {
 
   /** The SPDX identifiers a licence may name, in the order the studio suggests them; the server's check reads the same list. */
   @Roles(...ROLES)
+  @ApiAnswer('LicenceIdsView')
   @Get('licences')
   licences(): LicenceIdsView {
     return { ids: LICENCE_IDS_IN_SUGGESTION_ORDER };
   }
 
-  @ApiCan('media')
   @Roles(...ROLES)
+  @ApiAnswer('MediaView')
   @Get(':id')
   get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
     return this.media.get(id, person);
   }
 
-  @ApiCan('media')
+  @ApiAnswer('MediaView')
   @Patch(':id')
   update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateMediaDto, @CurrentUser() person: User) {
     return this.media.updateDetails(id, dto, person);
   }
 
+  @ApiNoBody()
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
   delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
@@ -62,7 +64,7 @@ export class MediaController {
   }
 
   /** Undo of a delete, within the deletion grace (DELETION_GRACE_MS). */
-  @ApiCan('media')
+  @ApiAnswer('MediaView')
   @Post(':id/restore')
   @HttpCode(HttpStatus.OK)
   restore(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {

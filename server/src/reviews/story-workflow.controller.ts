@@ -1,11 +1,11 @@
 import { Body, Controller, HttpCode, HttpStatus, Param, ParseIntPipe, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { STORY_WORKFLOW } from '@mantlepiece/shared';
-import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { SubmitForReviewDto } from './dto/submit.dto.js';
 import { ReviewsService } from './reviews.service.js';
+import { ApiAnswer } from '../openapi/api-answer.decorator.js';
 
 /** The moves of a story through review that its curator makes; who may call each is the shared workflow's table, which `decide` and the story policy read too. */
 @ApiTags('stories')
@@ -14,13 +14,14 @@ import { ReviewsService } from './reviews.service.js';
 export class StoryWorkflowController {
   constructor(private readonly reviews: ReviewsService) {}
 
+  @ApiAnswer('SubmitResult', { status: HttpStatus.CREATED })
   @Post(':id/submit')
   @Roles(...STORY_WORKFLOW.submit.roles)
   submit(@Param('id', ParseIntPipe) id: number, @Body() dto: SubmitForReviewDto, @CurrentUser() curator: User) {
     return this.reviews.submitForReview(id, curator, dto);
   }
 
-  @ApiCan('story')
+  @ApiAnswer('StoryView')
   @Post(':id/withdraw')
   @Roles(...STORY_WORKFLOW.withdraw.roles)
   @HttpCode(HttpStatus.OK)
@@ -28,7 +29,7 @@ export class StoryWorkflowController {
     return this.reviews.withdrawSubmission(id, curator);
   }
 
-  @ApiCan('story')
+  @ApiAnswer('StoryView')
   @Post(':id/revise')
   @Roles(...STORY_WORKFLOW.revise.roles)
   @HttpCode(HttpStatus.OK)
@@ -36,7 +37,7 @@ export class StoryWorkflowController {
     return this.reviews.reviseStory(id, curator);
   }
 
-  @ApiCan('story')
+  @ApiAnswer('StoryView')
   @Post(':id/retire')
   @Roles(...STORY_WORKFLOW.retire.roles)
   @HttpCode(HttpStatus.OK)

@@ -5,6 +5,7 @@ import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { SearchQuery } from './dto/search.query.js';
 import { SearchService } from './search.service.js';
+import { ApiAnswer } from '../openapi/api-answer.decorator.js';
 
 @ApiTags('search')
 @ApiBearerAuth()
@@ -13,6 +14,7 @@ export class SearchController {
   constructor(private readonly searchService: SearchService) {}
 
   @Roles(...ROLES)
+  @ApiAnswer('SearchView')
   @Get()
   search(@Query() query: SearchQuery, @CurrentUser() person: User) {
     return this.searchService.search(query, person);

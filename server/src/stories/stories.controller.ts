@@ -1,12 +1,12 @@
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ROLES } from '@mantlepiece/shared';
-import { ApiCan } from '../auth/api-can.js';
 import { CurrentUser, Roles } from '../auth/auth.decorators.js';
 import type { User } from '../users/models/user.model.js';
 import { CreateStoryDto, ListStoriesQuery, UpdateStoryDto } from './dto/story.dto.js';
 import { StoriesService } from './stories.service.js';
 import { STORY_WRITERS } from './story-policy.js';
+import { ApiAnswer, ApiNoBody } from '../openapi/api-answer.decorator.js';
 
 @ApiTags('stories')
 @ApiBearerAuth()
@@ -15,32 +15,33 @@ import { STORY_WRITERS } from './story-policy.js';
 export class StoriesController {
   constructor(private readonly stories: StoriesService) {}
 
-  @ApiCan('story', { page: true, listCan: 'stories' })
   @Roles(...ROLES)
+  @ApiAnswer('StoryPage')
   @Get()
   list(@Query() query: ListStoriesQuery, @CurrentUser() person: User) {
     return this.stories.list(query, person);
   }
 
-  @ApiCan('story')
   @Roles(...ROLES)
+  @ApiAnswer('StoryDetailView')
   @Get(':id')
   get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
     return this.stories.get(id, person);
   }
 
-  @ApiCan('story', { one: true, created: true })
+  @ApiAnswer('StoryView', { status: HttpStatus.CREATED })
   @Post()
   create(@CurrentUser() author: User, @Body() dto: CreateStoryDto) {
     return this.stories.createStory(author, dto);
   }
 
-  @ApiCan('story')
+  @ApiAnswer('StoryView')
   @Patch(':id')
   update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateStoryDto, @CurrentUser() person: User) {
     return this.stories.updateStory(id, dto, person);
   }
 
+  @ApiNoBody()
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
   delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {

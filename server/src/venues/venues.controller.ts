@@ -6,6 +6,7 @@ import type { User } from '../users/models/user.model.js';
 import { CreateVenueDto, UpdateVenueDto } from './dto/venue.dto.js';
 import { ListSettingsQuery } from './settings.service.js';
 import { VenuesService } from './venues.service.js';
+import { ApiAnswer, ApiNoBody } from '../openapi/api-answer.decorator.js';
 
 @ApiTags('venues')
 @Controller()
@@ -14,6 +15,7 @@ export class VenuesController {
 
   @ApiBearerAuth()
   @Roles(...ROLES)
+  @ApiAnswer('VenuePage')
   @Get('venues')
   list(@Query() query: ListSettingsQuery, @CurrentUser() person: User) {
     return this.venues.list(query, person);
@@ -21,6 +23,7 @@ export class VenuesController {
 
   @ApiBearerAuth()
   @Roles(...ROLES)
+  @ApiAnswer('VenueView')
   @Get('venues/:id')
   get(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {
     return this.venues.get(id, person);
@@ -29,6 +32,7 @@ export class VenuesController {
   @ApiBearerAuth()
   @Roles('admin')
   @ForOrganisation()
+  @ApiAnswer('VenueView', { status: HttpStatus.CREATED })
   @Post('venues')
   create(@Body() dto: CreateVenueDto, @CurrentUser() person: User) {
     return this.venues.create(dto, person);
@@ -36,6 +40,7 @@ export class VenuesController {
 
   @ApiBearerAuth()
   @Roles('admin')
+  @ApiAnswer('VenueView')
   @Patch('venues/:id')
   update(@Param('id', ParseIntPipe) id: number, @Body() dto: UpdateVenueDto, @CurrentUser() person: User) {
     return this.venues.update(id, dto, person);
@@ -44,6 +49,7 @@ export class VenuesController {
   @ApiBearerAuth()
   @Roles('admin')
   @ForOrganisation()
+  @ApiNoBody()
   @Delete('venues/:id')
   @HttpCode(HttpStatus.NO_CONTENT)
   delete(@Param('id', ParseIntPipe) id: number, @CurrentUser() person: User) {

@@ -20,7 +20,9 @@ export interface UserView {
   /** The UI language the person chose for the studio and for their mail. */
   uiLanguage: string;
   active: boolean;
+  /** @format date-time */
   createdAt: string;
+  /** @format date-time */
   lastSignInAt: string | null;
 }
 

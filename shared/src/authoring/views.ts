@@ -21,7 +21,9 @@ export interface StoryView {
   exhibitId: number | null;
   exhibitName: string | null;
   panelCount: number;
+  /** @format date-time */
   createdAt: string;
+  /** @format date-time */
   updatedAt: string;
   createdBy: { id: number; name: string } | null;
   /**
@@ -45,6 +47,7 @@ export interface PanelView {
   /** Tiptap JSON of the story's source locale. */
   doc: PanelDocJSON;
   wordBudget: number;
+  /** @format date-time */
   updatedAt: string;
 }
 
@@ -100,6 +103,7 @@ export interface MediaView {
   placeholder: string;
   credit: string | null;
   licence: MediaLicence | null;
+  /** @format date */
   licenceExpiresOn: string | null;
   /** Alt text per BCP 47 locale. */
   alt: Record<string, string>;
@@ -109,6 +113,7 @@ export interface MediaView {
    * (en serves en-GB), which `lookupText` tells.
    */
   altLocales: string[];
+  /** @format date-time */
   createdAt: string;
   usedIn: MediaUsageView[];
   can: MediaCan;
@@ -142,6 +147,7 @@ export interface VenueView {
   requiredApprovals: number;
   /** IANA time zone name (`Pacific/Auckland`): the venue's days, for Insights, licence expiry, preflight, mail and exports. */
   timeZone: string;
+  /** @format date-time */
   createdAt: string;
 }
 

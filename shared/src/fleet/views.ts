@@ -11,6 +11,7 @@ export interface FleetKioskView extends KioskView {
 
 export interface HeartbeatView {
   id: number;
+  /** @format date-time */
   receivedAt: string;
   /** The release it said it played. */
   release: { id: number; number: number } | null;

@@ -28,6 +28,7 @@ interface WorkItem {
 export interface StoryWorkItem extends WorkItem {
   storyId: number;
   title: string;
+  /** @format date-time */
   updatedAt: string;
 }
 
@@ -36,7 +37,7 @@ export interface CommentWorkItem extends WorkItem {
   title: string;
   revisionId: number;
   openComments: number;
-  /** When the newest of them was written. */
+  /** When the newest of them was written. @format date-time */
   latestAt: string;
 }
 
@@ -45,6 +46,7 @@ export interface ReviewWorkItem extends WorkItem {
   storyId: number;
   title: string;
   revisionNumber: number;
+  /** @format date-time */
   submittedAt: string;
   submittedBy: string | null;
   /** Seconds since it was submitted, at the server's now. */
@@ -64,6 +66,7 @@ export interface KioskWorkItem extends WorkItem {
   station: string;
   gallery: string;
   state: 'stale' | 'offline';
+  /** @format date-time */
   lastHeartbeatAt: string | null;
   demo: boolean;
 }
@@ -83,13 +86,14 @@ export interface InvitationWorkItem extends WorkItem {
   email: string;
   name: string;
   roles: Role[];
+  /** @format date-time */
   expiresAt: string;
 }
 
 export interface LicenceWorkItem extends WorkItem {
   mediaId: number;
   filename: string;
-  /** YYYY-MM-DD; in the past once it has ended. */
+  /** YYYY-MM-DD; in the past once it has ended. @format date */
   expiresOn: string;
   daysLeft: number;
 }

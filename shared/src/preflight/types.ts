@@ -10,7 +10,7 @@ export interface PreflightMedia {
   filename?: string;
   credit: string | null;
   licence: MediaLicence | null;
-  /** YYYY-MM-DD, the last day the licence covers. */
+  /** YYYY-MM-DD, the last day the licence covers. @format date */
   licenceExpiresOn: string | null;
   /** Alt text per BCP 47 locale. */
   alt: Readonly<Record<string, string>>;

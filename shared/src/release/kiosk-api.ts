@@ -4,7 +4,7 @@ export interface PairStartResponse {
   /** Six characters from an unambiguous alphabet, shown large on the screen. */
   pairingCode: string;
   pollToken: string;
-  /** ISO 8601. */
+  /** ISO 8601. @format date-time */
   expiresAt: string;
 }
 
@@ -54,6 +54,7 @@ export interface HeartbeatBody {
    * these out.
    */
   publicationSequence?: number | null;
+  /** @format date-time */
   publicationExpiresAt?: string | null;
   publicationExpired?: boolean;
 }

@@ -24,8 +24,11 @@ export interface ReleaseView {
   failure: string | null;
   /** Where staff read the signed manifest; null until it is signed. */
   manifestUrl: string | null;
+  /** @format date-time */
   createdAt: string;
+  /** @format date-time */
   readyAt: string | null;
+  /** @format date-time */
   publishedAt: string | null;
   /** Files listed in the manifest, and their total size in bytes. */
   files: number;
@@ -96,8 +99,11 @@ export interface KioskView {
   id: number;
   station: { id: number; name: string };
   gallery: { id: number; name: string };
+  /** @format date-time */
   pairedAt: string;
+  /** @format date-time */
   revokedAt: string | null;
+  /** @format date-time */
   lastHeartbeatAt: string | null;
   appVersion: string | null;
   uptimeS: number | null;
@@ -117,6 +123,7 @@ export interface KioskView {
 /** A kiosk's word on the publication it follows (issue 11). */
 export interface KioskPublicationView {
   sequence: number;
+  /** @format date-time */
   expiresAt: string;
   /** Past `expiresAt` by the kiosk's clock: it plays on, but has had no fresh word from the server. */
   expired: boolean;

@@ -39,6 +39,7 @@ export interface RevisionSummary {
   /** SHA-256 of the snapshot's canonical JSON. */
   hash: string;
   state: RevisionState;
+  /** @format date-time */
   submittedAt: string;
   submittedBy: PersonRef | null;
   /** Approvals recorded on this revision. */
@@ -61,6 +62,7 @@ export interface ReviewView {
   verdict: Verdict;
   note: string | null;
   reviewer: PersonRef | null;
+  /** @format date-time */
   createdAt: string;
 }
 
@@ -81,8 +83,10 @@ export interface CommentView {
   body: string;
   author: PersonRef | null;
   parentId: number | null;
+  /** @format date-time */
   resolvedAt: string | null;
   resolvedBy: PersonRef | null;
+  /** @format date-time */
   createdAt: string;
   /** Set on an unresolved comment copied forward from an earlier revision of the story. */
   carriedFromRevisionId: number | null;
@@ -101,6 +105,7 @@ export interface RevisionView {
   number: number;
   hash: string;
   state: RevisionState;
+  /** @format date-time */
   submittedAt: string;
   submittedBy: PersonRef | null;
   /** What the curator told the educators when submitting. */
@@ -139,6 +144,7 @@ export interface ReviewQueueItem {
   storyId: number;
   storyTitle: string;
   number: number;
+  /** @format date-time */
   submittedAt: string;
   submittedBy: PersonRef | null;
   blockers: number;
@@ -163,7 +169,9 @@ export interface NotificationView {
   body: string;
   /** A studio path, e.g. /reviews/12. */
   link: string;
+  /** @format date-time */
   readAt: string | null;
+  /** @format date-time */
   createdAt: string;
 }
 

@@ -56,6 +56,7 @@ export interface TranslationUnitView {
   /** Send it back with the next save; 0 while the unit has never been translated. */
   version: number;
   translatedBy: { id: number; name: string } | null;
+  /** @format date-time */
   updatedAt: string | null;
 }
 

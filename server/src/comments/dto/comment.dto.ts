@@ -22,7 +22,7 @@ export class CommentRangeDto {
 }
 
 export class CreateCommentDto {
-  @ApiPropertyOptional({ nullable: true, description: "A panel of the revision's snapshot; none for the story as a whole" })
+  @ApiPropertyOptional({ type: 'integer', nullable: true, description: "A panel of the revision's snapshot; none for the story as a whole" })
   @IsOptional()
   @IsRowId()
   panelId?: number | null;
@@ -39,7 +39,7 @@ export class CreateCommentDto {
   @MaxLength(5000)
   body: string;
 
-  @ApiPropertyOptional({ nullable: true, description: 'The comment this one answers' })
+  @ApiPropertyOptional({ type: 'integer', nullable: true, description: 'The comment this one answers' })
   @IsOptional()
   @IsRowId()
   parentId?: number | null;

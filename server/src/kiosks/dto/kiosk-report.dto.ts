@@ -11,7 +11,7 @@ import { LocaleTagField } from '../../common/locale-tag.js';
 const UTC_INSTANT_FROM_2000 = /^[2-9]\d{3}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z$/;
 
 export class HeartbeatDto {
-  @ApiProperty({ nullable: true, description: 'The release the kiosk plays' })
+  @ApiProperty({ type: 'integer', nullable: true, description: 'The release the kiosk plays' })
   @ValidateIf((_, value) => value !== null)
   @IsRowId()
   releaseId: number | null;
@@ -25,24 +25,24 @@ export class HeartbeatDto {
   @IsIntBetween(0, UNSIGNED_INT_MAX)
   uptimeS: number;
 
-  @ApiProperty({ nullable: true })
+  @ApiProperty({ type: 'integer', nullable: true })
   @ValidateIf((_, value) => value !== null)
   @IsIntBetween(0, UNSIGNED_BIGINT_MAX)
   storageUsedBytes: number | null;
 
-  @ApiProperty({ nullable: true, maxLength: REPORT_TEXT_MAX })
+  @ApiProperty({ type: 'string', nullable: true, maxLength: REPORT_TEXT_MAX })
   @ValidateIf((_, value) => value !== null)
   @IsString()
   @MaxLength(REPORT_TEXT_MAX)
   @Matches(REPORT_TEXT_PATTERN, { message: 'lastError may hold letters, digits, punctuation, symbols and spaces only: no line breaks or control characters.' })
   lastError: string | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'The sequence of the publication the kiosk follows' })
+  @ApiPropertyOptional({ type: 'integer', nullable: true, description: 'The sequence of the publication the kiosk follows' })
   @IsOptional()
   @IsIntBetween(1, UNSIGNED_INT_MAX)
   publicationSequence?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, format: 'date-time' })
+  @ApiPropertyOptional({ type: 'string', nullable: true, format: 'date-time' })
   @IsOptional()
   @IsISO8601({ strict: true })
   @Matches(UTC_INSTANT_FROM_2000, { message: 'publicationExpiresAt must be a UTC instant (…Z) from the year 2000 on.' })

@@ -87,13 +87,20 @@ const ValidWith = (problem: (value: unknown) => string | null) => (target: objec
   });
 
 export class UpdateMediaDto {
-  @ApiPropertyOptional({ nullable: true, example: 'Illustration: Basalt Point Earth Science Centre' })
+  @ApiPropertyOptional({ type: 'string', nullable: true, example: 'Illustration: Basalt Point Earth Science Centre' })
   @IsOptional()
   @IsString()
   @MaxLength(500)
   credit?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, example: { kind: 'spdx', id: 'CC-BY-4.0' } })
+  @ApiPropertyOptional({
+    nullable: true,
+    oneOf: [
+      { type: 'object', properties: { kind: { type: 'string', enum: ['spdx'] }, id: { type: 'string' } }, required: ['kind', 'id'], additionalProperties: false },
+      { type: 'object', properties: { kind: { type: 'string', enum: ['all-rights-reserved'] }, holder: { type: 'string' } }, required: ['kind', 'holder'], additionalProperties: false },
+    ],
+    example: { kind: 'spdx', id: 'CC-BY-4.0' },
+  })
   @ValidateIf((_dto, value) => value !== undefined && value !== null)
   @ValidWith(licenceProblem)
   licence?: MediaLicence | null;

@@ -10,7 +10,7 @@ export class RecordVerdictDto {
   @IsIn(VERDICTS, { message: `The verdict is one of ${VERDICTS.join(', ')}.` })
   verdict: Verdict;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Required when asking for changes: what should change' })
+  @ApiPropertyOptional({ type: 'string', nullable: true, description: 'Required when asking for changes: what should change' })
   @IsOptional()
   @IsString()
   @MaxLength(5000)

@@ -22,7 +22,7 @@ class StoryDetailsDto {
   @TitleField()
   title: string;
 
-  @ApiPropertyOptional({ nullable: true, description: 'The exhibit the story belongs to' })
+  @ApiPropertyOptional({ type: 'integer', nullable: true, description: 'The exhibit the story belongs to' })
   @IsOptional()
   @IsRowId()
   exhibitId?: number | null;

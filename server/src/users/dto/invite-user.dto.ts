@@ -12,7 +12,7 @@ export class InviteUserDto {
   name: string;
 
   /** The venue the invited person will work at; left out or null, only an organisation admin may invite, and the roles hold at every venue. */
-  @ApiPropertyOptional({ nullable: true, description: 'The venue whose roles the invitation grants; null for roles at every venue' })
+  @ApiPropertyOptional({ type: 'integer', nullable: true, description: 'The venue whose roles the invitation grants; null for roles at every venue' })
   @IsOptional()
   @IsRowId()
   venueId?: number | null;
