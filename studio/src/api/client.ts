@@ -1,4 +1,6 @@
+import createClient from 'openapi-fetch';
 import type { ApiErrorBody, SessionView } from '@mantlepiece/shared';
+import type { components, paths } from '@mantlepiece/shared/api';
 
 /** An API answer other than 2xx, with the server's field-by-field `errors` kept for forms. */
 export class ApiError extends Error {
@@ -53,27 +55,39 @@ interface RequestOptions {
   file?: { type: string; content: Blob | string };
 }
 
-function url(path: string, query?: Query): string {
+/** Query parameters as the server reads them: a parameter left empty is left out. */
+function searchOf(query: Query = {}): string {
   const params = new URLSearchParams();
-  for (const [key, value] of Object.entries(query ?? {})) {
+  for (const [key, value] of Object.entries(query)) {
     if (value !== undefined && value !== null && value !== '') params.set(key, String(value));
   }
-  const search = params.toString();
-  return `/api${path}${search ? `?${search}` : ''}`;
+  return params.toString();
 }
 
-async function send(path: string, options: RequestOptions): Promise<Response> {
+// Absolute, because a Request outside a page (unit tests) has no base to resolve a path against.
+const origin = globalThis.location?.origin ?? 'http://localhost';
+
+function url(path: string, query?: Query): string {
+  const search = searchOf(query);
+  return `${origin}/api${path}${search ? `?${search}` : ''}`;
+}
+
+function requestOf(path: string, options: RequestOptions): Request {
   const headers: Record<string, string> = { Accept: options.accept ?? 'application/json' };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
   if (options.file) headers['Content-Type'] = options.file.type;
-  if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
+  return new Request(url(path, options.query), {
+    method: options.method ?? 'GET',
+    headers,
+    body: options.file ? options.file.content : options.body === undefined ? undefined : JSON.stringify(options.body),
+    credentials: 'same-origin',
+  });
+}
+
+async function send(request: Request): Promise<Response> {
+  if (accessToken) request.headers.set('Authorization', `Bearer ${accessToken}`);
   try {
-    return await fetch(url(path, options.query), {
-      method: options.method ?? 'GET',
-      headers,
-      body: options.file ? options.file.content : options.body === undefined ? undefined : JSON.stringify(options.body),
-      credentials: 'same-origin',
-    });
+    return await fetch(request);
   } catch {
     throw new ApiError(NETWORK_FAILURE, { message: 'network' });
   }
@@ -82,12 +96,16 @@ async function send(path: string, options: RequestOptions): Promise<Response> {
 /** The bearer header for the one request fetch cannot make: an upload that reports its progress. */
 export const authorizationHeader = (): Record<string, string> => (accessToken ? { Authorization: `Bearer ${accessToken}` } : {});
 
+/** The server's error body, or the status text when the answer carries none (a proxy's page). */
+function errorBodyOf(body: unknown, response: Response): Pick<ApiErrorBody, 'message' | 'errors'> {
+  return body && typeof body === 'object' && 'message' in body ? (body as ApiErrorBody) : { message: response.statusText };
+}
+
 async function read<T>(response: Response): Promise<T> {
   const text = await response.text();
   const body: unknown = text ? safeJson(text) : undefined;
   if (response.ok) return body as T;
-  const error = body && typeof body === 'object' && 'message' in body ? (body as ApiErrorBody) : { message: response.statusText };
-  throw new ApiError(response.status, error);
+  throw new ApiError(response.status, errorBodyOf(body, response));
 }
 
 function safeJson(text: string): unknown {
@@ -103,7 +121,7 @@ function safeJson(text: string): unknown {
  * server rotates the cookie on every refresh and a second refresh with the old one would fail.
  */
 export function refreshSession(): Promise<SessionView | null> {
-  refreshing ??= send('/auth/refresh', { method: 'POST' })
+  refreshing ??= send(requestOf('/auth/refresh', { method: 'POST' }))
     // 204: no session cookie, nobody signed in; 401: the cookie was refused.
     .then(async (response) => (response.status === 204 || response.status === 401 ? null : read<SessionView>(response)))
     .then((session) => {
@@ -117,27 +135,56 @@ export function refreshSession(): Promise<SessionView | null> {
 }
 
 // A 401 from these means the credentials themselves were refused; refreshing cannot help.
-const CREDENTIAL_PATHS = new Set(['/auth/login', '/auth/refresh', '/auth/logout']);
+const CREDENTIAL_PATHS = new Set(['/api/auth/login', '/api/auth/refresh', '/api/auth/logout']);
 
 /** Sends a request; a 401 on a signed-in call gets one retry after a refresh. */
-async function sendSignedIn(path: string, options: RequestOptions): Promise<Response> {
+async function sendSignedIn(request: Request): Promise<Response> {
   const signedIn = accessToken !== null;
-  const response = await send(path, options);
-  if (response.status === 401 && signedIn && !CREDENTIAL_PATHS.has(path)) {
+  const retry = request.clone();
+  const response = await send(request);
+  if (response.status === 401 && signedIn && !CREDENTIAL_PATHS.has(new URL(request.url).pathname)) {
     const session = await refreshSession();
-    if (session) return send(path, options);
+    if (session) return send(retry);
   }
   return response;
 }
 
+/**
+ * The API's every path, parameter and body, typed from its OpenAPI document
+ * (`@mantlepiece/shared/api`, generated by `npm run api:types`), sent the way `api` sends.
+ */
+export const client = createClient<paths>({
+  baseUrl: origin,
+  headers: { Accept: 'application/json' },
+  credentials: 'same-origin',
+  querySerializer: (query) => searchOf(query as Query),
+  fetch: sendSignedIn,
+});
+
+/** A body the API answers with, by its name in the OpenAPI document. */
+export type Schema<N extends keyof components['schemas']> = components['schemas'][N];
+
+interface ClientAnswer {
+  data?: unknown;
+  error?: unknown;
+  response: Response;
+}
+
+/** The body of a 2xx answer from `client`; any other answer throws ApiError, as `api` does. */
+export async function answerOf<A extends ClientAnswer>(call: Promise<A>): Promise<Exclude<A['data'], undefined>> {
+  const { data, error, response } = await call;
+  if (!response.ok) throw new ApiError(response.status, errorBodyOf(error, response));
+  return data as Exclude<A['data'], undefined>;
+}
+
 /** Calls the API and reads its JSON answer. */
 export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {
-  return read<T>(await sendSignedIn(path, options));
+  return read<T>(await sendSignedIn(requestOf(path, options)));
 }
 
 /** Calls the API for a file (`accept` names its type); a refusal still arrives as an ApiError. */
 export async function apiFile(path: string, options: RequestOptions & { accept: string }): Promise<Blob> {
-  const response = await sendSignedIn(path, options);
+  const response = await sendSignedIn(requestOf(path, options));
   if (!response.ok) return read<never>(response);
   return response.blob();
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CommentRange, CommentView, RevisionView } from '@mantlepiece/shared';
-import { api } from './client';
+import { answerOf, client } from './client';
 import { revisionKey } from './revisions';
 
 export interface NewComment {
@@ -22,7 +22,7 @@ function useKeepComment(revisionId: number) {
 export function useAddComment(revisionId: number) {
   const keep = useKeepComment(revisionId);
   return useMutation({
-    mutationFn: (comment: NewComment) => api<CommentView>(`/revisions/${revisionId}/comments`, { method: 'POST', body: comment }),
+    mutationFn: (comment: NewComment) => answerOf(client.POST('/api/revisions/{id}/comments', { params: { path: { id: revisionId } }, body: comment })),
     onSuccess: keep,
   });
 }
@@ -30,7 +30,7 @@ export function useAddComment(revisionId: number) {
 export function useResolveComment(revisionId: number) {
   const keep = useKeepComment(revisionId);
   return useMutation({
-    mutationFn: ({ id, resolved }: { id: number; resolved: boolean }) => api<CommentView>(`/comments/${id}`, { method: 'PATCH', body: { resolved } }),
+    mutationFn: ({ id, resolved }: { id: number; resolved: boolean }) => answerOf(client.PATCH('/api/comments/{id}', { params: { path: { id } }, body: { resolved } })),
     onSuccess: keep,
   });
 }

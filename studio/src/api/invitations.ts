@@ -1,19 +1,12 @@
 import { useMutation, useQuery } from '@tanstack/react-query';
-import type { Role, SessionView } from '@mantlepiece/shared';
-import { api, setSession } from './client';
+import { answerOf, client, setSession, type Schema } from './client';
 
-export interface InvitationView {
-  email: string;
-  name: string;
-  roles: Role[];
-  locales: string[];
-  expiresAt: string;
-}
+export type InvitationView = Schema<'InvitationPreview'>;
 
 export function useInvitation(token: string) {
   return useQuery({
     queryKey: ['invitation', token],
-    queryFn: () => api<InvitationView>(`/auth/invitations/${encodeURIComponent(token)}`),
+    queryFn: () => answerOf(client.GET('/api/auth/invitations/{token}', { params: { path: { token } } })),
     retry: false,
   });
 }
@@ -21,7 +14,7 @@ export function useInvitation(token: string) {
 export function useAcceptInvitation() {
   return useMutation({
     mutationFn: (acceptance: { token: string; name: string; password: string }) =>
-      api<SessionView>('/auth/invitations/accept', { method: 'POST', body: acceptance }),
+      answerOf(client.POST('/api/auth/invitations/accept', { body: acceptance })),
     onSuccess: (session) => setSession(session),
   });
 }

@@ -1,15 +1,15 @@
 import { useMutation } from '@tanstack/react-query';
-import { api } from './client';
+import { answerOf, client } from './client';
 
 export function useRequestPasswordReset() {
   return useMutation({
-    mutationFn: (request: { email: string }) => api<void>('/auth/password-reset', { method: 'POST', body: request }),
+    mutationFn: (request: { email: string }) => answerOf(client.POST('/api/auth/password-reset', { body: request })),
   });
 }
 
 export function useCompletePasswordReset() {
   return useMutation({
     mutationFn: (completion: { token: string; password: string }) =>
-      api<void>('/auth/password-reset/complete', { method: 'POST', body: completion }),
+      answerOf(client.POST('/api/auth/password-reset/complete', { body: completion })),
   });
 }

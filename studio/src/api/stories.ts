@@ -1,7 +1,8 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Audience, Page, PanelDocJSON, PanelView, PreflightEntry, StoryDetailView, StoryPage, StoryState, StoryView } from '@mantlepiece/shared';
+import type { Audience, PanelDocJSON, PanelView, StoryDetailView, StoryState } from '@mantlepiece/shared';
 import { useVenueFilter } from '../app/current-venue';
-import { api } from './client';
+// A panel's document goes out by hand: the document types it as any JSON object, PanelDocJSON is stricter.
+import { answerOf, api, client } from './client';
 import type { StorySort } from '@mantlepiece/shared';
 
 export interface StoryListParams {
@@ -22,7 +23,7 @@ export function useStories(params: StoryListParams) {
   const venue = useVenueFilter();
   return useQuery({
     queryKey: [...storiesKey, params, venue],
-    queryFn: () => api<StoryPage>('/stories', { query: { ...params, ...venue } }),
+    queryFn: () => answerOf(client.GET('/api/stories', { params: { query: { ...params, ...venue } } })),
     placeholderData: keepPreviousData,
   });
 }
@@ -30,7 +31,7 @@ export function useStories(params: StoryListParams) {
 export function useStory(id: number) {
   return useQuery({
     queryKey: storyKey(id),
-    queryFn: () => api<StoryDetailView>(`/stories/${id}`),
+    queryFn: () => answerOf(client.GET('/api/stories/{id}', { params: { path: { id } } })),
     // The editor owns the panels once open; a background refetch must not pull text out from under it.
     staleTime: Infinity,
   });
@@ -40,7 +41,7 @@ export function useStory(id: number) {
 export function useDraftPreflight(id: number, enabled: boolean) {
   return useQuery({
     queryKey: draftPreflightKey(id),
-    queryFn: () => api<PreflightEntry[]>(`/stories/${id}/preflight`),
+    queryFn: () => answerOf(client.GET('/api/stories/{id}/preflight', { params: { path: { id } } })),
     enabled,
   });
 }
@@ -57,7 +58,7 @@ export function useCreateStory() {
   const queryClient = useQueryClient();
   const venue = useVenueFilter();
   return useMutation({
-    mutationFn: (story: StoryFields) => api<StoryView>('/stories', { method: 'POST', body: { ...story, ...venue } }),
+    mutationFn: (story: StoryFields) => answerOf(client.POST('/api/stories', { body: { ...story, ...venue } })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: storiesKey }),
   });
 }
@@ -66,7 +67,7 @@ export function useCreateStory() {
 export function useUpdateStory(id: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (changes: Partial<StoryFields>) => api<StoryView>(`/stories/${id}`, { method: 'PATCH', body: changes }),
+    mutationFn: (changes: Partial<StoryFields>) => answerOf(client.PATCH('/api/stories/{id}', { params: { path: { id } }, body: changes })),
     onSuccess: (story) => {
       queryClient.setQueryData<StoryDetailView>(storyKey(id), (current) => (current ? { ...current, ...story, panels: current.panels } : current));
       void queryClient.invalidateQueries({ queryKey: storiesKey });
@@ -97,7 +98,7 @@ export function useCreatePanel(storyId: number) {
 export function useReorderPanels(storyId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (panelIds: number[]) => api<PanelView[]>(`/stories/${storyId}/panels/reorder`, { method: 'POST', body: { panelIds } }),
+    mutationFn: (panelIds: number[]) => answerOf(client.POST('/api/stories/{storyId}/panels/reorder', { params: { path: { storyId } }, body: { panelIds } })),
     onMutate: (panelIds) => {
       const before = queryClient.getQueryData<StoryDetailView>(storyKey(storyId));
       setPanels(queryClient, storyId, (panels) => panelIds.map((id, position) => ({ ...panels.find((p) => p.id === id)!, position })));
@@ -114,7 +115,7 @@ export function useReorderPanels(storyId: number) {
 export function useDeletePanel(storyId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (panelId: number) => api<void>(`/panels/${panelId}`, { method: 'DELETE' }),
+    mutationFn: (panelId: number) => answerOf(client.DELETE('/api/panels/{id}', { params: { path: { id: panelId } } })),
     onSuccess: (_nothing, panelId) => setPanels(queryClient, storyId, (panels) => panels.filter((p) => p.id !== panelId)),
   });
 }
@@ -123,7 +124,7 @@ export function useDeletePanel(storyId: number) {
 export function useRestorePanel(storyId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (panelId: number) => api<PanelView>(`/panels/${panelId}/restore`, { method: 'POST' }),
+    mutationFn: (panelId: number) => answerOf(client.POST('/api/panels/{id}/restore', { params: { path: { id: panelId } } })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: storyKey(storyId) }),
   });
 }
@@ -132,7 +133,7 @@ export function useUpdatePanelBudget(storyId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ panelId, wordBudget }: { panelId: number; wordBudget: number }) =>
-      api<PanelView>(`/panels/${panelId}`, { method: 'PATCH', body: { wordBudget } }),
+      answerOf(client.PATCH('/api/panels/{id}', { params: { path: { id: panelId } }, body: { wordBudget } })),
     onSuccess: (_panel, { panelId, wordBudget }) => setPanels(queryClient, storyId, (panels) => panels.map((p) => (p.id === panelId ? { ...p, wordBudget } : p))),
   });
 }
