@@ -1,6 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { NotificationPage, NotificationPreferences } from '@mantlepiece/shared';
-import { api } from './client';
+import type { NotificationPreferences } from '@mantlepiece/shared';
+import { answerOf, client } from './client';
 
 const notificationsKey = ['notifications'] as const;
 const preferencesKey = ['notification-preferences'] as const;
@@ -11,7 +11,7 @@ const UNREAD_POLL_MS = 30_000;
 export function useNotifications(params: { page: number; pageSize: number; unread?: boolean }) {
   return useQuery({
     queryKey: [...notificationsKey, params],
-    queryFn: () => api<NotificationPage>('/notifications', { query: { ...params, unread: params.unread || undefined } }),
+    queryFn: () => answerOf(client.GET('/api/notifications', { params: { query: { ...params, unread: params.unread ? 'true' : undefined } } })),
     placeholderData: keepPreviousData,
   });
 }
@@ -20,7 +20,7 @@ export function useNotifications(params: { page: number; pageSize: number; unrea
 export function useUnreadCount() {
   return useQuery({
     queryKey: [...notificationsKey, 'unread'],
-    queryFn: () => api<NotificationPage>('/notifications', { query: { page: 1, pageSize: 1, unread: true } }),
+    queryFn: () => answerOf(client.GET('/api/notifications', { params: { query: { page: 1, pageSize: 1, unread: 'true' } } })),
     select: (page) => page.unread,
     refetchInterval: UNREAD_POLL_MS,
     staleTime: 0,
@@ -30,19 +30,19 @@ export function useUnreadCount() {
 export function useMarkNotificationsRead() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (which: { ids: number[] } | { all: true }) => api<void>('/notifications/read', { method: 'POST', body: which }),
+    mutationFn: (which: { ids: number[] } | { all: true }) => answerOf(client.POST('/api/notifications/read', { body: which })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: notificationsKey }),
   });
 }
 
 export function useNotificationPreferences() {
-  return useQuery({ queryKey: preferencesKey, queryFn: () => api<NotificationPreferences>('/notifications/preferences') });
+  return useQuery({ queryKey: preferencesKey, queryFn: () => answerOf(client.GET('/api/notifications/preferences')) });
 }
 
 export function useUpdateNotificationPreferences() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (preferences: NotificationPreferences) => api<NotificationPreferences>('/notifications/preferences', { method: 'PUT', body: preferences }),
+    mutationFn: (preferences: NotificationPreferences) => answerOf(client.PUT('/api/notifications/preferences', { body: preferences })),
     onSuccess: (preferences) => queryClient.setQueryData(preferencesKey, preferences),
   });
 }

@@ -1,7 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page, ReviewQueueItem, StoryDetailView, Verdict, VerdictResult } from '@mantlepiece/shared';
+import type { StoryDetailView, Verdict } from '@mantlepiece/shared';
 import { useVenueFilter } from '../app/current-venue';
-import { api } from './client';
+import { answerOf, client } from './client';
 import { revisionKey } from './revisions';
 import { storyKey } from './stories';
 import type { QueueSort } from '@mantlepiece/shared';
@@ -19,7 +19,7 @@ export function useReviewQueue(params: QueueParams) {
   const venue = useVenueFilter();
   return useQuery({
     queryKey: [...reviewsKey, 'queue', params, venue],
-    queryFn: () => api<Page<ReviewQueueItem>>('/reviews/queue', { query: { ...params, ...venue } }),
+    queryFn: () => answerOf(client.GET('/api/reviews/queue', { params: { query: { ...params, ...venue } } })),
     placeholderData: keepPreviousData,
   });
 }
@@ -28,7 +28,7 @@ export function useRecordVerdict(revisionId: number, storyId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (verdict: { verdict: Verdict; note?: string }) =>
-      api<VerdictResult>(`/revisions/${revisionId}/reviews`, { method: 'POST', body: verdict }),
+      answerOf(client.POST('/api/revisions/{id}/reviews', { params: { path: { id: revisionId } }, body: verdict })),
     onSuccess: ({ storyState }) => {
       queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) => (current ? { ...current, state: storyState } : current));
       void queryClient.invalidateQueries({ queryKey: revisionKey(revisionId) });
