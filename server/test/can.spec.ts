@@ -273,11 +273,11 @@ describe('the OpenAPI document', () => {
       if (schema?.$ref) return resolve(docs.components.schemas[schema.$ref.split('/').pop()!]);
       return schema?.allOf?.length === 1 ? resolve(schema.allOf[0]) : schema;
     };
-    /** The schema `steps` down from a route's success answer, following each reference on the way. */
+    /** The schema `steps` down from a route's success answer (`[]` an array's items), following each reference on the way. */
     const described = (path: string, method: string, ...steps: string[]) => {
       const responses = docs.paths[path]?.[method]?.responses ?? {};
       let schema = resolve((responses['200'] ?? responses['201'])?.content?.['application/json']?.schema);
-      for (const step of steps) schema = resolve(step === 'items' ? schema?.items : schema?.properties?.[step]);
+      for (const step of steps) schema = resolve(step === '[]' ? schema?.items : schema?.properties?.[step]);
       return schema;
     };
     const canOf = (path: string, method: string, ...steps: string[]) => described(path, method, ...steps, 'can')?.required;
@@ -285,10 +285,10 @@ describe('the OpenAPI document', () => {
     expect(canOf('/api/stories', 'get')?.sort()).toEqual(Object.keys((await get('/api/stories?pageSize=1', people.curator)).can).sort());
     const shown = await get(`/api/revisions/${g.revisionId}`, people.curator);
     expect(canOf('/api/revisions/{id}', 'get')?.sort()).toEqual(Object.keys(shown.can).sort());
-    expect(canOf('/api/revisions/{id}', 'get', 'comments', 'items')?.sort()).toEqual([...CAN_ACTIONS.comment].sort());
-    expect({ list: canOf('/api/translations/stories', 'get')?.sort(), item: canOf('/api/translations/stories', 'get', 'items', 'items')?.sort() })
+    expect(canOf('/api/revisions/{id}', 'get', 'comments', '[]')?.sort()).toEqual([...CAN_ACTIONS.comment].sort());
+    expect({ list: canOf('/api/translations/stories', 'get')?.sort(), item: canOf('/api/translations/stories', 'get', 'items', '[]')?.sort() })
       .toEqual({ list: [...CAN_ACTIONS.translations].sort(), item: [...CAN_ACTIONS.translation].sort() });
-    expect(canOf('/api/stories/{id}/translations', 'get', 'items')?.sort()).toEqual([...CAN_ACTIONS.translation].sort());
+    expect(canOf('/api/stories/{id}/translations', 'get', '[]')?.sort()).toEqual([...CAN_ACTIONS.translation].sort());
     for (const [path, method] of [['/api/stories/{id}/translations/{locale}/units', 'get'], ['/api/media/{id}', 'get'], ['/api/releases/{id}', 'get'], ['/api/stations/{id}', 'get'], ['/api/kiosks/{id}', 'get'], ['/api/comments/{id}', 'patch']]) {
       expect({ path, can: described(path!, method!, 'can')?.type }).toEqual({ path, can: 'object' });
     }
