@@ -22,6 +22,9 @@ export const REFRESH_COOKIE = 'mp_refresh';
 /** The cookie goes back only to the auth routes, never to the rest of the API. */
 const REFRESH_COOKIE_PATH = '/api/auth';
 
+/** The refresh token cookie, parsed by cookie-parser (whose `req.cookies` Express types as any). */
+const refreshCookie = (req: Request): string | undefined => (req.cookies as Record<string, string | undefined> | undefined)?.[REFRESH_COOKIE];
+
 @ApiTags('auth')
 @Controller('auth')
 export class AuthController {
@@ -54,7 +57,7 @@ export class AuthController {
   @ApiNoBody(HttpStatus.NO_CONTENT, 'Nobody is signed in: the request carried no session cookie.')
   @Post('refresh')
   async refresh(@Req() req: Request, @Ip() ip: string, @Res() res: Response): Promise<void> {
-    const token: string | undefined = req.cookies?.[REFRESH_COOKIE];
+    const token = refreshCookie(req);
     if (!token) {
       res.status(HttpStatus.NO_CONTENT).end();
       return;
@@ -68,7 +71,7 @@ export class AuthController {
   @Post('logout')
   @HttpCode(HttpStatus.NO_CONTENT)
   async logout(@Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<void> {
-    await this.auth.signOut(req.cookies?.[REFRESH_COOKIE]);
+    await this.auth.signOut(refreshCookie(req));
     res.clearCookie(REFRESH_COOKIE, this.cookieOptions());
   }
 

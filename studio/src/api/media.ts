@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { LicenceIdsView, MediaLicence, MediaMissingFilter, MediaPage, MediaView, Page, RenditionStatus } from '@mantlepiece/shared';
+import type { LicenceIdsView, MediaLicence, MediaMissingFilter, MediaPage, MediaView, RenditionStatus } from '@mantlepiece/shared';
 import { useVenueFilter } from '../app/current-venue';
 import { api, ApiError, authorizationHeader, NETWORK_FAILURE, refreshSession } from './client';
 import type { MediaSort } from '@mantlepiece/shared';

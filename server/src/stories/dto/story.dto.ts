@@ -11,7 +11,7 @@ import { LocaleTagField } from '../../common/locale-tag.js';
 const TitleField = () =>
   applyDecorators(
     ApiProperty({ example: 'Why does the sea floor sink?' }),
-    Transform(({ value }) => (typeof value === 'string' ? value.trim() : value)),
+    Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value)),
     IsString(),
     MinLength(1, { message: 'Give the story a title.' }),
     MaxLength(200),

@@ -42,6 +42,6 @@ export function assetChanges(values: AssetValues): MediaChanges {
       : values.licenceKind === 'all-rights-reserved'
         ? { kind: 'all-rights-reserved', holder: values.holder.trim() }
         : null;
-  const alt = Object.fromEntries(Object.entries(values.alt).map(([locale, text]) => [locale, text.trim()]).filter(([, text]) => text));
+  const alt = Object.fromEntries(Object.entries(values.alt).map(([locale, text]): [string, string] => [locale, text.trim()]).filter(([, text]) => text));
   return { credit: values.credit.trim() || null, licence, licenceExpiresOn: values.licenceExpiresOn || null, alt };
 }
