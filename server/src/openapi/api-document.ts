@@ -35,7 +35,7 @@ export function buildApiDocument(app: INestApplication, schemas: ResponseSchemas
   for (const operations of Object.values(document.paths)) {
     for (const operation of Object.values(operations)) {
       if (!operation || typeof operation !== 'object' || !('responses' in operation)) continue;
-      const responses = operation.responses as Record<string, unknown>;
+      const { responses } = operation as { responses: Record<string, unknown> };
       for (const status of ERROR_STATUSES) responses[status] ??= { $ref: `#/components/responses/${ERROR_RESPONSE}` };
     }
   }
