@@ -1,4 +1,4 @@
-import { useId, useState } from 'react';
+import { useId } from 'react';
 import { formatQuantity, interpolate, widgetStrings } from '../i18n/index.js';
 import { formatMillionYears } from '../widgets/convection-cell/index.js';
 import { computePlateForces, formatForcePerMetre, plateForces, SLAB_LENGTH_MAX_KM, UPPER_MANTLE_BASE_KM, type PlateForcesParams } from '../widgets/plate-forces/index.js';
@@ -6,6 +6,7 @@ import { drawingSliderHandlers } from './drawing-slider.js';
 import { DISCONTINUITY_Y, layoutPlateLabels, PLATE, PLATE_VIEW, RIDGE_PUSH_ARROW, RIDGE_X, SEA_LEVEL, TRENCH, UNITS_PER_KM, type PlateLabel } from './plate-forces-layout.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { stepWithin, ValueStepper } from './value-stepper.js';
+import { useVisitorParams } from './use-visitor-params.js';
 import { visuallyHidden } from './visually-hidden.js';
 
 export interface PlateForcesProps {
@@ -75,21 +76,9 @@ function ForceBar({ label, value, fraction, colour, name }: { label: string; val
  */
 export function PlateForces({ params, locale, onParamsChange, showCaution = false, maxWidth = 560, textScale = 1 }: PlateForcesProps) {
   const strings = widgetStrings(locale).plateForces;
-  const [shown, setShown] = useState(params);
-  // New params from outside replace what the visitor moved (state adjusted while rendering, not in an effect).
-  const [shownFor, setShownFor] = useState(params);
-  if (shownFor !== params) {
-    setShownFor(params);
-    setShown(params);
-  }
+  const [shown, change] = useVisitorParams(params, onParamsChange);
   const descriptionId = useId();
   const statusId = useId();
-
-  const change = (next: Partial<PlateForcesParams>) => {
-    const updated = { ...shown, ...next };
-    setShown(updated);
-    onParamsChange?.(updated);
-  };
   const changeLength = (km: number) => {
     const next = roundLength(km);
     if (next !== shown.slabLengthKm) change({ slabLengthKm: next });

@@ -1,4 +1,4 @@
-import { useId, useState } from 'react';
+import { useId } from 'react';
 import { formatQuantity, widgetStrings } from '../i18n/index.js';
 import { formatMillionYears } from '../widgets/convection-cell/index.js';
 import {
@@ -17,6 +17,7 @@ import { drawingSliderHandlers } from './drawing-slider.js';
 import { DEPTH_TICKS_M, layoutSeaFloor, LITHOSPHERE, SEA, SEA_FLOOR_VIEW, seaFloorLabels, seaY, lithosphereY, THICKNESS_TICKS_KM } from './sea-floor-layout.js';
 import { SimulationCaution } from './simulation-caution.js';
 import { stepWithin, ValueStepper } from './value-stepper.js';
+import { useVisitorParams } from './use-visitor-params.js';
 import { visuallyHidden } from './visually-hidden.js';
 import { widgetButtonStyle, widgetControlRowStyle, type WidgetInput } from './widget-controls.js';
 
@@ -76,21 +77,9 @@ function profiles(params: SeaFloorDepthParams, axis: AgeAxis) {
  */
 export function SeaFloorDepth({ params, locale, onParamsChange, showCaution = false, maxWidth = 560, textScale = 1, input = 'desk' }: SeaFloorDepthProps) {
   const strings = widgetStrings(locale).seaFloorDepth;
-  const [shown, setShown] = useState(params);
-  // New params from outside replace what the visitor moved (state adjusted while rendering, not in an effect).
-  const [shownFor, setShownFor] = useState(params);
-  if (shownFor !== params) {
-    setShownFor(params);
-    setShown(params);
-  }
+  const [shown, change] = useVisitorParams(params, onParamsChange);
   const descriptionId = useId();
   const statusId = useId();
-
-  const change = (next: Partial<SeaFloorDepthParams>) => {
-    const updated = { ...shown, ...next };
-    setShown(updated);
-    onParamsChange?.(updated);
-  };
   const changeAge = (ageMyr: number) => {
     const next = clampAge(ageMyr);
     if (next !== shown.ageMyr) change({ ageMyr: next });
