@@ -66,9 +66,13 @@ function Workspace({ target }: { target: TranslationTarget }) {
   // eslint-disable-next-line react-hooks/refs -- read while rendering on purpose; replacing the flag with state changes which unit a re-render selects
   const selected = items.find((unit) => unit.unitId === requested) ?? (landOnLast.current ? items.at(-1) : items[0]);
 
+  // Once the page before has come, its last unit goes into the address, so later renders keep it.
   useEffect(() => {
-    if (!units.isPlaceholderData && units.data) landOnLast.current = false;
-  }, [units.isPlaceholderData, units.data]);
+    if (units.isPlaceholderData || !units.data || !landOnLast.current) return;
+    landOnLast.current = false;
+    const last = units.data.items.at(-1);
+    if (last) setSearch((current) => withSearchChanges(current, { unit: last.unitId }), { replace: true });
+  }, [units.isPlaceholderData, units.data, setSearch]);
 
   const select = (unit: TranslationUnitView | undefined, focus: boolean) => {
     if (!unit) return;
