@@ -14,7 +14,7 @@ import { answerManifestPollsFirst } from './kiosks/manifest-poll.js';
 import { MEDIA_STORE, type MediaStore } from './media/media-store.js';
 import { releaseFileKey } from './releases/release-file-store.js';
 import { answerUnknownPaths, serveApps } from './static/serve-apps.js';
-import { securityHeaders } from './static/security-headers.js';
+import { securityHeaders, writeSecurityHeaders, type SecurityHeaders } from './static/security-headers.js';
 
 /** Configures and initialises the app the same way for the running server and for the tests. */
 export async function initApp(app: NestExpressApplication): Promise<void> {
@@ -31,14 +31,14 @@ async function presignedFileOrigin(app: NestExpressApplication): Promise<string 
   return url ? new URL(url).origin : null;
 }
 
-/** Everything around the modules, before Nest mounts its routes; gives back the security headers' middleware. */
-function configureApp(app: NestExpressApplication, fileOrigin: string | null): ReturnType<typeof securityHeaders> {
+/** Everything around the modules, before Nest mounts its routes; gives back the security headers every answer carries. */
+function configureApp(app: NestExpressApplication, fileOrigin: string | null): SecurityHeaders {
   const config = app.get(ConfigService);
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
   // First, so that every answer carries them: pages, assets, API responses and errors alike.
   const headers = securityHeaders({ https: config.overHttps, fileOrigin });
-  app.use(headers);
+  app.use(writeSecurityHeaders(headers));
   app.setGlobalPrefix('api', { exclude: [{ path: MEDIA_FILES_PATH, method: RequestMethod.GET }] });
   app.use(cookieParser());
   if (config.databaseReplicaUrls.length > 0) app.use(routeReads({ lagAllowanceSeconds: config.replicaLagAllowanceSeconds, secure: config.secureCookies }));

@@ -1,9 +1,8 @@
 import { applyDecorators, CanActivate, createParamDecorator, ExecutionContext, ForbiddenException, Injectable, UnauthorizedException, UseGuards } from '@nestjs/common';
 import type { Request } from 'express';
 import { Public } from '../auth/auth.decorators.js';
-import { hashToken } from '../common/tokens.js';
 import type { PublicationVersion } from '../releases/publications.service.js';
-import { bearerOf, isDeviceToken } from './device-token.js';
+import { credentialOf } from './device-token.js';
 import { PairedKioskReader } from './paired-kiosk-reader.js';
 
 export const KIOSK_UNPAIRED_MESSAGE = 'Pair this kiosk to continue.';
@@ -34,9 +33,9 @@ export class DeviceTokenGuard implements CanActivate {
 
   async canActivate(context: ExecutionContext): Promise<boolean> {
     const request = context.switchToHttp().getRequest<KioskRequest>();
-    const token = bearerOf(request.headers.authorization);
-    if (token && !isDeviceToken(token)) throw new ForbiddenException('Kiosk routes take a kiosk’s device token, not a person’s sign-in.');
-    const kiosk = token ? await this.pairedKiosks.read(hashToken(token)) : undefined;
+    const credential = credentialOf(request.headers.authorization);
+    if (credential.kind === 'person') throw new ForbiddenException('Kiosk routes take a kiosk’s device token, not a person’s sign-in.');
+    const kiosk = credential.kind === 'device' ? await this.pairedKiosks.read(credential.token) : undefined;
     if (!kiosk) throw new UnauthorizedException(KIOSK_UNPAIRED_MESSAGE);
     request.kiosk = kiosk;
     return true;
@@ -53,8 +52,7 @@ export const KioskRoute = () => applyDecorators(Public(), UseGuards(DeviceTokenG
 @Injectable()
 export class OptionalDeviceTokenGuard extends DeviceTokenGuard {
   override async canActivate(context: ExecutionContext): Promise<boolean> {
-    const token = bearerOf(context.switchToHttp().getRequest<Request>().headers.authorization);
-    return token === null || !isDeviceToken(token) || super.canActivate(context);
+    return credentialOf(context.switchToHttp().getRequest<Request>().headers.authorization).kind !== 'device' || super.canActivate(context);
   }
 }
 

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { QueryTypes } from 'sequelize';
+import { hashToken } from '../common/tokens.js';
 import type { PairedKiosk } from './device-token.guard.js';
 import { Kiosk } from './models/kiosk.model.js';
 
@@ -48,8 +49,9 @@ export class PairedKioskReader {
 
   constructor(@InjectModel(Kiosk) private readonly kiosks: typeof Kiosk) {}
 
-  /** The paired kiosk of a device token's hash; undefined for an unknown or revoked one. */
-  read(tokenHash: string): Promise<PairedKiosk | undefined> {
+  /** The paired kiosk of a device token; undefined for an unknown or revoked one. */
+  read(token: string): Promise<PairedKiosk | undefined> {
+    const tokenHash = hashToken(token);
     return new Promise((resolve, reject) => {
       const queue = this.waiting.get(tokenHash);
       if (queue) queue.push({ resolve, reject });

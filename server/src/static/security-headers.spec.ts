@@ -5,7 +5,7 @@ import express from 'express';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../../test/test-app.js';
-import { securityHeaders } from './security-headers.js';
+import { securityHeaders, writeSecurityHeaders } from './security-headers.js';
 
 const studio = fs.mkdtempSync(path.join(os.tmpdir(), 'mp-headers-'));
 fs.writeFileSync(path.join(studio, 'index.html'), '<!doctype html><title>studio</title>');
@@ -67,7 +67,7 @@ describe('security headers', () => {
   });
 
   it('keeps browsers on HTTPS once people reach the server over it', async () => {
-    const res = await request(express().use(securityHeaders({ https: true, fileOrigin: null })).get('/', (_req, reply) => reply.send('ok'))).get('/');
+    const res = await request(express().use(writeSecurityHeaders(securityHeaders({ https: true, fileOrigin: null }))).get('/', (_req, reply) => reply.send('ok'))).get('/');
     expect(res.headers['strict-transport-security']).toBe('max-age=31536000; includeSubDomains');
     expect(policyOf(res)['upgrade-insecure-requests']).toEqual([]);
   });
