@@ -90,10 +90,20 @@ function toOpenApi(schema: unknown, refName: (ref: string) => string | null, inl
   return out;
 }
 
+/**
+ * typescript-json-schema writes `Record<string, V>` as an object of nothing, dropping V; an index
+ * signature (`{ [locale: string]: V }`) keeps it. Only `Record<string, unknown>` loses nothing.
+ */
+function refuseRecordsOfValues(definitions: Record<string, Json>): void {
+  const lossy = Object.keys(definitions).map(shortName).filter((name) => /\bRecord<string,(?!unknown>)/.test(name));
+  if (lossy.length) throw new Error(`Answer types use Record<string, V>, whose V the schema would lose; write { [key: string]: V } instead: ${lossy.join(', ')}`);
+}
+
 /** The schemas of every answer body, keyed by component name, in a stable order. */
 export function generateResponseSchemas(): Record<string, SchemaObject> {
   const schema = jsonSchemaOfAnswers();
   const definitions = (schema.definitions ?? {}) as Record<string, Json>;
+  refuseRecordsOfValues(definitions);
   const registry = definitions[Object.keys(definitions).find((name) => shortName(name) === REGISTRY)!]!;
   const decode = (ref: string) => decodeURIComponent(ref.replace('#/definitions/', ''));
   const names = new Map<string, string | null>(Object.keys(definitions).map((name) => [name, componentName(shortName(name))]));

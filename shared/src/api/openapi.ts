@@ -1299,8 +1299,8 @@ export interface components {
         };
         UpdateUserDto: {
             /** @example Noor Haddad */
-            name: string;
-            roles: ("admin" | "curator" | "educator" | "translator" | "technician")[];
+            name?: string;
+            roles?: ("admin" | "curator" | "educator" | "translator" | "technician")[];
             /**
              * @description BCP 47 tags a translator may translate into
              * @example [
@@ -1308,7 +1308,7 @@ export interface components {
              *       "es"
              *     ]
              */
-            locales: string[];
+            locales?: string[];
             active?: boolean;
         };
         MembershipDto: {
@@ -1329,9 +1329,9 @@ export interface components {
         };
         UpdateProfileDto: {
             /** @example Noor Haddad */
-            name: string;
+            name?: string;
             /** @enum {string} */
-            uiLanguage: "en" | "fr" | "es" | "ar";
+            uiLanguage?: "en" | "fr" | "es" | "ar";
         };
         AcceptInvitationDto: {
             token: string;
@@ -1569,7 +1569,7 @@ export interface components {
              *       ]
              *     }
              */
-            doc?: Record<string, unknown>;
+            doc?: components["schemas"]["PanelDocJSON"];
             /** @description 0-based place in the story; at the end when left out */
             position?: number;
             /** @description Words that fit the screen */
@@ -1596,7 +1596,7 @@ export interface components {
              *       ]
              *     }
              */
-            doc: Record<string, unknown>;
+            doc: components["schemas"]["PanelDocJSON"];
             /** @description The version this edit started from */
             version: number;
         };
@@ -1606,6 +1606,8 @@ export interface components {
         UploadMediaDto: {
             /** @description The venue the images belong to; needed when the uploader keeps images at several venues */
             venueId?: number;
+            /** @description The images, each one under this field name */
+            file: string[];
         };
         UpdateMediaDto: {
             /** @example Illustration: Basalt Point Earth Science Centre */
@@ -1637,7 +1639,9 @@ export interface components {
              *       "en": "A pan of soup with arrows rising in the middle"
              *     }
              */
-            alt?: Record<string, unknown>;
+            alt?: {
+                [key: string]: string;
+            };
         };
         SaveTranslationUnitDto: {
             /**
@@ -1917,6 +1921,54 @@ export interface components {
             publication: components["schemas"]["KioskPublicationView"] | null;
             can: components["schemas"]["KioskCan"];
         };
+        /** @description One kiosk on the Fleet page: what it reported, and what that means now. */
+        FleetKioskView: {
+            state: components["schemas"]["KioskState"];
+            /** @description Whether it plays the release that is Live for its gallery (false when either is missing). */
+            playsLiveRelease: boolean;
+            id: number;
+            station: {
+                id: number;
+                name: string;
+            };
+            gallery: {
+                id: number;
+                name: string;
+            };
+            /** Format: date-time */
+            pairedAt: string;
+            /** Format: date-time */
+            revokedAt: string | null;
+            /** Format: date-time */
+            lastHeartbeatAt: string | null;
+            appVersion: string | null;
+            uptimeS: number | null;
+            storageUsedBytes: number | null;
+            lastError: string | null;
+            /** @description The demo venue's invented kiosk, whose heartbeats and visitor events are made up. */
+            demo: boolean;
+            /** @description What the kiosk said it plays in its last heartbeat. */
+            releasePlaying: {
+                id: number;
+                number: number;
+            } | null;
+            /** @description What is Live for its gallery now. */
+            releaseLive: {
+                id: number;
+                number: number;
+            } | null;
+            /** @description The publication it said it follows in its last heartbeat; null before it reported one. */
+            publication: components["schemas"]["KioskPublicationView"] | null;
+            can: components["schemas"]["KioskCan"];
+        };
+        /** @description `GET /api/kiosks`: a page of the fleet, with the thresholds its states were judged by. */
+        FleetPage: {
+            thresholds: components["schemas"]["FleetThresholdsView"];
+            items: components["schemas"]["FleetKioskView"][];
+            total: number;
+            page: number;
+            pageSize: number;
+        };
         /** @description The thresholds the server judges states by, so the studio can explain them. */
         FleetThresholdsView: {
             heartbeatIntervalS: number;
@@ -2051,52 +2103,6 @@ export interface components {
             /** @description Base64 Ed25519 signature. */
             signature: string;
         };
-        /** @description The Fleet's kiosk list: each kiosk with its state, and the thresholds that state was judged by. */
-        KioskPage: {
-            thresholds: components["schemas"]["FleetThresholdsView"];
-            items: {
-                id: number;
-                station: {
-                    id: number;
-                    name: string;
-                };
-                gallery: {
-                    id: number;
-                    name: string;
-                };
-                /** Format: date-time */
-                pairedAt: string;
-                /** Format: date-time */
-                revokedAt: string | null;
-                /** Format: date-time */
-                lastHeartbeatAt: string | null;
-                appVersion: string | null;
-                uptimeS: number | null;
-                storageUsedBytes: number | null;
-                lastError: string | null;
-                /** @description The demo venue's invented kiosk, whose heartbeats and visitor events are made up. */
-                demo: boolean;
-                /** @description What the kiosk said it plays in its last heartbeat. */
-                releasePlaying: {
-                    id: number;
-                    number: number;
-                } | null;
-                /** @description What is Live for its gallery now. */
-                releaseLive: {
-                    id: number;
-                    number: number;
-                } | null;
-                /** @description The publication it said it follows in its last heartbeat; null before it reported one. */
-                publication: components["schemas"]["KioskPublicationView"] | null;
-                can: components["schemas"]["KioskCan"];
-                state: components["schemas"]["KioskState"];
-                /** @description Whether it plays the release that is Live for its gallery (false when either is missing). */
-                playsLiveRelease: boolean;
-            }[];
-            total: number;
-            page: number;
-            pageSize: number;
-        };
         /** @description A kiosk's word on the publication it follows (issue 11). */
         KioskPublicationView: {
             sequence: number;
@@ -2113,42 +2119,6 @@ export interface components {
         KioskVenueView: {
             name: string;
             locales: string[];
-        };
-        KioskView: {
-            id: number;
-            station: {
-                id: number;
-                name: string;
-            };
-            gallery: {
-                id: number;
-                name: string;
-            };
-            /** Format: date-time */
-            pairedAt: string;
-            /** Format: date-time */
-            revokedAt: string | null;
-            /** Format: date-time */
-            lastHeartbeatAt: string | null;
-            appVersion: string | null;
-            uptimeS: number | null;
-            storageUsedBytes: number | null;
-            lastError: string | null;
-            /** @description The demo venue's invented kiosk, whose heartbeats and visitor events are made up. */
-            demo: boolean;
-            /** @description What the kiosk said it plays in its last heartbeat. */
-            releasePlaying: {
-                id: number;
-                number: number;
-            } | null;
-            /** @description What is Live for its gallery now. */
-            releaseLive: {
-                id: number;
-                number: number;
-            } | null;
-            /** @description The publication it said it follows in its last heartbeat; null before it reported one. */
-            publication: components["schemas"]["KioskPublicationView"] | null;
-            can: components["schemas"]["KioskCan"];
         };
         KioskWorkItem: {
             kioskId: number;
@@ -2244,7 +2214,10 @@ export interface components {
             }) | null;
             /** Format: date */
             licenceExpiresOn: string | null;
-            alt: Record<string, unknown>;
+            /** @description Alt text per BCP 47 locale. */
+            alt: {
+                [key: string]: string;
+            };
             /**
              * @description The languages the image needs alt text in, canonical: its venue's source and target languages
              *     and those of the stories that show it. Alt text in one serves others by RFC 4647 lookup
@@ -2651,7 +2624,10 @@ export interface components {
         RevisionPanelView: {
             panelId: number;
             position: number;
-            docs: Record<string, unknown>;
+            /** @description Tiptap JSON per BCP 47 locale, as submitted. */
+            docs: {
+                [key: string]: components["schemas"]["PanelDocJSON"];
+            };
             wordBudget: number;
         };
         /** @enum {string} */
@@ -2882,7 +2858,10 @@ export interface components {
             /** @description The story's title in the locale, or null while it has no current translation. */
             title: string | null;
             panels: components["schemas"]["TranslationPreviewPanel"][];
-            alt: Record<string, unknown>;
+            /** @description Alt text per media id in the locale, falling back to the source. */
+            alt: {
+                [key: string]: string;
+            };
         };
         /** @description One target locale of a story: its progress and what the caller may do in it. */
         TranslationTargetView: {
@@ -5744,13 +5723,13 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description KioskPage */
+            /** @description FleetPage */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["KioskPage"];
+                    "application/json": components["schemas"]["FleetPage"];
                 };
             };
             "4XX": components["responses"]["ApiError"];
@@ -5768,13 +5747,13 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description KioskView */
+            /** @description FleetKioskView */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["KioskView"];
+                    "application/json": components["schemas"]["FleetKioskView"];
                 };
             };
             "4XX": components["responses"]["ApiError"];

@@ -106,7 +106,7 @@ export interface MediaView {
   /** @format date */
   licenceExpiresOn: string | null;
   /** Alt text per BCP 47 locale. */
-  alt: Record<string, string>;
+  alt: { [locale: string]: string };
   /**
    * The languages the image needs alt text in, canonical: its venue's source and target languages
    * and those of the stories that show it. Alt text in one serves others by RFC 4647 lookup

@@ -53,7 +53,7 @@ export interface RevisionPanelView {
   panelId: number;
   position: number;
   /** Tiptap JSON per BCP 47 locale, as submitted. */
-  docs: Record<string, PanelDocJSON>;
+  docs: { [locale: string]: PanelDocJSON };
   wordBudget: number;
 }
 

@@ -99,7 +99,7 @@ export interface TranslationPreviewView {
   title: string | null;
   panels: TranslationPreviewPanel[];
   /** Alt text per media id in the locale, falling back to the source. */
-  alt: Record<string, string>;
+  alt: { [mediaId: string]: string };
 }
 
 /** PUT …/xliff answers with this once the whole file has been taken. */

@@ -1,6 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { RevisionComparison, RevisionSummary, RevisionView, StoryDetailView, StoryView, SubmitRequest, SubmitResult } from '@mantlepiece/shared';
-import { api } from './client';
+import { answerOf, client, type Schema } from './client';
 import { storyKey } from './stories';
 
 export const revisionKey = (id: number) => ['revision', id] as const;
@@ -9,19 +8,19 @@ const storyRevisionsKey = (storyId: number) => ['story', storyId, 'revisions'] a
 export function useStoryRevisions(storyId: number) {
   return useQuery({
     queryKey: storyRevisionsKey(storyId),
-    queryFn: () => api<RevisionSummary[]>(`/stories/${storyId}/revisions`),
+    queryFn: () => answerOf(client.GET('/api/stories/{id}/revisions', { params: { path: { id: storyId } } })),
   });
 }
 
 export function useRevision(id: number, enabled = true) {
-  return useQuery({ queryKey: revisionKey(id), queryFn: () => api<RevisionView>(`/revisions/${id}`), enabled });
+  return useQuery({ queryKey: revisionKey(id), queryFn: () => answerOf(client.GET('/api/revisions/{id}', { params: { path: { id } } })), enabled });
 }
 
 /** The revision beside the last approved one; the diff never changes, since both sides are frozen. */
 export function useRevisionComparison(id: number) {
   return useQuery({
     queryKey: [...revisionKey(id), 'compare'],
-    queryFn: () => api<RevisionComparison>(`/revisions/${id}/compare`),
+    queryFn: () => answerOf(client.GET('/api/revisions/{id}/compare', { params: { path: { id } } })),
     staleTime: Number.POSITIVE_INFINITY,
   });
 }
@@ -33,8 +32,8 @@ export function useRevisionComparison(id: number) {
  */
 function useStoryStateChange(storyId: number) {
   const queryClient = useQueryClient();
-  return (change: Partial<Pick<StoryView, 'state' | 'approvedRevision' | 'can'>>) => {
-    queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) => (current ? { ...current, ...change } : current));
+  return (change: Partial<Pick<Schema<'StoryView'>, 'state' | 'approvedRevision' | 'can'>>) => {
+    queryClient.setQueryData<Schema<'StoryDetailView'>>(storyKey(storyId), (current) => (current ? { ...current, ...change } : current));
     if (!change.can) void queryClient.invalidateQueries({ queryKey: storyKey(storyId), exact: true });
     void queryClient.invalidateQueries({ queryKey: storyRevisionsKey(storyId) });
     void queryClient.invalidateQueries({ queryKey: ['stories'] });
@@ -45,20 +44,20 @@ function useStoryStateChange(storyId: number) {
 export function useSubmitStory(storyId: number) {
   const changeState = useStoryStateChange(storyId);
   return useMutation({
-    mutationFn: (request: SubmitRequest) => api<SubmitResult>(`/stories/${storyId}/submit`, { method: 'POST', body: request }),
+    mutationFn: (request: Schema<'SubmitForReviewDto'>) => answerOf(client.POST('/api/stories/{id}/submit', { params: { path: { id: storyId } }, body: request })),
     onSuccess: (revision) => changeState({ state: revision.state }),
   });
 }
 
 /** Withdraw, revise and retire: each answers with the story as the Stories table shows it. */
-function useStoryMove(storyId: number, move: 'withdraw' | 'revise' | 'retire') {
+function useStoryMove(storyId: number, move: '/api/stories/{id}/withdraw' | '/api/stories/{id}/revise' | '/api/stories/{id}/retire') {
   const changeState = useStoryStateChange(storyId);
   return useMutation({
-    mutationFn: () => api<StoryView>(`/stories/${storyId}/${move}`, { method: 'POST' }),
+    mutationFn: () => answerOf(client.POST(move, { params: { path: { id: storyId } } })),
     onSuccess: (story) => changeState({ state: story.state, approvedRevision: story.approvedRevision, can: story.can }),
   });
 }
 
-export const useWithdrawSubmission = (storyId: number) => useStoryMove(storyId, 'withdraw');
-export const useReviseStory = (storyId: number) => useStoryMove(storyId, 'revise');
-export const useRetireStory = (storyId: number) => useStoryMove(storyId, 'retire');
+export const useWithdrawSubmission = (storyId: number) => useStoryMove(storyId, '/api/stories/{id}/withdraw');
+export const useReviseStory = (storyId: number) => useStoryMove(storyId, '/api/stories/{id}/revise');
+export const useRetireStory = (storyId: number) => useStoryMove(storyId, '/api/stories/{id}/retire');

@@ -1,8 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Audience, PanelDocJSON, PanelView, StoryDetailView, StoryState } from '@mantlepiece/shared';
+import type { Audience, PanelDocJSON, StoryState } from '@mantlepiece/shared';
 import { useVenueFilter } from '../app/current-venue';
-// A panel's document goes out by hand: the document types it as any JSON object, PanelDocJSON is stricter.
-import { answerOf, api, client } from './client';
+import { answerOf, client, type Schema } from './client';
 import type { StorySort } from '@mantlepiece/shared';
 
 export interface StoryListParams {
@@ -69,14 +68,14 @@ export function useUpdateStory(id: number) {
   return useMutation({
     mutationFn: (changes: Partial<StoryFields>) => answerOf(client.PATCH('/api/stories/{id}', { params: { path: { id } }, body: changes })),
     onSuccess: (story) => {
-      queryClient.setQueryData<StoryDetailView>(storyKey(id), (current) => (current ? { ...current, ...story, panels: current.panels } : current));
+      queryClient.setQueryData<Schema<'StoryDetailView'>>(storyKey(id), (current) => (current ? { ...current, ...story, panels: current.panels } : current));
       void queryClient.invalidateQueries({ queryKey: storiesKey });
     },
   });
 }
 
-function setPanels(queryClient: ReturnType<typeof useQueryClient>, storyId: number, update: (panels: PanelView[]) => PanelView[]) {
-  queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) => {
+function setPanels(queryClient: ReturnType<typeof useQueryClient>, storyId: number, update: (panels: Schema<'PanelView'>[]) => Schema<'PanelView'>[]) {
+  queryClient.setQueryData<Schema<'StoryDetailView'>>(storyKey(storyId), (current) => {
     if (!current) return current;
     const panels = update(current.panels).sort((a, b) => a.position - b.position);
     return { ...current, panels, panelCount: panels.length };
@@ -88,8 +87,7 @@ function setPanels(queryClient: ReturnType<typeof useQueryClient>, storyId: numb
 export function useCreatePanel(storyId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (panel: { doc?: PanelDocJSON; position?: number; wordBudget?: number }) =>
-      api<PanelView>(`/stories/${storyId}/panels`, { method: 'POST', body: panel }),
+    mutationFn: (panel: Schema<'CreatePanelDto'>) => answerOf(client.POST('/api/stories/{storyId}/panels', { params: { path: { storyId } }, body: panel })),
     // The server may have moved later panels along; their positions come back with the next reorder or load.
     onSuccess: (panel) => setPanels(queryClient, storyId, (panels) => [...panels.filter((p) => p.id !== panel.id), panel]),
   });
@@ -100,7 +98,7 @@ export function useReorderPanels(storyId: number) {
   return useMutation({
     mutationFn: (panelIds: number[]) => answerOf(client.POST('/api/stories/{storyId}/panels/reorder', { params: { path: { storyId } }, body: { panelIds } })),
     onMutate: (panelIds) => {
-      const before = queryClient.getQueryData<StoryDetailView>(storyKey(storyId));
+      const before = queryClient.getQueryData<Schema<'StoryDetailView'>>(storyKey(storyId));
       setPanels(queryClient, storyId, (panels) => panelIds.map((id, position) => ({ ...panels.find((p) => p.id === id)!, position })));
       return { before };
     },
@@ -140,13 +138,13 @@ export function useUpdatePanelBudget(storyId: number) {
 
 /** One save of a panel's document; the autosave decides when, and what a 409 or 422 means. */
 export const savePanelDoc = (panelId: number, doc: PanelDocJSON, version: number) =>
-  api<{ version: number }>(`/panels/${panelId}`, { method: 'PUT', body: { doc, version } });
+  answerOf(client.PUT('/api/panels/{id}', { params: { path: { id: panelId } }, body: { doc, version } }));
 
 /** Keeps the cached story in step with what the autosave wrote, so switching panels shows the saved text. */
 export function useRememberSavedPanel(storyId: number) {
   const queryClient = useQueryClient();
   return (panelId: number, doc: PanelDocJSON, version: number) => {
-    queryClient.setQueryData<StoryDetailView>(storyKey(storyId), (current) =>
+    queryClient.setQueryData<Schema<'StoryDetailView'>>(storyKey(storyId), (current) =>
       current ? { ...current, panels: current.panels.map((p) => (p.id === panelId ? { ...p, doc, version } : p)) } : current,
     );
     void queryClient.invalidateQueries({ queryKey: draftPreflightKey(storyId) });

@@ -1,18 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type {
-  Page,
-  SavedTranslationUnit,
-  SaveTranslationUnitBody,
-  StoryTranslationsView,
-  TranslationPreviewView,
-  TranslationUnitPage,
-  TranslationUnitView,
-  TranslationWorklistPage,
-  UnitStatus,
-  XliffImportResult,
-} from '@mantlepiece/shared';
+import type { UnitStatus } from '@mantlepiece/shared';
 import { useVenueFilter } from '../app/current-venue';
-import { api, apiFile } from './client';
+import { answerOf, client, type Schema } from './client';
 
 export interface WorklistParams {
   page: number;
@@ -41,13 +30,13 @@ const unitsKey = (target: TranslationTarget) => [...targetKey(target), 'units'] 
 const previewKey = (target: TranslationTarget) => [...targetKey(target), 'preview'] as const;
 const storyProgressKey = (storyId: number) => [...translationsKey, storyId, 'progress'] as const;
 
-const targetPath = ({ storyId, locale }: TranslationTarget) => `/stories/${storyId}/translations/${encodeURIComponent(locale)}`;
+const targetParams = ({ storyId, locale }: TranslationTarget) => ({ id: storyId, locale });
 
 export function useTranslationWorklist(params: WorklistParams) {
   const venue = useVenueFilter();
   return useQuery({
     queryKey: [...translationsKey, 'worklist', params, venue],
-    queryFn: () => api<TranslationWorklistPage>('/translations/stories', { query: { ...params, ...venue } }),
+    queryFn: () => answerOf(client.GET('/api/translations/stories', { params: { query: { ...params, ...venue } } })),
     placeholderData: keepPreviousData,
   });
 }
@@ -55,14 +44,14 @@ export function useTranslationWorklist(params: WorklistParams) {
 export function useStoryTranslations(storyId: number) {
   return useQuery({
     queryKey: storyProgressKey(storyId),
-    queryFn: () => api<StoryTranslationsView>(`/stories/${storyId}/translations`),
+    queryFn: () => answerOf(client.GET('/api/stories/{id}/translations', { params: { path: { id: storyId } } })),
   });
 }
 
 export function useTranslationUnits(target: TranslationTarget, params: UnitListParams) {
   return useQuery({
     queryKey: [...unitsKey(target), params],
-    queryFn: () => api<TranslationUnitPage>(`${targetPath(target)}/units`, { query: { ...params } }),
+    queryFn: () => answerOf(client.GET('/api/stories/{id}/translations/{locale}/units', { params: { path: targetParams(target), query: params } })),
     placeholderData: keepPreviousData,
   });
 }
@@ -70,7 +59,7 @@ export function useTranslationUnits(target: TranslationTarget, params: UnitListP
 export function useTranslationPreview(target: TranslationTarget) {
   return useQuery({
     queryKey: previewKey(target),
-    queryFn: () => api<TranslationPreviewView>(`${targetPath(target)}/preview`),
+    queryFn: () => answerOf(client.GET('/api/stories/{id}/translations/{locale}/preview', { params: { path: targetParams(target) } })),
     placeholderData: keepPreviousData,
   });
 }
@@ -94,10 +83,10 @@ export function useSaveTranslationUnit(target: TranslationTarget) {
   const queryClient = useQueryClient();
   const refresh = useRefreshAfterWrite(target);
   return useMutation({
-    mutationFn: ({ unitId, ...body }: SaveTranslationUnitBody & { unitId: string }) =>
-      api<SavedTranslationUnit>(`${targetPath(target)}/units/${encodeURIComponent(unitId)}`, { method: 'PUT', body }),
+    mutationFn: ({ unitId, ...body }: Schema<'SaveTranslationUnitDto'> & { unitId: string }) =>
+      answerOf(client.PUT('/api/stories/{id}/translations/{locale}/units/{unitId}', { params: { path: { ...targetParams(target), unitId } }, body })),
     onSuccess: (saved, { unitId, text }) => {
-      queryClient.setQueriesData<Page<TranslationUnitView>>({ queryKey: unitsKey(target) }, (page) =>
+      queryClient.setQueriesData<Schema<'TranslationUnitPage'>>({ queryKey: unitsKey(target) }, (page) =>
         page
           ? { ...page, items: page.items.map((unit) => (unit.unitId === unitId ? { ...unit, ...saved, target: text || null, previousSource: null } : unit)) }
           : page,
@@ -114,13 +103,25 @@ export function useReloadUnits(target: TranslationTarget) {
 }
 
 export function useDownloadXliff(target: TranslationTarget) {
-  return useMutation({ mutationFn: () => apiFile(`${targetPath(target)}/xliff`, { accept: XLIFF_TYPE }) });
+  return useMutation({
+    mutationFn: () =>
+      answerOf(client.GET('/api/stories/{id}/translations/{locale}/xliff', { params: { path: targetParams(target) }, headers: { Accept: XLIFF_TYPE }, parseAs: 'blob' })),
+  });
 }
 
 export function useUploadXliff(target: TranslationTarget) {
   const refresh = useRefreshAfterWrite(target);
   return useMutation({
-    mutationFn: (file: Blob) => api<XliffImportResult>(`${targetPath(target)}/xliff`, { method: 'PUT', file: { type: XLIFF_TYPE, content: file } }),
+    // The document goes as it is, under its own media type; the server reads it as UTF-8 text, as Blob.text() does.
+    mutationFn: async (file: Blob) =>
+      answerOf(
+        client.PUT('/api/stories/{id}/translations/{locale}/xliff', {
+          params: { path: targetParams(target) },
+          body: await file.text(),
+          bodySerializer: (document) => document,
+          headers: { 'Content-Type': XLIFF_TYPE },
+        }),
+      ),
     onSuccess: () => refresh(true),
   });
 }

@@ -1,4 +1,4 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength, registerDecorator, ValidateIf } from 'class-validator';
 import { Transform } from 'class-transformer';
 import { MEDIA_MISSING_FILTERS, MEDIA_SORT, type MediaLicence, type MediaMissingFilter, type MediaSort } from '@mantlepiece/shared';
@@ -17,6 +17,10 @@ export class UploadMediaDto {
   @IsOptional()
   @QueryRowId()
   venueId?: number;
+
+  // Multer takes the files out of the body before validation; this only documents the form field they come in.
+  @ApiProperty({ type: 'array', items: { type: 'string', format: 'binary' }, description: 'The images, each one under this field name' })
+  file: unknown[];
 }
 
 export class ListMediaQuery extends PageQuery {
@@ -108,7 +112,12 @@ export class UpdateMediaDto {
   @OptionalDateOnlyField('Last day the licence allows showing the image')
   licenceExpiresOn?: string | null;
 
-  @ApiPropertyOptional({ example: { en: 'A pan of soup with arrows rising in the middle' }, description: 'Per locale; an empty text removes that locale' })
+  @ApiPropertyOptional({
+    type: 'object',
+    additionalProperties: { type: 'string' },
+    example: { en: 'A pan of soup with arrows rising in the middle' },
+    description: 'Per locale; an empty text removes that locale',
+  })
   @Omittable()
   @Transform(({ value }) => canonicalAltKeys(value))
   @ValidWith(altTextsProblem)

@@ -6,11 +6,13 @@ import { IsIntBetween, IsRowId, Omittable, UNSIGNED_INT_MAX } from '../../common
 // a path into the document; class-validator only sees that it is an object.
 const DOC_MESSAGE = { message: 'The document is a Tiptap JSON object.' };
 const DOC_EXAMPLE = { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Hot rock rises.' }] }] };
+// The same schema the panels are answered with, so a document read can be sent back as it is.
+const PANEL_DOC_SCHEMA = { allOf: [{ $ref: '#/components/schemas/PanelDocJSON' }], example: DOC_EXAMPLE };
 
 export const MAX_WORD_BUDGET = 400;
 
 export class CreatePanelDto {
-  @ApiPropertyOptional({ example: DOC_EXAMPLE, description: 'Tiptap JSON; an empty paragraph when left out' })
+  @ApiPropertyOptional({ ...PANEL_DOC_SCHEMA, description: 'Tiptap JSON; an empty paragraph when left out' })
   @Omittable()
   @IsObject(DOC_MESSAGE)
   doc?: unknown;
@@ -27,7 +29,7 @@ export class CreatePanelDto {
 }
 
 export class SavePanelDocumentDto {
-  @ApiProperty({ example: DOC_EXAMPLE })
+  @ApiProperty(PANEL_DOC_SCHEMA)
   @IsObject(DOC_MESSAGE)
   doc: unknown;
 
