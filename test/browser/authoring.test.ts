@@ -1,16 +1,20 @@
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, newContext, signIn } from '../support/browser.js';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { apiAs, launchBrowser, newContext, signIn } from '../support/browser.js';
+import { paragraphs, storyWithPanels } from '../support/stories.js';
 
 let browser: Browser;
 let page: Page;
-let storyUrl = '';
+let asCurator: Awaited<ReturnType<typeof apiAs>>;
 
-// A fresh title per run, so the test never finds a story an earlier run left behind.
-const title = `Why slopes give way ${Date.now().toString(36)}`;
+/** A name no other test or run has, so a test never finds a story or an image made elsewhere. */
+const fresh = (start: string) => `${start} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
 const typed = 'A block rests on the slope until the slope gets too steep.';
 const altText = 'An orange square standing in for a photograph of a basalt slab';
+const emptyPanel = { type: 'doc', content: [{ type: 'paragraph' }] };
+// The settings the tests below give the slope force box: it grips at μs 0.5 and slides at μk 0.4.
+const slopeBox = { type: 'widget', attrs: { widgetType: 'slope-force', widgetId: 'authoring-slope', params: { massKg: 10, angleDeg: 20, staticFriction: 0.5, kineticFriction: 0.4 } } };
 
 /** Waits for a value the page reaches by itself (an autosave after a pause, an upload), without a fixed sleep. */
 const eventually = <T>(read: () => Promise<T> | T) => expect.poll(read, { timeout: 15_000, interval: 100 });
@@ -20,13 +24,43 @@ const editorText = (on = page) => on.getByRole('textbox', { name: 'Panel text' }
 const field = (label: string) => page.getByRole('textbox', { name: label });
 
 /**
- * A small PNG drawn here, so the upload needs no file from anywhere. Its colour differs per run:
- * the library stores identical bytes once, and this run must start with an asset of its own.
+ * A small PNG drawn here, so the upload needs no file from anywhere. Its colour differs per upload:
+ * the library stores identical bytes once, and each test must start with an asset of its own.
  */
-const runColour = Date.now() % 256;
-const testImage = () => sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 200, g: runColour, b: 30 } } }).png().toBuffer();
+let uploads = 0;
+const testImage = () => {
+  uploads += 1;
+  return sharp({ create: { width: 640, height: 480, channels: 3, background: { r: Math.floor(Math.random() * 256), g: uploads, b: 30 } } }).png().toBuffer();
+};
+
+/** A story of the test's own with these panels, open in the editor; answers its title. */
+async function openStory(docs: object[]): Promise<string> {
+  const title = fresh('Why slopes give way');
+  const { storyId } = await storyWithPanels(asCurator, { title }, docs);
+  await page.goto(`/stories/${storyId}`);
+  await editorText().waitFor();
+  return title;
+}
+
+/**
+ * A story whose panel holds the typed text, the slope force box and an image of its own with English alt
+ * text, as the curator leaves it in the editor, made through the API (upload, alt text, panel).
+ * Answers the story's title and id and the image's alt text, unique to the test.
+ */
+async function storyWithImage(): Promise<{ title: string; storyId: number; alt: string }> {
+  const upload = new FormData();
+  upload.append('file', new Blob([new Uint8Array(await testImage())], { type: 'image/png' }), 'basalt-slab.png');
+  const [image] = await asCurator<{ id: number }[]>('POST', '/media', upload);
+  const alt = fresh(altText);
+  await asCurator('PATCH', `/media/${image!.id}`, { alt: { en: alt } });
+  const title = fresh('Why slopes give way');
+  const panel = { type: 'doc', content: [...paragraphs(typed).content, slopeBox, { type: 'panelImage', attrs: { mediaId: String(image!.id) } }] };
+  const { storyId } = await storyWithPanels(asCurator, { title }, [panel]);
+  return { title, storyId, alt };
+}
 
 beforeAll(async () => {
+  asCurator = await apiAs('curator@demo.test');
   browser = await launchBrowser();
   page = await (await newContext(browser)).newPage();
   await signIn(page, 'curator@demo.test');
@@ -41,10 +75,10 @@ describe('a curator writes a panel', () => {
     const dialog = page.getByRole('dialog', { name: 'New story' });
     await dialog.getByRole('button', { name: 'Create story' }).click();
     await eventually(() => dialog.getByText('Required').count()).toBe(1);
+    const title = fresh('Why slopes give way');
     await dialog.getByRole('textbox', { name: 'Title' }).fill(title);
     await dialog.getByRole('button', { name: 'Create story' }).click();
     await page.getByRole('heading', { level: 1, name: title }).waitFor();
-    storyUrl = page.url();
     await page.getByRole('button', { name: 'Add the first panel' }).click();
     await editorText().waitFor();
     // An empty panel says what goes in it (a drawn hint, never part of the document).
@@ -52,6 +86,7 @@ describe('a curator writes a panel', () => {
   });
 
   it('types text, and the word count follows', async () => {
+    await openStory([emptyPanel]);
     await editorText().click();
     await page.keyboard.type(typed);
     await eventually(() => page.locator('[data-measure="words"]').textContent()).toMatch(/^12 of \d+ words$/);
@@ -59,6 +94,7 @@ describe('a curator writes a panel', () => {
   });
 
   it('inserts a slope force box and refuses kinetic friction above static friction, with the shared message', async () => {
+    await openStory([paragraphs(typed)]);
     await editorText().press('End');
     await page.keyboard.press('Enter');
     await page.getByRole('button', { name: 'Widget' }).click();
@@ -72,12 +108,17 @@ describe('a curator writes a panel', () => {
   });
 
   it('saves once the friction is fixed', async () => {
+    await openStory([{ type: 'doc', content: [...paragraphs(typed).content, slopeBox] }]);
+    await field('Kinetic (sliding) friction coefficient μk').fill('0.7');
+    await eventually(saveStatus).toBe('invalid');
     await field('Kinetic (sliding) friction coefficient μk').fill('0.4');
     await eventually(() => page.getByText(/cannot be more than static friction/).count()).toBe(0);
     await eventually(saveStatus).toBe('saved');
   });
 
   it('uploads an image in the picker, gives it alt text and puts it on the panel', async () => {
+    await openStory([paragraphs(typed)]);
+    await editorText().press('End');
     await page.getByRole('button', { name: 'Image' }).click();
     const picker = page.getByRole('dialog', { name: 'Choose an image' });
     await picker.getByTestId('media-file-input').setInputFiles({ name: 'basalt-slab.png', mimeType: 'image/png', buffer: await testImage() });
@@ -89,12 +130,15 @@ describe('a curator writes a panel', () => {
   });
 
   it('finds the text, the widget’s settings and the image again after a reload', async () => {
+    const { storyId, alt } = await storyWithImage();
+    await page.goto(`/stories/${storyId}`);
+    await editorText().waitFor();
     await page.reload();
     await editorText().waitFor();
     await eventually(() => editorText().textContent()).toContain(typed);
     await eventually(() => field('Static friction coefficient μs').inputValue()).toBe('0.5');
     expect(await field('Kinetic (sliding) friction coefficient μk').inputValue()).toBe('0.4');
-    await eventually(() => page.locator('.mp-panel-image-node img').getAttribute('alt')).toBe(altText);
+    await eventually(() => page.locator('.mp-panel-image-node img').getAttribute('alt')).toBe(alt);
     expect(await saveStatus()).toBe('saved');
   });
 });
@@ -113,6 +157,10 @@ describe('two curators on one panel', () => {
     otherContext = await newContext(browser);
     other = await otherContext.newPage();
     await signIn(other, 'curator@demo.test');
+  });
+  // Both open a story of the test's own whose panel holds the typed sentence.
+  beforeEach(async () => {
+    await openStory([paragraphs(typed)]);
     await other.goto(page.url());
     await editorText(other).waitFor();
   });
@@ -146,7 +194,7 @@ describe('two curators on one panel', () => {
     await other.reload();
     await editorText(other).waitFor();
     await eventually(() => other.getByText('Unsaved changes from this tab were restored').count()).toBe(1);
-    expect(await editorText(other).textContent()).toContain('Mine. Typed offline.');
+    expect(await editorText(other).textContent()).toContain(`${typed} Typed offline.`);
     await eventually(() => saveStatus(other)).toBe('saved');
   });
 });
@@ -163,8 +211,10 @@ describe('the media library', () => {
   });
 
   it('finds the uploaded image by its missing credit and shows where it is used', async () => {
+    const { title, alt } = await storyWithImage();
+    await page.getByRole('navigation', { name: 'Studio areas' }).getByRole('link', { name: 'Media' }).click();
     await page.getByRole('combobox', { name: 'Show' }).selectOption('missing-credit');
-    await page.getByRole('link', { name: new RegExp(altText) }).first().click();
+    await page.getByRole('link', { name: alt }).first().click();
     await page.getByRole('heading', { level: 1, name: 'basalt-slab.png' }).waitFor();
     // The server's renditions job made the WebP renditions after the upload answered; the page shows them once ready.
     await eventually(() => page.getByText('Screen renditions: 640 px wide').count()).toBe(1);
@@ -197,7 +247,7 @@ describe('the panel strip', () => {
   const cards = () => page.getByRole('list', { name: 'Panels of this story' }).getByRole('button');
 
   it('adds a panel and moves it first with Alt+←, which survives a reload', async () => {
-    await page.goto(storyUrl);
+    await openStory([paragraphs(typed)]);
     await page.getByRole('button', { name: 'Add panel' }).click();
     await eventually(() => cards().count()).toBe(2);
     // The new panel opens in the editor: wait for its empty page before typing into it.
@@ -214,6 +264,7 @@ describe('the panel strip', () => {
   });
 
   it('deletes a panel only after confirmation', async () => {
+    await openStory([paragraphs('A second screen.'), paragraphs(typed)]);
     await cards().first().click();
     await page.getByRole('button', { name: 'Delete panel' }).click();
     const confirm = page.getByRole('alertdialog', { name: 'Delete panel 1?' });

@@ -1,8 +1,9 @@
 import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { PanelDocJSON } from '@mantlepiece/shared';
 import { axeFindings } from '../support/axe.js';
 import { apiAs, atRest, baseUrl, demoPassword, launchBrowser, newContext, signIn } from '../support/browser.js';
+import { storyWithPanels } from '../support/stories.js';
 
 // A fresh tag per run, so the test never meets a story an earlier run left behind.
 const tag = Date.now().toString(36);
@@ -23,9 +24,7 @@ let curator: Page;
 let asCurator: Awaited<ReturnType<typeof apiAs>>;
 
 async function storyWith(title: string, doc: object): Promise<number> {
-  const id = (await asCurator<{ id: number }>('POST', '/stories', { title: `${title} ${tag}`, audience: 'family' })).id;
-  await asCurator('POST', `/stories/${id}/panels`, { doc, position: 0, wordBudget: 60 });
-  return id;
+  return (await storyWithPanels(asCurator, { title: `${title} ${tag}` }, [doc])).storyId;
 }
 
 /** The first panel of a story as the server keeps it. */
@@ -83,9 +82,11 @@ afterAll(() => browser?.close());
 
 describe('a drag inside a widget in the editor', () => {
   let storyId: number;
-  let slider: Locator;
-  beforeAll(async () => {
+  const slider = () => curator.locator('.ProseMirror').getByRole('slider', { name: 'Slope force box: Slope angle' });
+  // Each test opens a story of its own: the paragraph, then the slope at 20°.
+  beforeEach(async () => {
     storyId = await storyWith('Slope that stays put', { type: 'doc', content: [paragraph(firstLine), slope('stay-slope')] });
+    await openEditor(storyId);
   });
 
   /** Drags the slope's free end (at 20°: (290.9, 206.5) in the 480 × 360 drawing, hinge at (56, 292)) up onto the paragraph above the widget. */
@@ -93,7 +94,7 @@ describe('a drag inside a widget in the editor', () => {
     // The story's fields stand above the editor: bring the grip to the middle of the window, the paragraph above it and the slope below.
     await curator.locator('.mp-widget-node-handle').evaluate((grip) => grip.scrollIntoView({ block: 'center' }));
     await atRest(curator);
-    const box = (await slider.boundingBox())!;
+    const box = (await slider().boundingBox())!;
     const target = (await curator.locator('.ProseMirror > p').first().boundingBox())!;
     await curator.mouse.move(box.x + (290.9 / 480) * box.width, box.y + (206.5 / 360) * box.height);
     await curator.mouse.down();
@@ -102,14 +103,12 @@ describe('a drag inside a widget in the editor', () => {
   }
 
   it('tilts the drawing but neither moves the block nor saves the angle, even with the block selected', async () => {
-    await openEditor(storyId);
     const before = await savedPanel(storyId);
-    slider = curator.locator('.ProseMirror').getByRole('slider', { name: 'Slope force box: Slope angle' });
     // Selected by its grip, the block is what a native drag would carry: the drawing must keep the drag to itself.
     await curator.locator('.mp-widget-node-handle').click();
     await eventually(() => curator.locator('.mp-widget-node').getAttribute('data-selected')).toBe('true');
     await dragSlopeOntoParagraph();
-    await eventually(async () => Number(await slider.getAttribute('aria-valuenow'))).toBeGreaterThan(30.96);
+    await eventually(async () => Number(await slider().getAttribute('aria-valuenow'))).toBeGreaterThan(30.96);
     expect((await curator.locator('.ProseMirror').evaluate((editor) => Array.from(editor.children, (child) => child.tagName))).slice(0, 2)).toEqual(['P', 'DIV']);
     await curator.getByRole('button', { name: 'Use this as the starting setting' }).waitFor();
     await expectAccessible(curator, 'editor with a widget being tried');
@@ -127,10 +126,9 @@ describe('a drag inside a widget in the editor', () => {
   });
 
   it('saves the text typed afterwards with the block still after the paragraph and the angle as it was', async () => {
-    await openEditor(storyId);
     await dragSlopeOntoParagraph();
     await curator.getByRole('button', { name: 'Back to the saved setting' }).click();
-    await eventually(() => slider.getAttribute('aria-valuenow')).toBe('20');
+    await eventually(() => slider().getAttribute('aria-valuenow')).toBe('20');
     await curator.locator('.ProseMirror > p').first().click();
     await curator.keyboard.press('End');
     await curator.keyboard.type(' Tilt it.');
@@ -142,7 +140,7 @@ describe('a drag inside a widget in the editor', () => {
 
   it('keeps a tried angle only when the curator uses it as the starting setting', async () => {
     await dragSlopeOntoParagraph();
-    const tried = Number(await slider.getAttribute('aria-valuenow'));
+    const tried = Number(await slider().getAttribute('aria-valuenow'));
     expect(tried).toBeGreaterThan(30.96);
     await curator.getByRole('button', { name: 'Use this as the starting setting' }).click();
     await eventually(async () => savedAngle((await savedPanel(storyId)).doc)).toBe(tried);

@@ -1,10 +1,11 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { chromium, type Browser, type BrowserContext, type Locator, type Page, type Request } from 'playwright-core';
-import type { FleetKioskView, KioskManifestResponse, KioskView, PublicationRecord, ReleaseManifest, ReleaseView } from '@mantlepiece/shared';
-import { baseUrl, chromiumOptions, demoPassword, launchBrowser, newContext, signIn } from '../support/browser';
+import type { FleetKioskView, KioskManifestResponse, KioskView, PublicationRecord, ReleaseManifest, ReleasePreview, ReleaseView } from '@mantlepiece/shared';
+import { apiAs, baseUrl, chromiumOptions, launchBrowser, newContext, signIn } from '../support/browser';
+import { publishedRelease } from '../support/releases';
 import { touchDrag } from '../support/touch';
 
 // The seeded demo (server/src/seed): one gallery, one station, three approved stories.
@@ -19,23 +20,22 @@ const KIOSK_PATH = '/kiosk/?poll=1&heartbeat=1';
 
 let browser: Browser;
 let studio: Page;
+let technician: Awaited<ReturnType<typeof apiAs>>;
+let galleryId: number;
+let stationId: number;
+/** The latest approved revision of every demo story but the one left out: what the first release carries. */
+let keptRevisions: number[];
+// Each test's own kiosk (see beforeEach).
 let kioskProfile: string;
 let kiosk: BrowserContext;
 let screen: Page;
-let technicianToken: string;
-let firstRelease: number;
-let secondRelease: number;
 let kioskId: number;
-/** Every answer the kiosk got from the manifest route, by its publication's sequence: what a replay would send again. */
-const answers = new Map<number, KioskManifestResponse>();
+/** Every answer this test's kiosk got from the manifest route, by its publication's sequence: what a replay would send again. */
+let answers: Map<number, KioskManifestResponse>;
 const sequenceOf = (answer: KioskManifestResponse) => (JSON.parse(answer.publication.record) as PublicationRecord).sequence;
 
 /** The staff API as the technician, for checks the studio pages do not show in full. */
-async function staff<T>(path: string): Promise<T> {
-  const response = await fetch(`${baseUrl}/api${path}`, { headers: { Authorization: `Bearer ${technicianToken}` } });
-  if (!response.ok) throw new Error(`GET ${path} answered ${response.status}: ${await response.text()}`);
-  return (await response.json()) as T;
-}
+const staff = <T>(path: string) => technician<T>('GET', path);
 
 async function manifestOf(releaseId: number): Promise<ReleaseManifest> {
   return JSON.parse((await staff<{ manifest: string }>(`/releases/${releaseId}/manifest`)).manifest) as ReleaseManifest;
@@ -58,41 +58,80 @@ async function buildRelease(choose?: (dialog: Locator) => Promise<void>): Promis
   return id;
 }
 
+/** The kiosk as the Fleet list shows it, from its last heartbeat. */
+const fleetRow = async () => (await staff<{ items: FleetKioskView[] }>('/kiosks?pageSize=100')).items.find((item) => item.id === kioskId);
+
+/** The first release, as the first test builds it in the studio (one story left out), built and made Live through the API. */
+const publishFirstRelease = () => publishedRelease(technician, galleryId, 60_000, { revisionIds: keptRevisions });
+
+/** Waits until the test's kiosk reports, by its heartbeat, that it plays this release; answers the publication it follows. */
+async function playing(releaseId: number, sequence?: number): Promise<number> {
+  const row = await vi.waitUntil(async () => {
+    const current = await fleetRow();
+    return current?.releasePlaying?.id === releaseId && current.publication && (sequence === undefined || current.publication.sequence === sequence) && current;
+  }, { timeout: 60_000, interval: 250 });
+  return row.publication!.sequence;
+}
+
+/**
+ * The test's kiosk paired at the station through the API and playing the first release, taken on by the
+ * technician's API up to `stage`: a second release (every story) published and followed, then the gallery
+ * rolled back to the first. Answers the releases and the sequence of the first publication the kiosk followed.
+ */
+async function kioskFollowing(stage: 'first release' | 'second release' | 'rollback' = 'first release') {
+  const first = await publishFirstRelease();
+  await screen.goto(KIOSK_PATH);
+  const shown = screen.locator('[data-pairing-code]');
+  await shown.waitFor();
+  ({ kioskId } = await technician<{ kioskId: number }>('POST', `/stations/${stationId}/pair`, { pairingCode: await shown.getAttribute('data-pairing-code') }));
+  await screen.getByRole('button', { name: /Touch to begin/ }).waitFor({ timeout: 30_000 });
+  const firstSequence = await playing(first.id);
+  if (stage === 'first release') return { first, second: undefined, firstSequence };
+  const second = await publishedRelease(technician, galleryId, 60_000);
+  await playing(second.id, firstSequence + 1);
+  if (stage === 'second release') return { first, second, firstSequence };
+  await technician('POST', `/releases/${first.id}/publish`);
+  await playing(first.id, firstSequence + 2);
+  return { first, second, firstSequence };
+}
+
 beforeAll(async () => {
-  const login = await fetch(`${baseUrl}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: 'technician@demo.test', password: demoPassword }),
-  });
-  technicianToken = ((await login.json()) as { accessToken: string }).accessToken;
+  technician = await apiAs('technician@demo.test');
+  galleryId = (await staff<{ items: { id: number; name: string }[] }>('/galleries?pageSize=100')).items.find((gallery) => gallery.name === GALLERY)!.id;
+  stationId = (await staff<{ items: { id: number; name: string }[] }>('/stations?pageSize=100')).items.find((station) => station.name === STATION)!.id;
+  const preview = await staff<ReleasePreview>(`/galleries/${galleryId}/releases/preview`);
+  keptRevisions = preview.stories.filter((story) => story.title !== LEFT_OUT).map((story) => story.revisionId);
   browser = await launchBrowser();
   studio = await (await newContext(browser)).newPage();
   await signIn(studio, 'technician@demo.test');
-  // The kiosk is its own browser profile on disk, as a gallery screen's is: storage outlives a reload.
+});
+
+// Each test has a kiosk of its own, a new browser profile on disk as a gallery screen's is (storage outlives a reload), not yet paired.
+beforeEach(async () => {
   kioskProfile = await mkdtemp(join(tmpdir(), 'mantlepiece-kiosk-'));
   kiosk = await chromium.launchPersistentContext(kioskProfile, {
     ...chromiumOptions, baseURL: baseUrl, locale: 'en-GB', viewport: { width: 1920, height: 1080 }, hasTouch: true,
   });
   screen = kiosk.pages()[0] ?? (await kiosk.newPage());
+  const kept = new Map<number, KioskManifestResponse>();
+  answers = kept;
   screen.on('response', (response) => {
     if (!response.url().endsWith('/api/kiosk/manifest') || response.status() !== 200) return;
-    // A body is gone once the page navigated away (the kiosk reloads between tests); that answer is simply not kept.
-    void response.json().then((answer: KioskManifestResponse) => answers.set(sequenceOf(answer), answer), () => undefined);
+    // A body is gone once the page navigated away (the kiosk reloads in tests); that answer is simply not kept.
+    void response.json().then((answer: KioskManifestResponse) => kept.set(sequenceOf(answer), answer), () => undefined);
   });
 });
 
-/** The kiosk as the Fleet list shows it, from its last heartbeat. */
-const fleetRow = async () => (await staff<{ items: FleetKioskView[] }>('/kiosks?pageSize=100')).items.find((item) => item.id === kioskId);
-
-afterAll(async () => {
+afterEach(async () => {
   await kiosk?.close();
-  await browser?.close();
   if (kioskProfile) await rm(kioskProfile, { recursive: true, force: true });
 });
 
+afterAll(() => browser?.close());
+
 describe('a release reaches a kiosk paired through the studio, plays offline and survives a tampered file', () => {
   it('builds a release of the demo gallery with one story left out, follows the build and publishes it', async () => {
-    firstRelease = await buildRelease(async (dialog) => {
+    const firstRelease = await buildRelease(async (dialog) => {
       await dialog.getByRole('radio', { name: 'Choose revisions' }).check();
       await dialog.getByLabel(`Revision of ${LEFT_OUT}`).selectOption({ label: 'Leave out' });
     });
@@ -106,6 +145,7 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
   });
 
   it('pairs a new kiosk by the code on its screen, entered on the station page', async () => {
+    await publishFirstRelease();
     await screen.goto(KIOSK_PATH);
     const shown = screen.locator('[data-pairing-code]');
     await shown.waitFor();
@@ -127,6 +167,7 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
   });
 
   it('plays the published stories, and its slope force box follows a finger', async () => {
+    await kioskFollowing();
     await screen.getByRole('button', { name: /Touch to begin/ }).tap();
     const cards = screen.locator('.story-card-title');
     await expect.poll(() => cards.allTextContents()).toEqual(KEPT);
@@ -148,6 +189,7 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
   });
 
   it('still plays after a reload with the network cut', async () => {
+    await kioskFollowing();
     await screen.waitForFunction(() => navigator.serviceWorker.controller !== null);
     await kiosk.setOffline(true);
     await screen.reload();
@@ -159,7 +201,8 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
   });
 
   it('rejects a newer release whose file was changed on the way, keeps playing the old one and reports why', async () => {
-    secondRelease = await buildRelease();
+    const { first: { id: firstRelease } } = await kioskFollowing();
+    const secondRelease = await buildRelease();
     const [before, after] = await Promise.all([manifestOf(firstRelease), manifestOf(secondRelease)]);
     const known = new Set(before.files.map((file) => file.sha256));
     const fresh = after.files.filter((file) => !known.has(file.sha256));
@@ -208,6 +251,8 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
   });
 
   it('rolls the gallery back to the first release from the studio', async () => {
+    const { first, second, firstSequence } = await kioskFollowing('second release');
+    const [firstRelease, secondRelease] = [first.id, second!.id];
     await studio.goto('/releases');
     await studio.getByLabel('Gallery', { exact: true }).selectOption({ label: GALLERY });
     await studio.locator(`tr[data-release-id="${firstRelease}"]`).getByRole('button', { name: /^Roll back to Release \d+$/ }).click();
@@ -221,13 +266,14 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
     await expect.poll(async () => (await staff<{ items: KioskView[] }>('/kiosks?pageSize=100')).items.find((item) => item.id === kioskId)?.releaseLive?.id).toBe(firstRelease);
 
     // The rollback is a new publication, two after the one the kiosk first followed: it follows it.
-    const [firstSequence] = [...answers.keys()].sort((a, b) => a - b);
-    expect(firstSequence, 'the first publication the kiosk received').toBeDefined();
-    await expect.poll(async () => (await fleetRow())?.publication?.sequence, { timeout: 30_000 }).toBe(firstSequence! + 2);
+    expect(Math.min(...answers.keys()), 'the first publication the kiosk received').toBe(firstSequence);
+    await expect.poll(async () => (await fleetRow())?.publication?.sequence, { timeout: 30_000 }).toBe(firstSequence + 2);
     expect((await fleetRow())?.releasePlaying?.id).toBe(firstRelease);
   });
 
   it('refuses the withdrawn release’s answer sent again, signed as it is, and keeps playing the rollback', async () => {
+    const { first, second } = await kioskFollowing('rollback');
+    const [firstRelease, secondRelease] = [first.id, second!.id];
     const followed = (await fleetRow())!.publication!.sequence;
     const withdrawn = answers.get(followed - 1);
     expect(withdrawn && JSON.parse(withdrawn.manifest).releaseId, 'the answer that carried the second release').toBe(secondRelease);
@@ -243,6 +289,7 @@ describe('a release reaches a kiosk paired through the studio, plays offline and
   });
 
   it('keeps playing once its publication has expired by its clock, says so, and the Fleet page shows it', async () => {
+    await kioskFollowing();
     const followed = (await fleetRow())!.publication!;
     // The kiosk's clock moves past the record's expiry, as when nothing fresh reached it for weeks.
     await screen.clock.setFixedTime(new Date(Date.parse(followed.expiresAt) + 86_400_000));
@@ -279,8 +326,8 @@ describe('a kiosk revoked in the studio', () => {
   const unpairedNotice = () => screen.getByText('This screen was unpaired in the studio. To use it again, pair it with the code below.');
 
   it('lets the visitor finish, then forgets its pairing and releases and shows that it was unpaired with a new pairing code, also after a restart, and pairs anew', async () => {
-    // Its clock back to the present (the test before moved it weeks on), and a visitor who walks away after two seconds.
-    await screen.clock.setFixedTime(new Date());
+    await kioskFollowing();
+    // A visitor who walks away after two seconds.
     await screen.goto('/kiosk/?poll=1&heartbeat=1&idle=2');
     await screen.getByRole('button', { name: /Touch to begin/ }).tap();
     await screen.getByRole('button', { name: new RegExp(KEPT[1]!.replace('?', '\\?')) }).tap();

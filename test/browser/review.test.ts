@@ -2,48 +2,55 @@ import fs from 'node:fs';
 import path from 'node:path';
 import mailparser, { type ParsedMail } from 'mailparser';
 import type { Browser, Page } from 'playwright-core';
+import type { PanelView } from '@mantlepiece/shared';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, demoPassword, launchBrowser, newContext, signIn } from '../support/browser.js';
+import { apiAs, baseUrl, launchBrowser, newContext, signIn } from '../support/browser.js';
 import { publishedRelease } from '../support/releases.js';
+import { paragraphs, storyWithPanels } from '../support/stories.js';
 import { joinVenue, leaveVenue } from '../support/venues.js';
 
-// A fresh title per run, so the test never meets a story an earlier run left behind.
-const title = `How fast plates move ${Date.now().toString(36)}`;
 // The first draft is wrong on purpose: plates move a few cm per year, about 1 to 15 (brief, facts of the trade).
 const wrongText = 'The plates under our feet move about 50 metres every year.';
 const fixedText = 'The plates under our feet move a few centimetres every year.';
 const note = 'Plates move a few centimetres a year, not 50 metres. Please fix the rate.';
+const submissionNote = 'First draft of the plate-speed panel; please check the rate.';
+const resubmissionNote = 'The rate is fixed.';
 
 let browser: Browser;
 let curator: Page;
 let educator: Page;
-let storyId: number;
+let demoVenueId: number;
 
 // Long enough for the editor's autosave pause and a page's first requests; polling ends as soon as the state is there.
 const settled = { timeout: 10_000 };
 
-const panelDoc = (text: string) => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text }] }] });
+/** A title no other test or run has, so a test never meets a story made elsewhere. */
+const freshTitle = (start: string) => `${start} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
 
-async function apiAs(email: string) {
-  const login = await fetch(`${baseUrl}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email, password: demoPassword }),
-  });
-  expect(login.status, `sign-in of ${email}`).toBe(200);
-  const { accessToken } = (await login.json()) as { accessToken: string };
-  return async <T>(method: string, url: string, body?: unknown): Promise<T> => {
-    const response = await fetch(`${baseUrl}/api${url}`, {
-      method,
-      headers: { Authorization: `Bearer ${accessToken}`, 'Content-Type': 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-    expect(response.ok, `${method} ${url} answered ${response.status}: ${await response.clone().text()}`).toBe(true);
-    return (await response.json()) as T;
-  };
+/** How far through review the API takes a plate-speed story before a test goes on in the browser. */
+type ReviewStage = 'draft' | 'submitted' | 'changes requested' | 'resubmitted' | 'approved';
+const STAGES: readonly ReviewStage[] = ['draft', 'submitted', 'changes requested', 'resubmitted', 'approved'];
+
+/**
+ * A plate-speed story of the test's own at the demo venue, written with the wrong rate and taken through
+ * review up to `stage` by the API, as the curator and the educator would have in the studio: submitted with
+ * a note, sent back with a note, fixed and resubmitted, approved. Answers its title, id and latest revision.
+ */
+async function plateSpeedStory(stage: ReviewStage): Promise<{ title: string; storyId: number; revisionId?: number }> {
+  const reached = (step: ReviewStage) => STAGES.indexOf(stage) >= STAGES.indexOf(step);
+  const [asCurator, asEducator] = await Promise.all([apiAs('curator@demo.test'), apiAs('educator@demo.test')]);
+  const title = freshTitle('How fast plates move');
+  const { storyId, panels: [panel] } = await storyWithPanels(asCurator, { title, venueId: demoVenueId }, [paragraphs(wrongText)]);
+  let revisionId: number | undefined;
+  if (reached('submitted')) ({ revisionId } = await asCurator<{ revisionId: number }>('POST', `/stories/${storyId}/submit`, { note: submissionNote }));
+  if (reached('changes requested')) await asEducator('POST', `/revisions/${revisionId}/reviews`, { verdict: 'request_changes', note });
+  if (reached('resubmitted')) {
+    await asCurator('PUT', `/panels/${panel!.id}`, { doc: paragraphs(fixedText), version: panel!.version });
+    ({ revisionId } = await asCurator<{ revisionId: number }>('POST', `/stories/${storyId}/submit`, { note: resubmissionNote }));
+  }
+  if (reached('approved')) await asEducator('POST', `/revisions/${revisionId}/reviews`, { verdict: 'approve' });
+  return { title, storyId, revisionId };
 }
-
-const submissionNote = 'First draft of the plate-speed panel; please check the rate.';
 
 /** Submit for review through its dialog, with a note to the educator. */
 async function submitWithNote(page: Page, text: string) {
@@ -67,11 +74,9 @@ async function mailTo(recipient: string): Promise<ParsedMail[]> {
 }
 
 beforeAll(async () => {
-  const asCurator = await apiAs('curator@demo.test');
-  const story = await asCurator<{ id: number }>('POST', '/stories', { title, audience: 'family' });
-  storyId = story.id;
-  await asCurator('POST', `/stories/${storyId}/panels`, { doc: panelDoc(wrongText), position: 0, wordBudget: 60 });
-
+  const asAdmin = await apiAs('admin@demo.test');
+  // Stories a test starts belong to the demo venue, whose review queue the educator's studio shows, whatever other venue the staff join.
+  demoVenueId = (await asAdmin<{ items: { id: number; slug: string }[] }>('GET', '/venues?pageSize=100')).items.find((candidate) => candidate.slug === 'basalt-point')!.id;
   browser = await launchBrowser();
   curator = await (await newContext(browser)).newPage();
   educator = await (await newContext(browser)).newPage();
@@ -82,6 +87,7 @@ afterAll(() => browser?.close());
 
 describe('a story goes through review in the browser', () => {
   it('the curator sees the draft’s preflight, submits the story with a note through the dialog, and sees the In review badge', async () => {
+    const { title, storyId } = await plateSpeedStory('draft');
     await curator.goto(`/stories/${storyId}`);
     await curator.getByRole('heading', { level: 1, name: title }).waitFor();
     expect(await stateBadge(curator)).toBe('Draft');
@@ -95,6 +101,7 @@ describe('a story goes through review in the browser', () => {
   });
 
   it('the educator finds it in the review queue and asks for changes with a note', async () => {
+    const { title } = await plateSpeedStory('submitted');
     await educator.getByRole('navigation', { name: 'Studio areas' }).getByRole('link', { name: 'Reviews' }).click();
     await educator.getByRole('heading', { level: 1, name: 'Reviews' }).waitFor();
     await educator.getByRole('link', { name: title }).click();
@@ -112,7 +119,8 @@ describe('a story goes through review in the browser', () => {
   });
 
   it('the curator sees the note, fixes the panel and resubmits', async () => {
-    await curator.reload();
+    const { storyId } = await plateSpeedStory('changes requested');
+    await curator.goto(`/stories/${storyId}`);
     await expect.poll(() => stateBadge(curator), settled).toBe('Changes requested');
     await curator.getByText(/^Revisions? \(1\)$/).click();
     await curator.locator('[data-story-revisions]').getByRole('link', { name: 'Revision 1' }).click();
@@ -125,12 +133,13 @@ describe('a story goes through review in the browser', () => {
     await curator.keyboard.press('ControlOrMeta+a');
     await curator.keyboard.type(fixedText);
     await expect.poll(() => curator.locator('[data-save-status]').getAttribute('data-save-status'), settled).toBe('saved');
-    await submitWithNote(curator, 'The rate is fixed.');
+    await submitWithNote(curator, resubmissionNote);
     await curator.getByText('Revision 2 is submitted', { exact: false }).waitFor();
     await expect.poll(() => stateBadge(curator), settled).toBe('In review');
   });
 
   it('the educator sees the word-level change since the revision they asked changes on, and approves', async () => {
+    const { title } = await plateSpeedStory('resubmitted');
     await educator.goto('/reviews');
     await educator.getByRole('link', { name: title }).click();
     await educator.getByRole('heading', { level: 1, name: `${title} · revision 2` }).waitFor();
@@ -149,7 +158,8 @@ describe('a story goes through review in the browser', () => {
   });
 
   it('the curator sees the approval: the state badge and a notification', async () => {
-    await curator.reload();
+    const { title, storyId } = await plateSpeedStory('approved');
+    await curator.goto(`/stories/${storyId}`);
     await expect.poll(() => stateBadge(curator), settled).toBe('Approved');
     await expect.poll(async () => Number(await curator.locator('[data-unread]').first().getAttribute('data-unread')), { timeout: 40_000 }).toBeGreaterThan(0);
     await curator.getByRole('link', { name: /^Notifications, \d+ unread$/ }).click();
@@ -160,6 +170,7 @@ describe('a story goes through review in the browser', () => {
   });
 
   it('the approval e-mail reaches the curator with the subject and a link to the revision', async () => {
+    const { title, revisionId } = await plateSpeedStory('approved');
     const subject = `“${title}”: revision 2 approved`;
     let approval: ParsedMail | undefined;
     await expect
@@ -170,71 +181,74 @@ describe('a story goes through review in the browser', () => {
       .toBe(subject);
     const to = Array.isArray(approval!.to) ? approval!.to.map((address) => address.text).join(', ') : approval!.to?.text;
     expect(to).toContain('curator@demo.test');
-    const link = await curator.getByRole('link', { name: subject }).getAttribute('href');
-    expect(approval!.text, 'the mail links to the revision page the notification opens').toContain(`${(process.env.PUBLIC_URL ?? baseUrl).replace(/\/$/, '')}${link}`);
+    expect(approval!.text, 'the mail links to the approved revision’s page, which the notification opens too').toContain(`${(process.env.PUBLIC_URL ?? baseUrl).replace(/\/$/, '')}/reviews/${revisionId}`);
   });
 });
 
 describe('an approved, translated, released story is fixed in the browser', () => {
-  const typoTitle = `Ridges and trenches ${Date.now().toString(36)}`;
   const typo = 'New sea floor forms at mid-ocean rdiges and sinks at trenches.';
   const fixed = 'New sea floor forms at mid-ocean ridges and sinks at trenches.';
-  let typoStoryId: number;
-  let firstRevisionId: number;
   const badge = (page: Page) => page.locator('header [data-story-state]').first().textContent();
 
-  let galleryId: number;
-  let demoVenueId: number;
   let typoVenueId: number;
   afterAll(async () => {
     const asAdmin = await apiAs('admin@demo.test');
     if (typoVenueId) for (const email of ['curator@demo.test', 'educator@demo.test', 'translator@demo.test', 'technician@demo.test']) await leaveVenue(asAdmin, email, typoVenueId);
   });
   type Unit = { unitId: string; source: string; status: string; version: number };
+  type ReleasedStory = { title: string; storyId: number; galleryId: number; firstRevisionId: number };
 
-  /** The translator puts every French unit that is not translated from its current source into French. */
-  async function translateIntoFrench(): Promise<Unit[]> {
+  /** The translator puts every French unit of the story that is not translated from its current source into French. */
+  async function translateIntoFrench(storyId: number): Promise<Unit[]> {
     const asTranslator = await apiAs('translator@demo.test');
-    const units = (await asTranslator<{ items: Unit[] }>('GET', `/stories/${typoStoryId}/translations/fr/units?pageSize=100`)).items;
+    const units = (await asTranslator<{ items: Unit[] }>('GET', `/stories/${storyId}/translations/fr/units?pageSize=100`)).items;
     for (const unit of units.filter((each) => each.status !== 'translated')) {
-      await asTranslator('PUT', `/stories/${typoStoryId}/translations/fr/units/${encodeURIComponent(unit.unitId)}`, { text: `FR: ${unit.source}`, version: unit.version });
+      await asTranslator('PUT', `/stories/${storyId}/translations/fr/units/${encodeURIComponent(unit.unitId)}`, { text: `FR: ${unit.source}`, version: unit.version });
     }
     return units;
   }
 
   /** The technician builds a release of the story's gallery, waits for it to be Ready and publishes it; answers its manifest's story. */
-  async function releaseAndPublish() {
+  async function releaseAndPublish({ storyId, galleryId }: ReleasedStory) {
     const asTechnician = await apiAs('technician@demo.test');
     const release = await publishedRelease(asTechnician, galleryId, 60_000);
     expect(release, 'the release build').toMatchObject({ state: 'ready' });
     const { manifest } = await asTechnician<{ manifest: string }>('GET', `/releases/${release.id}/manifest`);
-    return JSON.parse(manifest).stories.find((story: { id: number }) => story.id === typoStoryId) as { revisionId: number; panels: { docs: Record<string, unknown> }[] };
+    return JSON.parse(manifest).stories.find((story: { id: number }) => story.id === storyId) as { revisionId: number; panels: { docs: Record<string, unknown> }[] };
   }
 
-  // A venue of the test's own, translated into French without falling back to English, so a release needs every text in French.
+  /**
+   * A story with a typo, alone in a gallery of its own at the typo venue (so no other test's story joins its
+   * releases): approved, translated into French and released, as it stands before the curator fixes it.
+   */
+  async function releasedStoryWithTypo(): Promise<ReleasedStory> {
+    const [asAdmin, asCurator, asEducator] = await Promise.all([apiAs('admin@demo.test'), apiAs('curator@demo.test'), apiAs('educator@demo.test')]);
+    const galleryId = (await asAdmin<{ id: number }>('POST', '/galleries', { venueId: typoVenueId, name: freshTitle('Ocean hall') })).id;
+    const exhibit = await asAdmin<{ id: number }>('POST', '/exhibits', { galleryId, name: 'The moving sea floor' });
+    const title = freshTitle('Ridges and trenches');
+    const { storyId } = await storyWithPanels(asCurator, { title, exhibitId: exhibit.id }, [paragraphs(typo)]);
+    const firstRevisionId = (await asCurator<{ revisionId: number }>('POST', `/stories/${storyId}/submit`, {})).revisionId;
+    await asEducator('POST', `/revisions/${firstRevisionId}/reviews`, { verdict: 'approve' });
+    const story = { title, storyId, galleryId, firstRevisionId };
+    await translateIntoFrench(storyId);
+    expect((await releaseAndPublish(story)).revisionId).toBe(firstRevisionId);
+    return story;
+  }
+
+  // A venue of the suite's own, translated into French without falling back to English, so a release needs every text in French.
   beforeAll(async () => {
     const suffix = Date.now().toString(36);
     const asAdmin = await apiAs('admin@demo.test');
     const venue = await asAdmin<{ id: number }>('POST', '/venues', { name: `Typo venue ${suffix}`, slug: `typo-${suffix}`, sourceLocale: 'en', targetLocales: ['fr'], fallbackToSource: false });
-    galleryId = (await asAdmin<{ id: number }>('POST', '/galleries', { venueId: venue.id, name: 'Ocean hall' })).id;
-    const exhibit = await asAdmin<{ id: number }>('POST', '/exhibits', { galleryId, name: 'The moving sea floor' });
     // The demo staff act here through memberships of this venue too, so stories they start below name their venue.
-    demoVenueId = (await asAdmin<{ items: { id: number; slug: string }[] }>('GET', '/venues?pageSize=100')).items.find((candidate) => candidate.slug === 'basalt-point')!.id;
     for (const [email, roles, locales] of [
       ['curator@demo.test', ['curator'], []], ['educator@demo.test', ['educator'], []], ['translator@demo.test', ['translator'], ['fr']], ['technician@demo.test', ['technician'], []],
     ] as const) await joinVenue(asAdmin, email, venue.id, [...roles], [...locales]);
     typoVenueId = venue.id;
-    const asCurator = await apiAs('curator@demo.test');
-    const asEducator = await apiAs('educator@demo.test');
-    typoStoryId = (await asCurator<{ id: number }>('POST', '/stories', { title: typoTitle, audience: 'family', exhibitId: exhibit.id })).id;
-    await asCurator('POST', `/stories/${typoStoryId}/panels`, { doc: panelDoc(typo), position: 0, wordBudget: 60 });
-    firstRevisionId = (await asCurator<{ revisionId: number }>('POST', `/stories/${typoStoryId}/submit`, {})).revisionId;
-    await asEducator('POST', `/revisions/${firstRevisionId}/reviews`, { verdict: 'approve' });
-    await translateIntoFrench();
-    expect((await releaseAndPublish()).revisionId).toBe(firstRevisionId);
   });
 
   it('the curator revises it, fixes the typo and submits; the educator sees only the fix against the approved revision and approves', async () => {
+    const { title: typoTitle, storyId: typoStoryId } = await releasedStoryWithTypo();
     await curator.goto(`/stories/${typoStoryId}`);
     await curator.getByRole('heading', { level: 1, name: typoTitle }).waitFor();
     expect(await badge(curator)).toBe('Approved');
@@ -270,21 +284,29 @@ describe('an approved, translated, released story is fixed in the browser', () =
   });
 
   it('the fixed sentence’s French goes stale, is translated again, and a new release carries the fix', async () => {
-    const units = await translateIntoFrench();
+    const story = await releasedStoryWithTypo();
+    // The curator revises the story, fixes the typo and submits; the educator approves the fix.
+    const [asCurator, asEducator] = await Promise.all([apiAs('curator@demo.test'), apiAs('educator@demo.test')]);
+    await asCurator('POST', `/stories/${story.storyId}/revise`, {});
+    const [panel] = (await asCurator<{ panels: PanelView[] }>('GET', `/stories/${story.storyId}`)).panels;
+    await asCurator('PUT', `/panels/${panel!.id}`, { doc: paragraphs(fixed), version: panel!.version });
+    const { revisionId } = await asCurator<{ revisionId: number }>('POST', `/stories/${story.storyId}/submit`, {});
+    await asEducator('POST', `/revisions/${revisionId}/reviews`, { verdict: 'approve' });
+
+    const units = await translateIntoFrench(story.storyId);
     // Only the fixed sentence needs the translator again; the story's title, a unit too, stays translated.
     expect(units.filter((unit) => unit.status !== 'translated').map((unit) => [unit.source, unit.status])).toEqual([[fixed, 'stale']]);
-    const released = await releaseAndPublish();
-    expect(released.revisionId).not.toBe(firstRevisionId);
+    const released = await releaseAndPublish(story);
+    expect(released.revisionId).not.toBe(story.firstRevisionId);
     expect(JSON.stringify(released.panels[0]!.docs.en)).toContain('mid-ocean ridges');
     expect(JSON.stringify(released.panels[0]!.docs.fr)).toContain(`FR: ${fixed}`);
   });
 
   it('the curator withdraws a submission no educator has decided on, and can write again', async () => {
     const asCurator = await apiAs('curator@demo.test');
-    const story = await asCurator<{ id: number }>('POST', '/stories', { title: `Withdrawn ${Date.now().toString(36)}`, audience: 'family', venueId: demoVenueId });
-    await asCurator('POST', `/stories/${story.id}/panels`, { doc: panelDoc(fixed), position: 0, wordBudget: 60 });
-    await asCurator('POST', `/stories/${story.id}/submit`, {});
-    await curator.goto(`/stories/${story.id}`);
+    const { storyId } = await storyWithPanels(asCurator, { title: freshTitle('Withdrawn'), venueId: demoVenueId }, [paragraphs(fixed)]);
+    await asCurator('POST', `/stories/${storyId}/submit`, {});
+    await curator.goto(`/stories/${storyId}`);
     await expect.poll(() => badge(curator), settled).toBe('In review');
     expect(await curator.getByRole('textbox', { name: 'Panel text' }).getAttribute('contenteditable')).toBe('false');
     await curator.getByRole('button', { name: 'Withdraw' }).click();
@@ -297,11 +319,10 @@ describe('an approved, translated, released story is fixed in the browser', () =
   });
 
   it('does not offer Submit on a draft whose preflight has a blocker, and says which panel to fix', async () => {
-    const asCurator = await apiAs('curator@demo.test');
-    const blocked = await asCurator<{ id: number }>('POST', '/stories', { title: `Empty panel ${Date.now().toString(36)}`, audience: 'family', venueId: demoVenueId });
-    await asCurator('POST', `/stories/${blocked.id}/panels`, { doc: panelDoc(fixed), position: 0, wordBudget: 60 });
-    await asCurator('POST', `/stories/${blocked.id}/panels`, { doc: { type: 'doc', content: [{ type: 'paragraph' }] }, position: 1, wordBudget: 60 });
-    await curator.goto(`/stories/${blocked.id}`);
+    const { storyId } = await storyWithPanels(await apiAs('curator@demo.test'), { title: freshTitle('Empty panel'), venueId: demoVenueId }, [
+      paragraphs(fixed), { type: 'doc', content: [{ type: 'paragraph' }] },
+    ]);
+    await curator.goto(`/stories/${storyId}`);
     const preflight = curator.locator('[data-draft-preflight]');
     await preflight.getByText('Preflight: 1 blocker to fix before this story can be submitted').waitFor();
     await preflight.locator('[data-preflight="blocker"]').getByText('Panel 2 is empty', { exact: false }).waitFor();
