@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { Badge, makeStyles, Spinner, Text, tokens } from '@fluentui/react-components';
-import type { MyWorkView, Role, WorkList } from '@mantlepiece/shared';
+import type { MyWorkView, Role } from '@mantlepiece/shared';
+import type { TFunction } from 'i18next';
 import { useTranslation } from 'react-i18next';
 import { useMyWork } from '../../api/my-work';
 import { DemoBadge } from '../../components/fleet/DemoBadge';
@@ -25,14 +26,66 @@ interface Row {
   detail?: ReactNode;
 }
 
+/** Every list of waiting work, by its kind, across the roles. */
+type Lists = NonNullable<MyWorkView['curator']> & NonNullable<MyWorkView['educator']> & NonNullable<MyWorkView['translator']>
+  & NonNullable<MyWorkView['technician']> & NonNullable<MyWorkView['admin']>;
+type SectionKind = keyof Lists;
+type Section = { [K in SectionKind]: { kind: K; list: Lists[K] } }[SectionKind];
+
+/** What a row's wording needs from the page: the translation, "how long ago" and dates as staff read them. */
+interface Words {
+  t: TFunction;
+  ago: (iso: string) => string;
+  formatDate: (iso: string) => string;
+}
+
+/** How each list reads: where its "all" link leads, and each item as a row. */
+const SECTIONS: { [K in SectionKind]: { more: string; toRow: (item: Lists[K]['items'][number], words: Words) => Row } } = {
+  drafts: { more: '/stories', toRow: (item, { t, ago }) => ({ key: item.storyId, link: item.link, label: item.title, detail: t('home.work.changed', { when: ago(item.updatedAt) }) }) },
+  changesRequested: { more: '/stories', toRow: (item, words) => SECTIONS.drafts.toRow(item, words) },
+  openComments: {
+    more: '/stories',
+    toRow: (item, { t, ago }) => ({ key: item.storyId, link: item.link, label: item.title, detail: t('home.work.comments', { count: item.openComments, when: ago(item.latestAt) }) }),
+  },
+  reviewQueue: {
+    more: '/reviews',
+    toRow: (item, { t }) => ({ key: item.revisionId, link: item.link, label: item.title, detail: t('home.work.waiting', { number: item.revisionNumber, time: durationText(item.waitingS) }) }),
+  },
+  translations: {
+    more: '/translations',
+    toRow: (item, { t }) => ({ key: `${item.storyId}-${item.locale}`, link: item.link, label: `${item.title} · ${item.locale}`, detail: t('home.work.units', { untranslated: item.untranslated, stale: item.stale }) }),
+  },
+  kiosks: {
+    more: '/fleet',
+    toRow: (item, { t, ago }) => ({
+      key: item.kioskId, link: item.link, label: `${item.station} · ${item.gallery}`,
+      detail: <>{t(`kioskStates.${item.state}`)} · {item.lastHeartbeatAt ? t('home.work.lastHeard', { when: ago(item.lastHeartbeatAt) }) : t('home.work.neverHeard')}{item.demo ? <> <DemoBadge /></> : null}</>,
+    }),
+  },
+  releases: {
+    more: '/releases',
+    toRow: (item, { t, ago }) => ({ key: item.releaseId, link: item.link, label: t('home.work.release', { number: item.number, gallery: item.gallery }), detail: `${t(`releaseStates.${item.state}`)} · ${ago(item.at)}` }),
+  },
+  invitations: {
+    more: '/people',
+    toRow: (item, { t, formatDate }) => ({ key: item.invitationId, link: item.link, label: `${item.name} (${item.email})`, detail: t('home.work.invitationExpires', { date: formatDate(item.expiresAt) }) }),
+  },
+  licences: {
+    more: '/media',
+    toRow: (item, { t }) => ({ key: item.mediaId, link: item.link, label: item.filename, detail: t(item.daysLeft < 0 ? 'home.work.licenceEnded' : 'home.work.licenceEnds', { date: item.expiresOn }) }),
+  },
+};
+
 /** One list of waiting work: a heading with its count, each item a link to where it is done, and the way to the rest. */
-function WorkSection<T>({ id, title, list, toRow, more }: { id: string; title: string; list: WorkList<T>; toRow: (item: T) => Row; more: string }) {
-  const { t } = useTranslation();
+function WorkSection<K extends SectionKind>({ kind, list, words }: { kind: K; list: Lists[K]; words: Words }) {
+  const { t } = words;
   const styles = useStyles();
+  const { more, toRow } = SECTIONS[kind];
+  const id = `work-${kind}`;
   return (
     <section className={styles.list} aria-labelledby={id} data-work-list={id}>
       <Text as="h3" size={300} weight="semibold" id={id} className={styles.heading}>
-        {title}
+        {t(`home.work.${kind}`)}
         <Badge appearance={list.total ? 'filled' : 'tint'} color={list.total ? 'brand' : 'subtle'} data-count={list.total}>{list.total}</Badge>
       </Text>
       {list.items.length === 0 ? (
@@ -40,7 +93,7 @@ function WorkSection<T>({ id, title, list, toRow, more }: { id: string; title: s
       ) : (
         <ul className={styles.items}>
           {list.items.map((item) => {
-            const row = toRow(item);
+            const row = toRow(item, words);
             return (
               <li key={row.key} className={styles.item}>
                 <TextLink to={row.link}>{row.label}</TextLink>
@@ -65,120 +118,15 @@ export function MyWorkLists({ role }: { role: Role }) {
   if (work.isPending) return <Spinner size="tiny" label={t('home.work.loading')} />;
   if (work.isError) return <Text as="p" className={styles.empty}>{t('home.work.loadError')}</Text>;
   const now = new Date(work.dataUpdatedAt);
-  const ago = (iso: string) => relativeTime(iso, now, language);
+  const words: Words = { t, ago: (iso) => relativeTime(iso, now, language), formatDate };
   const sections = sectionsOf(work.data, role);
   if (!sections) return null;
   return (
     <div className={styles.lists}>
-      {sections.map((section) => {
-        switch (section.kind) {
-          case 'drafts':
-          case 'changesRequested':
-            return (
-              <WorkSection
-                key={section.kind}
-                id={`work-${section.kind}`}
-                title={t(`home.work.${section.kind}`)}
-                list={section.list}
-                more="/stories"
-                toRow={(item) => ({ key: item.storyId, link: item.link, label: item.title, detail: t('home.work.changed', { when: ago(item.updatedAt) }) })}
-              />
-            );
-          case 'openComments':
-            return (
-              <WorkSection
-                key={section.kind}
-                id="work-openComments"
-                title={t('home.work.openComments')}
-                list={section.list}
-                more="/stories"
-                toRow={(item) => ({ key: item.storyId, link: item.link, label: item.title, detail: t('home.work.comments', { count: item.openComments, when: ago(item.latestAt) }) })}
-              />
-            );
-          case 'reviewQueue':
-            return (
-              <WorkSection
-                key={section.kind}
-                id="work-reviewQueue"
-                title={t('home.work.reviewQueue')}
-                list={section.list}
-                more="/reviews"
-                toRow={(item) => ({ key: item.revisionId, link: item.link, label: item.title, detail: t('home.work.waiting', { number: item.revisionNumber, time: durationText(item.waitingS) }) })}
-              />
-            );
-          case 'translations':
-            return (
-              <WorkSection
-                key={section.kind}
-                id="work-translations"
-                title={t('home.work.translations')}
-                list={section.list}
-                more="/translations"
-                toRow={(item) => ({ key: `${item.storyId}-${item.locale}`, link: item.link, label: `${item.title} · ${item.locale}`, detail: t('home.work.units', { untranslated: item.untranslated, stale: item.stale }) })}
-              />
-            );
-          case 'kiosks':
-            return (
-              <WorkSection
-                key={section.kind}
-                id="work-kiosks"
-                title={t('home.work.kiosks')}
-                list={section.list}
-                more="/fleet"
-                toRow={(item) => ({
-                  key: item.kioskId, link: item.link, label: `${item.station} · ${item.gallery}`,
-                  detail: <>{t(`kioskStates.${item.state}`)} · {item.lastHeartbeatAt ? t('home.work.lastHeard', { when: ago(item.lastHeartbeatAt) }) : t('home.work.neverHeard')}{item.demo ? <> <DemoBadge /></> : null}</>,
-                })}
-              />
-            );
-          case 'releases':
-            return (
-              <WorkSection
-                key={section.kind}
-                id="work-releases"
-                title={t('home.work.releases')}
-                list={section.list}
-                more="/releases"
-                toRow={(item) => ({ key: item.releaseId, link: item.link, label: t('home.work.release', { number: item.number, gallery: item.gallery }), detail: `${t(`releaseStates.${item.state}`)} · ${ago(item.at)}` })}
-              />
-            );
-          case 'invitations':
-            return (
-              <WorkSection
-                key={section.kind}
-                id="work-invitations"
-                title={t('home.work.invitations')}
-                list={section.list}
-                more="/people"
-                toRow={(item) => ({ key: item.invitationId, link: item.link, label: `${item.name} (${item.email})`, detail: t('home.work.invitationExpires', { date: formatDate(item.expiresAt) }) })}
-              />
-            );
-          case 'licences':
-            return (
-              <WorkSection
-                key={section.kind}
-                id="work-licences"
-                title={t('home.work.licences')}
-                list={section.list}
-                more="/media"
-                toRow={(item) => ({ key: item.mediaId, link: item.link, label: item.filename, detail: t(item.daysLeft < 0 ? 'home.work.licenceEnded' : 'home.work.licenceEnds', { date: item.expiresOn }) })}
-              />
-            );
-        }
-      })}
+      {sections.map((section) => <WorkSection key={section.kind} kind={section.kind} list={section.list} words={words} />)}
     </div>
   );
 }
-
-type Section =
-  | { kind: 'drafts' | 'changesRequested'; list: NonNullable<MyWorkView['curator']>['drafts'] }
-  | { kind: 'openComments'; list: NonNullable<MyWorkView['curator']>['openComments'] }
-  | { kind: 'reviewQueue'; list: NonNullable<MyWorkView['educator']>['reviewQueue'] }
-  | { kind: 'translations'; list: NonNullable<MyWorkView['translator']>['translations'] }
-  | { kind: 'kiosks'; list: NonNullable<MyWorkView['technician']>['kiosks'] }
-  | { kind: 'releases'; list: NonNullable<MyWorkView['technician']>['releases'] }
-  | { kind: 'invitations'; list: NonNullable<MyWorkView['admin']>['invitations'] }
-  | { kind: 'licences'; list: NonNullable<MyWorkView['admin']>['licences'] };
 
 function sectionsOf(work: MyWorkView, role: Role): Section[] | null {
   switch (role) {
