@@ -1,12 +1,11 @@
+import createClient, { type Client } from 'openapi-fetch';
+import type { components, paths } from '@mantlepiece/shared/api';
 import type {
-  EventsBody, EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, KioskManifestResponse, PairCompleteWaiting, PairStartResponse,
+  EventsResponse, HeartbeatBody, KioskCredential, KioskEvent, KioskManifestResponse, PairStartResponse,
 } from '@mantlepiece/shared/kiosk';
 
 /** The public view of a venue: its name and languages, for the screens a kiosk shows before it plays. */
-export interface KioskVenue {
-  name: string;
-  locales: string[];
-}
+export type KioskVenue = components['schemas']['KioskVenueView'];
 
 /** A server answer the kiosk did not expect; `status` 0 when the server could not be reached. */
 export class KioskApiError extends Error {
@@ -24,12 +23,28 @@ export type PairAnswer = { status: 'waiting' } | { status: 'expired' } | { statu
 
 export type Fetch = typeof fetch;
 
-/** Every route the kiosk calls (issue 7 contract), in one place: nothing else calls fetch. */
+/** Pairing is how a kiosk gets its device token, so these routes never carry one. */
+const PAIRING_ROUTES = '/api/kiosk/pair/';
+
+const JSON_ANSWER = { Accept: 'application/json' };
+
+/**
+ * Every route the kiosk calls (issue 7 contract), typed from the API's OpenAPI document
+ * (`@mantlepiece/shared/api`), in one place: nothing else calls fetch.
+ */
 export class KioskApi {
   private deviceToken: string | null = null;
   private unpaired: (() => void) | null = null;
+  private readonly client: Client<paths>;
 
-  constructor(private readonly fetchImpl: Fetch = (input, init) => fetch(input, init), private readonly origin = '') {}
+  constructor(private readonly fetchImpl: Fetch = (input, init) => fetch(input, init), origin = '') {
+    this.client = createClient<paths>({
+      // Absolute, because a Request outside a page (unit tests) has no base to resolve a path against.
+      baseUrl: origin || globalThis.location.origin,
+      cache: 'no-store',
+      fetch: (request) => this.send(request),
+    });
+  }
 
   useDeviceToken(token: string | null): void {
     this.deviceToken = token;
@@ -43,25 +58,18 @@ export class KioskApi {
     this.unpaired = listener;
   }
 
-  private async send(path: string, init: RequestInit = {}): Promise<Response> {
-    const headers = new Headers(init.headers);
-    const withToken = this.deviceToken !== null && !path.startsWith('/api/kiosk/pair/');
-    if (withToken) headers.set('Authorization', `Bearer ${this.deviceToken}`);
-    if (init.body !== undefined) headers.set('Content-Type', 'application/json');
+  private async send(request: Request): Promise<Response> {
+    const { pathname, search } = new URL(request.url);
+    const withToken = this.deviceToken !== null && !pathname.startsWith(PAIRING_ROUTES);
+    if (withToken) request.headers.set('Authorization', `Bearer ${this.deviceToken}`);
     let response: Response;
     try {
-      response = await this.fetchImpl(`${this.origin}${path}`, { ...init, headers, cache: 'no-store' });
+      response = await this.fetchImpl(request);
     } catch (error) {
-      throw new KioskApiError(0, `${init.method ?? 'GET'} ${path} could not reach the server (${(error as Error).message}).`);
+      throw new KioskApiError(0, `${request.method} ${pathname}${search} could not reach the server (${(error as Error).message}).`);
     }
     if (withToken && (response.status === 401 || response.status === 403)) this.unpaired?.();
     return response;
-  }
-
-  private async json<T>(path: string, init: RequestInit = {}, expected: number[] = [200]): Promise<{ status: number; body: T }> {
-    const response = await this.send(path, { ...init, headers: { Accept: 'application/json', ...init.headers } });
-    if (!expected.includes(response.status)) throw new KioskApiError(response.status, `${init.method ?? 'GET'} ${path} answered ${response.status}.`);
-    return { status: response.status, body: (await response.json()) as T };
   }
 
   /**
@@ -69,47 +77,57 @@ export class KioskApi {
    * there is. Null when the server names none (several venues, none named).
    */
   async venue(slug: string | null = null): Promise<KioskVenue | null> {
-    const path = `/api/kiosk/venue${slug ? `?slug=${encodeURIComponent(slug)}` : ''}`;
-    const response = await this.send(path, { headers: { Accept: 'application/json' } });
+    const { data, response } = await this.client.GET('/api/kiosk/venue', { params: { query: { slug: slug || undefined } }, headers: JSON_ANSWER });
     if (response.status === 204) return null;
-    if (response.status !== 200) throw new KioskApiError(response.status, `GET ${path} answered ${response.status}.`);
-    return (await response.json()) as KioskVenue;
+    if (response.status !== 200 || data === undefined) throw unexpected('GET /api/kiosk/venue', response);
+    return data;
   }
 
   async startPairing(): Promise<PairStartResponse> {
-    return (await this.json<PairStartResponse>('/api/kiosk/pair/start', { method: 'POST', body: '{}' }, [200, 201])).body;
+    const { data, response } = await this.client.POST('/api/kiosk/pair/start', { headers: JSON_ANSWER });
+    if ((response.status !== 200 && response.status !== 201) || data === undefined) throw unexpected('POST /api/kiosk/pair/start', response);
+    return data;
   }
 
   async completePairing(pollToken: string): Promise<PairAnswer> {
-    const response = await this.send('/api/kiosk/pair/complete', { method: 'POST', body: JSON.stringify({ pollToken }) });
+    const { data, response } = await this.client.POST('/api/kiosk/pair/complete', { body: { pollToken } });
     if (response.status === 202) return { status: 'waiting' };
     if (response.status === 410) return { status: 'expired' };
-    if (response.status !== 200) throw new KioskApiError(response.status, `POST /api/kiosk/pair/complete answered ${response.status}.`);
-    const body = (await response.json()) as KioskCredential | PairCompleteWaiting;
-    return 'deviceToken' in body ? { status: 'paired', credential: body } : { status: 'waiting' };
+    if (response.status !== 200 || data === undefined) throw unexpected('POST /api/kiosk/pair/complete', response);
+    return 'deviceToken' in data ? { status: 'paired', credential: data } : { status: 'waiting' };
   }
 
   async manifest(etag: string | null): Promise<ManifestAnswer> {
-    const response = await this.send('/api/kiosk/manifest', { headers: etag ? { 'If-None-Match': etag } : {} });
+    const { data, response } = await this.client.GET('/api/kiosk/manifest', { headers: etag ? { 'If-None-Match': etag } : {} });
     if (response.status === 304) return { status: 'unchanged' };
     if (response.status === 204) return { status: 'none' };
-    if (response.status !== 200) throw new KioskApiError(response.status, `GET /api/kiosk/manifest answered ${response.status}.`);
-    return { status: 'release', body: (await response.json()) as KioskManifestResponse, etag: response.headers.get('ETag') };
+    if (response.status !== 200 || data === undefined) throw unexpected('GET /api/kiosk/manifest', response);
+    return { status: 'release', body: data, etag: response.headers.get('ETag') };
   }
 
-  /** A release file from byte `from` on (a Range request when resuming). */
+  /** A release file from byte `from` on (a Range request when resuming); its body is left to the caller to read. */
   async file(sha256: string, from: number): Promise<Response> {
-    const response = await this.send(`/api/kiosk/files/${sha256}`, { headers: from > 0 ? { Range: `bytes=${from}-` } : {} });
-    if (response.status !== 200 && response.status !== 206) throw new KioskApiError(response.status, `GET /api/kiosk/files/${sha256} answered ${response.status}.`);
+    const { response } = await this.client.GET('/api/kiosk/files/{sha256}', {
+      params: { path: { sha256 } },
+      headers: from > 0 ? { Range: `bytes=${from}-` } : {},
+      parseAs: 'stream',
+    });
+    if (response.status !== 200 && response.status !== 206) throw unexpected(`GET /api/kiosk/files/${sha256}`, response);
     return response;
   }
 
   async heartbeat(body: HeartbeatBody): Promise<void> {
-    const response = await this.send('/api/kiosk/heartbeat', { method: 'POST', body: JSON.stringify(body) });
-    if (!response.ok) throw new KioskApiError(response.status, `POST /api/kiosk/heartbeat answered ${response.status}.`);
+    const { response } = await this.client.POST('/api/kiosk/heartbeat', { body });
+    if (!response.ok) throw unexpected('POST /api/kiosk/heartbeat', response);
   }
 
   async events(events: KioskEvent[]): Promise<EventsResponse> {
-    return (await this.json<EventsResponse>('/api/kiosk/events', { method: 'POST', body: JSON.stringify({ events } satisfies EventsBody) })).body;
+    const { data, response } = await this.client.POST('/api/kiosk/events', { body: { events }, headers: JSON_ANSWER });
+    if (response.status !== 200 || data === undefined) throw unexpected('POST /api/kiosk/events', response);
+    return data;
   }
+}
+
+function unexpected(call: string, response: Response): KioskApiError {
+  return new KioskApiError(response.status, `${call} answered ${response.status}.`);
 }

@@ -7,6 +7,7 @@ export interface RecordedRequest {
   path: string;
   search: string;
   headers: Headers;
+  cache: RequestCache;
   body: unknown;
 }
 
@@ -28,14 +29,16 @@ export class FakeKioskServer {
   venues: { paired?: KioskVenue; bySlug: Record<string, KioskVenue> } = { bySlug: {} };
   readonly requests: RecordedRequest[] = [];
 
-  readonly fetch: Fetch = (input, init) => {
-    const url = new URL(input instanceof Request ? input.url : input, 'http://kiosk.test');
-    const method = init?.method ?? 'GET';
-    const headers = new Headers(init?.headers);
-    const body = typeof init?.body === 'string' ? JSON.parse(init.body) as unknown : undefined;
-    this.requests.push({ method, path: url.pathname, search: url.search, headers, body });
-    if (!this.reachable) return Promise.reject(new TypeError('Failed to fetch'));
-    return Promise.resolve(this.answer(method, url.pathname, headers, url.searchParams));
+  readonly fetch: Fetch = async (input, init) => {
+    const request = new Request(input, init);
+    const url = new URL(request.url);
+    const recorded: RecordedRequest = { method: request.method, path: url.pathname, search: url.search, headers: request.headers, cache: request.cache, body: undefined };
+    // Recorded as it is sent, so the order of requests is the order of calls; the body follows.
+    this.requests.push(recorded);
+    const text = await request.text();
+    recorded.body = text ? JSON.parse(text) as unknown : undefined;
+    if (!this.reachable) throw new TypeError('Failed to fetch');
+    return this.answer(request.method, url.pathname, request.headers, url.searchParams);
   };
 
   private answer(method: string, path: string, headers: Headers, query: URLSearchParams): Response {
@@ -60,7 +63,7 @@ export class FakeKioskServer {
     const file = /^\/api\/kiosk\/files\/([0-9a-f]{64})$/.exec(path);
     if (method === 'GET' && file) return this.serveFile(file[1]!, headers.get('Range'));
     if (method === 'POST' && (path === '/api/kiosk/heartbeat')) return new Response(null, { status: 204 });
-    if (method === 'POST' && path === '/api/kiosk/events') return json(200, { stored: 0, duplicates: 0 });
+    if (method === 'POST' && path === '/api/kiosk/events') return json(200, { stored: 0, duplicates: 0, dropped: 0 });
     return json(404, { statusCode: 404, message: `Nothing is served at ${path}.` });
   }
 
