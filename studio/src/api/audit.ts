@@ -1,6 +1,5 @@
 import { keepPreviousData, useMutation, useQuery } from '@tanstack/react-query';
-import type { AuditEventView, Page } from '@mantlepiece/shared';
-import { api, apiFile } from './client';
+import { answerOf, client } from './client';
 
 export interface AuditFilter {
   actorId?: number;
@@ -13,7 +12,7 @@ export interface AuditFilter {
 export function useAuditLog(params: AuditFilter & { page: number; pageSize: number }) {
   return useQuery({
     queryKey: ['audit', params],
-    queryFn: () => api<Page<AuditEventView>>('/audit', { query: { ...params } }),
+    queryFn: () => answerOf(client.GET('/api/audit', { params: { query: params } })),
     placeholderData: keepPreviousData,
   });
 }
@@ -21,6 +20,7 @@ export function useAuditLog(params: AuditFilter & { page: number; pageSize: numb
 /** The same filter as CSV, through the client so the request carries the bearer token. */
 export function useDownloadAuditCsv() {
   return useMutation({
-    mutationFn: (filter: AuditFilter) => apiFile('/audit', { query: { ...filter }, accept: 'text/csv' }),
+    mutationFn: (filter: AuditFilter) =>
+      answerOf(client.GET('/api/audit', { params: { query: filter }, headers: { Accept: 'text/csv' }, parseAs: 'blob' })),
   });
 }

@@ -1,19 +1,6 @@
-import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import type { Page } from '@mantlepiece/shared';
-import { api } from './client';
-
-export interface CapturedMailSummary {
-  id: string;
-  to: string;
-  subject: string;
-  date: string;
-}
-
-export interface CapturedMail extends CapturedMailSummary {
-  from: string;
-  text: string;
-  html: string;
-}
+import { keepPreviousData, skipToken, useQuery } from '@tanstack/react-query';
+import { PAGE_SIZE } from '@mantlepiece/shared';
+import { answerOf, client } from './client';
 
 /**
  * Captured mail exists only while the server uses the local SMTP stand-in; everywhere else the
@@ -22,7 +9,7 @@ export interface CapturedMail extends CapturedMailSummary {
 export function useCapturedMail(page: number, enabled = true) {
   return useQuery({
     queryKey: ['dev-mail', page],
-    queryFn: () => api<Page<CapturedMailSummary>>('/dev/mail', { query: { page, pageSize: 25 } }),
+    queryFn: () => answerOf(client.GET('/api/dev/mail', { params: { query: { page, pageSize: PAGE_SIZE.fallback } } })),
     enabled,
     retry: false,
     placeholderData: keepPreviousData,
@@ -32,7 +19,6 @@ export function useCapturedMail(page: number, enabled = true) {
 export function useCapturedMessage(id: string | undefined) {
   return useQuery({
     queryKey: ['dev-mail', 'message', id],
-    queryFn: () => api<CapturedMail>(`/dev/mail/${encodeURIComponent(id ?? '')}`),
-    enabled: id !== undefined,
+    queryFn: id === undefined ? skipToken : () => answerOf(client.GET('/api/dev/mail/{id}', { params: { path: { id } } })),
   });
 }

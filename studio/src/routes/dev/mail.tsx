@@ -48,10 +48,17 @@ function TextWithLinks({ text }: { text: string }) {
   );
 }
 
+/** A message's date as staff read it; a message that came without a Date header says so. */
+function useMailDate(): (date: string | null) => string {
+  const { t } = useTranslation();
+  const formatDate = useDateFormat();
+  return (date) => (date === null ? t('devMail.undated') : formatDate(date));
+}
+
 function CapturedMessage({ id }: { id: string }) {
   const { t } = useTranslation();
   const styles = useStyles();
-  const formatDate = useDateFormat();
+  const formatDate = useMailDate();
   const message = useCapturedMessage(id);
   if (message.isPending) return <Spinner label={t('common.loading')} />;
   if (message.isError) return <Text role="alert">{describeError(t, message.error)}</Text>;
@@ -73,7 +80,7 @@ function CapturedMessage({ id }: { id: string }) {
 export function CapturedMailPage() {
   const { t } = useTranslation();
   const styles = useStyles();
-  const formatDate = useDateFormat();
+  const formatDate = useMailDate();
   const [selected, setSelected] = useState<string | undefined>();
   const [page, setPage] = useState(1);
   const mail = useCapturedMail(page);

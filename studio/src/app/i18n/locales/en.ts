@@ -260,6 +260,7 @@ export const en = {
     from: 'From',
     subject: 'Subject',
     date: 'Date',
+    undated: 'No date',
     empty: 'No mail captured yet. Invite someone or ask for a password reset to see one here.',
     choose: 'Choose a message to read it.',
     loadError: 'The captured mail could not be loaded.',

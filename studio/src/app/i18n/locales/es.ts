@@ -262,6 +262,7 @@ export const es: Translated<Messages> = {
     from: 'De',
     subject: 'Asunto',
     date: 'Fecha',
+    undated: 'Sin fecha',
     empty: 'Aún no hay correo capturado. Invite a alguien o pida un restablecimiento de contraseña para ver uno aquí.',
     choose: 'Elija un mensaje para leerlo.',
     loadError: 'No se pudo cargar el correo capturado.',

@@ -261,6 +261,7 @@ export const fr: Messages = {
     from: 'De',
     subject: 'Objet',
     date: 'Date',
+    undated: 'Sans date',
     empty: 'Aucun courriel capturé. Invitez une personne ou demandez une réinitialisation pour en voir un ici.',
     choose: 'Choisissez un message pour le lire.',
     loadError: 'Les courriels capturés n’ont pas pu être chargés.',
