@@ -55,6 +55,13 @@ describe('heartbeats', () => {
     expect((await heartbeat({ releaseId: null })).status).toBe(204);
   });
 
+  it('stores every one of a kiosk’s heartbeats sent at once (a kiosk retrying after a dropped connection), none refused as a deadlock', async () => {
+    const before = await heartbeatsStored();
+    const statuses = await Promise.all(Array.from({ length: 16 }, (_, uptimeS) => heartbeat({ uptimeS }).then((res) => res.status)));
+    expect(statuses).toEqual(Array.from({ length: 16 }, () => 204));
+    expect(await heartbeatsStored()).toBe(before + 16);
+  });
+
   it('keeps free text to letters, digits, punctuation, symbols and spaces, within its length: 400 naming the field otherwise', async () => {
     const before = await heartbeatsStored();
     const refused: [string, unknown][] = [

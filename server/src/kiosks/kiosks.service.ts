@@ -52,9 +52,11 @@ export class KiosksService {
       publicationExpiresAt: dto.publicationExpiresAt ? new Date(dto.publicationExpiresAt) : null,
       publicationExpired: dto.publicationExpired ?? false,
     };
+    // The kiosk's row first: the heartbeat's foreign key takes a shared lock on it, so two heartbeats
+    // of one kiosk that inserted first would each wait for the other's lock to update it (a deadlock).
     await this.sequelize.transaction(async (transaction) => {
-      await this.heartbeats.create({ kioskId: kiosk.id, receivedAt, releaseId: dto.releaseId, ...fields }, { transaction });
       await this.kiosks.update({ lastHeartbeatAt: receivedAt, lastReleaseId: dto.releaseId, ...fields }, { where: { id: kiosk.id }, transaction });
+      await this.heartbeats.create({ kioskId: kiosk.id, receivedAt, releaseId: dto.releaseId, ...fields }, { transaction });
     });
   }
 
