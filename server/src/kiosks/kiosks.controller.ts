@@ -28,17 +28,18 @@ export class KiosksController {
     return this.pairing.pairStation(stationId, dto.pairingCode, user, address);
   }
 
-  @ApiAnswer('KioskPage')
+  @ApiAnswer('FleetPage')
   @Get('kiosks')
   async list(@Query() query: ListKiosksQuery, @CurrentUser() person: User) {
     const page = await this.kiosks.list(query, person);
     return { ...page, items: page.items.map((kiosk) => this.states.present(kiosk)), thresholds: this.states.thresholds };
   }
 
-  @ApiAnswer('KioskView')
+  /** The kiosk as the Fleet lists it, so the page can show its row revoked without asking again. */
+  @ApiAnswer('FleetKioskView')
   @Post('kiosks/:id/revoke')
   @HttpCode(HttpStatus.OK)
-  revoke(@Param('id', ParseIntPipe) id: number, @CurrentUser() user: User) {
-    return this.kiosks.revoke(id, user);
+  async revoke(@Param('id', ParseIntPipe) id: number, @CurrentUser() user: User) {
+    return this.states.present(await this.kiosks.revoke(id, user));
   }
 }

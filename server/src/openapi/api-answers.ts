@@ -1,6 +1,6 @@
 import type {
-  ApiErrorBody, AuditEventView, CommentView, EventsResponse, ExhibitView, FleetKioskDetail, FleetKioskView, FleetThresholdsView, GalleryView, InsightsView,
-  KioskCredential, KioskManifestResponse, KioskView, LicenceIdsView, ManifestResponse, MediaPage, MediaView, MyWorkView, NotificationPage,
+  ApiErrorBody, AuditEventView, CommentView, EventsResponse, ExhibitView, FleetKioskDetail, FleetKioskView, FleetPage, GalleryView, InsightsView,
+  KioskCredential, KioskManifestResponse, LicenceIdsView, ManifestResponse, MediaPage, MediaView, MyWorkView, NotificationPage,
   NotificationPreferences, Page, PairCompleteWaiting, PairStartResponse, PanelView, PreflightEntry, ReleaseComparison, ReleasePage,
   ReleasePreview, ReleaseView, RenditionStatus, ReviewQueueItem, RevisionComparison, RevisionSummary, RevisionView, Role, SearchView,
   SessionView, StationView, StoryDetailView, StoryPage, StoryTranslationsView, StoryView, SubmitResult, SavedTranslationUnit,
@@ -62,11 +62,6 @@ export interface WidgetTypeList {
   items: WidgetDescriptor[];
 }
 
-/** The Fleet's kiosk list: each kiosk with its state, and the thresholds that state was judged by. */
-export interface KioskPage extends Page<KioskView & Pick<FleetKioskView, 'state' | 'playsLiveRelease'>> {
-  thresholds: FleetThresholdsView;
-}
-
 export interface ApiAnswerBodies {
   /** Not an answer of its own: the body of every 4xx and 5xx. */
   ApiErrorBody: ApiErrorBody;
@@ -78,6 +73,8 @@ export interface ApiAnswerBodies {
   ExhibitPage: Page<ExhibitView>;
   ExhibitView: ExhibitView;
   FleetKioskDetail: FleetKioskDetail;
+  FleetKioskView: FleetKioskView;
+  FleetPage: FleetPage;
   GalleryPage: Page<GalleryView>;
   GalleryView: GalleryView;
   Health: Health;
@@ -86,9 +83,7 @@ export interface ApiAnswerBodies {
   InvitationView: InvitationView;
   KioskCredential: KioskCredential;
   KioskManifestResponse: KioskManifestResponse;
-  KioskPage: KioskPage;
   KioskVenueView: KioskVenueView;
-  KioskView: KioskView;
   LicenceIdsView: LicenceIdsView;
   ManifestResponse: ManifestResponse;
   MediaList: MediaView[];

@@ -1,5 +1,5 @@
 import createClient from 'openapi-fetch';
-import type { ApiErrorBody, SessionView } from '@mantlepiece/shared';
+import type { ApiErrorBody } from '@mantlepiece/shared';
 import type { components, paths } from '@mantlepiece/shared/api';
 
 /** An API answer other than 2xx, with the server's field-by-field `errors` kept for forms. */
@@ -26,6 +26,7 @@ export class ApiError extends Error {
 /** Status 0 stands for "no answer at all" (offline, server down, proxy refused). */
 export const NETWORK_FAILURE = 0;
 
+type SessionView = Schema<'SessionView'>;
 type SessionListener = (session: SessionView | null) => void;
 
 // The access token lives in memory only; the refresh token is an httpOnly cookie the page never sees.
@@ -121,9 +122,9 @@ function safeJson(text: string): unknown {
  * server rotates the cookie on every refresh and a second refresh with the old one would fail.
  */
 export function refreshSession(): Promise<SessionView | null> {
-  refreshing ??= send(requestOf('/auth/refresh', { method: 'POST' }))
+  refreshing ??= client.POST('/api/auth/refresh')
     // 204: no session cookie, nobody signed in; 401: the cookie was refused.
-    .then(async (response) => (response.status === 204 || response.status === 401 ? null : read<SessionView>(response)))
+    .then((answer) => (answer.response.status === 204 || answer.response.status === 401 ? null : answerOf(answer)))
     .then((session) => {
       setSession(session);
       return session;
@@ -172,7 +173,7 @@ interface ClientAnswer {
 }
 
 /** The body of a 2xx answer from `client`; any other answer throws ApiError, as `api` does. */
-export async function answerOf<A extends ClientAnswer>(call: Promise<A>): Promise<Exclude<A['data'], undefined>> {
+export async function answerOf<A extends ClientAnswer>(call: A | Promise<A>): Promise<Exclude<A['data'], undefined>> {
   const { data, error, response } = await call;
   if (!response.ok) throw new ApiError(response.status, errorBodyOf(error, response));
   return data as Exclude<A['data'], undefined>;

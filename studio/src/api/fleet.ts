@@ -1,6 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { FleetKioskDetail, FleetKioskView, FleetPage, KioskAccess } from '@mantlepiece/shared';
-import { api } from './client';
+import type { KioskAccess } from '@mantlepiece/shared';
+import { answerOf, client } from './client';
 
 /** Kiosks report every 30 s; looking twice as often keeps a state change on screen within a heartbeat. */
 export const FLEET_REFRESH_MS = 15_000;
@@ -13,12 +13,13 @@ export interface FleetParams {
   access?: KioskAccess;
 }
 
-const fleetKey = ['fleet'] as const;
+/** Every kiosk query, the Fleet's and a station's, so a revoke or a pairing refreshes them all. */
+export const fleetKey = ['fleet'] as const;
 
 export function useFleet(params: FleetParams) {
   return useQuery({
     queryKey: [...fleetKey, 'list', params],
-    queryFn: () => api<FleetPage>('/kiosks', { query: { ...params } }),
+    queryFn: () => answerOf(client.GET('/api/kiosks', { params: { query: params } })),
     placeholderData: keepPreviousData,
     refetchInterval: FLEET_REFRESH_MS,
   });
@@ -27,7 +28,7 @@ export function useFleet(params: FleetParams) {
 export function useFleetKiosk(id: number, params: { page: number; pageSize: number }) {
   return useQuery({
     queryKey: [...fleetKey, 'kiosk', id, params],
-    queryFn: () => api<FleetKioskDetail>(`/kiosks/${id}`, { query: { ...params } }),
+    queryFn: () => answerOf(client.GET('/api/kiosks/{id}', { params: { path: { id }, query: params } })),
     placeholderData: keepPreviousData,
     refetchInterval: FLEET_REFRESH_MS,
   });
@@ -37,7 +38,7 @@ export function useFleetKiosk(id: number, params: { page: number; pageSize: numb
 export function useRevokeKiosk() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api<FleetKioskView>(`/kiosks/${id}/revoke`, { method: 'POST' }),
+    mutationFn: (id: number) => answerOf(client.POST('/api/kiosks/{id}/revoke', { params: { path: { id } } })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: fleetKey }),
   });
 }

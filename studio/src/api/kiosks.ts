@@ -1,6 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { KioskView, Page, StationView } from '@mantlepiece/shared';
-import { api } from './client';
+import { PAGE_SIZE } from '@mantlepiece/shared';
+import { answerOf, client, type Schema } from './client';
+import { fleetKey } from './fleet';
 
 export interface KioskListParams {
   page: number;
@@ -8,27 +9,28 @@ export interface KioskListParams {
   galleryId?: number;
 }
 
-const kiosksKey = ['kiosks'] as const;
-
 export function useStation(id: number) {
-  return useQuery({ queryKey: ['settings', 'stations', 'one', id], queryFn: () => api<StationView>(`/stations/${id}`) });
+  return useQuery({
+    queryKey: ['settings', 'stations', 'one', id],
+    queryFn: () => answerOf(client.GET('/api/stations/{id}', { params: { path: { id } } })),
+  });
 }
 
 export function useKiosks(params: KioskListParams, enabled = true) {
   return useQuery({
-    queryKey: [...kiosksKey, params],
+    queryKey: [...fleetKey, 'list', params],
     enabled,
-    queryFn: () => api<Page<KioskView>>('/kiosks', { query: { ...params } }),
+    queryFn: () => answerOf(client.GET('/api/kiosks', { params: { query: params } })),
     placeholderData: keepPreviousData,
   });
 }
 
 /**
  * The kiosks ever paired to a station, the active one first. The API filters by gallery; a
- * gallery has tens of kiosks at most, so one page of its kiosks holds every station's.
+ * gallery has tens of kiosks at most, so the largest page of its kiosks holds every station's.
  */
-export function useStationKiosks(station: StationView | undefined) {
-  const kiosks = useKiosks({ page: 1, pageSize: 100, galleryId: station?.galleryId }, station !== undefined);
+export function useStationKiosks(station: Schema<'StationView'> | undefined) {
+  const kiosks = useKiosks({ page: 1, pageSize: PAGE_SIZE.max, galleryId: station?.galleryId }, station !== undefined);
   return { ...kiosks, items: kiosks.data?.items.filter((kiosk) => kiosk.station.id === station?.id) ?? [] };
 }
 
@@ -36,15 +38,7 @@ export function useStationKiosks(station: StationView | undefined) {
 export function usePairKiosk(stationId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (pairingCode: string) => api<{ kioskId: number }>(`/stations/${stationId}/pair`, { method: 'POST', body: { pairingCode } }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: kiosksKey }),
-  });
-}
-
-export function useRevokeKiosk() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (kioskId: number) => api<unknown>(`/kiosks/${kioskId}/revoke`, { method: 'POST' }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: kiosksKey }),
+    mutationFn: (pairingCode: string) => answerOf(client.POST('/api/stations/{id}/pair', { params: { path: { id: stationId } }, body: { pairingCode } })),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: fleetKey }),
   });
 }

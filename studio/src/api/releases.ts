@@ -1,6 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ExhibitView, Page, ReleaseComparison, ReleasePage, ReleasePreview, ReleaseState, ReleaseView, RevisionSummary, StoryView } from '@mantlepiece/shared';
-import { api } from './client';
+import { PAGE_SIZE, type ReleaseState } from '@mantlepiece/shared';
+import { answerOf, client, type Schema } from './client';
 
 export interface ReleaseListParams {
   page: number;
@@ -20,7 +20,7 @@ export const isFinished = (state: ReleaseState) => state !== 'building';
 export function useGalleryReleases(galleryId: number | undefined, { page, pageSize }: ReleaseListParams) {
   return useQuery({
     queryKey: [...galleryReleasesKey(galleryId ?? 0), { page, pageSize }],
-    queryFn: () => api<ReleasePage>(`/galleries/${galleryId}/releases`, { query: { page, pageSize } }),
+    queryFn: () => answerOf(client.GET('/api/galleries/{id}/releases', { params: { path: { id: galleryId! }, query: { page, pageSize } } })),
     enabled: galleryId !== undefined,
     placeholderData: keepPreviousData,
     refetchInterval: (query) => (query.state.data?.items.some((release) => !isFinished(release.state)) ? BUILD_POLL_MS : false),
@@ -34,7 +34,7 @@ export function useRelease(id: number | undefined) {
     queryKey: releaseKey(id ?? 0),
     enabled: id !== undefined,
     queryFn: async () => {
-      const release = await api<ReleaseView>(`/releases/${id}`);
+      const release = await answerOf(client.GET('/api/releases/{id}', { params: { path: { id: id! } } }));
       if (isFinished(release.state)) void queryClient.invalidateQueries({ queryKey: galleryReleasesKey(release.galleryId) });
       return release;
     },
@@ -46,7 +46,7 @@ export function useRelease(id: number | undefined) {
 export function useReleaseComparison(a: number | undefined, b: number | undefined) {
   return useQuery({
     queryKey: [...releasesKey, 'compare', a, b],
-    queryFn: () => api<ReleaseComparison>('/releases/compare', { query: { a, b } }),
+    queryFn: () => answerOf(client.GET('/api/releases/compare', { params: { query: { a: a!, b: b! } } })),
     enabled: a !== undefined && b !== undefined && a !== b,
     staleTime: Number.POSITIVE_INFINITY,
   });
@@ -56,20 +56,14 @@ export function useReleaseComparison(a: number | undefined, b: number | undefine
  * What a build asks for: no revisions named, the server takes the latest approved revision of
  * each story of the gallery; stories with missing translations left out or shown in the source language.
  */
-export interface ReleaseRequest {
-  revisionIds?: number[];
-  leaveOut: number[];
-  showInSource: number[];
-}
-
-const listParam = (ids: number[] | undefined) => ids?.join(',');
+export type ReleaseRequest = Schema<'RequestReleaseDto'>;
 
 /** What a build with these choices would carry and miss, and whether it equals the Live release. */
 export function useReleasePreview(galleryId: number, request: ReleaseRequest, enabled: boolean) {
-  const query = { revisionIds: listParam(request.revisionIds), leaveOut: listParam(request.leaveOut), showInSource: listParam(request.showInSource) };
   return useQuery({
-    queryKey: [...galleryReleasesKey(galleryId), 'preview', query],
-    queryFn: () => api<ReleasePreview>(`/galleries/${galleryId}/releases/preview`, { query }),
+    queryKey: [...galleryReleasesKey(galleryId), 'preview', request],
+    // A list in the query goes as one comma-separated parameter, as the client writes any array.
+    queryFn: () => answerOf(client.GET('/api/galleries/{id}/releases/preview', { params: { path: { id: galleryId }, query: request } })),
     enabled,
     placeholderData: keepPreviousData,
   });
@@ -78,8 +72,7 @@ export function useReleasePreview(galleryId: number, request: ReleaseRequest, en
 export function useBuildRelease(galleryId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (request: ReleaseRequest) =>
-      api<{ id: number; state: 'building' }>(`/galleries/${galleryId}/releases`, { method: 'POST', body: request }),
+    mutationFn: (request: ReleaseRequest) => answerOf(client.POST('/api/galleries/{id}/releases', { params: { path: { id: galleryId } }, body: request })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: galleryReleasesKey(galleryId) }),
   });
 }
@@ -88,27 +81,27 @@ export function useBuildRelease(galleryId: number) {
 export function usePublishRelease() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api<ReleaseView>(`/releases/${id}/publish`, { method: 'POST' }),
+    mutationFn: (id: number) => answerOf(client.POST('/api/releases/{id}/publish', { params: { path: { id } } })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: releasesKey }),
   });
 }
 
 /** A story the gallery could release, with its approved revisions, newest first. */
 export interface ReleaseCandidate {
-  story: StoryView;
-  approved: RevisionSummary[];
+  story: Schema<'StoryView'>;
+  approved: Schema<'RevisionSummary'>[];
 }
 
-/** A gallery holds a handful of exhibits and tens of stories: one page of each is all of them. */
-const WHOLE_GALLERY = { page: 1, pageSize: 100 };
+/** A gallery holds a handful of exhibits and tens of stories: the largest page of each is all of them. */
+const WHOLE_GALLERY = { page: 1, pageSize: PAGE_SIZE.max };
 
 async function releaseCandidates(galleryId: number): Promise<ReleaseCandidate[]> {
-  const exhibits = await api<Page<ExhibitView>>('/exhibits', { query: { ...WHOLE_GALLERY, galleryId, sort: 'name' } });
+  const exhibits = await answerOf(client.GET('/api/exhibits', { params: { query: { ...WHOLE_GALLERY, galleryId, sort: 'name' } } }));
   const stories = (
-    await Promise.all(exhibits.items.map((exhibit) => api<Page<StoryView>>('/stories', { query: { ...WHOLE_GALLERY, exhibitId: exhibit.id, sort: 'title' } })))
+    await Promise.all(exhibits.items.map((exhibit) => answerOf(client.GET('/api/stories', { params: { query: { ...WHOLE_GALLERY, exhibitId: exhibit.id, sort: 'title' } } }))))
   ).flatMap((page) => page.items).filter((story) => story.state !== 'retired');
   return Promise.all(stories.map(async (story) => {
-    const revisions = await api<RevisionSummary[]>(`/stories/${story.id}/revisions`);
+    const revisions = await answerOf(client.GET('/api/stories/{id}/revisions', { params: { path: { id: story.id } } }));
     return { story, approved: revisions.filter((revision) => revision.state === 'approved').sort((a, b) => b.number - a.number) };
   }));
 }
@@ -119,8 +112,8 @@ export function useReleaseCandidates(galleryId: number, enabled: boolean) {
 }
 
 /**
- * The gallery's Live release. The list has no state filter, so this reads the newest hundred
- * releases: the Live one is among them unless someone rolled back a hundred builds.
+ * The gallery's Live release. The list has no state filter, so this reads the largest page of the
+ * newest releases: the Live one is among them unless someone rolled back further than a page.
  */
 export function useLiveRelease(galleryId: number | undefined) {
   const recent = useGalleryReleases(galleryId, WHOLE_GALLERY);

@@ -1,6 +1,5 @@
 import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import type { SessionView, UserView } from '@mantlepiece/shared';
-import { api, onSessionChange, refreshSession, setSession } from './client';
+import { answerOf, client, onSessionChange, refreshSession, setSession, type Schema } from './client';
 
 export const sessionKey = ['session'] as const;
 
@@ -19,7 +18,7 @@ export function useSession() {
 }
 
 /** The signed-in person; only for pages behind the session guard. */
-export function useCurrentUser(): UserView {
+export function useCurrentUser(): Schema<'UserView'> {
   const { data } = useSession();
   if (!data) throw new Error('useCurrentUser needs a signed-in session');
   return data.user;
@@ -33,21 +32,18 @@ export function connectSessionToCache(queryClient: QueryClient): () => void {
   });
 }
 
-export interface Credentials {
-  email: string;
-  password: string;
-}
+export type Credentials = Schema<'SignInDto'>;
 
 export function useSignIn() {
   return useMutation({
-    mutationFn: (credentials: Credentials) => api<SessionView>('/auth/login', { method: 'POST', body: credentials }),
+    mutationFn: (credentials: Credentials) => answerOf(client.POST('/api/auth/login', { body: credentials })),
     onSuccess: (session) => setSession(session),
   });
 }
 
 export function useSignOut() {
   return useMutation({
-    mutationFn: () => api<void>('/auth/logout', { method: 'POST' }),
+    mutationFn: () => answerOf(client.POST('/api/auth/logout')),
     // Signed out locally even when the server could not be told: the token is gone from memory.
     onSettled: () => setSession(null),
   });
@@ -56,9 +52,9 @@ export function useSignOut() {
 export function useUpdateMe() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (changes: { name?: string; uiLanguage?: string }) => api<UserView>('/auth/me', { method: 'PATCH', body: changes }),
+    mutationFn: (changes: Schema<'UpdateProfileDto'>) => answerOf(client.PATCH('/api/auth/me', { body: changes })),
     onSuccess: (user) => {
-      queryClient.setQueryData<SessionView | null>(sessionKey, (session) => (session ? { ...session, user } : session));
+      queryClient.setQueryData<Schema<'SessionView'> | null>(sessionKey, (session) => (session ? { ...session, user } : session));
     },
   });
 }

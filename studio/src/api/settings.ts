@@ -1,6 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ExhibitView, GalleryView, Page, StationView, VenueView } from '@mantlepiece/shared';
-import { api, type Query } from './client';
+import type { Page, SettingsSort } from '@mantlepiece/shared';
+import { answerOf, client, type Schema } from './client';
 
 /** The four settings collections share one shape of API: paged list, create, change, delete. */
 export type SettingsCollection = 'venues' | 'galleries' | 'stations' | 'exhibits';
@@ -9,26 +9,58 @@ export interface SettingsListParams {
   page: number;
   pageSize: number;
   q?: string;
-  sort?: string;
+  sort?: SettingsSort;
   venueId?: number;
   galleryId?: number;
 }
 
-/** What a settings form sends: the view without what the server assigns. */
-export type VenueFields = Pick<VenueView, 'name' | 'slug' | 'sourceLocale' | 'targetLocales' | 'timeZone'>;
-export type GalleryFields = Omit<GalleryView, 'id'>;
-export type StationFields = Omit<StationView, 'id' | 'can'>;
-export type ExhibitFields = Omit<ExhibitView, 'id'>;
-
 interface Collections {
-  venues: { view: VenueView; fields: VenueFields };
-  galleries: { view: GalleryView; fields: GalleryFields };
-  stations: { view: StationView; fields: StationFields };
-  exhibits: { view: ExhibitView; fields: ExhibitFields };
+  venues: { view: Schema<'VenueView'>; fields: Schema<'CreateVenueDto'> };
+  galleries: { view: Schema<'GalleryView'>; fields: Schema<'CreateGalleryDto'> };
+  stations: { view: Schema<'StationView'>; fields: Schema<'CreateStationDto'> };
+  exhibits: { view: Schema<'ExhibitView'>; fields: Schema<'CreateExhibitDto'> };
 }
 
 export type SettingsView<C extends SettingsCollection> = Collections[C]['view'];
+/** What a settings form sends to create a row; a change sends the same without the parent, which stays. */
 export type SettingsFields<C extends SettingsCollection> = Collections[C]['fields'];
+
+interface CollectionRequests<C extends SettingsCollection> {
+  list: (query: SettingsListParams) => Promise<Page<SettingsView<C>>>;
+  create: (fields: SettingsFields<C>) => Promise<SettingsView<C>>;
+  update: (id: number, fields: SettingsFields<C>) => Promise<SettingsView<C>>;
+  remove: (id: number) => Promise<unknown>;
+}
+
+const at = (id: number) => ({ path: { id } });
+
+// A gallery stays in its venue, and a station or an exhibit in its gallery: a change leaves the parent out.
+const REQUESTS: { [C in SettingsCollection]: CollectionRequests<C> } = {
+  venues: {
+    list: ({ page, pageSize, q, sort }) => answerOf(client.GET('/api/venues', { params: { query: { page, pageSize, q, sort } } })),
+    create: (body) => answerOf(client.POST('/api/venues', { body })),
+    update: (id, body) => answerOf(client.PATCH('/api/venues/{id}', { params: at(id), body })),
+    remove: (id) => answerOf(client.DELETE('/api/venues/{id}', { params: at(id) })),
+  },
+  galleries: {
+    list: ({ galleryId: _none, ...query }) => answerOf(client.GET('/api/galleries', { params: { query } })),
+    create: (body) => answerOf(client.POST('/api/galleries', { body })),
+    update: (id, { venueId: _stays, ...body }) => answerOf(client.PATCH('/api/galleries/{id}', { params: at(id), body })),
+    remove: (id) => answerOf(client.DELETE('/api/galleries/{id}', { params: at(id) })),
+  },
+  stations: {
+    list: (query) => answerOf(client.GET('/api/stations', { params: { query } })),
+    create: (body) => answerOf(client.POST('/api/stations', { body })),
+    update: (id, { galleryId: _stays, ...body }) => answerOf(client.PATCH('/api/stations/{id}', { params: at(id), body })),
+    remove: (id) => answerOf(client.DELETE('/api/stations/{id}', { params: at(id) })),
+  },
+  exhibits: {
+    list: (query) => answerOf(client.GET('/api/exhibits', { params: { query } })),
+    create: (body) => answerOf(client.POST('/api/exhibits', { body })),
+    update: (id, { galleryId: _stays, ...body }) => answerOf(client.PATCH('/api/exhibits/{id}', { params: at(id), body })),
+    remove: (id) => answerOf(client.DELETE('/api/exhibits/{id}', { params: at(id) })),
+  },
+};
 
 const settingsKey = (collection: SettingsCollection) => ['settings', collection] as const;
 
@@ -36,7 +68,7 @@ const settingsKey = (collection: SettingsCollection) => ['settings', collection]
 export function useSettingsList<C extends SettingsCollection>(collection: C, params: SettingsListParams, enabled = true) {
   return useQuery({
     queryKey: [...settingsKey(collection), params],
-    queryFn: () => api<Page<SettingsView<C>>>(`/${collection}`, { query: { ...params } as Query }),
+    queryFn: () => REQUESTS[collection].list(params),
     placeholderData: keepPreviousData,
     enabled,
   });
@@ -52,9 +84,7 @@ export function useSaveSetting<C extends SettingsCollection>(collection: C) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, fields }: { id?: number; fields: SettingsFields<C> }) =>
-      id === undefined
-        ? api<SettingsView<C>>(`/${collection}`, { method: 'POST', body: fields })
-        : api<SettingsView<C>>(`/${collection}/${id}`, { method: 'PATCH', body: fields }),
+      id === undefined ? REQUESTS[collection].create(fields) : REQUESTS[collection].update(id, fields),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['settings'] }),
   });
 }
@@ -62,7 +92,7 @@ export function useSaveSetting<C extends SettingsCollection>(collection: C) {
 export function useDeleteSetting(collection: SettingsCollection) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api<void>(`/${collection}/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: number) => REQUESTS[collection].remove(id),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['settings'] }),
   });
 }

@@ -1,7 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page, Role, UserView } from '@mantlepiece/shared';
-import { api } from './client';
-import type { UserSort } from '@mantlepiece/shared';
+import type { Role, UserSort } from '@mantlepiece/shared';
+import { answerOf, client, type Schema } from './client';
 
 export interface UserListParams {
   page: number;
@@ -15,53 +14,38 @@ export interface UserListParams {
 const usersKey = ['users'] as const;
 
 export function useUsers(params: UserListParams) {
+  // The server reads the filter as the text of a query parameter.
+  const active = params.active === undefined ? undefined : params.active ? 'true' : 'false';
   return useQuery({
     queryKey: [...usersKey, params],
-    queryFn: () => api<Page<UserView>>('/users', { query: { ...params } }),
+    queryFn: () => answerOf(client.GET('/api/users', { params: { query: { ...params, active } } })),
     // The table keeps showing the previous page while the next one loads, so it does not jump.
     placeholderData: keepPreviousData,
   });
 }
 
-export interface InvitationRequest {
-  email: string;
-  name: string;
-  /** The venue whose roles the invitation grants; null for roles at every venue (the organisation admin's choice). */
-  venueId: number | null;
-  roles: Role[];
-  locales: string[];
-}
-
-export interface SentInvitation extends InvitationRequest {
-  id: number;
-  expiresAt: string;
-}
+export type SentInvitation = Schema<'InvitationView'>;
 
 export function useInviteUser() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (invitation: InvitationRequest) => api<SentInvitation>('/users/invitations', { method: 'POST', body: invitation }),
+    mutationFn: (invitation: Schema<'InviteUserDto'>) => answerOf(client.POST('/api/users/invitations', { body: invitation })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: usersKey }),
   });
 }
 
-export interface UserChanges {
-  name?: string;
-  roles?: Role[];
-  locales?: string[];
-  active?: boolean;
-}
+const userAt = (id: number) => ({ path: { id } });
 
 export function useUpdateUser() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, changes }: { id: number; changes: UserChanges }) => api<UserView>(`/users/${id}`, { method: 'PATCH', body: changes }),
+    mutationFn: ({ id, changes }: { id: number; changes: Schema<'UpdateUserDto'> }) => answerOf(client.PATCH('/api/users/{id}', { params: userAt(id), body: changes })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: usersKey }),
   });
 }
 
 export interface GrantChange {
-  person: UserView;
+  person: Schema<'UserView'>;
   name: string;
   /** null: the roles held at every venue; otherwise the membership at that venue. */
   venueId: number | null;
@@ -77,11 +61,14 @@ export function useSaveGrant() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async ({ person, name, venueId, roles, locales }: GrantChange) => {
-      if (venueId === null) return api<UserView>(`/users/${person.id}`, { method: 'PATCH', body: { name, roles, locales } });
-      if (name !== person.name) await api<UserView>(`/users/${person.id}`, { method: 'PATCH', body: { name } });
-      const path = `/users/${person.id}/memberships/${venueId}`;
-      if (roles.length) return api<UserView>(path, { method: 'PUT', body: { roles, locales } });
-      return person.memberships.some((grant) => grant.venueId === venueId) ? api<UserView>(path, { method: 'DELETE' }) : person;
+      const patch = (body: Schema<'UpdateUserDto'>) => answerOf(client.PATCH('/api/users/{id}', { params: userAt(person.id), body }));
+      if (venueId === null) return patch({ name, roles, locales });
+      if (name !== person.name) await patch({ name });
+      const membership = { params: { path: { id: person.id, venueId } } };
+      if (roles.length) return answerOf(client.PUT('/api/users/{id}/memberships/{venueId}', { ...membership, body: { roles, locales } }));
+      return person.memberships.some((grant) => grant.venueId === venueId)
+        ? answerOf(client.DELETE('/api/users/{id}/memberships/{venueId}', membership))
+        : person;
     },
     onSuccess: () => queryClient.invalidateQueries({ queryKey: usersKey }),
   });

@@ -16,7 +16,7 @@ export function LanguageMenu({ appearance = 'subtle', className }: { appearance?
     const language = checkedItems[0];
     if (!language || language === current) return;
     void i18n.changeLanguage(language);
-    if (session) updateMe.mutate({ uiLanguage: language });
+    if (session) updateMe.mutate({ uiLanguage: asUiLanguage(language) });
   };
 
   return (

@@ -1,8 +1,10 @@
 import type { ReactElement } from 'react';
 import { Badge, type BadgeProps } from '@fluentui/react-components';
 import { CheckmarkCircleFilled, ClockAlarmFilled, DismissCircleFilled, ProhibitedFilled } from '@fluentui/react-icons';
-import type { FleetKioskView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import type { Schema } from '../../api/client';
+
+type FleetKioskView = Schema<'FleetKioskView'>;
 
 type ShownState = FleetKioskView['state'] | 'revoked';
 

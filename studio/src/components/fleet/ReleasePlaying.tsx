@@ -1,7 +1,9 @@
 import { makeStyles, Text, tokens } from '@fluentui/react-components';
 import { ClockDismissFilled, WarningFilled } from '@fluentui/react-icons';
-import type { FleetKioskView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import type { Schema } from '../../api/client';
+
+type FleetKioskView = Schema<'FleetKioskView'>;
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXXS },

@@ -1,8 +1,10 @@
-import type { FleetKioskView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import type { Schema } from '../../api/client';
 import { useRevokeKiosk } from '../../api/fleet';
 import { ConfirmDialog } from '../ConfirmDialog';
 import { describeError } from '../forms/describe-error';
+
+type FleetKioskView = Schema<'FleetKioskView'>;
 
 /** Asks before a kiosk loses its access; revoking cannot be undone, only replaced by a new pairing. */
 export function RevokeKioskDialog({ kiosk, onClose }: { kiosk: FleetKioskView; onClose: () => void }) {

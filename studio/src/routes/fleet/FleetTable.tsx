@@ -1,6 +1,5 @@
 import { Fragment } from 'react';
 import { makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens } from '@fluentui/react-components';
-import type { FleetKioskView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { DemoBadge } from '../../components/fleet/DemoBadge';
 import { KioskStateBadge } from '../../components/fleet/KioskStateBadge';
@@ -8,6 +7,9 @@ import { LastHeartbeat } from '../../components/fleet/LastHeartbeat';
 import { ReleasePlaying } from '../../components/fleet/ReleasePlaying';
 import { TextLink } from '../../components/links';
 import { byGallery } from './list-params';
+import type { Schema } from '../../api/client';
+
+type FleetKioskView = Schema<'FleetKioskView'>;
 
 const COLUMNS = 6;
 

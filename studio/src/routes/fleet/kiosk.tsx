@@ -1,10 +1,9 @@
 import { useState, type ReactNode } from 'react';
 import { Button, makeStyles, Spinner, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens } from '@fluentui/react-components';
 import { ProhibitedRegular } from '@fluentui/react-icons';
-import type { FleetKioskDetail } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useParams, useSearchParams } from 'react-router-dom';
-import { ApiError } from '../../api/client';
+import { ApiError, type Schema } from '../../api/client';
 import { useFleetKiosk } from '../../api/fleet';
 import { EmptyState } from '../../components/EmptyState';
 import { bytesText } from '../../components/fleet/bytes';
@@ -20,6 +19,8 @@ import { LinkButton } from '../../components/links';
 import { pageFrom, withSearchChanges } from '../../components/lists/list-search';
 import { Pager } from '../../components/lists/Pager';
 import { PageHeader } from '../../components/PageHeader';
+
+type FleetKioskDetail = Schema<'FleetKioskDetail'>;
 
 const HISTORY_PAGE_SIZE = 20;
 

@@ -1,8 +1,10 @@
-import type { UserView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import type { Schema } from '../../api/client';
 import { useUpdateUser } from '../../api/users';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { describeError } from '../../components/forms/describe-error';
+
+type UserView = Schema<'UserView'>;
 
 /** Asks before an account is deactivated or reactivated; the change is one PATCH of `active`. */
 export function ActivationDialog({ person, onClose }: { person: UserView; onClose: () => void }) {

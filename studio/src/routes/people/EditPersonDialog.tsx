@@ -1,9 +1,11 @@
-import type { UserView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import type { Schema } from '../../api/client';
 import { useSaveGrant } from '../../api/users';
 import { grantOf, useManagedVenues } from './managed-venues';
 import { localesToSend } from './PersonFields';
 import { PersonDialog } from './PersonDialog';
+
+type UserView = Schema<'UserView'>;
 
 export function EditPersonDialog({ person, onClose }: { person: UserView; onClose: () => void }) {
   const { t } = useTranslation();

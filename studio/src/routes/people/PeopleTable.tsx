@@ -1,10 +1,13 @@
 import {
   Badge, Button, makeStyles, Table, TableBody, TableCell, TableCellLayout, TableHeader, TableHeaderCell, TableRow, Text, tokens,
 } from '@fluentui/react-components';
-import type { UserSort, UserView } from '@mantlepiece/shared';
+import type { UserSort } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useDateFormat } from '../../components/formatting';
 import { useLanguageName } from '../../components/translation/language-name';
+import type { Schema } from '../../api/client';
+
+type UserView = Schema<'UserView'>;
 
 type SortColumn = 'name' | 'email' | 'lastSignInAt';
 

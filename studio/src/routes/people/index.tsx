@@ -1,8 +1,9 @@
 import { useState } from 'react';
 import { Button, Field, makeStyles, SearchBox, Select, tokens } from '@fluentui/react-components';
 import { PersonAddRegular, PeopleSearchRegular } from '@fluentui/react-icons';
-import { ROLES, USER_SORT, type UserView } from '@mantlepiece/shared';
+import { ROLES, USER_SORT } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
+import type { Schema } from '../../api/client';
 import { useCurrentUser } from '../../api/session';
 import { useUsers, type SentInvitation } from '../../api/users';
 import { EmptyState } from '../../components/EmptyState';
@@ -18,6 +19,8 @@ import { InviteDialog } from './InviteDialog';
 import { readListParams } from './list-params';
 import { useManagedVenues } from './managed-venues';
 import { PeopleTable } from './PeopleTable';
+
+type UserView = Schema<'UserView'>;
 
 const useStyles = makeStyles({
   toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', flexWrap: 'wrap', marginBottom: tokens.spacingVerticalL },

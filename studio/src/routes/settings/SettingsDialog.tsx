@@ -43,8 +43,9 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
       case 'venue':
       case 'gallery': {
         const options = (input.kind === 'venue' ? venues.data?.items : galleries.data?.items) ?? [];
+        // A row stays where it was made: the server takes no new venue or gallery in a change.
         return (
-          <Select value={value} onChange={(_event, data) => set(input.name, data.value)}>
+          <Select value={value} disabled={editing !== null} onChange={(_event, data) => set(input.name, data.value)}>
             <option value="">{t('settings.choose')}</option>
             {options.map((option) => <option key={option.id} value={String(option.id)}>{option.name}</option>)}
           </Select>

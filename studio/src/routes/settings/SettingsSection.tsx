@@ -3,7 +3,7 @@ import {
   Button, Field, makeStyles, Select, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
 } from '@fluentui/react-components';
 import { AddRegular } from '@fluentui/react-icons';
-import type { ExhibitView, GalleryView, StationView, VenueView } from '@mantlepiece/shared';
+import type { SettingsSort } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { ApiError } from '../../api/client';
 import { useDeleteSetting, useGalleries, useSettingsList, useVenues, type SettingsCollection, type SettingsListParams, type SettingsView } from '../../api/settings';
@@ -16,6 +16,11 @@ import { CHOICES_BY_NAME, sortableColumn } from '../../components/lists/list-sea
 import { Pager } from '../../components/lists/Pager';
 import { useLanguageName } from '../../components/translation/language-name';
 import { SettingsDialog } from './SettingsDialog';
+
+type VenueView = SettingsView<'venues'>;
+type GalleryView = SettingsView<'galleries'>;
+type StationView = SettingsView<'stations'>;
+type ExhibitView = SettingsView<'exhibits'>;
 
 const useStyles = makeStyles({
   toolbar: { display: 'flex', alignItems: 'flex-end', justifyContent: 'space-between', gap: tokens.spacingHorizontalL, flexWrap: 'wrap', marginBottom: tokens.spacingVerticalM },
@@ -45,7 +50,7 @@ export function SettingsSection({ collection }: { collection: SettingsCollection
   const { t, i18n } = useTranslation();
   const styles = useStyles();
   const [page, setPage] = useState(1);
-  const [sort, setSort] = useState('name');
+  const [sort, setSort] = useState<SettingsSort>('name');
   const [parentId, setParentId] = useState<number | undefined>();
   const parentKind = collection === 'galleries' ? 'venues' : collection === 'venues' ? null : 'galleries';
   const parents = useNames(parentKind ?? 'venues');

@@ -1,4 +1,4 @@
-import { canonicalTimeZone, ORIENTATIONS, type ExhibitView, type GalleryView, type Orientation, type StationView, type VenueView } from '@mantlepiece/shared';
+import { canonicalTimeZone, ORIENTATIONS, type Orientation } from '@mantlepiece/shared';
 import type { TFunction } from 'i18next';
 import type { SettingsCollection, SettingsFields, SettingsView } from '../../api/settings';
 import { parseLocales, requiredProblem } from '../../components/forms/validation';
@@ -35,7 +35,7 @@ const venueForm: SettingsForm<'venues'> = {
   ],
   // A new venue is most likely where the person setting it up is.
   empty: { name: '', slug: '', sourceLocale: 'en', targetLocales: '', timeZone: new Intl.DateTimeFormat().resolvedOptions().timeZone },
-  valuesOf: (venue: VenueView) => ({
+  valuesOf: (venue) => ({
     name: venue.name, slug: venue.slug, sourceLocale: venue.sourceLocale, targetLocales: venue.targetLocales.join(', '), timeZone: venue.timeZone,
   }),
   problems: (t, values) => {
@@ -66,7 +66,7 @@ const galleryForm: SettingsForm<'galleries'> = {
     { name: 'name', kind: 'text', required: true },
   ],
   empty: { venueId: '', name: '' },
-  valuesOf: (gallery: GalleryView) => ({ venueId: String(gallery.venueId), name: gallery.name }),
+  valuesOf: (gallery) => ({ venueId: String(gallery.venueId), name: gallery.name }),
   problems: (t, values) => ({ venueId: requiredProblem(t, values.venueId ?? ''), name: requiredProblem(t, values.name ?? '') }),
   toFields: (values) => ({ venueId: Number(values.venueId), name: values.name!.trim() }),
 };
@@ -81,7 +81,7 @@ const stationForm: SettingsForm<'stations'> = {
     { name: 'mountingHeightMm', kind: 'number', required: true, unit: 'mm', hint: 'mounting' },
   ],
   empty: { galleryId: '', name: '', screenWidthPx: '1920', screenHeightPx: '1080', orientation: 'landscape', mountingHeightMm: '' },
-  valuesOf: (station: StationView) => ({
+  valuesOf: (station) => ({
     galleryId: String(station.galleryId),
     name: station.name,
     screenWidthPx: String(station.screenWidthPx),
@@ -115,7 +115,7 @@ const exhibitForm: SettingsForm<'exhibits'> = {
     { name: 'plannedEnd', kind: 'date' },
   ],
   empty: { galleryId: '', name: '', plannedStart: '', plannedEnd: '' },
-  valuesOf: (exhibit: ExhibitView) => ({ galleryId: String(exhibit.galleryId), name: exhibit.name, plannedStart: exhibit.plannedStart ?? '', plannedEnd: exhibit.plannedEnd ?? '' }),
+  valuesOf: (exhibit) => ({ galleryId: String(exhibit.galleryId), name: exhibit.name, plannedStart: exhibit.plannedStart ?? '', plannedEnd: exhibit.plannedEnd ?? '' }),
   problems: (t, values) => ({
     galleryId: requiredProblem(t, values.galleryId ?? ''),
     name: requiredProblem(t, values.name ?? ''),

@@ -2,9 +2,10 @@ import { Fragment, useState } from 'react';
 import {
   Badge, Button, makeStyles, Spinner, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
 } from '@fluentui/react-components';
-import type { KioskView, StationView } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
-import { useRevokeKiosk, useStationKiosks } from '../../api/kiosks';
+import type { Schema } from '../../api/client';
+import { useRevokeKiosk } from '../../api/fleet';
+import { useStationKiosks } from '../../api/kiosks';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { EmptyState } from '../../components/EmptyState';
 import { useDateFormat } from '../../components/formatting';
@@ -23,13 +24,13 @@ const useStyles = makeStyles({
 const COLUMNS = 6;
 
 /** Every kiosk paired to the station, the active one first, each with what it last reported. */
-export function StationKiosks({ station }: { station: StationView }) {
+export function StationKiosks({ station }: { station: Schema<'StationView'> }) {
   const { t } = useTranslation();
   const styles = useStyles();
   const formatDate = useDateFormat();
   const kiosks = useStationKiosks(station);
   const revoke = useRevokeKiosk();
-  const [revoking, setRevoking] = useState<KioskView | null>(null);
+  const [revoking, setRevoking] = useState<Schema<'FleetKioskView'> | null>(null);
   const release = (ref: { number: number } | null) => (ref ? t('releases.name', { number: ref.number }) : '—');
 
   if (kiosks.isPending) return <Spinner label={t('common.loading')} />;
