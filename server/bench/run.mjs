@@ -8,6 +8,7 @@
 // Needs a server: MANTLEPIECE_URL when set, else a private stack on free ports (kiosk/bench/bench-server.mjs),
 // which also gets a second instance behind nginx (scripts/lib/nginx.mjs) for the venue-network figures.
 import { spawn } from 'node:child_process';
+import { randomUUID } from 'node:crypto';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -26,8 +27,8 @@ const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 5);
 const GOALS = { manifest: 0.5, notModified: 0.8 };
 const NGINX_KEEPALIVE = 32;
 
-async function measure({ url, headers = {}, status = 200 }) {
-  const request = { url, headers, connections: CONNECTIONS };
+async function measure({ url, headers = {}, status = 200, requests }) {
+  const request = { url, headers, requests, connections: CONNECTIONS };
   await autocannon({ ...request, duration: WARM_UP_SECONDS });
   const result = await autocannon({ ...request, duration: SECONDS });
   const expected = result.statusCodeStats[status]?.count ?? 0;
@@ -155,10 +156,65 @@ async function kioskPath(url, network, demoPassword) {
   }
 }
 
-async function studioLists(url, network, demoPassword) {
+/** Paired kiosks that write for the bench: one writer would only measure the lock on its own row. */
+const WRITING_KIOSKS = 32;
+/** Visitor events a kiosk sends in one upload: a minute of a busy screen (common practice, no source). */
+const EVENTS_PER_UPLOAD = 20;
+
+/** The demo admin's access token: stations are an admin's to add. */
+async function adminToken(url, demoPassword) {
   const login = await fetch(`${url}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: 'admin@demo.test', password: demoPassword }) });
   if (!login.ok) throw new Error(`signing in as the demo admin answered ${login.status}`);
-  const auth = { Authorization: `Bearer ${(await login.json()).accessToken}` };
+  return (await login.json()).accessToken;
+}
+
+/** Pairs a kiosk to each of WRITING_KIOSKS new stations of the demo gallery; gives back their device tokens. */
+async function writingKiosks(url, demoPassword) {
+  const { token, gallery } = await demoGallery(url, demoPassword);
+  const admin = await adminToken(url, demoPassword);
+  const run = randomUUID().slice(0, 8);
+  const tokens = [];
+  for (let index = 0; index < WRITING_KIOSKS; index += 1) {
+    const response = await fetch(`${url}/api/stations`, {
+      method: 'POST',
+      headers: { Authorization: `Bearer ${admin}`, 'Content-Type': 'application/json' },
+      body: JSON.stringify({ galleryId: gallery.id, name: `Bench ${run} ${index + 1}`, screenWidthPx: 1920, screenHeightPx: 1080, orientation: 'landscape', mountingHeightMm: 1200 }),
+    });
+    if (!response.ok) throw new Error(`adding a bench station answered ${response.status}: ${await response.text()}`);
+    tokens.push(await deviceToken(url, token, (await response.json()).id));
+  }
+  return tokens;
+}
+
+/** One request per kiosk, taken in turn by every connection; setupRequest gives each events upload new event ids. */
+const fromEveryKiosk = (tokens, path, body) => tokens.map((token) => ({
+  method: 'POST',
+  path,
+  headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
+  setupRequest: (request) => ({ ...request, body: JSON.stringify(body()) }),
+}));
+
+/**
+ * The writes every kiosk makes all day, which the sizing rests on: a heartbeat (an insert and an
+ * update of the kiosk's row, in one transaction) and an upload of visitor events (one multi-row
+ * INSERT IGNORE), from WRITING_KIOSKS kiosks at once, against /api/health.
+ */
+async function kioskWrites(url, demoPassword) {
+  const tokens = await writingKiosks(url, demoPassword);
+  const heartbeat = () => ({ releaseId: null, appVersion: '0.1.0', uptimeS: 60, storageUsedBytes: 1_000_000, lastError: null });
+  const events = () => ({
+    events: Array.from({ length: EVENTS_PER_UPLOAD }, () => ({ id: randomUUID(), type: 'language_chosen', at: new Date().toISOString(), locale: 'fr' })),
+  });
+  const figures = await inRounds([
+    { what: 'GET /api/health (the reference)', url: `${url}/api/health` },
+    { what: `POST /api/kiosk/heartbeat, ${WRITING_KIOSKS} kiosks`, url, requests: fromEveryKiosk(tokens, '/api/kiosk/heartbeat', heartbeat), status: 204 },
+    { what: `POST /api/kiosk/events, ${WRITING_KIOSKS} kiosks, ${EVENTS_PER_UPLOAD} events each`, url, requests: fromEveryKiosk(tokens, '/api/kiosk/events', events) },
+  ]);
+  return { title: 'Kiosk heartbeats and visitor events (writes) against /api/health', figures, notes: [], ok: true };
+}
+
+async function studioLists(url, network, demoPassword) {
+  const auth = { Authorization: `Bearer ${await adminToken(url, demoPassword)}` };
   const lists = ['/api/stories', '/api/media', '/api/galleries', '/api/kiosks', '/api/audit'].map((path) => `${path}?page=1&pageSize=25`);
   const figures = await inRounds([
     { what: 'GET /api/health (the reference)', url: `${url}/api/health` },
@@ -175,7 +231,11 @@ try {
   const network = await venueNetwork(server);
   try {
     const before = loadavg()[0];
-    sections = [await kioskPath(server.url, network, server.demoPassword), await studioLists(server.url, network, server.demoPassword)];
+    sections = [
+      await kioskPath(server.url, network, server.demoPassword),
+      await kioskWrites(server.url, server.demoPassword),
+      await studioLists(server.url, network, server.demoPassword),
+    ];
     load = [before, loadavg()[0]];
   } finally {
     await network?.stop();
