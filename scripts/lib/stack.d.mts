@@ -8,6 +8,9 @@ export function ensureDependencies(): void;
 
 export function buildShared(phaseName: string, env: NodeJS.ProcessEnv): void;
 
+/** The S3_* settings of a server that uses the S3 stand-in, from the run's S3_STAND_IN_* settings. */
+export function s3StandInEnv(env?: NodeJS.ProcessEnv): Record<'S3_BUCKET' | 'S3_ENDPOINT' | 'S3_REGION' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE', string>;
+
 export function startStack(options: {
   dataDir: string;
   dbPort: number;

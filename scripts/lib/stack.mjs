@@ -90,6 +90,17 @@ export function buildShared(phaseName, env) {
 }
 
 /**
+ * The settings that point a server at the S3 stand-in (S3_*), from the S3_STAND_IN_* settings the
+ * test run hands its suites: the one mapping from one to the other, for every suite that uses it.
+ */
+export function s3StandInEnv(env = process.env) {
+  const endpoint = env.S3_STAND_IN_ENDPOINT;
+  if (!endpoint) throw new Error('S3_STAND_IN_ENDPOINT is not set: run this suite through `node scripts/test.mjs`, which starts the S3 stand-in');
+  const key = env.S3_STAND_IN_KEY ?? 'S3RVER';
+  return { S3_BUCKET: env.S3_STAND_IN_BUCKET ?? 'mantlepiece', S3_ENDPOINT: endpoint, S3_REGION: 'us-east-1', S3_ACCESS_KEY_ID: key, S3_SECRET_ACCESS_KEY: key, S3_FORCE_PATH_STYLE: 'true' };
+}
+
+/**
  * The S3 stand-in, for the suites that check object storage. The server keeps the disk: its
  * settings name the stand-in under S3_STAND_IN_*, which a suite turns into S3_* for its own app.
  */

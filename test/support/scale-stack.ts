@@ -6,7 +6,7 @@ import mysql from 'mysql2/promise';
 import { startNginx } from '../../scripts/lib/nginx.mjs';
 import { freePort } from '../../scripts/lib/ports.mjs';
 import { run, startOwned, waitFor, type OwnedProcess } from '../../scripts/lib/processes.mjs';
-import { root } from '../../scripts/lib/stack.mjs';
+import { root, s3StandInEnv } from '../../scripts/lib/stack.mjs';
 
 /**
  * A venue network on one machine, as README's operations sections describe it: two server
@@ -78,18 +78,13 @@ export async function startScaleStack(): Promise<ScaleStack> {
 
     const nginxPort = await freePort();
     const url = `http://127.0.0.1:${nginxPort}`;
-    const s3Key = standIn('S3_STAND_IN_KEY');
     const shared: Record<string, string> = {
       DATABASE_URL: primaryUrl,
       DATABASE_REPLICA_URLS: replicaUrl,
       PUBLIC_URL: url,
       SMTP_HOST: '127.0.0.1',
       SMTP_PORT: String(smtpPort),
-      S3_BUCKET: standIn('S3_STAND_IN_BUCKET'),
-      S3_ENDPOINT: standIn('S3_STAND_IN_ENDPOINT'),
-      S3_ACCESS_KEY_ID: s3Key,
-      S3_SECRET_ACCESS_KEY: s3Key,
-      S3_FORCE_PATH_STYLE: 'true',
+      ...s3StandInEnv(),
       // Release files pass through nginx, as with a CDN in front (README).
       S3_PRESIGNED_URL_SECONDS: '0',
       JWT_SECRET: randomBytes(32).toString('base64url'),

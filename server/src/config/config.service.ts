@@ -65,16 +65,7 @@ export class ConfigService {
    * With S3_BUCKET set, media and release files live in that S3-compatible bucket instead of MEDIA_DIR,
    * so several server instances share them; the SDK finds credentials itself when the keys are unset.
    */
-  readonly objectStorage: S3Settings | null = process.env.S3_BUCKET
-    ? {
-        bucket: process.env.S3_BUCKET,
-        endpoint: process.env.S3_ENDPOINT || undefined,
-        region: process.env.S3_REGION || 'us-east-1',
-        accessKeyId: process.env.S3_ACCESS_KEY_ID || undefined,
-        secretAccessKey: process.env.S3_SECRET_ACCESS_KEY || undefined,
-        forcePathStyle: process.env.S3_FORCE_PATH_STYLE === 'true',
-      }
-    : null;
+  readonly objectStorage = objectStorageOf(process.env);
 
   /** How long a kiosk's redirect to a presigned bucket URL holds; 0 streams kiosk files through the server (a CDN in front). */
   readonly presignedUrlSeconds = intFromEnv('S3_PRESIGNED_URL_SECONDS', 300);
@@ -152,4 +143,18 @@ function intFromEnv(name: string, fallback: number): number {
   const value = Number(raw);
   if (!Number.isInteger(value) || value < 0) throw new Error(`${name} must be a whole number, got "${raw}"`);
   return value;
+}
+
+/** The S3-compatible bucket an environment names (S3_*), null without S3_BUCKET. */
+export function objectStorageOf(env: NodeJS.ProcessEnv): S3Settings | null {
+  return env.S3_BUCKET
+    ? {
+        bucket: env.S3_BUCKET,
+        endpoint: env.S3_ENDPOINT || undefined,
+        region: env.S3_REGION || 'us-east-1',
+        accessKeyId: env.S3_ACCESS_KEY_ID || undefined,
+        secretAccessKey: env.S3_SECRET_ACCESS_KEY || undefined,
+        forcePathStyle: env.S3_FORCE_PATH_STYLE === 'true',
+      }
+    : null;
 }
