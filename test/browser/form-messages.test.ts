@@ -1,7 +1,8 @@
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiAs, launchBrowser, newContext, signIn } from '../support/browser.js';
 import { solidPng } from '../support/images.js';
+import { storyWithPanels } from '../support/stories.js';
 
 /**
  * Each form message where it belongs and in words a person reads once: the invite dialog's role
@@ -37,12 +38,25 @@ async function describedText(page: Page, control: ReturnType<Page['getByRole']>)
   return ids.length === 0 ? '' : (await page.locator(ids.map((id) => `#${id}`).join(', ')).allTextContents()).join(' ');
 }
 
+/** The image's page with "An open licence" chosen; answers its SPDX identifier box. */
+async function openLicenceOf(page: Page): Promise<Locator> {
+  await page.goto(`/media/${mediaId}`);
+  await page.getByRole('radio', { name: 'An open licence (SPDX identifier)' }).check();
+  return page.getByRole('combobox', { name: 'SPDX identifier' });
+}
+
+/** An image of its own (a colour no other upload has: the library keeps identical bytes once) with English alt text; answers its id. */
+async function imageWithAlt(name: string): Promise<number> {
+  const upload = new FormData();
+  upload.append('file', new Blob([new Uint8Array(solidPng(64, 48, [30, Math.floor(Math.random() * 256), Math.floor(Math.random() * 256)]))], { type: 'image/png' }), name);
+  const id = (await asCurator<{ id: number }[]>('POST', '/media', upload))[0]!.id;
+  await asCurator('PATCH', `/media/${id}`, { alt: { en: 'A map of the plates around the Pacific Ocean' } });
+  return id;
+}
+
 beforeAll(async () => {
   asCurator = await apiAs('curator@demo.test');
-  const upload = new FormData();
-  upload.append('file', new Blob([new Uint8Array(solidPng(64, 48, [30, Math.floor(Math.random() * 256), 200]))], { type: 'image/png' }), filename);
-  mediaId = (await asCurator<{ id: number }[]>('POST', '/media', upload))[0]!.id;
-  await asCurator('PATCH', `/media/${mediaId}`, { alt: { en: 'A map of the plates around the Pacific Ocean' } });
+  mediaId = await imageWithAlt(filename);
   // The image on the story's third panel, so its page names "Panel 3".
   storyId = (await asCurator<{ id: number }>('POST', '/stories', { title: `Messages ${suffix}`, audience: 'family' })).id;
   await asCurator('POST', `/stories/${storyId}/panels`, { doc: { type: 'doc', content: [paragraph('Plates move.')] } });
@@ -95,9 +109,7 @@ describe('the image page', () => {
 
   it('puts the server’s refusal of an incomplete SPDX identifier at that field, outlined, and suggests from the server’s list', async () => {
     await as('curator@demo.test', async (page) => {
-      await page.goto(`/media/${mediaId}`);
-      await page.getByRole('radio', { name: 'An open licence (SPDX identifier)' }).check();
-      const spdx = page.getByRole('combobox', { name: 'SPDX identifier' });
+      const spdx = await openLicenceOf(page);
       await spdx.fill('CC-BY');
       const refusal = page.waitForResponse((response) => response.url().endsWith(`/api/media/${mediaId}`) && response.request().method() === 'PATCH');
       await page.getByRole('button', { name: 'Save' }).click();
@@ -117,9 +129,7 @@ describe('the image page', () => {
   it('keeps and saves a licence chosen beyond the first suggestions, typed or picked', async () => {
     // MIT and MIT-0 are on the SPDX License List (spdx.org/licenses); neither is among the image licences suggested first.
     await as('curator@demo.test', async (page) => {
-      await page.goto(`/media/${mediaId}`);
-      await page.getByRole('radio', { name: 'An open licence (SPDX identifier)' }).check();
-      const spdx = page.getByRole('combobox', { name: 'SPDX identifier' });
+      const spdx = await openLicenceOf(page);
       await spdx.fill('');
       await spdx.pressSequentially('MIT');
       expect(await spdx.inputValue(), 'what was typed stays in the box').toBe('MIT');
@@ -130,7 +140,7 @@ describe('the image page', () => {
       await eventually(() => page.getByText('Saved.').count()).toBe(1);
       expect((await asCurator<{ licence: unknown }>('GET', `/media/${mediaId}`)).licence).toEqual({ kind: 'spdx', id: 'MIT-0' });
       await page.reload();
-      await eventually(() => page.getByRole('combobox', { name: 'SPDX identifier' }).inputValue()).toBe('MIT-0');
+      await eventually(() => spdx.inputValue()).toBe('MIT-0');
     });
   });
 });
@@ -151,9 +161,14 @@ describe('the translator’s workspace', () => {
   });
 
   it('warns of alt text over its budget as text read aloud, not text that may not fit', async () => {
+    // An image and a story of the test's own: the image's alt text is a unit to translate once a panel shows it.
+    const shown = await imageWithAlt(`alt-budget-${suffix}.png`);
+    const { storyId: showing } = await storyWithPanels(asCurator, { title: `Alt budget ${suffix}` }, [
+      { type: 'doc', content: [paragraph('Plates move.'), { type: 'panelImage', attrs: { mediaId: String(shown) } }] },
+    ]);
     await as('translator@demo.test', async (page) => {
-      await page.goto(`/translations/${storyId}/fr`);
-      await page.locator(`[data-unit-row="m${mediaId}.alt"] button`).click();
+      await page.goto(`/translations/${showing}/fr`);
+      await page.locator(`[data-unit-row="m${shown}.alt"] button`).click();
       await page.getByRole('textbox', { name: /^Translation \(French\)/ }).fill('Une carte des plaques autour de l’océan Pacifique, '.repeat(12));
       const over = page.locator('[data-unit-editor] [data-budget-over]');
       await over.waitFor();
