@@ -44,7 +44,8 @@ export function setSession(session: SessionView | null): void {
   for (const listener of listeners) listener(session);
 }
 
-export type Query = Record<string, string | number | boolean | undefined | null>;
+/** A list goes as one comma-separated parameter (`?leaveOut=4,5`), as the server reads it. */
+export type Query = Record<string, string | number | boolean | readonly (string | number)[] | undefined | null>;
 
 interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -56,11 +57,12 @@ interface RequestOptions {
   file?: { type: string; content: Blob | string };
 }
 
-/** Query parameters as the server reads them: a parameter left empty is left out. */
+/** Query parameters as the server reads them: a parameter left empty (an empty list too) is left out. */
 function searchOf(query: Query = {}): string {
   const params = new URLSearchParams();
   for (const [key, value] of Object.entries(query)) {
-    if (value !== undefined && value !== null && value !== '') params.set(key, String(value));
+    const text = value === undefined || value === null ? '' : String(value);
+    if (text !== '') params.set(key, text);
   }
   return params.toString();
 }
