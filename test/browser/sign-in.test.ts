@@ -30,7 +30,10 @@ afterEach(async () => {
   await context?.close();
 });
 
-/** The studio areas in the navigation, in order (other links, such as Home, are left out). */
+/**
+ * The studio areas in the navigation, in order (other links, such as Home, are left out). The areas
+ * of a venue's roles follow once the venue list has come, a moment after the navigation: poll this.
+ */
 async function areaLinks(): Promise<string[]> {
   const names = await page.getByRole('navigation', { name: 'Studio areas' }).getByRole('link').allInnerTexts();
   return names.map((name) => name.trim()).filter((name) => ALL_AREAS.includes(name));
@@ -39,7 +42,7 @@ async function areaLinks(): Promise<string[]> {
 describe('signing in to the studio', () => {
   it.each(Object.entries(AREAS_BY_ACCOUNT))('%s sees exactly the areas of that role', async (email, expected) => {
     await signIn(page, email);
-    expect(await areaLinks()).toEqual(expected);
+    await expect.poll(areaLinks, { message: `${email}'s areas` }).toEqual(expected);
     const hidden = ALL_AREAS.filter((area) => !expected.includes(area));
     for (const area of hidden) {
       expect(await page.getByRole('navigation', { name: 'Studio areas' }).getByRole('link', { name: area, exact: true }).count(), `${email} must not see ${area}`).toBe(0);
@@ -57,7 +60,6 @@ describe('signing in to the studio', () => {
   it('keeps the person signed in across a page reload (the refresh cookie restores the session)', async () => {
     await signIn(page, 'technician@demo.test');
     await page.reload();
-    // The areas of a venue's roles follow once the venue list has come, a moment after the navigation.
     await expect.poll(areaLinks).toEqual(AREAS_BY_ACCOUNT['technician@demo.test']);
   });
 
