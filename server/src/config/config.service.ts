@@ -100,6 +100,14 @@ export class ConfigService {
   readonly databaseReplicaUrls = (process.env.DATABASE_REPLICA_URLS ?? '').split(',').map((url) => url.trim()).filter(Boolean);
   /** How far a replica may trail the primary: for this long after a client writes, its reads stay on the primary. */
   readonly replicaLagAllowanceSeconds = intFromEnv('REPLICA_LAG_ALLOWANCE_SECONDS', 10);
+  /**
+   * How long a paired kiosk's device-token read may answer that kiosk's later requests. 0, the
+   * default: every request is answered from a read that began after it arrived, so a revocation or
+   * a publication counts at the kiosk's next request. A venue network with many kiosks may allow,
+   * say, 1000: a revocation or a publication then counts within that long on every instance, and
+   * the manifest poll stops waiting on the database (server/bench/REPORT.md).
+   */
+  readonly pairedKioskRecheckMs = intFromEnv('PAIRED_KIOSK_RECHECK_MS', 0);
 
   get databaseUrl(): string {
     return required('DATABASE_URL');

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { QueryTypes } from 'sequelize';
 import { hashToken } from '../common/tokens.js';
+import { ConfigService } from '../config/config.service.js';
 import type { PairedKiosk } from './device-token.guard.js';
 import { Kiosk } from './models/kiosk.model.js';
 
@@ -40,18 +41,26 @@ interface Waiting {
  * Each poll is thus answered from a read that began after it arrived, so a revocation, a publish
  * or a re-signing committed on any instance counts at that kiosk's next poll as before; what a
  * busy instance saves is the database round trip per poll, which bounded the poll rate while the
- * server and MariaDB sat mostly idle.
+ * server and MariaDB sat mostly idle. Even so each poll waits for a read; with
+ * PAIRED_KIOSK_RECHECK_MS set, a read also answers its kiosk's requests for that long after it began.
  */
 @Injectable()
 export class PairedKioskReader {
   private waiting = new Map<string, Waiting[]>();
   private reads = 0;
+  /** Paired kiosks by token hash, with when their read began (performance.now()), while PAIRED_KIOSK_RECHECK_MS allows; an unknown token is never kept. */
+  private recent = new Map<string, { kiosk: PairedKiosk; readAt: number }>();
 
-  constructor(@InjectModel(Kiosk) private readonly kiosks: typeof Kiosk) {}
+  constructor(
+    @InjectModel(Kiosk) private readonly kiosks: typeof Kiosk,
+    private readonly config: ConfigService,
+  ) {}
 
   /** The paired kiosk of a device token; undefined for an unknown or revoked one. */
   read(token: string): Promise<PairedKiosk | undefined> {
     const tokenHash = hashToken(token);
+    const recent = this.recent.get(tokenHash);
+    if (recent && performance.now() - recent.readAt < this.config.pairedKioskRecheckMs) return Promise.resolve(recent.kiosk);
     return new Promise((resolve, reject) => {
       const queue = this.waiting.get(tokenHash);
       if (queue) queue.push({ resolve, reject });
@@ -67,14 +76,24 @@ export class PairedKioskReader {
       this.waiting = new Map();
       try {
         // From the primary even with replicas: a revocation must count at once, and one read serves many polls.
+        const readAt = performance.now();
         const rows = await this.kiosks.sequelize!.query<PairedKioskRow>(PAIRED_KIOSKS, { replacements: [[...batch.keys()]], type: QueryTypes.SELECT, useMaster: true });
         const byHash = new Map(rows.map((row) => [row.deviceTokenHash, pairedKioskOf(row)]));
-        for (const [hash, queue] of batch) for (const { resolve } of queue) resolve(byHash.get(hash));
+        for (const [hash, queue] of batch) {
+          const kiosk = byHash.get(hash);
+          this.keep(hash, kiosk, readAt);
+          for (const { resolve } of queue) resolve(kiosk);
+        }
       } catch (error) {
         for (const queue of batch.values()) for (const { reject } of queue) reject(error);
       }
     }
     this.reads -= 1;
+  }
+
+  private keep(tokenHash: string, kiosk: PairedKiosk | undefined, readAt: number): void {
+    if (kiosk && this.config.pairedKioskRecheckMs > 0) this.recent.set(tokenHash, { kiosk, readAt });
+    else this.recent.delete(tokenHash);
   }
 }
 
