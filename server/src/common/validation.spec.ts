@@ -1,5 +1,8 @@
+import { Body, Controller, Post } from '@nestjs/common';
+import { ApiProperty, DocumentBuilder, SwaggerModule, type SchemaObject } from '@nestjs/swagger';
+import { Test } from '@nestjs/testing';
 import { plainToInstance } from 'class-transformer';
-import { IsOptional, validateSync } from 'class-validator';
+import { IsIn, IsOptional, validateSync } from 'class-validator';
 import { describe, expect, it } from 'vitest';
 import { ID_MAX, IsRowId, malformedText, Omittable, PatchType, QueryRowId } from './validation.js';
 
@@ -20,6 +23,33 @@ class Filter {
   galleryId: number;
 }
 
+/** Omittable above, below and without a description of its own; `kept` is the one field a body must carry. */
+class Described {
+  @Omittable()
+  @IsRowId()
+  bare?: number;
+
+  @ApiProperty({ description: 'Described before it is made omittable' })
+  @Omittable()
+  @IsRowId()
+  described?: number;
+
+  @Omittable()
+  @ApiProperty({ enum: ['a', 'b'] })
+  @IsIn(['a', 'b'])
+  chosen?: 'a' | 'b';
+
+  @ApiProperty()
+  @IsRowId()
+  kept: number;
+}
+
+@Controller('described')
+class DescribedController {
+  @Post()
+  take(@Body() _body: Described) {}
+}
+
 const problems = (cls: new () => object, plain: object) => validateSync(plainToInstance(cls, plain)).map((e) => e.property);
 
 describe('shared field rules', () => {
@@ -33,6 +63,23 @@ describe('shared field rules', () => {
       expect(problems(cls, {})).toEqual([]);
       expect(problems(cls, { venueId: null })).toEqual(['venueId']);
       expect(problems(cls, { exhibitId: null })).toEqual([]);
+    }
+  });
+
+  // OpenAPI 3.0.3, Schema Object (after JSON Schema Validation, "required"): a property not listed in
+  // `required` may be left out of the object.
+  it('shows an omittable field as not required in the OpenAPI document, keeping what else describes it', async () => {
+    const module = await Test.createTestingModule({ controllers: [DescribedController] }).compile();
+    const app = module.createNestApplication();
+    try {
+      const document = SwaggerModule.createDocument(app, new DocumentBuilder().build());
+      const schema = document.components?.schemas?.Described as SchemaObject;
+      expect(Object.keys(schema.properties ?? {}).sort()).toEqual(['bare', 'chosen', 'described', 'kept']);
+      expect(schema.required).toEqual(['kept']);
+      expect(schema.properties?.described).toMatchObject({ description: 'Described before it is made omittable' });
+      expect(schema.properties?.chosen).toMatchObject({ enum: ['a', 'b'] });
+    } finally {
+      await app.close();
     }
   });
 

@@ -2,7 +2,7 @@ import {
   applyDecorators, BadRequestException, UnprocessableEntityException, ValidationPipe,
   type ArgumentMetadata, type Type as ClassType, type ValidationError,
 } from '@nestjs/common';
-import { PartialType } from '@nestjs/swagger';
+import { ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
 import { IsArray, IsInt, IsObject, Max, Min, ValidateIf, ValidateNested, type ValidationOptions } from 'class-validator';
 import type { ApiErrorBody } from '@mantlepiece/shared';
@@ -42,8 +42,11 @@ export const QueryRowId = (options: ValidationOptions = {}) => QueryInt(1, ID_MA
 /**
  * The field may be left out; unlike @IsOptional, null is not taken for "left out" but checked by
  * the field's rules, which refuse it. @IsOptional stays for fields where null clears a value.
+ * The OpenAPI document shows the field as not required whatever else describes it (only `required`
+ * is merged into the field's other @ApiProperty options), so the document and the check agree.
  */
-export const Omittable = () => ValidateIf((_object, value) => value !== undefined);
+export const Omittable = () =>
+  applyDecorators(ApiPropertyOptional(), ValidateIf((_object, value) => value !== undefined));
 
 /** A PATCH body: every field of `dto` may be left out, and null goes only where `dto` takes it. */
 export const PatchType = <T>(dto: ClassType<T>) => PartialType(dto, { skipNullProperties: false });

@@ -48,7 +48,7 @@ export class HeartbeatDto {
   @Matches(UTC_INSTANT_FROM_2000, { message: 'publicationExpiresAt must be a UTC instant (…Z) from the year 2000 on.' })
   publicationExpiresAt?: string | null;
 
-  @ApiPropertyOptional({ description: 'Whether that publication had expired by the kiosk’s clock' })
+  @ApiProperty({ description: 'Whether that publication had expired by the kiosk’s clock' })
   @Omittable()
   @IsBoolean()
   publicationExpired?: boolean;
@@ -68,37 +68,31 @@ export class KioskEventDto {
   @IsISO8601({ strict: true })
   at: string;
 
-  @ApiPropertyOptional()
   @Omittable()
   @IsRowId()
   storyId?: number;
 
-  @ApiPropertyOptional()
   @Omittable()
   @IsRowId()
   panelId?: number;
 
-  @ApiPropertyOptional()
   @Omittable()
   @Matches(/^[A-Za-z][A-Za-z0-9-]{0,59}$/)
   widgetType?: string;
 
-  @ApiPropertyOptional()
   @Omittable()
   @Matches(/^[A-Za-z][A-Za-z0-9_.-]{0,59}$/)
   param?: string;
 
-  @ApiPropertyOptional()
   @Omittable()
   @LocaleTagField()
   locale?: string;
 
-  @ApiPropertyOptional()
   @Omittable()
   @IsIntBetween(0, 86_400_000)
   dwellMs?: number;
 
-  @ApiPropertyOptional({ enum: KIOSK_SWITCHES })
+  @ApiProperty({ enum: KIOSK_SWITCHES })
   @Omittable()
   @IsIn(KIOSK_SWITCHES)
   switch?: KioskSwitch;

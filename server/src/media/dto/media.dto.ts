@@ -112,7 +112,7 @@ export class UpdateMediaDto {
   @OptionalDateOnlyField('Last day the licence allows showing the image')
   licenceExpiresOn?: string | null;
 
-  @ApiPropertyOptional({
+  @ApiProperty({
     type: 'object',
     additionalProperties: { type: 'string' },
     example: { en: 'A pan of soup with arrows rising in the middle' },

@@ -1,5 +1,5 @@
 import { applyDecorators } from '@nestjs/common';
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { ArrayMaxSize, Equals, IsArray, IsBoolean, IsIn, IsOptional } from 'class-validator';
 import { PageQuery } from '../../common/page.js';
 import { IsRowId, NestedObject, Omittable } from '../../common/validation.js';
@@ -13,14 +13,14 @@ export class ListNotificationsQuery extends PageQuery {
 
 /** Either the ids to mark read, or all: true. */
 export class MarkReadDto {
-  @ApiPropertyOptional({ type: [Number] })
+  @ApiProperty({ type: [Number] })
   @Omittable()
   @IsArray()
   @ArrayMaxSize(500)
   @IsRowId({ each: true })
   ids?: number[];
 
-  @ApiPropertyOptional({ enum: [true] })
+  @ApiProperty({ enum: [true] })
   @Omittable()
   @Equals(true, { message: 'Send all: true to mark every notification read.' })
   all?: true;
@@ -32,7 +32,7 @@ export class KindPreferenceDto {
 }
 
 const KindPreferenceField = () =>
-  applyDecorators(ApiPropertyOptional({ type: KindPreferenceDto }), Omittable(), NestedObject(() => KindPreferenceDto));
+  applyDecorators(ApiProperty({ type: KindPreferenceDto }), Omittable(), NestedObject(() => KindPreferenceDto));
 
 /** `{[kind]: {email}}`, one property per NotificationKind; a kind left out keeps its setting. */
 export class NotificationPreferencesDto {

@@ -1,4 +1,4 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayUnique, IsArray, IsObject } from 'class-validator';
 import { IsIntBetween, IsRowId, Omittable, UNSIGNED_INT_MAX } from '../../common/validation.js';
 
@@ -12,17 +12,17 @@ const PANEL_DOC_SCHEMA = { allOf: [{ $ref: '#/components/schemas/PanelDocJSON' }
 export const MAX_WORD_BUDGET = 400;
 
 export class CreatePanelDto {
-  @ApiPropertyOptional({ ...PANEL_DOC_SCHEMA, description: 'Tiptap JSON; an empty paragraph when left out' })
+  @ApiProperty({ ...PANEL_DOC_SCHEMA, description: 'Tiptap JSON; an empty paragraph when left out' })
   @Omittable()
   @IsObject(DOC_MESSAGE)
   doc?: unknown;
 
-  @ApiPropertyOptional({ description: '0-based place in the story; at the end when left out' })
+  @ApiProperty({ description: '0-based place in the story; at the end when left out' })
   @Omittable()
   @IsIntBetween(0, UNSIGNED_INT_MAX)
   position?: number;
 
-  @ApiPropertyOptional({ description: 'Words that fit the screen' })
+  @ApiProperty({ description: 'Words that fit the screen' })
   @Omittable()
   @IsIntBetween(1, MAX_WORD_BUDGET)
   wordBudget?: number;

@@ -1,5 +1,5 @@
 import { applyDecorators } from '@nestjs/common';
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { ArrayMaxSize, ArrayUnique, IsArray } from 'class-validator';
 import { PageQuery } from '../../common/page.js';
@@ -14,7 +14,7 @@ const fromQueryList = () =>
 /** An optional list of distinct row ids, in a body or (`inQuery`) a query string. */
 const RowIdList = (noun: 'revision' | 'story', description: string, inQuery = false) =>
   applyDecorators(
-    ApiPropertyOptional({ type: [Number], description }),
+    ApiProperty({ type: [Number], description }),
     ...(inQuery ? [fromQueryList()] : []),
     Omittable(),
     IsArray(),

@@ -1,10 +1,10 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty } from '@nestjs/swagger';
 import { IsString, MaxLength } from 'class-validator';
 import type { SubmitRequest } from '@mantlepiece/shared';
 import { Omittable } from '../../common/validation.js';
 
 export class SubmitForReviewDto implements SubmitRequest {
-  @ApiPropertyOptional({ description: 'A note to the educators, kept with the revision' })
+  @ApiProperty({ description: 'A note to the educators, kept with the revision' })
   @Omittable()
   @IsString()
   @MaxLength(5000)

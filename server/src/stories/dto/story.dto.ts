@@ -27,19 +27,19 @@ class StoryDetailsDto {
   @IsRowId()
   exhibitId?: number | null;
 
-  @ApiPropertyOptional({ enum: AUDIENCES, default: 'family' })
+  @ApiProperty({ enum: AUDIENCES, default: 'family' })
   @Omittable()
   @IsIn(AUDIENCES, { message: `The audience is one of ${AUDIENCES.join(', ')}.` })
   audience?: Audience;
 
-  @ApiPropertyOptional({ example: 'en', description: "BCP 47; by default the venue's source locale" })
+  @ApiProperty({ example: 'en', description: "BCP 47; by default the venue's source locale" })
   @Omittable()
   @LocaleTagField()
   sourceLocale?: string;
 }
 
 export class CreateStoryDto extends StoryDetailsDto {
-  @ApiPropertyOptional({ description: "The venue the story belongs to: the exhibit's when it names one; needed when the author writes at several venues" })
+  @ApiProperty({ description: "The venue the story belongs to: the exhibit's when it names one; needed when the author writes at several venues" })
   @Omittable()
   @IsRowId()
   venueId?: number;

@@ -24,7 +24,6 @@ export class InviteUserDto {
   locales: string[];
 
   /** The language of the invitation mail and of the new account's studio; the inviting admin's by default. */
-  @ApiPropertyOptional()
   @Omittable()
   @UiLanguageField()
   uiLanguage?: string;

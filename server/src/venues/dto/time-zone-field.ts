@@ -1,5 +1,5 @@
 import { applyDecorators } from '@nestjs/common';
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { registerDecorator } from 'class-validator';
 import { canonicalTimeZone, DEFAULT_TIME_ZONE } from '@mantlepiece/shared';
@@ -18,7 +18,7 @@ function IsTimeZone() {
 /** An IANA time zone name the platform's Intl knows, stored as Intl spells it. */
 export const TimeZoneField = () =>
   applyDecorators(
-    ApiPropertyOptional({
+    ApiProperty({
       example: 'Pacific/Auckland', default: DEFAULT_TIME_ZONE, maxLength: 64,
       description: "IANA time zone whose calendar days the venue's dates follow: Insights days, licence expiry, preflight's today, mail and CSV exports",
     }),

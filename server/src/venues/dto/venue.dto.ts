@@ -28,12 +28,12 @@ export class CreateVenueDto {
   @LocaleTagsField()
   targetLocales: string[];
 
-  @ApiPropertyOptional({ enum: [1, 2], default: 1, description: 'How many different educators must approve a revision' })
+  @ApiProperty({ enum: [1, 2], default: 1, description: 'How many different educators must approve a revision' })
   @Omittable()
   @IsIn([1, 2], { message: 'A revision needs 1 or 2 approvals.' })
   requiredApprovals?: number;
 
-  @ApiPropertyOptional({ default: false, description: 'Whether a release may show the source text where a target locale is incomplete or stale' })
+  @ApiProperty({ default: false, description: 'Whether a release may show the source text where a target locale is incomplete or stale' })
   @Omittable()
   @IsBoolean({ message: 'Say true or false.' })
   fallbackToSource?: boolean;
