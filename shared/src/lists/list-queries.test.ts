@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MEDIA_SORT, PAGE_SIZE, QUEUE_SORT, SETTINGS_SORT, STORY_SORT, USER_SORT } from './list-queries.js';
+import { LONG_PAGE_SIZE, MEDIA_SORT, PAGE_SIZE, QUEUE_SORT, SETTINGS_SORT, STORY_SORT, USER_SORT } from './list-queries.js';
 
 describe('list queries', () => {
   // JSON:API 1.1, "Sorting": a sort field is ascending, and descending with a leading minus sign.
@@ -18,5 +18,10 @@ describe('list queries', () => {
   it('pages by a default no larger than the most a page holds', () => {
     expect(PAGE_SIZE.fallback).toBeGreaterThan(0);
     expect(PAGE_SIZE.fallback).toBeLessThanOrEqual(PAGE_SIZE.max);
+  });
+
+  it('pages the long lists by more than the default, yet no more than a page holds, so the server accepts it', () => {
+    expect(LONG_PAGE_SIZE).toBeGreaterThan(PAGE_SIZE.fallback);
+    expect(LONG_PAGE_SIZE).toBeLessThanOrEqual(PAGE_SIZE.max);
   });
 });

@@ -7,6 +7,13 @@
 /** Rows in one page of a paged list: when the query names no size, and the most one page holds. */
 export const PAGE_SIZE = { fallback: 25, max: 100 } as const;
 
+/**
+ * Rows in one page of a list whose rows are short and read in a run (the audit trail, the Fleet,
+ * a story's translation units): twice the default, so a reader scans further before turning a page,
+ * and still within what one page may hold.
+ */
+export const LONG_PAGE_SIZE = 50;
+
 /** `?sort=` of a list: a key ascending (`name`) or descending (`-name`). */
 export type SortValue<K extends string> = K | `-${K}`;
 

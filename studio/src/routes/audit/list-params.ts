@@ -1,7 +1,6 @@
+import { LONG_PAGE_SIZE } from '@mantlepiece/shared';
 import type { AuditFilter } from '../../api/audit';
 import { pageFrom, positiveId } from '../../components/lists/list-search';
-
-export const PAGE_SIZE = 50;
 
 const isoDate = (value: string | null) => (value && /^\d{4}-\d{2}-\d{2}$/.test(value) ? value : undefined);
 
@@ -14,7 +13,7 @@ export function readAuditFilter(search: URLSearchParams): AuditFilter {
   };
 }
 
-export const readAuditParams = (search: URLSearchParams) => ({ ...readAuditFilter(search), page: pageFrom(search), pageSize: PAGE_SIZE });
+export const readAuditParams = (search: URLSearchParams) => ({ ...readAuditFilter(search), page: pageFrom(search), pageSize: LONG_PAGE_SIZE });
 
 /** The saved file's name says what it holds: the trail, and the dates it covers when filtered. */
 export function auditFileName(filter: AuditFilter, today: string): string {

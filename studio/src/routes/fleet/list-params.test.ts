@@ -1,10 +1,11 @@
+import { LONG_PAGE_SIZE } from '@mantlepiece/shared';
 import { describe, expect, it } from 'vitest';
 import { byGallery, readFleetParams } from './list-params';
 
 describe('fleet list params', () => {
   it('reads the page and the gallery filter from the URL, ignoring nonsense', () => {
-    expect(readFleetParams(new URLSearchParams('page=3&galleryId=7'))).toEqual({ page: 3, pageSize: 50, galleryId: 7, access: 'active' });
-    expect(readFleetParams(new URLSearchParams('page=-1&galleryId=x'))).toEqual({ page: 1, pageSize: 50, galleryId: undefined, access: 'active' });
+    expect(readFleetParams(new URLSearchParams('page=3&galleryId=7'))).toEqual({ page: 3, pageSize: LONG_PAGE_SIZE, galleryId: 7, access: 'active' });
+    expect(readFleetParams(new URLSearchParams('page=-1&galleryId=x'))).toEqual({ page: 1, pageSize: LONG_PAGE_SIZE, galleryId: undefined, access: 'active' });
   });
 
   it('shows the active kiosks unless asked for the revoked ones or all', () => {

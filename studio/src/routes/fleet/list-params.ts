@@ -1,5 +1,5 @@
 import type { FleetParams } from '../../api/fleet';
-import { KIOSK_ACCESS, type KioskAccess } from '@mantlepiece/shared';
+import { KIOSK_ACCESS, LONG_PAGE_SIZE, type KioskAccess } from '@mantlepiece/shared';
 import { oneOf, pageFrom, positiveId } from '../../components/lists/list-search';
 
 /** What the Fleet shows unless asked otherwise: the kiosks that still play, not those revoked. */
@@ -7,11 +7,9 @@ export const DEFAULT_ACCESS: KioskAccess = 'active';
 const ALL = 'all';
 export const ACCESS_CHOICES = [...KIOSK_ACCESS, ALL] as const;
 
-export const PAGE_SIZE = 50;
-
 export const readFleetParams = (search: URLSearchParams): FleetParams => ({
   page: pageFrom(search),
-  pageSize: PAGE_SIZE,
+  pageSize: LONG_PAGE_SIZE,
   galleryId: positiveId(search.get('galleryId')),
   access: accessFrom(search.get('access')),
 });

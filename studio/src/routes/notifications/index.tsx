@@ -2,7 +2,7 @@ import { Button, makeStyles, Switch, Text, tokens } from '@fluentui/react-compon
 import { AlertRegular, CheckmarkRegular } from '@fluentui/react-icons';
 import { useTranslation } from 'react-i18next';
 import { useSearchParams } from 'react-router-dom';
-import type { NotificationView } from '@mantlepiece/shared';
+import { PAGE_SIZE, type NotificationView } from '@mantlepiece/shared';
 import { useMarkNotificationsRead, useNotifications } from '../../api/notifications';
 import { EmptyState } from '../../components/EmptyState';
 import { FormAlert } from '../../components/forms/FormAlert';
@@ -15,8 +15,6 @@ import { Pager } from '../../components/lists/Pager';
 import { PageHeader } from '../../components/PageHeader';
 import { useReviewStyles } from '../../components/review/review-styles';
 import { NotificationPreferencesForm } from './NotificationPreferencesForm';
-
-const PAGE_SIZE = 25;
 
 const useStyles = makeStyles({
   layout: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr) 20rem', gap: tokens.spacingHorizontalXL, alignItems: 'start', '@media (max-width: 1000px)': { gridTemplateColumns: 'minmax(0, 1fr)' } },
@@ -69,7 +67,7 @@ export function NotificationsPage() {
   const shared = useReviewStyles();
   const [search, setSearch] = useSearchParams();
   const unreadOnly = search.get('unread') === 'true';
-  const notifications = useNotifications({ page: pageFrom(search), pageSize: PAGE_SIZE, unread: unreadOnly });
+  const notifications = useNotifications({ page: pageFrom(search), pageSize: PAGE_SIZE.fallback, unread: unreadOnly });
   const mark = useMarkNotificationsRead();
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
   const unread = notifications.data?.unread ?? 0;

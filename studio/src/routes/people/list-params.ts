@@ -1,8 +1,6 @@
-import { isRole, USER_SORT } from '@mantlepiece/shared';
+import { isRole, PAGE_SIZE, USER_SORT } from '@mantlepiece/shared';
 import type { UserListParams } from '../../api/users';
 import { pageFrom, sortFrom } from '../../components/lists/list-search';
-
-export const PAGE_SIZE = 25;
 
 /** The People table's state lives in the URL, so a filtered view can be bookmarked and shared. */
 export function readListParams(search: URLSearchParams): UserListParams {
@@ -10,7 +8,7 @@ export function readListParams(search: URLSearchParams): UserListParams {
   const active = search.get('active');
   return {
     page: pageFrom(search),
-    pageSize: PAGE_SIZE,
+    pageSize: PAGE_SIZE.fallback,
     q: search.get('q')?.trim() || undefined,
     role: isRole(role) ? role : undefined,
     active: active === 'true' ? true : active === 'false' ? false : undefined,

@@ -1,7 +1,6 @@
+import { PAGE_SIZE } from '@mantlepiece/shared';
 import type { ReleaseListParams } from '../../api/releases';
 import { pageFrom, positiveId } from '../../components/lists/list-search';
-
-export const PAGE_SIZE = 25;
 
 export interface ReleasesView extends ReleaseListParams {
   galleryId: number | undefined;
@@ -10,5 +9,5 @@ export interface ReleasesView extends ReleaseListParams {
 }
 
 export function readReleasesParams(search: URLSearchParams): ReleasesView {
-  return { page: pageFrom(search), pageSize: PAGE_SIZE, galleryId: positiveId(search.get('gallery')), buildId: positiveId(search.get('build')) };
+  return { page: pageFrom(search), pageSize: PAGE_SIZE.fallback, galleryId: positiveId(search.get('gallery')), buildId: positiveId(search.get('build')) };
 }

@@ -1,13 +1,12 @@
 import { Field, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { ClipboardTaskListLtrRegular } from '@fluentui/react-icons';
-import { STORY_SORT, type StoryState } from '@mantlepiece/shared';
+import { PAGE_SIZE, STORY_SORT, type StoryState } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useSearchParams } from 'react-router-dom';
 import { useStories, type StoryListParams } from '../../api/stories';
 import { EmptyState } from '../../components/EmptyState';
 import { oneOf, pageFrom, sortFrom, withSearchChanges } from '../../components/lists/list-search';
 import { StoryList } from '../stories/StoryList';
-import { PAGE_SIZE } from './list-params';
 
 const useStyles = makeStyles({
   toolbar: { display: 'flex', gap: tokens.spacingHorizontalL, alignItems: 'flex-end', marginBottom: tokens.spacingVerticalL },
@@ -26,7 +25,7 @@ export function SubmittedStories() {
   const styles = useStyles();
   const [search, setSearch] = useSearchParams();
   const state = oneOf(search.get('state'), FOLLOWED_STATES) ?? 'in_review';
-  const params: StoryListParams = { page: pageFrom(search), pageSize: PAGE_SIZE, state, sort: sortFrom(search, STORY_SORT) };
+  const params: StoryListParams = { page: pageFrom(search), pageSize: PAGE_SIZE.fallback, state, sort: sortFrom(search, STORY_SORT) };
   const stories = useStories(params);
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
   return (

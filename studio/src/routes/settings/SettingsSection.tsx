@@ -3,7 +3,7 @@ import {
   Button, Field, makeStyles, Select, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, tokens,
 } from '@fluentui/react-components';
 import { AddRegular } from '@fluentui/react-icons';
-import type { SettingsSort } from '@mantlepiece/shared';
+import { PAGE_SIZE, type SettingsSort } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { ApiError } from '../../api/client';
 import { useDeleteSetting, useGalleries, useSettingsList, useVenues, type SettingsCollection, type SettingsListParams, type SettingsView } from '../../api/settings';
@@ -30,8 +30,6 @@ const useStyles = makeStyles({
   note: { marginBottom: tokens.spacingVerticalM },
 });
 
-const PAGE_SIZE = 25;
-
 interface Column<V> {
   key: string;
   sortable?: boolean;
@@ -56,7 +54,7 @@ export function SettingsSection({ collection }: { collection: SettingsCollection
   const parents = useNames(parentKind ?? 'venues');
   const params: SettingsListParams = {
     page,
-    pageSize: PAGE_SIZE,
+    pageSize: PAGE_SIZE.fallback,
     sort,
     venueId: parentKind === 'venues' ? parentId : undefined,
     galleryId: parentKind === 'galleries' ? parentId : undefined,

@@ -1,5 +1,6 @@
 import { makeStyles, Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, tokens } from '@fluentui/react-components';
 import { TvRegular } from '@fluentui/react-icons';
+import { PAGE_SIZE } from '@mantlepiece/shared';
 import { useTranslation } from 'react-i18next';
 import { useSearchParams } from 'react-router-dom';
 import { useStations } from '../../api/settings';
@@ -17,8 +18,6 @@ const useStyles = makeStyles({
   title: { fontWeight: tokens.fontWeightSemibold },
 });
 
-const PAGE_SIZE = 25;
-
 /** The gallery screens a technician pairs kiosks to; each opens its station page. */
 export function StationsPage() {
   const { t } = useTranslation();
@@ -26,7 +25,7 @@ export function StationsPage() {
   const [search, setSearch] = useSearchParams();
   const galleryId = positiveId(search.get('gallery'));
   const galleries = useAllGalleries();
-  const stations = useStations({ page: pageFrom(search), pageSize: PAGE_SIZE, sort: 'name', galleryId });
+  const stations = useStations({ page: pageFrom(search), pageSize: PAGE_SIZE.fallback, sort: 'name', galleryId });
   const change = (changes: Record<string, string | undefined>) => setSearch((current) => withSearchChanges(current, changes), { replace: true });
   return (
     <>

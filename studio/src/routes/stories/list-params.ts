@@ -1,13 +1,11 @@
-import { AUDIENCES, STORY_SORT, STORY_STATES } from '@mantlepiece/shared';
+import { AUDIENCES, PAGE_SIZE, STORY_SORT, STORY_STATES } from '@mantlepiece/shared';
 import type { StoryListParams } from '../../api/stories';
 import { oneOf, pageFrom, positiveId, sortFrom } from '../../components/lists/list-search';
-
-export const PAGE_SIZE = 25;
 
 export function readStoryListParams(search: URLSearchParams): StoryListParams {
   return {
     page: pageFrom(search),
-    pageSize: PAGE_SIZE,
+    pageSize: PAGE_SIZE.fallback,
     q: search.get('q')?.trim() || undefined,
     state: oneOf(search.get('state'), STORY_STATES),
     exhibitId: positiveId(search.get('exhibitId')),
