@@ -35,6 +35,13 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
   const message = (name: string) => problems[name] ?? serverFieldMessage(save.error, name);
   const unplaced = save.error && !form.inputs.some((input) => serverFieldMessage(save.error, input.name)) ? describeError(t, save.error, { 409: t('settings.conflict') }) : null;
   const set = (name: string, value: string) => setValues((current) => ({ ...current, [name]: value }));
+  // A row stays where it was made: the server takes no new venue or gallery in a change, so the
+  // field is shown disabled, not required, and says why.
+  const isFixed = (input: SettingsInput) => editing !== null && (input.kind === 'venue' || input.kind === 'gallery');
+  const hintOf = (input: SettingsInput) => {
+    if (isFixed(input)) return t(input.kind === 'venue' ? 'settings.hints.venueFixed' : 'settings.hints.galleryFixed');
+    return input.hint ? t(`settings.hints.${input.hint}`) : undefined;
+  };
   const languagesInUse = venues.data?.items.flatMap((venue) => [venue.sourceLocale, ...venue.targetLocales]);
 
   const control = (input: SettingsInput) => {
@@ -43,9 +50,8 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
       case 'venue':
       case 'gallery': {
         const options = (input.kind === 'venue' ? venues.data?.items : galleries.data?.items) ?? [];
-        // A row stays where it was made: the server takes no new venue or gallery in a change.
         return (
-          <Select value={value} disabled={editing !== null} onChange={(_event, data) => set(input.name, data.value)}>
+          <Select value={value} disabled={isFixed(input)} onChange={(_event, data) => set(input.name, data.value)}>
             <option value="">{t('settings.choose')}</option>
             {options.map((option) => <option key={option.id} value={String(option.id)}>{option.name}</option>)}
           </Select>
@@ -89,8 +95,8 @@ export function SettingsDialog<C extends SettingsCollection>({ collection, editi
         <Field
           key={input.name}
           label={t(`settings.fields.${input.name as 'name'}`)}
-          required={input.required}
-          hint={input.hint ? t(`settings.hints.${input.hint}`) : undefined}
+          required={input.required && !isFixed(input)}
+          hint={hintOf(input)}
           validationMessage={message(input.name)}
         >
           {control(input)}

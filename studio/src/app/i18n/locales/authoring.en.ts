@@ -302,6 +302,8 @@ export const authoringEn = {
       timeZone: 'Time zone',
     },
     hints: {
+      venueFixed: 'Chosen when this was created; it cannot be changed.',
+      galleryFixed: 'Chosen when this was created; it cannot be changed.',
       slug: 'Lower-case letters, digits and hyphens; used in addresses and release files.',
       sourceLocale: 'The language stories are written in. Search by its name or tag.',
       targetLocales: 'The languages stories are translated into. Search by name or tag; each appears once.',

@@ -305,6 +305,8 @@ export const authoringEs: Translated<typeof authoringEn> = {
       timeZone: 'Zona horaria',
     },
     hints: {
+      venueFixed: 'Se elige en la creación y ya no puede cambiarse.',
+      galleryFixed: 'Se elige en la creación y ya no puede cambiarse.',
       slug: 'Minúsculas, cifras y guiones; se usa en direcciones y archivos de publicación.',
       sourceLocale: 'El idioma en que se escriben las historias. Búsquelo por su nombre o su código.',
       targetLocales: 'Los idiomas a los que se traducen las historias. Busque por nombre o código; cada uno una sola vez.',

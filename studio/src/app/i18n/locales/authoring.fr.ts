@@ -304,6 +304,8 @@ export const authoringFr: typeof authoringEn = {
       timeZone: 'Fuseau horaire',
     },
     hints: {
+      venueFixed: 'Choisi à la création, il ne change plus.',
+      galleryFixed: 'Choisie à la création, elle ne change plus.',
       slug: 'Lettres minuscules, chiffres et tirets ; sert dans les adresses et les fichiers de publication.',
       sourceLocale: 'La langue de rédaction des histoires. Cherchez-la par son nom ou son code.',
       targetLocales: 'Les langues de traduction des histoires. Cherchez par nom ou par code ; chacune une seule fois.',
