@@ -62,7 +62,8 @@ describe('the home page lists the work waiting for a role', () => {
     const { unmount } = await renderInStudio(<MyWorkLists role="admin" />);
     expect(listsShown().map(({ heading, items }) => [heading, items.map(([, text]) => text)])).toEqual([
       ['Invitations not yet accepted', []],
-      ['Licences ending within 60 days', ['ridge.pnglicence ended 2027-03-01', 'trench.pnglicence ends 2027-04-01']],
+      // Days read as the media table reads them, not as ISO text: CLDR's English medium date pattern "MMM d, y" (jsdom's browser language is en-US).
+      ['Licences ending within 60 days', ['ridge.pnglicence ended Mar 1, 2027', 'trench.pnglicence ends Apr 1, 2027']],
     ]);
     unmount();
     await renderInStudio(<MyWorkLists role="educator" />);

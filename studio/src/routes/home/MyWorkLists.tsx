@@ -6,7 +6,7 @@ import { useTranslation } from 'react-i18next';
 import { useMyWork } from '../../api/my-work';
 import { DemoBadge } from '../../components/fleet/DemoBadge';
 import { durationText, relativeTime } from '../../components/fleet/relative-time';
-import { useDateFormat } from '../../components/formatting';
+import { useDateFormat, useDayFormat } from '../../components/formatting';
 import { TextLink } from '../../components/links';
 
 const useStyles = makeStyles({
@@ -32,11 +32,12 @@ type Lists = NonNullable<MyWorkView['curator']> & NonNullable<MyWorkView['educat
 type SectionKind = keyof Lists;
 type Section = { [K in SectionKind]: { kind: K; list: Lists[K] } }[SectionKind];
 
-/** What a row's wording needs from the page: the translation, "how long ago" and dates as staff read them. */
+/** What a row's wording needs from the page: the translation, "how long ago", and dates and days as staff read them. */
 interface Words {
   t: TFunction;
   ago: (iso: string) => string;
   formatDate: (iso: string) => string;
+  formatDay: (day: string) => string;
 }
 
 /** How each list reads: where its "all" link leads, and each item as a row. */
@@ -72,7 +73,7 @@ const SECTIONS: { [K in SectionKind]: { more: string; toRow: (item: Lists[K]['it
   },
   licences: {
     more: '/media',
-    toRow: (item, { t }) => ({ key: item.mediaId, link: item.link, label: item.filename, detail: t(item.daysLeft < 0 ? 'home.work.licenceEnded' : 'home.work.licenceEnds', { date: item.expiresOn }) }),
+    toRow: (item, { t, formatDay }) => ({ key: item.mediaId, link: item.link, label: item.filename, detail: t(item.daysLeft < 0 ? 'home.work.licenceEnded' : 'home.work.licenceEnds', { date: formatDay(item.expiresOn) }) }),
   },
 };
 
@@ -114,11 +115,12 @@ export function MyWorkLists({ role }: { role: Role }) {
   const styles = useStyles();
   const work = useMyWork();
   const formatDate = useDateFormat();
+  const formatDay = useDayFormat();
   const language = i18n.resolvedLanguage ?? 'en';
   if (work.isPending) return <Spinner size="tiny" label={t('home.work.loading')} />;
   if (work.isError) return <Text as="p" className={styles.empty}>{t('home.work.loadError')}</Text>;
   const now = new Date(work.dataUpdatedAt);
-  const words: Words = { t, ago: (iso) => relativeTime(iso, now, language), formatDate };
+  const words: Words = { t, ago: (iso) => relativeTime(iso, now, language), formatDate, formatDay };
   const sections = sectionsOf(work.data, role);
   if (!sections) return null;
   return (
