@@ -1,3 +1,5 @@
+import type { components } from '../api/openapi.js';
+
 /** Bodies of the kiosk routes (issue 7 contract), shared so the server and the kiosk cannot drift. */
 
 export interface PairStartResponse {
@@ -41,23 +43,8 @@ export interface KioskManifestResponse extends ManifestResponse {
   publication: SignedPublication;
 }
 
-export interface HeartbeatBody {
-  releaseId: number | null;
-  appVersion: string;
-  uptimeS: number;
-  storageUsedBytes: number | null;
-  /** Letters, digits, punctuation, symbols and spaces only (see `reportText`). */
-  lastError: string | null;
-  /**
-   * The publication the kiosk follows and whether its `expiresAt` had passed by the kiosk's clock
-   * (it still plays, but has had no fresh word from the server). Kiosks older than issue 11 leave
-   * these out.
-   */
-  publicationSequence?: number | null;
-  /** @format date-time */
-  publicationExpiresAt?: string | null;
-  publicationExpired?: boolean;
-}
+/** `POST /api/kiosk/heartbeat`: which release plays, the kiosk's health, and the publication it follows. */
+export type HeartbeatBody = components['schemas']['HeartbeatDto'];
 
 /** What visitors do, anonymously: no event names a person or a device. */
 export const KIOSK_EVENT_TYPES = ['story_opened', 'panel_viewed', 'widget_touched', 'language_chosen', 'switch_used'] as const;
@@ -66,25 +53,11 @@ export type KioskEventType = (typeof KIOSK_EVENT_TYPES)[number];
 export const KIOSK_SWITCHES = ['large_text', 'high_contrast', 'reduced_motion'] as const;
 export type KioskSwitch = (typeof KIOSK_SWITCHES)[number];
 
-export interface KioskEvent {
-  /** A random UUID, so an upload that is retried is stored once. */
-  id: string;
-  type: KioskEventType;
-  /** ISO 8601. */
-  at: string;
-  storyId?: number;
-  panelId?: number;
-  widgetType?: string;
-  /** The widget param the visitor moved. */
-  param?: string;
-  locale?: string;
-  dwellMs?: number;
-  switch?: KioskSwitch;
-}
+/** One thing a visitor did; its random UUID `id` lets a retried upload be stored once. */
+export type KioskEvent = components['schemas']['KioskEventDto'];
 
-export interface EventsBody {
-  events: KioskEvent[];
-}
+/** `POST /api/kiosk/events`. */
+export type EventsBody = components['schemas']['KioskEventsDto'];
 
 export interface EventsResponse {
   stored: number;
