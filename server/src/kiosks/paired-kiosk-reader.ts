@@ -92,7 +92,9 @@ export class PairedKioskReader {
   }
 
   private keep(tokenHash: string, kiosk: PairedKiosk | undefined, readAt: number): void {
-    if (kiosk && this.config.pairedKioskRecheckMs > 0) this.recent.set(tokenHash, { kiosk, readAt });
+    // With the recheck off (the default) nothing is ever kept, so there is nothing to do.
+    if (this.config.pairedKioskRecheckMs === 0) return;
+    if (kiosk) this.recent.set(tokenHash, { kiosk, readAt });
     else this.recent.delete(tokenHash);
   }
 }
